@@ -1,0 +1,108 @@
+/**
+ * Material specifications as the user enters them and the project file stores them
+ * (plain data, internal units: MPa, mm/mm, kg/m³). `core/materials/factory.ts` turns a
+ * spec into a UniaxialMaterial.
+ */
+
+/** Which design code supplies defaults (moduli, tensile strength, crushing strain). */
+export type CodeBasis = 'ACI 318-19' | 'EN 1992-1-1';
+
+export type ConcreteCompressionModel =
+  | 'hognestad'
+  | 'modified-kent-park'
+  | 'mander'
+  | 'popovics'
+  | 'thorenfeldt-collins'
+  | 'en1992-nonlinear'
+  | 'en1992-parabola-rectangle';
+
+export type ConcreteTensionModel = 'none' | 'linear-brittle' | 'tension-stiffening';
+
+export interface ConcreteSpec {
+  readonly kind: 'concrete';
+  readonly id: string;
+  readonly name: string;
+  /**
+   * Compressive strength in MPa: the specified f′c under ACI 318-19, the characteristic fck under
+   * EN 1992-1-1 (the EN models then work from fcm = fck + 8 MPa, Table 3.1), or an in-place strength
+   * from testing (issue: as-found condition).
+   */
+  readonly strength: number;
+  readonly compressionModel: ConcreteCompressionModel;
+  readonly tensionModel: ConcreteTensionModel;
+  /** Optional overrides; undefined → the code basis default. */
+  readonly elasticModulus?: number; // MPa
+  readonly tensileStrength?: number; // MPa (modulus of rupture or fctm)
+  readonly crushingStrain?: number; // εcu for unconfined concrete
+  /** Hognestad peak factor k in f″c = k·f′c (default 0.85). */
+  readonly peakFactor?: number;
+  /** Spalling strain of unconfined cover (Mander), default 0.005. */
+  readonly spallingStrain?: number;
+  /** Lightweight-concrete factor λ of ACI 318-19 (1.0 normal weight). */
+  readonly lightweightFactor?: number;
+  /** Tension-stiffening coefficient c in ft = fcr / (1 + √(c·εt)); default 200 (Vecchio & Collins 1986). */
+  readonly tensionStiffeningCoefficient?: number;
+  /** Density in kg/m³ for self-weight (default 2400). */
+  readonly density?: number;
+  /** Creep coefficient φ(∞, t0) for long-term deflection (EN 1992-1-1 3.1.4), default 2.0. */
+  readonly creepCoefficient?: number;
+  /** Free shrinkage strain εcs (positive magnitude) for shrinkage curvature, default 0.0004. */
+  readonly shrinkageStrain?: number;
+}
+
+export type SteelModel = 'elastic-plastic' | 'bilinear' | 'park-paulay' | 'mander-power';
+
+export interface SteelSpec {
+  readonly kind: 'steel';
+  readonly id: string;
+  readonly name: string;
+  readonly model: SteelModel;
+  /** Yield stress fy, MPa. */
+  readonly yieldStress: number;
+  /** Ultimate stress fu, MPa (≥ fy; equal to fy for elastic–perfectly plastic). */
+  readonly ultimateStress: number;
+  /** Elastic modulus Es, MPa (default 200 000). */
+  readonly elasticModulus?: number;
+  /** Strain at the onset of hardening εsh (default 0.008 for park-paulay / mander-power; εy for bilinear). */
+  readonly hardeningStrain?: number;
+  /** Rupture strain εsu (default 0.10 for park-paulay/mander-power/bilinear, 0.05 for elastic-plastic). */
+  readonly ruptureStrain?: number;
+  /** Hardening modulus Esh, MPa, for `bilinear` (default from fy, fu, εy, εsu). */
+  readonly hardeningModulus?: number;
+}
+
+export interface FrpSpec {
+  readonly kind: 'frp';
+  readonly id: string;
+  readonly name: string;
+  /** Tensile modulus Ef, MPa. */
+  readonly tensileModulus: number;
+  /** Manufacturer's rupture strain ε*fu (positive). */
+  readonly ruptureStrain: number;
+  /** Environmental reduction factor CE (ACI 440.2R-17 Table 9.4), 0 < CE ≤ 1. */
+  readonly environmentalFactor: number;
+}
+
+export type MaterialSpec = ConcreteSpec | SteelSpec | FrpSpec;
+
+/** Transverse reinforcement data that confines the core (hoops or stirrups). */
+export interface ConfinementInput {
+  /** Yield stress of the hoops fyh, MPa. */
+  readonly hoopYieldStress: number;
+  /** Hoop bar diameter, mm. */
+  readonly hoopDiameter: number;
+  /** Centre-to-centre spacing of hoops along the member, s, mm. */
+  readonly spacing: number;
+  /** Core dimensions to the hoop centrelines, mm: bc (width, x) and dc (depth, y). */
+  readonly coreWidth: number;
+  readonly coreDepth: number;
+  /** Number of hoop legs crossing a section cut parallel to x (resisting lateral pressure in y) and in y. */
+  readonly legsX: number;
+  readonly legsY: number;
+  /** Clear distances between adjacent laterally restrained longitudinal bars around the core perimeter, mm (Mander's w′i). */
+  readonly clearSpacings: readonly number[];
+  /** Ratio of longitudinal steel area to core area, ρcc. */
+  readonly longitudinalRatio: number;
+  /** Rupture strain of the hoop steel εsu (default 0.10), used by the ultimate-strain expression. */
+  readonly hoopRuptureStrain?: number;
+}

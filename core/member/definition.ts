@@ -1,0 +1,110 @@
+/**
+ * A member (beam) as the user defines it and the project file stores it. Internal units:
+ * lengths mm, line loads N/mm, point loads N. Loads act downward when positive (gravity).
+ * Positions x are measured from the left support (the fixed end of a cantilever).
+ */
+
+/**
+ * Support conditions of a single span. A cantilever is fixed at x = 0 and free at x = L; a
+ * propped cantilever is fixed at x = 0 and pinned at x = L.
+ * (Continuous beams will add a `spans` list; the statics already works on redundant support
+ * moments, see core/member/statics.ts.)
+ */
+export type SupportType = 'simply-supported' | 'cantilever' | 'fixed-fixed' | 'propped-cantilever';
+
+/** Load cases. Self-weight is added to `dead` automatically unless switched off. */
+export type LoadCaseId = 'dead' | 'superimposed' | 'live';
+
+export type MemberLoad =
+  | {
+      readonly kind: 'uniform';
+      readonly loadCase: LoadCaseId;
+      /** Line load, N/mm (= kN/m), downward positive. */
+      readonly magnitude: number;
+      /** Extent, mm from the left support; omitted → the whole span. */
+      readonly from?: number;
+      readonly to?: number;
+      readonly label?: string;
+    }
+  | {
+      readonly kind: 'point';
+      readonly loadCase: LoadCaseId;
+      /** Force, N, downward positive. */
+      readonly magnitude: number;
+      /** Position, mm from the left support. */
+      readonly position: number;
+      readonly label?: string;
+    };
+
+/** A zone of the span with its own section, e.g. the support regions with top bars. */
+export interface MemberZone {
+  /** Start and end, mm from the left support; zones must tile the span without gaps or overlaps. */
+  readonly from: number;
+  readonly to: number;
+  readonly sectionId: string;
+}
+
+/** Load factors of one combination. */
+export interface LoadFactors {
+  readonly dead: number;
+  readonly superimposed: number;
+  readonly live: number;
+}
+
+/** Deflection limit cases. */
+export type DeflectionLimitCase =
+  /** ACI 318-19 Table 24.2.2: flat roofs not supporting nonstructural elements likely to be damaged — immediate live (Lr, S, R) ℓ/180. */
+  | 'aci-roof-immediate'
+  /** ACI 318-19 Table 24.2.2: floors not supporting such elements — immediate live ℓ/360. */
+  | 'aci-floor-immediate'
+  /** ACI 318-19 Table 24.2.2: supporting elements likely to be damaged — deflection after attachment ℓ/480. */
+  | 'aci-sensitive-after-attachment'
+  /** ACI 318-19 Table 24.2.2: supporting elements not likely to be damaged — deflection after attachment ℓ/240. */
+  | 'aci-insensitive-after-attachment'
+  /** EN 1992-1-1 7.4.1(4): appearance, total deflection under quasi-permanent loads, span/250. */
+  | 'en-appearance'
+  /** EN 1992-1-1 7.4.1(5): deflection after construction that may damage adjacent parts, span/500. */
+  | 'en-after-construction'
+  /** A user-given limit span/ratio on the total long-term deflection. */
+  | 'custom';
+
+export type HingeLengthMethod = 'priestley-2007' | 'paulay-priestley-1992' | 'mattock-1967' | 'corley-1966' | 'user';
+
+export interface ServiceSettings {
+  /** Fraction ψ of the live load that is sustained (EN 1990 ψ2; ACI "sustained portion"), 0–1. */
+  readonly sustainedLiveFraction: number;
+  /** Duration of sustained load, months, for ACI 318-19 Table 24.2.4.1.3 ξ (3 → 1.0, 6 → 1.2, 12 → 1.4, ≥ 60 → 2.0). */
+  readonly durationMonths: number;
+  /** Deflection limit cases to check (one or more). */
+  readonly limitCases: readonly DeflectionLimitCase[];
+  /** Span/ratio for the 'custom' case (e.g. 300 for ℓ/300). */
+  readonly customLimitRatio?: number;
+  /** Include shrinkage curvature in the EN 1992-1-1 long-term deflection (7.4.3(6)), default true. */
+  readonly includeShrinkage?: boolean;
+}
+
+export interface CapacitySettings {
+  /** Load pattern increased to failure: all loads proportionally, or live only with dead held. */
+  readonly pattern: 'proportional' | 'live-only';
+  readonly hingeLengthMethod: HingeLengthMethod;
+  /** Plastic hinge length for `user`, mm. */
+  readonly userHingeLength?: number;
+}
+
+export interface MemberDefinition {
+  readonly id: string;
+  /** Mark as on the drawings, e.g. "B-12". */
+  readonly name: string;
+  readonly supports: SupportType;
+  /** Clear span used for statics and deflection limits, mm (cantilever: its length). */
+  readonly span: number;
+  readonly zones: readonly MemberZone[];
+  readonly loads: readonly MemberLoad[];
+  /** Include self-weight from the concrete density and section area in the dead case (default true). */
+  readonly includeSelfWeight?: boolean;
+  /** Strength combination factors (defaults from the code basis: 1.2D + 1.6L or 1.35G + 1.5Q). */
+  readonly strengthFactors?: LoadFactors;
+  readonly service: ServiceSettings;
+  readonly capacity: CapacitySettings;
+  readonly notes?: string;
+}

@@ -1,0 +1,140 @@
+/**
+ * Bracketed root finding (Brent's method): robust for any continuous function with a sign change
+ * on [a, b], superlinear near a simple root. Used for neutral-axis equilibrium and for locating
+ * events (cracking, yield, crushing) along a moment–curvature curve.
+ *
+ * @see R. P. Brent, "Algorithms for Minimization without Derivatives", 1973, ch. 4.
+ */
+export interface RootResult {
+  /** The root estimate (last iterate). */
+  readonly x: number;
+  /** f(x). */
+  readonly fx: number;
+  readonly iterations: number;
+  readonly converged: boolean;
+}
+
+export interface RootOptions {
+  /** Absolute tolerance on x (default 1e-14 relative to |x|, plus this). */
+  readonly xTolerance?: number;
+  /** Stop as soon as |f(x)| ≤ fTolerance (default 0: rely on xTolerance). */
+  readonly fTolerance?: number;
+  readonly maxIterations?: number;
+}
+
+/**
+ * Finds x in [a, b] with f(x) = 0 given f(a) and f(b) of opposite signs (or one of them zero).
+ * Never throws for a valid bracket; reports `converged: false` when the iteration budget runs out.
+ * @param fa f(a), already evaluated (saves a call)
+ * @param fb f(b), already evaluated
+ */
+export function brentRoot(
+  f: (x: number) => number,
+  a: number,
+  b: number,
+  fa: number,
+  fb: number,
+  options: RootOptions = {},
+): RootResult {
+  const xTol = options.xTolerance ?? 1e-15;
+  const fTol = options.fTolerance ?? 0;
+  const maxIterations = options.maxIterations ?? 100;
+  if (fa === 0) return { x: a, fx: 0, iterations: 0, converged: true };
+  if (fb === 0) return { x: b, fx: 0, iterations: 0, converged: true };
+  if (fa * fb > 0 || !Number.isFinite(fa) || !Number.isFinite(fb)) {
+    return { x: Math.abs(fa) < Math.abs(fb) ? a : b, fx: Math.min(Math.abs(fa), Math.abs(fb)), iterations: 0, converged: false };
+  }
+  let c = a;
+  let fc = fa;
+  let d = b - a;
+  let e = d;
+  for (let iteration = 1; iteration <= maxIterations; iteration++) {
+    if (fb * fc > 0) {
+      c = a;
+      fc = fa;
+      d = b - a;
+      e = d;
+    }
+    if (Math.abs(fc) < Math.abs(fb)) {
+      a = b; b = c; c = a;
+      fa = fb; fb = fc; fc = fa;
+    }
+    const tol = 2 * Number.EPSILON * Math.abs(b) + 0.5 * xTol;
+    const m = 0.5 * (c - b);
+    if (Math.abs(m) <= tol || fb === 0 || Math.abs(fb) <= fTol) {
+      return { x: b, fx: fb, iterations: iteration, converged: true };
+    }
+    if (Math.abs(e) >= tol && Math.abs(fa) > Math.abs(fb)) {
+      let p: number;
+      let q: number;
+      const s = fb / fa;
+      if (a === c) {
+        p = 2 * m * s;
+        q = 1 - s;
+      } else {
+        const qq = fa / fc;
+        const r = fb / fc;
+        p = s * (2 * m * qq * (qq - r) - (b - a) * (r - 1));
+        q = (qq - 1) * (r - 1) * (s - 1);
+      }
+      if (p > 0) q = -q;
+      else p = -p;
+      if (2 * p < Math.min(3 * m * q - Math.abs(tol * q), Math.abs(e * q))) {
+        e = d;
+        d = p / q;
+      } else {
+        d = m;
+        e = d;
+      }
+    } else {
+      d = m;
+      e = d;
+    }
+    a = b;
+    fa = fb;
+    b += Math.abs(d) > tol ? d : m > 0 ? tol : -tol;
+    fb = f(b);
+    if (!Number.isFinite(fb)) return { x: a, fx: fa, iterations: iteration, converged: false };
+  }
+  return { x: b, fx: fb, iterations: maxIterations, converged: false };
+}
+
+/**
+ * Expands outward from a guess until f changes sign, then returns the bracket.
+ * `step` is the first half-width; it grows by `growth` each try. Returns undefined when no sign
+ * change is found within `maxTries` expansions (the caller reports non-convergence).
+ */
+export function bracketRoot(
+  f: (x: number) => number,
+  guess: number,
+  step: number,
+  growth = 2,
+  maxTries = 60,
+): { a: number; b: number; fa: number; fb: number } | undefined {
+  let a = guess;
+  let fa = f(a);
+  if (fa === 0) return { a, b: a, fa, fb: fa };
+  // Walk in the direction that reduces |f| assuming f increases with x (true for axial force vs.
+  // reference strain); if that assumption fails, expansion still finds a sign change.
+  let direction = fa > 0 ? -1 : 1;
+  let h = step;
+  for (let tries = 0; tries < maxTries; tries++) {
+    const b = a + direction * h;
+    const fb = f(b);
+    if (!Number.isFinite(fb)) {
+      direction = -direction;
+      h = step;
+      continue;
+    }
+    if (fa * fb <= 0) return b > a ? { a, b, fa, fb } : { a: b, b: a, fa: fb, fb: fa };
+    if (Math.abs(fb) > Math.abs(fa) && tries > 2) {
+      // Moving the wrong way (non-monotone f): try the other side, wider.
+      direction = -direction;
+    } else {
+      a = b;
+      fa = fb;
+    }
+    h *= growth;
+  }
+  return undefined;
+}

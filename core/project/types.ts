@@ -1,0 +1,51 @@
+/**
+ * The project: what a Hingeline file holds once parsed, migrated and validated.
+ * Plain data in internal units (mm, N, MPa); the display unit system only changes what is shown.
+ * The file format is documented in docs/project-format.md.
+ */
+import type { CodeBasis, MaterialSpec } from '../materials/specs.ts';
+import type { SectionDefinition } from '../section/definition.ts';
+import type { MemberDefinition } from '../member/definition.ts';
+
+export const PROJECT_FORMAT = 'hingeline-project';
+export const PROJECT_VERSION = 2;
+
+export type UnitSystem = 'si' | 'us';
+
+export interface ProjectInfo {
+  readonly name: string;
+  readonly number: string;
+  /** Client-neutral description of the job. */
+  readonly description: string;
+  readonly engineer: string;
+  readonly checker: string;
+  readonly revision: string;
+  /** ISO date, yyyy-mm-dd. */
+  readonly date: string;
+  readonly codeBasis: CodeBasis;
+  readonly unitSystem: UnitSystem;
+}
+
+export interface AnalysisSettings {
+  /** Fraction of the post-yield peak moment below which a section's curve ends (default 0.8). */
+  readonly momentDropFraction: number;
+  readonly bilinearMethod: 'priestley-2007' | 'equal-energy';
+  /** Number of integration segments along a span (default 200; refined automatically near hinges). */
+  readonly stations: number;
+}
+
+export interface Project {
+  readonly format: typeof PROJECT_FORMAT;
+  readonly version: typeof PROJECT_VERSION;
+  readonly info: ProjectInfo;
+  readonly materials: readonly MaterialSpec[];
+  readonly sections: readonly SectionDefinition[];
+  readonly members: readonly MemberDefinition[];
+  readonly settings: AnalysisSettings;
+}
+
+export const DEFAULT_SETTINGS: AnalysisSettings = {
+  momentDropFraction: 0.8,
+  bilinearMethod: 'priestley-2007',
+  stations: 200,
+};

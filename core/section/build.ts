@@ -1,0 +1,327 @@
+/**
+ * From a user's section definition to the resolved `SectionModel` the solver works on:
+ * outline → depth strips, hoops → confined core, layers → bar elements, materials resolved
+ * from the library. All problems are collected and thrown together as one InputError.
+ */
+import { checkNumber, InputError, type Diagnostic } from '../diagnostics.ts';
+import type { ConcreteMaterial, SteelMaterial, UniaxialMaterial } from '../materials/types.ts';
+import type { ConfinementInput } from '../materials/specs.ts';
+import type { BarLayer, SectionDefinition } from './definition.ts';
+import { barArea, layerArea } from './definition.ts';
+import type { ConcretePart, DiscreteElement, SectionModel } from './model.ts';
+import { shapeOutline, type SectionShape } from './shapes.ts';
+import { chordIntervals, profileMoments, subtractProfile, widthProfile, type Strip } from './width-profile.ts';
+
+/** Looks up materials by id. The project layer implements it over its material library. */
+export interface MaterialResolver {
+  /** Unconfined law, and the confined core law when `confinement` is given and the model supports it. */
+  concrete(id: string, confinement?: ConfinementInput): { cover: ConcreteMaterial; core?: ConcreteMaterial; warnings?: readonly string[] } | undefined;
+  steel(id: string): SteelMaterial | undefined;
+}
+
+/** Extra parts added to a section by a strengthening scheme or an as-found condition (see core/retrofit). */
+export interface SectionAdditions {
+  readonly parts?: readonly ConcretePart[];
+  readonly elements?: readonly DiscreteElement[];
+}
+
+/** Horizontal extent of the web (the part the hoops enclose), mm from the left edge. */
+export function webExtent(shape: SectionShape): { x0: number; x1: number } | undefined {
+  switch (shape.kind) {
+    case 'rectangle':
+      return { x0: 0, x1: shape.width };
+    case 'tee':
+    case 'inverted-tee':
+      return { x0: (shape.flangeWidth - shape.webWidth) / 2, x1: (shape.flangeWidth + shape.webWidth) / 2 };
+    case 'ell':
+      return shape.flangeSide === 'right' ? { x0: 0, x1: shape.webWidth } : { x0: shape.flangeWidth - shape.webWidth, x1: shape.flangeWidth };
+    case 'i-shape': {
+      const w = Math.max(shape.topFlangeWidth, shape.bottomFlangeWidth, shape.webWidth);
+      return { x0: (w - shape.webWidth) / 2, x1: (w + shape.webWidth) / 2 };
+    }
+    case 'box':
+    case 'polygon':
+      return undefined;
+  }
+}
+
+/** Overall height of a shape, mm. */
+export function shapeHeight(shape: SectionShape): number {
+  if (shape.kind === 'polygon') return Math.max(...shape.outline.map((p) => p.y)) - Math.min(...shape.outline.map((p) => p.y));
+  return shape.height;
+}
+
+/** Checks the numbers of a shape; returns diagnostics (empty when valid). */
+export function validateShape(shape: SectionShape, path: string): Diagnostic[] {
+  const out: Diagnostic[] = [];
+  const positive = (field: string, value: unknown, max = 20000) => checkNumber(out, `${path}.${field}`, value, { min: 0, exclusiveMin: true, max, unit: 'mm' });
+  switch (shape.kind) {
+    case 'rectangle':
+      positive('width', shape.width);
+      positive('height', shape.height);
+      break;
+    case 'tee':
+    case 'inverted-tee':
+    case 'ell':
+      positive('height', shape.height);
+      positive('webWidth', shape.webWidth);
+      positive('flangeWidth', shape.flangeWidth);
+      positive('flangeThickness', shape.flangeThickness);
+      if (out.length === 0) {
+        if (shape.flangeWidth < shape.webWidth) out.push({ code: 'geometry', path: `${path}.flangeWidth`, severity: 'error', message: `must be at least the web width (${shape.webWidth} mm), got ${shape.flangeWidth} mm` });
+        if (shape.flangeThickness >= shape.height) out.push({ code: 'geometry', path: `${path}.flangeThickness`, severity: 'error', message: `must be less than the height (${shape.height} mm), got ${shape.flangeThickness} mm` });
+      }
+      break;
+    case 'i-shape':
+      positive('height', shape.height);
+      positive('webWidth', shape.webWidth);
+      positive('topFlangeWidth', shape.topFlangeWidth);
+      positive('topFlangeThickness', shape.topFlangeThickness);
+      positive('bottomFlangeWidth', shape.bottomFlangeWidth);
+      positive('bottomFlangeThickness', shape.bottomFlangeThickness);
+      if (out.length === 0 && shape.topFlangeThickness + shape.bottomFlangeThickness >= shape.height) {
+        out.push({ code: 'geometry', path: `${path}.topFlangeThickness`, severity: 'error', message: `top and bottom flange thicknesses (${shape.topFlangeThickness} + ${shape.bottomFlangeThickness} mm) must add up to less than the height (${shape.height} mm)` });
+      }
+      break;
+    case 'box':
+      positive('height', shape.height);
+      positive('width', shape.width);
+      positive('topThickness', shape.topThickness);
+      positive('bottomThickness', shape.bottomThickness);
+      positive('wallThickness', shape.wallThickness);
+      if (out.length === 0) {
+        if (2 * shape.wallThickness >= shape.width) out.push({ code: 'geometry', path: `${path}.wallThickness`, severity: 'error', message: `two walls (2 × ${shape.wallThickness} mm) must be narrower than the width (${shape.width} mm)` });
+        if (shape.topThickness + shape.bottomThickness >= shape.height) out.push({ code: 'geometry', path: `${path}.topThickness`, severity: 'error', message: `top and bottom slabs (${shape.topThickness} + ${shape.bottomThickness} mm) must be thinner together than the height (${shape.height} mm)` });
+      }
+      break;
+    case 'polygon': {
+      if (!Array.isArray(shape.outline) || shape.outline.length < 3) {
+        out.push({ code: 'geometry', path: `${path}.outline`, severity: 'error', message: `needs at least 3 points, got ${Array.isArray(shape.outline) ? shape.outline.length : 0}` });
+        break;
+      }
+      shape.outline.forEach((p, i) => {
+        checkNumber(out, `${path}.outline[${i}].x`, p.x, { min: -20000, max: 20000, unit: 'mm' });
+        checkNumber(out, `${path}.outline[${i}].y`, p.y, { min: 0, max: 20000, unit: 'mm' });
+      });
+      if (out.length === 0) {
+        if (Math.min(...shape.outline.map((p) => p.y)) !== 0) out.push({ code: 'geometry', path: `${path}.outline`, severity: 'error', message: 'the highest point must be at depth y = 0 (depths are measured down from the top fibre)' });
+        const { area } = profileMoments(widthProfile(shapeOutline(shape)));
+        if (!(area > 0)) out.push({ code: 'geometry', path: `${path}.outline`, severity: 'error', message: 'the outline encloses no area' });
+      }
+      break;
+    }
+  }
+  return out;
+}
+
+function rectangleProfile(x0: number, x1: number, y0: number, y1: number): Strip[] {
+  return [{ top: y0, bottom: y1, widthTop: x1 - x0, widthBottom: x1 - x0 }];
+}
+
+/** Horizontal positions (mm) of the bars of a layer, for drawing and containment checks. */
+export function barPositions(definition: SectionDefinition, layer: BarLayer): number[] {
+  const count = layer.count ?? 1;
+  const diameter = layer.diameter ?? Math.sqrt((4 * (layer.area ?? 0)) / Math.PI);
+  const outline = shapeOutline(definition.shape);
+  const web = webExtent(definition.shape);
+  const cover = (definition.hoops?.clearCover ?? 40) + (definition.hoops?.diameter ?? 0);
+  let range: [number, number];
+  const chords = chordIntervals(outline, Math.min(Math.max(layer.depth, 1e-6), shapeHeight(definition.shape) - 1e-6));
+  if (layer.spread === 'chord' || !web) {
+    const widest = chords.reduce<[number, number] | undefined>((best, c) => (!best || c[1] - c[0] > best[1] - best[0] ? c : best), undefined) ?? [0, 0];
+    range = [widest[0] + cover + diameter / 2, widest[1] - cover - diameter / 2];
+  } else {
+    range = [web.x0 + cover + diameter / 2, web.x1 - cover - diameter / 2];
+  }
+  if (count === 1) return [(range[0] + range[1]) / 2];
+  return Array.from({ length: count }, (_, i) => range[0] + ((range[1] - range[0]) * i) / (count - 1));
+}
+
+/**
+ * Resolves a section definition. Throws InputError listing every problem (dimensions, bars outside
+ * the concrete, unknown materials, unsupported confinement).
+ * @param path prefix for diagnostic paths, e.g. `sections[2] "S-3"`
+ */
+export function buildSectionModel(definition: SectionDefinition, materials: MaterialResolver, path = 'section', additions: SectionAdditions = {}): { model: SectionModel; warnings: string[] } {
+  const problems: Diagnostic[] = validateShape(definition.shape, `${path}.shape`);
+  const warnings: string[] = [];
+  if (problems.length > 0) throw new InputError(problems);
+
+  const outline = shapeOutline(definition.shape);
+  const profile = widthProfile(outline);
+  const height = shapeHeight(definition.shape);
+  const gross = profileMoments(profile);
+  const centroidDepth = gross.firstMoment / gross.area;
+  const grossInertia = profileMoments(profile, centroidDepth).secondMoment;
+
+  // Hoops and confinement.
+  const hoops = definition.hoops;
+  let core: SectionModel['core'];
+  let confinement: ConfinementInput | undefined;
+  if (hoops) {
+    checkNumber(problems, `${path}.hoops.diameter`, hoops.diameter, { min: 4, max: 32, unit: 'mm' });
+    checkNumber(problems, `${path}.hoops.spacing`, hoops.spacing, { min: 25, max: 1000, unit: 'mm' });
+    checkNumber(problems, `${path}.hoops.clearCover`, hoops.clearCover, { min: 0, max: 150, unit: 'mm' });
+    checkNumber(problems, `${path}.hoops.verticalLegs`, hoops.verticalLegs, { min: 2, max: 12 });
+    if (hoops.horizontalLegs !== undefined) checkNumber(problems, `${path}.hoops.horizontalLegs`, hoops.horizontalLegs, { min: 2, max: 12 });
+    const hoopSteel = materials.steel(hoops.steelId);
+    if (!hoopSteel) problems.push({ code: 'unknown-reference', path: `${path}.hoops.steelId`, severity: 'error', message: `no steel material with id "${hoops.steelId}" in the library` });
+    const web = webExtent(definition.shape);
+    if (hoops.confineCore && problems.length === 0 && hoopSteel) {
+      if (!web) {
+        problems.push({ code: 'inconsistent', path: `${path}.hoops.confineCore`, severity: 'error', message: `a confined core is supported for rectangle, tee, inverted-tee, ell and I shapes, not for a ${definition.shape.kind}` });
+      } else {
+        const offset = hoops.clearCover + hoops.diameter / 2;
+        const x0 = web.x0 + offset;
+        const x1 = web.x1 - offset;
+        const y0 = offset;
+        const y1 = height - offset;
+        if (!(x1 - x0 > hoops.diameter && y1 - y0 > hoops.diameter)) {
+          problems.push({ code: 'geometry', path: `${path}.hoops.clearCover`, severity: 'error', message: `cover ${hoops.clearCover} mm leaves no core inside the hoops of a ${web.x1 - web.x0} mm wide, ${height} mm deep web` });
+        } else {
+          core = { x0, x1, y0, y1 };
+          const coreArea = (x1 - x0) * (y1 - y0);
+          const inside = definition.bars.filter((b) => b.depth > y0 && b.depth < y1);
+          const longitudinal = inside.reduce((s, b) => s + layerArea(b), 0);
+          confinement = {
+            hoopYieldStress: hoopSteel.yieldStress,
+            hoopDiameter: hoops.diameter,
+            spacing: hoops.spacing,
+            coreWidth: x1 - x0,
+            coreDepth: y1 - y0,
+            legsX: hoops.horizontalLegs ?? 2,
+            legsY: hoops.verticalLegs,
+            clearSpacings: clearSpacings(inside, x1 - x0, y1 - y0),
+            longitudinalRatio: longitudinal / coreArea,
+            hoopRuptureStrain: hoopSteel.ruptureStrain,
+          };
+        }
+      }
+    }
+  }
+
+  const concrete = materials.concrete(definition.concreteId, confinement);
+  if (!concrete) problems.push({ code: 'unknown-reference', path: `${path}.concreteId`, severity: 'error', message: `no concrete material with id "${definition.concreteId}" in the library` });
+  if (concrete?.warnings) warnings.push(...concrete.warnings);
+  if (confinement && concrete && !concrete.core) {
+    warnings.push('The chosen concrete model has no confined form (use Mander or Modified Kent–Park): the core is analysed as unconfined.');
+  }
+
+  // Bars.
+  if (!Array.isArray(definition.bars)) problems.push({ code: 'required', path: `${path}.bars`, severity: 'error', message: 'a list of bar layers is required' });
+  const elements: DiscreteElement[] = [];
+  (definition.bars ?? []).forEach((layer, i) => {
+    const at = `${path}.bars[${i}]`;
+    const before = problems.length;
+    checkNumber(problems, `${at}.depth`, layer.depth, { min: 0, max: height, exclusiveMin: true, exclusiveMax: true, unit: 'mm' });
+    if (layer.count !== undefined || layer.diameter !== undefined) {
+      if (checkNumber(problems, `${at}.count`, layer.count, { min: 1, max: 100 }) && !Number.isInteger(layer.count)) {
+        problems.push({ code: 'must-be-integer', path: `${at}.count`, severity: 'error', message: `must be a whole number of bars, got ${layer.count}` });
+      }
+      checkNumber(problems, `${at}.diameter`, layer.diameter, { min: 3, max: 60, unit: 'mm' });
+    } else {
+      checkNumber(problems, `${at}.area`, layer.area, { min: 0, max: 1e6, exclusiveMin: true, unit: 'mm²' });
+    }
+    const steel = materials.steel(layer.steelId);
+    if (!steel) problems.push({ code: 'unknown-reference', path: `${at}.steelId`, severity: 'error', message: `no steel material with id "${layer.steelId}" in the library` });
+    if (problems.length > before || !steel || !concrete) return;
+    // Containment: each bar's circle must lie inside the concrete.
+    const diameter = layer.diameter ?? Math.sqrt((4 * layerArea(layer)) / Math.PI);
+    const radius = diameter / 2;
+    if (layer.depth - radius < 0 || layer.depth + radius > height) {
+      problems.push({ code: 'outside-section', path: `${at}.depth`, severity: 'error', message: `a ${diameter.toFixed(0)} mm bar at depth ${layer.depth} mm sticks out of the ${height} mm deep section (allowed ${radius.toFixed(1)} to ${(height - radius).toFixed(1)} mm)` });
+      return;
+    }
+    const chords = [layer.depth - radius, layer.depth, layer.depth + radius].map((y) => chordIntervals(outline, Math.min(Math.max(y, 1e-9), height - 1e-9)));
+    const positions = barPositions(definition, layer);
+    const outside = positions.some((x) => !chords.every((cs) => cs.some(([a, b]) => x - radius >= a - 1e-6 && x + radius <= b + 1e-6)));
+    if (outside || positions.some((x, k) => k > 0 && x - positions[k - 1]! < diameter - 1e-6)) {
+      problems.push({ code: 'outside-section', path: `${at}`, severity: 'error', message: `${layer.count ?? 1} bars of ${diameter.toFixed(0)} mm at depth ${layer.depth} mm do not fit inside the concrete${layer.spread === 'chord' ? '' : ' within the hoops of the web'} (reduce the count, or spread them across the width at that depth)` });
+      return;
+    }
+    const inCore = core !== undefined && layer.depth > core.y0 && layer.depth < core.y1 && concrete.core !== undefined;
+    elements.push({
+      kind: 'bar',
+      label: layer.label ?? (layer.count !== undefined && layer.diameter !== undefined ? `layer ${i + 1}: ${layer.count} × ${layer.diameter} mm` : `layer ${i + 1}: ${layerArea(layer).toFixed(0)} mm²`),
+      sourceIndex: i,
+      area: layerArea(layer),
+      depth: layer.depth,
+      material: steel,
+      initialStrain: 0,
+      limitStrain: steel.ruptureStrain,
+      limitCause: 'steel-rupture',
+      displacedConcrete: inCore ? concrete.core! : concrete.cover,
+    });
+  });
+  if (definition.axialForce !== undefined) {
+    checkNumber(problems, `${path}.axialForce`, definition.axialForce, { min: -1e9, max: 1e9, unit: 'N' });
+  }
+  if (problems.length > 0) throw new InputError(problems);
+
+  const parts: ConcretePart[] = [];
+  if (core && concrete!.core) {
+    const coreProfile = rectangleProfile(core.x0, core.x1, core.y0, core.y1);
+    parts.push(partOf('cover', 'unconfined cover', subtractProfile(profile, coreProfile), concrete!.cover, false));
+    parts.push(partOf('core', 'confined core', coreProfile, concrete!.core, true));
+  } else {
+    parts.push(partOf('cover', 'concrete', profile, concrete!.cover, true));
+  }
+  for (const extra of additions.parts ?? []) parts.push(extra);
+  for (const extra of additions.elements ?? []) elements.push(extra);
+  return {
+    model: {
+      height,
+      centroidDepth,
+      concreteParts: parts,
+      elements,
+      axialForce: definition.axialForce ?? 0,
+      outline,
+      ...(core && concrete!.core ? { core } : {}),
+      grossArea: gross.area,
+      grossInertia,
+    },
+    warnings,
+  };
+}
+
+export function partOf(role: ConcretePart['role'], label: string, strips: Strip[], material: ConcreteMaterial, governsCrushing: boolean): ConcretePart {
+  return {
+    role,
+    label,
+    strips,
+    material,
+    governsCrushing,
+    top: Math.min(...strips.map((s) => s.top)),
+    bottom: Math.max(...strips.map((s) => s.bottom)),
+  };
+}
+
+/**
+ * Clear spacings w′i between laterally restrained longitudinal bars around the core perimeter
+ * (Mander et al. 1988): gaps along the top and bottom layers inside the core, and the vertical
+ * gaps between consecutive layers along both sides. Bars are assumed at the hoop corners and
+ * evenly spread between them.
+ */
+function clearSpacings(layers: readonly BarLayer[], coreWidth: number, coreDepth: number): number[] {
+  if (layers.length === 0) return [coreWidth, coreWidth, coreDepth, coreDepth];
+  const sorted = [...layers].sort((a, b) => a.depth - b.depth);
+  const diameterOf = (l: BarLayer) => l.diameter ?? Math.sqrt((4 * (l.area ?? 0)) / Math.PI);
+  const gaps: number[] = [];
+  for (const layer of [sorted[0]!, sorted[sorted.length - 1]!]) {
+    const n = Math.max(layer.count ?? 2, 2);
+    const d = diameterOf(layer);
+    const gap = Math.max((coreWidth - n * d) / (n - 1), 0);
+    for (let i = 0; i < n - 1; i++) gaps.push(gap);
+  }
+  for (let i = 1; i < sorted.length; i++) {
+    const gap = Math.max(sorted[i]!.depth - sorted[i - 1]!.depth - (diameterOf(sorted[i]!) + diameterOf(sorted[i - 1]!)) / 2, 0);
+    gaps.push(gap, gap);
+  }
+  if (sorted.length === 1) gaps.push(coreDepth, coreDepth);
+  return gaps;
+}
+
+/** Re-exported for builders of additions: area of one bar, mm². */
+export { barArea };
+/** A steel or FRP element material type guard used by additions. */
+export type { UniaxialMaterial };

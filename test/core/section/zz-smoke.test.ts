@@ -1,0 +1,21 @@
+import { test } from 'vitest';
+import { testConcrete, testSteel } from '/work/main/test/fixtures/simple-materials.ts';
+import { fixedResolver } from '/work/main/test/fixtures/sections.ts';
+import { buildSectionModel } from '/work/main/core/section/build.ts';
+import { momentCurvature } from '/work/main/core/section/moment-curvature.ts';
+import { elasticProperties } from '/work/main/core/section/elastic.ts';
+test('smoke', () => {
+  const c = testConcrete({ fc: 30, eps0: 0.002, epsCu: 0.0035, ft: 3, shape: 'parabola' });
+  const s = testSteel(420);
+  const { model } = buildSectionModel({ id: 'a', name: 'a', shape: { kind: 'rectangle', width: 300, height: 500 }, concreteId: 'c', bars: [{ steelId: 's', depth: 450, count: 3, diameter: 20 }, { steelId: 's', depth: 50, count: 2, diameter: 12 }] }, fixedResolver(c, s));
+  const t0 = performance.now();
+  let r;
+  for (let i = 0; i < 200; i++) r = momentCurvature(model, 'sagging', { codeCrushingStrain: 0.003 });
+  console.log('ms per curve', (performance.now() - t0) / 200);
+  console.log(r!.status, r!.points.length, r!.solves);
+  for (const [k, v] of Object.entries(r!.keyPoints)) console.log(k, v.curvature.toExponential(4), (v.moment / 1e6).toFixed(3), v.neutralAxisDepth?.toFixed(2), v.compressionFaceStrain.toFixed(5), v.residual.toExponential(1));
+  console.log(r!.bilinear, r!.curvatureDuctility, r!.warnings);
+  console.log(elasticProperties(model));
+  const h = momentCurvature(model, 'hogging', { codeCrushingStrain: 0.003 });
+  console.log(h.status, h.points.length, (h.keyPoints.peak!.moment/1e6).toFixed(2), h.curvatureDuctility);
+});

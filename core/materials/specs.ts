@@ -7,6 +7,7 @@
 /** Which design code supplies defaults (moduli, tensile strength, crushing strain). */
 export type CodeBasis = 'ACI 318-19' | 'EN 1992-1-1';
 
+/** Published concrete compression laws (core/materials/concrete/, one file each). */
 export type ConcreteCompressionModel =
   | 'hognestad'
   | 'modified-kent-park'
@@ -16,8 +17,10 @@ export type ConcreteCompressionModel =
   | 'en1992-nonlinear'
   | 'en1992-parabola-rectangle';
 
+/** Concrete tension laws (core/materials/concrete/tension.ts). */
 export type ConcreteTensionModel = 'none' | 'linear-brittle' | 'tension-stiffening';
 
+/** A concrete as the user enters it; `buildConcrete` (factory.ts) validates it and fills code-basis defaults. */
 export interface ConcreteSpec {
   readonly kind: 'concrete';
   readonly id: string;
@@ -50,8 +53,10 @@ export interface ConcreteSpec {
   readonly shrinkageStrain?: number;
 }
 
+/** Reinforcing-steel laws (core/materials/steel/, one file each). */
 export type SteelModel = 'elastic-plastic' | 'bilinear' | 'park-paulay' | 'mander-power';
 
+/** A reinforcing steel as the user enters it; `buildSteel` (factory.ts) validates it. */
 export interface SteelSpec {
   readonly kind: 'steel';
   readonly id: string;
@@ -71,6 +76,7 @@ export interface SteelSpec {
   readonly hardeningModulus?: number;
 }
 
+/** An externally bonded FRP laminate as the user enters it; `buildFrp` (factory.ts) validates it. */
 export interface FrpSpec {
   readonly kind: 'frp';
   readonly id: string;
@@ -83,6 +89,7 @@ export interface FrpSpec {
   readonly environmentalFactor: number;
 }
 
+/** Any material spec, told apart by `kind`. */
 export type MaterialSpec = ConcreteSpec | SteelSpec | FrpSpec;
 
 /** Transverse reinforcement data that confines the core (hoops or stirrups). */
@@ -96,7 +103,11 @@ export interface ConfinementInput {
   /** Core dimensions to the hoop centrelines, mm: bc (width, x) and dc (depth, y). */
   readonly coreWidth: number;
   readonly coreDepth: number;
-  /** Number of hoop legs crossing a section cut parallel to x (resisting lateral pressure in y) and in y. */
+  /**
+   * Number of hoop legs crossing a section cut parallel to x (resisting lateral pressure in y) and in y.
+   * In Mander et al. (1988) terms: legsX legs run in y, so Asy = legsX·Ab and ρy = Asy/(s·bc);
+   * legsY legs run in x, so Asx = legsY·Ab and ρx = Asx/(s·dc) (concrete/mander-confinement.ts).
+   */
   readonly legsX: number;
   readonly legsY: number;
   /** Clear distances between adjacent laterally restrained longitudinal bars around the core perimeter, mm (Mander's w′i). */

@@ -112,7 +112,14 @@ export interface ServiceDeflections {
     readonly codeTotal: number;
   };
   /** Effective moment of inertia details of the code method. */
-  readonly codeMethod: { readonly name: string; readonly effectiveInertia: { readonly dead: number; readonly deadPlusLive: number; readonly sustained: number } | null; readonly notes: string };
+  readonly codeMethod: {
+    readonly name: string;
+    /** ACI only: effective moments of inertia used, mm⁴. */
+    readonly effectiveInertia: { readonly dead: number; readonly deadPlusLive: number; readonly sustained: number } | null;
+    readonly notes: string;
+    /** ACI only: immediate deflections with Branson's Ie (ACI 318-14 and earlier), for comparison, mm. */
+    readonly legacyBranson?: { readonly dead: number; readonly deadPlusLive: number; readonly live: number };
+  };
   readonly checks: readonly DeflectionCheck[];
 }
 

@@ -245,6 +245,7 @@ export function buildSectionModel(definition: SectionDefinition, materials: Mate
       label: layer.label ?? (layer.count !== undefined && layer.diameter !== undefined ? `layer ${i + 1}: ${layer.count} × ${layer.diameter} mm` : `layer ${i + 1}: ${layerArea(layer).toFixed(0)} mm²`),
       sourceIndex: i,
       area: layerArea(layer),
+      diameter,
       depth: layer.depth,
       material: steel,
       initialStrain: 0,

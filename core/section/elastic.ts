@@ -65,13 +65,14 @@ function facing(model: SectionModel, direction: BendingDirection): { strips: Str
 }
 
 /**
- * Elastic properties transformed to the cover concrete's initial modulus.
+ * Elastic properties transformed to the cover concrete's initial modulus (or the given one, e.g.
+ * a code modulus or an effective modulus for creep), with the cover's tensile strength (or the given one).
  * Bars use n = Es/Ec; inside concrete they count as (n − 1)·As in the uncracked section and in the
  * compression zone of the cracked section (the concrete they displace).
  */
-export function elasticProperties(model: SectionModel): ElasticProperties {
+export function elasticProperties(model: SectionModel, options: { concreteModulus?: number; tensileStrength?: number } = {}): ElasticProperties {
   const cover = model.concreteParts[0]!;
-  const ec = cover.material.initialModulus;
+  const ec = options.concreteModulus ?? cover.material.initialModulus;
   const all = model.concreteParts.flatMap((p) => p.strips);
   const gross = profileMoments(all, 0);
   const yg = gross.firstMoment / gross.area;
@@ -119,7 +120,7 @@ export function elasticProperties(model: SectionModel): ElasticProperties {
     return { neutralAxisDepth: c, inertia };
   };
 
-  const fr = cover.material.tensileStrength;
+  const fr = options.tensileStrength ?? cover.material.tensileStrength;
   const axialStress = model.axialForce / gross.area;
   const h = model.height;
   const mcr = (inertia: number, yt: number) => (fr > 0 ? Math.max(0, (fr + axialStress) * inertia) / yt : 0);

@@ -40,6 +40,8 @@ export interface DiscreteElement {
   readonly sourceIndex: number;
   /** Cross-sectional area, mm². */
   readonly area: number;
+  /** Bar diameter, mm, when the element is a layer of round bars. */
+  readonly diameter?: number;
   /** Depth of the element's centroid below the top fibre, mm. */
   readonly depth: number;
   readonly material: UniaxialMaterial;

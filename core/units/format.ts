@@ -12,6 +12,7 @@ export const NOT_A_VALUE = '—';
  */
 export type SignificantFigures = number | 'engineering';
 
+/** Options shared by formatNumber and formatFixed. */
 export interface NumberFormatOptions {
   /** Inserted between groups of three digits of the integer part, e.g. `,` or a thin space `\u2009`. Default: none. */
   readonly thousandsSeparator?: string;
@@ -85,6 +86,7 @@ export function formatFixed(value: number, decimals: number, options: NumberForm
   return `${sign}${grouped}${fractionPart === undefined ? '' : `.${fractionPart}`}`;
 }
 
+/** Options of formatQuantity; every field is optional. */
 export interface QuantityFormatOptions extends NumberFormatOptions {
   /** Significant figures (default `engineering`: 3, or 4 when the leading digit is 1). Ignored when `decimals` is set. */
   readonly sigFigs?: SignificantFigures;

@@ -26,6 +26,7 @@ export type Quantity =
   | 'density'
   | 'ratio';
 
+/** One row of the quantity table: its dimension, internal unit and display units per system. */
 export interface QuantityDefinition {
   readonly quantity: Quantity;
   /** What the quantity is, in words (for tooltips and the report's notation list). */

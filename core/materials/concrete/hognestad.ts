@@ -3,6 +3,7 @@ import type { CompressionLaw } from '../types.ts';
 import { checkField, fieldPath, reportInconsistent, show } from '../checks.ts';
 import { compressionLaw } from './compression-law.ts';
 
+/** Citation for the report's reference list. */
 export const HOGNESTAD_REFERENCE =
   'Hognestad, E. (1951). A study of combined bending and axial load in reinforced concrete members. University of Illinois Engineering Experiment Station, Bulletin 399.';
 
@@ -11,6 +12,7 @@ export const HOGNESTAD_DEFAULT_PEAK_FACTOR = 0.85;
 /** Strain at the end of Hognestad's linear descending branch, where σ = 0.85 f″c. */
 export const HOGNESTAD_ULTIMATE_STRAIN = 0.0038;
 
+/** Inputs of hognestadCompression (MPa, strains dimensionless). */
 export interface HognestadParameters {
   /** Cylinder strength f′c (or fcm), MPa, > 0. */
   readonly compressiveStrength: number;

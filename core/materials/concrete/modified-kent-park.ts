@@ -3,11 +3,14 @@ import type { CompressionLaw } from '../types.ts';
 import { checkField, fieldPath, reportInconsistent, show } from '../checks.ts';
 import { compressionLaw } from './compression-law.ts';
 
+/** Citation for the report's reference list. */
 export const SCOTT_PARK_PRIESTLEY_REFERENCE =
   'Scott, B. D., Park, R. & Priestley, M. J. N. (1982). Stress–strain behavior of concrete confined by overlapping hoops at low and high strain rates. ACI Journal 79(1), 13–27.';
+/** Citation of the unconfined origin of the model. */
 export const KENT_PARK_REFERENCE =
   'Kent, D. C. & Park, R. (1971). Flexural members with confined concrete. Journal of the Structural Division, ASCE 97(ST7), 1969–1990.';
 
+/** Inputs of modifiedKentParkCompression (MPa, mm, strains dimensionless). */
 export interface ModifiedKentParkParameters {
   /** Cylinder strength f′c, MPa; must exceed 1000/145 ≈ 6.9 MPa (ε50u). */
   readonly compressiveStrength: number;
@@ -57,6 +60,7 @@ export function modifiedKentParkUltimateStrain(volumetricRatio: number, hoopYiel
   return 0.004 + 0.9 * volumetricRatio * (hoopYieldStress / 300);
 }
 
+/** K, ε0, ε50u, ε50h, Zm, the start of the residual plateau and εcu for the given inputs. @see Scott, Park & Priestley (1982) */
 export function modifiedKentParkConstants(p: ModifiedKentParkParameters): ModifiedKentParkConstants {
   const rho = p.volumetricRatio ?? 0;
   const fyh = rho > 0 ? (p.hoopYieldStress ?? 0) : 0;
@@ -76,6 +80,7 @@ export function modifiedKentParkConstants(p: ModifiedKentParkParameters): Modifi
   };
 }
 
+/** Checks the parameters (145 f′c > 1000, hoop data when ρs > 0, Zm > 0, εcu > ε0); paths are `path.<parameter name>`. */
 export function validateModifiedKentParkParameters(p: ModifiedKentParkParameters, path = ''): Diagnostic[] {
   const out: Diagnostic[] = [];
   const label = 'Modified Kent–Park:';

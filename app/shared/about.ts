@@ -1,0 +1,25 @@
+/** Texts of the About box. Node-free. */
+
+/** The caution every result-bearing surface carries (see RULES.md). */
+export const RESULTS_CAUTION =
+  'Results are for review by a qualified engineer and defer to local codes and licensed practice.';
+
+export interface AboutVersions {
+  readonly app: string;
+  readonly electron?: string;
+  readonly chrome?: string;
+  readonly node?: string;
+}
+
+/** Body text of the About dialog: version lines, what the program does, and the caution. */
+export function aboutDetail(versions: AboutVersions): string {
+  const lines = [`Version ${versions.app}`];
+  if (versions.electron) lines.push(`Electron ${versions.electron}`);
+  if (versions.chrome) lines.push(`Chromium ${versions.chrome}`);
+  if (versions.node) lines.push(`Node.js ${versions.node}`);
+  return [
+    lines.join('\n'),
+    'Moment–curvature, load–deflection, plastic hinge and service-deflection assessment of reinforced-concrete beams.',
+    `Caution: ${RESULTS_CAUTION}`,
+  ].join('\n\n');
+}

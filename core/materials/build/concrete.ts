@@ -1,0 +1,221 @@
+import { InputError, type Diagnostic } from '../../diagnostics.ts';
+import type { CodeBasis, ConcreteCompressionModel, ConcreteSpec, ConcreteTensionModel, ConfinementInput } from '../specs.ts';
+import type { CompressionLaw, ConcreteMaterial, TensionLaw } from '../types.ts';
+import { checkField, fieldPath } from '../checks.ts';
+import { combineConcrete } from '../concrete/combine.ts';
+import { en1992NonlinearCompression } from '../concrete/en1992-nonlinear.ts';
+import { en1992ParabolaRectangleCompression } from '../concrete/en1992-parabola-rectangle.ts';
+import { hognestadCompression } from '../concrete/hognestad.ts';
+import { MANDER_DEFAULT_PEAK_STRAIN, manderConfinedFromHoops, manderUnconfinedCompression } from '../concrete/mander.ts';
+import { validateConfinementInput } from '../concrete/mander-confinement.ts';
+import { modifiedKentParkCompression } from '../concrete/modified-kent-park.ts';
+import { popovicsCompression } from '../concrete/popovics.ts';
+import { linearBrittleTension, noTension, tensionStiffening } from '../concrete/tension.ts';
+import { thorenfeldtCollinsCompression, thorenfeldtCollinsConstants } from '../concrete/thorenfeldt-collins.ts';
+import { en1992PeakStrain, en1992UltimateStrainNonlinear } from '../code/en1992.ts';
+import { checkIdentity, checkOption, collectLawDiagnostics, pathMapper } from './common.ts';
+import { CODE_BASES, resolveConcrete, type ResolvedConcrete } from './concrete-defaults.ts';
+
+/** Every concrete compression model, in menu order. */
+export const CONCRETE_COMPRESSION_MODELS: readonly ConcreteCompressionModel[] = [
+  'hognestad', 'modified-kent-park', 'mander', 'popovics', 'thorenfeldt-collins', 'en1992-nonlinear', 'en1992-parabola-rectangle',
+];
+/** Every concrete tension model, in menu order. */
+export const CONCRETE_TENSION_MODELS: readonly ConcreteTensionModel[] = ['none', 'linear-brittle', 'tension-stiffening'];
+/** Compression models with a confined-core form. */
+export const CONFINEMENT_MODELS: readonly ConcreteCompressionModel[] = ['mander', 'modified-kent-park'];
+
+/** Allowed range of the compressive strength of any spec, MPa (as-found strengths included). */
+export const CONCRETE_STRENGTH_RANGE = { min: 10, max: 120, unit: 'MPa' } as const;
+
+/** Where the spec and its confinement sit in the project, for diagnostic paths. */
+export interface ConcreteBuildOptions {
+  /** Path of the spec in the project, for diagnostics. Default `material`. */
+  readonly path?: string;
+  /** Path of the confinement input, for diagnostics. Default `confinement`. */
+  readonly confinementPath?: string;
+}
+
+/** Options of validateConcreteSpec. */
+export interface ConcreteValidationOptions extends ConcreteBuildOptions {
+  /** Without a code basis only the fields are checked, not the resolved model parameters. */
+  readonly code?: CodeBasis;
+  readonly confinement?: ConfinementInput;
+}
+
+/** Cover (unconfined) law of each model from the resolved numbers. */
+function coverCompression(spec: ConcreteSpec, r: ResolvedConcrete): CompressionLaw {
+  const fc = r.modelStrength;
+  const Ec = r.elasticModulus;
+  switch (spec.compressionModel) {
+    case 'hognestad':
+      return hognestadCompression({ compressiveStrength: fc, elasticModulus: Ec, peakFactor: spec.peakFactor, crushingStrain: spec.crushingStrain });
+    case 'modified-kent-park':
+      return modifiedKentParkCompression({ compressiveStrength: fc, crushingStrain: spec.crushingStrain });
+    case 'mander':
+      return manderUnconfinedCompression({
+        compressiveStrength: fc, elasticModulus: Ec, peakStrain: r.codePeakStrain ?? MANDER_DEFAULT_PEAK_STRAIN,
+        spallingStrain: spec.spallingStrain, crushingStrain: spec.crushingStrain ?? r.codeCrushingStrain,
+      });
+    case 'popovics':
+      // Under ACI the strain at peak follows the n/(n − 1) relation of Collins & Mitchell (1991), which
+      // keeps n > 1 at every strength; under EN it is εc1 of Table 3.1.
+      return popovicsCompression({
+        compressiveStrength: fc, elasticModulus: Ec,
+        peakStrain: r.codePeakStrain ?? thorenfeldtCollinsConstants(fc, Ec).peakStrain,
+        crushingStrain: spec.crushingStrain ?? r.codeCrushingStrain,
+      });
+    case 'thorenfeldt-collins':
+      return thorenfeldtCollinsCompression({ compressiveStrength: fc, elasticModulus: Ec, crushingStrain: spec.crushingStrain ?? r.codeCrushingStrain });
+    case 'en1992-nonlinear':
+      return en1992NonlinearCompression({
+        meanStrength: fc, elasticModulus: Ec, peakStrain: en1992PeakStrain(r.strainsFck),
+        crushingStrain: spec.crushingStrain ?? en1992UltimateStrainNonlinear(r.strainsFck),
+      });
+    case 'en1992-parabola-rectangle':
+      return en1992ParabolaRectangleCompression({ strength: spec.strength, characteristicStrength: r.strainsFck, crushingStrain: spec.crushingStrain });
+  }
+}
+
+/** Confined-core law for the models that have one; undefined for the others. */
+function coreCompression(spec: ConcreteSpec, r: ResolvedConcrete, confinement: ConfinementInput): CompressionLaw | undefined {
+  if (spec.compressionModel === 'mander') {
+    const peakStrain = r.codePeakStrain ?? MANDER_DEFAULT_PEAK_STRAIN;
+    return manderConfinedFromHoops({ compressiveStrength: r.modelStrength, elasticModulus: r.elasticModulus, peakStrain }, confinement).law;
+  }
+  if (spec.compressionModel === 'modified-kent-park') {
+    const { coreWidth: bc, coreDepth: dc, hoopDiameter: dh, spacing } = confinement;
+    const legArea = (Math.PI * dh * dh) / 4;
+    // Hoop volume per spacing (legs running in x are bc long, in y dc long) over the core volume to the
+    // outside of the hoops, as Scott et al. (1982) define ρs; h″ is the shorter core side to the outside of the hoops.
+    const volumetricRatio = (legArea * (confinement.legsY * bc + confinement.legsX * dc)) / (spacing * (bc + dh) * (dc + dh));
+    return modifiedKentParkCompression({
+      compressiveStrength: r.modelStrength, volumetricRatio, hoopYieldStress: confinement.hoopYieldStress,
+      coreWidth: Math.min(bc, dc) + dh, hoopSpacing: spacing,
+    });
+  }
+  return undefined;
+}
+
+function tensionLaw(spec: ConcreteSpec, r: ResolvedConcrete): TensionLaw {
+  switch (spec.tensionModel) {
+    case 'none':
+      return noTension();
+    case 'linear-brittle':
+      return linearBrittleTension({ tensileStrength: r.tensileStrength, elasticModulus: r.elasticModulus });
+    case 'tension-stiffening':
+      return tensionStiffening({ tensileStrength: r.tensileStrength, elasticModulus: r.elasticModulus, coefficient: spec.tensionStiffeningCoefficient });
+  }
+}
+
+function checkFields(out: Diagnostic[], spec: ConcreteSpec, path: string): boolean {
+  const at = (field: string): string => fieldPath(path, field);
+  const before = out.length;
+  checkIdentity(out, spec, 'concrete', path);
+  checkField(out, at('strength'), 'concrete compressive strength', spec.strength, CONCRETE_STRENGTH_RANGE);
+  checkOption(out, at('compressionModel'), 'concrete compression model', spec.compressionModel, CONCRETE_COMPRESSION_MODELS);
+  checkOption(out, at('tensionModel'), 'concrete tension model', spec.tensionModel, CONCRETE_TENSION_MODELS);
+  const optional: [keyof ConcreteSpec, string, { min: number; max: number; unit?: string; exclusiveMin?: boolean }][] = [
+    ['elasticModulus', 'concrete elastic modulus Ec', { min: 5_000, max: 70_000, unit: 'MPa' }],
+    ['tensileStrength', 'concrete tensile strength', { min: 0, exclusiveMin: true, max: 15, unit: 'MPa' }],
+    ['crushingStrain', 'crushing strain εcu of unconfined concrete', { min: 0.002, max: 0.01 }],
+    ['peakFactor', 'Hognestad peak factor k', { min: 0.5, max: 1 }],
+    ['spallingStrain', 'spalling strain εsp of the cover', { min: 0.003, max: 0.02 }],
+    ['lightweightFactor', 'lightweight-concrete factor λ (ACI 318-19 19.2.4)', { min: 0.75, max: 1 }],
+    ['tensionStiffeningCoefficient', 'tension-stiffening coefficient c', { min: 50, max: 1000 }],
+    ['density', 'concrete density', { min: 1200, max: 2800, unit: 'kg/m³' }],
+    ['creepCoefficient', 'creep coefficient φ', { min: 0, max: 6 }],
+    ['shrinkageStrain', 'free shrinkage strain εcs', { min: 0, max: 0.002 }],
+  ];
+  for (const [field, label, range] of optional) {
+    if (spec[field] !== undefined) checkField(out, at(field), label, spec[field], range);
+  }
+  return out.slice(before).every((d) => d.severity !== 'error');
+}
+
+function checkTableRange(out: Diagnostic[], spec: ConcreteSpec, code: CodeBasis, path: string): boolean {
+  const usesTable = code === 'EN 1992-1-1' || spec.compressionModel.startsWith('en1992');
+  if (!usesTable) return true;
+  const at = fieldPath(path, 'strength');
+  if (spec.strength > 90) {
+    out.push({ code: 'out-of-range', path: at, severity: 'error',
+      message: `concrete strength ${spec.strength} MPa is above 90 MPa, the end of EN 1992-1-1 Table 3.1, from which this model takes its constants; use a strength of at most 90 MPa or the ACI 318-19 basis with a non-EN model` });
+    return false;
+  }
+  if (spec.strength < 12) {
+    out.push({ code: 'out-of-range', path: at, severity: 'warning',
+      message: `concrete strength ${spec.strength} MPa is below 12 MPa, the start of EN 1992-1-1 Table 3.1; its constants are extrapolated` });
+  }
+  return true;
+}
+
+/**
+ * Checks a concrete spec: identity, the strength (10–120 MPa), the model names, every optional override
+ * against its range, and, when `options.code` is given, the resolved parameters of the chosen model
+ * (e.g. Hognestad's ε0 below εcu, Mander's Ec above f′co/εco, Modified Kent–Park's 145 f′c > 1000,
+ * EN 1992-1-1 Table 3.1's range) and the confinement input. Reports every problem, with paths under `path`.
+ */
+export function validateConcreteSpec(spec: ConcreteSpec, path = 'material', options: ConcreteValidationOptions = {}): Diagnostic[] {
+  const out: Diagnostic[] = [];
+  const fieldsOk = checkFields(out, spec, path);
+  const { code, confinement } = options;
+  const confinementPath = options.confinementPath ?? 'confinement';
+  if (code === undefined) return out;
+  if (!checkOption(out, 'codeBasis', 'code basis', code, CODE_BASES) || !fieldsOk) return out;
+  if (code === 'EN 1992-1-1' && spec.lightweightFactor !== undefined && spec.lightweightFactor !== 1) {
+    out.push({ code: 'inconsistent', path: fieldPath(path, 'lightweightFactor'), severity: 'warning', message: 'the lightweight factor λ belongs to ACI 318-19 and is ignored under EN 1992-1-1' });
+  }
+  if (!checkTableRange(out, spec, code, path)) return out;
+  const r = resolveConcrete(spec, code);
+  const at = (field: string): string => fieldPath(path, field);
+  const coverTable = {
+    compressiveStrength: at('strength'), meanStrength: at('strength'), strength: at('strength'), characteristicStrength: at('strength'),
+    elasticModulus: at('elasticModulus'), crushingStrain: at('crushingStrain'), peakFactor: at('peakFactor'), spallingStrain: at('spallingStrain'),
+    tensileStrength: at('tensileStrength'), coefficient: at('tensionStiffeningCoefficient'), endStrain: at('tensionModel'),
+  };
+  out.push(...collectLawDiagnostics(() => coverCompression(spec, r), pathMapper(coverTable, at('compressionModel'))));
+  out.push(...collectLawDiagnostics(() => tensionLaw(spec, r), pathMapper(coverTable, at('tensionModel'))));
+  if (confinement !== undefined) {
+    if (!CONFINEMENT_MODELS.includes(spec.compressionModel)) {
+      out.push({ code: 'inconsistent', path: at('compressionModel'), severity: 'warning',
+        message: `the ${spec.compressionModel} model has no confinement term: the core uses the unconfined law; choose mander or modified-kent-park to account for the hoops` });
+    } else {
+      const confinementDiagnostics = validateConfinementInput(confinement, confinementPath, spec.compressionModel === 'mander');
+      out.push(...confinementDiagnostics);
+      if (confinementDiagnostics.every((d) => d.severity !== 'error')) {
+        const coreTable = { compressiveStrength: at('strength'), elasticModulus: at('elasticModulus'), peakStrain: at('compressionModel') };
+        out.push(...collectLawDiagnostics(() => coreCompression(spec, r, confinement), pathMapper(coreTable, confinementPath)));
+      }
+    }
+  }
+  return out;
+}
+
+/** Cover and (when confinement is given) core laws, plus the warnings found on the way. */
+export interface ConcreteBuild {
+  /** Unconfined concrete (the whole section when there is no confinement). */
+  readonly cover: ConcreteMaterial;
+  /**
+   * Confined core: the confined law for mander / modified-kent-park with confinement; the cover law
+   * itself (with a warning) for other models with confinement; undefined without confinement.
+   */
+  readonly core?: ConcreteMaterial;
+  /** Warnings (never errors: errors throw). */
+  readonly diagnostics: readonly Diagnostic[];
+}
+
+/**
+ * Builds the concrete laws of a spec under a code basis (compression positive, MPa). Defaults come from
+ * the code basis when the spec leaves a value undefined (build/concrete-defaults.ts). Throws InputError
+ * carrying every diagnostic (errors and warnings) when the spec is invalid.
+ */
+export function buildConcrete(spec: ConcreteSpec, code: CodeBasis, confinement?: ConfinementInput, options: ConcreteBuildOptions = {}): ConcreteBuild {
+  const diagnostics = validateConcreteSpec(spec, options.path ?? 'material', { ...options, code, confinement });
+  if (diagnostics.some((d) => d.severity === 'error')) throw new InputError(diagnostics);
+  const r = resolveConcrete(spec, code);
+  const tension = tensionLaw(spec, r);
+  const cover = combineConcrete(coverCompression(spec, r), tension);
+  if (confinement === undefined) return { cover, diagnostics };
+  const coreLaw = coreCompression(spec, r, confinement);
+  return { cover, core: coreLaw ? combineConcrete(coreLaw, tension) : cover, diagnostics };
+}

@@ -1,0 +1,34 @@
+/**
+ * Concrete under sustained load: creep by the effective-modulus idea applied to the whole
+ * stress–strain law, and free shrinkage as an imposed strain.
+ *
+ * Total strain (compression positive) ε = (1 + φ)·εσ + εcs, so the stress is σ(ε) = σ₀((ε − εcs)/(1 + φ)),
+ * where σ₀ is the short-term law, φ the creep coefficient φ(∞, t0) and εcs the free shrinkage
+ * strain (a shortening, hence positive). For a linear law this is exactly the effective modulus
+ * Ec,eff = Ec/(1 + φ) of EN 1992-1-1 Eq. (7.20); applying it to the nonlinear curve is common
+ * practice, no source.
+ */
+import type { ConcreteMaterial } from './types.ts';
+
+/**
+ * @param base short-term concrete law
+ * @param creepCoefficient φ(∞, t0) ≥ 0 (EN 1992-1-1 3.1.4, Figure 3.1)
+ * @param shrinkageStrain free shrinkage εcs ≥ 0 (shortening)
+ */
+export function sustainedConcrete(base: ConcreteMaterial, creepCoefficient: number, shrinkageStrain: number): ConcreteMaterial {
+  const k = 1 + creepCoefficient;
+  const shift = shrinkageStrain;
+  const map = (e: number) => e * k + shift;
+  return {
+    ...base,
+    model: `${base.model}+sustained`,
+    label: `${base.label}, sustained (φ = ${creepCoefficient}, εcs = ${(shrinkageStrain * 1000).toFixed(2)} ‰)`,
+    references: [...base.references, 'EN 1992-1-1:2004 Eq. (7.20) (effective modulus)'],
+    stress: (e: number) => base.stress((e - shift) / k),
+    breakpoints: base.breakpoints.map(map),
+    initialModulus: base.initialModulus / k,
+    crushingStrain: map(base.crushingStrain),
+    peakStrain: map(base.peakStrain),
+    crackingStrain: base.crackingStrain * k - shift > 0 ? base.crackingStrain * k - shift : base.crackingStrain * k,
+  };
+}

@@ -1,0 +1,811 @@
+/**
+ * Nonlinear load–deflection analysis of a member, event to event:
+ *
+ * 1. Load control on the load factor λ. At each level the redundant end moments follow from
+ *    compatibility with the current nonlinear flexibility (Newton's method with the exact
+ *    tangent of the tabulated curves), so moments redistribute as sections crack and yield.
+ *    Curvature is integrated along the span (exactly for curvature linear between stations).
+ * 2. When a critical section (support face, or the most stressed section in the span) reaches
+ *    first yield, a plastic hinge becomes active there: beyond M′y the distributed curvature
+ *    follows the elastic extension and the plastic part is lumped as θp = (φ − φe)·Lp
+ *    (core/member/section-response.ts).
+ * 3. When a hinge reaches its section's peak moment it can take no more; its rotation becomes an
+ *    unknown and its moment follows the descending branch. Once more hinges are past their peak
+ *    than the beam has redundants, it is a mechanism: control switches from λ to the rotation of
+ *    the newest hinge, and λ follows from equilibrium.
+ * 4. Ultimate: a hinge reaches its rotation capacity θp,u = (φu − φe(Mu))·Lp, or a section with no
+ *    hinge reaches its peak moment (e.g. at a bar cut-off).
+ *
+ * Internal units: mm, N·mm, 1/mm, rad.
+ */
+import { solveLinear } from '../numeric/linear.ts';
+import type { BeamModel, ZoneResponse } from './beam-model.ts';
+import { zoneCurvature } from './beam-model.ts';
+import { hingeLength, type HingeLengthInput } from './hinge-length.ts';
+import type { CapacitySettings } from './definition.ts';
+import type { LoadDeflectionPoint, MemberEvent, PlasticHinge, SpanDistribution } from './results.ts';
+import { interpolateWithSlope, type SectionResponse, type ValueAndSlope } from './section-response.ts';
+import { redundantField } from './statics.ts';
+
+export type HingeSite = 'left' | 'right' | 'span';
+
+export interface HingeState {
+  readonly site: HingeSite;
+  /** +1 sagging, −1 hogging. */
+  readonly sign: 1 | -1;
+  /**
+   * Station index of the critical section (where the hinge moment is measured). A hinge inside
+   * the span follows the largest moment of its sign as redistribution moves it.
+   */
+  station: number;
+  zone: number;
+  /** Hinge length, mm, and where the lumped rotation acts (mm from the left support). */
+  readonly length: number;
+  rotationPosition: number;
+  readonly lengthFormula: string;
+  readonly shearSpan: number;
+  /** 'hardening': θ follows the moment; 'softening': past the peak, θ is an unknown. */
+  phase: 'hardening' | 'softening';
+  /** Current plastic rotation, rad (≥ 0). */
+  rotation: number;
+  /** Rotation capacity, rad. */
+  readonly capacity: number;
+  /** λ and control deflection when the hinge became active. */
+  readonly activatedAt: number;
+}
+
+/** Everything the solver needs besides the beam. */
+export interface LoadingFields {
+  /** Released-structure moment of loads held constant (dead load in a live-only pattern), N·mm per station. */
+  readonly constant: Float64Array;
+  /** Released-structure moment per unit λ of the pattern, N·mm per station. */
+  readonly pattern: Float64Array;
+  /** Total load of the constant part and of the pattern per unit λ, N. */
+  readonly constantTotal: number;
+  readonly patternTotal: number;
+}
+
+export interface SolvedState {
+  readonly lambda: number;
+  readonly redundants: readonly number[];
+  readonly moment: Float64Array;
+  /** Integration curvature at each station from the segment on its right (last: from the left). */
+  readonly curvature: Float64Array;
+  readonly deflection: Float64Array;
+  readonly hinges: readonly { readonly index: number; readonly rotation: number }[];
+}
+
+const scratch: ValueAndSlope = { value: 0, slope: 0 };
+const scratchB: ValueAndSlope = { value: 0, slope: 0 };
+
+function responseOf(zone: ZoneResponse, sign: 1 | -1): SectionResponse {
+  return sign > 0 ? zone.sagging : zone.hogging;
+}
+
+/**
+ * Residual and Jacobian evaluator over the beam for a given set of hinges. Unknown vector:
+ * [redundants…, rotations of softening hinges except the controlled one…, λ if λ is unknown].
+ */
+class Equations {
+  readonly n: number;
+  readonly moment: Float64Array;
+  constructor(readonly beam: BeamModel, readonly loads: LoadingFields) {
+    this.n = beam.x.length;
+    this.moment = new Float64Array(this.n);
+  }
+
+  /** Fills moments for redundants X and λ. */
+  moments(redundants: readonly number[], lambda: number): Float64Array {
+    const { constant, pattern } = this.loads;
+    const fields = this.beam.redundantFields;
+    for (let i = 0; i < this.n; i++) {
+      let m = constant[i]! + lambda * pattern[i]!;
+      for (let j = 0; j < fields.length; j++) m += redundants[j]! * fields[j]![i]!;
+      this.moment[i] = m;
+    }
+    return this.moment;
+  }
+
+  /**
+   * Residuals R and Jacobian J at the given unknowns.
+   * layout: r redundants, then softening-hinge rotations (list `free`), then λ if `lambdaFree`.
+   */
+  evaluate(
+    redundants: readonly number[],
+    lambda: number,
+    hinges: readonly HingeState[],
+    free: readonly number[],
+    lambdaFree: boolean,
+  ): { residual: number[]; jacobian: number[][]; scale: number[] } {
+    const beam = this.beam;
+    const r = beam.redundants.length;
+    const size = r + free.length + (lambdaFree ? 1 : 0);
+    const residual = new Array<number>(size).fill(0);
+    const jacobian = Array.from({ length: size }, () => new Array<number>(size).fill(0));
+    const scale = new Array<number>(size).fill(0);
+    const M = this.moments(redundants, lambda);
+    trackSpanHinges(beam, M, hinges);
+    const x = beam.x;
+    const fields = beam.redundantFields;
+    const pattern = this.loads.pattern;
+    const lambdaCol = r + free.length;
+    // Distributed curvature: ∫ φ m_i dx and its derivatives (exact for linear φ, m between stations).
+    if (r > 0) {
+      for (let k = 0; k < this.n - 1; k++) {
+        const h = x[k + 1]! - x[k]!;
+        if (h <= 0) continue;
+        const zone = beam.zones[beam.segmentZone[k]!]!;
+        zoneCurvature(zone, M[k]!, scratch);
+        zoneCurvature(zone, M[k + 1]!, scratchB);
+        const pa = scratch.value;
+        const pb = scratchB.value;
+        const fa = scratch.slope;
+        const fb = scratchB.slope;
+        for (let i = 0; i < r; i++) {
+          const ma = fields[i]![k]!;
+          const mb = fields[i]![k + 1]!;
+          residual[i]! += h * (pa * (ma / 3 + mb / 6) + pb * (ma / 6 + mb / 3));
+          scale[i]! += h * (Math.abs(pa) + Math.abs(pb)) * 0.5 * Math.max(Math.abs(ma), Math.abs(mb));
+          for (let j = 0; j < r; j++) {
+            const na = fields[j]![k]!;
+            const nb = fields[j]![k + 1]!;
+            jacobian[i]![j]! += h * triple(fa, fb, ma, mb, na, nb);
+          }
+          if (lambdaFree) jacobian[i]![lambdaCol]! += h * triple(fa, fb, ma, mb, pattern[k]!, pattern[k + 1]!);
+        }
+      }
+    }
+    // Hinges.
+    hinges.forEach((hinge, index) => {
+      const zone = beam.zones[hinge.zone]!;
+      const response = responseOf(zone, hinge.sign);
+      const mc = hinge.sign * M[hinge.station]!;
+      const freeIndex = free.indexOf(index);
+      let theta = hinge.rotation;
+      let dThetaDm = 0;
+      if (hinge.phase === 'hardening') {
+        response.plastic(mc, scratch);
+        theta = hinge.length * scratch.value;
+        dThetaDm = hinge.length * scratch.slope;
+      }
+      for (let i = 0; i < r; i++) {
+        const mi = redundantField(beam.redundants[i]!, beam.span, hinge.rotationPosition);
+        residual[i]! += hinge.sign * theta * mi;
+        scale[i]! += Math.abs(theta * mi);
+        if (hinge.phase === 'hardening') {
+          for (let j = 0; j < r; j++) jacobian[i]![j]! += hinge.sign * mi * dThetaDm * hinge.sign * fields[j]![hinge.station]!;
+          if (lambdaFree) jacobian[i]![lambdaCol]! += hinge.sign * mi * dThetaDm * hinge.sign * pattern[hinge.station]!;
+        } else if (freeIndex >= 0) {
+          jacobian[i]![r + freeIndex]! += hinge.sign * mi;
+        }
+      }
+      if (hinge.phase === 'softening' && freeIndex >= 0) {
+        // Moment at the hinge follows the post-peak branch: s·M_c − M(θ/Lp) = 0.
+        const row = r + freeIndex;
+        interpolateWithSlope(response.softening.plastic, response.softening.moment, theta / hinge.length, scratch);
+        residual[row] = mc - scratch.value;
+        scale[row] = Math.max(Math.abs(response.peakMoment), 1);
+        for (let j = 0; j < r; j++) jacobian[row]![j] = hinge.sign * fields[j]![hinge.station]!;
+        jacobian[row]![row] = -scratch.slope / hinge.length;
+        if (lambdaFree) jacobian[row]![lambdaCol] = hinge.sign * pattern[hinge.station]!;
+      }
+    });
+    return { residual, jacobian, scale };
+  }
+}
+
+/**
+ * Moves each span hinge to the interior station where its moment (relative to the section's peak)
+ * is largest, so that the hinge stays at the critical section while moments redistribute.
+ */
+export function trackSpanHinges(beam: BeamModel, moment: Float64Array, hinges: readonly HingeState[]): void {
+  const n = moment.length;
+  for (const h of hinges) {
+    if (h.site !== 'span') continue;
+    let best = -Infinity;
+    for (let i = 1; i < n - 1; i++) {
+      const z = beam.segmentZone[Math.min(i, n - 2)]!;
+      const resp = h.sign > 0 ? beam.zones[z]!.sagging : beam.zones[z]!.hogging;
+      const ratio = (h.sign * moment[i]!) / resp.peakMoment;
+      if (ratio > best) {
+        best = ratio;
+        h.station = i;
+        h.zone = z;
+      }
+    }
+    h.rotationPosition = beam.x[h.station]!;
+  }
+}
+
+/** ∫₀¹ (fa(1−t)+fb t)(ma(1−t)+mb t)(na(1−t)+nb t) dt. */
+function triple(fa: number, fb: number, ma: number, mb: number, na: number, nb: number): number {
+  const cross = (ma * nb + mb * na) / 12;
+  return fa * ((ma * na) / 4 + cross + (mb * nb) / 12) + fb * ((ma * na) / 12 + cross + (mb * nb) / 4);
+}
+
+export interface NewtonResult {
+  readonly converged: boolean;
+  readonly redundants: number[];
+  readonly lambda: number;
+  readonly rotations: number[];
+  readonly iterations: number;
+  readonly residualNorm: number;
+}
+
+/** Newton iteration with backtracking on the scaled residual norm. */
+function newton(
+  eq: Equations,
+  hinges: readonly HingeState[],
+  free: readonly number[],
+  lambdaFree: boolean,
+  start: { redundants: readonly number[]; lambda: number; rotations: readonly number[] },
+): NewtonResult {
+  const r = eq.beam.redundants.length;
+  let X = [...start.redundants];
+  let lambda = start.lambda;
+  let rot = [...start.rotations];
+  const apply = (index: number, value: number) => {
+    hinges[index]!.rotation = value;
+  };
+  free.forEach((h, i) => apply(h, rot[i]!));
+  const norm = (res: number[], scale: number[]) => Math.max(0, ...res.map((v, i) => Math.abs(v) / Math.max(scale[i]!, 1e-300)));
+  let current = eq.evaluate(X, lambda, hinges, free, lambdaFree);
+  let currentNorm = norm(current.residual, current.scale);
+  const size = current.residual.length;
+  if (size === 0) return { converged: true, redundants: X, lambda, rotations: rot, iterations: 0, residualNorm: 0 };
+  for (let iteration = 1; iteration <= 60; iteration++) {
+    if (currentNorm < 1e-10) return { converged: true, redundants: X, lambda, rotations: rot, iterations: iteration - 1, residualNorm: currentNorm };
+    const step = solveLinear(current.jacobian.map((row) => [...row]), current.residual.map((v) => -v));
+    if (!step) break;
+    let factor = 1;
+    let accepted = false;
+    for (let tries = 0; tries < 30; tries++) {
+      const X2 = X.map((v, i) => v + factor * step[i]!);
+      const rot2 = rot.map((v, i) => Math.max(0, v + factor * step[r + i]!));
+      const lambda2 = lambdaFree ? lambda + factor * step[size - 1]! : lambda;
+      free.forEach((h, i) => apply(h, rot2[i]!));
+      const trial = eq.evaluate(X2, lambda2, hinges, free, lambdaFree);
+      const trialNorm = norm(trial.residual, trial.scale);
+      if (trialNorm < currentNorm || trialNorm < 1e-10) {
+        X = X2;
+        rot = rot2;
+        lambda = lambda2;
+        current = trial;
+        currentNorm = trialNorm;
+        accepted = true;
+        break;
+      }
+      factor /= 2;
+    }
+    if (!accepted) {
+      free.forEach((h, i) => apply(h, rot[i]!));
+      break;
+    }
+  }
+  return { converged: currentNorm < 1e-8, redundants: X, lambda, rotations: rot, iterations: 60, residualNorm: currentNorm };
+}
+
+/** Deflections (downward positive) at every station from curvature and hinge rotations. */
+export function deflectionShape(beam: BeamModel, moment: Float64Array, hinges: readonly HingeState[], curvatureOut?: Float64Array): Float64Array {
+  const x = beam.x;
+  const n = x.length;
+  const v = new Float64Array(n);
+  trackSpanHinges(beam, moment, hinges);
+  const jumps = hinges
+    .filter((h) => h.rotation > 0 || h.phase === 'hardening')
+    .map((h) => {
+      let theta = h.rotation;
+      if (h.phase === 'hardening') {
+        responseOf(beam.zones[h.zone]!, h.sign).plastic(h.sign * moment[h.station]!, scratch);
+        theta = h.length * scratch.value;
+      }
+      return { at: h.rotationPosition, theta: h.sign * theta };
+    })
+    .filter((j) => j.theta !== 0)
+    .sort((a, b) => a.at - b.at);
+  // v'' = −φ (downward positive deflection under sagging curvature); v(0) = 0, v'(0) = 0 first.
+  let slope = 0;
+  let jump = 0;
+  for (let k = 0; k < n - 1; k++) {
+    const zone = beam.zones[beam.segmentZone[k]!]!;
+    const pa = zoneCurvature(zone, moment[k]!, scratch).value;
+    const pb = zoneCurvature(zone, moment[k + 1]!, scratchB).value;
+    if (curvatureOut) {
+      curvatureOut[k] = pa;
+      if (k === n - 2) curvatureOut[k + 1] = pb;
+    }
+    const h = x[k + 1]! - x[k]!;
+    let dv = slope * h - (h * h * (2 * pa + pb)) / 6;
+    let dSlope = -h * (pa + pb) / 2;
+    while (jump < jumps.length && jumps[jump]!.at < x[k + 1]! + (k === n - 2 ? 1e-9 : 0) && jumps[jump]!.at >= x[k]!) {
+      const j = jumps[jump]!;
+      dv -= j.theta * (x[k + 1]! - j.at);
+      dSlope -= j.theta;
+      jump++;
+    }
+    v[k + 1] = v[k]! + dv;
+    slope += dSlope;
+  }
+  if (beam.support !== 'cantilever') {
+    // Enforce v(L) = 0 with a rigid rotation about x = 0.
+    const span = x[n - 1]! - x[0]!;
+    const end = v[n - 1]!;
+    for (let i = 0; i < n; i++) v[i] = v[i]! - (end * (x[i]! - x[0]!)) / span;
+  }
+  return v;
+}
+
+export interface CapacityCurve {
+  readonly points: LoadDeflectionPoint[];
+  readonly events: MemberEvent[];
+  readonly hinges: PlasticHinge[];
+  readonly distributions: SpanDistribution[];
+  readonly controlPosition: number;
+  readonly status: string;
+  readonly converged: boolean;
+  readonly firstYield: { readonly lambda: number; readonly deflection: number } | null;
+  readonly peak: { readonly lambda: number; readonly deflection: number };
+  readonly ultimate: { readonly lambda: number; readonly deflection: number } | null;
+  readonly failureCause: string;
+}
+
+interface Snapshot {
+  lambda: number;
+  redundants: number[];
+  rotations: Map<number, number>;
+}
+
+const SITE_WORDS: Record<HingeSite, string> = { left: 'left support', right: 'right support', span: 'span' };
+
+/**
+ * Runs the load–deflection analysis to ultimate.
+ * @param loads   moment fields of the constant loads and of the pattern
+ * @param capacity hinge length method etc.
+ */
+export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: CapacitySettings): CapacityCurve {
+  const eq = new Equations(beam, loads);
+  const n = beam.x.length;
+  const r = beam.redundants.length;
+  const span = beam.span;
+  const events: MemberEvent[] = [];
+  const points: LoadDeflectionPoint[] = [];
+  const distributions: SpanDistribution[] = [];
+  const hinges: HingeState[] = [];
+  let status = 'complete';
+  let converged = true;
+  let failureCause = '';
+
+  const sites: HingeSite[] = beam.support === 'cantilever' ? ['left'] : beam.support === 'simply-supported' ? ['span'] : beam.support === 'propped-cantilever' ? ['left', 'span'] : ['left', 'right', 'span'];
+  const siteSign = (site: HingeSite): 1 | -1 => (site === 'span' ? 1 : -1);
+  const stationZone = (i: number) => beam.segmentZone[Math.min(i, n - 2)]!;
+
+  // --- helpers -----------------------------------------------------------------------------------
+  const solveAt = (lambda: number, guess: Snapshot): Snapshot | undefined => {
+    const free = hinges.map((h, i) => (h.phase === 'softening' ? i : -1)).filter((i) => i >= 0);
+    const res = newton(eq, hinges, free, false, { redundants: guess.redundants, lambda, rotations: free.map((i) => guess.rotations.get(i) ?? hinges[i]!.rotation) });
+    if (!res.converged) return undefined;
+    const rotations = new Map<number, number>();
+    free.forEach((h, i) => rotations.set(h, res.rotations[i]!));
+    return { lambda, redundants: res.redundants, rotations };
+  };
+  const restore = (s: Snapshot) => {
+    for (const [i, v] of s.rotations) hinges[i]!.rotation = v;
+    eq.moments(s.redundants, s.lambda);
+    trackSpanHinges(beam, eq.moment, hinges);
+    // hardening hinges' rotation values for reporting
+    hinges.forEach((h) => {
+      if (h.phase === 'hardening') {
+        responseOf(beam.zones[h.zone]!, h.sign).plastic(h.sign * eq.moment[h.station]!, scratch);
+        h.rotation = h.length * scratch.value;
+      }
+    });
+    return eq.moment;
+  };
+  let controlIndex = -1;
+  const deflectionAt = (s: Snapshot): Float64Array => deflectionShape(beam, restore(s), hinges);
+  const controlDeflection = (s: Snapshot) => deflectionAt(s)[controlIndex]!;
+  const record = (s: Snapshot, stage: 'integration' | 'mechanism') => {
+    points.push({ loadFactor: s.lambda, totalLoad: loads.constantTotal + s.lambda * loads.patternTotal, deflection: controlDeflection(s), stage });
+  };
+  const distribution = (label: string, s: Snapshot): SpanDistribution => {
+    const curvature = new Float64Array(n);
+    const moment = Float64Array.from(restore(s));
+    const deflection = deflectionShape(beam, moment, hinges, curvature);
+    const hingeZones: [number, number][] = [];
+    for (const h of hinges) {
+      if (h.rotation <= 0) continue;
+      const a = Math.max(0, h.rotationPosition - h.length / 2);
+      const b = Math.min(span, h.rotationPosition + h.length / 2);
+      hingeZones.push([a, b]);
+      for (let i = 0; i < n; i++) if (beam.x[i]! >= a && beam.x[i]! <= b) curvature[i] = curvature[i]! + (h.sign * h.rotation) / h.length;
+    }
+    return { label, loadFactor: s.lambda, x: [...beam.x], moment: [...moment], curvature: [...curvature], deflection: [...deflection], hingeZones };
+  };
+
+  /** Ratio functions: how far the most stressed station is from a section threshold. */
+  const maxRatio = (s: Snapshot, pick: (resp: SectionResponse) => number | null, filter?: (i: number, sign: 1 | -1) => boolean) => {
+    const M = restore(s);
+    let best = -Infinity;
+    let at = -1;
+    let sign: 1 | -1 = 1;
+    for (let i = 0; i < n; i++) {
+      const m = M[i]!;
+      const sg: 1 | -1 = m >= 0 ? 1 : -1;
+      if (filter && !filter(i, sg)) continue;
+      for (const z of new Set([beam.segmentZone[Math.max(i - 1, 0)]!, stationZone(i)])) {
+        const threshold = pick(responseOf(beam.zones[z]!, sg));
+        if (threshold === null || !(threshold > 0)) continue;
+        const ratio = (sg * m) / threshold;
+        if (ratio > best) {
+          best = ratio;
+          at = i;
+          sign = sg;
+        }
+      }
+    }
+    return { ratio: best, station: at, sign };
+  };
+
+  /** Bisection/secant search of λ in [a, b] where g crosses zero (g(a) < 0 ≤ g(b)). */
+  const locate = (a: Snapshot, b: Snapshot, g: (s: Snapshot) => number): Snapshot => {
+    let lo = a;
+    let hi = b;
+    let glo = g(lo);
+    let ghi = g(hi);
+    for (let it = 0; it < 40 && hi.lambda - lo.lambda > 1e-10 * Math.max(hi.lambda, 1e-12); it++) {
+      let t = glo < 0 && ghi > 0 ? -glo / (ghi - glo) : 0.5;
+      t = Math.min(Math.max(t, 0.1), 0.9);
+      const lambda = lo.lambda + t * (hi.lambda - lo.lambda);
+      const s = solveAt(lambda, lo);
+      if (!s) {
+        hi = { ...hi };
+        break;
+      }
+      const gs = g(s);
+      if (gs >= 0) {
+        hi = s;
+        ghi = gs;
+      } else {
+        lo = s;
+        glo = gs;
+      }
+      if (Math.abs(gs) < 1e-9) return s;
+    }
+    return hi;
+  };
+
+  // --- initial state and step size -------------------------------------------------------------------
+  let state: Snapshot = { lambda: 0, redundants: new Array(r).fill(0), rotations: new Map() };
+  const s0 = solveAt(0, state);
+  if (!s0) return failed('no equilibrium under the constant loads');
+  state = s0;
+  // Reference λ: first station at its peak moment, estimated from a small elastic step.
+  const probe = solveAt(1e-6, state);
+  if (!probe) return failed('no equilibrium at the first load step');
+  const Mprobe = Float64Array.from(restore(probe));
+  const M0 = Float64Array.from(restore(state));
+  let lambdaRef = Infinity;
+  for (let i = 0; i < n; i++) {
+    const dm = (Mprobe[i]! - M0[i]!) / 1e-6;
+    if (Math.abs(dm) < 1e-9) continue;
+    const sg: 1 | -1 = dm > 0 ? 1 : -1;
+    const resp = responseOf(beam.zones[stationZone(i)]!, sg);
+    const lam = (resp.peakMoment - sg * M0[i]!) / (sg * dm);
+    if (lam > 0) lambdaRef = Math.min(lambdaRef, lam);
+  }
+  if (!Number.isFinite(lambdaRef)) return failed('the load pattern produces no moment in the member');
+  const probeDeflection = deflectionAt(probe);
+  const baseDeflection = deflectionAt(state);
+  controlIndex = 0;
+  let biggest = -Infinity;
+  for (let i = 0; i < n; i++) {
+    const d = Math.abs(probeDeflection[i]! - baseDeflection[i]!);
+    if (d > biggest + 1e-12 * Math.abs(d)) {
+      biggest = d;
+      controlIndex = i;
+    }
+  }
+  // Prefer exact midspan for symmetric cases (largest deflection within 0.01 % of it).
+  const mid = beam.x.findIndex((xi) => Math.abs(xi - span / 2) < 1e-9);
+  if (beam.support !== 'cantilever' && mid >= 0 && Math.abs(probeDeflection[mid]! - baseDeflection[mid]!) >= biggest * (1 - 1e-4)) controlIndex = mid;
+  const controlPosition = beam.x[controlIndex]!;
+  record(state, 'integration');
+
+  let firstYield: { lambda: number; deflection: number } | null = null;
+  let crackedYet = false;
+  let peak = { lambda: 0, deflection: controlDeflection(state) };
+  let ultimate: { lambda: number; deflection: number } | null = null;
+  const crackingRatio = (s: Snapshot) => maxRatio(s, (resp) => resp.crackingMoment).ratio - 1;
+  const yieldRatioFor = (site: HingeSite) => (s: Snapshot) => {
+    const filter = (i: number, sg: 1 | -1) => {
+      if (sg !== siteSign(site)) return false;
+      if (site === 'left') return i === 0;
+      if (site === 'right') return i === n - 1;
+      return i > 0 && i < n - 1;
+    };
+    return maxRatio(s, (resp) => resp.firstYieldMoment, filter);
+  };
+  const overstress = (s: Snapshot) => {
+    // Stations that are not a hinge's critical section, past their section's peak moment.
+    const hingeStations = new Set(hinges.map((h) => h.station));
+    return maxRatio(s, (resp) => resp.peakMoment, (i) => !hingeStations.has(i));
+  };
+
+  const activate = (site: HingeSite, s: Snapshot) => {
+    const { station, sign } = yieldRatioFor(site)(s);
+    const M = restore(s);
+    const zoneIndex = site === 'right' ? beam.segmentZone[n - 2]! : stationZone(station);
+    const zone = beam.zones[zoneIndex]!;
+    const data = sign > 0 ? zone.hingeData.sagging : zone.hingeData.hogging;
+    const response = responseOf(zone, sign);
+    // Shear spans: distance from the critical section to the nearest zero moment on each side.
+    const zeroFrom = (start: number, dir: 1 | -1) => {
+      for (let i = start; i >= 0 && i < n - 0; i += dir) {
+        const j = i + dir;
+        if (j < 0 || j >= n) return Math.abs(beam.x[i]! - beam.x[start]!);
+        if (Math.sign(M[j]!) !== Math.sign(M[start]!) || M[j] === 0) {
+          const t = M[i]! / (M[i]! - M[j]!);
+          return Math.abs(beam.x[i]! + t * (beam.x[j]! - beam.x[i]!) - beam.x[start]!);
+        }
+      }
+      return span;
+    };
+    const atSupport = site !== 'span';
+    const shearSpans = site === 'left' ? [zeroFrom(0, 1)] : site === 'right' ? [zeroFrom(n - 1, -1)] : [zeroFrom(station, -1), zeroFrom(station, 1)];
+    const input: HingeLengthInput = {
+      method: capacity.hingeLengthMethod,
+      effectiveDepth: data.effectiveDepth,
+      shearSpans,
+      barDiameter: data.barDiameter,
+      yieldStress: data.yieldStress,
+      ultimateStress: data.ultimateStress,
+      atSupport,
+      ...(capacity.userHingeLength !== undefined ? { userLength: capacity.userHingeLength } : {}),
+    };
+    const hl = hingeLength(input);
+    const length = Math.max(hl.length, 1);
+    const rotationPosition = site === 'left' ? Math.min(length / 2, span / 2) : site === 'right' ? Math.max(span - length / 2, span / 2) : beam.x[station]!;
+    const ultimatePlastic = response.softening.plastic[response.softening.plastic.length - 1]!;
+    hinges.push({
+      site,
+      sign,
+      station,
+      zone: zoneIndex,
+      length,
+      rotationPosition,
+      lengthFormula: hl.formula,
+      shearSpan: shearSpans.reduce((a, b) => a + b, 0),
+      phase: 'hardening',
+      rotation: 0,
+      capacity: ultimatePlastic * length,
+      activatedAt: s.lambda,
+    });
+    events.push({ kind: 'first-yield', loadFactor: s.lambda, deflection: controlDeflection(s), position: beam.x[station]!, description: `first yield at the ${SITE_WORDS[site]} (x = ${(beam.x[station]! / 1000).toFixed(2)} m): plastic hinge active, Lp = ${length.toFixed(0)} mm` });
+    if (!firstYield) firstYield = { lambda: s.lambda, deflection: controlDeflection(s) };
+  };
+
+  // --- load control ------------------------------------------------------------------------------
+  type Ev = { kind: 'cracking' | 'yield' | 'peak' | 'capacity' | 'overstress'; site?: HingeSite; hinge?: number; g: (s: Snapshot) => number };
+  const candidates = (): Ev[] => {
+    const list: Ev[] = [];
+    if (!crackedYet) list.push({ kind: 'cracking', g: crackingRatio });
+    for (const site of sites) if (!hinges.some((h) => h.site === site)) list.push({ kind: 'yield', site, g: (s) => yieldRatioFor(site)(s).ratio - 1 });
+    hinges.forEach((h, i) => {
+      if (h.phase === 'hardening') {
+        const resp = responseOf(beam.zones[h.zone]!, h.sign);
+        list.push({ kind: 'peak', hinge: i, g: (s) => (h.sign * restore(s)[h.station]!) / resp.peakMoment - (1 - 1e-9) });
+      } else list.push({ kind: 'capacity', hinge: i, g: (s) => (s.rotations.get(i) ?? h.rotation) / h.capacity - (1 - 1e-9) });
+    });
+    list.push({ kind: 'overstress', g: (s) => overstress(s).ratio - (1 + 1e-9) });
+    return list;
+  };
+  let mechanism = false;
+  let finished = false;
+  const handle = (ev: Ev) => {
+    const d = controlDeflection(state);
+    if (ev.kind === 'cracking') {
+      crackedYet = true;
+      const at = maxRatio(state, (resp) => resp.crackingMoment);
+      events.push({ kind: 'cracking', loadFactor: state.lambda, deflection: d, position: beam.x[at.station]!, description: `first cracking at x = ${(beam.x[at.station]! / 1000).toFixed(2)} m` });
+    } else if (ev.kind === 'yield') {
+      const wasFirst = firstYield === null;
+      activate(ev.site!, state);
+      if (wasFirst) distributions.push(distribution('first yield', state));
+    } else if (ev.kind === 'peak') {
+      const h = hinges[ev.hinge!]!;
+      h.phase = 'softening';
+      state.rotations.set(ev.hinge!, h.rotation);
+      events.push({ kind: 'hinge', loadFactor: state.lambda, deflection: d, position: beam.x[h.station]!, description: `hinge at the ${SITE_WORDS[h.site]} reaches the peak moment of its section (θp = ${(h.rotation * 1000).toFixed(2)} mrad)` });
+      if (hinges.filter((x) => x.phase === 'softening').length > r) mechanism = true;
+    } else {
+      finishUltimate(ev.kind === 'capacity' ? hinges[ev.hinge!]! : undefined, state);
+      finished = true;
+    }
+  };
+  let step = lambdaRef / 40;
+  let guard = 0;
+  while (!mechanism && !finished && guard++ < 4000) {
+    // Events already reached at the current state (e.g. both supports of a symmetric beam yield together).
+    const due = candidates().find((ev) => ev.g(state) >= 0);
+    if (due) {
+      handle(due);
+      continue;
+    }
+    const target = state.lambda + step;
+    const next = solveAt(target, state);
+    if (!next) {
+      if (step > lambdaRef * 1e-6) {
+        step /= 4;
+        continue;
+      }
+      converged = false;
+      status = `not converged: no equilibrium beyond λ = ${state.lambda.toFixed(4)} (the redundant moments could not be balanced)`;
+      failureCause = 'analysis stopped before a limit state (not converged)';
+      break;
+    }
+    let earliest: { ev: Ev; at: Snapshot } | undefined;
+    for (const ev of candidates()) {
+      const ga = ev.g(state);
+      const gb = ev.g(next);
+      if (ga < 0 && gb >= 0) {
+        const at = locate(state, next, ev.g);
+        if (!earliest || at.lambda < earliest.at.lambda) earliest = { ev, at };
+      }
+    }
+    if (!earliest) {
+      state = next;
+      record(state, 'integration');
+      step = Math.min(step * 1.25, lambdaRef / 25);
+      continue;
+    }
+    state = earliest.at;
+    record(state, 'integration');
+    handle(earliest.ev);
+    step = Math.max(step / 2, lambdaRef / 200);
+  }
+  if (!mechanism && !finished && converged) {
+    converged = false;
+    status = 'not converged: the load-control stage did not end within its step budget';
+    failureCause = status;
+  }
+
+  // --- mechanism: rotation control of the newest softening hinge --------------------------------------
+  if (mechanism && !ultimate) {
+    const controlled = hinges.length - 1 - [...hinges].reverse().findIndex((h) => h.phase === 'softening');
+    const hc = hinges[controlled]!;
+    peak = { lambda: state.lambda, deflection: controlDeflection(state) };
+    events.push({ kind: 'mechanism', loadFactor: state.lambda, deflection: peak.deflection, position: beam.x[hc.station]!, description: `collapse mechanism: the member can take no more load; hinge at the ${SITE_WORDS[hc.site]} rotates at reducing or constant load` });
+    const free = hinges.map((h, i) => (h.phase === 'softening' && i !== controlled ? i : -1)).filter((i) => i >= 0);
+    const theta0 = hc.rotation;
+    const steps = 24;
+    let lambda = state.lambda;
+    let X = [...state.redundants];
+    let rot = free.map((i) => state.rotations.get(i) ?? hinges[i]!.rotation);
+    for (let k = 1; k <= steps; k++) {
+      const theta = theta0 + ((hc.capacity - theta0) * k) / steps;
+      hc.rotation = theta;
+      const res = newton(eq, hinges, free, true, { redundants: X, lambda, rotations: rot });
+      if (!res.converged) {
+        converged = false;
+        status = `not converged in the mechanism stage at θp = ${(theta * 1000).toFixed(2)} mrad of the hinge at the ${SITE_WORDS[hc.site]}`;
+        failureCause = 'analysis stopped in the mechanism stage (not converged)';
+        break;
+      }
+      lambda = res.lambda;
+      X = res.redundants;
+      rot = res.rotations;
+      const rotations = new Map<number, number>();
+      free.forEach((h, i) => rotations.set(h, rot[i]!));
+      rotations.set(controlled, theta);
+      const s: Snapshot = { lambda, redundants: X, rotations };
+      record(s, 'mechanism');
+      state = s;
+      const other = free.find((i) => (rotations.get(i) ?? 0) >= hinges[i]!.capacity);
+      if (k === steps || other !== undefined) {
+        finishUltimate(other !== undefined ? hinges[other]! : hc, s);
+        break;
+      }
+    }
+  }
+
+  if (peak.lambda === 0 || points.length > 0) {
+    const best = points.reduce((a, b) => (b.loadFactor > a.loadFactor ? b : a), points[0]!);
+    if (best.loadFactor >= peak.lambda) peak = { lambda: best.loadFactor, deflection: best.deflection };
+  }
+
+  const hingeResults: PlasticHinge[] = hinges.map((h) => {
+    const resp = responseOf(beam.zones[h.zone]!, h.sign);
+    const phiY = resp.nominalYieldCurvature;
+    return {
+      position: beam.x[h.station]!,
+      direction: h.sign > 0 ? 'sagging' : 'hogging',
+      sectionId: beam.zones[h.zone]!.sectionId,
+      length: h.length,
+      lengthMethod: capacity.hingeLengthMethod,
+      lengthFormula: h.lengthFormula,
+      shearSpan: h.shearSpan,
+      rotationCapacity: h.capacity,
+      rotationAtUltimate: h.rotation,
+      curvatureDuctility: phiY && phiY > 0 ? resp.ultimateCurvature / phiY : null,
+    };
+  });
+  return {
+    points,
+    events,
+    hinges: hingeResults,
+    distributions,
+    controlPosition,
+    status,
+    converged,
+    firstYield,
+    peak,
+    ultimate,
+    failureCause,
+  };
+
+  function finishUltimate(hinge: HingeState | undefined, s: Snapshot) {
+    const d = controlDeflection(s);
+    ultimate = { lambda: s.lambda, deflection: d };
+    if (hinge) {
+      failureCause = `the plastic hinge at the ${SITE_WORDS[hinge.site]} (x = ${(beam.x[hinge.station]! / 1000).toFixed(2)} m) reaches its rotation capacity θp,u = ${(hinge.capacity * 1000).toFixed(2)} mrad`;
+    } else {
+      const o = overstress(s);
+      failureCause = o.ratio >= 1 - 1e-6
+        ? `the section at x = ${(beam.x[o.station]! / 1000).toFixed(2)} m reaches its peak ${o.sign > 0 ? 'sagging' : 'hogging'} moment outside a plastic hinge`
+        : 'the load–deflection analysis reached its last step';
+    }
+    events.push({ kind: 'ultimate', loadFactor: s.lambda, deflection: d, position: hinge ? beam.x[hinge.station]! : beam.x[overstress(s).station]!, description: `ultimate: ${failureCause}` });
+    distributions.push(distribution('ultimate', s));
+  }
+
+  function failed(reason: string): CapacityCurve {
+    return {
+      points,
+      events,
+      hinges: [],
+      distributions,
+      controlPosition: 0,
+      status: `not converged: ${reason}`,
+      converged: false,
+      firstYield: null,
+      peak: { lambda: 0, deflection: 0 },
+      ultimate: null,
+      failureCause: reason,
+    };
+  }
+}
+
+export interface StaticState {
+  readonly converged: boolean;
+  readonly redundants: readonly number[];
+  readonly moment: Float64Array;
+  readonly curvature: Float64Array;
+  readonly deflection: Float64Array;
+  /** Largest |M|/M′y over the stations (> 1: the load passes first yield somewhere). */
+  readonly yieldRatio: number;
+  /** Largest |M|/Mpeak over the stations (> 1: the section cannot carry the load). */
+  readonly peakRatio: number;
+}
+
+/**
+ * Equilibrium and deflected shape under a fixed load (no plastic hinges): the service states.
+ * @param fields released-structure moments of the load at every station, N·mm
+ */
+export function solveStatic(beam: BeamModel, fields: Float64Array): StaticState {
+  const loads: LoadingFields = { constant: fields, pattern: new Float64Array(fields.length), constantTotal: 0, patternTotal: 0 };
+  const eq = new Equations(beam, loads);
+  const res = newton(eq, [], [], false, { redundants: new Array(beam.redundants.length).fill(0), lambda: 0, rotations: [] });
+  const moment = Float64Array.from(eq.moments(res.redundants, 0));
+  const curvature = new Float64Array(moment.length);
+  const deflection = deflectionShape(beam, moment, [], curvature);
+  let yieldRatio = 0;
+  let peakRatio = 0;
+  for (let i = 0; i < moment.length; i++) {
+    const m = moment[i]!;
+    const zone = beam.zones[beam.segmentZone[Math.min(i, moment.length - 2)]!]!;
+    const resp = m >= 0 ? zone.sagging : zone.hogging;
+    if (resp.firstYieldMoment) yieldRatio = Math.max(yieldRatio, Math.abs(m) / resp.firstYieldMoment);
+    if (resp.peakMoment > 0) peakRatio = Math.max(peakRatio, Math.abs(m) / resp.peakMoment);
+  }
+  return { converged: res.converged, redundants: res.redundants, moment, curvature, deflection, yieldRatio, peakRatio };
+}

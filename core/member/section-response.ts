@@ -1,0 +1,237 @@
+/**
+ * What the member engine needs from a section's moment–curvature curve in one direction, as fast
+ * lookups on the tabulated curve (moment magnitudes m ≥ 0, curvature magnitudes, N·mm and 1/mm).
+ *
+ * Plastic hinge model (see DEVELOPERS.md "Member engine"):
+ *  - up to first yield M′y the member uses the section's actual curvature (cracking, tension
+ *    stiffening, everything the curve holds);
+ *  - beyond M′y the distributed curvature follows the elastic extension φe = φ′y·m/M′y and the
+ *    plastic part (φ − φe) at a critical section is lumped into a hinge of length Lp:
+ *    θp = (φ − φe)·Lp — the decomposition behind θp = (φu − φy)·Lp of Park & Paulay (1975) and
+ *    Priestley, Calvi & Kowalsky (2007);
+ *  - past the peak moment the hinge moment follows the descending branch as θp grows, until the
+ *    section's ultimate curvature: θp,u = (φu − φe(Mu))·Lp.
+ * Under load control the curvature for a moment is taken on the ascending envelope, so a drop in
+ * moment after cracking becomes a jump in curvature at constant moment, as it does in a test.
+ */
+import type { MomentCurvatureResult } from '../section/results.ts';
+
+export interface SectionResponse {
+  /** Moment at zero curvature, N·mm (non-zero with axial load or shrinkage), signed in this direction. */
+  readonly momentAtZero: number;
+  readonly crackingMoment: number | null;
+  readonly firstYieldMoment: number | null;
+  readonly firstYieldCurvature: number | null;
+  readonly peakMoment: number;
+  readonly peakCurvature: number;
+  readonly ultimateMoment: number;
+  readonly ultimateCurvature: number;
+  /** Nominal (idealised) yield curvature and moment of the bilinear idealisation. */
+  readonly nominalYieldCurvature: number | null;
+  readonly nominalMoment: number | null;
+  /** Curvature on the ascending envelope for moment m (≤ peak); linear extrapolation below m(0). */
+  actualCurvature(m: number): number;
+  /** Curvature used for distributed integration: actual up to M′y, elastic extension beyond. */
+  integrationCurvature(m: number): number;
+  /** Lumped plastic rotation per unit hinge length (1/mm) for m between M′y and the peak. */
+  plasticCurvature(m: number): number;
+  /** integrationCurvature and its derivative dφ/dm (flexibility, 1/(N·mm²)) in one table search. */
+  integration(m: number, out: ValueAndSlope): ValueAndSlope;
+  /** plasticCurvature and its derivative in one table search. */
+  plastic(m: number, out: ValueAndSlope): ValueAndSlope;
+  /** Post-peak branch: plastic curvature (φ − φe) and moment pairs from the peak to ultimate, ascending in plastic curvature. */
+  readonly softening: { readonly plastic: readonly number[]; readonly moment: readonly number[] };
+}
+
+export interface ValueAndSlope {
+  value: number;
+  slope: number;
+}
+
+/** Linear interpolation with the segment slope (0 outside the table, where values clamp). */
+export function interpolateWithSlope(xs: readonly number[], ys: readonly number[], x: number, out: ValueAndSlope): ValueAndSlope {
+  const n = xs.length;
+  if (n === 0) {
+    out.value = 0;
+    out.slope = 0;
+    return out;
+  }
+  if (x <= xs[0]! || x >= xs[n - 1]!) {
+    out.value = x <= xs[0]! ? ys[0]! : ys[n - 1]!;
+    out.slope = 0;
+    return out;
+  }
+  let lo = 0;
+  let hi = n - 1;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (xs[mid]! <= x) lo = mid;
+    else hi = mid;
+  }
+  const x0 = xs[lo]!;
+  const x1 = xs[hi]!;
+  out.slope = x1 > x0 ? (ys[hi]! - ys[lo]!) / (x1 - x0) : 0;
+  out.value = ys[lo]! + out.slope * (x - x0);
+  return out;
+}
+
+/** Linear interpolation in a table ascending in `xs`; clamps outside. */
+export function interpolate(xs: readonly number[], ys: readonly number[], x: number): number {
+  const n = xs.length;
+  if (n === 0) return 0;
+  if (x <= xs[0]!) return ys[0]!;
+  if (x >= xs[n - 1]!) return ys[n - 1]!;
+  let lo = 0;
+  let hi = n - 1;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (xs[mid]! <= x) lo = mid;
+    else hi = mid;
+  }
+  const x0 = xs[lo]!;
+  const x1 = xs[hi]!;
+  return x1 > x0 ? ys[lo]! + ((ys[hi]! - ys[lo]!) * (x - x0)) / (x1 - x0) : ys[hi]!;
+}
+
+/** Relative width of the moment band over which a load-controlled jump in curvature is spread. */
+export const REGAIN_BAND = 1e-3;
+
+/** Builds the lookup tables from a computed curve. */
+export function sectionResponse(curve: MomentCurvatureResult): SectionResponse | undefined {
+  const pts = curve.points;
+  if (pts.length < 2) return undefined;
+  const peak = curve.keyPoints.peak ?? pts.reduce((a, b) => (b.moment > a.moment ? b : a));
+  const last = pts[pts.length - 1]!;
+  const ultimate = curve.keyPoints.ultimate ?? last;
+  const firstYield = curve.keyPoints.firstYield;
+  // Ascending envelope up to the peak: strictly increasing moments.
+  const envM: number[] = [pts[0]!.moment];
+  const envPhi: number[] = [pts[0]!.curvature];
+  for (let i = 1; i < pts.length; i++) {
+    const p = pts[i]!;
+    if (p.curvature > peak.curvature) break;
+    const prevM = envM[envM.length - 1]!;
+    if (p.moment > prevM) {
+      const q = pts[i - 1]!;
+      if (q.moment < prevM) {
+        // Regaining the envelope after a drop: insert the curvature where the curve regains prevM.
+        const phi = q.curvature + ((p.curvature - q.curvature) * (prevM - q.moment)) / (p.moment - q.moment);
+        // The regained branch starts 0.1 % above the moment where the curve dropped: a steep but
+        // finite flexibility, so that the redundants of an indeterminate beam can still be solved
+        // by Newton's method when a section sits on the jump (common practice, no source).
+        envM.push(prevM * (1 + REGAIN_BAND));
+        envPhi.push(phi);
+      }
+      if (p.moment > envM[envM.length - 1]!) {
+        envM.push(p.moment);
+        envPhi.push(p.curvature);
+      }
+    }
+  }
+  const m0 = envM[0]!;
+  const slope0 = envPhi.length > 1 && envM[1]! > envM[0]! ? (envPhi[1]! - envPhi[0]!) / (envM[1]! - envM[0]!) : 0;
+  const actualCurvature = (m: number) => (m < m0 ? envPhi[0]! + (m - m0) * slope0 : interpolate(envM, envPhi, m));
+  const my = firstYield && firstYield.curvature <= peak.curvature ? firstYield.moment : null;
+  const phiY = firstYield && firstYield.curvature <= peak.curvature ? firstYield.curvature : null;
+  const elastic = (m: number) => (my !== null && phiY !== null ? (phiY * m) / my : actualCurvature(m));
+  const integrationCurvature = (m: number) => (my !== null && m > my ? elastic(m) : actualCurvature(m));
+  const plasticCurvature = (m: number) => (my !== null && m > my ? Math.max(actualCurvature(m) - elastic(m), 0) : 0);
+  // Post-peak branch in terms of plastic curvature.
+  const plastic: number[] = [];
+  const moment: number[] = [];
+  for (const p of pts) {
+    if (p.curvature < peak.curvature || p.curvature > ultimate.curvature) continue;
+    const k = Math.max(p.curvature - elastic(p.moment), 0);
+    if (plastic.length === 0 || k > plastic[plastic.length - 1]!) {
+      plastic.push(k);
+      moment.push(p.moment);
+    }
+  }
+  if (plastic.length === 0) {
+    plastic.push(Math.max(peak.curvature - elastic(peak.moment), 0));
+    moment.push(peak.moment);
+  }
+  const elasticSlope = my !== null && phiY !== null ? phiY / my : 0;
+  const actualWithSlope = (m: number, out: ValueAndSlope) => {
+    if (m < m0) {
+      out.value = envPhi[0]! + (m - m0) * slope0;
+      out.slope = slope0;
+      return out;
+    }
+    return interpolateWithSlope(envM, envPhi, m, out);
+  };
+  const integration = (m: number, out: ValueAndSlope) => {
+    if (my !== null && m > my) {
+      out.value = elasticSlope * m;
+      out.slope = elasticSlope;
+      return out;
+    }
+    return actualWithSlope(m, out);
+  };
+  const plasticWithSlope = (m: number, out: ValueAndSlope) => {
+    if (my === null || m <= my) {
+      out.value = 0;
+      out.slope = 0;
+      return out;
+    }
+    actualWithSlope(m, out);
+    out.value = Math.max(out.value - elasticSlope * m, 0);
+    out.slope = out.value > 0 ? out.slope - elasticSlope : 0;
+    return out;
+  };
+  return {
+    integration,
+    plastic: plasticWithSlope,
+    momentAtZero: m0,
+    crackingMoment: curve.keyPoints.cracking?.moment ?? null,
+    firstYieldMoment: my,
+    firstYieldCurvature: phiY,
+    peakMoment: peak.moment,
+    peakCurvature: peak.curvature,
+    ultimateMoment: ultimate.moment,
+    ultimateCurvature: ultimate.curvature,
+    nominalYieldCurvature: curve.bilinear?.yieldCurvature ?? null,
+    nominalMoment: curve.bilinear?.yieldMoment ?? null,
+    actualCurvature,
+    integrationCurvature,
+    plasticCurvature,
+    softening: { plastic, moment },
+  };
+}
+
+/**
+ * Response of a section that has no tension steel in this direction: uncracked linear up to the
+ * cracking moment, which is then also its peak and ultimate (plain concrete fails at cracking).
+ * @param stiffness uncracked flexural stiffness EI, N·mm²
+ * @param crackingMoment N·mm (0 when concrete tension is ignored)
+ */
+export function plainConcreteResponse(stiffness: number, crackingMoment: number): SectionResponse {
+  const phiCr = crackingMoment / stiffness;
+  const lin = (m: number) => m / stiffness;
+  return {
+    momentAtZero: 0,
+    crackingMoment,
+    firstYieldMoment: null,
+    firstYieldCurvature: null,
+    peakMoment: crackingMoment,
+    peakCurvature: phiCr,
+    ultimateMoment: crackingMoment,
+    ultimateCurvature: phiCr,
+    nominalYieldCurvature: null,
+    nominalMoment: null,
+    actualCurvature: lin,
+    integrationCurvature: lin,
+    plasticCurvature: () => 0,
+    integration: (m, out) => {
+      out.value = m / stiffness;
+      out.slope = 1 / stiffness;
+      return out;
+    },
+    plastic: (_m, out) => {
+      out.value = 0;
+      out.slope = 0;
+      return out;
+    },
+    softening: { plastic: [0], moment: [crackingMoment] },
+  };
+}

@@ -1,0 +1,109 @@
+/**
+ * Statics of a single span under gravity loads (downward positive), moments sagging positive.
+ *
+ * Indeterminate beams are solved by the flexibility method on a released structure:
+ *  - simply supported, propped cantilever and fixed–fixed beams are released to a simple span
+ *    whose end moments MA (x = 0) and MB (x = L) are the redundants
+ *    M(x) = M0(x) + MA·(1 − x/L) + MB·x/L;
+ *  - a cantilever (fixed at x = 0, free at x = L) is determinate.
+ * A continuous beam will add interior support moments as further redundants of the same kind.
+ * Units: mm, N, N/mm, N·mm.
+ */
+import type { MemberLoad, SupportType } from './definition.ts';
+
+/** A load reduced to what statics needs. Uniform loads act over [from, to]. */
+export type StaticLoad =
+  | { readonly kind: 'uniform'; readonly w: number; readonly from: number; readonly to: number }
+  | { readonly kind: 'point'; readonly p: number; readonly a: number };
+
+export function toStaticLoad(load: MemberLoad, span: number, factor = 1): StaticLoad {
+  if (load.kind === 'point') return { kind: 'point', p: load.magnitude * factor, a: load.position };
+  return { kind: 'uniform', w: load.magnitude * factor, from: load.from ?? 0, to: load.to ?? span };
+}
+
+/** Total vertical load, N. */
+export function totalLoad(loads: readonly StaticLoad[]): number {
+  return loads.reduce((s, l) => s + (l.kind === 'point' ? l.p : l.w * (l.to - l.from)), 0);
+}
+
+/**
+ * Moment at x of the released structure, N·mm (sagging positive).
+ * simple: simply supported span of length L; cantilever: fixed at 0, free at L.
+ */
+export function releasedMoment(support: SupportType, span: number, loads: readonly StaticLoad[], x: number): number {
+  if (support === 'cantilever') {
+    // Hogging from every load to the right of x.
+    let m = 0;
+    for (const l of loads) {
+      if (l.kind === 'point') {
+        if (l.a > x) m -= l.p * (l.a - x);
+      } else {
+        const a = Math.max(l.from, x);
+        if (l.to > a) m -= l.w * (l.to - a) * ((l.to + a) / 2 - x);
+      }
+    }
+    return m;
+  }
+  // Simple span: left reaction from moments about the right support.
+  let reaction = 0;
+  for (const l of loads) {
+    if (l.kind === 'point') reaction += (l.p * (span - l.a)) / span;
+    else reaction += (l.w * (l.to - l.from) * (span - (l.from + l.to) / 2)) / span;
+  }
+  let m = reaction * x;
+  for (const l of loads) {
+    if (l.kind === 'point') {
+      if (l.a < x) m -= l.p * (x - l.a);
+    } else {
+      const b = Math.min(l.to, x);
+      if (b > l.from) m -= l.w * (b - l.from) * (x - (l.from + b) / 2);
+    }
+  }
+  return m;
+}
+
+/** Redundants of each support type: which end moments are unknown. */
+export function redundantEnds(support: SupportType): ('left' | 'right')[] {
+  switch (support) {
+    case 'simply-supported':
+    case 'cantilever':
+      return [];
+    case 'propped-cantilever':
+      return ['left'];
+    case 'fixed-fixed':
+      return ['left', 'right'];
+  }
+}
+
+/** Moment field at x of a unit redundant end moment (sagging-positive unit), dimensionless. */
+export function redundantField(end: 'left' | 'right', span: number, x: number): number {
+  return end === 'left' ? 1 - x / span : x / span;
+}
+
+/**
+ * Fixed-end moments of a fixed–fixed span (hogging negative), N·mm, for the linear-elastic
+ * prismatic case — used as the starting guess of the nonlinear redundants and as the code-method
+ * moment field. Closed forms per load (handbook: uniform over [a, b] by integration of the point
+ * load case MA = −P·a·b²/L²).
+ */
+export function fixedEndMoments(span: number, loads: readonly StaticLoad[]): { left: number; right: number } {
+  let left = 0;
+  let right = 0;
+  const pointCase = (p: number, a: number) => {
+    const b = span - a;
+    left -= (p * a * b * b) / (span * span);
+    right -= (p * a * a * b) / (span * span);
+  };
+  for (const l of loads) {
+    if (l.kind === 'point') pointCase(l.p, l.a);
+    else {
+      // Integrate the point-load formula over the loaded length with 8-point Gauss (exact: cubic integrand).
+      const nodes = [-0.9602898564975363, -0.7966664774136267, -0.5255324099163290, -0.1834346424956498, 0.1834346424956498, 0.5255324099163290, 0.7966664774136267, 0.9602898564975363];
+      const weights = [0.1012285362903763, 0.2223810344533745, 0.3137066458778873, 0.3626837833783620, 0.3626837833783620, 0.3137066458778873, 0.2223810344533745, 0.1012285362903763];
+      const half = (l.to - l.from) / 2;
+      const mid = (l.to + l.from) / 2;
+      nodes.forEach((t, i) => pointCase(l.w * half * weights[i]!, mid + half * t));
+    }
+  }
+  return { left, right };
+}

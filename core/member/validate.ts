@@ -1,0 +1,96 @@
+/**
+ * Checks of a member definition that need its meaning (zones tile the span, loads lie on it,
+ * sections exist). Every problem is reported with its path, value and allowed range.
+ */
+import { checkNumber, type Diagnostic } from '../diagnostics.ts';
+import type { MemberDefinition } from './definition.ts';
+
+const SUPPORTS = ['simply-supported', 'cantilever', 'fixed-fixed', 'propped-cantilever'];
+const LOAD_CASES = ['dead', 'superimposed', 'live'];
+const LIMITS = ['aci-roof-immediate', 'aci-floor-immediate', 'aci-sensitive-after-attachment', 'aci-insensitive-after-attachment', 'en-appearance', 'en-after-construction', 'custom'];
+const HINGES = ['priestley-2007', 'paulay-priestley-1992', 'mattock-1967', 'corley-1966', 'user'];
+
+/** Metres for messages (the engineer thinks in metres along a span). */
+const m = (mm: number) => `${(mm / 1000).toFixed(3).replace(/\.?0+$/, '')} m`;
+
+/**
+ * @param path e.g. `members[3] "B-12"`
+ * @param sectionIds ids of the project's sections
+ */
+export function validateMember(member: MemberDefinition, path: string, sectionIds: ReadonlySet<string>): Diagnostic[] {
+  const out: Diagnostic[] = [];
+  const error = (code: Diagnostic['code'], at: string, message: string) => out.push({ code, path: `${path}.${at}`, severity: 'error', message });
+  if (!SUPPORTS.includes(member.supports)) error('unknown-option', 'supports', `must be one of ${SUPPORTS.join(', ')}, got ${JSON.stringify(member.supports)}`);
+  const spanOk = checkNumber(out, `${path}.span`, member.span, { min: 0, exclusiveMin: true, max: 60000, unit: 'mm' });
+  const span = spanOk ? member.span : NaN;
+
+  // Zones must tile [0, span].
+  if (!Array.isArray(member.zones) || member.zones.length === 0) {
+    error('required', 'zones', 'at least one zone with a section is required');
+  } else {
+    const zones = [...member.zones].map((z, i) => ({ z, i })).sort((a, b) => a.z.from - b.z.from);
+    member.zones.forEach((z, i) => {
+      checkNumber(out, `${path}.zones[${i}].from`, z.from, { min: 0, unit: 'mm' });
+      checkNumber(out, `${path}.zones[${i}].to`, z.to, { min: 0, unit: 'mm' });
+      if (!sectionIds.has(z.sectionId)) error('unknown-reference', `zones[${i}].sectionId`, `no section with id "${z.sectionId}" in the project`);
+      if (Number.isFinite(z.from) && Number.isFinite(z.to) && !(z.to > z.from)) error('geometry', `zones[${i}]`, `must end after it starts, got from ${m(z.from)} to ${m(z.to)}`);
+    });
+    if (spanOk && out.length === 0) {
+      let cursor = 0;
+      for (const { z, i } of zones) {
+        if (Math.abs(z.from - cursor) > 1e-6) {
+          error('geometry', `zones[${i}].from`, z.from > cursor ? `leaves a gap from ${m(cursor)} to ${m(z.from)}: zones must cover the span without gaps` : `overlaps the previous zone (starts at ${m(z.from)}, previous ends at ${m(cursor)})`);
+        }
+        cursor = z.to;
+      }
+      if (Math.abs(cursor - span) > 1e-6) error('geometry', 'zones', `must end at the span, ${m(span)}; the last zone ends at ${m(cursor)}`);
+    }
+  }
+
+  // Loads lie on the span.
+  (member.loads ?? []).forEach((load, i) => {
+    const at = `loads[${i}]`;
+    if (!LOAD_CASES.includes(load.loadCase)) error('unknown-option', `${at}.loadCase`, `must be one of ${LOAD_CASES.join(', ')}, got ${JSON.stringify(load.loadCase)}`);
+    if (load.kind === 'point') {
+      checkNumber(out, `${path}.${at}.magnitude`, load.magnitude, { min: -1e9, max: 1e9, unit: 'N' });
+      if (checkNumber(out, `${path}.${at}.position`, load.position, { min: 0, unit: 'mm' }) && spanOk && load.position > span) {
+        error('out-of-range', `${at}.position`, `must lie on the span (0 to ${m(span)}), got ${m(load.position)}`);
+      }
+    } else if (load.kind === 'uniform') {
+      checkNumber(out, `${path}.${at}.magnitude`, load.magnitude, { min: -1e4, max: 1e4, unit: 'N/mm' });
+      const from = load.from ?? 0;
+      const to = load.to ?? (spanOk ? span : 0);
+      if (load.from !== undefined) checkNumber(out, `${path}.${at}.from`, load.from, { min: 0, unit: 'mm' });
+      if (load.to !== undefined) checkNumber(out, `${path}.${at}.to`, load.to, { min: 0, unit: 'mm' });
+      if (spanOk && Number.isFinite(from) && Number.isFinite(to)) {
+        if (!(to > from)) error('geometry', at, `must end after it starts, got from ${m(from)} to ${m(to)}`);
+        else if (to > span + 1e-6) error('out-of-range', `${at}.to`, `must lie on the span (0 to ${m(span)}), got ${m(to)}`);
+      }
+    } else {
+      error('unknown-option', `${at}.kind`, `must be "uniform" or "point", got ${JSON.stringify((load as { kind: unknown }).kind)}`);
+    }
+  });
+
+  // Settings.
+  const s = member.service;
+  if (!s) error('required', 'service', 'service settings are required');
+  else {
+    checkNumber(out, `${path}.service.sustainedLiveFraction`, s.sustainedLiveFraction, { min: 0, max: 1 });
+    checkNumber(out, `${path}.service.durationMonths`, s.durationMonths, { min: 0, max: 1200, unit: 'months' });
+    (s.limitCases ?? []).forEach((c, i) => {
+      if (!LIMITS.includes(c)) error('unknown-option', `service.limitCases[${i}]`, `must be one of ${LIMITS.join(', ')}, got ${JSON.stringify(c)}`);
+    });
+    if ((s.limitCases ?? []).includes('custom')) checkNumber(out, `${path}.service.customLimitRatio`, s.customLimitRatio, { min: 50, max: 5000 });
+  }
+  const c = member.capacity;
+  if (!c) error('required', 'capacity', 'capacity settings are required');
+  else {
+    if (!['proportional', 'live-only'].includes(c.pattern)) error('unknown-option', 'capacity.pattern', `must be "proportional" or "live-only", got ${JSON.stringify(c.pattern)}`);
+    if (!HINGES.includes(c.hingeLengthMethod)) error('unknown-option', 'capacity.hingeLengthMethod', `must be one of ${HINGES.join(', ')}, got ${JSON.stringify(c.hingeLengthMethod)}`);
+    if (c.hingeLengthMethod === 'user') checkNumber(out, `${path}.capacity.userHingeLength`, c.userHingeLength, { min: 10, max: 5000, unit: 'mm' });
+  }
+  if (member.strengthFactors) {
+    for (const k of ['dead', 'superimposed', 'live'] as const) checkNumber(out, `${path}.strengthFactors.${k}`, member.strengthFactors[k], { min: 0, max: 5 });
+  }
+  return out;
+}

@@ -1,0 +1,56 @@
+/**
+ * Zone responses for the member engine: for each section used along the span, its sagging and
+ * hogging moment–curvature responses and the data the hinge-length expressions need.
+ */
+import type { SectionModel, BendingDirection } from '../section/model.ts';
+import type { ElasticProperties } from '../section/elastic.ts';
+import type { MomentCurvatureResult } from '../section/results.ts';
+import { tensionSteel } from '../section/moment-curvature.ts';
+import type { HingeSectionData, ZoneResponse } from './beam-model.ts';
+import { plainConcreteResponse, sectionResponse, type SectionResponse } from './section-response.ts';
+
+/** Effective depth, main bar diameter, fy and fu of the tension steel for a direction. */
+export function hingeSectionData(model: SectionModel, direction: BendingDirection): HingeSectionData {
+  const steel = tensionSteel(model, direction);
+  if (steel.length === 0) return { effectiveDepth: model.height * 0.9, barDiameter: 0, yieldStress: 1, ultimateStress: 1 };
+  const area = steel.reduce((s, e) => s + e.area, 0);
+  const centroid = steel.reduce((s, e) => s + e.area * e.depth, 0) / area;
+  const main = steel.reduce((a, b) => (b.area > a.area ? b : a));
+  const material = main.material as { yieldStress?: number; ultimateStress?: number };
+  return {
+    effectiveDepth: direction === 'sagging' ? centroid : model.height - centroid,
+    barDiameter: Math.max(...steel.map((e) => e.diameter ?? Math.sqrt((4 * e.area) / Math.PI))),
+    yieldStress: material.yieldStress ?? 1,
+    ultimateStress: material.ultimateStress ?? material.yieldStress ?? 1,
+  };
+}
+
+/**
+ * Response for one direction: from the computed curve, or, when the section has no tension steel
+ * on that side, the plain-concrete response (linear to the cracking moment, which is then its
+ * capacity).
+ */
+export function directionResponse(curve: MomentCurvatureResult | undefined, elastic: ElasticProperties, direction: BendingDirection): SectionResponse {
+  const fromCurve = curve ? sectionResponse(curve) : undefined;
+  if (fromCurve) return fromCurve;
+  const stiffness = elastic.concreteModulus * elastic.uncrackedInertia;
+  return plainConcreteResponse(stiffness, elastic.crackingMoment[direction].transformed);
+}
+
+export function zoneResponse(
+  sectionId: string,
+  from: number,
+  to: number,
+  model: SectionModel,
+  elastic: ElasticProperties,
+  curves: { sagging?: MomentCurvatureResult; hogging?: MomentCurvatureResult },
+): ZoneResponse {
+  return {
+    sectionId,
+    from,
+    to,
+    sagging: directionResponse(curves.sagging, elastic, 'sagging'),
+    hogging: directionResponse(curves.hogging, elastic, 'hogging'),
+    hingeData: { sagging: hingeSectionData(model, 'sagging'), hogging: hingeSectionData(model, 'hogging') },
+  };
+}

@@ -1,0 +1,90 @@
+/**
+ * Material lookup for one project: builds each material once (per confinement) and reports
+ * problems with the material's path in the project file.
+ */
+import type { Diagnostic } from '../diagnostics.ts';
+import { InputError } from '../diagnostics.ts';
+import { buildConcrete, buildSteel, buildFrp } from '../materials/factory.ts';
+import type { CodeBasis, ConcreteSpec, ConfinementInput, FrpSpec, MaterialSpec, SteelSpec } from '../materials/specs.ts';
+import type { ConcreteMaterial, FrpMaterial, SteelMaterial } from '../materials/types.ts';
+import type { MaterialResolver } from '../section/build.ts';
+
+export interface ProjectMaterials extends MaterialResolver {
+  concreteSpec(id: string): ConcreteSpec | undefined;
+  steelSpec(id: string): SteelSpec | undefined;
+  frp(id: string): FrpMaterial | undefined;
+  frpSpec(id: string): FrpSpec | undefined;
+  /** Problems met while building materials (each once). */
+  readonly problems: Diagnostic[];
+}
+
+function materialPath(specs: readonly MaterialSpec[], id: string): string {
+  const i = specs.findIndex((m) => m.id === id);
+  return `materials[${i}] "${id}"`;
+}
+
+/** A caching resolver over a project's material library. */
+export function projectMaterials(specs: readonly MaterialSpec[], code: CodeBasis): ProjectMaterials {
+  const problems: Diagnostic[] = [];
+  const reported = new Set<string>();
+  const concreteCache = new Map<string, { cover: ConcreteMaterial; core?: ConcreteMaterial; warnings: string[] } | undefined>();
+  const steelCache = new Map<string, SteelMaterial | undefined>();
+  const frpCache = new Map<string, FrpMaterial | undefined>();
+  const byId = (id: string, kind: MaterialSpec['kind']) => specs.find((m) => m.id === id && m.kind === kind);
+  const record = (id: string, error: unknown) => {
+    if (reported.has(id)) return;
+    reported.add(id);
+    if (error instanceof InputError) problems.push(...error.diagnostics);
+    else problems.push({ code: 'inconsistent', path: materialPath(specs, id), severity: 'error', message: String(error instanceof Error ? error.message : error) });
+  };
+  return {
+    problems,
+    concreteSpec: (id) => byId(id, 'concrete') as ConcreteSpec | undefined,
+    steelSpec: (id) => byId(id, 'steel') as SteelSpec | undefined,
+    frpSpec: (id) => byId(id, 'frp') as FrpSpec | undefined,
+    concrete(id: string, confinement?: ConfinementInput) {
+      const key = `${id}|${confinement ? JSON.stringify(confinement) : ''}`;
+      if (concreteCache.has(key)) return concreteCache.get(key);
+      const spec = byId(id, 'concrete') as ConcreteSpec | undefined;
+      let built: { cover: ConcreteMaterial; core?: ConcreteMaterial; warnings: string[] } | undefined;
+      if (spec) {
+        try {
+          const b = buildConcrete(spec, code, confinement, { path: materialPath(specs, id) });
+          built = { cover: b.cover, ...(b.core ? { core: b.core } : {}), warnings: b.diagnostics.filter((d) => d.severity === 'warning').map((d) => d.message) };
+        } catch (error) {
+          record(id, error);
+        }
+      }
+      concreteCache.set(key, built);
+      return built;
+    },
+    steel(id: string) {
+      if (steelCache.has(id)) return steelCache.get(id);
+      const spec = byId(id, 'steel') as SteelSpec | undefined;
+      let built: SteelMaterial | undefined;
+      if (spec) {
+        try {
+          built = buildSteel(spec, materialPath(specs, id));
+        } catch (error) {
+          record(id, error);
+        }
+      }
+      steelCache.set(id, built);
+      return built;
+    },
+    frp(id: string) {
+      if (frpCache.has(id)) return frpCache.get(id);
+      const spec = byId(id, 'frp') as FrpSpec | undefined;
+      let built: FrpMaterial | undefined;
+      if (spec) {
+        try {
+          built = buildFrp(spec, materialPath(specs, id));
+        } catch (error) {
+          record(id, error);
+        }
+      }
+      frpCache.set(id, built);
+      return built;
+    },
+  };
+}

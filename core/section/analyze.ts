@@ -1,0 +1,163 @@
+/**
+ * Everything computed for one section of a project: the resolved model, elastic properties, and
+ * the moment–curvature curves a member may need — short term, under sustained load (creep and
+ * shrinkage) and, under EN 1992-1-1, with design laws for the resistance.
+ */
+import { InputError, type Diagnostic } from '../diagnostics.ts';
+import type { CodeBasis } from '../materials/specs.ts';
+import { en1992ParabolaUltimateStrain } from '../materials/code/en1992.ts';
+import { combineConcrete } from '../materials/concrete/combine.ts';
+import { en1992ParabolaRectangleCompression } from '../materials/concrete/en1992-parabola-rectangle.ts';
+import { noTension } from '../materials/concrete/tension.ts';
+import { elasticPlasticSteel } from '../materials/steel/elastic-plastic.ts';
+import { sustainedConcrete } from '../materials/long-term.ts';
+import { resolveConcrete } from '../materials/build/concrete-defaults.ts';
+import type { SteelMaterial } from '../materials/types.ts';
+import type { ProjectMaterials } from '../project/resolver.ts';
+import { buildSectionModel, type SectionAdditions } from './build.ts';
+import type { SectionDefinition } from './definition.ts';
+import { elasticProperties, type ElasticProperties } from './elastic.ts';
+import type { BendingDirection, SectionModel } from './model.ts';
+import { momentCurvature, tensionSteel, type MomentCurvatureOptions } from './moment-curvature.ts';
+import type { MomentCurvatureResult } from './results.ts';
+import { withMaterials } from './transform.ts';
+
+/** Gravity, m/s² (standard acceleration, CGPM 1901). */
+export const STANDARD_GRAVITY = 9.80665;
+
+export type DirectionCurves = { readonly sagging?: MomentCurvatureResult; readonly hogging?: MomentCurvatureResult };
+
+export interface SectionAnalysis {
+  readonly sectionId: string;
+  readonly sectionName: string;
+  readonly model: SectionModel | null;
+  readonly elastic: ElasticProperties | null;
+  /** Short-term curves (the section's own laws). */
+  readonly curves: DirectionCurves;
+  /** Curves under sustained load: concrete with creep φ and shrinkage εcs. */
+  readonly longTermCurves: DirectionCurves;
+  /** EN 1992-1-1 only: curves with design laws (fcd, fyd) for M_Rd. */
+  readonly designCurves: DirectionCurves | null;
+  /** Yield strain of the main tension steel per direction (for ACI φ). */
+  readonly yieldStrain: { readonly sagging: number; readonly hogging: number };
+  /** Self-weight, N/mm. */
+  readonly selfWeight: number;
+  /** Code values of the concrete (ACI Ec, fr / EN Ecm, fctm), creep and shrinkage. */
+  readonly codeModulus: number;
+  readonly codeTensileStrength: number;
+  readonly creepCoefficient: number;
+  readonly shrinkageStrain: number;
+  readonly warnings: readonly string[];
+  readonly errors: readonly Diagnostic[];
+}
+
+export interface SectionAnalysisOptions {
+  readonly code: CodeBasis;
+  readonly momentDropFraction: number;
+  readonly bilinearMethod: 'priestley-2007' | 'equal-energy';
+  /** Extra parts from a strengthening scheme or an as-found condition. */
+  readonly additions?: SectionAdditions;
+}
+
+function curvesOf(model: SectionModel, options: MomentCurvatureOptions, warnings: string[], label: string): DirectionCurves {
+  const out: { sagging?: MomentCurvatureResult; hogging?: MomentCurvatureResult } = {};
+  for (const dir of ['sagging', 'hogging'] as BendingDirection[]) {
+    if (tensionSteel(model, dir).length === 0) continue;
+    const curve = momentCurvature(model, dir, options);
+    if (curve.status.kind !== 'complete') warnings.push(`${label} ${dir} curve: ${curve.status.message}`);
+    out[dir] = curve;
+  }
+  return out;
+}
+
+/** Analyses a section of the project; never throws for bad input (errors are returned). */
+export function analyzeSection(definition: SectionDefinition, path: string, materials: ProjectMaterials, options: SectionAnalysisOptions): SectionAnalysis {
+  const warnings: string[] = [];
+  const empty = (errors: Diagnostic[]): SectionAnalysis => ({
+    sectionId: definition.id,
+    sectionName: definition.name,
+    model: null,
+    elastic: null,
+    curves: {},
+    longTermCurves: {},
+    designCurves: null,
+    yieldStrain: { sagging: 0.002, hogging: 0.002 },
+    selfWeight: 0,
+    codeModulus: 0,
+    codeTensileStrength: 0,
+    creepCoefficient: 0,
+    shrinkageStrain: 0,
+    warnings,
+    errors,
+  });
+  let model: SectionModel;
+  try {
+    const built = buildSectionModel(definition, materials, path, options.additions);
+    model = built.model;
+    warnings.push(...built.warnings);
+  } catch (error) {
+    if (error instanceof InputError) {
+      // A material that failed to build shows up as an unknown reference: report the real cause.
+      const materialProblems = materials.problems.filter((p) => p.severity === 'error');
+      return empty([...materialProblems, ...error.diagnostics.filter((d) => !(d.code === 'unknown-reference' && materialProblems.length > 0))]);
+    }
+    throw error;
+  }
+  const spec = materials.concreteSpec(definition.concreteId)!;
+  const code = options.code;
+  const crushing = code === 'ACI 318-19' ? 0.003 : en1992ParabolaUltimateStrain(spec.strength);
+  const mcOptions: MomentCurvatureOptions = { codeCrushingStrain: crushing, momentDropFraction: options.momentDropFraction, bilinearMethod: options.bilinearMethod };
+  const curves = curvesOf(model, mcOptions, warnings, 'Short-term');
+  const creep = spec.creepCoefficient ?? 2.0;
+  const shrinkage = spec.shrinkageStrain ?? 0.0004;
+  const longModel = withMaterials(model, (m) => sustainedConcrete(m, creep, shrinkage));
+  const longTermCurves = curvesOf(longModel, { ...mcOptions, codeCrushingStrain: crushing * (1 + creep) + shrinkage }, [], 'Sustained-load');
+  let designCurves: DirectionCurves | null = null;
+  if (code === 'EN 1992-1-1') {
+    const fcd = spec.strength / 1.5; // αcc = 1.0, γc = 1.5 (EN 1992-1-1 3.1.6(1), Table 2.1N)
+    const designConcrete = combineConcrete(en1992ParabolaRectangleCompression({ strength: fcd, characteristicStrength: spec.strength }), noTension());
+    const designSteel = new Map<unknown, SteelMaterial>();
+    const designModel = withMaterials(
+      model,
+      () => designConcrete,
+      (m) => {
+        const s = m as SteelMaterial;
+        let d = designSteel.get(s);
+        if (!d) {
+          d = elasticPlasticSteel({ elasticModulus: s.initialModulus, yieldStress: s.yieldStress / 1.15, ruptureStrain: 0.9 * s.ruptureStrain });
+          designSteel.set(s, d);
+        }
+        return d;
+      },
+    );
+    designCurves = curvesOf(designModel, mcOptions, warnings, 'Design-law');
+  }
+  // ACI Ec = 4700√f′c and fr = 0.62λ√f′c, or EN Ecm and fctm, unless the spec overrides them.
+  const codeValues = resolveConcrete(spec, code);
+  const elastic = elasticProperties(model);
+  const yieldOf = (dir: BendingDirection) => {
+    const steel = tensionSteel(model, dir);
+    const main = steel.reduce<(typeof steel)[number] | undefined>((a, b) => (!a || b.area > a.area ? b : a), undefined);
+    return main?.material.yieldStrain ?? 0.002;
+  };
+  const density = spec.density ?? 2400;
+  return {
+    sectionId: definition.id,
+    sectionName: definition.name,
+    model,
+    elastic,
+    curves,
+    longTermCurves,
+    designCurves,
+    yieldStrain: { sagging: yieldOf('sagging'), hogging: yieldOf('hogging') },
+    // ρ (kg/m³) · g (m/s²) · A (mm²) · 1e-9 (m³ per mm²·m → per mm) = N/mm
+    selfWeight: density * STANDARD_GRAVITY * model.grossArea * 1e-9,
+    codeModulus: codeValues.elasticModulus,
+    codeTensileStrength: codeValues.tensileStrength,
+    creepCoefficient: creep,
+    shrinkageStrain: shrinkage,
+    warnings,
+    errors: [],
+  };
+}
+

@@ -1,0 +1,308 @@
+/**
+ * HostApi in a plain browser (the web build, and `npm start` when Electron is missing).
+ *
+ * - Files: File System Access dialogs where available (saving back to the same file), else an
+ *   <input type=file> picker and downloads (web-files.ts).
+ * - Autosave and recovery in IndexedDB. A "session open" marker in localStorage is removed when
+ *   the page is left without unsaved changes; finding it at the next start means the last visit
+ *   ended abnormally (tab crash, browser killed, or leaving despite the unsaved-changes warning),
+ *   and its autosave is offered through `takeRecovery()`.
+ * - Recent files: names in localStorage; file handles (when the browser gives them) in IndexedDB.
+ * - No native menu: Ctrl/Cmd+S, Shift+S, O, Z, Y, Shift+Z and Enter become MenuCommands.
+ * - Unsaved changes: the browser's `beforeunload` warning.
+ * - Dropping a project file on the page opens it (`onOpenFile`).
+ * - `?demo` in the address sends `open-demo` once to the first menu-command listener.
+ */
+import {
+  EXPORT_EXTENSIONS,
+  PROJECT_EXTENSION,
+  type HostApi,
+  type MenuCommand,
+  type OpenedFile,
+} from './host-api.ts';
+import { createBrowserFileAccess, readProjectFile, type FileHandleLike, type WebFileAccess } from './web-files.ts';
+import { createIndexedDbStore, createMemoryStore, type KeyValueStore } from './web-storage.ts';
+
+export const SESSION_MARKER_KEY = 'hingeline.session-open';
+export const RECENT_KEY = 'hingeline.recent-files';
+const AUTOSAVE_KEY = 'autosave';
+const RECOVERED_KEY = 'recovered';
+const RECENT_HANDLE_PREFIX = 'recent-handle:';
+const HANDLE_TOKEN_PREFIX = 'web-handle:';
+const RECENT_LIMIT = 10;
+const TITLE_LIMIT = 300;
+
+export interface KeyLike {
+  readonly key: string;
+  readonly ctrlKey: boolean;
+  readonly metaKey: boolean;
+  readonly shiftKey: boolean;
+  readonly altKey: boolean;
+}
+
+/**
+ * The MenuCommand for a key press, or null. Ctrl (or Cmd) with S, Shift+S, O, Z, Shift+Z, Y,
+ * Enter. Undo and redo are left to the browser while a text field has focus (`inTextField`),
+ * so typing keeps its own undo.
+ */
+export function menuCommandForKey(event: KeyLike, inTextField: boolean): MenuCommand | null {
+  if (!(event.ctrlKey || event.metaKey) || event.altKey) return null;
+  const key = event.key.toLowerCase();
+  if (key === 's') return event.shiftKey ? 'save-as' : 'save';
+  if (key === 'o' && !event.shiftKey) return 'open';
+  if (key === 'enter' && !event.shiftKey) return 'analyze';
+  if (inTextField) return null;
+  if (key === 'z') return event.shiftKey ? 'redo' : 'undo';
+  if (key === 'y' && !event.shiftKey) return 'redo';
+  return null;
+}
+
+function isTextField(target: EventTarget | null): boolean {
+  const element = target as (HTMLElement & { type?: string }) | null;
+  if (!element || typeof element.tagName !== 'string') return false;
+  const tag = element.tagName.toLowerCase();
+  if (tag === 'textarea' || element.isContentEditable) return true;
+  if (tag !== 'input') return false;
+  return !['button', 'checkbox', 'radio', 'range', 'color', 'file', 'submit', 'reset', 'image'].includes(element.type ?? 'text');
+}
+
+/** `Beam B1 — Hingeline`, with `• ` in front when there are unsaved changes. */
+export function documentTitle(state: { title: string; dirty: boolean }): string {
+  const title = state.title.trim().length > 0 ? `${state.title.trim()} — Hingeline` : 'Hingeline';
+  return state.dirty ? `• ${title}` : title;
+}
+
+interface AutosaveRecord {
+  text: string;
+  savedAt: string;
+  name: string;
+}
+
+function asAutosaveRecord(value: unknown): AutosaveRecord | null {
+  if (typeof value !== 'object' || value === null) return null;
+  const { text, savedAt, name } = value as Record<string, unknown>;
+  return typeof text === 'string' && typeof savedAt === 'string' && typeof name === 'string' ? { text, savedAt, name } : null;
+}
+
+function readRecent(storage: Storage | null): string[] {
+  try {
+    const parsed: unknown = JSON.parse(storage?.getItem(RECENT_KEY) ?? '[]');
+    return Array.isArray(parsed) ? parsed.filter((name): name is string => typeof name === 'string' && name.length > 0 && name.length <= 255).slice(0, RECENT_LIMIT) : [];
+  } catch {
+    return [];
+  }
+}
+
+function safeLocalStorage(window: Window): Storage | null {
+  try {
+    return window.localStorage;
+  } catch {
+    return null; // storage disabled (privacy settings, sandboxed frame)
+  }
+}
+
+export interface WebHostDependencies {
+  readonly window: Window;
+  readonly store: KeyValueStore;
+  readonly localStorage: Storage | null;
+  readonly files: WebFileAccess;
+  readonly now: () => Date;
+}
+
+export interface WebHost extends HostApi {
+  /** Resolves once the previous visit's autosave has been set aside (or discarded). */
+  readonly ready: Promise<void>;
+  /** Removes the window listeners (tests). */
+  dispose(): void;
+}
+
+function defaultStore(window: Window): KeyValueStore {
+  return window.indexedDB ? createIndexedDbStore(window.indexedDB) : createMemoryStore();
+}
+
+export function createWebHost(overrides: Partial<WebHostDependencies> = {}): WebHost {
+  const window = overrides.window ?? globalThis.window;
+  const deps: WebHostDependencies = {
+    window,
+    store: overrides.store ?? defaultStore(window),
+    localStorage: overrides.localStorage !== undefined ? overrides.localStorage : safeLocalStorage(window),
+    files: overrides.files ?? createBrowserFileAccess(window),
+    now: overrides.now ?? (() => new Date()),
+  };
+  const { store, localStorage: storage, files, now } = deps;
+
+  let dirty = false;
+  let title = 'Untitled';
+  let tokenCounter = 0;
+  const handles = new Map<string, FileHandleLike>();
+  const menuListeners = new Set<(command: MenuCommand) => void>();
+  const fileListeners = new Set<(file: OpenedFile) => void>();
+  const pendingCommands: MenuCommand[] = [];
+  const pendingFiles: OpenedFile[] = [];
+
+  if (new URL(window.location.href).searchParams.has('demo')) pendingCommands.push('open-demo');
+
+  // Set aside the autosave of a visit that ended abnormally, then mark this visit open.
+  const ready = (async () => {
+    const previousVisitOpen = (storage?.getItem(SESSION_MARKER_KEY) ?? null) !== null;
+    const autosaved = asAutosaveRecord(await store.get(AUTOSAVE_KEY).catch(() => null));
+    if (autosaved && previousVisitOpen) await store.set(RECOVERED_KEY, autosaved);
+    if (autosaved) await store.delete(AUTOSAVE_KEY);
+    storage?.setItem(SESSION_MARKER_KEY, now().toISOString());
+  })().catch((error: unknown) => console.warn('[hingeline] recovery storage unavailable:', error));
+
+  function emitCommand(command: MenuCommand): void {
+    if (menuListeners.size === 0) pendingCommands.push(command);
+    for (const listener of [...menuListeners]) listener(command);
+  }
+
+  function emitFile(file: OpenedFile): void {
+    if (fileListeners.size === 0) pendingFiles.push(file);
+    for (const listener of [...fileListeners]) listener(file);
+  }
+
+  function tokenFor(handle: FileHandleLike | null): string | null {
+    if (!handle) return null;
+    for (const [token, known] of handles) if (known === handle) return token;
+    tokenCounter += 1;
+    const token = `${HANDLE_TOKEN_PREFIX}${tokenCounter}-${Math.abs(now().getTime()).toString(36)}`;
+    handles.set(token, handle);
+    return token;
+  }
+
+  async function remember(name: string, handle: FileHandleLike | null): Promise<void> {
+    const names = [name, ...readRecent(storage).filter((known) => known !== name)].slice(0, RECENT_LIMIT);
+    try {
+      storage?.setItem(RECENT_KEY, JSON.stringify(names));
+    } catch {
+      // quota or disabled storage: the recent list is a convenience
+    }
+    if (handle) await store.set(`${RECENT_HANDLE_PREFIX}${name}`, handle).catch(() => undefined);
+  }
+
+  const onKeyDown = (event: KeyboardEvent): void => {
+    if (event.defaultPrevented || event.repeat) return;
+    const command = menuCommandForKey(event, isTextField(event.target));
+    if (!command || menuListeners.size === 0) return;
+    event.preventDefault();
+    emitCommand(command);
+  };
+  const onBeforeUnload = (event: BeforeUnloadEvent): void => {
+    if (!dirty) return;
+    event.preventDefault();
+    event.returnValue = '';
+  };
+  const onPageHide = (): void => {
+    // Leaving with nothing unsaved is a clean end: nothing to recover next time.
+    if (!dirty) storage?.removeItem(SESSION_MARKER_KEY);
+  };
+  const hasFiles = (event: DragEvent): boolean => Array.from(event.dataTransfer?.types ?? []).includes('Files');
+  const onDragOver = (event: DragEvent): void => {
+    if (!hasFiles(event)) return;
+    event.preventDefault();
+    if (event.dataTransfer) event.dataTransfer.dropEffect = 'copy';
+  };
+  const onDrop = (event: DragEvent): void => {
+    if (!hasFiles(event)) return;
+    event.preventDefault(); // never let the browser navigate to a dropped file
+    const file = event.dataTransfer?.files[0];
+    if (!file || !/\.(hingeline|json)$/i.test(file.name)) return;
+    void readProjectFile(file).then(
+      (text) => emitFile({ name: file.name, path: null, text }),
+      (error: unknown) => console.warn('[hingeline] dropped file not opened:', error),
+    );
+  };
+  window.addEventListener('keydown', onKeyDown, true);
+  window.addEventListener('beforeunload', onBeforeUnload);
+  window.addEventListener('pagehide', onPageHide);
+  window.addEventListener('dragover', onDragOver);
+  window.addEventListener('drop', onDrop);
+
+  return {
+    kind: 'web',
+    ready,
+
+    async openProject() {
+      const picked = await files.pickProject();
+      if (!picked) return null;
+      await remember(picked.name, picked.handle);
+      return { name: picked.name, path: tokenFor(picked.handle), text: picked.text };
+    },
+
+    async openRecent(path) {
+      const handle = handles.get(path) ?? ((await store.get(`${RECENT_HANDLE_PREFIX}${path}`).catch(() => undefined)) as FileHandleLike | undefined);
+      if (!handle || typeof handle.getFile !== 'function') return null;
+      const picked = await files.reopen(handle);
+      if (!picked) return null;
+      await remember(picked.name, handle);
+      return { name: picked.name, path: tokenFor(handle), text: picked.text };
+    },
+
+    async recentFiles() {
+      return readRecent(storage);
+    },
+
+    async saveProject(text, options) {
+      const existing = !options.saveAs && options.path ? (handles.get(options.path) ?? null) : null;
+      const name = /\.(hingeline|json)$/i.test(options.suggestedName) ? options.suggestedName : `${options.suggestedName}${PROJECT_EXTENSION}`;
+      const saved = await files.saveText(text, name, existing);
+      if (!saved) return null;
+      await remember(saved.name, saved.handle);
+      // The saved file now holds what was autosaved.
+      await ready;
+      await store.delete(AUTOSAVE_KEY).catch(() => undefined);
+      return { name: saved.name, path: tokenFor(saved.handle) };
+    },
+
+    async exportFile(data, options) {
+      const extension = EXPORT_EXTENSIONS[options.mime];
+      if (!extension) throw new Error(`Files of type ${options.mime} cannot be exported.`);
+      const name = options.suggestedName.toLowerCase().endsWith(extension) ? options.suggestedName : `${options.suggestedName}${extension}`;
+      const saved = await files.saveExport(data, name, options.mime);
+      return saved ? { name: saved.name, path: null } : null;
+    },
+
+    async autosave(text) {
+      await ready;
+      await store.set(AUTOSAVE_KEY, { text, savedAt: now().toISOString(), name: title } satisfies AutosaveRecord);
+    },
+
+    async takeRecovery() {
+      await ready;
+      return asAutosaveRecord(await store.get(RECOVERED_KEY));
+    },
+
+    async clearRecovery() {
+      await ready;
+      await store.delete(RECOVERED_KEY);
+    },
+
+    setDocumentState(state) {
+      dirty = state.dirty;
+      title = state.title.slice(0, TITLE_LIMIT);
+      window.document.title = documentTitle({ title, dirty });
+    },
+
+    onMenuCommand(listener) {
+      menuListeners.add(listener);
+      const waiting = pendingCommands.splice(0);
+      if (waiting.length > 0) queueMicrotask(() => waiting.forEach((command) => listener(command)));
+      return () => void menuListeners.delete(listener);
+    },
+
+    onOpenFile(listener) {
+      fileListeners.add(listener);
+      const waiting = pendingFiles.splice(0);
+      if (waiting.length > 0) queueMicrotask(() => waiting.forEach((file) => listener(file)));
+      return () => void fileListeners.delete(listener);
+    },
+
+    dispose() {
+      window.removeEventListener('keydown', onKeyDown, true);
+      window.removeEventListener('beforeunload', onBeforeUnload);
+      window.removeEventListener('pagehide', onPageHide);
+      window.removeEventListener('dragover', onDragOver);
+      window.removeEventListener('drop', onDrop);
+    },
+  };
+}

@@ -76,7 +76,8 @@ export class RecentFiles {
 
   /** Moves `path` (made absolute) to the top of the list and saves it. */
   async add(path: string): Promise<readonly string[]> {
-    const absolute = resolve(path);
+    // Windows paths are absolute on every platform's terms here (tests run on Linux).
+    const absolute = isAbsolutePath(path) ? path : resolve(path);
     this.files = [absolute, ...this.files.filter((known) => !sameFile(known, absolute, this.platform))].slice(0, this.limit);
     await this.save();
     return this.list();

@@ -116,6 +116,8 @@ class Equations {
     hinges: readonly HingeState[],
     free: readonly number[],
     lambdaFree: boolean,
+    secant = false,
+    controlled = -1,
   ): { residual: number[]; jacobian: number[][]; scale: number[] } {
     const beam = this.beam;
     const r = beam.redundants.length;
@@ -139,8 +141,9 @@ class Equations {
         zoneCurvature(zone, M[k + 1]!, scratchB);
         const pa = scratch.value;
         const pb = scratchB.value;
-        const fa = scratch.slope;
-        const fb = scratchB.slope;
+        // Secant flexibility φ/M (bounded, positive on softening curves) for the fallback iteration.
+        const fa = secant && Math.abs(M[k]!) > 1 ? Math.max(pa / M[k]!, 0) || scratch.slope : scratch.slope;
+        const fb = secant && Math.abs(M[k + 1]!) > 1 ? Math.max(pb / M[k + 1]!, 0) || scratchB.slope : scratchB.slope;
         for (let i = 0; i < r; i++) {
           const ma = fields[i]![k]!;
           const mb = fields[i]![k + 1]!;
@@ -179,14 +182,16 @@ class Equations {
           jacobian[i]![r + freeIndex]! += hinge.sign * mi;
         }
       }
-      if (hinge.phase === 'softening' && freeIndex >= 0) {
-        // Moment at the hinge follows the post-peak branch: s·M_c − M(θ/Lp) = 0.
-        const row = r + freeIndex;
+      const isControlled = lambdaFree && index === controlled;
+      if (hinge.phase === 'softening' && (freeIndex >= 0 || isControlled)) {
+        // Moment at the hinge follows the post-peak branch: s·M_c − M(θ/Lp) = 0. The controlled
+        // hinge's equation is the row that determines λ in the mechanism stage.
+        const row = isControlled ? lambdaCol : r + freeIndex;
         interpolateWithSlope(response.softening.plastic, response.softening.moment, theta / hinge.length, scratch);
         residual[row] = mc - scratch.value;
         scale[row] = Math.max(Math.abs(response.peakMoment), 1);
         for (let j = 0; j < r; j++) jacobian[row]![j] = hinge.sign * fields[j]![hinge.station]!;
-        jacobian[row]![row] = -scratch.slope / hinge.length;
+        if (!isControlled) jacobian[row]![row] = -scratch.slope / hinge.length;
         if (lambdaFree) jacobian[row]![lambdaCol] = hinge.sign * pattern[hinge.station]!;
       }
     });
@@ -239,6 +244,7 @@ function newton(
   free: readonly number[],
   lambdaFree: boolean,
   start: { redundants: readonly number[]; lambda: number; rotations: readonly number[] },
+  controlled = -1,
 ): NewtonResult {
   const r = eq.beam.redundants.length;
   let X = [...start.redundants];
@@ -249,7 +255,7 @@ function newton(
   };
   free.forEach((h, i) => apply(h, rot[i]!));
   const norm = (res: number[], scale: number[]) => Math.max(0, ...res.map((v, i) => Math.abs(v) / Math.max(scale[i]!, 1e-300)));
-  let current = eq.evaluate(X, lambda, hinges, free, lambdaFree);
+  let current = eq.evaluate(X, lambda, hinges, free, lambdaFree, false, controlled);
   let currentNorm = norm(current.residual, current.scale);
   const size = current.residual.length;
   if (size === 0) return { converged: true, redundants: X, lambda, rotations: rot, iterations: 0, residualNorm: 0 };
@@ -264,7 +270,7 @@ function newton(
       const rot2 = rot.map((v, i) => Math.max(0, v + factor * step[r + i]!));
       const lambda2 = lambdaFree ? lambda + factor * step[size - 1]! : lambda;
       free.forEach((h, i) => apply(h, rot2[i]!));
-      const trial = eq.evaluate(X2, lambda2, hinges, free, lambdaFree);
+      const trial = eq.evaluate(X2, lambda2, hinges, free, lambdaFree, false, controlled);
       const trialNorm = norm(trial.residual, trial.scale);
       if (trialNorm < currentNorm || trialNorm < 1e-10) {
         X = X2;
@@ -280,6 +286,20 @@ function newton(
     if (!accepted) {
       free.forEach((h, i) => apply(h, rot[i]!));
       break;
+    }
+  }
+  if (currentNorm >= 1e-8 && free.length === 0 && !lambdaFree) {
+    // Fallback: secant-flexibility iterations. Robust where Newton stalls on the steep, kinked
+    // stretches of the curves (load-controlled jumps in curvature at cracking).
+    for (let iteration = 0; iteration < 400 && currentNorm >= 1e-10; iteration++) {
+      const sec = eq.evaluate(X, lambda, hinges, free, lambdaFree, true);
+      const step = solveLinear(sec.jacobian.map((row) => [...row]), sec.residual.map((v) => -v));
+      if (!step) break;
+      const X2 = X.map((v, i) => v + step[i]!);
+      const trial = eq.evaluate(X2, lambda, hinges, free, lambdaFree);
+      X = X2;
+      current = trial;
+      currentNorm = norm(trial.residual, trial.scale);
     }
   }
   return { converged: currentNorm < 1e-8, redundants: X, lambda, rotations: rot, iterations: 60, residualNorm: currentNorm };
@@ -684,7 +704,7 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
     for (let k = 1; k <= steps; k++) {
       const theta = theta0 + ((hc.capacity - theta0) * k) / steps;
       hc.rotation = theta;
-      const res = newton(eq, hinges, free, true, { redundants: X, lambda, rotations: rot });
+      const res = newton(eq, hinges, free, true, { redundants: X, lambda, rotations: rot }, controlled);
       if (!res.converged) {
         converged = false;
         status = `not converged in the mechanism stage at θp = ${(theta * 1000).toFixed(2)} mrad of the hinge at the ${SITE_WORDS[hc.site]}`;

@@ -131,8 +131,18 @@ export function sectionResponse(curve: MomentCurvatureResult): SectionResponse |
   const m0 = envM[0]!;
   const slope0 = envPhi.length > 1 && envM[1]! > envM[0]! ? (envPhi[1]! - envPhi[0]!) / (envM[1]! - envM[0]!) : 0;
   const actualCurvature = (m: number) => (m < m0 ? envPhi[0]! + (m - m0) * slope0 : interpolate(envM, envPhi, m));
-  const my = firstYield && firstYield.curvature <= peak.curvature ? firstYield.moment : null;
-  const phiY = firstYield && firstYield.curvature <= peak.curvature ? firstYield.curvature : null;
+  // First yield as load control sees it: if the curve yields during a drop (the steel yields
+  // while the section recovers its cracking moment), yield is reached on the envelope at the
+  // moment where the envelope catches up. Taking φ′y on the envelope keeps the curvature used
+  // for integration continuous at M′y.
+  let my: number | null = null;
+  let phiY: number | null = null;
+  if (firstYield && firstYield.curvature <= peak.curvature) {
+    let reached = firstYield.moment;
+    for (let i = 0; i < envM.length; i++) if (envPhi[i]! <= firstYield.curvature) reached = Math.max(reached, envM[i]!);
+    my = reached;
+    phiY = actualCurvature(reached);
+  }
   const elastic = (m: number) => (my !== null && phiY !== null ? (phiY * m) / my : actualCurvature(m));
   const integrationCurvature = (m: number) => (my !== null && m > my ? elastic(m) : actualCurvature(m));
   const plasticCurvature = (m: number) => (my !== null && m > my ? Math.max(actualCurvature(m) - elastic(m), 0) : 0);

@@ -5,6 +5,9 @@
  */
 import { checkNumber, InputError, type Diagnostic } from '../diagnostics.ts';
 import type { ConcreteMaterial, SteelMaterial, UniaxialMaterial } from '../materials/types.ts';
+import { combineConcrete } from '../materials/concrete/combine.ts';
+import { linearBrittleTension } from '../materials/concrete/tension.ts';
+import { clipProfile } from './elastic.ts';
 import type { ConfinementInput } from '../materials/specs.ts';
 import type { BarLayer, SectionDefinition } from './definition.ts';
 import { barArea, layerArea } from './definition.ts';
@@ -189,8 +192,9 @@ export function buildSectionModel(definition: SectionDefinition, materials: Mate
             spacing: hoops.spacing,
             coreWidth: x1 - x0,
             coreDepth: y1 - y0,
-            legsX: hoops.horizontalLegs ?? 2,
-            legsY: hoops.verticalLegs,
+            // specs.ts: legsX = legs crossing a cut parallel to x (the vertical legs), legsY = the horizontal legs.
+            legsX: hoops.verticalLegs,
+            legsY: hoops.horizontalLegs ?? 2,
             clearSpacings: clearSpacings(inside, x1 - x0, y1 - y0),
             longitudinalRatio: longitudinal / coreArea,
             hoopRuptureStrain: hoopSteel.ruptureStrain,
@@ -259,7 +263,7 @@ export function buildSectionModel(definition: SectionDefinition, materials: Mate
   }
   if (problems.length > 0) throw new InputError(problems);
 
-  const parts: ConcretePart[] = [];
+  let parts: ConcretePart[] = [];
   if (core && concrete!.core) {
     const coreProfile = rectangleProfile(core.x0, core.x1, core.y0, core.y1);
     parts.push(partOf('cover', 'unconfined cover', subtractProfile(profile, coreProfile), concrete!.cover, false));
@@ -267,6 +271,7 @@ export function buildSectionModel(definition: SectionDefinition, materials: Mate
   } else {
     parts.push(partOf('cover', 'concrete', profile, concrete!.cover, true));
   }
+  if (concrete!.cover.tension.model === 'tension-stiffening') parts = tensionStiffeningBands(parts, elements, height);
   for (const extra of additions.parts ?? []) parts.push(extra);
   for (const extra of additions.elements ?? []) elements.push(extra);
   return {
@@ -283,6 +288,47 @@ export function buildSectionModel(definition: SectionDefinition, materials: Mate
     },
     warnings,
   };
+}
+
+/**
+ * Tension stiffening acts in the concrete around the bars, not over the whole tension zone:
+ * it is limited to the effective tension area of each face that has bars, of depth
+ * hc,ef = min(2.5·(h − d), h/2) (EN 1992-1-1 7.3.2(3), without the (h − x)/3 term, which depends on
+ * the neutral axis). Elsewhere the same concrete cracks brittly (linear to its tensile strength,
+ * then zero). Applying the average-stress law to the whole tension zone would overstate the
+ * cracked stiffness and strength of deep sections (common practice, no source).
+ */
+function tensionStiffeningBands(parts: ConcretePart[], elements: readonly DiscreteElement[], height: number): ConcretePart[] {
+  const bars = elements.filter((e) => e.kind === 'bar');
+  const bottom = bars.filter((e) => e.depth > height / 2);
+  const top = bars.filter((e) => e.depth <= height / 2);
+  const centroid = (list: DiscreteElement[]) => list.reduce((s, e) => s + e.area * e.depth, 0) / list.reduce((s, e) => s + e.area, 0);
+  const topBand = top.length > 0 ? Math.min(2.5 * centroid(top), height / 2) : 0;
+  const bottomBand = bottom.length > 0 ? Math.min(2.5 * (height - centroid(bottom)), height / 2) : 0;
+  const brittle = new Map<ConcreteMaterial, ConcreteMaterial>();
+  const brittleOf = (m: ConcreteMaterial) => {
+    let b = brittle.get(m);
+    if (!b) {
+      b = combineConcrete(m.compression, linearBrittleTension({ tensileStrength: m.tension.tensileStrength, elasticModulus: m.tension.tensileStrength / m.tension.crackingStrain }));
+      brittle.set(m, b);
+    }
+    return b;
+  };
+  const out: ConcretePart[] = [];
+  for (const part of parts) {
+    const bands: [number, number, boolean][] = [
+      [0, topBand, true],
+      [topBand, height - bottomBand, false],
+      [height - bottomBand, height, true],
+    ];
+    for (const [y0, y1, stiffening] of bands) {
+      if (!(y1 > y0)) continue;
+      const strips = clipProfile(part.strips, y0, y1);
+      if (strips.length === 0) continue;
+      out.push(partOf(part.role, stiffening ? `${part.label} (tension-stiffening band)` : part.label, strips, stiffening ? part.material : brittleOf(part.material), part.governsCrushing));
+    }
+  }
+  return out;
 }
 
 export function partOf(role: ConcretePart['role'], label: string, strips: Strip[], material: ConcreteMaterial, governsCrushing: boolean): ConcretePart {

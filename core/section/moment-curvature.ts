@@ -163,12 +163,27 @@ export function momentCurvature(model: SectionModel, direction: BendingDirection
     };
     const root: RootResult = brentRoot(f, a.kappa, b.kappa, g[name](a.eq), g[name](b.eq), { xTolerance: 1e-10 * b.kappa, maxIterations: 100 });
     if (failure) return failure;
-    if (!lastState || lastState.curvature !== sign * root.x) {
-      const s = solve(root.x);
+    let kappa = root.x;
+    if (!lastState || lastState.curvature !== sign * kappa) {
+      const s = solve(kappa);
       if (typeof s === 'string') return s;
       lastState = s;
     }
-    return { kappa: root.x, eq: lastState };
+    if (Math.abs(g[name](lastState)) > 1e-6) {
+      // The event function jumps here (the equilibrium path snaps, e.g. when a flange crushes):
+      // take the last state before the jump, where the event has not yet happened.
+      for (let shrink = 1e-9; shrink < 1e-3; shrink *= 10) {
+        lastGuess = a.eq.referenceStrain; // stay on the branch the curve came along
+        const left = solve(root.x * (1 - shrink));
+        if (typeof left === 'string') return left;
+        if (g[name](left) < 0) {
+          kappa = root.x * (1 - shrink);
+          lastState = left;
+          break;
+        }
+      }
+    }
+    return { kappa, eq: lastState };
   };
 
   // --- march --------------------------------------------------------------------------------------

@@ -1,0 +1,102 @@
+/**
+ * The one entry point used by the worker, the CLI and the tests:
+ * project → section analyses (once per section) → every member → plain results and a summary.
+ * Pure and deterministic. Members are independent: one member's failure never stops the others.
+ */
+import { BugError, InputError } from './diagnostics.ts';
+import { analyzeMember, type MemberContext } from './member/analyze.ts';
+import type { MemberResult } from './member/results.ts';
+import type { Project } from './project/types.ts';
+import { projectMaterials } from './project/resolver.ts';
+import { analyzeSection, type SectionAnalysis } from './section/analyze.ts';
+
+export interface ProjectSummary {
+  readonly memberCount: number;
+  readonly ok: number;
+  readonly checkFails: number;
+  readonly notConverged: number;
+  readonly inputErrors: number;
+  /** One line per member: id, name, status and governing mode. */
+  readonly lines: readonly { readonly memberId: string; readonly memberName: string; readonly status: MemberResult['status']; readonly governingMode: string }[];
+}
+
+export interface ProjectResults {
+  readonly projectName: string;
+  readonly codeBasis: Project['info']['codeBasis'];
+  readonly members: readonly MemberResult[];
+  readonly summary: ProjectSummary;
+}
+
+export type ProgressListener = (done: number, total: number, memberId: string) => void;
+
+/** Section analyses on demand, computed once per section of the project. */
+export function sectionCache(project: Project): (id: string) => SectionAnalysis | undefined {
+  const materials = projectMaterials(project.materials, project.info.codeBasis);
+  const cache = new Map<string, SectionAnalysis>();
+  return (id) => {
+    const cached = cache.get(id);
+    if (cached) return cached;
+    const index = project.sections.findIndex((s) => s.id === id);
+    if (index < 0) return undefined;
+    const def = project.sections[index]!;
+    const analysis = analyzeSection(def, `sections[${index}] "${def.name}"`, materials, {
+      code: project.info.codeBasis,
+      momentDropFraction: project.settings.momentDropFraction,
+      bilinearMethod: project.settings.bilinearMethod,
+    });
+    cache.set(id, analysis);
+    return analysis;
+  };
+}
+
+/**
+ * Analyses the members whose ids are given (all when omitted), in project order.
+ * A defect inside one member's analysis is caught and reported on that member.
+ */
+export function analyzeMembers(project: Project, memberIds?: readonly string[], onProgress?: ProgressListener): MemberResult[] {
+  const section = sectionCache(project);
+  const sectionIds = new Set(project.sections.map((s) => s.id));
+  const wanted = memberIds ? new Set(memberIds) : undefined;
+  const members = project.members.map((m, index) => ({ m, index })).filter(({ m }) => !wanted || wanted.has(m.id));
+  const results: MemberResult[] = [];
+  members.forEach(({ m, index }, k) => {
+    const context: MemberContext = { code: project.info.codeBasis, segments: project.settings.stations, section, sectionIds, path: `members[${index}] "${m.name}"` };
+    let result: MemberResult;
+    try {
+      result = analyzeMember(m, context);
+    } catch (error) {
+      // Keep going with the other members; this member reports what went wrong.
+      const message = error instanceof InputError ? error.message : error instanceof BugError ? `internal error (please report): ${error.message}` : `internal error (please report): ${String(error instanceof Error ? error.message : error)}`;
+      result = {
+        memberId: m.id, memberName: m.name, supports: m.supports, span: Number.isFinite(m.span) ? m.span : 0,
+        status: error instanceof InputError ? 'input-error' : 'not-converged',
+        governingMode: `Not analysed: ${message.split('\n')[0]}`,
+        sections: [], loadDeflection: { pattern: '', controlPosition: 0, points: [], events: [], status: 'not analysed' },
+        ductility: { firstYieldDeflection: null, yieldDeflection: null, ultimateDeflection: null, displacementDuctility: null, hinges: [], failureCause: '' },
+        distributions: [], service: null, strength: null, warnings: [],
+        errors: error instanceof InputError ? error.diagnostics.map((d) => ({ path: d.path, message: d.message })) : [{ path: `members[${index}]`, message }],
+      };
+    }
+    results.push(result);
+    onProgress?.(k + 1, members.length, m.id);
+  });
+  return results;
+}
+
+export function summarize(members: readonly MemberResult[]): ProjectSummary {
+  const count = (s: MemberResult['status']) => members.filter((m) => m.status === s).length;
+  return {
+    memberCount: members.length,
+    ok: count('ok'),
+    checkFails: count('check-fails'),
+    notConverged: count('not-converged'),
+    inputErrors: count('input-error'),
+    lines: members.map((m) => ({ memberId: m.memberId, memberName: m.memberName, status: m.status, governingMode: m.governingMode })),
+  };
+}
+
+/** Analyses the whole project. */
+export function analyzeProject(project: Project, onProgress?: ProgressListener): ProjectResults {
+  const members = analyzeMembers(project, undefined, onProgress);
+  return { projectName: project.info.name, codeBasis: project.info.codeBasis, members, summary: summarize(members) };
+}

@@ -31,6 +31,8 @@ const config: Configuration = {
   // node_modules at run time (main imports only Node built-ins and electron).
   files: ['out/main/**/*', 'out/preload/**/*', 'out/renderer/**/*', 'package.json', '!node_modules/**/*', '!**/*.map'],
   asar: true,
+  // Nothing native is shipped (see `files`), so there is nothing to rebuild for Electron.
+  npmRebuild: false,
   fileAssociations: [projectFile],
   artifactName: '${productName}-${version}-${os}-${arch}.${ext}',
   electronFuses: {
@@ -48,6 +50,9 @@ const config: Configuration = {
     icon: 'build/icons/png',
     category: 'Science',
     executableName: 'hingeline',
+    // deb needs a maintainer with an e-mail address (package.json "author" has none) and a
+    // project homepage (package.json "homepage"), which the project does not have yet.
+    maintainer: 'Hingeline developers <developers@hingeline.invalid>',
     synopsis: 'Reinforced-concrete beam assessment',
     description: 'Moment–curvature, load–deflection, plastic hinge and service-deflection assessment of reinforced-concrete beams.',
     mimeTypes: [projectFile.mimeType],

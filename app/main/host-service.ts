@@ -69,6 +69,8 @@ export function describeFileError(error: unknown): string {
       return 'the disk is read-only';
     case 'EISDIR':
       return 'it is a folder, not a file';
+    case 'ENOTDIR':
+      return 'a part of the path is not a folder';
     case 'EBUSY':
       return 'the file is in use by another program';
     default:

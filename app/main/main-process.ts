@@ -257,6 +257,12 @@ export function startMainProcess(options: MainProcessOptions = {}): Promise<Main
     session.defaultSession.setPermissionCheckHandler(denyPermissionCheck);
     const csp = contentSecurityPolicy({ devServerOrigin: devOrigin });
     protocol.handle(APP_SCHEME, createAppProtocolHandler(join(mainFolder, '../renderer'), csp));
+    if (devOrigin) {
+      // The Vite dev server sends no CSP; add ours so development sees the same restrictions.
+      session.defaultSession.webRequest.onHeadersReceived((details, callback) => {
+        callback({ responseHeaders: { ...details.responseHeaders, 'Content-Security-Policy': [csp] } });
+      });
+    }
 
     const start = await recovery.beginSession();
     if (start.previousSessionCrashed) log('the previous session did not end cleanly');

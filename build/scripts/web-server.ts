@@ -60,7 +60,7 @@ export function createStaticHandler(rootFolder: string, allowedHosts: () => read
     }
     // Look at the raw path too: URL parsing folds `/a/../b` away before we could refuse it.
     const rawPath = (request.url ?? '/').split(/[?#]/)[0] ?? '/';
-    if (/(^|\/)\.\.?(\/|$)|%2e|%2f|%5c/i.test(rawPath)) return send(response, 403, 'Forbidden', csp);
+    if (/(^|\/)\.\.?(\/|$)|\\|%2e|%2f|%5c/i.test(rawPath)) return send(response, 403, 'Forbidden', csp);
     const segments = assetSegments(pathname);
     if (!segments) return send(response, 403, 'Forbidden', csp);
     const file = join(root, ...segments);

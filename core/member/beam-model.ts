@@ -34,6 +34,11 @@ export interface BeamModel {
   readonly x: Float64Array;
   /** Zone index of each segment [x[k], x[k+1]]. */
   readonly segmentZone: Int32Array;
+  /**
+   * Zone whose curve gives the curvature at each station: that of its right-hand segment, or of
+   * its left-hand one when the right-hand segment has zero length (a zone boundary) or at the end.
+   */
+  readonly stationZone: Int32Array;
   readonly zones: readonly ZoneResponse[];
   readonly redundants: readonly ('left' | 'right')[];
   /** Unit moment field of each redundant at every station. */
@@ -75,9 +80,14 @@ export function buildBeamModel(support: SupportType, span: number, zones: readon
     segmentZone[k] = z < 0 ? zones.length - 1 : z;
   }
   void doubledSeen;
+  const stationZone = new Int32Array(x.length);
+  for (let i = 0; i < x.length; i++) {
+    const right = i < x.length - 1 && x[i + 1]! > x[i]! ? i : -1;
+    stationZone[i] = right >= 0 ? segmentZone[right]! : segmentZone[Math.max(i - 1, 0)]!;
+  }
   const redundants = redundantEnds(support);
   const redundantFields = redundants.map((end) => Float64Array.from(x, (xi) => redundantField(end, span, xi)));
-  return { support, span, x, segmentZone, zones, redundants, redundantFields };
+  return { support, span, x, segmentZone, stationZone, zones, redundants, redundantFields };
 }
 
 /** Signed curvature (sagging positive) and flexibility dφ/dM for a signed moment in a zone. */

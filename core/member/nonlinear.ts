@@ -89,9 +89,13 @@ function responseOf(zone: ZoneResponse, sign: 1 | -1): SectionResponse {
 class Equations {
   readonly n: number;
   readonly moment: Float64Array;
+  private readonly phi: Float64Array;
+  private readonly flex: Float64Array;
   constructor(readonly beam: BeamModel, readonly loads: LoadingFields) {
     this.n = beam.x.length;
     this.moment = new Float64Array(this.n);
+    this.phi = new Float64Array(this.n);
+    this.flex = new Float64Array(this.n);
   }
 
   /** Fills moments for redundants X and λ. */
@@ -133,17 +137,22 @@ class Equations {
     const lambdaCol = r + free.length;
     // Distributed curvature: ∫ φ m_i dx and its derivatives (exact for linear φ, m between stations).
     if (r > 0) {
+      // Curvature and flexibility once per station (each station ends one segment and starts the next).
+      const phi = this.phi;
+      const flex = this.flex;
+      for (let i = 0; i < this.n; i++) {
+        zoneCurvature(beam.zones[beam.stationZone[i]!]!, M[i]!, scratch);
+        phi[i] = scratch.value;
+        // Secant flexibility φ/M (bounded, positive on softening curves) for the fallback iteration.
+        flex[i] = secant && Math.abs(M[i]!) > 1 ? Math.max(scratch.value / M[i]!, 0) || scratch.slope : scratch.slope;
+      }
       for (let k = 0; k < this.n - 1; k++) {
         const h = x[k + 1]! - x[k]!;
         if (h <= 0) continue;
-        const zone = beam.zones[beam.segmentZone[k]!]!;
-        zoneCurvature(zone, M[k]!, scratch);
-        zoneCurvature(zone, M[k + 1]!, scratchB);
-        const pa = scratch.value;
-        const pb = scratchB.value;
-        // Secant flexibility φ/M (bounded, positive on softening curves) for the fallback iteration.
-        const fa = secant && Math.abs(M[k]!) > 1 ? Math.max(pa / M[k]!, 0) || scratch.slope : scratch.slope;
-        const fb = secant && Math.abs(M[k + 1]!) > 1 ? Math.max(pb / M[k + 1]!, 0) || scratchB.slope : scratchB.slope;
+        const pa = phi[k]!;
+        const pb = phi[k + 1]!;
+        const fa = flex[k]!;
+        const fb = flex[k + 1]!;
         for (let i = 0; i < r; i++) {
           const ma = fields[i]![k]!;
           const mb = fields[i]![k + 1]!;
@@ -326,10 +335,10 @@ export function deflectionShape(beam: BeamModel, moment: Float64Array, hinges: r
   // v'' = −φ (downward positive deflection under sagging curvature); v(0) = 0, v'(0) = 0 first.
   let slope = 0;
   let jump = 0;
+  let pb = zoneCurvature(beam.zones[beam.stationZone[0]!]!, moment[0]!, scratchB).value;
   for (let k = 0; k < n - 1; k++) {
-    const zone = beam.zones[beam.segmentZone[k]!]!;
-    const pa = zoneCurvature(zone, moment[k]!, scratch).value;
-    const pb = zoneCurvature(zone, moment[k + 1]!, scratchB).value;
+    const pa = pb;
+    pb = zoneCurvature(beam.zones[beam.stationZone[k + 1]!]!, moment[k + 1]!, scratchB).value;
     if (curvatureOut) {
       curvatureOut[k] = pa;
       if (k === n - 2) curvatureOut[k + 1] = pb;
@@ -403,12 +412,21 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
   const solveAt = (lambda: number, guess: Snapshot): Snapshot | undefined => {
     const free = hinges.map((h, i) => (h.phase === 'softening' ? i : -1)).filter((i) => i >= 0);
     const res = newton(eq, hinges, free, false, { redundants: guess.redundants, lambda, rotations: free.map((i) => guess.rotations.get(i) ?? hinges[i]!.rotation) });
+    hingeVersion++; // the solve overwrote the shared moment array and hinge rotations
     if (!res.converged) return undefined;
     const rotations = new Map<number, number>();
     free.forEach((h, i) => rotations.set(h, res.rotations[i]!));
     return { lambda, redundants: res.redundants, rotations };
   };
+  // restore() is called for the same snapshot by several event functions in a row: remember the
+  // last one (invalidated whenever the hinge set or a hinge's phase changes).
+  let restored: Snapshot | undefined;
+  let restoredVersion = -1;
+  let hingeVersion = 0;
   const restore = (s: Snapshot) => {
+    if (s === restored && restoredVersion === hingeVersion) return eq.moment;
+    restored = s;
+    restoredVersion = hingeVersion;
     for (const [i, v] of s.rotations) hinges[i]!.rotation = v;
     eq.moments(s.redundants, s.lambda);
     trackSpanHinges(beam, eq.moment, hinges);
@@ -452,8 +470,11 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
       const m = M[i]!;
       const sg: 1 | -1 = m >= 0 ? 1 : -1;
       if (filter && !filter(i, sg)) continue;
-      for (const z of new Set([beam.segmentZone[Math.max(i - 1, 0)]!, stationZone(i)])) {
-        const threshold = pick(responseOf(beam.zones[z]!, sg));
+      // A station at a zone boundary belongs to both zones: check the weaker.
+      const left = beam.segmentZone[Math.max(i - 1, 0)]!;
+      const right = stationZone(i);
+      for (let pass = 0; pass < (left === right ? 1 : 2); pass++) {
+        const threshold = pick(responseOf(beam.zones[pass === 0 ? right : left]!, sg));
         if (threshold === null || !(threshold > 0)) continue;
         const ratio = (sg * m) / threshold;
         if (ratio > best) {
@@ -466,30 +487,38 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
     return { ratio: best, station: at, sign };
   };
 
-  /** Bisection/secant search of λ in [a, b] where g crosses zero (g(a) < 0 ≤ g(b)). */
+  /**
+   * Load factor in [a, b] where the event function g crosses zero (g(a) < 0 ≤ g(b)), by regula
+   * falsi with the Illinois modification (superlinear, always bracketed). Returns the bracketing
+   * state on the event side.
+   */
   const locate = (a: Snapshot, b: Snapshot, g: (s: Snapshot) => number): Snapshot => {
     let lo = a;
     let hi = b;
     let glo = g(lo);
     let ghi = g(hi);
-    for (let it = 0; it < 40 && hi.lambda - lo.lambda > 1e-10 * Math.max(hi.lambda, 1e-12); it++) {
+    let side = 0;
+    for (let it = 0; it < 60 && hi.lambda - lo.lambda > 1e-6 * Math.max(hi.lambda, 1e-12); it++) {
       let t = glo < 0 && ghi > 0 ? -glo / (ghi - glo) : 0.5;
-      t = Math.min(Math.max(t, 0.1), 0.9);
+      if (!(t > 0.001 && t < 0.999)) t = 0.5;
       const lambda = lo.lambda + t * (hi.lambda - lo.lambda);
       const s = solveAt(lambda, lo);
-      if (!s) {
-        hi = { ...hi };
-        break;
-      }
+      if (!s) break;
       const gs = g(s);
       if (gs >= 0) {
         hi = s;
         ghi = gs;
+        if (side === 1) glo /= 2;
+        side = 1;
       } else {
         lo = s;
         glo = gs;
+        if (side === -1) ghi /= 2;
+        side = -1;
       }
-      if (Math.abs(gs) < 1e-9) return s;
+      // Ratios to 1e-5: thresholds are known to 5 figures at best, and flat stretches (a section on
+      // its cracking jump) would otherwise make the search crawl.
+      if (gs >= 0 && gs < 1e-5) return s;
     }
     return hi;
   };
@@ -545,10 +574,18 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
     };
     return maxRatio(s, (resp) => resp.firstYieldMoment, filter);
   };
+  const spacing = span / Math.max(n - 1, 1);
   const overstress = (s: Snapshot) => {
-    // Stations that are not a hinge's critical section, past their section's peak moment.
-    const hingeStations = new Set(hinges.map((h) => h.station));
-    return maxRatio(s, (resp) => resp.peakMoment, (i) => !hingeStations.has(i));
+    // Stations outside every plastic hinge zone, past their section's peak moment. Sections
+    // within a hinge's length belong to the hinge (its moment governs them), so they are excluded.
+    restore(s);
+    const zones = hinges.map((h) => {
+      const half = Math.max(h.length / 2, 1.01 * spacing);
+      if (h.site === 'left') return [0, Math.max(h.length, 1.01 * spacing)] as const;
+      if (h.site === 'right') return [span - Math.max(h.length, 1.01 * spacing), span] as const;
+      return [beam.x[h.station]! - half, beam.x[h.station]! + half] as const;
+    });
+    return maxRatio(s, (resp) => resp.peakMoment, (i) => !zones.some(([a, b]) => beam.x[i]! >= a && beam.x[i]! <= b));
   };
 
   const activate = (site: HingeSite, s: Snapshot) => {
@@ -586,6 +623,7 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
     const length = Math.max(hl.length, 1);
     const rotationPosition = site === 'left' ? Math.min(length / 2, span / 2) : site === 'right' ? Math.max(span - length / 2, span / 2) : beam.x[station]!;
     const ultimatePlastic = response.softening.plastic[response.softening.plastic.length - 1]!;
+    hingeVersion++;
     hinges.push({
       site,
       sign,
@@ -634,6 +672,7 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
     } else if (ev.kind === 'peak') {
       const h = hinges[ev.hinge!]!;
       h.phase = 'softening';
+      hingeVersion++;
       state.rotations.set(ev.hinge!, h.rotation);
       events.push({ kind: 'hinge', loadFactor: state.lambda, deflection: d, position: beam.x[h.station]!, description: `hinge at the ${SITE_WORDS[h.site]} reaches the peak moment of its section (θp = ${(h.rotation * 1000).toFixed(2)} mrad)` });
       if (hinges.filter((x) => x.phase === 'softening').length > r) mechanism = true;
@@ -644,6 +683,7 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
   };
   let step = lambdaRef / 40;
   let guard = 0;
+  let previousState: Snapshot | undefined;
   while (!mechanism && !finished && guard++ < 4000) {
     // Events already reached at the current state (e.g. both supports of a symmetric beam yield together).
     const due = candidates().find((ev) => ev.g(state) >= 0);
@@ -652,7 +692,13 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
       continue;
     }
     const target = state.lambda + step;
-    const next = solveAt(target, state);
+    // Predictor: extrapolate the redundants along the last step (one or two Newton iterations fewer).
+    let guess: Snapshot = state;
+    if (previousState && state.lambda > previousState.lambda) {
+      const t = (target - state.lambda) / (state.lambda - previousState.lambda);
+      guess = { ...state, redundants: state.redundants.map((v, i) => v + t * (v - previousState!.redundants[i]!)) };
+    }
+    const next = solveAt(target, guess) ?? (guess === state ? undefined : solveAt(target, state));
     if (!next) {
       if (step > lambdaRef * 1e-6) {
         step /= 4;
@@ -673,11 +719,13 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
       }
     }
     if (!earliest) {
+      previousState = state;
       state = next;
       record(state, 'integration');
       step = Math.min(step * 1.25, lambdaRef / 25);
       continue;
     }
+    previousState = undefined;
     state = earliest.at;
     record(state, 'integration');
     handle(earliest.ev);
@@ -704,6 +752,7 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
     for (let k = 1; k <= steps; k++) {
       const theta = theta0 + ((hc.capacity - theta0) * k) / steps;
       hc.rotation = theta;
+      hingeVersion++;
       const res = newton(eq, hinges, free, true, { redundants: X, lambda, rotations: rot }, controlled);
       if (!res.converged) {
         converged = false;

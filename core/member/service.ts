@@ -124,13 +124,10 @@ export function serviceDeflections(input: ServiceInput): ServiceOutcome {
   const warnings: string[] = [];
   const { support, span, segments, extraPoints, settings } = input;
   const psi = settings.sustainedLiveFraction;
-  const makeBeam = (zones: ZoneResponse[]) => buildBeamModel(support, span, zones, extraPoints, segments);
 
-  // (a) integration, short term and sustained.
-  const shortBeam = makeBeam(input.zones.map((z) => z.shortTerm));
-  const longBeam = makeBeam(input.zones.map((z) => z.longTerm));
-  const deadField = field(shortBeam, input.dead);
-  const liveField = field(shortBeam, input.live);
+  // (a) integration, short term and sustained. Station spacing is refined until doubling the
+  // number of segments changes no deflection by more than 0.05 % (brittle cracking makes the
+  // cracked length near supports sensitive to it), up to 16× the base count.
   const solve = (beam: BeamModel, f: Float64Array, label: string) => {
     const s = solveStatic(beam, f);
     if (!s.converged) warnings.push(`Service deflection (${label}) did not converge: the value shown is the last iterate.`);
@@ -138,10 +135,32 @@ export function serviceDeflections(input: ServiceInput): ServiceOutcome {
     else if (s.yieldRatio > 1) warnings.push(`Under ${label} the reinforcement yields: the member is not in a service state.`);
     return s;
   };
-  const dead = solve(shortBeam, deadField, 'dead load');
-  const total = solve(shortBeam, combine(deadField, liveField, 1), 'dead + live load');
-  const sustained = solve(shortBeam, combine(deadField, liveField, psi), 'sustained load');
-  const sustainedLong = solve(longBeam, combine(deadField, liveField, psi), 'sustained load, long term');
+  const integrateAt = (count: number) => {
+    const shortBeam = buildBeamModel(support, span, input.zones.map((z) => z.shortTerm), extraPoints, count);
+    const longBeam = buildBeamModel(support, span, input.zones.map((z) => z.longTerm), extraPoints, count);
+    const deadField = field(shortBeam, input.dead);
+    const liveField = field(shortBeam, input.live);
+    return {
+      shortBeam,
+      dead: solve(shortBeam, deadField, 'dead load'),
+      total: solve(shortBeam, combine(deadField, liveField, 1), 'dead + live load'),
+      sustained: solve(shortBeam, combine(deadField, liveField, psi), 'sustained load'),
+      sustainedLong: solve(longBeam, combine(deadField, liveField, psi), 'sustained load, long term'),
+    };
+  };
+  const values = (r: ReturnType<typeof integrateAt>) => [r.dead, r.total, r.sustained, r.sustainedLong].map(maxDeflection);
+  let count = segments;
+  let run = integrateAt(count);
+  for (let refinements = 0; refinements < 4; refinements++) {
+    const finer = integrateAt(count * 2);
+    const a = values(run);
+    const b = values(finer);
+    const scale = Math.max(...b.map(Math.abs), 1e-9);
+    run = finer;
+    count *= 2;
+    if (a.every((v, i) => Math.abs(v - b[i]!) <= 5e-4 * Math.max(Math.abs(b[i]!), 0.01 * scale))) break;
+  }
+  const { shortBeam, dead, total, sustained, sustainedLong } = run;
   const integration = {
     dead: maxDeflection(dead),
     deadPlusLive: maxDeflection(total),
@@ -161,7 +180,7 @@ export function serviceDeflections(input: ServiceInput): ServiceOutcome {
   let notes: string;
   let legacy: { dead: number; deadPlusLive: number; live: number } | null = null;
   if (input.code === 'ACI 318-19') {
-    const aci = aciMethod(input, shortBeam, deadField, liveField);
+    const aci = aciMethod(input);
     code = aci.immediate;
     effectiveInertia = aci.inertia;
     legacy = aci.branson;
@@ -247,7 +266,7 @@ function checkQuantity(
 }
 
 /** ACI 318-19: one Ie for the member from its critical section(s), elastic deflection with Ec·Ie. */
-function aciMethod(input: ServiceInput, beam: BeamModel, deadField: Float64Array, liveField: Float64Array) {
+function aciMethod(input: ServiceInput) {
   const psi = input.settings.sustainedLiveFraction;
   const props = input.zones.map((z) => elasticProperties(z.model, { concreteModulus: z.codeModulus, tensileStrength: z.codeTensileStrength }));
   // Moment distribution from an uncracked elastic analysis (gross stiffness per zone).
@@ -296,6 +315,8 @@ function aciMethod(input: ServiceInput, beam: BeamModel, deadField: Float64Array
     const b = buildBeamModel(input.support, input.span, input.zones.map((z) => codeZone(z, lin, lin)), input.extraPoints, input.segments);
     return maxDeflection(solveStatic(b, f));
   };
+  const deadField = field(elasticBeam, input.dead);
+  const liveField = field(elasticBeam, input.live);
   const fD = deadField;
   const fDL = combine(deadField, liveField, 1);
   const fS = combine(deadField, liveField, psi);

@@ -9,6 +9,10 @@ export const GAUSS_4_WEIGHTS: readonly number[] = [
   0.3478548451374538, 0.6521451548625461, 0.6521451548625461, 0.3478548451374538,
 ];
 
+/** 3-point Gauss–Legendre (exact for polynomials up to degree 5). @see Abramowitz & Stegun (1964), Table 25.4. */
+export const GAUSS_3_NODES: readonly number[] = [-0.7745966692414834, 0, 0.7745966692414834];
+export const GAUSS_3_WEIGHTS: readonly number[] = [0.5555555555555556, 0.8888888888888888, 0.5555555555555556];
+
 /**
  * Maximises a unimodal function on [a, b] by golden-section search.
  * @returns the abscissa and value of the maximum found, to within `xTolerance`.

@@ -5,6 +5,7 @@
 import type { SectionModel, BendingDirection } from './model.ts';
 import type { CurvePoint, SectionState, ElementState, ConcreteProfileSample } from './results.ts';
 import { stripWidthAt } from './width-profile.ts';
+import { sectionResultants } from './forces.ts';
 
 /** Faces of the section for a bending direction: depths (mm) of the extreme compression and tension fibres. */
 export function faces(model: SectionModel, direction: BendingDirection): { compression: number; tension: number } {
@@ -77,46 +78,16 @@ export function sectionState(model: SectionModel, direction: BendingDirection, p
       }),
     };
   });
-  let compression = 0;
-  let tension = 0;
-  let compressionMoment = 0;
-  let tensionMoment = 0;
   const elements: ElementState[] = model.elements.map((e) => {
     const strain = strainAtDepth(model, eps0, phi, e.depth) - e.initialStrain;
     const stress = e.material.stress(strain);
     const force = stress * e.area;
     return { kind: e.kind, label: e.label, depth: e.depth, area: e.area, strain, stress, force };
   });
-  // Resultants: integrate concrete with the same splitting as the force routine, via samples of
-  // the element forces plus a fine midpoint sum of concrete (for the lever arm only; the moment
-  // itself comes from the exact integration).
-  for (const part of model.concreteParts) {
-    for (const s of part.strips) {
-      const n = 40;
-      const dy = (s.bottom - s.top) / n;
-      for (let i = 0; i < n; i++) {
-        const y = s.top + (i + 0.5) * dy;
-        const f = part.material.stress(strainAtDepth(model, eps0, phi, y)) * stripWidthAt(s, y) * dy;
-        if (f > 0) {
-          compression += f;
-          compressionMoment += f * y;
-        } else {
-          tension -= f;
-          tensionMoment -= f * y;
-        }
-      }
-    }
-  }
-  for (const e of elements) {
-    if (e.force > 0) {
-      compression += e.force;
-      compressionMoment += e.force * e.depth;
-    } else {
-      tension -= e.force;
-      tensionMoment -= e.force * e.depth;
-    }
-  }
-  const leverArm = compression > 0 && tension > 0 ? Math.abs(tensionMoment / tension - compressionMoment / compression) : null;
+  const r = sectionResultants(model, eps0, phi);
+  const compression = r.compression;
+  const tension = r.tension;
+  const leverArm = compression > 0 && tension > 0 ? Math.abs(r.tensionDepth - r.compressionDepth) : null;
   return {
     direction,
     point,

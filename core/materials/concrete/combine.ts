@@ -28,7 +28,7 @@ export function combineConcrete(compression: CompressionLaw, tension: TensionLaw
     crackingStrain: tension.crackingStrain,
     confined: compression.confined,
     stress(strain: number): number {
-      assertStrainIsNumber(strain, model);
+      if (strain !== strain) assertStrainIsNumber(strain, model); // inline NaN test: this is the hot path
       if (strain >= 0) return compression.stress(strain);
       const tensile = tension.stress(-strain);
       return tensile === 0 ? 0 : -tensile;

@@ -37,7 +37,7 @@ export function compressionLaw(definition: CompressionCurve): CompressionLaw {
     crushingStrain: definition.crushingStrain,
     confined: definition.confined,
     stress(strain: number): number {
-      assertStrainIsNumber(strain, model);
+      if (strain !== strain) assertStrainIsNumber(strain, model); // inline NaN test: this is the hot path
       if (strain <= 0 || strain > endStrain) return 0;
       const stress = curve(strain);
       if (!Number.isFinite(stress)) throw new BugError(`${model}: stress at strain ${strain} is not finite`);

@@ -33,7 +33,7 @@ function tensionLaw(
     crackingStrain,
     breakpoints,
     stress(strain: number): number {
-      assertStrainIsNumber(strain, model);
+      if (strain !== strain) assertStrainIsNumber(strain, model); // inline NaN test: this is the hot path
       if (strain <= 0) return 0;
       const stress = branch(strain);
       if (!Number.isFinite(stress)) throw new BugError(`${model}: tensile stress at strain ${strain} is not finite`);

@@ -53,7 +53,7 @@ export function linearFrp(p: LinearFrpParameters): FrpMaterial {
     initialModulus: p.tensileModulus,
     breakpoints: [-ruptureStrain, 0],
     stress(strain: number): number {
-      assertStrainIsNumber(strain, model);
+      if (strain !== strain) assertStrainIsNumber(strain, model); // inline NaN test: this is the hot path
       if (strain >= 0 || strain < -ruptureStrain) return 0;
       const stress = p.tensileModulus * strain;
       if (!Number.isFinite(stress)) throw new BugError(`${model}: stress at strain ${strain} is not finite`);

@@ -49,7 +49,7 @@ export function symmetricSteel(curve: SteelCurve): SteelMaterial {
     initialModulus: curve.elasticModulus,
     breakpoints: sortedBreakpoints([...positive.map((s) => -s), ...positive]),
     stress(strain: number): number {
-      assertStrainIsNumber(strain, model);
+      if (strain !== strain) assertStrainIsNumber(strain, model); // inline NaN test: this is the hot path
       const magnitude = Math.abs(strain);
       if (magnitude > curve.ruptureStrain) return 0;
       if (magnitude <= yieldStrain) return strain === 0 ? 0 : curve.elasticModulus * strain;

@@ -31,6 +31,8 @@ export interface OpenedFile {
  * `undo`/`redo` arrive even while a text field has focus (Electron menu accelerators fire first);
  * the receiver should let the focused field undo its own text in that case
  * (e.g. `document.execCommand('undo')`). The browser host leaves Ctrl+Z/Y in text fields alone.
+ * `about` is never sent by the desktop menu, which shows the native About box (version and the
+ * results caution) itself; the browser has no menu, so the renderer offers its own About.
  */
 export type MenuCommand =
   | 'new'

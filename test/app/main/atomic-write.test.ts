@@ -12,10 +12,13 @@ const childScript = fileURLToPath(new URL('../fixtures/atomic-write-child.ts', i
 const MiB = 1024 * 1024;
 
 let folder: string;
+const children: ChildProcess[] = [];
 beforeEach(async () => {
   folder = await mkdtemp(join(tmpdir(), 'hingeline-atomic-'));
 });
 afterEach(async () => {
+  // A failed assertion must not leave a paused writer behind.
+  for (const child of children.splice(0)) if (child.exitCode === null && child.signalCode === null) child.kill('SIGKILL');
   await rm(folder, { recursive: true, force: true });
 });
 
@@ -37,6 +40,7 @@ async function startWriterAndPause(target: string, stage: string, bytes: number)
     cwd: repoRoot,
     stdio: ['ignore', 'pipe', 'pipe'],
   });
+  children.push(child);
   let stderr = '';
   child.stderr?.on('data', (chunk: Buffer) => (stderr += chunk.toString()));
   const paused = await new Promise<Paused>((resolve, reject) => {

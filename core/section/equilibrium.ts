@@ -33,7 +33,7 @@ export function forceTolerance(model: SectionModel): number {
   return Math.max(1e-9 * squash, 1e-9);
 }
 
-const scratch: SectionForces = { axial: 0, moment: 0 };
+const scratch: SectionForces = { axial: 0, moment: 0, magnitude: 0 };
 
 /** Axial stiffness dN/dε0 (N) carried from one solution to the next; updated in place. */
 export interface SlopeHint {
@@ -47,9 +47,14 @@ export interface SlopeHint {
 export function solveEquilibrium(model: SectionModel, curvature: number, guess: number, tolerance = forceTolerance(model), hint?: SlopeHint): EquilibriumOutcome {
   const applied = model.axialForce;
   let lastMoment = 0;
+  // A strain state in which the section carries nothing (all cracked, crushed or ruptured) satisfies
+  // N = 0 trivially; it is not an equilibrium of the member, so it counts as "no value" (NaN) and
+  // the searches steer away from it.
+  const dead = tolerance * 1e-3;
   const f = (eps0: number) => {
     const forces = sectionForces(model, eps0, curvature, scratch);
     lastMoment = forces.moment;
+    if (curvature !== 0 && forces.magnitude <= dead) return NaN;
     return forces.axial - applied;
   };
   // Fast path: secant iterations from the guess, started with the axial stiffness dN/dε0 of the
@@ -66,6 +71,8 @@ export function solveEquilibrium(model: SectionModel, curvature: number, guess: 
         return { ok: true, state: { curvature, referenceStrain: x0, moment: lastMoment, residual: f0 } };
       }
       const x1 = x0 - f0 / slope;
+      // A huge step means a flat stretch of N(ε0): leave it to the bracketed search.
+      if (Math.abs(x1 - x0) > 2e-3) break;
       const f1 = f(x1);
       if (!Number.isFinite(f1)) break;
       const secant = (f1 - f0) / (x1 - x0);

@@ -17,6 +17,11 @@ import type { SectionModel } from './model.ts';
 export interface SectionForces {
   /** Axial force, N, compression positive. */
   axial: number;
+  /**
+   * Sum of the magnitudes of all forces, N. Zero means the section carries nothing at this strain
+   * state (everything cracked, crushed or ruptured) — a spurious "equilibrium" to be rejected.
+   */
+  magnitude: number;
   /** Moment about the gross centroid, N·mm, sagging positive. */
   moment: number;
 }
@@ -25,6 +30,21 @@ const splitDepths = new Float64Array(64);
 // Local copies: reading imported bindings inside the hot loop is slower under some module loaders.
 const NODES = Float64Array.from(GAUSS_3_NODES);
 const WEIGHTS = Float64Array.from(GAUSS_3_WEIGHTS);
+
+const splitCache = new WeakMap<object, readonly number[]>();
+
+/**
+ * The material's breakpoints with zero strain added: every concrete law has a kink at zero (the
+ * tension branch meets the compression branch), whether or not the law lists it.
+ */
+function splitStrains(material: { breakpoints: readonly number[] }): readonly number[] {
+  let list = splitCache.get(material);
+  if (!list) {
+    list = [...new Set([...material.breakpoints, 0])].sort((a, b) => a - b);
+    splitCache.set(material, list);
+  }
+  return list;
+}
 
 interface ZeroRange {
   /** Strain at or below which the stress is zero (cracked concrete), or −Infinity. */
@@ -103,7 +123,7 @@ function forEachConcretePoint(model: SectionModel, eps0: number, phi: number, vi
   const yg = model.centroidDepth;
   for (const part of model.concreteParts) {
     const material = part.material;
-    const breakpoints = material.breakpoints;
+    const breakpoints = splitStrains(material);
     for (const strip of part.strips) {
       const depths: number[] = [strip.top];
       if (phi !== 0) {
@@ -132,13 +152,14 @@ function forEachConcretePoint(model: SectionModel, eps0: number, phi: number, vi
   }
 }
 
-export function sectionForces(model: SectionModel, eps0: number, phi: number, out: SectionForces = { axial: 0, moment: 0 }): SectionForces {
+export function sectionForces(model: SectionModel, eps0: number, phi: number, out: SectionForces = { axial: 0, moment: 0, magnitude: 0 }): SectionForces {
   const yg = model.centroidDepth;
   let axial = 0;
   let moment = 0;
+  let magnitude = 0;
   for (const part of model.concreteParts) {
     const material = part.material;
-    const breakpoints = material.breakpoints;
+    const breakpoints = splitStrains(material);
     const zero = zeroRangeOf(material);
     for (const strip of part.strips) {
       const yTop = strip.top;
@@ -184,6 +205,7 @@ export function sectionForces(model: SectionModel, eps0: number, phi: number, ou
           const width = strip.widthTop + slope * (y - yTop);
           const force = material.stress(eps0 + phi * (yg - y)) * width * half * WEIGHTS[g]!;
           axial += force;
+          magnitude += force < 0 ? -force : force;
           moment += force * (yg - y);
         }
       }
@@ -197,9 +219,11 @@ export function sectionForces(model: SectionModel, eps0: number, phi: number, ou
     if (element.displacedConcrete && eps > 0) stress -= element.displacedConcrete.stress(eps);
     const force = stress * element.area;
     axial += force;
+    magnitude += force < 0 ? -force : force;
     moment += force * (yg - element.depth);
   }
   out.axial = axial;
+  out.magnitude = magnitude;
   out.moment = moment;
   return out;
 }

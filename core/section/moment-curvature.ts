@@ -46,6 +46,8 @@ export const NOMINAL_STEEL_STRAIN = 0.015;
 interface Snapshot {
   readonly kappa: number;
   readonly eq: EquilibriumState;
+  /** Set by `locate` when the event function jumped there (the equilibrium path snapped). */
+  readonly jumped?: boolean;
 }
 
 type EventName = 'cracking' | 'firstYield' | 'codeCrushing' | 'nominal' | 'crushing' | 'elementLimit' | 'momentDrop';
@@ -155,8 +157,15 @@ export function momentCurvature(model: SectionModel, direction: BendingDirection
   const locate = (name: EventName, a: Snapshot, b: Snapshot): Snapshot | string => {
     let failure: string | undefined;
     let lastState: EquilibriumState | undefined;
+    // Follow the branch the curve came along: extrapolate the centroid strain from `a` with the
+    // slope of the last converged steps (the state at `b` may lie on another branch after a snap).
+    const index = snapshots.lastIndexOf(a);
+    const before = index > 0 ? snapshots[index - 1]! : undefined;
+    const slope = before && a.kappa > before.kappa
+      ? (a.eq.referenceStrain - before.eq.referenceStrain) / (a.kappa - before.kappa)
+      : (b.eq.referenceStrain - a.eq.referenceStrain) / (b.kappa - a.kappa);
     const f = (kappa: number) => {
-      lastGuess = a.eq.referenceStrain + ((b.eq.referenceStrain - a.eq.referenceStrain) * (kappa - a.kappa)) / (b.kappa - a.kappa);
+      lastGuess = a.eq.referenceStrain + slope * (kappa - a.kappa);
       const s = solve(kappa);
       if (typeof s === 'string') {
         failure = s;
@@ -174,7 +183,9 @@ export function momentCurvature(model: SectionModel, direction: BendingDirection
       if (typeof s === 'string') return s;
       lastState = s;
     }
+    let jumped = false;
     if (Math.abs(g[name](lastState)) > 1e-6) {
+      jumped = true;
       // The event function jumps here (the equilibrium path snaps, e.g. when a flange crushes):
       // take the last state before the jump, where the event has not yet happened.
       for (let shrink = 1e-9; shrink < 1e-3; shrink *= 10) {
@@ -188,7 +199,7 @@ export function momentCurvature(model: SectionModel, direction: BendingDirection
         }
       }
     }
-    return { kappa, eq: lastState };
+    return { kappa, eq: lastState, jumped };
   };
 
   // --- march --------------------------------------------------------------------------------------
@@ -224,24 +235,70 @@ export function momentCurvature(model: SectionModel, direction: BendingDirection
     if (before && previous.kappa > before.kappa) {
       lastGuess = previous.eq.referenceStrain + ((previous.eq.referenceStrain - before.eq.referenceStrain) * (kappa - previous.kappa)) / (previous.kappa - before.kappa);
     }
-    const eq = solve(kappa);
+    let eq = solve(kappa);
+    let stepKappa = kappa;
+    let forcedLimit: EventName | undefined;
     if (typeof eq === 'string') {
-      status = { kind: 'not-converged', atCurvature: kappa, message: `Analysis stopped at φ = ${kappa.toExponential(3)} 1/mm: ${eq}. The curve ends at the last converged point.` };
-      break;
+      // No equilibrium at the full step: halve it until one exists. Equilibrium is commonly lost
+      // right at a limit state (a bar ruptures and nothing balances the compression), so before
+      // calling it non-convergence, see whether the last reachable state sits on a limit.
+      let lo = previous.kappa;
+      let hi = kappa;
+      let best: EquilibriumState | undefined;
+      let reason = eq;
+      for (let halving = 0; halving < 40; halving++) {
+        const mid = 0.5 * (lo + hi);
+        lastGuess = (best ?? previous.eq).referenceStrain;
+        const s = solve(mid);
+        if (typeof s === 'string') {
+          hi = mid;
+          reason = s;
+        } else {
+          lo = mid;
+          best = s;
+        }
+        if (hi - lo <= 1e-9 * hi) break;
+      }
+      const atLimit = best ? ULTIMATE_EVENTS.find((n) => enabled[n] && n !== 'momentDrop' && g[n](best!) > -1e-6) : undefined;
+      if (!best || !atLimit) {
+        status = { kind: 'not-converged', atCurvature: hi, message: `Analysis stopped at φ = ${hi.toExponential(3)} 1/mm: ${reason}. The curve ends at the last converged point.` };
+        break;
+      }
+      // Reaching the limit exactly: let the event logic below record it at this state.
+      eq = best;
+      stepKappa = lo;
+      forcedLimit = atLimit;
     }
-    const current: Snapshot = { kappa, eq };
+    const current: Snapshot = { kappa: stepKappa, eq };
     const currentG = evaluateAll(eq);
 
     // Ultimate events inside this step: take the earliest.
-    let ultimate: { name: EventName; snap: Snapshot } | undefined;
-    for (const n of ULTIMATE_EVENTS) {
+    let ultimate: { name: EventName; snap: Snapshot } | undefined = forcedLimit ? { name: forcedLimit, snap: current } : undefined;
+    for (const n of forcedLimit ? [] : ULTIMATE_EVENTS) {
       if (!enabled[n] || !(previousG[n] < 0 && currentG[n] >= 0)) continue;
       const located = locate(n, previous, current);
       if (typeof located === 'string') {
         status = { kind: 'not-converged', atCurvature: kappa, message: `Could not locate the limit state between φ = ${previous.kappa.toExponential(3)} and ${kappa.toExponential(3)} 1/mm: ${located}` };
         break;
       }
-      if (!ultimate || located.kappa < ultimate.snap.kappa) ultimate = { name: n, snap: located };
+      // Earliest wins; when a physical limit and the moment-drop rule coincide (a bar ruptures and the
+      // moment falls with it), the physical limit is the cause.
+      // At a snap of the equilibrium path several event functions jump together; the cause is the
+      // physical limit the state before the snap is closest to (e.g. the core about to crush).
+      let name: EventName = n;
+      if (located.jumped) {
+        let closest = -Infinity;
+        for (const m of ULTIMATE_EVENTS) {
+          if (!enabled[m] || m === 'momentDrop') continue;
+          const value = g[m](located.eq);
+          if (value > closest && value > -0.02) {
+            closest = value;
+            name = m;
+          }
+        }
+      }
+      const coincide = ultimate && Math.abs(located.kappa - ultimate.snap.kappa) <= 1e-6 * located.kappa;
+      if (!ultimate || (coincide ? ultimate.name === 'momentDrop' && name !== 'momentDrop' : located.kappa < ultimate.snap.kappa)) ultimate = { name, snap: located };
     }
     if (status) break;
     const end = ultimate ? ultimate.snap.kappa : kappa;

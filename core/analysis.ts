@@ -6,6 +6,7 @@
 import { BugError, InputError } from './diagnostics.ts';
 import { analyzeMember, type MemberContext } from './member/analyze.ts';
 import type { MemberResult } from './member/results.ts';
+import type { MemberDefinition } from './member/definition.ts';
 import type { Project } from './project/types.ts';
 import { projectMaterials } from './project/resolver.ts';
 import { analyzeSection, type SectionAnalysis } from './section/analyze.ts';
@@ -59,11 +60,23 @@ export function analyzeMembers(project: Project, memberIds?: readonly string[], 
   const wanted = memberIds ? new Set(memberIds) : undefined;
   const members = project.members.map((m, index) => ({ m, index })).filter(({ m }) => !wanted || wanted.has(m.id));
   const results: MemberResult[] = [];
+  // Members that differ only in id, name and notes (typical bays repeat many times) give the same
+  // numbers: analyse each distinct definition once.
+  const byContent = new Map<string, MemberResult>();
   members.forEach(({ m, index }, k) => {
     const context: MemberContext = { code: project.info.codeBasis, segments: project.settings.stations, section, sectionIds, path: `members[${index}] "${m.name}"` };
     let result: MemberResult;
+    const key = contentKey(m);
+    const twin = byContent.get(key);
     try {
+      if (twin && twin.status !== 'input-error') {
+        result = { ...twin, memberId: m.id, memberName: m.name };
+        results.push(result);
+        onProgress?.(k + 1, members.length, m.id);
+        return;
+      }
       result = analyzeMember(m, context);
+      byContent.set(key, result);
     } catch (error) {
       // Keep going with the other members; this member reports what went wrong.
       const message = error instanceof InputError ? error.message : error instanceof BugError ? `internal error (please report): ${error.message}` : `internal error (please report): ${String(error instanceof Error ? error.message : error)}`;
@@ -81,6 +94,12 @@ export function analyzeMembers(project: Project, memberIds?: readonly string[], 
     onProgress?.(k + 1, members.length, m.id);
   });
   return results;
+}
+
+/** The parts of a member definition that determine its results (all but id, name and notes). */
+function contentKey(member: MemberDefinition): string {
+  const { id: _id, name: _name, notes: _notes, ...rest } = member;
+  return JSON.stringify(rest);
 }
 
 export function summarize(members: readonly MemberResult[]): ProjectSummary {

@@ -10,7 +10,7 @@ import type { CodeBasis } from '../materials/specs.ts';
 import type { SectionAnalysis } from '../section/analyze.ts';
 import { buildBeamModel, type BeamModel, type ZoneResponse } from './beam-model.ts';
 import type { LoadFactors, MemberDefinition, MemberLoad } from './definition.ts';
-import { capacityCurve, solveStatic, type LoadingFields } from './nonlinear.ts';
+import { capacityCurve, peakDeflectionPosition, solveStatic, type LoadingFields } from './nonlinear.ts';
 import type { MemberResult, SectionResult } from './results.ts';
 import { serviceDeflections, type ServiceZone } from './service.ts';
 import { releasedMoment, toStaticLoad, totalLoad, type StaticLoad } from './statics.ts';
@@ -120,11 +120,21 @@ export function analyzeMember(member: MemberDefinition, context: MemberContext):
     const s = analyses[i]!;
     return zoneResponse(z.sectionId, z.from, z.to, s.model!, s.elastic!, s.curves);
   });
-  const beam = buildBeamModel(member.supports, span, responses, extraPoints, context.segments);
   const fieldOf = (b: BeamModel, loads: readonly StaticLoad[]) => Float64Array.from(b.x, (x) => releasedMoment(b.support, span, loads, x));
   const proportional = member.capacity.pattern === 'proportional';
   const patternLoads = proportional ? [...deadLoads, ...liveLoads] : liveLoads;
   const constantLoads = proportional ? [] : deadLoads;
+  // Control point of the load–deflection curve: where the elastic deflection under the pattern
+  // peaks, found on a fine elastic model and made a station of the analysis model.
+  const elasticResponses: ZoneResponse[] = member.zones.map((z, i) => {
+    const s = analyses[i]!;
+    const lin = plainConcreteResponse(s.codeModulus * s.elastic!.grossInertia, Number.MAX_VALUE);
+    return { ...responses[i]!, sagging: lin, hogging: lin };
+  });
+  const probeBeam = buildBeamModel(member.supports, span, elasticResponses, extraPoints, 400);
+  const probe = solveStatic(probeBeam, fieldOf(probeBeam, patternLoads.length > 0 ? patternLoads : deadLoads));
+  const controlAt = Math.round(peakDeflectionPosition(probeBeam.x, probe.deflection) * 10) / 10;
+  const beam = buildBeamModel(member.supports, span, responses, [...extraPoints, controlAt], context.segments);
   const loading: LoadingFields = {
     constant: fieldOf(beam, constantLoads),
     pattern: fieldOf(beam, patternLoads),
@@ -132,7 +142,7 @@ export function analyzeMember(member: MemberDefinition, context: MemberContext):
     patternTotal: totalLoad(patternLoads),
   };
   const capacity = totalLoad(patternLoads) > 0
-    ? capacityCurve(beam, loading, member.capacity)
+    ? capacityCurve(beam, loading, member.capacity, controlAt)
     : null;
   if (!capacity) warnings.push('The load pattern for the load–deflection curve is empty (no live load for a live-only pattern): no capacity curve.');
   const spanHinge = capacity?.hinges.find((h) => h.direction === 'sagging');

@@ -97,3 +97,80 @@ export function zoneCurvature(zone: ZoneResponse, moment: number, out: ValueAndS
   out.value = -out.value;
   return out;
 }
+
+/**
+ * Integrals of the curvature over one segment whose moment varies linearly from `ma` to `mb`
+ * (t from 0 to 1 along the segment), split at every knot of the zone's curvature law so that the
+ * piecewise-linear curvature is integrated exactly:
+ *   i0 = ∫ φ dt, i1 = ∫ φ·t dt, and for the Jacobian j00 = ∫ f(1−t)² dt, j01 = ∫ f·t(1−t) dt,
+ *   j11 = ∫ f·t² dt with f = dφ/dM (or φ/M, the secant flexibility, when `secant` is set).
+ * Also returns the curvature at both ends.
+ */
+export interface SegmentIntegrals {
+  i0: number;
+  i1: number;
+  j00: number;
+  j01: number;
+  j11: number;
+  phiA: number;
+  phiB: number;
+}
+
+const knotScratch: number[] = [];
+const segScratch: ValueAndSlope = { value: 0, slope: 0 };
+
+export function segmentIntegrals(zone: ZoneResponse, ma: number, mb: number, secant: boolean, out: SegmentIntegrals): SegmentIntegrals {
+  // Knots in signed moment between ma and mb: the sagging/hogging switch, sagging knots and
+  // negated hogging knots.
+  const lo = Math.min(ma, mb);
+  const hi = Math.max(ma, mb);
+  const m0 = zone.sagging.momentAtZero;
+  knotScratch.length = 0;
+  if (hi > m0) zone.sagging.knots(Math.max(lo, m0), hi, knotScratch);
+  if (lo < m0) {
+    const first = knotScratch.length;
+    zone.hogging.knots(Math.max(-hi, -m0), -lo, knotScratch);
+    for (let i = first; i < knotScratch.length; i++) knotScratch[i] = -knotScratch[i]!;
+    if (hi > m0) knotScratch.push(m0);
+  }
+  if (knotScratch.length > 1) knotScratch.sort((p, q) => p - q);
+  if (mb < ma) knotScratch.reverse();
+  out.i0 = 0;
+  out.i1 = 0;
+  out.j00 = 0;
+  out.j01 = 0;
+  out.j11 = 0;
+  let t0 = 0;
+  let phi0 = zoneCurvature(zone, ma, segScratch).value;
+  out.phiA = phi0;
+  const dm = mb - ma;
+  const count = knotScratch.length;
+  for (let k = 0; k <= count; k++) {
+    const m1 = k < count ? knotScratch[k]! : mb;
+    const t1 = k < count ? (dm !== 0 ? (m1 - ma) / dm : 1) : 1;
+    const phi1 = zoneCurvature(zone, m1, segScratch).value;
+    const span = t1 - t0;
+    if (span > 0) {
+      out.i0 += (span * (phi0 + phi1)) / 2;
+      out.i1 += (span * (phi0 * (2 * t0 + t1) + phi1 * (t0 + 2 * t1))) / 6;
+      const mStart = ma + dm * t0;
+      const mEnd = m1;
+      let f: number;
+      if (secant) {
+        const mMid = 0.5 * (mStart + mEnd);
+        const phiMid = 0.5 * (phi0 + phi1);
+        f = Math.abs(mMid) > 1 ? Math.max(phiMid / mMid, 0) : zoneCurvature(zone, mMid, segScratch).slope;
+      } else {
+        f = Math.abs(mEnd - mStart) > 1e-9 * (Math.abs(mEnd) + 1) ? (phi1 - phi0) / (mEnd - mStart) : zoneCurvature(zone, 0.5 * (mStart + mEnd), segScratch).slope;
+      }
+      const a3 = (1 - t0) ** 3 - (1 - t1) ** 3;
+      out.j00 += (f * a3) / 3;
+      out.j11 += (f * (t1 ** 3 - t0 ** 3)) / 3;
+      out.j01 += f * ((t1 * t1 - t0 * t0) / 2 - (t1 ** 3 - t0 ** 3) / 3);
+    }
+    t0 = t1;
+    phi0 = phi1;
+  }
+  out.phiB = phi0;
+  return out;
+}

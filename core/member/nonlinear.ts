@@ -20,7 +20,7 @@
  */
 import { solveLinear } from '../numeric/linear.ts';
 import type { BeamModel, ZoneResponse } from './beam-model.ts';
-import { zoneCurvature } from './beam-model.ts';
+import { segmentIntegrals, type SegmentIntegrals } from './beam-model.ts';
 import { hingeLength, type HingeLengthInput } from './hinge-length.ts';
 import type { CapacitySettings } from './definition.ts';
 import type { LoadDeflectionPoint, MemberEvent, PlasticHinge, SpanDistribution } from './results.ts';
@@ -76,7 +76,6 @@ export interface SolvedState {
 }
 
 const scratch: ValueAndSlope = { value: 0, slope: 0 };
-const scratchB: ValueAndSlope = { value: 0, slope: 0 };
 
 function responseOf(zone: ZoneResponse, sign: 1 | -1): SectionResponse {
   return sign > 0 ? zone.sagging : zone.hogging;
@@ -89,13 +88,10 @@ function responseOf(zone: ZoneResponse, sign: 1 | -1): SectionResponse {
 class Equations {
   readonly n: number;
   readonly moment: Float64Array;
-  private readonly phi: Float64Array;
-  private readonly flex: Float64Array;
+  private readonly seg: SegmentIntegrals = { i0: 0, i1: 0, j00: 0, j01: 0, j11: 0, phiA: 0, phiB: 0 };
   constructor(readonly beam: BeamModel, readonly loads: LoadingFields) {
     this.n = beam.x.length;
     this.moment = new Float64Array(this.n);
-    this.phi = new Float64Array(this.n);
-    this.flex = new Float64Array(this.n);
   }
 
   /** Fills moments for redundants X and λ. */
@@ -129,41 +125,40 @@ class Equations {
     const residual = new Array<number>(size).fill(0);
     const jacobian = Array.from({ length: size }, () => new Array<number>(size).fill(0));
     const scale = new Array<number>(size).fill(0);
+    // Hinge positions are held fixed during a solve (the caller moves span hinges to the new
+    // moment maximum between solves), so the Jacobian is exact and Newton converges quadratically.
     const M = this.moments(redundants, lambda);
-    trackSpanHinges(beam, M, hinges);
     const x = beam.x;
     const fields = beam.redundantFields;
     const pattern = this.loads.pattern;
     const lambdaCol = r + free.length;
     // Distributed curvature: ∫ φ m_i dx and its derivatives (exact for linear φ, m between stations).
     if (r > 0) {
-      // Curvature and flexibility once per station (each station ends one segment and starts the next).
-      const phi = this.phi;
-      const flex = this.flex;
-      for (let i = 0; i < this.n; i++) {
-        zoneCurvature(beam.zones[beam.stationZone[i]!]!, M[i]!, scratch);
-        phi[i] = scratch.value;
-        // Secant flexibility φ/M (bounded, positive on softening curves) for the fallback iteration.
-        flex[i] = secant && Math.abs(M[i]!) > 1 ? Math.max(scratch.value / M[i]!, 0) || scratch.slope : scratch.slope;
-      }
+      // Compatibility ∫ φ·m_i dx, integrated exactly for the piecewise-linear curvature law with the
+      // moment linear between stations (segmentIntegrals splits each segment at the law's knots).
+      const seg = this.seg;
       for (let k = 0; k < this.n - 1; k++) {
         const h = x[k + 1]! - x[k]!;
         if (h <= 0) continue;
-        const pa = phi[k]!;
-        const pb = phi[k + 1]!;
-        const fa = flex[k]!;
-        const fb = flex[k + 1]!;
+        segmentIntegrals(beam.zones[beam.segmentZone[k]!]!, M[k]!, M[k + 1]!, secant, seg);
+        const w0 = seg.i0 - seg.i1;
+        const w1 = seg.i1;
+        const magnitude = h * 0.5 * (Math.abs(seg.phiA) + Math.abs(seg.phiB));
         for (let i = 0; i < r; i++) {
           const ma = fields[i]![k]!;
           const mb = fields[i]![k + 1]!;
-          residual[i]! += h * (pa * (ma / 3 + mb / 6) + pb * (ma / 6 + mb / 3));
-          scale[i]! += h * (Math.abs(pa) + Math.abs(pb)) * 0.5 * Math.max(Math.abs(ma), Math.abs(mb));
+          residual[i]! += h * (ma * w0 + mb * w1);
+          scale[i]! += magnitude * Math.max(Math.abs(ma), Math.abs(mb));
           for (let j = 0; j < r; j++) {
             const na = fields[j]![k]!;
             const nb = fields[j]![k + 1]!;
-            jacobian[i]![j]! += h * triple(fa, fb, ma, mb, na, nb);
+            jacobian[i]![j]! += h * (ma * na * seg.j00 + (ma * nb + mb * na) * seg.j01 + mb * nb * seg.j11);
           }
-          if (lambdaFree) jacobian[i]![lambdaCol]! += h * triple(fa, fb, ma, mb, pattern[k]!, pattern[k + 1]!);
+          if (lambdaFree) {
+            const pa = pattern[k]!;
+            const pb = pattern[k + 1]!;
+            jacobian[i]![lambdaCol]! += h * (ma * pa * seg.j00 + (ma * pb + mb * pa) * seg.j01 + mb * pb * seg.j11);
+          }
         }
       }
     }
@@ -227,7 +222,26 @@ export function trackSpanHinges(beam: BeamModel, moment: Float64Array, hinges: r
         h.zone = z;
       }
     }
-    h.rotationPosition = beam.x[h.station]!;
+    // The lumped rotation acts at the true maximum of the moment, not at the nearest station: the
+    // vertex of the parabola through the critical station and its neighbours (exact for uniform
+    // load), so the deflections do not depend on where the stations happen to fall.
+    const i = h.station;
+    h.rotationPosition = beam.x[i]!;
+    if (i > 0 && i < n - 1) {
+      const x0 = beam.x[i - 1]!;
+      const x1 = beam.x[i]!;
+      const x2 = beam.x[i + 1]!;
+      const m0 = h.sign * moment[i - 1]!;
+      const m1 = h.sign * moment[i]!;
+      const m2 = h.sign * moment[i + 1]!;
+      const d01 = (m1 - m0) / (x1 - x0);
+      const d12 = (m2 - m1) / (x2 - x1);
+      const curvature = (d12 - d01) / (x2 - x0);
+      if (x1 > x0 && x2 > x1 && curvature < 0) {
+        const vertex = 0.5 * (x0 + x1) - d01 / (2 * curvature);
+        if (vertex > x0 && vertex < x2) h.rotationPosition = vertex;
+      }
+    }
   }
 }
 
@@ -335,17 +349,20 @@ export function deflectionShape(beam: BeamModel, moment: Float64Array, hinges: r
   // v'' = −φ (downward positive deflection under sagging curvature); v(0) = 0, v'(0) = 0 first.
   let slope = 0;
   let jump = 0;
-  let pb = zoneCurvature(beam.zones[beam.stationZone[0]!]!, moment[0]!, scratchB).value;
+  const seg: SegmentIntegrals = { i0: 0, i1: 0, j00: 0, j01: 0, j11: 0, phiA: 0, phiB: 0 };
   for (let k = 0; k < n - 1; k++) {
-    const pa = pb;
-    pb = zoneCurvature(beam.zones[beam.stationZone[k + 1]!]!, moment[k + 1]!, scratchB).value;
-    if (curvatureOut) {
-      curvatureOut[k] = pa;
-      if (k === n - 2) curvatureOut[k + 1] = pb;
-    }
     const h = x[k + 1]! - x[k]!;
-    let dv = slope * h - (h * h * (2 * pa + pb)) / 6;
-    let dSlope = -h * (pa + pb) / 2;
+    let dv = slope * h;
+    let dSlope = 0;
+    if (h > 0) {
+      segmentIntegrals(beam.zones[beam.segmentZone[k]!]!, moment[k]!, moment[k + 1]!, false, seg);
+      if (curvatureOut) {
+        curvatureOut[k] = seg.phiA;
+        curvatureOut[k + 1] = seg.phiB;
+      }
+      dv -= h * h * (seg.i0 - seg.i1);
+      dSlope = -h * seg.i0;
+    }
     while (jump < jumps.length && jumps[jump]!.at < x[k + 1]! + (k === n - 2 ? 1e-9 : 0) && jumps[jump]!.at >= x[k]!) {
       const j = jumps[jump]!;
       dv -= j.theta * (x[k + 1]! - j.at);
@@ -391,7 +408,7 @@ const SITE_WORDS: Record<HingeSite, string> = { left: 'left support', right: 'ri
  * @param loads   moment fields of the constant loads and of the pattern
  * @param capacity hinge length method etc.
  */
-export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: CapacitySettings): CapacityCurve {
+export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: CapacitySettings, controlAt?: number): CapacityCurve {
   const eq = new Equations(beam, loads);
   const n = beam.x.length;
   const r = beam.redundants.length;
@@ -409,9 +426,20 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
   const stationZone = (i: number) => beam.segmentZone[Math.min(i, n - 2)]!;
 
   // --- helpers -----------------------------------------------------------------------------------
+  /** Moves span hinges to the current moment maximum; true when any of them moved. */
+  const retrack = (): boolean => {
+    const before = hinges.map((h) => h.rotationPosition);
+    trackSpanHinges(beam, eq.moment, hinges);
+    return hinges.some((h, i) => Math.abs(h.rotationPosition - before[i]!) > 1e-6 * span);
+  };
   const solveAt = (lambda: number, guess: Snapshot): Snapshot | undefined => {
     const free = hinges.map((h, i) => (h.phase === 'softening' ? i : -1)).filter((i) => i >= 0);
-    const res = newton(eq, hinges, free, false, { redundants: guess.redundants, lambda, rotations: free.map((i) => guess.rotations.get(i) ?? hinges[i]!.rotation) });
+    let start = { redundants: guess.redundants, lambda, rotations: free.map((i) => guess.rotations.get(i) ?? hinges[i]!.rotation) };
+    let res = newton(eq, hinges, free, false, start);
+    for (let pass = 0; pass < 4 && res.converged && retrack(); pass++) {
+      start = { redundants: res.redundants, lambda, rotations: res.rotations };
+      res = newton(eq, hinges, free, false, start);
+    }
     hingeVersion++; // the solve overwrote the shared moment array and hinge rotations
     if (!res.converged) return undefined;
     const rotations = new Map<number, number>();
@@ -441,7 +469,19 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
   };
   let controlIndex = -1;
   const deflectionAt = (s: Snapshot): Float64Array => deflectionShape(beam, restore(s), hinges);
-  const controlDeflection = (s: Snapshot) => deflectionAt(s)[controlIndex]!;
+  // The same state is asked for its control deflection several times (recorded point, event
+  // descriptions): remember the last answer.
+  let deflected: Snapshot | undefined;
+  let deflectedVersion = -1;
+  let deflectedValue = 0;
+  const controlDeflection = (s: Snapshot) => {
+    if (s !== deflected || deflectedVersion !== hingeVersion) {
+      deflectedValue = deflectionAt(s)[controlIndex]!;
+      deflected = s;
+      deflectedVersion = hingeVersion;
+    }
+    return deflectedValue;
+  };
   const record = (s: Snapshot, stage: 'integration' | 'mechanism') => {
     points.push({ loadFactor: s.lambda, totalLoad: loads.constantTotal + s.lambda * loads.patternTotal, deflection: controlDeflection(s), stage });
   };
@@ -557,6 +597,12 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
   // Prefer exact midspan for symmetric cases (largest deflection within 0.01 % of it).
   const mid = beam.x.findIndex((xi) => Math.abs(xi - span / 2) < 1e-9);
   if (beam.support !== 'cantilever' && mid >= 0 && Math.abs(probeDeflection[mid]! - baseDeflection[mid]!) >= biggest * (1 - 1e-4)) controlIndex = mid;
+  // A control position given by the caller (a station placed where the elastic deflection peaks)
+  // keeps the curve independent of the station spacing.
+  if (controlAt !== undefined) {
+    const at = beam.x.findIndex((xi) => Math.abs(xi - controlAt) < 1e-6);
+    if (at >= 0) controlIndex = at;
+  }
   const controlPosition = beam.x[controlIndex]!;
   record(state, 'integration');
 
@@ -681,7 +727,7 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
       finished = true;
     }
   };
-  let step = lambdaRef / 40;
+  let step = lambdaRef / 24;
   let guard = 0;
   let previousState: Snapshot | undefined;
   while (!mechanism && !finished && guard++ < 4000) {
@@ -700,8 +746,15 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
     }
     const next = solveAt(target, guess) ?? (guess === state ? undefined : solveAt(target, state));
     if (!next) {
-      if (step > lambdaRef * 1e-6) {
+      // With a hinge past its peak, failure to find equilibrium at a higher load is the limit
+      // point itself: go straight to rotation control rather than shrinking the step.
+      const pastPeak = hinges.some((h) => h.phase === 'softening');
+      if (!pastPeak && step > lambdaRef * 1e-6) {
         step /= 4;
+        continue;
+      }
+      if (pastPeak && step > lambdaRef * 1e-3) {
+        step /= 8;
         continue;
       }
       converged = false;
@@ -722,7 +775,7 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
       previousState = state;
       state = next;
       record(state, 'integration');
-      step = Math.min(step * 1.25, lambdaRef / 25);
+      step = Math.min(step * 1.25, lambdaRef / 16);
       continue;
     }
     previousState = undefined;
@@ -737,41 +790,119 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
     failureCause = status;
   }
 
-  // --- mechanism: rotation control of the newest softening hinge --------------------------------------
-  if (mechanism && !ultimate) {
+  // --- past the peak load: rotation control of the newest softening hinge ---------------------------
+  // Entered when the beam becomes a mechanism, or when load control finds no equilibrium beyond a
+  // limit point while a hinge is softening (the load must fall for the beam to deform further).
+  // λ becomes an unknown; hardening hinges may still reach their peak on the way (they then soften
+  // too); the stage ends when a hinge reaches its rotation capacity or a section outside the hinges
+  // reaches its peak.
+  const softeningCount = () => hinges.filter((h) => h.phase === 'softening').length;
+  const limitPoint = !mechanism && !finished && !converged && softeningCount() > 0;
+  if ((mechanism || limitPoint) && !ultimate) {
+    if (limitPoint) {
+      converged = true;
+      status = 'complete';
+      failureCause = '';
+    }
     const controlled = hinges.length - 1 - [...hinges].reverse().findIndex((h) => h.phase === 'softening');
     const hc = hinges[controlled]!;
     peak = { lambda: state.lambda, deflection: controlDeflection(state) };
-    events.push({ kind: 'mechanism', loadFactor: state.lambda, deflection: peak.deflection, position: beam.x[hc.station]!, description: `collapse mechanism: the member can take no more load; hinge at the ${SITE_WORDS[hc.site]} rotates at reducing or constant load` });
-    const free = hinges.map((h, i) => (h.phase === 'softening' && i !== controlled ? i : -1)).filter((i) => i >= 0);
+    events.push(
+      mechanism
+        ? { kind: 'mechanism', loadFactor: state.lambda, deflection: peak.deflection, position: beam.x[hc.station]!, description: `collapse mechanism: the member can take no more load; the hinge at the ${SITE_WORDS[hc.site]} rotates at constant or falling load` }
+        : { kind: 'peak', loadFactor: state.lambda, deflection: peak.deflection, position: beam.x[hc.station]!, description: `peak load: the hinge at the ${SITE_WORDS[hc.site]} is past its peak moment and the load must fall for the member to deform further` },
+    );
+    const freeList = () => hinges.map((h, i) => (h.phase === 'softening' && i !== controlled ? i : -1)).filter((i) => i >= 0);
     const theta0 = hc.rotation;
     const steps = 24;
-    let lambda = state.lambda;
-    let X = [...state.redundants];
-    let rot = free.map((i) => state.rotations.get(i) ?? hinges[i]!.rotation);
-    for (let k = 1; k <= steps; k++) {
-      const theta = theta0 + ((hc.capacity - theta0) * k) / steps;
+    const dTheta = (hc.capacity - theta0) / steps;
+    let current = state;
+    const solveTheta = (theta: number, from: Snapshot): Snapshot | undefined => {
       hc.rotation = theta;
       hingeVersion++;
-      const res = newton(eq, hinges, free, true, { redundants: X, lambda, rotations: rot }, controlled);
-      if (!res.converged) {
+      const free = freeList();
+      let res = newton(eq, hinges, free, true, { redundants: from.redundants, lambda: from.lambda, rotations: free.map((i) => from.rotations.get(i) ?? hinges[i]!.rotation) }, controlled);
+      for (let pass = 0; pass < 4 && res.converged && retrack(); pass++) {
+        res = newton(eq, hinges, free, true, { redundants: res.redundants, lambda: res.lambda, rotations: res.rotations }, controlled);
+      }
+      hingeVersion++;
+      if (!res.converged) return undefined;
+      const rotations = new Map<number, number>();
+      free.forEach((h, i) => rotations.set(h, res.rotations[i]!));
+      rotations.set(controlled, theta);
+      return { lambda: res.lambda, redundants: res.redundants, rotations };
+    };
+    type Stage = { kind: 'peak' | 'capacity' | 'overstress'; hinge?: number; g: (s: Snapshot) => number };
+    const stageEvents = (): Stage[] => {
+      const list: Stage[] = [];
+      hinges.forEach((h, i) => {
+        if (i === controlled) return;
+        if (h.phase === 'hardening') {
+          const resp = responseOf(beam.zones[h.zone]!, h.sign);
+          list.push({ kind: 'peak', hinge: i, g: (s) => (h.sign * restore(s)[h.station]!) / resp.peakMoment - (1 - 1e-9) });
+        } else list.push({ kind: 'capacity', hinge: i, g: (s) => (s.rotations.get(i) ?? h.rotation) / h.capacity - (1 - 1e-9) });
+      });
+      list.push({ kind: 'overstress', g: (s) => overstress(s).ratio - (1 + 1e-9) });
+      return list;
+    };
+    let theta = theta0;
+    for (let k = 1; k <= steps + 1 && !ultimate; k++) {
+      const target = Math.min(theta + dTheta, hc.capacity);
+      const next = solveTheta(target, current);
+      if (!next) {
         converged = false;
-        status = `not converged in the mechanism stage at θp = ${(theta * 1000).toFixed(2)} mrad of the hinge at the ${SITE_WORDS[hc.site]}`;
-        failureCause = 'analysis stopped in the mechanism stage (not converged)';
+        status = `not converged past the peak at θp = ${(target * 1000).toFixed(2)} mrad of the hinge at the ${SITE_WORDS[hc.site]}`;
+        failureCause = 'analysis stopped past the peak load (not converged)';
         break;
       }
-      lambda = res.lambda;
-      X = res.redundants;
-      rot = res.rotations;
-      const rotations = new Map<number, number>();
-      free.forEach((h, i) => rotations.set(h, rot[i]!));
-      rotations.set(controlled, theta);
-      const s: Snapshot = { lambda, redundants: X, rotations };
-      record(s, 'mechanism');
-      state = s;
-      const other = free.find((i) => (rotations.get(i) ?? 0) >= hinges[i]!.capacity);
-      if (k === steps || other !== undefined) {
-        finishUltimate(other !== undefined ? hinges[other]! : hc, s);
+      // Events in this step: bisect on the controlled rotation.
+      let event: { ev: Stage; at: Snapshot; theta: number } | undefined;
+      for (const ev of stageEvents()) {
+        if (!(ev.g(current) < 0 && ev.g(next) >= 0)) continue;
+        let lo = theta;
+        let hi = target;
+        let loS = current;
+        let hiS = next;
+        for (let it = 0; it < 40 && hi - lo > 1e-7 * hi; it++) {
+          const mid = 0.5 * (lo + hi);
+          const sMid = solveTheta(mid, loS);
+          if (!sMid) break;
+          if (ev.g(sMid) >= 0) {
+            hi = mid;
+            hiS = sMid;
+          } else {
+            lo = mid;
+            loS = sMid;
+          }
+        }
+        if (!event || hi < event.theta) event = { ev, at: hiS, theta: hi };
+      }
+      if (event) {
+        hc.rotation = event.theta;
+        current = event.at;
+        theta = event.theta;
+        record(current, 'mechanism');
+        state = current;
+        if (event.ev.kind === 'peak') {
+          const h = hinges[event.ev.hinge!]!;
+          restore(current);
+          h.phase = 'softening';
+          hingeVersion++;
+          current.rotations.set(event.ev.hinge!, h.rotation);
+          events.push({ kind: 'hinge', loadFactor: current.lambda, deflection: controlDeflection(current), position: beam.x[h.station]!, description: `hinge at the ${SITE_WORDS[h.site]} reaches the peak moment of its section (θp = ${(h.rotation * 1000).toFixed(2)} mrad)` });
+          continue;
+        }
+        hc.rotation = event.theta;
+        finishUltimate(event.ev.kind === 'capacity' ? hinges[event.ev.hinge!]! : undefined, current);
+        break;
+      }
+      theta = target;
+      current = next;
+      hc.rotation = theta;
+      record(current, 'mechanism');
+      state = current;
+      if (theta >= hc.capacity * (1 - 1e-12)) {
+        finishUltimate(hc, current);
         break;
       }
     }
@@ -877,4 +1008,24 @@ export function solveStatic(beam: BeamModel, fields: Float64Array): StaticState 
     if (resp.peakMoment > 0) peakRatio = Math.max(peakRatio, Math.abs(m) / resp.peakMoment);
   }
   return { converged: res.converged, redundants: res.redundants, moment, curvature, deflection, yieldRatio, peakRatio };
+}
+
+/**
+ * Where the deflection of a deflected shape peaks, mm: the vertex of the parabola through the
+ * largest station value and its neighbours (the free end for a cantilever).
+ */
+export function peakDeflectionPosition(x: ArrayLike<number>, deflection: ArrayLike<number>): number {
+  const n = deflection.length;
+  let i = 0;
+  for (let k = 1; k < n; k++) if (deflection[k]! > deflection[i]!) i = k;
+  if (i === 0 || i === n - 1) return x[i]!;
+  const x0 = x[i - 1]!;
+  const x1 = x[i]!;
+  const x2 = x[i + 1]!;
+  const d01 = (deflection[i]! - deflection[i - 1]!) / (x1 - x0);
+  const d12 = (deflection[i + 1]! - deflection[i]!) / (x2 - x1);
+  const c = (d12 - d01) / (x2 - x0);
+  if (!(c < 0) || !(x1 > x0) || !(x2 > x1)) return x1;
+  const vertex = 0.5 * (x0 + x1) - d01 / (2 * c);
+  return vertex > x0 && vertex < x2 ? vertex : x1;
 }

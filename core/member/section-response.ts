@@ -37,6 +37,12 @@ export interface SectionResponse {
   plasticCurvature(m: number): number;
   /** integrationCurvature and its derivative dφ/dm (flexibility, 1/(N·mm²)) in one table search. */
   integration(m: number, out: ValueAndSlope): ValueAndSlope;
+  /**
+   * Moments strictly between `lo` and `hi` (magnitudes, ascending) where the integration curvature
+   * changes slope: the member integrator splits segments there, so that curvature is integrated
+   * exactly along the span whatever the spacing of the stations. Empty for smooth laws.
+   */
+  knots(lo: number, hi: number, out: number[]): void;
   /** plasticCurvature and its derivative in one table search. */
   plastic(m: number, out: ValueAndSlope): ValueAndSlope;
   /** Post-peak branch: plastic curvature (φ − φe) and moment pairs from the peak to ultimate, ascending in plastic curvature. */
@@ -189,8 +195,22 @@ export function sectionResponse(curve: MomentCurvatureResult): SectionResponse |
     out.slope = out.value > 0 ? out.slope - elasticSlope : 0;
     return out;
   };
+  // Knots of the integration curvature: the envelope points up to M′y, then M′y itself.
+  const knotList = my !== null ? [...envM.filter((m) => m < my), my] : envM.slice();
+  const knots = (lo: number, hi: number, out: number[]): void => {
+    if (!(hi > lo)) return;
+    let a = 0;
+    let b = knotList.length;
+    while (a < b) {
+      const mid = (a + b) >> 1;
+      if (knotList[mid]! <= lo) a = mid + 1;
+      else b = mid;
+    }
+    for (let i = a; i < knotList.length && knotList[i]! < hi; i++) out.push(knotList[i]!);
+  };
   return {
     integration,
+    knots,
     plastic: plasticWithSlope,
     momentAtZero: m0,
     crackingMoment: curve.keyPoints.cracking?.moment ?? null,
@@ -232,6 +252,7 @@ export function plainConcreteResponse(stiffness: number, crackingMoment: number)
     actualCurvature: lin,
     integrationCurvature: lin,
     plasticCurvature: () => 0,
+    knots: () => undefined,
     integration: (m, out) => {
       out.value = m / stiffness;
       out.slope = 1 / stiffness;

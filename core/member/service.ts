@@ -82,6 +82,7 @@ function functionResponse(curvature: (m: number) => number, flexibility: (m: num
     actualCurvature: curvature,
     integrationCurvature: curvature,
     plasticCurvature: () => 0,
+    knots: () => undefined,
     integration: (m: number, out: ValueAndSlope) => {
       out.value = curvature(m);
       out.slope = flexibility(m);

@@ -1,0 +1,202 @@
+/**
+ * Command-line arguments → a typed command, and the help texts. Pure (no I/O); parse errors come
+ * back as usage errors with a message and the help topic to point to.
+ */
+import { parseArgs } from 'node:util';
+import type { UnitSystem } from '../../core/project/types.ts';
+
+/** Exit codes (docs/cli.md). */
+export const EXIT = {
+  ok: 0,
+  /** validate: the file has errors; analyze: a member is not ok (failing check, input error, not converged). */
+  problems: 1,
+  /** Bad arguments, or a file named on the command line that cannot be read or written. */
+  usage: 2,
+  /** The command needs a part of Hingeline that this installation does not have (the PDF report). */
+  missingFeature: 3,
+  /** A defect in Hingeline (please report). */
+  internal: 4,
+  /** Stopped with Ctrl+C (128 + SIGINT). */
+  interrupted: 130,
+} as const;
+
+export type OutputFormat = 'table' | 'json' | 'csv';
+
+export type Command =
+  | { readonly kind: 'help'; readonly topic?: string }
+  | { readonly kind: 'version' }
+  | { readonly kind: 'analyze'; readonly file: string; readonly members: readonly string[]; readonly format: OutputFormat; readonly units?: UnitSystem; readonly jobs?: number }
+  | { readonly kind: 'report'; readonly file: string; readonly out: string; readonly members: readonly string[]; readonly jobs?: number }
+  | { readonly kind: 'validate'; readonly file: string; readonly format: 'text' | 'json' }
+  | { readonly kind: 'demo'; readonly out?: string; readonly si: boolean; readonly force: boolean };
+
+export type ParsedArguments = { readonly ok: true; readonly command: Command } | { readonly ok: false; readonly message: string; readonly topic?: string };
+
+export const COMMANDS = ['analyze', 'report', 'validate', 'demo'] as const;
+
+const GENERAL_HELP = `hingeline — moment–curvature, load–deflection, plastic hinge and service-deflection
+assessment of reinforced-concrete beams, from the command line.
+
+Usage:
+  hingeline analyze FILE [--member ID]... [--format table|json|csv] [--units us|si] [--jobs N]
+  hingeline report FILE --out REPORT.pdf [--member ID]... [--jobs N]
+  hingeline validate FILE [--format text|json]
+  hingeline demo [--out FILE] [--si] [--force]
+  hingeline help [COMMAND]        hingeline --version
+
+FILE is a Hingeline project (.hingeline or .json). Run "hingeline COMMAND --help" for details.
+
+Exit codes: 0 ok; 1 problems found (validation errors, failing checks); 2 usage error or a
+file that cannot be read or written; 3 feature not available in this installation;
+4 internal error (please report); 130 stopped with Ctrl+C.
+
+Results are for review by a qualified engineer and defer to local codes and licensed practice.`;
+
+const HELP: Readonly<Record<(typeof COMMANDS)[number], string>> = {
+  analyze: `Usage: hingeline analyze FILE [options]
+
+Analyses the members of a project (in parallel on worker threads) and prints the key results per
+member: My, Mu, φu/φy, μΔ, θp, the governing service deflection against its limit, the strength
+utilisation, the status and the governing mode.
+
+Options:
+  --member ID       analyse only this member (repeat for several)
+  --format FORMAT   table (default), json (documented in docs/cli.md) or csv
+  --units SYSTEM    us or si (default: the project's display unit system)
+  --jobs N          number of worker threads (default: one per core, at most one per member;
+                    1 analyses in this process)
+  -h, --help        show this help
+
+Problems in the file are printed to stderr; members with input errors are reported as such and
+the others are analysed. A progress bar is shown on stderr when it is a terminal.
+
+Exit codes: 0 every member ok; 1 a member has a failing check, an input error or did not
+converge, or the file cannot be analysed; 2 usage error or unreadable file; 4 internal error.`,
+  report: `Usage: hingeline report FILE --out REPORT.pdf [options]
+
+Analyses the project and writes the PDF report.
+
+Options:
+  --out PATH        where to write the PDF (required)
+  --member ID       report only this member (repeat for several)
+  --jobs N          number of worker threads (see "hingeline analyze --help")
+  -h, --help        show this help
+
+Exit codes: 0 report written; 1 the file cannot be analysed; 2 usage error or unreadable file;
+3 the report builder is not part of this installation; 4 internal error.`,
+  validate: `Usage: hingeline validate FILE [options]
+
+Checks a project file and lists every problem at once, with its path and a plain message in the
+project's display units; older versions of the format are migrated first.
+
+Options:
+  --format FORMAT   text (default) or json
+  -h, --help        show this help
+
+Exit codes: 0 no errors (warnings may be listed); 1 the file has errors; 2 usage error or
+unreadable file.`,
+  demo: `Usage: hingeline demo [options]
+
+Writes the demo project: Wrenfield Mill, Building B, an invented light-industrial building being
+converted to offices (ten beams, US customary units, ACI 318-19); with --si, a smaller
+EN 1992-1-1 project in SI units.
+
+Options:
+  --out PATH        write to this file (default: standard output)
+  --si              the SI / EN 1992-1-1 demo instead
+  --force           overwrite PATH if it exists
+  -h, --help        show this help
+
+Exit codes: 0 written; 2 usage error or the file cannot be written (or exists, without --force).`,
+};
+
+/** Help text: general, or for one command. */
+export function helpText(topic?: string): string {
+  return topic && (COMMANDS as readonly string[]).includes(topic) ? HELP[topic as (typeof COMMANDS)[number]] : GENERAL_HELP;
+}
+
+function usage(message: string, topic?: string): ParsedArguments {
+  return { ok: false, message, ...(topic ? { topic } : {}) };
+}
+
+function jobsOption(value: string | undefined, topic: string): number | ParsedArguments | undefined {
+  if (value === undefined) return undefined;
+  const n = Number(value);
+  if (!/^\d+$/.test(value) || !Number.isInteger(n) || n < 1 || n > 256) return usage(`--jobs must be a whole number from 1 to 256, got "${value}"`, topic);
+  return n;
+}
+
+/** Parses the arguments after `hingeline` (process.argv.slice(2)). */
+export function parseArguments(argv: readonly string[]): ParsedArguments {
+  const [first, ...rest] = argv;
+  if (first === undefined || first === '--help' || first === '-h') return { ok: true, command: { kind: 'help' } };
+  if (first === '--version' || first === '-v') return { ok: true, command: { kind: 'version' } };
+  if (first === 'help') {
+    if (rest[0] !== undefined && !(COMMANDS as readonly string[]).includes(rest[0])) return usage(`unknown command "${rest[0]}" (commands: ${COMMANDS.join(', ')})`);
+    return { ok: true, command: { kind: 'help', ...(rest[0] ? { topic: rest[0] } : {}) } };
+  }
+  if (!(COMMANDS as readonly string[]).includes(first)) {
+    return usage(first.startsWith('-') ? `unknown option "${first}" (a command comes first: ${COMMANDS.join(', ')})` : `unknown command "${first}" (commands: ${COMMANDS.join(', ')})`);
+  }
+  const topic = first;
+  if (rest.includes('--help') || rest.includes('-h')) return { ok: true, command: { kind: 'help', topic } };
+
+  let parsed: ReturnType<typeof parseArgs>;
+  try {
+    parsed = parseArgs({
+      args: [...rest],
+      allowPositionals: true,
+      strict: true,
+      options: {
+        member: { type: 'string', multiple: true },
+        format: { type: 'string' },
+        units: { type: 'string' },
+        jobs: { type: 'string' },
+        out: { type: 'string' },
+        si: { type: 'boolean' },
+        force: { type: 'boolean' },
+      },
+    });
+  } catch (error) {
+    const message = error instanceof Error ? error.message.replace(/\. To specify a positional argument[\s\S]*$/, '') : String(error);
+    return usage(message.charAt(0).toLowerCase() + message.slice(1), topic);
+  }
+  const values = parsed.values as { member?: string[]; format?: string; units?: string; jobs?: string; out?: string; si?: boolean; force?: boolean };
+  const positionals = parsed.positionals;
+  const allowed: Readonly<Record<string, readonly string[]>> = {
+    analyze: ['member', 'format', 'units', 'jobs'],
+    report: ['member', 'out', 'jobs'],
+    validate: ['format'],
+    demo: ['out', 'si', 'force'],
+  };
+  const stray = Object.keys(values).filter((k) => values[k as keyof typeof values] !== undefined && !allowed[topic]!.includes(k));
+  if (stray.length > 0) return usage(`"${topic}" does not take --${stray[0]}`, topic);
+
+  if (topic === 'demo') {
+    if (positionals.length > 0) return usage(`"demo" takes no file argument, got "${positionals[0]}" (use --out FILE)`, topic);
+    if (values.out === '') return usage('--out needs a file path', topic);
+    return { ok: true, command: { kind: 'demo', ...(values.out !== undefined ? { out: values.out } : {}), si: values.si === true, force: values.force === true } };
+  }
+  if (positionals.length === 0) return usage(`"${topic}" needs a project FILE`, topic);
+  if (positionals.length > 1) return usage(`"${topic}" takes one project FILE, got ${positionals.length}: ${positionals.join(' ')}`, topic);
+  const file = positionals[0]!;
+  const members = values.member ?? [];
+  if (members.some((m) => m.trim() === '')) return usage('--member needs a member id', topic);
+
+  if (topic === 'validate') {
+    const format = values.format ?? 'text';
+    if (format !== 'text' && format !== 'json') return usage(`--format must be text or json, got "${format}"`, topic);
+    return { ok: true, command: { kind: 'validate', file, format } };
+  }
+  const jobs = jobsOption(values.jobs, topic);
+  if (typeof jobs === 'object') return jobs;
+  if (topic === 'report') {
+    if (!values.out) return usage('"report" needs --out REPORT.pdf', topic);
+    return { ok: true, command: { kind: 'report', file, out: values.out, members, ...(jobs ? { jobs } : {}) } };
+  }
+  const format = values.format ?? 'table';
+  if (format !== 'table' && format !== 'json' && format !== 'csv') return usage(`--format must be table, json or csv, got "${format}"`, topic);
+  const units = values.units;
+  if (units !== undefined && units !== 'us' && units !== 'si') return usage(`--units must be us or si, got "${units}"`, topic);
+  return { ok: true, command: { kind: 'analyze', file, members, format, ...(units ? { units } : {}), ...(jobs ? { jobs } : {}) } };
+}

@@ -1,0 +1,57 @@
+/**
+ * The command line's edge to the outside world: streams, files, terminal facts and Ctrl+C. Commands
+ * receive a CliIo, so tests run them against an in-memory one (see test/app/cli).
+ */
+import { existsSync } from 'node:fs';
+import { readFile, writeFile } from 'node:fs/promises';
+import { resolve } from 'node:path';
+
+export interface CliIo {
+  stdout(text: string): void;
+  stderr(text: string): void;
+  /** True when stderr is a terminal (progress bar and colours on stderr). */
+  readonly stderrIsTTY: boolean;
+  /** True when stdout is a terminal (colours in the table). */
+  readonly stdoutIsTTY: boolean;
+  /** Terminal width in columns (80 when unknown). */
+  readonly columns: number;
+  /** Colours allowed at all (NO_COLOR not set); each stream also has to be a terminal. */
+  readonly colorAllowed: boolean;
+  readText(path: string): Promise<string>;
+  writeText(path: string, text: string): Promise<void>;
+  exists(path: string): boolean;
+  /** Absolute path of `path` from the working directory. */
+  resolvePath(path: string): string;
+  /** Aborts when the user presses Ctrl+C. */
+  readonly signal: AbortSignal;
+  readonly env: Readonly<Record<string, string | undefined>>;
+}
+
+/** The real thing: process streams, the file system and SIGINT. */
+export function nodeIo(): CliIo {
+  const controller = new AbortController();
+  process.once('SIGINT', () => controller.abort());
+  // A reader that stops early (`hingeline analyze … | head`) closes the pipe: end quietly.
+  for (const stream of [process.stdout, process.stderr]) {
+    stream.on('error', (error: NodeJS.ErrnoException) => {
+      if (error.code === 'EPIPE') process.exit(0);
+      throw error;
+    });
+  }
+  const stdoutIsTTY = process.stdout.isTTY === true;
+  const stderrIsTTY = process.stderr.isTTY === true;
+  return {
+    stdout: (text) => void process.stdout.write(text),
+    stderr: (text) => void process.stderr.write(text),
+    stdoutIsTTY,
+    stderrIsTTY,
+    columns: process.stdout.columns ?? process.stderr.columns ?? 80,
+    colorAllowed: process.env.NO_COLOR === undefined || process.env.NO_COLOR === '',
+    readText: (path) => readFile(path, 'utf8'),
+    writeText: (path, text) => writeFile(path, text, 'utf8'),
+    exists: (path) => existsSync(path),
+    resolvePath: (path) => resolve(path),
+    signal: controller.signal,
+    env: process.env,
+  };
+}

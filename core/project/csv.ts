@@ -1,0 +1,382 @@
+/**
+ * CSV in and out, as pure functions on strings (RFC 4180: comma-separated, fields with commas,
+ * quotes or line breaks in double quotes, "" for a quote; CRLF or LF line ends; a UTF-8 byte-order
+ * mark is accepted on input).
+ *
+ * Import: a member list, one row per member, with a header row that names each column and the unit
+ * of every dimensioned column, e.g.
+ *
+ *   id,name,span [ft],supports,section,dead [kip/ft],superimposed [kip/ft],live [kip/ft],notes
+ *
+ * Values are converted to internal units (mm, N/mm). Every problem is reported with its row (the
+ * line number in the file, the header being row 1) and column: `row 7, column span: …`.
+ * A file whose header has semicolons and no commas is read with `;` as separator and a decimal comma.
+ *
+ * Export: a results summary per member and any curve (moment–curvature, load–deflection, values
+ * along the span), with the unit of every column in its header, in the chosen display system.
+ * Empty fields stand for values that do not exist (never NaN).
+ */
+import type { Diagnostic } from '../diagnostics.ts';
+import type { CodeBasis } from '../materials/specs.ts';
+import type { CapacitySettings, MemberDefinition, MemberLoad, ServiceSettings, SupportType } from '../member/definition.ts';
+import type { LoadDeflectionPoint, MemberResult, SpanDistribution } from '../member/results.ts';
+import type { MomentCurvatureResult } from '../section/results.ts';
+import { formatNumber, fromDisplay, toDisplay, unitLabel, UNITS, type Quantity, type UnitId, type UnitSystem as DisplaySystem } from '../units/index.ts';
+import { memberKeyResults } from './key-results.ts';
+import type { Project, UnitSystem } from './types.ts';
+
+// --- reading ----------------------------------------------------------------------------------------
+
+export interface CsvRecord {
+  /** Line number of the record's first line in the file (1-based). */
+  readonly line: number;
+  readonly fields: readonly string[];
+}
+
+/**
+ * Splits CSV text into records (RFC 4180). Blank lines are skipped. An unclosed quote runs to the end
+ * of the text and is reported in `problems`.
+ */
+export function parseCsv(text: string, delimiter = ','): { records: CsvRecord[]; problems: Diagnostic[] } {
+  const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
+  const records: CsvRecord[] = [];
+  const problems: Diagnostic[] = [];
+  let fields: string[] = [];
+  let field = '';
+  let quoted = false;
+  let line = 1;
+  let recordLine = 1;
+  let fieldStarted = false;
+  const endRecord = () => {
+    fields.push(field);
+    if (!(fields.length === 1 && fields[0]!.trim() === '' && !fieldStarted)) records.push({ line: recordLine, fields });
+    fields = [];
+    field = '';
+    fieldStarted = false;
+  };
+  for (let i = 0; i < body.length; i++) {
+    const c = body[i]!;
+    if (quoted) {
+      if (c === '"') {
+        if (body[i + 1] === '"') {
+          field += '"';
+          i++;
+        } else {
+          quoted = false;
+        }
+      } else {
+        if (c === '\n') line++;
+        field += c;
+      }
+      continue;
+    }
+    if (c === '"' && field.trim() === '') {
+      quoted = true;
+      field = '';
+      fieldStarted = true;
+    } else if (c === delimiter) {
+      fields.push(field);
+      field = '';
+      fieldStarted = true;
+    } else if (c === '\n' || c === '\r') {
+      if (c === '\r' && body[i + 1] === '\n') i++;
+      endRecord();
+      line++;
+      recordLine = line;
+    } else {
+      field += c;
+    }
+  }
+  if (quoted) problems.push({ code: 'parse', path: `row ${recordLine}`, severity: 'error', message: 'a quoted field is not closed: a double quote (") is missing' });
+  if (field !== '' || fields.length > 0 || fieldStarted) endRecord();
+  return { records, problems };
+}
+
+/** Column of the member list: its name in the header and the quantity of its unit (null: no unit). */
+interface ColumnSpec {
+  readonly key: 'id' | 'name' | 'span' | 'supports' | 'section' | 'dead' | 'superimposed' | 'live' | 'notes';
+  readonly quantity: Quantity | null;
+  readonly required: boolean;
+  readonly aliases: readonly string[];
+}
+
+const COLUMNS: readonly ColumnSpec[] = [
+  { key: 'id', quantity: null, required: true, aliases: ['id', 'member id', 'member'] },
+  { key: 'name', quantity: null, required: false, aliases: ['name', 'mark'] },
+  { key: 'span', quantity: 'spanLength', required: true, aliases: ['span', 'length'] },
+  { key: 'supports', quantity: null, required: true, aliases: ['supports', 'support'] },
+  { key: 'section', quantity: null, required: true, aliases: ['section', 'section id'] },
+  { key: 'dead', quantity: 'lineLoad', required: false, aliases: ['dead', 'dead load'] },
+  { key: 'superimposed', quantity: 'lineLoad', required: false, aliases: ['superimposed', 'superimposed dead', 'superimposed dead load', 'sdl'] },
+  { key: 'live', quantity: 'lineLoad', required: false, aliases: ['live', 'live load'] },
+  { key: 'notes', quantity: null, required: false, aliases: ['notes', 'description'] },
+];
+
+/** Unit labels accepted in headers, by quantity (ASCII spellings included). */
+const HEADER_UNITS: Readonly<Record<string, Readonly<Record<string, UnitId>>>> = {
+  spanLength: { mm: 'mm', m: 'm', in: 'in', ft: 'ft' },
+  lineLoad: { 'n/mm': 'N/mm', 'kn/m': 'kN/m', 'kip/ft': 'kip/ft', klf: 'kip/ft' },
+};
+/** Line loads in lb/ft (plf) are accepted too: 1 lb/ft = 0.001 kip/ft. */
+const PLF = ['lb/ft', 'plf', 'lbf/ft'];
+
+const SUPPORT_WORDS: Readonly<Record<string, SupportType>> = {
+  'simply-supported': 'simply-supported', 'simply supported': 'simply-supported', simple: 'simply-supported', ss: 'simply-supported',
+  cantilever: 'cantilever',
+  'fixed-fixed': 'fixed-fixed', 'fixed fixed': 'fixed-fixed', fixed: 'fixed-fixed', 'fixed-ended': 'fixed-fixed',
+  'propped-cantilever': 'propped-cantilever', 'propped cantilever': 'propped-cantilever', propped: 'propped-cantilever',
+};
+
+export interface MemberCsvOptions {
+  /** Ids of the sections the members may use (when given, unknown section ids are row errors). */
+  readonly sectionIds?: ReadonlySet<string>;
+  /** Ids already used by members of the project (a row reusing one is an error). */
+  readonly existingMemberIds?: ReadonlySet<string>;
+  /** Code basis, for the default deflection limit cases. */
+  readonly codeBasis?: CodeBasis;
+  /** Service and capacity settings given to every imported member (defaults below). */
+  readonly service?: ServiceSettings;
+  readonly capacity?: CapacitySettings;
+}
+
+/** Service settings of imported members unless given: ψ = 0.25, 60 months, the code's floor limits. */
+export function defaultImportService(code: CodeBasis = 'ACI 318-19'): ServiceSettings {
+  return {
+    sustainedLiveFraction: 0.25,
+    durationMonths: 60,
+    limitCases: code === 'ACI 318-19' ? ['aci-floor-immediate', 'aci-insensitive-after-attachment'] : ['en-appearance', 'en-after-construction'],
+  };
+}
+
+const DEFAULT_CAPACITY: CapacitySettings = { pattern: 'proportional', hingeLengthMethod: 'priestley-2007' };
+
+function headerParts(cell: string): { name: string; unit: string | null } {
+  const m = /^(.*?)\s*[[(]\s*([^\])]*)\s*[\])]\s*$/.exec(cell.trim());
+  return m ? { name: m[1]!.trim().toLowerCase(), unit: m[2]!.trim() } : { name: cell.trim().toLowerCase(), unit: null };
+}
+
+const NUMBER_PATTERN = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+
+/** A number written in a cell (decimal comma allowed when `decimalComma`), or null. */
+function cellNumber(cell: string, decimalComma: boolean): number | null {
+  const text = (decimalComma ? cell.replace(',', '.') : cell).trim();
+  if (!NUMBER_PATTERN.test(text)) return null;
+  const value = Number(text);
+  return Number.isFinite(value) ? value : null;
+}
+
+/**
+ * Reads a member list from CSV text (see the file comment for the columns). Returns the members of the
+ * rows without errors, in file order, in internal units (span mm, line loads N/mm), each with one zone
+ * over the whole span; and every problem, row by row. Never throws.
+ */
+export function importMembersCsv(text: string, options: MemberCsvOptions = {}): { members: MemberDefinition[]; diagnostics: Diagnostic[] } {
+  const diagnostics: Diagnostic[] = [];
+  const firstLine = text.replace(/^\uFEFF/, '').split(/\r?\n/, 1)[0] ?? '';
+  const semicolons = firstLine.includes(';') && !firstLine.includes(',');
+  const delimiter = semicolons ? ';' : ',';
+  const { records, problems } = parseCsv(text, delimiter);
+  diagnostics.push(...problems);
+  const header = records[0];
+  if (!header) return { members: [], diagnostics: [...diagnostics, { code: 'required', path: 'row 1', severity: 'error', message: 'the file is empty: a header row naming the columns is required' }] };
+
+  // Header: find each column and its unit.
+  const columnAt = new Map<ColumnSpec['key'], { index: number; toInternal: (v: number) => number; unit: string }>();
+  let headerOk = true;
+  header.fields.forEach((cell, index) => {
+    const { name, unit } = headerParts(cell);
+    const spec = COLUMNS.find((c) => c.aliases.includes(name));
+    const at = `row ${header.line}, column ${index + 1}`;
+    if (!spec) {
+      diagnostics.push({ code: 'unknown-field', path: at, severity: 'warning', message: `"${cell.trim()}" is not a column Hingeline reads; it is ignored (columns: ${COLUMNS.map((c) => c.key).join(', ')})` });
+      return;
+    }
+    if (columnAt.has(spec.key)) {
+      diagnostics.push({ code: 'duplicate-id', path: at, severity: 'error', message: `the column ${spec.key} appears twice` });
+      headerOk = false;
+      return;
+    }
+    if (spec.quantity === null) {
+      columnAt.set(spec.key, { index, toInternal: (v) => v, unit: '' });
+      return;
+    }
+    const accepted = HEADER_UNITS[spec.quantity]!;
+    const unitKey = unit?.toLowerCase().replace(/\s+/g, '') ?? '';
+    const example = spec.quantity === 'spanLength' ? `${spec.key} [ft] or ${spec.key} [m]` : `${spec.key} [kip/ft] or ${spec.key} [kN/m]`;
+    if (!unit) {
+      diagnostics.push({ code: 'required', path: `row ${header.line}, column ${spec.key}`, severity: 'error', message: `the header must name the unit of the column, e.g. "${example}"` });
+      headerOk = false;
+    } else if (spec.quantity === 'lineLoad' && PLF.includes(unitKey)) {
+      columnAt.set(spec.key, { index, toInternal: (v) => fromDisplay('lineLoad', v / 1000, 'US', 'kip/ft'), unit: 'lb/ft' });
+    } else if (accepted[unitKey]) {
+      const id = accepted[unitKey]!;
+      columnAt.set(spec.key, { index, toInternal: (v) => fromDisplay(spec.quantity!, v, 'SI', id), unit: UNITS[id].label });
+    } else {
+      diagnostics.push({ code: 'unknown-option', path: `row ${header.line}, column ${spec.key}`, severity: 'error', message: `unit "${unit}" is not one Hingeline reads here; use ${Object.keys(accepted).concat(spec.quantity === 'lineLoad' ? PLF : []).join(', ')}` });
+      headerOk = false;
+    }
+  });
+  for (const spec of COLUMNS) {
+    if (spec.required && !columnAt.has(spec.key) && !diagnostics.some((d) => d.path.endsWith(`column ${spec.key}`))) {
+      diagnostics.push({ code: 'required', path: `row ${header.line}`, severity: 'error', message: `the header has no ${spec.key} column (required columns: ${COLUMNS.filter((c) => c.required).map((c) => c.key).join(', ')})` });
+      headerOk = false;
+    }
+  }
+  if (!headerOk) return { members: [], diagnostics };
+
+  const members: MemberDefinition[] = [];
+  const seen = new Map<string, number>();
+  const service = options.service ?? defaultImportService(options.codeBasis);
+  const capacity = options.capacity ?? DEFAULT_CAPACITY;
+  for (const record of records.slice(1)) {
+    const rowErrors: Diagnostic[] = [];
+    const error = (column: string, code: Diagnostic['code'], message: string) => rowErrors.push({ code, path: `row ${record.line}, column ${column}`, severity: 'error', message });
+    if (record.fields.length !== header.fields.length) {
+      rowErrors.push({ code: 'schema', path: `row ${record.line}`, severity: 'error', message: `has ${record.fields.length} field${record.fields.length === 1 ? '' : 's'}, the header has ${header.fields.length} (a missing or extra separator, or an unquoted comma in a name?)` });
+      diagnostics.push(...rowErrors);
+      continue;
+    }
+    const cell = (key: ColumnSpec['key']) => {
+      const c = columnAt.get(key);
+      return c ? record.fields[c.index]!.trim() : '';
+    };
+    const id = cell('id');
+    if (id === '') error('id', 'required', 'every member needs an id');
+    else if (seen.has(id)) error('id', 'duplicate-id', `"${id}" is already used on row ${seen.get(id)}`);
+    else if (options.existingMemberIds?.has(id)) error('id', 'duplicate-id', `"${id}" is already the id of a member of the project`);
+    if (id !== '' && !seen.has(id)) seen.set(id, record.line);
+
+    const spanColumn = columnAt.get('span')!;
+    const spanText = cell('span');
+    const spanValue = cellNumber(spanText, semicolons);
+    let span = NaN;
+    if (spanValue === null) error('span', spanText === '' ? 'required' : 'not-a-number', spanText === '' ? `is required (a number in ${spanColumn.unit})` : `must be a number in ${spanColumn.unit}, got ${JSON.stringify(spanText)}`);
+    else if (!(spanValue > 0)) error('span', 'must-be-positive', `must be greater than 0 ${spanColumn.unit}, got ${spanText} ${spanColumn.unit}`);
+    else {
+      span = spanColumn.toInternal(spanValue);
+      if (span > 60000) error('span', 'out-of-range', `must be at most ${formatNumber(60000 / (spanColumn.toInternal(1)), 4)} ${spanColumn.unit} (60 m), got ${spanText} ${spanColumn.unit}`);
+    }
+
+    const supportsText = cell('supports');
+    const supports = SUPPORT_WORDS[supportsText.toLowerCase()];
+    if (!supports) error('supports', supportsText === '' ? 'required' : 'unknown-option', `must be one of simply-supported, cantilever, fixed-fixed, propped-cantilever (or simple, fixed, propped), got ${JSON.stringify(supportsText)}`);
+
+    const section = cell('section');
+    if (section === '') error('section', 'required', 'every member needs a section id');
+    else if (options.sectionIds && !options.sectionIds.has(section)) error('section', 'unknown-reference', `no section with id "${section}" in the project (sections: ${[...options.sectionIds].slice(0, 12).join(', ')}${options.sectionIds.size > 12 ? ', …' : ''})`);
+
+    const loads: MemberLoad[] = [];
+    for (const key of ['dead', 'superimposed', 'live'] as const) {
+      const column = columnAt.get(key);
+      if (!column) continue;
+      const raw = cell(key);
+      if (raw === '') continue;
+      const value = cellNumber(raw, semicolons);
+      if (value === null) error(key, 'not-a-number', `must be a number in ${column.unit} (or empty for none), got ${JSON.stringify(raw)}`);
+      else if (value < 0) error(key, 'out-of-range', `must be 0 or more ${column.unit} (loads act downward), got ${raw} ${column.unit}`);
+      else if (column.toInternal(value) > 1e4) error(key, 'out-of-range', `must be at most ${formatNumber(1e4 / column.toInternal(1), 4)} ${column.unit}, got ${raw} ${column.unit}`);
+      else if (value > 0) loads.push({ kind: 'uniform', loadCase: key, magnitude: column.toInternal(value), label: `${key} load (imported)` });
+    }
+
+    if (rowErrors.length > 0) {
+      diagnostics.push(...rowErrors);
+      continue;
+    }
+    const name = cell('name') || id;
+    const notes = cell('notes');
+    members.push({
+      id,
+      name,
+      supports: supports!,
+      span,
+      zones: [{ from: 0, to: span, sectionId: section }],
+      loads,
+      service,
+      capacity,
+      ...(notes ? { notes } : {}),
+    });
+  }
+  return { members, diagnostics };
+}
+
+// --- writing ----------------------------------------------------------------------------------------
+
+/** One CSV field: numbers to nine significant figures, empty when missing or not finite; quoted when needed; text that a spreadsheet would run as a formula is prefixed with '. */
+export function csvField(value: string | number | null | undefined, options: { text?: boolean } = {}): string {
+  if (value === null || value === undefined) return '';
+  // Nine significant figures, shortest form (1234.5, 0.0035, 1e-9), -0 as 0.
+  if (typeof value === 'number') return Number.isFinite(value) ? String(Number(value.toPrecision(9)) + 0) : '';
+  // A text cell starting with = + - @ would be run as a formula by spreadsheets (CSV injection).
+  const safe = options.text !== false && /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
+  return /[",\r\n]|^\s|\s$/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
+}
+
+/** Rows to CSV text: CRLF line ends (RFC 4180), a final line end. */
+export function csvText(rows: readonly (readonly (string | number | null | undefined)[])[]): string {
+  return rows.map((row) => row.map((v) => csvField(v)).join(',')).join('\r\n') + '\r\n';
+}
+
+const displaySystem = (system: UnitSystem): DisplaySystem => (system === 'us' ? 'US' : 'SI');
+
+/** A header cell with its unit: `span [ft]`; dimensionless columns get `[-]`. */
+function head(label: string, quantity: Quantity | null, system: UnitSystem): string {
+  if (quantity === null) return label;
+  const unit = unitLabel(quantity, displaySystem(system));
+  return `${label} [${unit === '' ? '-' : unit}]`;
+}
+
+const shown = (quantity: Quantity, value: number | null | undefined, system: UnitSystem): number | null =>
+  typeof value === 'number' && Number.isFinite(value) ? toDisplay(quantity, value, displaySystem(system)) : null;
+
+/**
+ * Results summary, one row per member, in the display units of `system` (named in the header):
+ * id, name, supports, span, status, My, Mu, φu/φy, μΔ, θp, ultimate load factor, governing
+ * deflection and its limit, limit case, deflection and strength utilisations, warnings, governing mode.
+ */
+export function resultsSummaryCsv(members: readonly MemberResult[], system: UnitSystem, project?: Project): string {
+  const rows: (string | number | null)[][] = [[
+    'member id', 'name', 'supports', head('span', 'spanLength', system), 'status',
+    head('My', 'moment', system), head('Mu', 'moment', system), 'φu/φy [-]', 'μΔ [-]', head('θp', 'rotation', system),
+    'ultimate load factor [-]', head('deflection', 'deflection', system), head('deflection limit', 'deflection', system), 'limit case',
+    'deflection utilisation [-]', 'strength utilisation [-]', 'warnings', 'governing mode',
+  ]];
+  for (const result of members) {
+    const k = memberKeyResults(result, project?.members.find((m) => m.id === result.memberId));
+    rows.push([
+      k.memberId, k.memberName, k.supports, shown('spanLength', k.span, system), k.status,
+      shown('moment', k.yieldMoment, system), shown('moment', k.ultimateMoment, system), k.curvatureDuctility, k.displacementDuctility,
+      shown('rotation', k.plasticRotationCapacity, system), k.ultimateLoadFactor,
+      shown('deflection', k.deflection?.deflection, system), shown('deflection', k.deflection?.limit, system), k.deflection?.limitCase ?? null,
+      k.deflection?.utilisation ?? null, k.strengthUtilisation, k.warnings, k.governingMode,
+    ]);
+  }
+  return csvText(rows);
+}
+
+/** Moment–curvature points of one curve (magnitudes in the curve's bending direction). */
+export function momentCurvatureCsv(curve: MomentCurvatureResult, system: UnitSystem): string {
+  const rows: (string | number | null)[][] = [[
+    head('curvature', 'curvature', system), head('moment', 'moment', system), head('neutral axis depth', 'sectionLength', system),
+    'compression face strain [-]', 'tension face strain [-]', 'largest steel tensile strain [-]',
+  ]];
+  for (const p of curve.points) {
+    rows.push([shown('curvature', p.curvature, system), shown('moment', p.moment, system), shown('sectionLength', p.neutralAxisDepth, system), p.compressionFaceStrain, p.tensionFaceStrain, p.maxSteelTensileStrain]);
+  }
+  return csvText(rows);
+}
+
+/** Load–deflection points at the control point (deflection downward positive). */
+export function loadDeflectionCsv(points: readonly LoadDeflectionPoint[], system: UnitSystem): string {
+  const rows: (string | number | null)[][] = [['load factor [-]', head('total load', 'force', system), head('deflection', 'deflection', system), 'stage']];
+  for (const p of points) rows.push([p.loadFactor, shown('force', p.totalLoad, system), shown('deflection', p.deflection, system), p.stage]);
+  return csvText(rows);
+}
+
+/** Moment, curvature and deflection along the span at one load level. */
+export function spanDistributionCsv(distribution: SpanDistribution, system: UnitSystem): string {
+  const rows: (string | number | null)[][] = [[head('x', 'spanLength', system), head('moment', 'moment', system), head('curvature', 'curvature', system), head('deflection', 'deflection', system)]];
+  distribution.x.forEach((x, i) => {
+    rows.push([shown('spanLength', x, system), shown('moment', distribution.moment[i], system), shown('curvature', distribution.curvature[i], system), shown('deflection', distribution.deflection[i], system)]);
+  });
+  return csvText(rows);
+}

@@ -1,0 +1,145 @@
+/**
+ * The few numbers per member that a results table, a CSV summary and the command line show, picked
+ * (never recomputed) from a MemberResult. Internal units: moments N·mm, lengths and deflections mm,
+ * rotations rad, ratios dimensionless.
+ *
+ * Which section speaks for the member: the critical section of the plastic hinge that is nearest to
+ * where the member reaches its ultimate state (the hinge that ends the load–deflection curve), in that
+ * hinge's bending direction; without hinges, the section of the zone where the ultimate state is
+ * reached, in the direction of the moment there (sagging for spans, hogging for a cantilever when
+ * that is not known).
+ */
+import type { MemberDefinition } from '../member/definition.ts';
+import type { MemberResult, PlasticHinge, DeflectionCheck } from '../member/results.ts';
+import type { MomentCurvatureResult } from '../section/results.ts';
+
+export interface CriticalSection {
+  readonly sectionId: string;
+  readonly sectionName: string;
+  readonly direction: 'sagging' | 'hogging';
+  /** Position of the critical section, mm from the left support (null when not known). */
+  readonly position: number | null;
+}
+
+export interface MemberKeyResults {
+  readonly memberId: string;
+  readonly memberName: string;
+  readonly supports: MemberResult['supports'];
+  /** Span, mm. */
+  readonly span: number;
+  readonly status: MemberResult['status'];
+  readonly governingMode: string;
+  readonly critical: CriticalSection | null;
+  /** Idealised (nominal) yield moment My of the critical section, N·mm (bilinear idealisation). */
+  readonly yieldMoment: number | null;
+  /** Ultimate moment Mu of the critical section at its ultimate curvature, N·mm. */
+  readonly ultimateMoment: number | null;
+  /** Curvature ductility φu/φy of the critical section. */
+  readonly curvatureDuctility: number | null;
+  /** Displacement ductility μΔ of the member. */
+  readonly displacementDuctility: number | null;
+  /** Plastic rotation capacity θp of the governing hinge, rad. */
+  readonly plasticRotationCapacity: number | null;
+  /** Load factor at ultimate on the load pattern (× service load). */
+  readonly ultimateLoadFactor: number | null;
+  /** The deflection check with the highest utilisation (null when none was asked for or analysed). */
+  readonly deflection: {
+    readonly limitCase: DeflectionCheck['limitCase'];
+    readonly description: string;
+    /** Governing computed deflection and its allowed value, mm. */
+    readonly deflection: number;
+    readonly limit: number;
+    /** Denominator of ℓ/ratio. */
+    readonly ratio: number;
+    readonly utilisation: number;
+    readonly pass: boolean;
+  } | null;
+  /** Deflection checks that fail / all deflection checks. */
+  readonly deflectionChecksFailed: number;
+  readonly deflectionChecks: number;
+  /** Flexural strength utilisation (demand / design resistance) and outcome. */
+  readonly strengthUtilisation: number | null;
+  readonly strengthPass: boolean | null;
+  readonly warnings: number;
+  readonly errors: readonly { readonly path: string; readonly message: string }[];
+}
+
+const finiteOrNull = (v: number | null | undefined): number | null => (typeof v === 'number' && Number.isFinite(v) ? v : null);
+
+function governingHinge(result: MemberResult): PlasticHinge | undefined {
+  const hinges = result.ductility.hinges;
+  if (hinges.length === 0) return undefined;
+  const ultimate = result.loadDeflection.events.find((e) => e.kind === 'ultimate');
+  if (!ultimate) return hinges[0];
+  return hinges.reduce((best, h) => (Math.abs(h.position - ultimate.position) < Math.abs(best.position - ultimate.position) ? h : best));
+}
+
+/** Bending direction at `x` in the distribution at ultimate (sign of the moment there), if known. */
+function directionAtUltimate(result: MemberResult, x: number): 'sagging' | 'hogging' | undefined {
+  const d = result.distributions.find((s) => s.label === 'ultimate');
+  if (!d || d.x.length === 0) return undefined;
+  let nearest = 0;
+  d.x.forEach((xi, i) => {
+    if (Math.abs(xi - x) < Math.abs(d.x[nearest]! - x)) nearest = i;
+  });
+  const moment = d.moment[nearest];
+  return moment === undefined || moment === 0 ? undefined : moment > 0 ? 'sagging' : 'hogging';
+}
+
+function criticalSection(result: MemberResult, definition?: MemberDefinition): { critical: CriticalSection; curve: MomentCurvatureResult | undefined; hinge?: PlasticHinge } | null {
+  const hinge = governingHinge(result);
+  if (hinge) {
+    const section = result.sections.find((s) => s.sectionId === hinge.sectionId);
+    return {
+      critical: { sectionId: hinge.sectionId, sectionName: section?.sectionName ?? hinge.sectionId, direction: hinge.direction, position: hinge.position },
+      curve: section?.[hinge.direction],
+      hinge,
+    };
+  }
+  // No hinge: the section where the member reaches its ultimate state, in the direction of the moment there.
+  const ultimate = result.loadDeflection.events.find((e) => e.kind === 'ultimate');
+  const zone = ultimate && definition ? definition.zones.find((z) => ultimate.position >= z.from && ultimate.position <= z.to) : undefined;
+  const direction = (ultimate && directionAtUltimate(result, ultimate.position)) ?? (result.supports === 'cantilever' ? 'hogging' : 'sagging');
+  const section = (zone && result.sections.find((s) => s.sectionId === zone.sectionId)) ?? result.sections.find((s) => s[direction]) ?? result.sections[0];
+  if (!section) return null;
+  return {
+    critical: { sectionId: section.sectionId, sectionName: section.sectionName, direction, position: zone && ultimate ? ultimate.position : null },
+    curve: section[direction],
+  };
+}
+
+/**
+ * Picks the key results of one member (see the file comment for the choice of section).
+ * @param definition the member's definition, which tells the section at a position when no hinge formed
+ */
+export function memberKeyResults(result: MemberResult, definition?: MemberDefinition): MemberKeyResults {
+  const picked = criticalSection(result, definition);
+  const curve = picked?.curve;
+  const checks = result.service?.checks ?? [];
+  const worst = checks.reduce<DeflectionCheck | undefined>((a, b) => (!a || b.utilisation > a.utilisation ? b : a), undefined);
+  const ultimate = result.loadDeflection.events.find((e) => e.kind === 'ultimate');
+  return {
+    memberId: result.memberId,
+    memberName: result.memberName,
+    supports: result.supports,
+    span: result.span,
+    status: result.status,
+    governingMode: result.governingMode,
+    critical: picked?.critical ?? null,
+    yieldMoment: finiteOrNull(curve?.bilinear?.yieldMoment ?? curve?.keyPoints.firstYield?.moment),
+    ultimateMoment: finiteOrNull(curve?.bilinear?.ultimateMoment ?? curve?.keyPoints.ultimate?.moment),
+    curvatureDuctility: finiteOrNull(curve?.curvatureDuctility),
+    displacementDuctility: finiteOrNull(result.ductility.displacementDuctility),
+    plasticRotationCapacity: finiteOrNull(picked?.hinge?.rotationCapacity),
+    ultimateLoadFactor: finiteOrNull(ultimate?.loadFactor),
+    deflection: worst && Number.isFinite(worst.governing) && Number.isFinite(worst.limit) && Number.isFinite(worst.utilisation)
+      ? { limitCase: worst.limitCase, description: worst.description, deflection: worst.governing, limit: worst.limit, ratio: worst.ratio, utilisation: worst.utilisation, pass: worst.pass }
+      : null,
+    deflectionChecksFailed: checks.filter((c) => !c.pass).length,
+    deflectionChecks: checks.length,
+    strengthUtilisation: finiteOrNull(result.strength?.utilisation),
+    strengthPass: result.strength ? result.strength.pass : null,
+    warnings: result.warnings.length,
+    errors: result.errors,
+  };
+}

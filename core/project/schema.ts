@@ -1,0 +1,389 @@
+/**
+ * The structure of a version-2 project file as zod schemas, mirroring core/project/types.ts and the
+ * types it uses (MaterialSpec, SectionDefinition with every SectionShape, MemberDefinition) field for
+ * field. The schema checks types and option names only; ranges and meaning (a span above zero,
+ * zones that tile the span, bars inside the concrete…) are checked by core/project/validate.ts with
+ * the engine's own validators, so that a rule lives in one place.
+ *
+ * Every object is loose: fields the program does not know are kept as they are, so that a file written
+ * by a newer version survives a load → save round trip. validate.ts reports them as `unknown-field`
+ * warnings (found with `unknownFields`), so nothing is dropped or ignored silently.
+ *
+ * Units: every number is in internal units (mm, N, MPa, N/mm); see docs/project-format.md.
+ */
+import { z } from 'zod';
+import type { Project } from './types.ts';
+import { PROJECT_FORMAT, PROJECT_VERSION } from './types.ts';
+
+const number = z.number();
+const text = z.string();
+const list = <T extends z.ZodType>(item: T) => z.array(item).readonly();
+
+// --- materials ----------------------------------------------------------------------------------
+
+/** Options of ConcreteSpec.compressionModel (core/materials/specs.ts). */
+export const CONCRETE_COMPRESSION_MODEL_NAMES = [
+  'hognestad', 'modified-kent-park', 'mander', 'popovics', 'thorenfeldt-collins', 'en1992-nonlinear', 'en1992-parabola-rectangle',
+] as const;
+/** Options of ConcreteSpec.tensionModel. */
+export const CONCRETE_TENSION_MODEL_NAMES = ['none', 'linear-brittle', 'tension-stiffening'] as const;
+/** Options of SteelSpec.model. */
+export const STEEL_MODEL_NAMES = ['elastic-plastic', 'bilinear', 'park-paulay', 'mander-power'] as const;
+
+/** ConcreteSpec: strengths and moduli in MPa, strains dimensionless, density kg/m³. */
+export const concreteSpecSchema = z.looseObject({
+  kind: z.literal('concrete'),
+  id: text,
+  name: text,
+  strength: number,
+  compressionModel: z.enum(CONCRETE_COMPRESSION_MODEL_NAMES),
+  tensionModel: z.enum(CONCRETE_TENSION_MODEL_NAMES),
+  elasticModulus: number.optional(),
+  tensileStrength: number.optional(),
+  crushingStrain: number.optional(),
+  peakFactor: number.optional(),
+  spallingStrain: number.optional(),
+  lightweightFactor: number.optional(),
+  tensionStiffeningCoefficient: number.optional(),
+  density: number.optional(),
+  creepCoefficient: number.optional(),
+  shrinkageStrain: number.optional(),
+});
+
+/** SteelSpec: stresses and moduli in MPa, strains dimensionless. */
+export const steelSpecSchema = z.looseObject({
+  kind: z.literal('steel'),
+  id: text,
+  name: text,
+  model: z.enum(STEEL_MODEL_NAMES),
+  yieldStress: number,
+  ultimateStress: number,
+  elasticModulus: number.optional(),
+  hardeningStrain: number.optional(),
+  ruptureStrain: number.optional(),
+  hardeningModulus: number.optional(),
+});
+
+/** FrpSpec: modulus in MPa, strain and factor dimensionless. */
+export const frpSpecSchema = z.looseObject({
+  kind: z.literal('frp'),
+  id: text,
+  name: text,
+  tensileModulus: number,
+  ruptureStrain: number,
+  environmentalFactor: number,
+});
+
+export const materialSpecSchema = z.discriminatedUnion('kind', [concreteSpecSchema, steelSpecSchema, frpSpecSchema]);
+
+// --- sections -----------------------------------------------------------------------------------
+
+const pointSchema = z.looseObject({ x: number, y: number });
+
+const flanged = <K extends string>(kind: K) => z.looseObject({ kind: z.literal(kind), height: number, webWidth: number, flangeWidth: number, flangeThickness: number });
+
+/** Every SectionShape kind (core/section/shapes.ts), dimensions in mm. */
+export const sectionShapeSchema = z.discriminatedUnion('kind', [
+  z.looseObject({ kind: z.literal('rectangle'), width: number, height: number }),
+  flanged('tee'),
+  flanged('inverted-tee'),
+  z.looseObject({ kind: z.literal('ell'), height: number, webWidth: number, flangeWidth: number, flangeThickness: number, flangeSide: z.enum(['left', 'right']) }),
+  z.looseObject({
+    kind: z.literal('i-shape'), height: number, webWidth: number,
+    topFlangeWidth: number, topFlangeThickness: number, bottomFlangeWidth: number, bottomFlangeThickness: number,
+  }),
+  z.looseObject({ kind: z.literal('box'), height: number, width: number, topThickness: number, bottomThickness: number, wallThickness: number }),
+  z.looseObject({ kind: z.literal('polygon'), outline: list(pointSchema), voids: list(list(pointSchema)).optional() }),
+]);
+
+/** BarLayer: depth and diameter mm, area mm². */
+export const barLayerSchema = z.looseObject({
+  steelId: text,
+  depth: number,
+  count: number.optional(),
+  diameter: number.optional(),
+  area: number.optional(),
+  spread: z.enum(['web', 'chord']).optional(),
+  label: text.optional(),
+});
+
+/** HoopSet: diameter, spacing and cover mm. */
+export const hoopSetSchema = z.looseObject({
+  steelId: text,
+  diameter: number,
+  spacing: number,
+  verticalLegs: number,
+  horizontalLegs: number.optional(),
+  clearCover: number,
+  confineCore: z.boolean(),
+});
+
+/** SectionDefinition: axial force N (compression positive). */
+export const sectionDefinitionSchema = z.looseObject({
+  id: text,
+  name: text,
+  shape: sectionShapeSchema,
+  concreteId: text,
+  bars: list(barLayerSchema),
+  hoops: hoopSetSchema.optional(),
+  axialForce: number.optional(),
+  notes: text.optional(),
+});
+
+// --- members ------------------------------------------------------------------------------------
+
+/** Options of MemberDefinition.supports. */
+export const SUPPORT_TYPES = ['simply-supported', 'cantilever', 'fixed-fixed', 'propped-cantilever'] as const;
+/** Options of MemberLoad.loadCase. */
+export const LOAD_CASES = ['dead', 'superimposed', 'live'] as const;
+/** Options of ServiceSettings.limitCases. */
+export const DEFLECTION_LIMIT_CASES = [
+  'aci-roof-immediate', 'aci-floor-immediate', 'aci-sensitive-after-attachment', 'aci-insensitive-after-attachment',
+  'en-appearance', 'en-after-construction', 'custom',
+] as const;
+/** Options of CapacitySettings.hingeLengthMethod. */
+export const HINGE_LENGTH_METHODS = ['priestley-2007', 'paulay-priestley-1992', 'mattock-1967', 'corley-1966', 'user'] as const;
+
+const loadCase = z.enum(LOAD_CASES);
+
+/** MemberLoad: uniform N/mm over [from, to] mm, or point N at `position` mm. */
+export const memberLoadSchema = z.discriminatedUnion('kind', [
+  z.looseObject({ kind: z.literal('uniform'), loadCase, magnitude: number, from: number.optional(), to: number.optional(), label: text.optional() }),
+  z.looseObject({ kind: z.literal('point'), loadCase, magnitude: number, position: number, label: text.optional() }),
+]);
+
+/** MemberZone: from/to mm from the left support. */
+export const memberZoneSchema = z.looseObject({ from: number, to: number, sectionId: text });
+
+export const loadFactorsSchema = z.looseObject({ dead: number, superimposed: number, live: number });
+
+export const serviceSettingsSchema = z.looseObject({
+  sustainedLiveFraction: number,
+  durationMonths: number,
+  limitCases: list(z.enum(DEFLECTION_LIMIT_CASES)),
+  customLimitRatio: number.optional(),
+  includeShrinkage: z.boolean().optional(),
+});
+
+export const capacitySettingsSchema = z.looseObject({
+  pattern: z.enum(['proportional', 'live-only']),
+  hingeLengthMethod: z.enum(HINGE_LENGTH_METHODS),
+  userHingeLength: number.optional(),
+});
+
+// --- existing beams and retrofit (core/retrofit/types.ts) ---------------------------------------
+
+/** CoreTestSet: mean in-place strength MPa. */
+export const coreTestSetSchema = z.looseObject({ concreteId: text.optional(), meanStrength: number, count: number, coefficientOfVariation: number, note: text.optional() });
+
+/** SteelTestData: stresses and modulus MPa. */
+export const steelTestDataSchema = z.looseObject({
+  steelId: text,
+  source: z.enum(['coupons', 'era-default']),
+  yieldStress: number.optional(),
+  ultimateStress: number.optional(),
+  ruptureStrain: number.optional(),
+  elasticModulus: number.optional(),
+  note: text.optional(),
+});
+
+/** Defect: section loss in percent of a bar layer (by index) or the hoops; cover loss depth, from, to mm. */
+export const defectSchema = z.discriminatedUnion('kind', [
+  z.looseObject({ kind: z.literal('section-loss'), sectionId: text.optional(), layer: z.union([number, z.literal('hoops')]), lossPercent: number, note: text.optional() }),
+  z.looseObject({
+    kind: z.literal('cover-loss'), sectionId: text.optional(), face: z.enum(['top', 'bottom', 'left', 'right']), depth: number,
+    from: number.optional(), to: number.optional(), note: text.optional(),
+  }),
+]);
+
+/** AsFoundCondition. */
+export const asFoundConditionSchema = z.looseObject({
+  cores: list(coreTestSetSchema).optional(),
+  steel: list(steelTestDataSchema).optional(),
+  defects: list(defectSchema).optional(),
+  notes: text.optional(),
+});
+
+/** InstallationLoad: factors on the service load cases. */
+export const installationLoadSchema = z.looseObject({ dead: number.optional(), superimposed: number.optional(), live: number.optional() });
+
+const schemeBase = { id: text, name: text, sectionIds: list(text).optional(), repairSpalls: z.boolean().optional(), note: text.optional() };
+const installationStrainMethod = z.enum(['cracked-elastic', 'moment-curvature']);
+
+/** StrengtheningScheme: FRP (ply thickness, width mm), steel plate (thickness, width mm), concrete layer (thickness, width mm). */
+export const strengtheningSchemeSchema = z.discriminatedUnion('kind', [
+  z.looseObject({
+    kind: z.literal('frp'), ...schemeBase, frpId: text, plyThickness: number, plies: number, width: number,
+    face: z.enum(['bottom', 'top']).optional(), installation: installationLoadSchema.optional(), installationStrainMethod: installationStrainMethod.optional(),
+  }),
+  z.looseObject({
+    kind: z.literal('steel-plate'), ...schemeBase, steelId: text, thickness: number, width: number,
+    face: z.enum(['bottom', 'top']).optional(), installation: installationLoadSchema.optional(), installationStrainMethod: installationStrainMethod.optional(),
+  }),
+  z.looseObject({
+    kind: z.literal('concrete-layer'), ...schemeBase, face: z.enum(['top', 'bottom']), thickness: number, width: number.optional(), concreteId: text,
+    bars: list(z.looseObject({ steelId: text, distanceFromFace: number, count: number.optional(), diameter: number.optional(), area: number.optional(), label: text.optional() })),
+  }),
+]);
+
+/** MemberDefinition: span mm. */
+export const memberDefinitionSchema = z.looseObject({
+  id: text,
+  name: text,
+  supports: z.enum(SUPPORT_TYPES),
+  span: number,
+  zones: list(memberZoneSchema),
+  loads: list(memberLoadSchema),
+  includeSelfWeight: z.boolean().optional(),
+  strengthFactors: loadFactorsSchema.optional(),
+  service: serviceSettingsSchema,
+  capacity: capacitySettingsSchema,
+  notes: text.optional(),
+  asFound: asFoundConditionSchema.optional(),
+  schemes: list(strengtheningSchemeSchema).optional(),
+});
+
+// --- project ------------------------------------------------------------------------------------
+
+/** Options of ProjectInfo.codeBasis. */
+export const CODE_BASIS_NAMES = ['ACI 318-19', 'EN 1992-1-1'] as const;
+/** Options of ProjectInfo.unitSystem. */
+export const UNIT_SYSTEM_NAMES = ['si', 'us'] as const;
+
+export const projectInfoSchema = z.looseObject({
+  name: text,
+  number: text,
+  description: text,
+  engineer: text,
+  checker: text,
+  revision: text,
+  date: text,
+  codeBasis: z.enum(CODE_BASIS_NAMES),
+  unitSystem: z.enum(UNIT_SYSTEM_NAMES),
+});
+
+export const analysisSettingsSchema = z.looseObject({
+  momentDropFraction: number,
+  bilinearMethod: z.enum(['priestley-2007', 'equal-energy']),
+  stations: number,
+});
+
+/** A whole version-2 project file. */
+export const projectSchema = z.looseObject({
+  format: z.literal(PROJECT_FORMAT),
+  version: z.literal(PROJECT_VERSION),
+  info: projectInfoSchema,
+  materials: list(materialSpecSchema),
+  sections: list(sectionDefinitionSchema),
+  members: list(memberDefinitionSchema),
+  settings: analysisSettingsSchema,
+});
+
+/** What the schema produces, with unknown fields riding along. */
+export type ProjectFileData = z.output<typeof projectSchema>;
+
+// The schema's output is a Project: a field added to the types without the schema fails to compile here.
+const _schemaOutputIsAProject = (data: ProjectFileData): Project => data;
+void _schemaOutputIsAProject;
+
+// --- walking data along the schema ---------------------------------------------------------------
+
+/** Deepest nesting of arrays and objects a project file may have (the schema itself needs 7). */
+export const MAX_NESTING = 64;
+
+/** The known fields of an object schema, in schema order. */
+export type KnownFields = readonly string[];
+
+interface SchemaNode {
+  readonly def: { readonly type: string; readonly [key: string]: unknown };
+}
+
+function unwrap(schema: SchemaNode): SchemaNode {
+  let s = schema;
+  while (s.def.type === 'optional' || s.def.type === 'readonly' || s.def.type === 'nullable') s = s.def.innerType as SchemaNode;
+  return s;
+}
+
+function literalValues(schema: SchemaNode): unknown[] {
+  const s = unwrap(schema);
+  if (s.def.type === 'literal') return s.def.values as unknown[];
+  if (s.def.type === 'enum') return Object.values(s.def.entries as Record<string, unknown>);
+  return [];
+}
+
+const isPlainObject = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
+
+/**
+ * The schema node that describes `value` under `schema`, resolving discriminated unions by their
+ * discriminator. Returns null when the value matches no option.
+ */
+function resolve(schema: SchemaNode, value: unknown): SchemaNode | null {
+  const s = unwrap(schema);
+  if (s.def.type !== 'union') return s;
+  if (!isPlainObject(value)) return null;
+  const discriminator = s.def.discriminator as string | undefined;
+  const options = s.def.options as SchemaNode[];
+  if (!discriminator) return null;
+  return options.find((o) => literalValues((unwrap(o).def.shape as Record<string, SchemaNode>)[discriminator]!).includes(value[discriminator])) ?? null;
+}
+
+/**
+ * Visits every object of `value` that the schema describes, with its path (e.g.
+ * `['members', 3, 'zones', 0]`) and its known fields in schema order. Unknown subtrees are not
+ * entered, so the recursion is as deep as the schema (a few levels), whatever the data holds.
+ */
+export function walkKnownObjects(value: unknown, visit: (path: readonly (string | number)[], object: Record<string, unknown>, known: KnownFields) => void, schema: SchemaNode = projectSchema as unknown as SchemaNode): void {
+  const go = (node: SchemaNode, v: unknown, path: (string | number)[]) => {
+    const s = resolve(node, v);
+    if (!s) return;
+    if (s.def.type === 'object' && isPlainObject(v)) {
+      const shape = s.def.shape as Record<string, SchemaNode>;
+      visit(path, v, Object.keys(shape));
+      for (const [key, child] of Object.entries(shape)) if (key in v) go(child, v[key], [...path, key]);
+    } else if (s.def.type === 'array' && Array.isArray(v)) {
+      v.forEach((item, i) => go(s.def.element as SchemaNode, item, [...path, i]));
+    }
+  };
+  go(schema, value, []);
+}
+
+/** Fields of `value` (anywhere in the project) that the schema does not know, with their paths. */
+export function unknownFields(value: unknown): { path: readonly (string | number)[]; field: string }[] {
+  const found: { path: readonly (string | number)[]; field: string }[] = [];
+  walkKnownObjects(value, (path, object, known) => {
+    for (const key of Object.keys(object)) if (!known.includes(key)) found.push({ path, field: key });
+  });
+  return found;
+}
+
+/**
+ * A copy of `value` with the keys of every object in a stable order: known fields in schema order
+ * (the order docs/project-format.md lists them), then unknown fields sorted by code point, with
+ * unknown subtrees sorted the same way. Used by serializeProject so that saving is deterministic.
+ * Unknown subtrees deeper than MAX_NESTING levels are copied without sorting (parseProject refuses
+ * files nested that deep, so this only guards objects built in code).
+ */
+export function canonicalOrder(value: unknown, schema: SchemaNode = projectSchema as unknown as SchemaNode): unknown {
+  const sortedUnknown = (v: unknown, depth = 0): unknown => {
+    if (depth > MAX_NESTING) return v;
+    if (Array.isArray(v)) return v.map((item) => sortedUnknown(item, depth + 1));
+    if (!isPlainObject(v)) return v;
+    const out: Record<string, unknown> = {};
+    for (const key of Object.keys(v).sort()) out[key] = sortedUnknown(v[key], depth + 1);
+    return out;
+  };
+  const go = (node: SchemaNode | null, v: unknown): unknown => {
+    const s = node ? resolve(node, v) : null;
+    if (!s) return sortedUnknown(v);
+    if (s.def.type === 'object' && isPlainObject(v)) {
+      const shape = s.def.shape as Record<string, SchemaNode>;
+      const out: Record<string, unknown> = {};
+      for (const key of Object.keys(shape)) if (key in v && v[key] !== undefined) out[key] = go(shape[key]!, v[key]);
+      for (const key of Object.keys(v).filter((k) => !(k in shape)).sort()) out[key] = sortedUnknown(v[key]);
+      return out;
+    }
+    if (s.def.type === 'array' && Array.isArray(v)) return v.map((item) => go(s.def.element as SchemaNode, item));
+    return sortedUnknown(v);
+  };
+  return go(schema, value);
+}

@@ -1,0 +1,508 @@
+/**
+ * Validation of a (migrated) project file: every problem at once, each as a Diagnostic
+ * `{ code, path, message, severity }` naming the item by index and name, with values in the
+ * project's display unit system, e.g. `members[3] "B-12".span: must be greater than 0 m …, got -2 m`.
+ *
+ * Three layers, all run on every item that can be checked:
+ *  1. structure (core/project/schema.ts, zod): types, required fields, option names; unknown fields
+ *     are warnings (`unknown-field`), never errors, and are kept;
+ *  2. the engine's own checks: validateConcreteSpec / validateSteelSpec / validateFrpSpec, the
+ *     section builder (shape dimensions, bars inside the concrete, hoops and confinement) through
+ *     the project's material resolver, validateMember (zones tile the span, loads on the span…);
+ *  3. project-level checks: duplicate ids, references between items (by kind), settings, the date.
+ * An item whose structure is wrong is not passed to layer 2 (its semantic checks would only repeat
+ * the structural problem); the other items are.
+ *
+ * Values in messages: the engine writes internal units (mm, N, MPa); `displayMessage` converts the
+ * numbers that carry a unit into the project's display units (core/units), choosing the quantity
+ * from the field path (a span in m or ft, a bar depth in mm or in, a concrete stress in MPa or psi).
+ */
+import { z } from 'zod';
+import { checkNumber, type Diagnostic } from '../diagnostics.ts';
+import { validateConcreteSpec, validateFrpSpec, validateSteelSpec } from '../materials/factory.ts';
+import type { CodeBasis, ConcreteSpec, FrpSpec, MaterialSpec, SteelSpec } from '../materials/specs.ts';
+import type { MemberDefinition } from '../member/definition.ts';
+import { validateMember } from '../member/validate.ts';
+import { validateAsFound, validateSchemes } from '../retrofit/validate.ts';
+import { buildSectionModel, validateShape } from '../section/build.ts';
+import type { SectionDefinition } from '../section/definition.ts';
+import { InputError } from '../diagnostics.ts';
+import { formatNumber, toDisplay, unitLabel, type Quantity, type UnitSystem as DisplaySystem } from '../units/index.ts';
+import { projectMaterials } from './resolver.ts';
+import {
+  analysisSettingsSchema, materialSpecSchema, memberDefinitionSchema, projectInfoSchema, projectSchema, sectionDefinitionSchema,
+  unknownFields, MAX_NESTING,
+} from './schema.ts';
+import type { Project, UnitSystem } from './types.ts';
+
+/** Most points a polygon section (outline and voids together) may have. */
+export const MAX_POLYGON_POINTS = 1000;
+/** Allowed number of integration segments along a span (AnalysisSettings.stations). */
+export const STATIONS_RANGE = { min: 20, max: 2000 } as const;
+/** Allowed fraction of the peak moment that ends a moment–curvature curve (AnalysisSettings.momentDropFraction). */
+export const MOMENT_DROP_RANGE = { min: 0.5, max: 0.99 } as const;
+
+const ACI_LIMITS = ['aci-roof-immediate', 'aci-floor-immediate', 'aci-sensitive-after-attachment', 'aci-insensitive-after-attachment'];
+const EN_LIMITS = ['en-appearance', 'en-after-construction'];
+
+type Data = Record<string, unknown>;
+type PathPart = string | number;
+const isObject = (v: unknown): v is Data => typeof v === 'object' && v !== null && !Array.isArray(v);
+
+// --- paths ----------------------------------------------------------------------------------------
+
+/**
+ * Path of an item in the file as messages show it: `members[3] "B-12"`, `sections[0] "S-1"`,
+ * `materials[2] "grade60"` (materials by id, like core/project/resolver.ts).
+ */
+export function itemPath(list: 'materials' | 'sections' | 'members', index: number, item: unknown): string {
+  const label = isObject(item) ? (list === 'materials' ? item.id : item.name) : undefined;
+  return typeof label === 'string' && label !== '' ? `${list}[${index}] ${JSON.stringify(label)}` : `${list}[${index}]`;
+}
+
+/** `['members', 3, 'zones', 0, 'to']` → `members[3] "B-12".zones[0].to`, naming items from `root`. */
+export function pathText(path: readonly PathPart[], root: unknown): string {
+  if (path.length === 0) return '(file)';
+  let text = '';
+  let rest = path;
+  const [head, index] = path;
+  if ((head === 'materials' || head === 'sections' || head === 'members') && typeof index === 'number' && isObject(root) && Array.isArray(root[head])) {
+    text = itemPath(head, index, (root[head] as unknown[])[index]);
+    rest = path.slice(2);
+  }
+  for (const part of rest) text += typeof part === 'number' ? `[${part}]` : text === '' ? part : `.${part}`;
+  return text;
+}
+
+/** A diagnostic as one line: `members[3] "B-12" span: must be …` (a space after the quoted name). */
+export function formatDiagnostic(d: Diagnostic): string {
+  const path = d.path.replace(/^(\w+\[\d+\] "(?:[^"\\]|\\.)*")\./, '$1 ');
+  return `${d.severity === 'warning' ? 'warning: ' : ''}${path}: ${d.message}`;
+}
+
+// --- structural issues ------------------------------------------------------------------------------
+
+function describeInput(input: unknown): string {
+  if (input === undefined) return 'nothing';
+  if (input === null) return 'null';
+  if (typeof input === 'string') return input.length > 40 ? `the text ${JSON.stringify(input.slice(0, 40))}…` : `the text ${JSON.stringify(input)}`;
+  if (typeof input === 'number') return Number.isFinite(input) ? String(input) : 'a number too large to store';
+  if (typeof input === 'boolean') return String(input);
+  if (Array.isArray(input)) return `a list of ${input.length} item${input.length === 1 ? '' : 's'}`;
+  return 'an object';
+}
+
+const EXPECTED: Readonly<Record<string, string>> = {
+  number: 'a number',
+  string: 'text',
+  boolean: 'true or false',
+  object: 'an object',
+  array: 'a list',
+};
+
+/** Plain words for one zod issue. */
+function issueDiagnostic(issue: z.core.$ZodIssue, root: unknown, base: readonly PathPart[]): Diagnostic {
+  const fullPath = [...base, ...issue.path.filter((p): p is PathPart => typeof p === 'string' || typeof p === 'number')];
+  const path = pathText(fullPath, root);
+  const input = (issue as { input?: unknown }).input;
+  switch (issue.code) {
+    case 'invalid_type': {
+      const expected = EXPECTED[issue.expected] ?? issue.expected;
+      if (input === undefined) return { code: 'required', path, severity: 'error', message: `is required (${expected})` };
+      const code = issue.expected === 'number' ? 'not-a-number' : 'schema';
+      // A NaN or infinity in the data (not possible in JSON, but possible in code) is named as such.
+      const got = typeof input === 'number' && !Number.isFinite(input) ? 'a value that is not a finite number' : describeInput(input);
+      return { code, path, severity: 'error', message: `must be ${expected}${issue.expected === 'number' ? ' (written without quotes)' : ''}, got ${got}` };
+    }
+    case 'invalid_value':
+      return { code: 'unknown-option', path, severity: 'error', message: `must be ${issue.values.length === 1 ? JSON.stringify(issue.values[0]) : `one of ${issue.values.map((v) => JSON.stringify(v)).join(', ')}`}, got ${describeInput(input)}` };
+    case 'invalid_union': {
+      const options = (issue as { options?: unknown[] }).options;
+      const discriminator = (issue as { discriminator?: string }).discriminator;
+      if (options && discriminator) {
+        const value = isObject(input) ? input[discriminator] : undefined;
+        const where = fullPath[fullPath.length - 1] === discriminator ? path : pathText([...fullPath, discriminator], root);
+        if (!isObject(input)) return { code: 'schema', path: pathText(fullPath.filter((p) => p !== discriminator), root), severity: 'error', message: `must be an object with a "${discriminator}" field, got ${describeInput(input)}` };
+        return {
+          code: value === undefined ? 'required' : 'unknown-option', path: where, severity: 'error',
+          message: `must be one of ${options.map((o) => JSON.stringify(o)).join(', ')}, got ${describeInput(value)}`,
+        };
+      }
+      return { code: 'schema', path, severity: 'error', message: 'does not match any allowed form' };
+    }
+    default:
+      return { code: 'schema', path, severity: 'error', message: issue.message };
+  }
+}
+
+function structuralIssues(schema: z.ZodType, value: unknown, root: unknown, base: readonly PathPart[]): { ok: boolean; diagnostics: Diagnostic[] } {
+  const result = schema.safeParse(value, { reportInput: true });
+  if (result.success) return { ok: true, diagnostics: [] };
+  return { ok: false, diagnostics: result.error.issues.map((issue) => issueDiagnostic(issue, root, base)) };
+}
+
+// --- display units ------------------------------------------------------------------------------------
+
+const NUMBER = String.raw`-?\d+(?:\.\d+)?(?:e[+-]?\d+)?`;
+const UNITS = ['mm²', 'N/mm', 'kg/m³', 'MPa', 'mm', 'm', 'N'] as const;
+type InternalUnit = (typeof UNITS)[number];
+const QUANTITY_RUN = new RegExp(String.raw`(${NUMBER}(?:\s(?:to|\+)\s${NUMBER})*)\s(${UNITS.map((u) => u.replace('/', '\\/')).join('|')})(?![A-Za-z0-9²³⁴/·])`, 'g');
+
+/** Which quantity a value with internal unit `unit` is, judged from the field path. */
+function quantityOf(unit: InternalUnit, path: string, materialKinds: ReadonlyMap<string, string>): Quantity | null {
+  switch (unit) {
+    case 'mm²':
+      return 'area';
+    case 'N/mm':
+      return 'lineLoad';
+    case 'N':
+      return 'force';
+    case 'kg/m³':
+      return 'density';
+    case 'MPa': {
+      if (/(elasticModulus|hardeningModulus|tensileModulus)\b/.test(path)) return 'modulus';
+      const material = /^materials\[(\d+)\]/.exec(path);
+      if (material) return materialKinds.get(material[1]!) === 'concrete' ? 'concreteStress' : 'stress';
+      if (/\.asFound\.cores\b/.test(path)) return 'concreteStress';
+      return 'stress';
+    }
+    case 'mm':
+    case 'm':
+      // Along the span: spans, zone ends, load positions. Across a section: everything else.
+      if (/^members\[/.test(path) && !/userHingeLength|\.asFound\b|\.schemes\b/.test(path)) return 'spanLength';
+      return 'sectionLength';
+  }
+}
+
+const INTERNAL_PER: Readonly<Record<InternalUnit, number>> = { 'mm²': 1, 'N/mm': 1, N: 1, 'kg/m³': 1, MPa: 1, mm: 1, m: 1000 };
+
+/** Four significant figures without trailing zeros: 6.706 m, 22 ft, 0.5 in. */
+function compact(value: number): string {
+  const text = formatNumber(value, 4);
+  return text.includes('.') && !text.includes('e') ? text.replace(/\.?0+$/, '') : text;
+}
+
+/**
+ * Rewrites the values with units in an engine message into the display units of `system`, e.g.
+ * `got -2000 mm` on a member span → `got -2 m` (SI) or `got -6.562 ft` (US). Text without recognised
+ * units is returned unchanged. Units: the message's numbers are internal (mm, m, N, N/mm, MPa, mm², kg/m³).
+ * @param path the diagnostic's path, which tells a span (m, ft) from a section dimension (mm, in)
+ */
+export function displayMessage(message: string, path: string, system: UnitSystem, materialKinds: ReadonlyMap<string, string> = new Map()): string {
+  const display: DisplaySystem = system === 'us' ? 'US' : 'SI';
+  return message.replace(QUANTITY_RUN, (whole, numbers: string, unit: InternalUnit) => {
+    const quantity = quantityOf(unit, path, materialKinds);
+    if (!quantity) return whole;
+    const label = unitLabel(quantity, display);
+    if (label === unit) return whole;
+    const converted = numbers.replace(new RegExp(NUMBER, 'g'), (n) => compact(toDisplay(quantity, Number(n) * INTERNAL_PER[unit], display)));
+    return `${converted} ${label}`;
+  });
+}
+
+/** A length in the display unit of spans, for messages written here. */
+function spanText(mm: number, system: UnitSystem): string {
+  const display: DisplaySystem = system === 'us' ? 'US' : 'SI';
+  return `${compact(toDisplay('spanLength', mm, display))} ${unitLabel('spanLength', display)}`;
+}
+
+// --- semantic checks ----------------------------------------------------------------------------------
+
+function isIsoDate(text: string): boolean {
+  const m = /^(\d{4})-(\d{2})-(\d{2})$/.exec(text);
+  if (!m) return false;
+  const year = Number(m[1]);
+  const month = Number(m[2]);
+  const day = Number(m[3]);
+  if (month < 1 || month > 12 || day < 1) return false;
+  const leap = (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0;
+  const days = [31, leap ? 29 : 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31][month - 1]!;
+  return day <= days;
+}
+
+function duplicateIds(out: Diagnostic[], list: 'materials' | 'sections' | 'members', items: readonly unknown[]): void {
+  const first = new Map<string, number>();
+  items.forEach((item, i) => {
+    if (!isObject(item) || typeof item.id !== 'string') return;
+    if (item.id.trim() === '') {
+      out.push({ code: 'required', path: `${itemPath(list, i, item)}.id`, severity: 'error', message: 'must not be empty: other items refer to it by its id' });
+      return;
+    }
+    const earlier = first.get(item.id);
+    if (earlier === undefined) first.set(item.id, i);
+    else out.push({ code: 'duplicate-id', path: `${itemPath(list, i, item)}.id`, severity: 'error', message: `"${item.id}" is already the id of ${itemPath(list, earlier, items[earlier])}; ids must be unique` });
+  });
+}
+
+function polygonPoints(section: SectionDefinition): number {
+  if (section.shape.kind !== 'polygon') return 0;
+  return section.shape.outline.length + (section.shape.voids ?? []).reduce((s, v) => s + v.length, 0);
+}
+
+function materialReference(out: Diagnostic[], path: string, id: string, kind: MaterialSpec['kind'], byId: ReadonlyMap<string, MaterialSpec>, role: string): void {
+  const found = byId.get(id);
+  if (!found) out.push({ code: 'unknown-reference', path, severity: 'error', message: `no material with id "${id}" in the project's material list (the ${role} must be a ${kind} material)` });
+  else if (found.kind !== kind) out.push({ code: 'unknown-reference', path, severity: 'error', message: `"${id}" is a ${found.kind} material; the ${role} must be a ${kind} material` });
+}
+
+/**
+ * The numbers of each bar layer against the section builder's own ranges (core/section/build.ts:
+ * count a whole number 1–100, diameter 3–60 mm, or an area above 0 and up to 10⁶ mm²).
+ * @returns true when every layer can be handed to the builder safely
+ */
+function barLayerPrecheck(out: Diagnostic[], section: SectionDefinition, path: string): boolean {
+  let ok = true;
+  section.bars.forEach((layer, i) => {
+    const at = `${path}.bars[${i}]`;
+    if (layer.count !== undefined || layer.diameter !== undefined) {
+      if (checkNumber(out, `${at}.count`, layer.count, { min: 1, max: 100 })) {
+        if (!Number.isInteger(layer.count)) {
+          out.push({ code: 'must-be-integer', path: `${at}.count`, severity: 'error', message: `must be a whole number of bars, got ${layer.count}` });
+          ok = false;
+        }
+      } else {
+        ok = false;
+      }
+      ok = checkNumber(out, `${at}.diameter`, layer.diameter, { min: 3, max: 60, unit: 'mm' }) && ok;
+    } else {
+      ok = checkNumber(out, `${at}.area`, layer.area, { min: 0, max: 1e6, exclusiveMin: true, unit: 'mm²' }) && ok;
+    }
+  });
+  return ok;
+}
+
+/** Path of a member's own id (`members[3] "B-12".id`): a duplicate there makes results ambiguous. */
+const MEMBER_ID_PATH = /^members\[\d+\](?: "(?:[^"\\]|\\.)*")?\.id$/;
+
+/**
+ * The errors that keep a project from being analysed as a whole: every error outside the members
+ * (project information, settings, materials and sections, which many members share) and errors on a
+ * member's id (duplicates). Other errors inside a member stop only that member (the analysis reports
+ * it as an input error).
+ */
+export function analysisBlockers(diagnostics: readonly Diagnostic[]): Diagnostic[] {
+  return diagnostics.filter((d) => d.severity === 'error' && (!/^members\[\d+\]/.test(d.path) || MEMBER_ID_PATH.test(d.path)));
+}
+
+/** Fields of the confinement input (ConfinementInput) that come straight from a field of the hoops. */
+const CONFINEMENT_TO_HOOPS: Readonly<Record<string, string>> = { legsX: 'verticalLegs', legsY: 'horizontalLegs', hoopDiameter: 'diameter', spacing: 'spacing' };
+
+/** Section checks of the section builder, with confinement problems placed on the section's hoops. */
+function sectionBuildDiagnostics(section: SectionDefinition, path: string, materials: readonly MaterialSpec[], code: CodeBasis): Diagnostic[] {
+  const resolver = projectMaterials(materials, code);
+  const out: Diagnostic[] = [];
+  try {
+    const { warnings } = buildSectionModel(section, resolver, path);
+    for (const w of warnings) out.push({ code: 'inconsistent', path, severity: 'warning', message: w });
+  } catch (error) {
+    if (!(error instanceof InputError)) throw error;
+    // Unknown references are reported by the project's own reference checks, by material kind.
+    out.push(...error.diagnostics.filter((d) => d.code !== 'unknown-reference'));
+  }
+  for (const p of resolver.problems) {
+    if (p.path.startsWith('confinement')) {
+      const field = p.path.replace(/^confinement\.?/, '').replace(/\[\d+\]$/, '');
+      const hoopField = CONFINEMENT_TO_HOOPS[field];
+      out.push({ ...p, path: hoopField ? `${path}.hoops.${hoopField}` : `${path}.hoops`, message: `confinement of the core${hoopField ? '' : ` (${field || 'input'})`}: ${p.message}` });
+    } else if (!p.path.startsWith('materials[')) {
+      out.push(p);
+    }
+    // Problems of the material itself are reported once, on the material.
+  }
+  return out;
+}
+
+/**
+ * Runs one of the engine's checks; a check that throws on strange input (a defect, not the user's
+ * fault) becomes one error on the item instead of stopping the validation of everything else.
+ */
+function guarded(path: string, check: () => Diagnostic[]): Diagnostic[] {
+  try {
+    return check();
+  } catch (error) {
+    const reason = error instanceof Error ? error.message.split('\n')[0] : String(error);
+    return [{ code: 'inconsistent', path, severity: 'error', message: `could not be checked (${reason}); please report this file to the Hingeline developers` }];
+  }
+}
+
+interface Checked<T> {
+  readonly value: T;
+  readonly index: number;
+}
+
+/**
+ * Validates parsed (and migrated) JSON as a version-2 project. Never throws; every problem comes back.
+ * @returns the typed project (unknown fields kept) when the structure is sound, else null; the
+ *          project is returned even when semantic errors remain, so an editor can open it for repair
+ *          (`hasErrors(diagnostics)` tells whether it may be analysed as it is).
+ */
+export function validateProjectData(data: unknown): { project: Project | null; diagnostics: Diagnostic[] } {
+  const out: Diagnostic[] = [];
+  if (!isObject(data)) {
+    return { project: null, diagnostics: [{ code: 'schema', path: '(file)', severity: 'error', message: `must be a JSON object holding a Hingeline project, got ${describeInput(data)}` }] };
+  }
+  const whole = projectSchema.safeParse(data);
+
+  // Top-level structure: the fixed fields and the lists themselves (items are checked one by one below).
+  const { ok: _topOk, diagnostics: top } = structuralIssues(
+    projectSchema.extend({ materials: z.array(z.unknown()), sections: z.array(z.unknown()), members: z.array(z.unknown()), info: z.unknown().optional(), settings: z.unknown().optional() }),
+    data, data, [],
+  );
+  out.push(...top);
+  const info = structuralIssues(projectInfoSchema, data.info, data, ['info']);
+  const settings = structuralIssues(analysisSettingsSchema, data.settings, data, ['settings']);
+  out.push(...info.diagnostics, ...settings.diagnostics);
+
+  const listOf = (key: string): unknown[] => (Array.isArray(data[key]) ? (data[key] as unknown[]) : []);
+  const checkItems = <T>(key: 'materials' | 'sections' | 'members', schema: z.ZodType): Checked<T>[] => {
+    const good: Checked<T>[] = [];
+    listOf(key).forEach((item, index) => {
+      const r = structuralIssues(schema, item, data, [key, index]);
+      out.push(...r.diagnostics);
+      if (r.ok) good.push({ value: item as T, index });
+    });
+    return good;
+  };
+  const materials = checkItems<MaterialSpec>('materials', materialSpecSchema);
+  const sections = checkItems<SectionDefinition>('sections', sectionDefinitionSchema);
+  const members = checkItems<MemberDefinition>('members', memberDefinitionSchema);
+
+  for (const { path, field } of unknownFields(data)) {
+    out.push({ code: 'unknown-field', path: pathText([...path, field], data), severity: 'warning', message: 'is not a field this version of Hingeline knows; it is kept as it is when the project is saved, but it has no effect' });
+  }
+
+  const infoData = info.ok ? (data.info as Project['info']) : undefined;
+  const system: UnitSystem = infoData?.unitSystem ?? 'si';
+  const code = infoData?.codeBasis;
+  const semantic: Diagnostic[] = [];
+
+  // Project information and settings.
+  if (infoData) {
+    if (infoData.name.trim() === '') semantic.push({ code: 'required', path: 'info.name', severity: 'warning', message: 'the project has no name; reports and file names use it' });
+    if (infoData.date !== '' && !isIsoDate(infoData.date)) semantic.push({ code: 'schema', path: 'info.date', severity: 'error', message: `must be a calendar date written yyyy-mm-dd (e.g. 2026-03-14), got ${describeInput(infoData.date)}` });
+  }
+  if (settings.ok) {
+    const s = data.settings as Project['settings'];
+    checkNumber(semantic, 'settings.momentDropFraction', s.momentDropFraction, MOMENT_DROP_RANGE);
+    if (checkNumber(semantic, 'settings.stations', s.stations, STATIONS_RANGE) && !Number.isInteger(s.stations)) {
+      semantic.push({ code: 'must-be-integer', path: 'settings.stations', severity: 'error', message: `must be a whole number of segments, got ${s.stations}` });
+    }
+  }
+
+  // Ids.
+  duplicateIds(semantic, 'materials', listOf('materials'));
+  duplicateIds(semantic, 'sections', listOf('sections'));
+  duplicateIds(semantic, 'members', listOf('members'));
+
+  // Materials: the engine's validators (code-dependent checks only when the code basis is known).
+  const materialSpecs = materials.map((m) => m.value);
+  const materialById = new Map<string, MaterialSpec>();
+  for (const m of materialSpecs) if (!materialById.has(m.id)) materialById.set(m.id, m);
+  const materialKinds = new Map<string, string>(materials.map((m) => [String(m.index), m.value.kind]));
+  for (const { value: spec, index } of materials) {
+    const path = itemPath('materials', index, spec);
+    if (spec.kind === 'concrete') semantic.push(...guarded(path, () => validateConcreteSpec(spec as ConcreteSpec, path, code ? { code } : {})));
+    else if (spec.kind === 'steel') semantic.push(...guarded(path, () => validateSteelSpec(spec as SteelSpec, path)));
+    else semantic.push(...guarded(path, () => validateFrpSpec(spec as FrpSpec, path)));
+  }
+
+  // Sections: references by kind, then the section builder (dimensions, bars inside the concrete, hoops).
+  for (const { value: section, index } of sections) {
+    const path = itemPath('sections', index, section);
+    const before = semantic.length;
+    materialReference(semantic, `${path}.concreteId`, section.concreteId, 'concrete', materialById, 'section concrete');
+    section.bars.forEach((bar, i) => materialReference(semantic, `${path}.bars[${i}].steelId`, bar.steelId, 'steel', materialById, 'bar steel'));
+    if (section.hoops) materialReference(semantic, `${path}.hoops.steelId`, section.hoops.steelId, 'steel', materialById, 'hoop steel');
+    const points = polygonPoints(section);
+    if (points > MAX_POLYGON_POINTS) {
+      semantic.push({ code: 'geometry', path: `${path}.shape`, severity: 'error', message: `a polygon may have at most ${MAX_POLYGON_POINTS} points (outline and voids together), got ${points}` });
+      continue;
+    }
+    // The section builder uses bar counts before it checks them (clearSpacings of a confined core):
+    // a count of 1e9 would exhaust memory, so the bars' numbers are checked here first.
+    const barsOk = barLayerPrecheck(semantic, section, path);
+    const referencesOk = semantic.length === before;
+    if (code && referencesOk && barsOk) semantic.push(...guarded(path, () => sectionBuildDiagnostics(section, path, materialSpecs, code)));
+    else semantic.push(...guarded(path, () => validateShape(section.shape, `${path}.shape`))); // the shape is still checked
+  }
+
+  // Members: the engine's member checks, the as-found condition and strengthening schemes
+  // (core/retrofit/validate.ts, against the items that are structurally sound), then the limit cases
+  // against the code basis.
+  const sectionIds = new Set(sections.map((s) => s.value.id));
+  const soundProject = { ...(data as unknown as Project), materials: materialSpecs, sections: sections.map((s) => s.value), members: members.map((m) => m.value) };
+  for (const { value: member, index } of members) {
+    const path = itemPath('members', index, member);
+    semantic.push(...guarded(path, () => validateMember(member, path, sectionIds)));
+    if (member.asFound) semantic.push(...guarded(`${path}.asFound`, () => validateAsFound(member.asFound!, member, soundProject, `${path}.asFound`)));
+    if (member.schemes) semantic.push(...guarded(`${path}.schemes`, () => validateSchemes(member.schemes!, member, soundProject, `${path}.schemes`)));
+    if (code) {
+      const foreign = member.service.limitCases.filter((c) => (code === 'ACI 318-19' ? EN_LIMITS : ACI_LIMITS).includes(c));
+      for (const c of foreign) {
+        semantic.push({ code: 'inconsistent', path: `${path}.service.limitCases`, severity: 'warning', message: `"${c}" is a limit of ${code === 'ACI 318-19' ? 'EN 1992-1-1' : 'ACI 318-19'}, while the project's code basis is ${code}; the check is made as written` });
+      }
+    }
+    if (Number.isFinite(member.span) && member.span > 0) {
+      member.loads.forEach((load, i) => {
+        const atSupport = load.kind === 'point' && (load.position === 0 || (load.position === member.span && member.supports !== 'cantilever'));
+        if (load.kind === 'point' && atSupport) {
+          semantic.push({ code: 'inconsistent', path: `${path}.loads[${i}].position`, severity: 'warning', message: `a point load at a support (${spanText(load.position, system)}) goes straight into the support and does not bend the beam` });
+        }
+      });
+    }
+  }
+
+  for (const d of semantic) out.push({ ...d, message: displayMessage(d.message, d.path, system, materialKinds) });
+  const diagnostics = sortDiagnostics(dedupe(out));
+  return { project: whole.success ? (whole.data as unknown as Project) : null, diagnostics };
+}
+
+/** Semantic and structural checks of a project held in memory (e.g. built in code or edited in the UI). */
+export function validateProject(project: Project): Diagnostic[] {
+  return validateProjectData(project).diagnostics;
+}
+
+/** True when any diagnostic is an error. */
+export function hasErrors(diagnostics: readonly Diagnostic[]): boolean {
+  return diagnostics.some((d) => d.severity === 'error');
+}
+
+function dedupe(list: readonly Diagnostic[]): Diagnostic[] {
+  const seen = new Set<string>();
+  return list.filter((d) => {
+    const key = `${d.severity}|${d.path}|${d.message}`;
+    if (seen.has(key)) return false;
+    seen.add(key);
+    return true;
+  });
+}
+
+const GROUP_ORDER = ['(file)', 'format', 'version', 'info', 'settings', 'materials', 'sections', 'members'];
+
+/** File order: file-level problems, info, settings, then materials, sections and members by index. */
+export function sortDiagnostics(list: readonly Diagnostic[]): Diagnostic[] {
+  const key = (d: Diagnostic): [number, number] => {
+    const m = /^([\w()]+)(?:\[(\d+)\])?/.exec(d.path);
+    const group = m ? GROUP_ORDER.indexOf(m[1]!) : -1;
+    return [group < 0 ? GROUP_ORDER.length : group, m?.[2] !== undefined ? Number(m[2]) : -1];
+  };
+  return list
+    .map((d, i) => ({ d, i, k: key(d) }))
+    .sort((a, b) => a.k[0] - b.k[0] || a.k[1] - b.k[1] || a.i - b.i)
+    .map((x) => x.d);
+}
+
+/** Deepest nesting of arrays and objects in `value`, counted without recursion (safe on any input). */
+export function nestingDepth(value: unknown, stopAt = MAX_NESTING + 1): number {
+  let deepest = 0;
+  const stack: [unknown, number][] = [[value, 0]];
+  while (stack.length > 0) {
+    const [v, depth] = stack.pop()!;
+    if (typeof v !== 'object' || v === null) continue;
+    const d = depth + 1;
+    if (d > deepest) deepest = d;
+    if (deepest >= stopAt) return deepest;
+    for (const child of Array.isArray(v) ? v : Object.values(v)) stack.push([child, d]);
+  }
+  return deepest;
+}

@@ -1,0 +1,53 @@
+/**
+ * The installed command end to end: `node build/bin/hingeline.mjs …` in a child process, run from
+ * a folder outside the repository (as `npx hingeline` would be from a project folder).
+ */
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { afterAll, describe, expect, it } from 'vitest';
+import { parseProject } from '../../../core/project/file.ts';
+
+const BIN = fileURLToPath(new URL('../../../build/bin/hingeline.mjs', import.meta.url));
+const work = mkdtempSync(join(tmpdir(), 'hingeline-bin-'));
+afterAll(() => rmSync(work, { recursive: true, force: true }));
+
+function run(...args: string[]) {
+  const r = spawnSync(process.execPath, [BIN, ...args], { cwd: work, encoding: 'utf8', env: { ...process.env, NO_COLOR: '1' }, timeout: 120_000 });
+  return { code: r.status, stdout: r.stdout, stderr: r.stderr };
+}
+
+describe('the hingeline command', () => {
+  it('prints help and exits 0', () => {
+    const r = run('--help');
+    expect(r.code).toBe(0);
+    expect(r.stdout).toMatch(/Usage:\n {2}hingeline analyze FILE/);
+  }, 60_000);
+
+  it('writes the demo, validates it and analyses a member on worker threads, from another folder', () => {
+    expect(run('demo', '--out', 'demo.hingeline').code).toBe(0);
+    const text = readFileSync(join(work, 'demo.hingeline'), 'utf8');
+    expect(parseProject(text).diagnostics).toEqual([]);
+    const v = run('validate', 'demo.hingeline');
+    expect(v.code).toBe(0);
+    expect(v.stdout).toMatch(/demo\.hingeline: no problems/);
+    const a = run('analyze', 'demo.hingeline', '--member', 'C-101', '--member', 'P-206', '--format', 'json');
+    expect(a.stderr).toBe('');
+    expect(a.code).toBe(0);
+    const doc = JSON.parse(a.stdout);
+    expect(doc.members.map((m: { id: string; status: string }) => `${m.id} ${m.status}`)).toEqual(['C-101 ok', 'P-206 ok']);
+  }, 120_000);
+
+  it('exits 1 for a file with errors and 2 for a file that does not exist, errors on stderr', () => {
+    writeFileSync(join(work, 'bad.json'), '{"format": "hingeline-project", "version": 2, "info": 1}');
+    const bad = run('validate', 'bad.json');
+    expect(bad.code).toBe(1);
+    expect(bad.stdout).toMatch(/error: info: must be an object, got 1/);
+    const missing = run('analyze', 'nope.hingeline');
+    expect(missing.code).toBe(2);
+    expect(missing.stdout).toBe('');
+    expect(missing.stderr).toBe('hingeline: cannot read nope.hingeline: no such file\n');
+  }, 60_000);
+});

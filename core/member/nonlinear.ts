@@ -404,6 +404,17 @@ interface Snapshot {
 const SITE_WORDS: Record<HingeSite, string> = { left: 'left support', right: 'right support', span: 'span' };
 
 /**
+ * A position along the span in words without units (results are shown in SI or US customary;
+ * numbers with units come from the numeric fields): "midspan", "0.42ℓ from the left support".
+ */
+export function describePosition(x: number, span: number, support: BeamModel['support']): string {
+  if (x <= 1e-6 * span) return support === 'cantilever' ? 'the fixed end' : 'the left support';
+  if (x >= span * (1 - 1e-6)) return support === 'cantilever' ? 'the free end' : 'the right support';
+  if (Math.abs(x - span / 2) <= 0.005 * span && support !== 'cantilever') return 'midspan';
+  return `${(x / span).toFixed(2)}ℓ from the ${support === 'cantilever' ? 'fixed end' : 'left support'}`;
+}
+
+/**
  * Runs the load–deflection analysis to ultimate.
  * @param loads   moment fields of the constant loads and of the pattern
  * @param capacity hinge length method etc.
@@ -684,7 +695,7 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
       capacity: ultimatePlastic * length,
       activatedAt: s.lambda,
     });
-    events.push({ kind: 'first-yield', loadFactor: s.lambda, deflection: controlDeflection(s), position: beam.x[station]!, description: `first yield at the ${SITE_WORDS[site]} (x = ${(beam.x[station]! / 1000).toFixed(2)} m): plastic hinge active, Lp = ${length.toFixed(0)} mm` });
+    events.push({ kind: 'first-yield', loadFactor: s.lambda, deflection: controlDeflection(s), position: beam.x[station]!, description: `first yield at ${describePosition(beam.x[station]!, span, beam.support)}: plastic hinge active` });
     if (!firstYield) firstYield = { lambda: s.lambda, deflection: controlDeflection(s) };
   };
 
@@ -710,7 +721,7 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
     if (ev.kind === 'cracking') {
       crackedYet = true;
       const at = maxRatio(state, (resp) => resp.crackingMoment);
-      events.push({ kind: 'cracking', loadFactor: state.lambda, deflection: d, position: beam.x[at.station]!, description: `first cracking at x = ${(beam.x[at.station]! / 1000).toFixed(2)} m` });
+      events.push({ kind: 'cracking', loadFactor: state.lambda, deflection: d, position: beam.x[at.station]!, description: `first cracking at ${describePosition(beam.x[at.station]!, span, beam.support)}` });
     } else if (ev.kind === 'yield') {
       const wasFirst = firstYield === null;
       activate(ev.site!, state);
@@ -943,15 +954,27 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
     failureCause,
   };
 
+  /** Why a section outside the hinges reached its peak, in words. */
+  function overstressWords(o: { station: number; sign: 1 | -1 }): string {
+    const where = describePosition(beam.x[o.station]!, span, beam.support);
+    const direction = o.sign > 0 ? 'sagging' : 'hogging';
+    const zone = beam.zones[stationZone(o.station)]!;
+    const response = o.sign > 0 ? zone.sagging : zone.hogging;
+    if (response.firstYieldMoment === null) {
+      return `the section at ${where} reaches its peak ${direction} moment without its tension steel yielding (no ${o.sign > 0 ? 'bottom' : 'top'} reinforcement there, or over-reinforced): a brittle failure with no plastic hinge`;
+    }
+    return `the section at ${where} reaches its peak ${direction} moment outside a plastic hinge`;
+  }
+
   function finishUltimate(hinge: HingeState | undefined, s: Snapshot) {
     const d = controlDeflection(s);
     ultimate = { lambda: s.lambda, deflection: d };
     if (hinge) {
-      failureCause = `the plastic hinge at the ${SITE_WORDS[hinge.site]} (x = ${(beam.x[hinge.station]! / 1000).toFixed(2)} m) reaches its rotation capacity θp,u = ${(hinge.capacity * 1000).toFixed(2)} mrad`;
+      failureCause = `the plastic hinge at ${describePosition(hinge.site === 'span' ? hinge.rotationPosition : beam.x[hinge.station]!, span, beam.support)} reaches its rotation capacity θp,u = ${(hinge.capacity * 1000).toFixed(2)} mrad`;
     } else {
       const o = overstress(s);
       failureCause = o.ratio >= 1 - 1e-6
-        ? `the section at x = ${(beam.x[o.station]! / 1000).toFixed(2)} m reaches its peak ${o.sign > 0 ? 'sagging' : 'hogging'} moment outside a plastic hinge`
+        ? overstressWords(o)
         : 'the load–deflection analysis reached its last step';
     }
     events.push({ kind: 'ultimate', loadFactor: s.lambda, deflection: d, position: hinge ? beam.x[hinge.station]! : beam.x[overstress(s).station]!, description: `ultimate: ${failureCause}` });

@@ -355,7 +355,8 @@ function clearSpacings(layers: readonly BarLayer[], coreWidth: number, coreDepth
   const diameterOf = (l: BarLayer) => l.diameter ?? Math.sqrt((4 * (l.area ?? 0)) / Math.PI);
   const gaps: number[] = [];
   for (const layer of [sorted[0]!, sorted[sorted.length - 1]!]) {
-    const n = Math.max(layer.count ?? 2, 2);
+    // Counts are validated later; keep this estimate safe for any value (1 ≤ n ≤ 100).
+    const n = Number.isFinite(layer.count) ? Math.min(Math.max(Math.floor(layer.count!), 2), 100) : 2;
     const d = diameterOf(layer);
     const gap = Math.max((coreWidth - n * d) / (n - 1), 0);
     for (let i = 0; i < n - 1; i++) gaps.push(gap);

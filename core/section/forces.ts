@@ -112,7 +112,10 @@ export function sectionResultants(model: SectionModel, eps0: number, phi: number
   for (const element of model.elements) {
     const eps = eps0 + phi * (yg - element.depth);
     let stress = element.material.stress(eps - element.initialStrain);
-    if (element.displacedConcrete && eps > 0) stress -= element.displacedConcrete.stress(eps);
+    if (element.displacedConcrete) {
+      const concrete = element.displacedConcrete.stress(eps);
+      if (concrete > 0) stress -= concrete;
+    }
     add(stress * element.area, element.depth);
   }
   return { compression: c, tension: t, compressionDepth: c > 0 ? cy / c : 0, tensionDepth: t > 0 ? ty / t : 0 };
@@ -214,9 +217,14 @@ export function sectionForces(model: SectionModel, eps0: number, phi: number, ou
   for (const element of model.elements) {
     const eps = eps0 + phi * (yg - element.depth);
     let stress = element.material.stress(eps - element.initialStrain);
-    // Displaced concrete is removed in compression only: in tension it is cracked (or negligible),
-    // and removing a brittle tensile stress would put a jump into the equilibrium equation.
-    if (element.displacedConcrete && eps > 0) stress -= element.displacedConcrete.stress(eps);
+    // Displaced concrete is removed where it would be in compression only: in tension it is
+    // cracked (or negligible), and removing a brittle tensile stress would put a jump into the
+    // equilibrium equation. Testing the stress rather than the strain keeps this continuous when
+    // shrinkage shifts the law (sustained load).
+    if (element.displacedConcrete) {
+      const concrete = element.displacedConcrete.stress(eps);
+      if (concrete > 0) stress -= concrete;
+    }
     const force = stress * element.area;
     axial += force;
     magnitude += force < 0 ? -force : force;

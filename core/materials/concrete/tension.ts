@@ -102,7 +102,10 @@ export function linearBrittleTension(p: LinearTensionParameters): TensionLaw {
 /**
  * Tension stiffening after cracking, tensile magnitudes (MPa):
  *   εt ≤ εcr = fcr/Ec:    σt = Ec εt
- *   εcr < εt ≤ εend:      σt = fcr / (1 + √(c εt))   (εt is the total tensile strain; there is a small drop at cracking)
+ *   εcr < εt ≤ 0.8 εend:  σt = fcr / (1 + √(c εt))   (εt is the total tensile strain; there is a small drop at cracking)
+ *   0.8 εend < εt ≤ εend: the same curve times a linear taper from 1 to 0, so the stress reaches
+ *                         zero continuously (a jump to zero over a whole tension band would put a
+ *                         discontinuity into the section's equilibrium; common practice, no source)
  *   εt > εend:            σt = 0
  * c = 200 (Vecchio & Collins 1986); c = 500 in Collins & Mitchell (1991) — from memory, hence a parameter.
  * εend defaults to 0.002 (see DEFAULT_TENSION_STIFFENING_END_STRAIN).
@@ -114,9 +117,11 @@ export function tensionStiffening(p: TensionStiffeningParameters): TensionLaw {
   const crackingStrain = p.tensileStrength / p.elasticModulus;
   const endStrain = p.endStrain ?? DEFAULT_TENSION_STIFFENING_END_STRAIN;
   return tensionLaw('tension-stiffening', `Tension stiffening fcr/(1 + √(${c} εt)) (Vecchio & Collins 1986)`, [VECCHIO_COLLINS_REFERENCE],
-    p.tensileStrength, crackingStrain, [crackingStrain, endStrain], (strain) => {
+    p.tensileStrength, crackingStrain, [crackingStrain, Math.max(0.8 * endStrain, crackingStrain), endStrain], (strain) => {
       if (strain <= crackingStrain) return p.elasticModulus * strain;
-      if (strain <= endStrain) return p.tensileStrength / (1 + Math.sqrt(c * strain));
-      return 0;
+      if (strain > endStrain) return 0;
+      const curve = p.tensileStrength / (1 + Math.sqrt(c * strain));
+      const taperStart = Math.max(0.8 * endStrain, crackingStrain);
+      return strain <= taperStart ? curve : (curve * (endStrain - strain)) / (endStrain - taperStart);
     });
 }

@@ -148,6 +148,10 @@ describe('bad input', () => {
     const wide = problems({ ...base, bars: [{ steelId: 's', depth: 450, count: 12, diameter: 25 }] });
     expect(wide[0]!.message).toMatch(/do not fit/);
   });
+  it('an absurd bar count is an input error, not a crash (with hoops that would confine a core)', () => {
+    const d = problems({ ...base, hoops: { steelId: 's', diameter: 10, spacing: 100, verticalLegs: 2, clearCover: 30, confineCore: true }, bars: [{ steelId: 's', depth: 450, count: 1e9, diameter: 20 }] });
+    expect(d.some((x) => x.path.endsWith('bars[0].count') && /at most 100/.test(x.message))).toBe(true);
+  });
   it('every problem is reported at once', () => {
     const d = problems({ ...base, bars: [{ steelId: 'nope', depth: -5, count: 1.5, diameter: 20 }, { steelId: 's', depth: 450, count: 2, diameter: 99 }] });
     expect(d.length).toBeGreaterThanOrEqual(4);

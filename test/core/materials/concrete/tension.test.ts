@@ -37,22 +37,25 @@ describe('tension stiffening (Vecchio & Collins 1986)', () => {
   const law = tensionStiffening({ tensileStrength: fr, elasticModulus: Ec });
 
   it('after cracking follows fcr/(1 + √(200 εt)) with the total strain', () => {
-    for (const strain of [2 * epsCr, 0.0005, 0.001, 0.002]) {
+    for (const strain of [2 * epsCr, 0.0005, 0.001, 0.0016]) {
       expect(law.stress(strain)).toBeCloseTo(fr / (1 + Math.sqrt(200 * strain)), 12);
     }
     // at εt = 0.001 the concrete keeps 1/(1 + √0.2) = 69 % of fcr
     expect(law.stress(0.001) / fr).toBeCloseTo(0.691, 3);
   });
 
-  it('is linear to fcr before cracking, and drops to zero past the end strain 0.002', () => {
+  it('is linear to fcr before cracking, and tapers linearly to zero between 0.8 and 1.0 of the end strain 0.002', () => {
+    // the taper keeps the law continuous (common practice, no source)
     expect(law.stress(epsCr)).toBeCloseTo(fr, 12);
+    expect(law.stress(0.0018)).toBeCloseTo((fr / (1 + Math.sqrt(200 * 0.0018))) * 0.5, 12);
+    expect(law.stress(0.002)).toBe(0);
     expect(law.stress(0.00201)).toBe(0);
-    expect(law.breakpoints).toEqual([epsCr, 0.002]);
+    expect(law.breakpoints).toEqual([epsCr, 0.0016, 0.002]);
   });
 
   it('takes c = 500 (Collins & Mitchell 1991, from memory) and another end strain from the caller', () => {
     const other = tensionStiffening({ tensileStrength: fr, elasticModulus: Ec, coefficient: 500, endStrain: 0.003 });
-    expect(other.stress(0.0025)).toBeCloseTo(fr / (1 + Math.sqrt(500 * 0.0025)), 12);
+    expect(other.stress(0.0023)).toBeCloseTo(fr / (1 + Math.sqrt(500 * 0.0023)), 12);
     expect(other.stress(0.0031)).toBe(0);
   });
 

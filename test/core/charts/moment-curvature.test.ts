@@ -1,0 +1,78 @@
+import { describe, expect, it } from 'vitest';
+import { KEY_POINT_ORDER, momentCurvatureChart, sectionMomentCurvatureChart } from '../../../core/charts/moment-curvature.ts';
+import type { MomentCurvatureResult } from '../../../core/section/results.ts';
+import { memberResult } from './fixtures.ts';
+
+const section = () => memberResult('B-1').sections[0]!;
+
+describe('moment–curvature chart', () => {
+  it('plots every computed point in display units (1/m, kN·m)', () => {
+    const curve = section().sagging!;
+    const spec = momentCurvatureChart(curve, 'si');
+    const series = spec.series.find((s) => s.id === 'curve-0')!;
+    expect(series.points).toHaveLength(curve.points.length);
+    const last = curve.points[curve.points.length - 1]!;
+    // 1/mm → 1/m: × 1000; N·mm → kN·m: ÷ 10⁶ (SI prefixes)
+    expect(series.points[series.points.length - 1]).toEqual({ x: last.curvature * 1000, y: last.moment / 1e6 });
+    expect(spec.x.label).toBe('Curvature φ (1/m)');
+    expect(spec.y.label).toBe('Moment M (kN·m)');
+  });
+
+  it('marks each key point of the result with its label and draws the bilinear idealisation through (0,0), (φy, My), (φu, Mu)', () => {
+    const curve = section().sagging!;
+    const spec = momentCurvatureChart(curve, 'si');
+    const present = KEY_POINT_ORDER.filter((k) => curve.keyPoints[k]);
+    expect(spec.markers.map((m) => m.label)).toEqual(present.map((k) => ({ cracking: 'cracking', firstYield: 'first yield', codeCrushing: 'code crushing strain', nominal: 'nominal (Mn)', peak: 'peak', ultimate: 'ultimate' })[k]));
+    const fy = curve.keyPoints.firstYield!;
+    const marker = spec.markers.find((m) => m.label === 'first yield')!;
+    expect(marker.x).toBeCloseTo(fy.curvature * 1000, 12);
+    expect(marker.y).toBeCloseTo(fy.moment / 1e6, 12);
+    const b = curve.bilinear!;
+    const bilinear = spec.series.find((s) => s.id === 'bilinear-0')!;
+    expect(bilinear.style).toBe('dashed');
+    expect(bilinear.points).toEqual([{ x: 0, y: 0 }, { x: b.yieldCurvature * 1000, y: b.yieldMoment / 1e6 }, { x: b.ultimateCurvature * 1000, y: b.ultimateMoment / 1e6 }]);
+  });
+
+  it('shows both bending directions of a section, each named in the legend and on its markers', () => {
+    const spec = sectionMomentCurvatureChart(section(), 'si');
+    expect(spec.title).toContain(section().sectionName);
+    expect(spec.series.map((s) => s.label)).toEqual(['computed, sagging', 'bilinear idealisation, sagging', 'computed, hogging', 'bilinear idealisation, hogging']);
+    expect(spec.markers.some((m) => m.label === 'ultimate (hogging)')).toBe(true);
+  });
+
+  it('uses US units and a power-of-ten factor for small curvatures', () => {
+    const spec = momentCurvatureChart(section().sagging!, 'us');
+    expect(spec.x.label).toBe('Curvature φ (×10⁻³ 1/in)');
+    expect(spec.y.unit).toBe('kip·ft');
+    const fy = section().sagging!.keyPoints.firstYield!;
+    const marker = spec.markers.find((m) => m.label === 'first yield')!;
+    // 1/mm → 1/in: × 25.4 (NIST SP 811 B.8: 1 in = 25.4 mm), then ÷ 10⁻³ for the axis factor
+    expect(marker.x).toBeCloseTo(fy.curvature * 25.4 * 1000, 9);
+  });
+
+  it('says why when there is nothing to plot, and carries the message of a curve that did not converge', () => {
+    const empty: MomentCurvatureResult = {
+      direction: 'sagging',
+      status: { kind: 'not-converged', atCurvature: 0, message: 'No equilibrium at zero curvature: the axial force exceeds the squash load.' },
+      points: [],
+      keyPoints: {},
+      curvatureDuctility: null,
+      firstYieldCurvatureDuctility: null,
+      warnings: [],
+      solves: 0,
+    };
+    const spec = momentCurvatureChart(empty, 'si');
+    expect(spec.series).toHaveLength(0);
+    expect(spec.emptyMessage).toMatch(/No moment–curvature curve/);
+    expect(spec.notes).toEqual(['sagging: No equilibrium at zero curvature: the axial force exceeds the squash load.']);
+  });
+
+  it('never puts a non-finite number in a spec', () => {
+    const curve = section().sagging!;
+    const broken: MomentCurvatureResult = { ...curve, points: [...curve.points, { ...curve.points[1]!, curvature: Number.NaN }, { ...curve.points[1]!, moment: Number.POSITIVE_INFINITY }] };
+    const spec = momentCurvatureChart(broken, 'si');
+    const numbers = JSON.stringify(spec);
+    expect(numbers).not.toMatch(/NaN|Infinity|null/);
+    expect(spec.series[0]!.points).toHaveLength(curve.points.length);
+  });
+});

@@ -1,0 +1,51 @@
+import { describe, expect, it } from 'vitest';
+import { sectionDrawingSvg } from '../../../core/charts/section-drawing.ts';
+import type { SectionDefinition } from '../../../core/section/definition.ts';
+import { reportTestProject } from '../report/fixtures.ts';
+
+const r1 = () => reportTestProject().sections[0]!;
+
+describe('scaled section drawing', () => {
+  it('draws the outline, the hoop and one circle per bar, and labels each layer', () => {
+    const { svg } = sectionDrawingSvg(r1(), 'si');
+    expect(svg.startsWith('<svg xmlns="http://www.w3.org/2000/svg"')).toBe(true);
+    expect(svg.match(/<circle /g)).toHaveLength(3 + 2);
+    expect(svg.match(/<rect /g)).toHaveLength(1);
+    expect(svg).toContain('>bottom bars: 3 × 20 mm (942 mm²)</text>');
+    expect(svg).toContain('>top bars: 2 × 16 mm (402 mm²)</text>');
+    expect(svg).toContain('>300 mm</text>');
+    expect(svg).toContain('>550 mm</text>');
+  });
+
+  it('is drawn to a standard scale that fits the space: 1:n with n the smallest that fits', () => {
+    // 1 pt = 25.4/72 mm (definition of the point); a 550 mm deep section at 1:10 is 55 mm = 155.9 pt
+    const d = sectionDrawingSvg(r1(), 'si', { maxWidth: 300, maxHeight: 240 });
+    expect(d.scale).toBe(10);
+    expect(d.scaleText).toBe('scale 1:10 at the printed size');
+    const tight = sectionDrawingSvg(r1(), 'si', { maxWidth: 300, maxHeight: 120 });
+    expect(tight.scale).toBe(20);
+    expect(tight.height).toBeLessThanOrEqual(120);
+    expect(d.width).toBeLessThanOrEqual(300);
+  });
+
+  it('prints dimensions in inches for US units', () => {
+    const { svg } = sectionDrawingSvg(r1(), 'us');
+    // 300 mm / 25.4 = 11.81 in (NIST SP 811 B.8), four figures as the leading digit is 1
+    expect(svg).toContain('>11.81 in</text>');
+    // 550 mm / 25.4 = 21.65 in, three figures
+    expect(svg).toContain('>21.7 in</text>');
+  });
+
+  it('escapes text for XML and survives a shape with no area', () => {
+    const odd: SectionDefinition = { ...r1(), bars: [{ ...r1().bars[0]!, label: 'A & B <main>' }] };
+    expect(sectionDrawingSvg(odd, 'si').svg).toContain('A &amp; B &lt;main&gt;');
+    const flat: SectionDefinition = { ...r1(), shape: { kind: 'rectangle', width: 0, height: 550 } };
+    const d = sectionDrawingSvg(flat, 'si');
+    expect(d.scale).toBeNull();
+    expect(d.svg).toContain('cannot be drawn');
+  });
+
+  it('is the same text for the same section', () => {
+    expect(sectionDrawingSvg(r1(), 'si').svg).toBe(sectionDrawingSvg(r1(), 'si').svg);
+  });
+});

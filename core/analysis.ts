@@ -4,7 +4,8 @@
  * Pure and deterministic. Members are independent: one member's failure never stops the others.
  */
 import { BugError, InputError } from './diagnostics.ts';
-import { analyzeMember, type MemberContext } from './member/analyze.ts';
+import type { MemberContext } from './member/analyze.ts';
+import { analyzeMemberWithRetrofit } from './retrofit/analyze.ts';
 import type { MemberResult } from './member/results.ts';
 import type { MemberDefinition } from './member/definition.ts';
 import type { Project } from './project/types.ts';
@@ -75,7 +76,7 @@ export function analyzeMembers(project: Project, memberIds?: readonly string[], 
         onProgress?.(k + 1, members.length, m.id);
         return;
       }
-      result = analyzeMember(m, context);
+      result = analyzeMemberWithRetrofit(m, context, project);
       byContent.set(key, result);
     } catch (error) {
       // Keep going with the other members; this member reports what went wrong.

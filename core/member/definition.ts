@@ -3,6 +3,7 @@
  * lengths mm, line loads N/mm, point loads N. Loads act downward when positive (gravity).
  * Positions x are measured from the left support (the fixed end of a cantilever).
  */
+import type { AsFoundCondition, StrengtheningScheme } from '../retrofit/types.ts';
 
 /**
  * Support conditions of a single span. A cantilever is fixed at x = 0 and free at x = L; a
@@ -107,4 +108,8 @@ export interface MemberDefinition {
   readonly service: ServiceSettings;
   readonly capacity: CapacitySettings;
   readonly notes?: string;
+  /** The member as found: tested strengths and deterioration (core/retrofit). */
+  readonly asFound?: AsFoundCondition;
+  /** Strengthening schemes to compare (core/retrofit). */
+  readonly schemes?: readonly StrengtheningScheme[];
 }

@@ -5,6 +5,8 @@
 import type { ElasticProperties } from '../section/elastic.ts';
 import type { MomentCurvatureResult } from '../section/results.ts';
 import type { DeflectionLimitCase, HingeLengthMethod, SupportType } from './definition.ts';
+import type { ShearResult } from './shear.ts';
+import type { RetrofitResult } from '../retrofit/types.ts';
 
 export type MemberStatus = 'ok' | 'check-fails' | 'not-converged' | 'input-error';
 
@@ -171,4 +173,8 @@ export interface MemberResult {
   readonly strength: StrengthCheck | null;
   readonly warnings: readonly string[];
   readonly errors: readonly { readonly path: string; readonly message: string }[];
+  /** Shear capacity and demand, flexure- or shear-governed (core/member/shear.ts). */
+  readonly shear?: ShearResult;
+  /** Design, as-found and strengthened variants (core/retrofit). */
+  readonly retrofit?: RetrofitResult;
 }

@@ -32,7 +32,8 @@ import type { CodeBasis, ConcreteSpec } from '../materials/specs.ts';
 import type { SectionAnalysis } from '../section/analyze.ts';
 import type { SectionDefinition } from '../section/definition.ts';
 import { barArea } from '../section/definition.ts';
-import type { BendingDirection, SectionModel } from '../section/model.ts';
+import type { BendingDirection, DiscreteElement, SectionModel } from '../section/model.ts';
+import { tensionSteel } from '../section/moment-curvature.ts';
 import { faces } from '../section/state.ts';
 import { stripWidthAt } from '../section/width-profile.ts';
 import { buildBeamModel, type ZoneResponse } from './beam-model.ts';
@@ -71,6 +72,7 @@ export function aciMinimumShearReinforcement(fc: number, bw: number, fyt: number
   return (Math.max(0.062 * Math.sqrt(fc), 0.35) * bw) / fyt;
 }
 
+/** Inputs of aciConcreteShear (N, mm, MPa). */
 export interface AciConcreteShearInput {
   /** f′c, MPa (> 0). */
   readonly fc: number;
@@ -89,6 +91,7 @@ export interface AciConcreteShearInput {
   readonly meetsMinimum: boolean;
 }
 
+/** Vc of ACI 318-19 Table 22.5.5.1 with the row and factors used (N, MPa). */
 export interface AciConcreteShear {
   /** Vc, N (≥ 0, ≤ 0.42λ√f′c·bw·d). */
   readonly value: number;
@@ -141,6 +144,7 @@ export function aciStirrupShear(av: number, fyt: number, d: number, s: number): 
   return (av * fyt * d) / s;
 }
 
+/** Vertical stirrups crossing a horizontal cut (mm², mm, MPa). */
 export interface StirrupInput {
   /** Area of the legs crossing a horizontal cut, mm². */
   readonly area: number;
@@ -150,6 +154,7 @@ export interface StirrupInput {
   readonly yieldStress: number;
 }
 
+/** Shear strength of a section by ACI 318-19 22.5 (N). */
 export interface AciShearStrength {
   readonly concrete: AciConcreteShear;
   /** Vs, N, after the section limit. */
@@ -234,6 +239,7 @@ export function enCompressionChordFactor(sigmaCp: number, fcd: number): number {
   return Math.max(0, 2.5 * (1 - sigmaCp / fcd));
 }
 
+/** Inputs of enConcreteShear (N, mm, MPa). */
 export interface EnConcreteShearInput {
   /** fck, MPa. */
   readonly fck: number;
@@ -249,6 +255,7 @@ export interface EnConcreteShearInput {
   readonly gammaC: number;
 }
 
+/** VRd,c of EN 1992-1-1 Eq. (6.2a/b) with its factors (N, MPa). */
 export interface EnConcreteShear {
   readonly value: number;
   readonly k: number;
@@ -301,6 +308,7 @@ export function enOptimalStrutAngle(areaPerLength: number, fywd: number, alphaCw
   return Math.min(2.5, Math.max(1, Math.sqrt(ratio)));
 }
 
+/** Shear resistance of a section by EN 1992-1-1 6.2 (N, mm, MPa). */
 export interface EnShearStrength {
   readonly concrete: EnConcreteShear;
   /** VRd,s, VRd,max at the chosen cot θ, N. */
@@ -434,6 +442,7 @@ export interface ShearZone {
   readonly stirrupYield?: number;
 }
 
+/** Shear capacity of a zone section in one bending direction, design and nominal (N, mm, MPa). */
 export interface ShearCapacity {
   readonly sectionId: string;
   readonly sectionName: string;
@@ -441,6 +450,8 @@ export interface ShearCapacity {
   readonly code: CodeBasis;
   readonly effectiveDepth: number;
   readonly webWidth: number;
+  /** False when the direction has no tension bars (d falls back to 0.8 of the depth, ρ = 0). */
+  readonly hasTensionBars: boolean;
   /** f′c or fck used, MPa. */
   readonly concreteStrength: number;
   readonly stirrups: { readonly legs: number; readonly diameter: number; readonly spacing: number; readonly area: number; readonly yieldStress: number; readonly meetsMinimum: boolean } | null;
@@ -494,6 +505,7 @@ export function sectionShearCapacity(code: CodeBasis, zone: ShearZone, direction
       code,
       effectiveDepth: d,
       webWidth: bw,
+      hasTensionBars: geometry.hasTensionBars,
       concreteStrength: fc,
       stirrups: hoops && stirrups ? { legs: hoops.verticalLegs, diameter: hoops.diameter, spacing: hoops.spacing, area: stirrups.area, yieldStress: r.stirrupYield, meetsMinimum: r.meetsMinimum } : null,
       concreteContribution: c.value,
@@ -517,6 +529,7 @@ export function sectionShearCapacity(code: CodeBasis, zone: ShearZone, direction
     code,
     effectiveDepth: d,
     webWidth: bw,
+    hasTensionBars: geometry.hasTensionBars,
     concreteStrength: fc,
     stirrups: hoops && stirrups ? { legs: hoops.verticalLegs, diameter: hoops.diameter, spacing: hoops.spacing, area: stirrups.area, yieldStress: stirrups.yieldStress, meetsMinimum: design.meetsMinimum } : null,
     concreteContribution: c.value,
@@ -602,6 +615,7 @@ export function releasedShear(support: SupportType, span: number, loads: readonl
   return v;
 }
 
+/** A zone of the member with its elastic flexural stiffness, for support moments (mm, N·mm²). */
 export interface ElasticZone {
   readonly from: number;
   readonly to: number;
@@ -655,6 +669,7 @@ export interface ShearDemandPoint {
   readonly supportFace: boolean;
 }
 
+/** Shear of a member: capacities, factored and mechanism demands, and the verdict (N, mm, N·mm). */
 export interface ShearResult {
   readonly code: CodeBasis;
   readonly capacities: readonly ShearCapacity[];
@@ -690,6 +705,7 @@ export interface ShearResult {
   readonly warnings: readonly string[];
 }
 
+/** Inputs of memberShear. */
 export interface MemberShearInput {
   readonly code: CodeBasis;
   readonly member: MemberDefinition;
@@ -782,7 +798,9 @@ export function memberShear(input: MemberShearInput): ShearResult {
   for (const xs of supportsAt) {
     const zi = zoneIndexAt(xs, xs === 0 ? 'right' : 'left');
     const c = caps[zi]!;
-    const d = Math.min(Math.max(c.sagging?.effectiveDepth ?? 0, c.hogging?.effectiveDepth ?? 0), span);
+    // The smaller d of the directions with tension bars: the check starts no further from the support than either allows.
+    const depths = [c.sagging, c.hogging].filter((k): k is ShearCapacity => k !== null && k.hasTensionBars).map((k) => k.effectiveDepth);
+    const d = Math.min(depths.length > 0 ? Math.min(...depths) : Math.max(c.sagging?.effectiveDepth ?? 0, c.hogging?.effectiveDepth ?? 0), span);
     const left = xs === 0;
     const loaded = pointPositions.some((p) => (left ? p > 0 && p <= d : p >= span - d && p < span));
     if (loaded) ruleParts.push(`a point load lies within d = ${d.toFixed(0)} mm of the support at ${m(xs)}: checked up to the support face`);
@@ -805,46 +823,52 @@ export function memberShear(input: MemberShearInput): ShearResult {
   // A span shorter than 2d would skip everything: then every station is checked.
   const checked = stations.some((x) => !skipped(x)) ? (x: number) => !skipped(x) : () => true;
 
-  /** Largest demand/capacity over the stations for a force state. */
-  const scan = (forces: (x: number, side: 'left' | 'right') => { moment: number; shear: number }, level: 'nominal' | 'design'): ShearDemandPoint & { ratio: number } => {
-    let best: (ShearDemandPoint & { ratio: number }) | undefined;
+  type Best = ShearDemandPoint & { ratio: number };
+  /** Largest demand/capacity over the stations for a force state, on nominal and on design strengths (one pass). */
+  const scan = (forces: (x: number, side: 'left' | 'right') => { moment: number; shear: number }): { nominal: Best; design: Best } => {
+    let nominal: Best | undefined;
+    let design: Best | undefined;
+    const ratioOf = (v: number, capacity: number) => (capacity > 0 ? v / capacity : v > 0 ? 99.99 : 0);
     const consider = (point: ShearDemandPoint) => {
-      const capacity = level === 'nominal' ? point.nominal : point.design;
-      const ratio = capacity > 0 ? point.shear / capacity : point.shear > 0 ? 99.99 : 0;
-      if (!best || ratio > best.ratio) best = { ...point, ratio };
+      const rn = ratioOf(point.shear, point.nominal);
+      const rd = ratioOf(point.shear, point.design);
+      if (!nominal || rn > nominal.ratio) nominal = { ...point, ratio: rn };
+      if (!design || rd > design.ratio) design = { ...point, ratio: rd };
     };
     for (const x of stations) {
       for (const side of ['left', 'right'] as const) {
         if ((x === 0 && side === 'left') || (x === span && side === 'right')) continue;
         const f = forces(x, side);
-        if (checked(x)) {
-          const { cap } = capacityAt(x, side, f.moment);
-          consider({ position: x, shear: Math.abs(f.shear), sectionId: cap.sectionId, direction: cap.direction, nominal: cap.nominal, design: cap.design, supportFace: false });
-        }
-        if (code === 'EN 1992-1-1' && supportsAt.includes(x)) {
-          const { cap } = capacityAt(x, side, f.moment);
-          if (cap.supportLimit) consider({ position: x, shear: Math.abs(f.shear), sectionId: cap.sectionId, direction: cap.direction, nominal: cap.supportLimit.nominal, design: cap.supportLimit.design, supportFace: true });
-        }
+        const { cap } = capacityAt(x, side, f.moment);
+        const shear = Math.abs(f.shear);
+        if (checked(x)) consider({ position: x, shear, sectionId: cap.sectionId, direction: cap.direction, nominal: cap.nominal, design: cap.design, supportFace: false });
+        if (cap.supportLimit && supportsAt.includes(x)) consider({ position: x, shear, sectionId: cap.sectionId, direction: cap.direction, nominal: cap.supportLimit.nominal, design: cap.supportLimit.design, supportFace: true });
       }
     }
-    return best!;
+    return { nominal: nominal!, design: design! };
   };
 
   // --- factored combination ----------------------------------------------------------------------------
   const factoredLoads = combinedLoads(sets, input.factors);
   const elasticZones: ElasticZone[] = zones.map((z) => ({ from: z.from, to: z.to, sectionId: z.definition.id, stiffness: z.analysis.codeModulus * (z.analysis.elastic?.grossInertia ?? 0) }));
   const factoredEnds = elasticSupportMoments(member, elasticZones, factoredLoads, segments);
-  const f = scan((x, side) => memberForcesAt(member.supports, span, factoredLoads, factoredEnds, x, side), 'design');
+  const f = scan((x, side) => memberForcesAt(member.supports, span, factoredLoads, factoredEnds, x, side)).design;
   const factored = { combination: input.combination, governing: stripRatio(f), utilisation: Math.min(f.ratio, 99.99), pass: f.ratio <= 1 };
 
   // --- mechanism ------------------------------------------------------------------------------------------
   const hinge = zones.map((z) => hingeMoments(z, gamma));
   const overstrengthBasis = `hinge moments = ${gamma.toFixed(2)} × the peak moment of each section's moment–curvature curve (steel law to its ultimate stress fu)`;
-  if (zones.some((z) => {
-    const sections = [z.analysis.curves.sagging, z.analysis.curves.hogging].filter((c) => c);
-    return sections.length > 0 && sections.every((c) => c!.keyPoints.peak && c!.keyPoints.firstYield && c!.keyPoints.peak.moment <= c!.keyPoints.firstYield.moment * 1.0001);
-  })) {
-    warnings.push('The steel law has no strain hardening: the flexural overstrength at the mechanism is only what the curve holds (ACI 318-19 18.6.5.1 would use 1.25 fy); consider a hardening law or measured fu.');
+  const noHardening = zones.some((z) => {
+    const model = z.analysis.model;
+    if (!model) return false;
+    return (['sagging', 'hogging'] as const).some((dir) => {
+      const main = tensionSteel(model, dir).reduce<DiscreteElement | undefined>((a, b) => (!a || b.area > a.area ? b : a), undefined);
+      const law = main?.material as { yieldStress?: number; ultimateStress?: number } | undefined;
+      return law?.yieldStress !== undefined && law.ultimateStress !== undefined && law.ultimateStress <= law.yieldStress * 1.0001;
+    });
+  });
+  if (noHardening) {
+    warnings.push('The main tension steel has no strain hardening (fu = fy): the flexural overstrength at the mechanism is only what the curve holds (ACI 318-19 18.6.5.1 would use 1.25 fy); consider a hardening law or measured fu.');
   }
   const patternTotal = totalLoad(pattern);
   let mechanism: ShearResult['mechanism'] = null;
@@ -869,8 +893,8 @@ export function memberShear(input: MemberShearInput): ShearResult {
       for (const side of ['left', 'right'] as const) {
         if ((x === 0 && side === 'left') || (x === span && side === 'right')) continue;
         if (indeterminate && (x === 0 || (member.supports === 'fixed-fixed' && x === span))) continue;
-        const a = memberForcesAt(member.supports, span, constant, ends, x, side).moment;
-        const b = memberForcesAt(member.supports, span, pattern, { left: 0, right: 0 }, x, side).moment;
+        const a = releasedMoment(member.supports, span, constant, x) + (member.supports === 'cantilever' ? 0 : ends.left * (1 - x / span) + (ends.right * x) / span);
+        const b = releasedMoment(member.supports, span, pattern, x);
         const h = hingeAt(x, side);
         if (b > 1e-9) {
           const l = (h.sagging - a) / b;
@@ -897,8 +921,7 @@ export function memberShear(input: MemberShearInput): ShearResult {
     } else {
       const loads = [...constant, ...pattern.map((l) => scaleLoad(l, lambda))];
       const forces = (x: number, side: 'left' | 'right') => memberForcesAt(member.supports, span, loads, ends, x, side);
-      const nominal = scan(forces, 'nominal');
-      const design = scan(forces, 'design');
+      const { nominal, design } = scan(forces);
       // Hogging moments beyond the hinge capacity elsewhere mean another mechanism would form first.
       for (const x of stations) {
         const mx = forces(x, 'right').moment;

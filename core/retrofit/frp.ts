@@ -1,0 +1,198 @@
+/**
+ * Externally bonded FRP for flexure, ACI 440.2R-17:
+ *  - design rupture strain εfu = CE·ε*fu (9.4, with CE from Table 9.4);
+ *  - debonding strain εfd = 0.41√(f′c/(n·Ef·tf)) ≤ 0.9εfu (Eq. 10.1.1; in.-lb. form 0.083 with psi
+ *    and in.) — the limit of the FRP's own strain; when the 0.9εfu cap governs, rupture rather than
+ *    debonding ends the curve;
+ *  - the substrate strain at installation εbi from the moment present when the FRP is bonded, by a
+ *    cracked elastic section analysis εbi = M·(df − kd)/(Icr·Ec) (10.2.3; the form of its design
+ *    examples, from memory) — or, optionally, from the section's own moment–curvature curve;
+ *  - ψf = 0.85 on the FRP's contribution to the nominal moment (10.2.10): φMn = φ(Mns + ψf·Mnf).
+ * The FRP becomes a discrete element of kind 'frp' of the section (core/section/model.ts): linear
+ * elastic in tension (core/materials/frp/linear-frp.ts), active only for strain beyond εbi, ending
+ * the curve at its limit strain with the cause 'frp-debonding' or 'frp-rupture'.
+ *
+ * Section numbers and the equation number 10.1.1 are as given in the brief of this feature; the
+ * equation text is checked against its in.-lb. form in test/references/retrofit-aci440.test.ts.
+ * Units: MPa, mm, N, N·mm; strains dimensionless, compression positive.
+ */
+import type { CodeBasis } from '../materials/specs.ts';
+import type { FrpMaterial } from '../materials/types.ts';
+import { aciFlexureReductionFactor, designResistance } from '../member/strength.ts';
+import type { SectionAnalysis } from '../section/analyze.ts';
+import { sectionResultants } from '../section/forces.ts';
+import { directionSign, type BendingDirection, type DiscreteElement, type SectionModel } from '../section/model.ts';
+import type { MomentCurvatureResult } from '../section/results.ts';
+import { strainAtDepth } from '../section/state.ts';
+import type { FrpDesign } from './types.ts';
+
+/** Additional strength reduction factor on the FRP's flexural contribution, ψf = 0.85. @see ACI 440.2R-17 10.2.10 */
+export const FRP_FLEXURE_REDUCTION = 0.85;
+
+/**
+ * Debonding strain expression 0.41√(f′c/(n·Ef·tf)) before the cap (SI: MPa, mm), dimensionless.
+ * @param fc f′c, MPa (> 0); plies n ≥ 1; Ef MPa (> 0); tf ply thickness, mm (> 0)
+ * @see ACI 440.2R-17 Eq. (10.1.1)
+ */
+export function aciDebondingStrainSI(fc: number, plies: number, ef: number, tf: number): number {
+  return 0.41 * Math.sqrt(fc / (plies * ef * tf));
+}
+
+/**
+ * The same expression in in.-lb. units: 0.083√(f′c/(n·Ef·tf)) with f′c and Ef in psi, tf in inches.
+ * @see ACI 440.2R-17 Eq. (10.1.1), in.-lb. form
+ */
+export function aciDebondingStrainUS(fcPsi: number, plies: number, efPsi: number, tfInches: number): number {
+  return 0.083 * Math.sqrt(fcPsi / (plies * efPsi * tfInches));
+}
+
+/**
+ * The FRP strain limit: min(εfd, 0.9·εfu) with the cause that governs.
+ * @returns limit strain (positive magnitude) and 'frp-debonding' when εfd < 0.9εfu, else 'frp-rupture'
+ * @see ACI 440.2R-17 Eq. (10.1.1)
+ */
+export function frpStrainLimit(debondingStrain: number, designRuptureStrain: number): { limit: number; cause: 'frp-debonding' | 'frp-rupture'; cap: number } {
+  const cap = 0.9 * designRuptureStrain;
+  return debondingStrain < cap ? { limit: debondingStrain, cause: 'frp-debonding', cap } : { limit: cap, cause: 'frp-rupture', cap };
+}
+
+/**
+ * Design data of an FRP laminate on a concrete of strength f′c: area, εfu, εfd, limit and ψf.
+ * @param fc f′c (or fck under EN 1992-1-1, used in its place), MPa
+ * @see ACI 440.2R-17 9.4, Eq. (10.1.1), 10.2.10
+ */
+export function frpDesign(p: { plyThickness: number; plies: number; width: number; tensileModulus: number; ruptureStrain: number; environmentalFactor: number }, fc: number): FrpDesign {
+  const designRuptureStrain = p.environmentalFactor * p.ruptureStrain;
+  const debondingStrain = aciDebondingStrainSI(fc, p.plies, p.tensileModulus, p.plyThickness);
+  const { limit, cause, cap } = frpStrainLimit(debondingStrain, designRuptureStrain);
+  return {
+    plyThickness: p.plyThickness,
+    plies: p.plies,
+    width: p.width,
+    area: p.plies * p.plyThickness * p.width,
+    tensileModulus: p.tensileModulus,
+    manufacturerRuptureStrain: p.ruptureStrain,
+    environmentalFactor: p.environmentalFactor,
+    designRuptureStrain,
+    concreteStrength: fc,
+    debondingStrain,
+    ruptureCap: cap,
+    limitStrain: limit,
+    limitCause: cause,
+    reductionFactor: FRP_FLEXURE_REDUCTION,
+    formula: `εfu = CE·ε*fu = ${p.environmentalFactor} × ${p.ruptureStrain} = ${designRuptureStrain.toFixed(5)}; εfd = 0.41√(f′c/(n·Ef·tf)) = 0.41√(${fc.toFixed(1)}/(${p.plies} × ${p.tensileModulus} × ${p.plyThickness})) = ${debondingStrain.toFixed(5)} ${cause === 'frp-debonding' ? '<' : '≥'} 0.9εfu = ${cap.toFixed(5)} → limit ${limit.toFixed(5)} (${cause === 'frp-debonding' ? 'debonding' : 'rupture'} governs; ACI 440.2R-17 Eq. 10.1.1)`,
+  };
+}
+
+/**
+ * Substrate strain at the FRP by cracked elastic analysis, εbi = M·(df − kd)/(Icr·Ec) (tension,
+ * returned as a positive magnitude).
+ * @param moment installation moment magnitude, N·mm; df depth of the FRP from the compression face, mm;
+ *               kd cracked neutral-axis depth from the compression face, mm; Icr mm⁴ (concrete units); Ec MPa
+ * @see ACI 440.2R-17 10.2.3 (from memory)
+ */
+export function crackedSubstrateStrain(moment: number, df: number, kd: number, icr: number, ec: number): number {
+  return (moment * (df - kd)) / (icr * ec);
+}
+
+/**
+ * Substrate strain at depth y (mm below the top fibre) when the section carries `moment` (N·mm,
+ * magnitude in the curve's direction), read on the ascending branch of its moment–curvature curve
+ * (linear between computed points); compression positive. Null when the moment exceeds the curve.
+ */
+export function substrateStrainFromCurve(model: SectionModel, curve: MomentCurvatureResult, moment: number, depth: number): number | null {
+  const sign = directionSign(curve.direction);
+  const pts = curve.points;
+  if (pts.length === 0) return null;
+  if (moment <= 0) return strainAtDepth(model, pts[0]!.referenceStrain, sign * pts[0]!.curvature, depth);
+  for (let i = 1; i < pts.length; i++) {
+    const a = pts[i - 1]!;
+    const b = pts[i]!;
+    if (b.moment >= moment) {
+      const t = b.moment > a.moment ? (moment - a.moment) / (b.moment - a.moment) : 1;
+      const eps0 = a.referenceStrain + t * (b.referenceStrain - a.referenceStrain);
+      const phi = a.curvature + t * (b.curvature - a.curvature);
+      return strainAtDepth(model, eps0, sign * phi, depth);
+    }
+  }
+  return null;
+}
+
+/** The FRP laminate as a discrete section element (initial strain compression positive, so tension is negative). */
+export function frpElement(label: string, material: FrpMaterial, design: FrpDesign, depth: number, initialStrain: number): DiscreteElement {
+  return {
+    kind: 'frp',
+    label,
+    sourceIndex: 0,
+    area: design.area,
+    depth,
+    material,
+    initialStrain,
+    limitStrain: design.limitStrain,
+    limitCause: design.limitCause,
+    displacedConcrete: null,
+  };
+}
+
+/** A design flexural resistance (N·mm) with the nominal moment and the FRP part it was reduced from, and how it was found. */
+export interface FlexuralResistance {
+  /** Design resistance, N·mm (null without tension reinforcement in the direction). */
+  readonly value: number | null;
+  /** Nominal moment Mn of the point used, and the FRP's part Mnf, N·mm. */
+  readonly nominal: number | null;
+  readonly frpMoment: number;
+  readonly note: string;
+}
+
+/**
+ * Design flexural resistance of a section in one direction, with ψf on the FRP's contribution:
+ *  - ACI 318-19 basis: φ·(Mn − (1 − ψf)·Mnf) = φ(Mns + ψf·Mnf), Mn at εc = 0.003 or where the curve
+ *    ends (FRP debonding or rupture) if sooner, φ from εt (ACI 318-19 Table 21.2.2);
+ *  - EN 1992-1-1 basis: the same on the curve with design laws (M_Rd).
+ * Mnf = Tf·(df − yc), Tf the FRP force and yc the depth of the compression resultant. Without FRP
+ * it is exactly the engine's resistance (core/member/strength.ts designResistance).
+ * @see ACI 440.2R-17 10.2.10; ACI 318-19 Table 21.2.2
+ */
+export function flexuralDesignResistance(code: CodeBasis, analysis: SectionAnalysis, direction: BendingDirection): FlexuralResistance {
+  const curve = code === 'EN 1992-1-1' && analysis.designCurves ? analysis.designCurves[direction] : analysis.curves[direction];
+  const model = analysis.model;
+  const hasFrp = model?.elements.some((e) => e.kind === 'frp') ?? false;
+  const plain = designResistance(code, curve, analysis.yieldStrain[direction]);
+  if (!hasFrp || !curve || !model || plain.value === null) return { value: plain.value, nominal: null, frpMoment: 0, note: plain.note };
+  const kp = curve.keyPoints;
+  const at = kp.codeCrushing && (!kp.ultimate || kp.codeCrushing.curvature <= kp.ultimate.curvature) ? kp.codeCrushing : kp.peak;
+  if (!at) return { value: plain.value, nominal: null, frpMoment: 0, note: plain.note };
+  const frp = at.state.elements.filter((e) => e.kind === 'frp' && e.force < 0);
+  const tf = -frp.reduce((s, e) => s + e.force, 0);
+  const df = tf > 0 ? frp.reduce((s, e) => s - e.force * e.depth, 0) / tf : 0;
+  let yc: number;
+  if (code === 'ACI 318-19') {
+    yc = sectionResultants(model, at.referenceStrain, directionSign(direction) * at.curvature).compressionDepth;
+  } else {
+    // Design laws carry no concrete tension: the tension resultant is the elements' alone.
+    const tension = at.state.elements.filter((e) => e.force < 0);
+    const t = -tension.reduce((s, e) => s + e.force, 0);
+    const yt = t > 0 ? tension.reduce((s, e) => s - e.force * e.depth, 0) / t : 0;
+    const z = at.state.leverArm ?? 0;
+    yc = direction === 'sagging' ? yt - z : yt + z;
+  }
+  const mnf = tf * Math.abs(df - yc);
+  const reduced = at.moment - (1 - FRP_FLEXURE_REDUCTION) * mnf;
+  const kNm = (x: number) => `${(x / 1e6).toFixed(1)} kN·m`;
+  const where = at === kp.peak ? 'where the curve ends (FRP limit before εc = 0.003)' : 'at εc = 0.003';
+  if (code === 'ACI 318-19') {
+    const phi = aciFlexureReductionFactor(at.maxSteelTensileStrain, analysis.yieldStrain[direction]);
+    return {
+      value: phi * reduced,
+      nominal: at.moment,
+      frpMoment: mnf,
+      note: `φ(Mns + ψf·Mnf) = ${phi.toFixed(3)} × (${kNm(at.moment - mnf)} + 0.85 × ${kNm(mnf)}) = ${kNm(phi * reduced)} (${where}, εt = ${(at.maxSteelTensileStrain * 1000).toFixed(2)} ‰; ACI 440.2R-17 10.2.10)`,
+    };
+  }
+  return {
+    value: reduced,
+    nominal: at.moment,
+    frpMoment: mnf,
+    note: `M_Rd = Mns + ψf·Mnf = ${kNm(at.moment - mnf)} + 0.85 × ${kNm(mnf)} = ${kNm(reduced)} from design laws (${where}; ψf of ACI 440.2R-17 10.2.10)`,
+  };
+}

@@ -67,7 +67,8 @@ export function analyzeMembers(project: Project, memberIds?: readonly string[], 
   members.forEach(({ m, index }, k) => {
     const context: MemberContext = { code: project.info.codeBasis, segments: project.settings.stations, section, sectionIds, path: `members[${index}] "${m.name}"` };
     let result: MemberResult;
-    const key = contentKey(m);
+    // Members with an as-found condition or schemes carry derived ids of their own: never shared.
+    const key = m.asFound || (m.schemes?.length ?? 0) > 0 ? `${m.id}\u0000unique` : contentKey(m);
     const twin = byContent.get(key);
     try {
       if (twin && twin.status !== 'input-error') {

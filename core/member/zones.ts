@@ -11,7 +11,11 @@ import { plainConcreteResponse, sectionResponse, type SectionResponse } from './
 
 /** Effective depth, main bar diameter, fy and fu of the tension steel for a direction. */
 export function hingeSectionData(model: SectionModel, direction: BendingDirection): HingeSectionData {
-  const steel = tensionSteel(model, direction);
+  // Hinge lengths depend on the main bars (strain penetration, hardening): bonded plates added by a
+  // retrofit scheme count only when the section has no bars on that side.
+  const all = tensionSteel(model, direction);
+  const bars = all.filter((e) => e.kind === 'bar');
+  const steel = bars.length > 0 ? bars : all;
   if (steel.length === 0) return { effectiveDepth: model.height * 0.9, barDiameter: 0, yieldStress: 1, ultimateStress: 1 };
   const area = steel.reduce((s, e) => s + e.area, 0);
   const centroid = steel.reduce((s, e) => s + e.area * e.depth, 0) / area;

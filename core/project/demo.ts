@@ -217,10 +217,16 @@ function usMembers(): MemberDefinition[] {
       notes: 'Level 2 T-beam under the new air-handling unit and the file store (partial live load). Cores and a corroded bottom layer found on site; CFRP strengthening compared.',
       asFound: {
         cores: [{ concreteId: 'c3000-existing', meanStrength: psi(3500), count: 6, coefficientOfVariation: 0.11, note: 'cores C1–C6 from the Level 2 beams, corrected to in-place cylinder strength' }],
-        steel: [{ steelId: 'g40', source: 'era-default', yieldStress: ksi(40), note: 'no coupons taken; intermediate grade of the period' }],
-        defects: [{ kind: 'section-loss', layer: 0, lossPercent: 8, note: 'bottom bars corroded near the former loading-dock door' }],
+        steel: [{ steelId: 'g40', source: 'era-default', yieldStress: ksi(40), ultimateStress: ksi(60), note: 'no coupons taken; intermediate grade of the period' }],
+        defects: [
+          { kind: 'section-loss', layer: 0, lossPercent: 8, note: 'bottom bars corroded near the former loading-dock door' },
+          { kind: 'cover-loss', face: 'bottom', depth: inch(0.75), note: 'soffit spalled over about 4 ft at midspan' },
+        ],
       },
-      schemes: [{ kind: 'frp', id: 'cfrp-2', name: 'Two plies of CFRP sheet, 10 in wide, on the soffit', frpId: 'cfrp-sheet', plyThickness: inch(0.04), plies: 2, width: inch(10) }],
+      schemes: [
+        { kind: 'frp', id: 'cfrp-2', name: 'Two plies of CFRP sheet, 10 in wide, on the repaired soffit', frpId: 'cfrp-sheet', plyThickness: inch(0.0065), plies: 2, width: inch(10), repairSpalls: true },
+        { kind: 'concrete-layer', id: 'overlay-3', name: '3 in bonded overlay, 4000 psi, 4 #4', face: 'top', thickness: inch(3), concreteId: 'c4000-kent-park', bars: [{ steelId: 'g60', distanceFromFace: inch(1.5), count: 4, diameter: barSize(4) }] },
+      ],
     }),
     member({
       id: 'R-301', name: 'R-301', supports: 'simply-supported', span: ft(28), zones: whole(ft(28), 'T20'),

@@ -164,23 +164,32 @@ export function momentCurvature(model: SectionModel, direction: BendingDirection
     const slope = before && a.kappa > before.kappa
       ? (a.eq.referenceStrain - before.eq.referenceStrain) / (a.kappa - before.kappa)
       : (b.eq.referenceStrain - a.eq.referenceStrain) / (b.kappa - a.kappa);
+    // A curvature with no equilibrium on this branch lies beyond the limit of the section: it counts
+    // as "event passed" (+1), so the search closes in on the last state that exists.
+    let lastGood: { kappa: number; state: EquilibriumState } = { kappa: a.kappa, state: a.eq };
     const f = (kappa: number) => {
       lastGuess = a.eq.referenceStrain + slope * (kappa - a.kappa);
       const s = solve(kappa);
       if (typeof s === 'string') {
         failure = s;
-        return NaN;
+        return 1;
       }
       lastState = s;
-      return g[name](s);
+      const value = g[name](s);
+      if (value < 0 && kappa > lastGood.kappa) lastGood = { kappa, state: s };
+      return value;
     };
     // Key points to a relative 1e-7 in curvature: far inside the 0.2 % the checks ask for.
     const root: RootResult = brentRoot(f, a.kappa, b.kappa, g[name](a.eq), g[name](b.eq), { xTolerance: 1e-7 * b.kappa, fTolerance: 1e-9, maxIterations: 100 });
-    if (failure) return failure;
     let kappa = root.x;
     if (!lastState || lastState.curvature !== sign * kappa) {
+      lastGuess = lastGood.state.referenceStrain;
       const s = solve(kappa);
-      if (typeof s === 'string') return s;
+      if (typeof s === 'string') {
+        // The event sits where equilibrium ends: report the last state that had one.
+        if (!failure) failure = s;
+        return lastGood.kappa > a.kappa || g[name](a.eq) < 0 ? { kappa: lastGood.kappa, eq: lastGood.state, jumped: true } : failure;
+      }
       lastState = s;
     }
     let jumped = false;

@@ -1,0 +1,189 @@
+/**
+ * Scaled drawing of a cross-section as an SVG string: concrete outline (core/section/shapes.ts),
+ * voids, hoop, bars at their positions (core/section/build.ts `barPositions`), overall dimensions
+ * and a label per reinforcement layer. The drawing is to a true scale 1:n when shown at its stated
+ * width and height in points (1 pt = 1/72 in), as in the report; the app may show it at any size.
+ */
+import type { SectionDefinition } from '../section/definition.ts';
+import { layerArea } from '../section/definition.ts';
+import { barPositions, shapeHeight, webExtent } from '../section/build.ts';
+import { shapeOutline, type Point } from '../section/shapes.ts';
+import { formatQuantity } from '../units/format.ts';
+import { PALETTE } from './palette.ts';
+import type { UnitsInput } from './types.ts';
+import { finite, resolveUnits, unitFor } from './units.ts';
+
+export interface SectionDrawingOptions {
+  /** Largest width and height of the whole drawing (with dimensions and labels), points. Defaults 240 × 240. */
+  readonly maxWidth?: number;
+  readonly maxHeight?: number;
+  /** Text size, points (default 7.5). */
+  readonly fontSize?: number;
+  /** Font family named in the SVG (default `Roboto`, the report font). */
+  readonly fontFamily?: string;
+  /** Label the reinforcement layers at the right (default true). */
+  readonly layerLabels?: boolean;
+}
+
+export interface SectionDrawing {
+  /** Standalone SVG document (UTF-8 text). */
+  readonly svg: string;
+  /** Size of the drawing, points (= CSS pixels in the app). */
+  readonly width: number;
+  readonly height: number;
+  /** The drawing scale 1:n at the stated size (null when the section is too large for the candidate scales and was fitted instead). */
+  readonly scale: number | null;
+  /** E.g. `scale 1:10 at the printed size`. */
+  readonly scaleText: string;
+}
+
+/** Drawing scales tried, 1:n (common drafting scales; // common practice, no source). */
+const SCALES = [1, 2, 2.5, 5, 10, 15, 20, 25, 30, 40, 50, 75, 100, 150, 200, 250, 500];
+
+const POINTS_PER_MM = 72 / 25.4;
+
+function escapeXml(text: string): string {
+  return text.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
+}
+
+/** Approximate advance width of text in a sans-serif font, points (average glyph ≈ 0.53 em). */
+function textWidth(text: string, fontSize: number): number {
+  return text.length * fontSize * 0.53;
+}
+
+const n2 = (v: number) => (Math.round(v * 100) / 100).toString();
+
+/**
+ * Draws a section. Units: the definition is in mm; dimensions and bar sizes print in the section
+ * display unit of `units` (mm / in) and areas in mm² / in².
+ * Degenerate cases: an outline without area or with non-finite coordinates gives a drawing that
+ * says so instead of a shape; bar layers with non-finite data are left out.
+ */
+export function sectionDrawingSvg(definition: SectionDefinition, unitsInput: UnitsInput, options: SectionDrawingOptions = {}): SectionDrawing {
+  const units = resolveUnits(unitsInput);
+  const maxWidth = options.maxWidth ?? 240;
+  const maxHeight = options.maxHeight ?? 240;
+  const font = options.fontSize ?? 7.5;
+  const family = options.fontFamily ?? 'Roboto';
+  const lengthUnit = unitFor('sectionLength', units);
+  // Whole millimetres print without decimals (300 mm, not 300.0 mm).
+  const length = (mm: number) => formatQuantity('sectionLength', mm, units.system, { unit: lengthUnit, ...((lengthUnit ?? 'mm') === 'mm' && units.system === 'SI' && Math.abs(mm - Math.round(mm)) < 1e-6 ? { decimals: 0 } : {}) });
+  const area = (mm2: number) => formatQuantity('area', mm2, units.system, { unit: unitFor('area', units) });
+
+  const { outline, voids } = shapeOutline(definition.shape);
+  const all = [...outline, ...voids.flat()];
+  const xs = all.map((p) => p.x);
+  const ys = all.map((p) => p.y);
+  const valid = all.length >= 3 && xs.every(finite) && ys.every(finite);
+  const xMin = valid ? Math.min(...xs) : 0;
+  const xMax = valid ? Math.max(...xs) : 0;
+  const height = valid ? shapeHeight(definition.shape) : 0;
+  const width = xMax - xMin;
+  if (!valid || !(width > 0) || !(height > 0)) {
+    const svg = `<svg xmlns="http://www.w3.org/2000/svg" width="${maxWidth}" height="40" viewBox="0 0 ${maxWidth} 40"><text x="4" y="20" font-family="${escapeXml(family)}" font-size="${font}" fill="${PALETTE.ink}">The section outline cannot be drawn (no area).</text></svg>`;
+    return { svg, width: maxWidth, height: 40, scale: null, scaleText: 'not to scale' };
+  }
+
+  // Layer labels and their widths decide the right margin.
+  const layers = (definition.bars ?? []).map((layer, i) => {
+    const diameter = layer.diameter ?? Math.sqrt((4 * (layer.area ?? 0)) / Math.PI);
+    const sized = layer.count !== undefined && layer.diameter !== undefined;
+    const text = `${layer.label ?? `layer ${i + 1}`}: ${sized ? `${layer.count} × ${length(layer.diameter!)}` : 'area'} (${area(layerArea(layer))})`;
+    return { layer, diameter, sized, text };
+  }).filter((l) => finite(l.layer.depth) && finite(l.diameter) && l.diameter > 0);
+  const showLabels = options.layerLabels ?? true;
+  const labelWidth = showLabels && layers.length > 0 ? Math.max(...layers.map((l) => textWidth(l.text, font))) + 16 : 0;
+
+  const web = webExtent(definition.shape);
+  const bottomChord = definition.shape.kind === 'tee' || definition.shape.kind === 'ell' ? web : undefined;
+  const marginLeft = font * 2 + 10;
+  const marginTop = font * 2 + 8;
+  const marginBottom = bottomChord ? font * 2 + 8 : 6;
+  const marginRight = Math.max(labelWidth, 6);
+  const availableWidth = maxWidth - marginLeft - marginRight;
+  const availableHeight = maxHeight - marginTop - marginBottom;
+  let scale: number | null = SCALES.find((n) => (width * POINTS_PER_MM) / n <= availableWidth && (height * POINTS_PER_MM) / n <= availableHeight) ?? null;
+  const k = scale !== null ? POINTS_PER_MM / scale : Math.min(availableWidth / width, availableHeight / height);
+  if (!(k > 0)) scale = null;
+  const svgWidth = Math.ceil(marginLeft + width * k + marginRight);
+  const svgHeight = Math.ceil(marginTop + height * k + marginBottom);
+  const X = (x: number) => marginLeft + (x - xMin) * k;
+  const Y = (y: number) => marginTop + y * k;
+  const path = (points: readonly Point[]) => `M${points.map((p) => `${n2(X(p.x))} ${n2(Y(p.y))}`).join(' L')} Z`;
+
+  const parts: string[] = [];
+  parts.push(`<path d="${path(outline)}${voids.map((v) => ` ${path(v)}`).join('')}" fill="#e6e9ed" fill-rule="evenodd" stroke="${PALETTE.ink}" stroke-width="0.9"/>`);
+
+  // Hoop along the web, at its centreline.
+  const hoops = definition.hoops;
+  if (hoops && web && finite(hoops.clearCover) && finite(hoops.diameter)) {
+    const offset = hoops.clearCover + hoops.diameter / 2;
+    const x0 = web.x0 + offset;
+    const x1 = web.x1 - offset;
+    const y0 = offset;
+    const y1 = height - offset;
+    if (x1 > x0 && y1 > y0) {
+      const radius = Math.min(2 * hoops.diameter, (x1 - x0) / 2, (y1 - y0) / 2) * k;
+      parts.push(`<rect x="${n2(X(x0))}" y="${n2(Y(y0))}" width="${n2((x1 - x0) * k)}" height="${n2((y1 - y0) * k)}" rx="${n2(radius)}" fill="none" stroke="${PALETTE.grey}" stroke-width="${n2(Math.max(hoops.diameter * k, 0.6))}"/>`);
+    }
+  }
+
+  // Bars.
+  for (const { layer, diameter, sized } of layers) {
+    const radius = Math.max((diameter / 2) * k, 1.2);
+    let positions: number[];
+    try {
+      positions = barPositions(definition, layer);
+    } catch {
+      positions = [];
+    }
+    for (const x of positions) {
+      if (!finite(x)) continue;
+      parts.push(sized
+        ? `<circle cx="${n2(X(x))}" cy="${n2(Y(layer.depth))}" r="${n2(radius)}" fill="${PALETTE.ink}"/>`
+        : `<circle cx="${n2(X(x))}" cy="${n2(Y(layer.depth))}" r="${n2(radius)}" fill="none" stroke="${PALETTE.ink}" stroke-width="0.8"/>`);
+    }
+  }
+
+  const text = (x: number, y: number, content: string, anchor: 'start' | 'middle' | 'end', rotate = false) =>
+    `<text x="${n2(x)}" y="${n2(y)}" font-family="${escapeXml(family)}" font-size="${font}" fill="${PALETTE.ink}" text-anchor="${anchor}"${rotate ? ` transform="rotate(-90 ${n2(x)} ${n2(y)})"` : ''}>${escapeXml(content)}</text>`;
+  const line = (x1: number, y1: number, x2: number, y2: number, w = 0.5) => `<path d="M${n2(x1)} ${n2(y1)} L${n2(x2)} ${n2(y2)}" stroke="${PALETTE.ink}" stroke-width="${w}" fill="none"/>`;
+  const tick = (x: number, y: number) => line(x - 2.2, y + 2.2, x + 2.2, y - 2.2, 0.7);
+
+  // Overall width above, height at the left, web width below (flanged shapes).
+  const yDim = marginTop - 6;
+  parts.push(line(X(xMin), yDim, X(xMax), yDim), tick(X(xMin), yDim), tick(X(xMax), yDim));
+  parts.push(line(X(xMin), yDim - 3, X(xMin), Y(0) - 1.5, 0.3), line(X(xMax), yDim - 3, X(xMax), Y(0) - 1.5, 0.3));
+  parts.push(text((X(xMin) + X(xMax)) / 2, yDim - 3, length(width), 'middle'));
+  const xDim = marginLeft - 6;
+  parts.push(line(xDim, Y(0), xDim, Y(height)), tick(xDim, Y(0)), tick(xDim, Y(height)));
+  parts.push(text(xDim - 3, (Y(0) + Y(height)) / 2, length(height), 'middle', true));
+  if (bottomChord) {
+    const yb = Y(height) + 6;
+    parts.push(line(X(bottomChord.x0), yb, X(bottomChord.x1), yb), tick(X(bottomChord.x0), yb), tick(X(bottomChord.x1), yb));
+    parts.push(text((X(bottomChord.x0) + X(bottomChord.x1)) / 2, yb + font + 2, length(bottomChord.x1 - bottomChord.x0), 'middle'));
+  }
+
+  // Layer labels at the right, spread so that they never overlap, each with a leader.
+  if (showLabels && layers.length > 0) {
+    const sorted = [...layers].sort((a, b) => a.layer.depth - b.layer.depth);
+    const gap = font + 2;
+    const placed: number[] = [];
+    for (const l of sorted) {
+      const wanted = Y(l.layer.depth) + font / 3;
+      placed.push(placed.length === 0 ? wanted : Math.max(wanted, placed[placed.length - 1]! + gap));
+    }
+    // Pull the stack back up if it ran past the bottom of the drawing.
+    const overflow = placed[placed.length - 1]! - (svgHeight - 2);
+    if (overflow > 0) for (let i = 0; i < placed.length; i++) placed[i] = placed[i]! - overflow;
+    const xLabel = X(xMax) + 14;
+    sorted.forEach((l, i) => {
+      const y = placed[i]!;
+      parts.push(line(X(xMax) + 2, Y(l.layer.depth), xLabel - 2, y - font / 3, 0.3));
+      parts.push(text(xLabel, y, l.text, 'start'));
+    });
+  }
+
+  const svg = `<svg xmlns="http://www.w3.org/2000/svg" width="${svgWidth}" height="${svgHeight}" viewBox="0 0 ${svgWidth} ${svgHeight}">${parts.join('')}</svg>`;
+  return { svg, width: svgWidth, height: svgHeight, scale, scaleText: scale !== null ? `scale 1:${scale} at the printed size` : 'fitted to the space, not to a standard scale' };
+}

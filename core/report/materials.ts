@@ -1,0 +1,114 @@
+/**
+ * The material laws a member's sections use, as the report lists them: the law's name (its
+ * `label`), the parameters it was built from (the user's values with the code-basis defaults filled
+ * in) and its published sources (`references`). Nothing is computed here beyond resolving the
+ * inputs exactly as the analysis did (core/project/resolver.ts, core/section/build.ts).
+ */
+import { resolveConcrete } from '../materials/build/concrete-defaults.ts';
+import type { CodeBasis, ConcreteSpec, SteelSpec } from '../materials/specs.ts';
+import type { ConcreteMaterial, SteelMaterial } from '../materials/types.ts';
+import { projectMaterials } from '../project/resolver.ts';
+import type { Project } from '../project/types.ts';
+import { buildSectionModel } from '../section/build.ts';
+import type { SectionDefinition } from '../section/definition.ts';
+import type { SectionModel } from '../section/model.ts';
+import type { ReportFormatter } from './format.ts';
+
+export interface MaterialLine {
+  /** What the row describes, e.g. `C30 (concrete)` or `C30, confined core of section S-1`. */
+  readonly name: string;
+  /** Name of the law with its source, from the law's `label`. */
+  readonly law: string;
+  /** Parameters with units, e.g. `f′c = 30.0 MPa`. */
+  readonly parameters: readonly string[];
+  /** Source strings of the law (full citations or clause references). */
+  readonly references: readonly string[];
+}
+
+/** Resolved section models by section id (null when the section cannot be built). */
+export function sectionModels(project: Project): (id: string) => SectionModel | null {
+  const materials = projectMaterials(project.materials, project.info.codeBasis);
+  const cache = new Map<string, SectionModel | null>();
+  return (id) => {
+    if (cache.has(id)) return cache.get(id)!;
+    const index = project.sections.findIndex((s) => s.id === id);
+    let model: SectionModel | null = null;
+    if (index >= 0) {
+      try {
+        model = buildSectionModel(project.sections[index]!, materials, `sections[${index}]`).model;
+      } catch {
+        model = null;
+      }
+    }
+    cache.set(id, model);
+    return model;
+  };
+}
+
+function concreteParameters(spec: ConcreteSpec, law: ConcreteMaterial, code: CodeBasis, f: ReportFormatter): string[] {
+  const r = resolveConcrete(spec, code);
+  const out: string[] = [];
+  if (code === 'EN 1992-1-1') out.push(`fck = ${f.concreteStress(spec.strength)} (fcm = ${f.concreteStress(r.modelStrength)})`);
+  else out.push(`f′c = ${f.concreteStress(spec.strength)}`);
+  out.push(`peak stress of the law ${f.concreteStress(law.peakStress)} at ε = ${f.strain(law.peakStrain)}`);
+  out.push(`Ec = ${f.modulus(r.elasticModulus)}${spec.elasticModulus === undefined ? ' (code value)' : ' (given)'}`);
+  out.push(`tensile strength ${f.concreteStress(r.tensileStrength)}${spec.tensileStrength === undefined ? (code === 'ACI 318-19' ? ' (fr, code value)' : ' (fctm, code value)') : ' (given)'}`);
+  out.push(`crushing strain εcu = ${f.strain(law.crushingStrain)}`);
+  out.push(`density ${f.density(spec.density ?? 2400)}`);
+  out.push(`creep coefficient φ = ${f.number(spec.creepCoefficient ?? 2.0)}, free shrinkage εcs = ${f.strain(spec.shrinkageStrain ?? 0.0004)}`);
+  return out;
+}
+
+function steelParameters(spec: SteelSpec, law: SteelMaterial, f: ReportFormatter): string[] {
+  return [
+    `fy = ${f.stress(law.yieldStress)}, fu = ${f.stress(law.ultimateStress)}`,
+    `Es = ${f.modulus(law.initialModulus)}${spec.elasticModulus === undefined ? ' (default)' : ''}`,
+    `εy = ${f.strain(law.yieldStrain)}, hardening from εsh = ${f.strain(law.hardeningStrain)}, rupture at εsu = ${f.strain(law.ruptureStrain)}`,
+  ];
+}
+
+/**
+ * Material lines for the given sections: each concrete and steel once, then the confined-core law
+ * of each section that has one. Units of the parameters: the formatter's.
+ */
+export function materialLines(project: Project, sections: readonly SectionDefinition[], f: ReportFormatter): MaterialLine[] {
+  const code = project.info.codeBasis;
+  const materials = projectMaterials(project.materials, code);
+  const models = sectionModels(project);
+  const lines: MaterialLine[] = [];
+  const seen = new Set<string>();
+  for (const section of sections) {
+    const spec = materials.concreteSpec(section.concreteId);
+    const cover = spec ? materials.concrete(section.concreteId)?.cover : undefined;
+    if (spec && cover && !seen.has(`concrete:${spec.id}`)) {
+      seen.add(`concrete:${spec.id}`);
+      lines.push({ name: `${spec.name} (concrete)`, law: cover.label, parameters: concreteParameters(spec, cover, code, f), references: cover.references });
+    }
+  }
+  const steelIds = [...new Set(sections.flatMap((s) => [...s.bars.map((b) => b.steelId), ...(s.hoops ? [s.hoops.steelId] : [])]))];
+  for (const id of steelIds) {
+    const spec = materials.steelSpec(id);
+    const law = materials.steel(id);
+    if (!spec || !law || seen.has(`steel:${id}`)) continue;
+    seen.add(`steel:${id}`);
+    lines.push({ name: `${spec.name} (reinforcement)`, law: law.label, parameters: steelParameters(spec, law, f), references: law.references });
+  }
+  for (const section of sections) {
+    const model = models(section.id);
+    const core = model?.concreteParts.find((p) => p.role === 'core');
+    if (!core) continue;
+    const m = core.material;
+    lines.push({
+      name: `${materials.concreteSpec(section.concreteId)?.name ?? section.concreteId}, confined core of section ${section.name}`,
+      law: m.label,
+      parameters: [`f′cc = ${f.concreteStress(m.peakStress)} at εcc = ${f.strain(m.peakStrain)}`, `core crushing strain εcu = ${f.strain(m.crushingStrain)}`],
+      references: m.references,
+    });
+  }
+  return lines;
+}
+
+/** True when any concrete law of these sections uses the tension-stiffening model. */
+export function usesTensionStiffening(project: Project, sections: readonly SectionDefinition[]): boolean {
+  return sections.some((s) => project.materials.some((m) => m.kind === 'concrete' && m.id === s.concreteId && m.tensionModel === 'tension-stiffening'));
+}

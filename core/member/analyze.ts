@@ -131,7 +131,7 @@ export function analyzeMember(member: MemberDefinition, context: MemberContext):
     const lin = plainConcreteResponse(s.codeModulus * s.elastic!.grossInertia, Number.MAX_VALUE);
     return { ...responses[i]!, sagging: lin, hogging: lin };
   });
-  const probeBeam = buildBeamModel(member.supports, span, elasticResponses, extraPoints, 400);
+  const probeBeam = buildBeamModel(member.supports, span, elasticResponses, extraPoints, 240);
   const probe = solveStatic(probeBeam, fieldOf(probeBeam, patternLoads.length > 0 ? patternLoads : deadLoads));
   const controlAt = Math.round(peakDeflectionPosition(probeBeam.x, probe.deflection) * 10) / 10;
   const beam = buildBeamModel(member.supports, span, responses, [...extraPoints, controlAt], context.segments);

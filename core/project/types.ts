@@ -47,5 +47,5 @@ export interface Project {
 export const DEFAULT_SETTINGS: AnalysisSettings = {
   momentDropFraction: 0.8,
   bilinearMethod: 'priestley-2007',
-  stations: 100,
+  stations: 60,
 };

@@ -56,6 +56,18 @@ describe('report document', () => {
     expect(all).toContain(f.curvature(section.sagging!.keyPoints.ultimate!.curvature));
   });
 
+  it('reports the shear check when the analysis made one, and says so in the limitations', () => {
+    const f = reportFormatter('si');
+    const checked = results.members.filter((m) => m.shear?.factored);
+    expect(checked.length).toBeGreaterThan(0);
+    for (const m of checked) {
+      expect(all).toContain(f.fixed(m.shear!.factored!.utilisation, 2));
+      expect(all).toContain(m.shear!.sentence);
+    }
+    expect(joined).toContain('Flexure and shear only: torsion');
+    expect(joined).not.toContain('Flexure only: shear');
+  });
+
   it('reports the member with input errors with its errors instead of results', () => {
     const x = results.members.find((m) => m.memberId === 'X-1')!;
     expect(x.status).toBe('input-error');

@@ -1,0 +1,26 @@
+/** Text of a PDF, page by page, read with pdfjs-dist (legacy build for Node). */
+import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
+
+export interface PdfText {
+  readonly pages: readonly string[];
+  /** All pages, whitespace collapsed to single spaces. */
+  readonly all: string;
+}
+
+export async function pdfText(bytes: Uint8Array): Promise<PdfText> {
+  const document = await getDocument({ data: new Uint8Array(bytes), useSystemFonts: false, disableFontFace: true, verbosity: 0 }).promise;
+  const pages: string[] = [];
+  for (let i = 1; i <= document.numPages; i++) {
+    const page = await document.getPage(i);
+    const content = await page.getTextContent();
+    const text = content.items.map((item) => ('str' in item ? `${item.str}${item.hasEOL ? '\n' : ' '}` : '')).join('');
+    pages.push(text.replace(/[ \t]+/g, ' '));
+  }
+  await document.destroy();
+  return { pages, all: pages.join('\n').replace(/\s+/g, ' ') };
+}
+
+/** Collapses whitespace, for comparing with text that may wrap over lines in the PDF. */
+export function words(text: string): string {
+  return text.replace(/\s+/g, ' ').trim();
+}

@@ -10,6 +10,7 @@ import type { MemberResult } from './member/results.ts';
 import type { MemberDefinition } from './member/definition.ts';
 import type { Project } from './project/types.ts';
 import { projectMaterials } from './project/resolver.ts';
+import { quantityText } from './units/text.ts';
 import { analyzeSection, type SectionAnalysis } from './section/analyze.ts';
 
 export interface ProjectSummary {
@@ -64,8 +65,9 @@ export function analyzeMembers(project: Project, memberIds?: readonly string[], 
   // Members that differ only in id, name and notes (typical bays repeat many times) give the same
   // numbers: analyse each distinct definition once.
   const byContent = new Map<string, MemberResult>();
+  const text = quantityText(project.info.unitSystem);
   members.forEach(({ m, index }, k) => {
-    const context: MemberContext = { code: project.info.codeBasis, segments: project.settings.stations, section, sectionIds, path: `members[${index}] "${m.name}"` };
+    const context: MemberContext = { code: project.info.codeBasis, segments: project.settings.stations, section, sectionIds, path: `members[${index}] "${m.name}"`, text };
     let result: MemberResult;
     // Members with an as-found condition or schemes carry derived ids of their own: never shared.
     const key = m.asFound || (m.schemes?.length ?? 0) > 0 ? `${m.id}\u0000unique` : contentKey(m);

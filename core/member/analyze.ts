@@ -7,6 +7,7 @@
 import type { Diagnostic } from '../diagnostics.ts';
 import { BugError } from '../diagnostics.ts';
 import type { CodeBasis } from '../materials/specs.ts';
+import type { QuantityText } from '../units/text.ts';
 import type { SectionAnalysis } from '../section/analyze.ts';
 import { buildBeamModel, type BeamModel, type ZoneResponse } from './beam-model.ts';
 import type { LoadFactors, MemberDefinition, MemberLoad } from './definition.ts';
@@ -28,6 +29,8 @@ export interface MemberContext {
   readonly sectionIds: ReadonlySet<string>;
   /** Path of the member in the project file, e.g. `members[3] "B-12"`. */
   readonly path: string;
+  /** Formats quantities inside sentences in the project's display units (default SI). */
+  readonly text?: QuantityText;
 }
 
 /** Default strength factors of the code basis: ACI 318-19 Eq. (5.3.1b) 1.2D + 1.6L; EN 1990 Eq. (6.10) 1.35G + 1.5Q. */
@@ -35,7 +38,6 @@ export function defaultStrengthFactors(code: CodeBasis): LoadFactors {
   return code === 'ACI 318-19' ? { dead: 1.2, superimposed: 1.2, live: 1.6 } : { dead: 1.35, superimposed: 1.35, live: 1.5 };
 }
 
-const kNm = (nmm: number) => `${(nmm / 1e6).toFixed(1)} kN·m`;
 
 function emptyResult(member: MemberDefinition, errors: readonly Diagnostic[], sections: SectionResult[] = []): MemberResult {
   return {
@@ -225,7 +227,7 @@ export function analyzeMember(member: MemberDefinition, context: MemberContext):
   const resistances: ZoneResistance[] = member.zones.map((z, i) => {
     const s = analyses[i]!;
     const curves = context.code === 'EN 1992-1-1' && s.designCurves ? s.designCurves : s.curves;
-    const r = (dir: 'sagging' | 'hogging') => designResistance(context.code, curves[dir], s.yieldStrain[dir]);
+    const r = (dir: 'sagging' | 'hogging') => designResistance(context.code, curves[dir], s.yieldStrain[dir], context.text);
     const rs = r('sagging');
     const rh = r('hogging');
     return { from: z.from, to: z.to, sagging: rs.value, hogging: rh.value, notes: [`${s.sectionName}: sagging ${rs.note}; hogging ${rh.note}.`] };
@@ -288,4 +290,3 @@ export function analyzeMember(member: MemberDefinition, context: MemberContext):
   };
 }
 
-export { kNm };

@@ -28,6 +28,7 @@
  *
  * Units: N, mm, MPa, N·mm.
  */
+import { SI_TEXT, type QuantityText } from '../units/text.ts';
 import type { CodeBasis, ConcreteSpec } from '../materials/specs.ts';
 import type { SectionAnalysis } from '../section/analyze.ts';
 import type { SectionDefinition } from '../section/definition.ts';
@@ -514,7 +515,7 @@ export function sectionShearCapacity(code: CodeBasis, zone: ShearZone, direction
       nominal: r.nominal,
       design: r.design,
       supportLimit: null,
-      formula: `${vcText} (ACI 318-19 Table 22.5.5.1${c.expression}); Vs = Av·fyt·d/s = ${kN(r.steel)} (Eq. 22.5.8.5.3); φVn = 0.75 × ${kN(r.nominal)} = ${kN(r.design)}`,
+      formula: `(SI form of the code equations: mm, MPa, kN) ${vcText} (ACI 318-19 Table 22.5.5.1${c.expression}); Vs = Av·fyt·d/s = ${kN(r.steel)} (Eq. 22.5.8.5.3); φVn = 0.75 × ${kN(r.nominal)} = ${kN(r.design)}`,
       notes: [...notes, ...r.notes],
     };
   }
@@ -538,7 +539,7 @@ export function sectionShearCapacity(code: CodeBasis, zone: ShearZone, direction
     nominal: nominal.value,
     design: design.value,
     supportLimit: { design: design.supportLimit, nominal: nominal.supportLimit },
-    formula: `VRd,c = [${c.cRdc.toFixed(3)} × ${c.k.toFixed(3)} × (100 × ${c.rhoL.toFixed(4)} × ${fc})^(1/3) + 0.15 × ${c.sigmaCp.toFixed(2)}]·bw·d ≥ (vmin + 0.15σcp)·bw·d = ${kN(c.value)} (Eq. ${c.governedBy}); VRd,s = (Asw/s)·z·fywd·cot θ = ${kN(design.steel)} (Eq. 6.8), VRd,max = ${kN(design.maximum)} (Eq. 6.9) at cot θ = ${design.cotTheta.toFixed(2)}; VRd = ${kN(design.value)}`,
+    formula: `(SI form of the code equations: mm, MPa, kN) VRd,c = [${c.cRdc.toFixed(3)} × ${c.k.toFixed(3)} × (100 × ${c.rhoL.toFixed(4)} × ${fc})^(1/3) + 0.15 × ${c.sigmaCp.toFixed(2)}]·bw·d ≥ (vmin + 0.15σcp)·bw·d = ${kN(c.value)} (Eq. ${c.governedBy}); VRd,s = (Asw/s)·z·fywd·cot θ = ${kN(design.steel)} (Eq. 6.8), VRd,max = ${kN(design.maximum)} (Eq. 6.9) at cot θ = ${design.cotTheta.toFixed(2)}; VRd = ${kN(design.value)}`,
     notes: [...notes, ...design.notes],
   };
 }
@@ -718,9 +719,10 @@ export interface MemberShearInput {
   readonly segments?: number;
   /** γo on the section peak moment for the mechanism (default 1.0). */
   readonly overstrengthFactor?: number;
+  /** Formats forces and positions in the sentences (the project's display units; default SI). */
+  readonly text?: QuantityText;
 }
 
-const m = (mm: number) => `${(mm / 1000).toFixed(2)} m`;
 
 /** Sagging and hogging hinge moments of a zone (magnitudes, N·mm): γo × the curve's peak, or the cracking moment without tension steel. */
 function hingeMoments(zone: ShearZone, gamma: number): { sagging: number; hogging: number } {
@@ -741,6 +743,7 @@ function hingeMoments(zone: ShearZone, gamma: number): { sagging: number; hoggin
  * @see module comment for the clauses
  */
 export function memberShear(input: MemberShearInput): ShearResult {
+  const text = input.text ?? SI_TEXT;
   const { code, member, zones } = input;
   const span = member.span;
   const segments = input.segments ?? 200;
@@ -803,10 +806,10 @@ export function memberShear(input: MemberShearInput): ShearResult {
     const d = Math.min(depths.length > 0 ? Math.min(...depths) : Math.max(c.sagging?.effectiveDepth ?? 0, c.hogging?.effectiveDepth ?? 0), span);
     const left = xs === 0;
     const loaded = pointPositions.some((p) => (left ? p > 0 && p <= d : p >= span - d && p < span));
-    if (loaded) ruleParts.push(`a point load lies within d = ${d.toFixed(0)} mm of the support at ${m(xs)}: checked up to the support face`);
+    if (loaded) ruleParts.push(`a point load lies within d = ${text.section(d)} of the support at ${text.span(xs)}: checked up to the support face`);
     else {
       skip.push({ side: left ? 'left' : 'right', limit: left ? d : span - d });
-      ruleParts.push(`sections within d = ${d.toFixed(0)} mm of the support at ${m(xs)} take the shear at d`);
+      ruleParts.push(`sections within d = ${text.section(d)} of the support at ${text.span(xs)} take the shear at d`);
     }
   }
   const criticalSectionRule = `${ruleParts.join('; ')} (${code === 'ACI 318-19' ? 'ACI 318-19 9.4.3.2' : 'EN 1992-1-1 6.2.1(8); the support face is checked against Eq. 6.5'}).`;
@@ -926,7 +929,7 @@ export function memberShear(input: MemberShearInput): ShearResult {
       for (const x of stations) {
         const mx = forces(x, 'right').moment;
         if (mx < 0 && -mx > hingeAt(x, 'right').hogging * 1.001 && x > 0 && x < span) {
-          warnings.push(`At the assumed mechanism the hogging moment at ${m(x)} exceeds that section's capacity: the true mechanism differs and its shear may be higher.`);
+          warnings.push(`At the assumed mechanism the hogging moment at ${text.span(x)} exceeds that section's capacity: the true mechanism differs and its shear may be higher.`);
           break;
         }
       }
@@ -968,18 +971,18 @@ export function memberShear(input: MemberShearInput): ShearResult {
   }
 
   // --- sentence ---------------------------------------------------------------------------------------------
-  const factoredText = `factored shear check ${factored.pass ? 'passes' : 'fails'} (utilisation ${factored.utilisation.toFixed(2)} at ${m(factored.governing.position)} under ${input.combination})`;
+  const factoredText = `factored shear check ${factored.pass ? 'passes' : 'fails'} (utilisation ${factored.utilisation.toFixed(2)} at ${text.span(factored.governing.position)} under ${input.combination})`;
   const capName = code === 'ACI 318-19' ? 'Vn' : 'VRk (γ = 1)';
   const designName = code === 'ACI 318-19' ? 'φVn' : 'VRd';
   let sentence: string;
   if (mechanism && governs === 'shear') {
     const g = mechanism.governing;
     const at = shearFailureLoadFactor !== null ? `, reached at about ${(shearFailureLoadFactor / mechanism.loadFactor).toFixed(2)} × the flexural collapse load` : '';
-    sentence = `shear governs (brittle): at the flexural mechanism the shear would reach ${kN(g.shear)} at ${m(g.position)}, above ${capName} = ${kN(g.nominal)} (ratio ${mechanism.nominalRatio.toFixed(2)})${at}, so the ductility and plastic hinge rotations are not available; ${factoredText}`;
+    sentence = `shear governs (brittle): at the flexural mechanism the shear would reach ${text.force(g.shear)} at ${text.span(g.position)}, above ${capName} = ${text.force(g.nominal)} (ratio ${mechanism.nominalRatio.toFixed(2)})${at}, so the ductility and plastic hinge rotations are not available; ${factoredText}`;
   } else if (mechanism) {
     const g = mechanism.governing;
-    const margin = mechanism.designRatio > 1 ? `, though above ${designName} = ${kN(g.design)} (capacity-design ratio ${mechanism.designRatio.toFixed(2)})` : '';
-    sentence = `shear: flexure governs — at the flexural mechanism the shear reaches ${kN(g.shear)} at ${m(g.position)} against ${capName} = ${kN(g.nominal)} (ratio ${mechanism.nominalRatio.toFixed(2)})${margin}; ${factoredText}`;
+    const margin = mechanism.designRatio > 1 ? `, though above ${designName} = ${text.force(g.design)} (capacity-design ratio ${mechanism.designRatio.toFixed(2)})` : '';
+    sentence = `shear: flexure governs — at the flexural mechanism the shear reaches ${text.force(g.shear)} at ${text.span(g.position)} against ${capName} = ${text.force(g.nominal)} (ratio ${mechanism.nominalRatio.toFixed(2)})${margin}; ${factoredText}`;
   } else {
     sentence = `shear: ${factoredText}; failure mode not determined (${mechanismNote})`;
   }

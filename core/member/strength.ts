@@ -10,6 +10,7 @@
  * Units: N·mm, mm.
  */
 import type { CodeBasis } from '../materials/specs.ts';
+import { SI_TEXT, type QuantityText } from '../units/text.ts';
 import type { MomentCurvatureResult } from '../section/results.ts';
 import type { BendingDirection } from '../section/model.ts';
 import type { StrengthCheck } from './results.ts';
@@ -31,16 +32,16 @@ export interface ZoneResistance {
 }
 
 /** Design resistance of one direction from its curve (ACI: φMn; EN: curve of design laws → M_Rd). */
-export function designResistance(code: CodeBasis, curve: MomentCurvatureResult | undefined, yieldStrain: number): { value: number | null; note: string } {
+export function designResistance(code: CodeBasis, curve: MomentCurvatureResult | undefined, yieldStrain: number, text: QuantityText = SI_TEXT): { value: number | null; note: string } {
   if (!curve || curve.points.length < 2) return { value: null, note: 'no tension reinforcement' };
   const kp = curve.keyPoints;
   const at = kp.codeCrushing && (!kp.ultimate || kp.codeCrushing.curvature <= kp.ultimate.curvature) ? kp.codeCrushing : kp.peak;
   if (!at) return { value: null, note: 'the section curve has no point to take a resistance from' };
   if (code === 'ACI 318-19') {
     const phi = aciFlexureReductionFactor(at.maxSteelTensileStrain, yieldStrain);
-    return { value: phi * at.moment, note: `φMn = ${phi.toFixed(3)} × ${(at.moment / 1e6).toFixed(1)} kN·m (εt = ${(at.maxSteelTensileStrain * 1000).toFixed(2)} ‰${at === kp.peak ? ', at the peak: the curve ends before εc = 0.003' : ''})` };
+    return { value: phi * at.moment, note: `φMn = ${phi.toFixed(3)} × ${text.moment(at.moment)} (εt = ${(at.maxSteelTensileStrain * 1000).toFixed(2)} ‰${at === kp.peak ? ', at the peak: the curve ends before εc = 0.003' : ''})` };
   }
-  return { value: at.moment, note: `M_Rd = ${(at.moment / 1e6).toFixed(1)} kN·m from design laws${at === kp.peak ? ' (at the peak: the curve ends before εcu2)' : ''}` };
+  return { value: at.moment, note: `M_Rd = ${text.moment(at.moment)} from design laws${at === kp.peak ? ' (at the peak: the curve ends before εcu2)' : ''}` };
 }
 
 export function strengthCheck(

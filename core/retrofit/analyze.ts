@@ -14,6 +14,7 @@
  * Pure and deterministic. Units: mm, N, N·mm, MPa.
  */
 import { BugError, InputError, type Diagnostic } from '../diagnostics.ts';
+import { quantityText, type QuantityText } from '../units/text.ts';
 import type { CodeBasis, FrpSpec, MaterialSpec } from '../materials/specs.ts';
 import { analyzeMember, type MemberContext } from '../member/analyze.ts';
 import type { MemberDefinition, MemberLoad } from '../member/definition.ts';
@@ -36,8 +37,6 @@ import { validateAsFound, validateSchemes } from './validate.ts';
 type Problem = { readonly path: string; readonly message: string };
 const asProblems = (d: readonly Diagnostic[]): Problem[] => d.filter((x) => x.severity === 'error').map((x) => ({ path: x.path, message: x.message }));
 const warningsOf = (d: readonly Diagnostic[]): string[] => d.filter((x) => x.severity === 'warning').map((x) => `${x.path}: ${x.message}`);
-const kNm = (x: number) => `${(x / 1e6).toFixed(1)} kN·m`;
-const m = (mm: number) => `${(mm / 1000).toFixed(2)} m`;
 
 /** Runs analyzeMember and turns an unexpected exception into a reported result (as core/analysis.ts does). */
 function safeAnalyzeMember(member: MemberDefinition, context: MemberContext): MemberResult {
@@ -62,6 +61,8 @@ interface Setup {
   readonly code: CodeBasis;
   readonly path: string;
   readonly segments: number;
+  /** Quantities in sentences, in the project's display units. */
+  readonly text: QuantityText;
 }
 
 interface VariantInput {
@@ -99,7 +100,7 @@ function runVariant(setup: Setup, input: VariantInput): VariantRun {
       ...(additions ? { additions } : {}),
     }));
   }
-  const context: MemberContext = { code, segments: setup.segments, section: (id) => analyses.get(id), sectionIds: new Set(analyses.keys()), path: setup.path };
+  const context: MemberContext = { code, segments: setup.segments, section: (id) => analyses.get(id), sectionIds: new Set(analyses.keys()), path: setup.path, text: setup.text };
   const result = input.result ?? safeAnalyzeMember(input.member, context);
   const zones: ShearZone[] = input.member.zones.map((z) => {
     const analysis = analyses.get(z.sectionId)!;
@@ -111,7 +112,7 @@ function runVariant(setup: Setup, input: VariantInput): VariantRun {
   let shear: ShearResult | null = null;
   if (result.status !== 'input-error' && zones.every((z) => z.analysis.model && z.concrete)) {
     const { factors, text } = strengthCombination(input.member, code);
-    shear = memberShear({ code, member: input.member, zones, factors, combination: text, segments: setup.segments });
+    shear = memberShear({ code, member: input.member, zones, factors, combination: text, segments: setup.segments, text: setup.text });
   }
   return { key: input.key, label: input.label, member: input.member, analyses, definitions: input.definitions, baseOf: input.baseOf, added: input.added ?? new Map(), result, shear, zones };
 }
@@ -120,13 +121,13 @@ function runVariant(setup: Setup, input: VariantInput): VariantRun {
 function strengthOf(setup: Setup, run: VariantRun) {
   if (run.result.status === 'input-error') return null;
   const { factors, text } = strengthCombination(run.member, setup.code);
-  return flexuralCheck(setup.code, run.member, run.zones, factors, text, setup.segments);
+  return flexuralCheck(setup.code, run.member, run.zones, factors, text, setup.segments, setup.text);
 }
 
 /** Compact result of a run, with its sentence. */
 function compactOf(setup: Setup, run: VariantRun, prefix: string): VariantResult {
   const strength = strengthOf(setup, run);
-  const sentence = composeGoverningMode(variantFlexureSentence(run.result, strength, run.member.capacity.pattern), run.shear, prefix);
+  const sentence = composeGoverningMode(variantFlexureSentence(run.result, strength, run.member.capacity.pattern, setup.text), run.shear, prefix);
   return compactVariant(setup.code, run, strength, sentence);
 }
 
@@ -182,7 +183,7 @@ export function analyzeMemberWithRetrofit(member: MemberDefinition, context: Mem
 }
 
 function extend(member: MemberDefinition, context: MemberContext, project: Project, design: MemberResult): MemberResult {
-  const setup: Setup = { project, code: context.code, path: context.path, segments: context.segments };
+  const setup: Setup = { project, code: context.code, path: context.path, segments: context.segments, text: context.text ?? quantityText(project.info.unitSystem) };
   const hasRetrofit = member.asFound !== undefined || (member.schemes !== undefined && member.schemes.length > 0);
   if (design.status === 'input-error') {
     if (!hasRetrofit) return design;
@@ -412,11 +413,11 @@ function buildScheme(
     const capacity = curve?.keyPoints.peak?.moment ?? null;
     const firstYield = curve?.keyPoints.firstYield?.moment ?? null;
     if (capacity !== null && inst.moment > capacity) {
-      errors.push({ path: `${at}.installation`, message: `the moment when the strengthening is bonded, ${kNm(inst.moment)} at ${m(inst.position)}, exceeds the capacity of the unstrengthened section "${refAnalysis.sectionName}" (${kNm(capacity)}): the beam could not carry the installation load — reduce it (prop or unload the beam) before strengthening` });
+      errors.push({ path: `${at}.installation`, message: `the moment when the strengthening is bonded, ${setup.text.moment(inst.moment)} at ${setup.text.span(inst.position)}, exceeds the capacity of the unstrengthened section "${refAnalysis.sectionName}" (${setup.text.moment(capacity)}): the beam could not carry the installation load — reduce it (prop or unload the beam) before strengthening` });
       continue;
     }
     if (firstYield !== null && inst.moment > firstYield) {
-      warnings.push(`the installation moment ${kNm(inst.moment)} in section "${baseId}" is above first yield (${kNm(firstYield)}): the cracked elastic substrate strain does not hold beyond yield; consider propping during installation`);
+      warnings.push(`the installation moment ${setup.text.moment(inst.moment)} in section "${baseId}" is above first yield (${setup.text.moment(firstYield)}): the cracked elastic substrate strain does not hold beyond yield; consider propping during installation`);
     }
     const itemDepth = scheme.kind === 'frp' ? faceData.depth : face === 'bottom' ? faceData.depth + scheme.thickness / 2 : -scheme.thickness / 2;
     const model = refAnalysis.model;
@@ -456,7 +457,7 @@ function buildScheme(
       strain,
       otherMethodStrain: other,
       formula: kd !== null && icr !== null
-        ? `εbi = M·(df − kd)/(Icr·Ec) = ${kNm(inst.moment)} × (${df.toFixed(0)} − ${kd.toFixed(1)}) mm / (${(icr / 1e6).toFixed(0)}×10⁶ mm⁴ × ${ec.toFixed(0)} MPa) = ${(-(elasticStrain ?? 0)).toExponential(3)} (ACI 440.2R-17 10.2.3)${method === 'moment-curvature' ? `; used: ${(-strain).toExponential(3)} from the moment–curvature curve` : ''}`
+        ? `εbi = M·(df − kd)/(Icr·Ec) = ${setup.text.moment(inst.moment)} × (${setup.text.section(df)} − ${setup.text.section(kd)}) / (${setup.text.secondMoment(icr)} × ${setup.text.stress(ec)}) = ${(-(elasticStrain ?? 0)).toExponential(3)} (ACI 440.2R-17 10.2.3)${method === 'moment-curvature' ? `; used: ${(-strain).toExponential(3)} from the moment–curvature curve` : ''}`
         : `εbi = ${(-strain).toExponential(3)} from the moment–curvature curve`,
     });
     if (scheme.kind === 'frp') {
@@ -518,15 +519,15 @@ function buildScheme(
   const unchanged = new Map([...ref.analyses].filter(([id]) => !sections.has(ref.baseOf.get(id) ?? id)));
   const run = runVariant(setup, { key: scheme.id, label: scheme.name, member: variantMember, definitions, baseOf, additions, added, materials, analyses: unchanged });
   const variant = compactOf(setup, run, `${scheme.name}: `);
-  const comparison = run.result.status === 'input-error' ? null : compareVariants(comparisonCompact, variant, scheme.name);
+  const comparison = run.result.status === 'input-error' ? null : compareVariants(comparisonCompact, variant, scheme.name, setup.text);
   // ACI 440.2R-17 9.2: the unstrengthened member under 1.1 SD + 0.75 LL (bonded schemes only).
   let lossOfStrengthening: SchemeResult['lossOfStrengthening'] = null;
   if (scheme.kind !== 'concrete-layer') {
     const combination = `1.1 SD + 0.75 LL (ACI 440.2R-17 Eq. 9.2, strengthening lost)`;
-    const check = flexuralCheck(code, comparisonRun.member, comparisonRun.zones, { dead: 1.1, superimposed: 1.1, live: 0.75 }, combination, setup.segments);
+    const check = flexuralCheck(code, comparisonRun.member, comparisonRun.zones, { dead: 1.1, superimposed: 1.1, live: 0.75 }, combination, setup.segments, setup.text);
     if (check) {
       lossOfStrengthening = { combination, check, source: 'ACI 440.2R-17 9.2, Eq. (9.2) (from memory): (φRn)existing ≥ (1.1 SDL + 0.75 SLL)new, with the design resistance of the beam before strengthening' };
-      if (!check.pass) warnings.push(`ACI 440.2R-17 9.2 limit not met: without the strengthening the beam could not carry 1.1 SD + 0.75 LL (utilisation ${check.utilisation.toFixed(2)} at ${m(check.position)}): the strengthening exceeds what the existing beam allows`);
+      if (!check.pass) warnings.push(`ACI 440.2R-17 9.2 limit not met: without the strengthening the beam could not carry 1.1 SD + 0.75 LL (utilisation ${check.utilisation.toFixed(2)} at ${setup.text.span(check.position)}): the strengthening exceeds what the existing beam allows`);
     }
   }
   if (!variant.ductility.available) warnings.push('shear governs the strengthened beam before its flexural mechanism: its ductility and hinge rotations are not available');

@@ -5,6 +5,7 @@
  * FRP), and the one-sentence governing modes.
  * Units: N, mm, N·mm, 1/mm, rad.
  */
+import { SI_TEXT, type QuantityText } from '../units/text.ts';
 import type { CodeBasis } from '../materials/specs.ts';
 import { defaultStrengthFactors } from '../member/analyze.ts';
 import type { LoadFactors, MemberDefinition } from '../member/definition.ts';
@@ -34,8 +35,6 @@ export interface VariantRun {
 }
 
 const finite = (x: number | null | undefined): number | null => (x !== null && x !== undefined && Number.isFinite(x) ? x : null);
-const kNm = (x: number) => `${(x / 1e6).toFixed(1)} kN·m`;
-const m = (mm: number) => `${(mm / 1000).toFixed(2)} m`;
 
 /** The strength combination of a member and its description, as core/member/analyze.ts writes it. */
 export function strengthCombination(member: MemberDefinition, code: CodeBasis): { factors: LoadFactors; text: string } {
@@ -45,8 +44,8 @@ export function strengthCombination(member: MemberDefinition, code: CodeBasis): 
 }
 
 /** A compact curve with its design resistance. */
-export function curveSummary(code: CodeBasis, analysis: SectionAnalysis, curve: MomentCurvatureResult): CurveSummary {
-  const resistance = flexuralDesignResistance(code, analysis, curve.direction);
+export function curveSummary(code: CodeBasis, analysis: SectionAnalysis, curve: MomentCurvatureResult, text: QuantityText = SI_TEXT): CurveSummary {
+  const resistance = flexuralDesignResistance(code, analysis, curve.direction, text);
   const kp = curve.keyPoints;
   return {
     direction: curve.direction,
@@ -67,14 +66,14 @@ export function curveSummary(code: CodeBasis, analysis: SectionAnalysis, curve: 
  * as the engine's strength check) against the design resistance of the zone and direction there
  * (flexuralDesignResistance: ψf on FRP). Null when the member has no zones to check.
  */
-export function flexuralCheck(code: CodeBasis, member: MemberDefinition, zones: readonly { from: number; to: number; analysis: SectionAnalysis }[], factors: LoadFactors, combination: string, segments: number): FlexuralCheck | null {
+export function flexuralCheck(code: CodeBasis, member: MemberDefinition, zones: readonly { from: number; to: number; analysis: SectionAnalysis }[], factors: LoadFactors, combination: string, segments: number, text: QuantityText = SI_TEXT): FlexuralCheck | null {
   if (zones.length === 0 || zones.some((z) => !z.analysis.model || !z.analysis.elastic)) return null;
   const span = member.span;
   const sets = memberLoadSets(member, zones.map((z) => z.analysis.selfWeight));
   const loads = combinedLoads(sets, factors);
   const elasticZones: ElasticZone[] = zones.map((z) => ({ from: z.from, to: z.to, sectionId: z.analysis.sectionId, stiffness: z.analysis.codeModulus * z.analysis.elastic!.grossInertia }));
   const ends = elasticSupportMoments(member, elasticZones, loads, segments);
-  const resist = zones.map((z) => ({ sagging: flexuralDesignResistance(code, z.analysis, 'sagging'), hogging: flexuralDesignResistance(code, z.analysis, 'hogging') }));
+  const resist = zones.map((z) => ({ sagging: flexuralDesignResistance(code, z.analysis, 'sagging', text), hogging: flexuralDesignResistance(code, z.analysis, 'hogging', text) }));
   const xs = new Set<number>();
   for (let i = 0; i <= segments; i++) xs.add((span * i) / segments);
   for (const z of zones) xs.add(z.from);
@@ -121,7 +120,7 @@ export function composeGoverningMode(flexure: string, shear: ShearResult | null,
 }
 
 /** The flexural sentence of a variant with the station-by-station strength check (ψf on FRP). */
-export function variantFlexureSentence(result: MemberResult, strength: FlexuralCheck | null, pattern: 'proportional' | 'live-only'): string {
+export function variantFlexureSentence(result: MemberResult, strength: FlexuralCheck | null, pattern: 'proportional' | 'live-only', text: QuantityText = SI_TEXT): string {
   if (result.status === 'input-error') return result.governingMode;
   const parts: string[] = [];
   const ultimate = result.loadDeflection.events.find((e) => e.kind === 'ultimate');
@@ -131,7 +130,7 @@ export function variantFlexureSentence(result: MemberResult, strength: FlexuralC
   } else {
     parts.push(`Flexure: ${result.loadDeflection.status}`);
   }
-  if (strength) parts.push(`strength check ${strength.pass ? 'passes' : 'fails'} (utilisation ${strength.utilisation.toFixed(2)} at ${m(strength.position)} under ${strength.combination})`);
+  if (strength) parts.push(`strength check ${strength.pass ? 'passes' : 'fails'} (utilisation ${strength.utilisation.toFixed(2)} at ${text.span(strength.position)} under ${strength.combination})`);
   const checks = result.service?.checks ?? [];
   const fails = checks.filter((c) => !c.pass);
   if (fails.length > 0) {
@@ -205,7 +204,7 @@ function criticalHinge(hinges: readonly PlasticHinge[], direction: BendingDirect
 }
 
 /** How a strengthened variant compares with its reference (see SchemeComparison). */
-export function compareVariants(reference: VariantResult, scheme: VariantResult, schemeLabel: string): SchemeComparison {
+export function compareVariants(reference: VariantResult, scheme: VariantResult, schemeLabel: string, text: QuantityText = SI_TEXT): SchemeComparison {
   const refStrength = reference.strength;
   const criticalDirection: BendingDirection = refStrength?.direction ?? 'sagging';
   const criticalPosition = refStrength?.position ?? 0;
@@ -245,7 +244,7 @@ export function compareVariants(reference: VariantResult, scheme: VariantResult,
   const words: string[] = [];
   const signed = (x: number) => `${x >= 0 ? '+' : '−'}${Math.abs(x).toFixed(0)} %`;
   if (critical?.designGainPercent !== null && critical?.designGainPercent !== undefined) {
-    words.push(`${schemeLabel}: design moment ${signed(critical.designGainPercent)} at section "${criticalBase}" ${criticalDirection} (${kNm(critical.referenceDesign!)} → ${kNm(critical.schemeDesign!)})`);
+    words.push(`${schemeLabel}: design moment ${signed(critical.designGainPercent)} at section "${criticalBase}" ${criticalDirection} (${text.moment(critical.referenceDesign!)} → ${text.moment(critical.schemeDesign!)})`);
   } else {
     words.push(`${schemeLabel}:`);
   }

@@ -16,6 +16,7 @@
  * equation text is checked against its in.-lb. form in test/references/retrofit-aci440.test.ts.
  * Units: MPa, mm, N, N·mm; strains dimensionless, compression positive.
  */
+import { SI_TEXT, type QuantityText } from '../units/text.ts';
 import type { CodeBasis } from '../materials/specs.ts';
 import type { FrpMaterial } from '../materials/types.ts';
 import { aciFlexureReductionFactor, designResistance } from '../member/strength.ts';
@@ -153,7 +154,7 @@ export interface FlexuralResistance {
  * it is exactly the engine's resistance (core/member/strength.ts designResistance).
  * @see ACI 440.2R-17 10.2.10; ACI 318-19 Table 21.2.2
  */
-export function flexuralDesignResistance(code: CodeBasis, analysis: SectionAnalysis, direction: BendingDirection): FlexuralResistance {
+export function flexuralDesignResistance(code: CodeBasis, analysis: SectionAnalysis, direction: BendingDirection, text: QuantityText = SI_TEXT): FlexuralResistance {
   const curve = code === 'EN 1992-1-1' && analysis.designCurves ? analysis.designCurves[direction] : analysis.curves[direction];
   const model = analysis.model;
   const hasFrp = model?.elements.some((e) => e.kind === 'frp') ?? false;
@@ -178,7 +179,7 @@ export function flexuralDesignResistance(code: CodeBasis, analysis: SectionAnaly
   }
   const mnf = tf * Math.abs(df - yc);
   const reduced = at.moment - (1 - FRP_FLEXURE_REDUCTION) * mnf;
-  const kNm = (x: number) => `${(x / 1e6).toFixed(1)} kN·m`;
+  const kNm = (x: number) => text.moment(x);
   const where = at === kp.peak ? 'where the curve ends (FRP limit before εc = 0.003)' : 'at εc = 0.003';
   if (code === 'ACI 318-19') {
     const phi = aciFlexureReductionFactor(at.maxSteelTensileStrain, analysis.yieldStrain[direction]);

@@ -41,7 +41,7 @@ describe('comparison with the reference beam', () => {
     expect(c.displacementDuctility.changePercent).toBeCloseTo(-50, 10);
     expect(c.hingeRotation.changePercent).toBeCloseTo(-75, 10);
     expect(c.critical).toEqual({ baseSectionId: 's', direction: 'sagging' });
-    expect(c.statement).toBe('CFRP: design moment +25 % at section "s" sagging (200.0 kN·m → 250.0 kN·m), member load capacity +20 %; displacement ductility falls from 4.0 to 2.0 (−50 %) and curvature ductility falls from 8.0 to 3.0 (−63 %): the strengthening lowers the ductility.');
+    expect(c.statement).toBe('CFRP: design moment +25 % at section "s" sagging (200 kN·m → 250 kN·m), member load capacity +20 %; displacement ductility falls from 4.0 to 2.0 (−50 %) and curvature ductility falls from 8.0 to 3.0 (−63 %): the strengthening lowers the ductility.');
   });
 
   it('an FRP that debonds before the unstrengthened beam\'s hardened capacity: "adds no strength at ultimate", with the first-yield gain', () => {

@@ -245,11 +245,6 @@ export function trackSpanHinges(beam: BeamModel, moment: Float64Array, hinges: r
   }
 }
 
-/** ∫₀¹ (fa(1−t)+fb t)(ma(1−t)+mb t)(na(1−t)+nb t) dt. */
-function triple(fa: number, fb: number, ma: number, mb: number, na: number, nb: number): number {
-  const cross = (ma * nb + mb * na) / 12;
-  return fa * ((ma * na) / 4 + cross + (mb * nb) / 12) + fb * ((ma * na) / 12 + cross + (mb * nb) / 4);
-}
 
 export interface NewtonResult {
   readonly converged: boolean;

@@ -78,7 +78,7 @@ describe('discretisation', () => {
   it('doubling the stations from the default (60 → 120) changes deflections and the capacity by less than 0.1 %', () => {
     // issue requirement; the service states refine themselves, the capacity curve is checked here
     const members = [member('SS', 'simply-supported', 7000, 'r1'), member('C', 'cantilever', 2500, 'r1'), member('FF', 'fixed-fixed', 8000, 't1'), member('PC', 'propped-cantilever', 7000, 't1')];
-    const at = (stations: number): MemberResult[] => analyzeProject({ ...smallProject('ACI 318-19', members), settings: { momentDropFraction: 0.8, bilinearMethod: 'priestley-2007', stations } }).members;
+    const at = (stations: number): readonly MemberResult[] => analyzeProject({ ...smallProject('ACI 318-19', members), settings: { momentDropFraction: 0.8, bilinearMethod: 'priestley-2007', stations } }).members;
     const coarse = at(60);
     const fine = at(120);
     coarse.forEach((c, i) => {

@@ -41,6 +41,7 @@ export default defineConfig({
           name: 'e2e',
           environment: 'node',
           include: ['test/e2e/**/*.test.ts'],
+          globalSetup: ['test/e2e/global-setup.ts'],
           testTimeout: 120_000,
           hookTimeout: 240_000,
           fileParallelism: false,

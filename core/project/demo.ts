@@ -385,7 +385,7 @@ export function demoProjectSI(): Project {
       member({
         id: 'MB-2', name: 'MB-2', supports: 'propped-cantilever', span: m(8),
         zones: [{ from: 0, to: m(1.6), sectionId: 'T500-end' }, { from: m(1.6), to: m(8), sectionId: 'T500' }],
-        loads: [uniform('superimposed', 4.5, 'screed, services, ceiling'), uniform('live', 7.2, 'offices 3 kN/m² over 2.4 m'), point('live', 18, m(5), 'plant platform leg')],
+        loads: [uniform('superimposed', 4.5, 'screed, services, ceiling'), uniform('live', 7.2, 'offices 3 kN/m² over 2.4 m'), point('live', 18_000, m(5), 'plant platform leg, 18 kN')],
         limitCases: ['en-appearance', 'en-after-construction'], hinge: 'paulay-priestley-1992', sustainedLiveFraction: 0.3,
         notes: 'Fixed into the stair core at the left, on a column at the right.',
       }),

@@ -1,6 +1,18 @@
-// PLACEHOLDER entry written with the desktop shell so the builds have something to bundle.
-// The renderer workspace replaces this file (and App.vue) with the real application.
+/**
+ * Entry of the Hingeline workspace (Electron renderer and the browser build alike): styles and
+ * fonts, Pinia and the application.
+ */
+import { createPinia } from 'pinia';
 import { createApp } from 'vue';
 import App from './App.vue';
+import { perfMark } from './components/ids.ts';
+import { loadFonts } from './fonts.ts';
+import './styles/base.css';
+import './styles/editor.css';
 
-createApp(App).mount('#app');
+void loadFonts();
+const app = createApp(App);
+app.use(createPinia());
+app.mount('#app');
+document.documentElement.dataset.ready = 'true';
+perfMark('hl:interactive');

@@ -1,0 +1,184 @@
+/**
+ * What the section drawing of the editor shows, as plain primitives in SVG pixels: the concrete
+ * outline (core/section/shapes.ts `shapeOutline`), the hoop at its centreline, the cover line and
+ * the confined core, every bar at its position (core/section/build.ts `barPositions`) drawn with
+ * its diameter, dimension lines and a scale bar. Drawn to scale: one factor for x and y.
+ * Units: the definition in mm; labels in the display units of the project (core/units).
+ */
+import type { SectionDefinition } from '../../../core/section/definition.ts';
+import { barPositions, shapeHeight, webExtent } from '../../../core/section/build.ts';
+import { shapeOutline, type Point } from '../../../core/section/shapes.ts';
+import { formatQuantity, toDisplay, unitLabel, fromDisplay } from '../../../core/units/index.ts';
+import type { UnitSystem } from '../../../core/project/types.ts';
+import { displaySystem } from '../project/units.ts';
+
+export interface Rect { readonly x: number; readonly y: number; readonly w: number; readonly h: number }
+export interface Dimension { readonly x1: number; readonly y1: number; readonly x2: number; readonly y2: number; readonly text: string; readonly vertical: boolean }
+export interface DrawnBar { readonly cx: number; readonly cy: number; readonly r: number; readonly layer: number }
+export interface LayerLabel { readonly layer: number; readonly text: string; readonly x: number; readonly y: number; readonly fromX: number; readonly fromY: number }
+
+export interface SectionGeometry {
+  readonly width: number;
+  readonly height: number;
+  readonly outline: string;
+  readonly hoop: (Rect & { readonly rx: number; readonly stroke: number }) | null;
+  /** Inner edge of the clear cover (outer face of the hoop), dashed. */
+  readonly cover: Rect | null;
+  /** The confined core (inside the hoop centreline), shaded when the core is modelled as confined. */
+  readonly core: Rect | null;
+  readonly bars: readonly DrawnBar[];
+  readonly dimensions: readonly Dimension[];
+  readonly labels: readonly LayerLabel[];
+  readonly scaleBar: { readonly x: number; readonly y: number; readonly length: number; readonly text: string };
+  /** Pixels per mm. */
+  readonly scale: number;
+  /** Why something could not be drawn (empty when all is drawn). */
+  readonly problems: readonly string[];
+}
+
+export interface SectionGeometryOptions {
+  /** Room for the whole drawing, pixels. */
+  readonly maxWidth?: number;
+  readonly maxHeight?: number;
+  /** Width kept for the layer labels at the right, pixels. */
+  readonly labelWidth?: number;
+}
+
+const finite = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v);
+/** Estimated advance of one character of the 11 px label font, pixels. */
+const LABEL_CHAR_WIDTH = 6.2;
+
+/** `bottom bars: 3 × 20.0 mm at 545 mm` (or the area when the layer gives one). */
+function layerText(layer: SectionDefinition['bars'][number], length: (mm: number) => string, display: 'SI' | 'US'): string {
+  const what = layer.count !== undefined && layer.diameter !== undefined
+    ? `${layer.count} × ${length(layer.diameter)}`
+    : formatQuantity('area', layer.area ?? 0, display);
+  return `${layer.label ? `${layer.label}: ` : ''}${what} at ${finite(layer.depth) ? length(layer.depth) : '—'}`;
+}
+const r2 = (v: number) => Math.round(v * 100) / 100;
+
+/** A round length for the scale bar, display units: 1, 2 or 5 × a power of ten, the nearest (by ratio) to a quarter of `span`. */
+export function roundLength(span: number): number {
+  if (!(span > 0) || !Number.isFinite(span)) return 1;
+  const target = span / 4;
+  const power = 10 ** Math.floor(Math.log10(target));
+  const candidates = [1, 2, 5, 10].map((step) => step * power);
+  return candidates.reduce((best, c) => (Math.abs(Math.log(c / target)) < Math.abs(Math.log(best / target)) ? c : best));
+}
+
+/** The drawing of a section, or null when its outline has no area or is not made of finite numbers. */
+export function sectionGeometry(section: SectionDefinition, system: UnitSystem, options: SectionGeometryOptions = {}): SectionGeometry | null {
+  const display = displaySystem(system);
+  const length = (mm: number) => formatQuantity('sectionLength', mm, display);
+  let outline: readonly Point[];
+  let voids: readonly (readonly Point[])[];
+  try {
+    ({ outline, voids } = shapeOutline(section.shape));
+  } catch {
+    return null;
+  }
+  const all = [...outline, ...voids.flat()];
+  if (all.length < 3 || !all.every((p) => finite(p.x) && finite(p.y))) return null;
+  const xMin = Math.min(...all.map((p) => p.x));
+  const xMax = Math.max(...all.map((p) => p.x));
+  const depth = shapeHeight(section.shape);
+  const widthMm = xMax - xMin;
+  if (!(widthMm > 0) || !(depth > 0)) return null;
+
+  const maxWidth = options.maxWidth ?? 380;
+  const maxHeight = options.maxHeight ?? 300;
+  // Room for the layer labels: their estimated width (≈ 6.2 px a character at 11 px), at most half the drawing.
+  const labelTexts = section.bars.map((layer) => layerText(layer, length, display));
+  const estimated = labelTexts.length > 0 ? Math.max(...labelTexts.map((t) => t.length * LABEL_CHAR_WIDTH)) + 22 : 10;
+  const labelWidth = Math.min(options.labelWidth ?? estimated, maxWidth * 0.5);
+  const left = 34;
+  const top = 30;
+  const bottom = 58;
+  const k = Math.min((maxWidth - left - labelWidth - 10) / widthMm, (maxHeight - top - bottom) / depth);
+  const X = (x: number) => r2(left + (x - xMin) * k);
+  const Y = (y: number) => r2(top + y * k);
+  const path = (points: readonly Point[]) => `M${points.map((p) => `${X(p.x)} ${Y(p.y)}`).join(' L')} Z`;
+  const problems: string[] = [];
+
+  const web = webExtent(section.shape);
+  const hoops = section.hoops;
+  let hoop: SectionGeometry['hoop'] = null;
+  let cover: Rect | null = null;
+  let core: Rect | null = null;
+  if (hoops && web && finite(hoops.clearCover) && finite(hoops.diameter) && hoops.diameter > 0) {
+    const offset = hoops.clearCover + hoops.diameter / 2;
+    const x0 = web.x0 + offset;
+    const x1 = web.x1 - offset;
+    const y0 = offset;
+    const y1 = depth - offset;
+    if (x1 > x0 && y1 > y0) {
+      hoop = { x: X(x0), y: Y(y0), w: r2((x1 - x0) * k), h: r2((y1 - y0) * k), rx: r2(Math.min(2 * hoops.diameter, (x1 - x0) / 2) * k), stroke: r2(Math.max(hoops.diameter * k, 1)) };
+      const c = hoops.clearCover;
+      cover = { x: X(web.x0 + c), y: Y(c), w: r2((web.x1 - web.x0 - 2 * c) * k), h: r2((depth - 2 * c) * k) };
+      if (hoops.confineCore) core = { x: hoop.x, y: hoop.y, w: hoop.w, h: hoop.h };
+    } else problems.push('The hoops leave no core inside the cover.');
+  }
+
+  const bars: DrawnBar[] = [];
+  const labels: LayerLabel[] = [];
+  section.bars.forEach((layer, index) => {
+    const diameter = layer.diameter ?? Math.sqrt((4 * (layer.area ?? 0)) / Math.PI);
+    if (!finite(layer.depth) || !finite(diameter) || diameter <= 0) {
+      problems.push(`Layer ${index + 1} cannot be drawn (its depth or bar size is missing).`);
+      return;
+    }
+    let positions: number[] = [];
+    try {
+      positions = barPositions(section, layer).filter(finite);
+    } catch {
+      positions = [];
+    }
+    const r = Math.max((diameter / 2) * k, 1.5);
+    for (const x of positions) bars.push({ cx: X(x), cy: Y(layer.depth), r: r2(r), layer: index });
+    labels.push({ layer: index, text: labelTexts[index]!, x: X(xMax) + 16, y: Y(layer.depth), fromX: positions.length > 0 ? X(Math.max(...positions)) + r : X(xMax), fromY: Y(layer.depth) });
+  });
+  // Spread the labels so that they never overlap.
+  const sorted = [...labels].sort((a, b) => a.y - b.y);
+  const gap = 14;
+  const placed: LayerLabel[] = [];
+  for (const label of sorted) {
+    const y = placed.length === 0 ? label.y : Math.max(label.y, placed[placed.length - 1]!.y + gap);
+    placed.push({ ...label, y });
+  }
+  const heightPx = Math.ceil(Math.max(Y(depth) + bottom, (placed[placed.length - 1]?.y ?? 0) + 12));
+
+  const dimensions: Dimension[] = [];
+  dimensions.push({ x1: X(xMin), y1: top - 14, x2: X(xMax), y2: top - 14, text: length(widthMm), vertical: false });
+  dimensions.push({ x1: left - 16, y1: Y(0), x2: left - 16, y2: Y(depth), text: length(depth), vertical: true });
+  const shape = section.shape;
+  if ((shape.kind === 'tee' || shape.kind === 'ell') && web) {
+    dimensions.push({ x1: X(web.x0), y1: Y(depth) + 14, x2: X(web.x1), y2: Y(depth) + 14, text: length(web.x1 - web.x0), vertical: false });
+  }
+  if (shape.kind === 'inverted-tee' && web) {
+    dimensions.push({ x1: X(web.x0), y1: top - 14 + 0, x2: X(web.x1), y2: top - 14, text: length(web.x1 - web.x0), vertical: false });
+    dimensions.shift();
+    dimensions.push({ x1: X(xMin), y1: Y(depth) + 14, x2: X(xMax), y2: Y(depth) + 14, text: length(widthMm), vertical: false });
+  }
+
+  // Scale bar: a round length in display units, under the drawing.
+  const unit = unitLabel('sectionLength', display);
+  const roundDisplay = roundLength(toDisplay('sectionLength', widthMm, display));
+  const barMm = fromDisplay('sectionLength', roundDisplay, display);
+  const scaleBar = { x: left, y: heightPx - 10, length: r2(barMm * k), text: `${String(Number(roundDisplay.toPrecision(3)))} ${unit}` };
+
+  const widthPx = Math.ceil(Math.max(X(xMax) + 16 + Math.max(0, ...placed.map((l) => l.text.length * LABEL_CHAR_WIDTH)) + 8, left + scaleBar.length + 60));
+  return {
+    width: widthPx,
+    height: heightPx,
+    outline: `${path(outline)}${voids.map((v) => ` ${path(v)}`).join('')}`,
+    hoop,
+    cover,
+    core,
+    bars,
+    dimensions,
+    labels: placed,
+    scaleBar,
+    scale: k,
+    problems,
+  };
+}

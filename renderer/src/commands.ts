@@ -1,0 +1,260 @@
+/**
+ * What each menu command does (from the native menu, the browser's shortcuts, or the buttons of
+ * the interface). The renderer owns these decisions; the host only carries files and dialogs.
+ */
+import type { Diagnostic } from '../../core/diagnostics.ts';
+
+import { getHost, RESULTS_CAUTION, type MenuCommand, type OpenedFile } from './host/index.ts';
+import { duplicateMember, addMember, deleteMember } from './project/edits.ts';
+import { newMember } from './project/factories.ts';
+import { useAnalysisStore } from './stores/analysis.ts';
+import { ProjectFileError, useDocumentStore } from './stores/document.ts';
+import { useWorkspaceStore } from './stores/workspace.ts';
+import { exportReport } from './report/export-report.ts';
+
+/** A diagnostic as one line, `members[3] "B-12" span: must be …` (the file-level wording of core/project). */
+function describeDiagnostic(d: Diagnostic): string {
+  const path = d.path.replace(/^(\w+\[\d+\] "(?:[^"\\]|\\.)*")\./, '$1 ');
+  return `${d.severity === 'warning' ? 'warning: ' : ''}${path}: ${d.message}`;
+}
+
+function baseName(name: string): string {
+  return name.replace(/\.(hingeline|json)$/i, '').replace(/[\\/:*?"<>|]+/g, ' ').trim() || 'project';
+}
+
+function isTextField(element: Element | null): boolean {
+  if (!element) return false;
+  const tag = element.tagName.toLowerCase();
+  if (tag === 'textarea' || (element as HTMLElement).isContentEditable) return true;
+  return tag === 'input' && !['button', 'checkbox', 'radio', 'range', 'color', 'file', 'submit', 'reset'].includes((element as HTMLInputElement).type);
+}
+
+export function useCommands() {
+  const host = getHost();
+  const documentStore = useDocumentStore();
+  const analysis = useAnalysisStore();
+  const workspace = useWorkspaceStore();
+
+  function fail(what: string, error: unknown): void {
+    workspace.notify('error', `${what}: ${error instanceof Error ? error.message : String(error)}`);
+  }
+
+  /** Asks before the open project is replaced; false when the user keeps it. */
+  async function confirmDiscard(): Promise<boolean> {
+    if (!documentStore.dirty) return true;
+    const choice = await workspace.ask({
+      title: 'Unsaved changes',
+      message: `Save the changes to “${documentStore.title}” before closing it?`,
+      buttons: [
+        { id: 'save', label: 'Save', kind: 'primary' },
+        { id: 'discard', label: 'Don’t save', kind: 'danger' },
+        { id: 'cancel', label: 'Cancel' },
+      ],
+      cancelId: 'cancel',
+    });
+    if (choice === 'cancel') return false;
+    if (choice === 'save') {
+      try {
+        return await documentStore.save(false);
+      } catch (error) {
+        fail('Saving failed', error);
+        return false;
+      }
+    }
+    return true;
+  }
+
+  function afterOpen(): void {
+    analysis.reset();
+    const first = documentStore.project?.members[0];
+    workspace.selectedMemberId = first?.id ?? null;
+    workspace.showOverview();
+    void analysis.analyseAll();
+  }
+
+  async function showFileProblems(name: string, diagnostics: readonly Diagnostic[], opened: boolean): Promise<void> {
+    const errors = diagnostics.filter((d) => d.severity === 'error');
+    if (diagnostics.length === 0) return;
+    if (opened && errors.length === 0) {
+      workspace.notify('info', `${name} opened with ${diagnostics.length} note${diagnostics.length === 1 ? '' : 's'}; see Project → Problems.`);
+      return;
+    }
+    await workspace.ask({
+      title: opened ? `${name}: problems to fix` : `${name} could not be opened`,
+      message: opened
+        ? `The project opened, but ${errors.length} input problem${errors.length === 1 ? '' : 's'} must be fixed before the members concerned can be analysed.`
+        : 'The file is not a Hingeline project this version can read. What was found:',
+      details: diagnostics.slice(0, 40).map(describeDiagnostic),
+      buttons: [{ id: 'ok', label: 'OK', kind: 'primary' }],
+    });
+  }
+
+  async function openFile(file: OpenedFile): Promise<void> {
+    try {
+      const diagnostics = await documentStore.openFile(file);
+      afterOpen();
+      await showFileProblems(file.name, diagnostics, true);
+    } catch (error) {
+      if (error instanceof ProjectFileError) await showFileProblems(error.fileName, error.diagnostics, false);
+      else fail(`Opening ${file.name} failed`, error);
+    }
+  }
+
+  async function open(): Promise<void> {
+    if (!(await confirmDiscard())) return;
+    try {
+      const file = await host.openProject();
+      if (file) await openFile(file);
+    } catch (error) {
+      fail('Opening failed', error);
+    }
+  }
+
+  async function openRecent(path: string): Promise<void> {
+    if (!(await confirmDiscard())) return;
+    try {
+      const file = await host.openRecent(path);
+      if (file) await openFile(file);
+      else workspace.notify('error', `${path} could not be opened (moved, deleted, or access was not granted).`);
+    } catch (error) {
+      fail('Opening failed', error);
+    }
+  }
+
+  async function openDemo(kind: 'us' | 'si' = 'us'): Promise<void> {
+    if (!(await confirmDiscard())) return;
+    documentStore.openDemo(kind);
+    afterOpen();
+  }
+
+  async function createNew(): Promise<void> {
+    if (!(await confirmDiscard())) return;
+    const choice = await workspace.ask({
+      title: 'New project',
+      message: 'Units and design code of the new project (both can be changed later in Project settings):',
+      buttons: [
+        { id: 'si-en', label: 'SI, EN 1992-1-1', kind: 'primary' },
+        { id: 'si-aci', label: 'SI, ACI 318-19' },
+        { id: 'us-aci', label: 'US customary, ACI 318-19' },
+        { id: 'cancel', label: 'Cancel' },
+      ],
+      cancelId: 'cancel',
+    });
+    if (choice === 'cancel') return;
+    documentStore.createNew(choice.startsWith('us') ? 'us' : 'si', choice.endsWith('en') ? 'EN 1992-1-1' : 'ACI 318-19');
+    analysis.reset();
+    const first = documentStore.project?.members[0];
+    if (first) workspace.openMember(first.id);
+  }
+
+  async function save(saveAs: boolean): Promise<void> {
+    if (!documentStore.project) return;
+    try {
+      if (await documentStore.save(saveAs)) workspace.notify('success', `Saved as ${documentStore.fileName}.`);
+    } catch (error) {
+      fail('Saving failed', error);
+    }
+  }
+
+  async function exportCsv(): Promise<void> {
+    if (!documentStore.project) return;
+    try {
+      workspace.task = { label: 'Results summary: analysing', done: 0, total: documentStore.project.members.length };
+      const text = await analysis.resultsCsv((done, total) => {
+        workspace.task = { label: 'Results summary: analysing', done, total };
+      }).finally(() => {
+        workspace.task = null;
+      });
+      const written = await host.exportFile(text, { suggestedName: `${baseName(documentStore.title)} results.csv`, mime: 'text/csv', openAfterwards: false });
+      if (written) workspace.notify('success', `Results written to ${written.name}.`);
+    } catch (error) {
+      fail('The CSV export failed', error);
+    }
+  }
+
+  async function exportPdf(scope: 'member' | 'project' = workspace.view === 'member' ? 'member' : 'project'): Promise<void> {
+    if (!documentStore.project) return;
+    try {
+      const written = await exportReport(scope);
+      if (written) workspace.notify('success', `Report written to ${written.name}.`);
+    } catch (error) {
+      fail('The report could not be made', error);
+    }
+  }
+
+  function undo(): void {
+    if (isTextField(document.activeElement) && document.execCommand('undo')) return;
+    documentStore.undo();
+  }
+
+  function redo(): void {
+    if (isTextField(document.activeElement) && document.execCommand('redo')) return;
+    documentStore.redo();
+  }
+
+  function addNewMember(): void {
+    const project = documentStore.project;
+    if (!project) return;
+    const current = project.members.find((m) => m.id === workspace.selectedMemberId);
+    const sectionId = current?.zones[0]?.sectionId ?? project.sections[0]?.id;
+    if (!sectionId) {
+      workspace.notify('error', 'Add a section to the project before adding members.');
+      return;
+    }
+    const member = newMember(project, sectionId);
+    documentStore.edit(`Add member ${member.name}`, (p) => addMember(p, member, current?.id));
+    workspace.openMember(member.id);
+  }
+
+  function duplicate(memberId: string): void {
+    let copyId: string | null = null;
+    documentStore.edit('Duplicate member', (p) => {
+      const result = duplicateMember(p, memberId);
+      copyId = result.memberId;
+      return result.project;
+    });
+    if (copyId) workspace.openMember(copyId);
+  }
+
+  function remove(memberId: string): void {
+    const project = documentStore.project;
+    const member = project?.members.find((m) => m.id === memberId);
+    if (!project || !member) return;
+    const index = project.members.indexOf(member);
+    documentStore.edit(`Delete member ${member.name}`, (p) => deleteMember(p, memberId));
+    const next = documentStore.project?.members[Math.min(index, (documentStore.project?.members.length ?? 1) - 1)];
+    if (workspace.selectedMemberId === memberId) {
+      if (next) workspace.openMember(next.id);
+      else workspace.showOverview();
+    }
+    workspace.notify('info', `Deleted ${member.name}. Undo (Ctrl+Z) brings it back.`);
+  }
+
+  async function about(): Promise<void> {
+    await workspace.ask({
+      title: 'About Hingeline',
+      message: 'Moment–curvature, load–deflection, plastic hinge rotation, ductility and service deflections of reinforced-concrete beams.',
+      details: [RESULTS_CAUTION],
+      buttons: [{ id: 'ok', label: 'Close', kind: 'primary' }],
+    });
+  }
+
+  async function run(command: MenuCommand): Promise<void> {
+    switch (command) {
+      case 'new': return createNew();
+      case 'open': return open();
+      case 'open-demo': return openDemo('us');
+      case 'save': return save(false);
+      case 'save-as': return save(true);
+      case 'export-report': return exportPdf();
+      case 'export-csv': return exportCsv();
+      case 'undo': return undo();
+      case 'redo': return redo();
+      case 'about': return about();
+      case 'add-member': return addNewMember();
+      case 'analyze': return analysis.analyseAll();
+    }
+  }
+
+  return { run, open, openFile, openRecent, openDemo, createNew, save, exportCsv, exportPdf, undo, redo, addNewMember, duplicate, remove, about, confirmDiscard };
+}

@@ -1,0 +1,73 @@
+/**
+ * What a member's results depend on, by identity. Edits replace only the objects on their path
+ * (immutable.ts), so a member must be re-analysed exactly when one of these objects is no longer
+ * the same: the member itself, a section one of its zones uses, a material those sections use,
+ * the code basis or the analysis settings. The display unit system is not among them: results are
+ * held in internal units.
+ */
+import type { MaterialSpec } from '../../../core/materials/specs.ts';
+import type { MemberDefinition } from '../../../core/member/definition.ts';
+import type { Project } from '../../../core/project/types.ts';
+import type { SectionDefinition } from '../../../core/section/definition.ts';
+
+/** Ids of the materials a section uses (concrete, bar steels, hoop steel), in that order, without repeats. */
+export function sectionMaterialIds(section: SectionDefinition): string[] {
+  const ids = [section.concreteId, ...section.bars.map((bar) => bar.steelId)];
+  if (section.hoops) ids.push(section.hoops.steelId);
+  return [...new Set(ids)];
+}
+
+/** The sections a member's zones use, in zone order, without repeats (missing ids are skipped). */
+export function memberSections(project: Project, member: MemberDefinition): SectionDefinition[] {
+  const ids = [...new Set(member.zones.map((zone) => zone.sectionId))];
+  return ids.map((id) => project.sections.find((section) => section.id === id)).filter((s): s is SectionDefinition => s !== undefined);
+}
+
+/** The materials the given sections use, without repeats (missing ids are skipped). */
+export function sectionsMaterials(project: Project, sections: readonly SectionDefinition[]): MaterialSpec[] {
+  const ids = [...new Set(sections.flatMap(sectionMaterialIds))];
+  return ids.map((id) => project.materials.find((material) => material.id === id)).filter((m): m is MaterialSpec => m !== undefined);
+}
+
+/**
+ * The inputs of a member's analysis as a list of values compared by identity (see the file comment).
+ * Null when the project has no member with that id.
+ */
+export function memberInputs(project: Project, memberId: string): readonly unknown[] | null {
+  const member = project.members.find((m) => m.id === memberId);
+  if (!member) return null;
+  const sections = memberSections(project, member);
+  // Zone section ids are part of the member; a section id that later appears must count as a change.
+  return [member, project.info.codeBasis, project.settings, ...sections, ...sectionsMaterials(project, sections)];
+}
+
+/** True when two input lists hold the same objects in the same order. */
+export function sameInputs(a: readonly unknown[] | null | undefined, b: readonly unknown[] | null | undefined): boolean {
+  if (!a || !b || a.length !== b.length) return false;
+  return a.every((value, i) => value === b[i]);
+}
+
+/** Ids of the members that use a section. */
+export function membersUsingSection(project: Project, sectionId: string): string[] {
+  return project.members.filter((m) => m.zones.some((z) => z.sectionId === sectionId)).map((m) => m.id);
+}
+
+/** Ids of the sections that use a material. */
+export function sectionsUsingMaterial(project: Project, materialId: string): string[] {
+  return project.sections.filter((s) => sectionMaterialIds(s).includes(materialId)).map((s) => s.id);
+}
+
+/**
+ * The smallest project that analyses the given members the same way as the whole project: the
+ * same info and settings, those members (in project order), the sections they use and the
+ * materials of those sections. Sent to the worker instead of the whole project.
+ */
+export function subproject(project: Project, memberIds: readonly string[]): Project {
+  const wanted = new Set(memberIds);
+  const members = project.members.filter((m) => wanted.has(m.id));
+  const sectionIds = new Set(members.flatMap((m) => m.zones.map((z) => z.sectionId)));
+  const sections = project.sections.filter((s) => sectionIds.has(s.id));
+  const materialIds = new Set(sections.flatMap(sectionMaterialIds));
+  const materials = project.materials.filter((m) => materialIds.has(m.id));
+  return { ...project, members, sections, materials };
+}

@@ -1,0 +1,66 @@
+/**
+ * Sorting and filtering of the project overview (pure, so it can be tested on its own).
+ * Values compared are the internal ones of the key results (never formatted text).
+ */
+import type { MemberDefinition } from '../../../core/member/definition.ts';
+import type { MemberKeyResults } from '../../../core/project/key-results.ts';
+import type { OverviewColumn, StatusFilter } from '../stores/workspace.ts';
+
+export type RowStatus = MemberKeyResults['status'] | 'pending' | 'outdated';
+
+export interface OverviewRow {
+  readonly member: MemberDefinition;
+  readonly key: MemberKeyResults | null;
+  readonly status: RowStatus;
+}
+
+/** Most severe first when sorting by status ascending. */
+export const STATUS_ORDER: Readonly<Record<RowStatus, number>> = { 'input-error': 0, 'not-converged': 1, 'check-fails': 2, outdated: 3, pending: 4, ok: 5 };
+
+const collator = new Intl.Collator('en', { numeric: true, sensitivity: 'base' });
+
+export function sortValue(row: OverviewRow, column: OverviewColumn): number | string | null {
+  const k = row.key;
+  switch (column) {
+    case 'name': return row.member.name;
+    case 'supports': return row.member.supports;
+    case 'span': return row.member.span;
+    case 'yieldMoment': return k?.yieldMoment ?? null;
+    case 'ultimateMoment': return k?.ultimateMoment ?? null;
+    case 'curvatureDuctility': return k?.curvatureDuctility ?? null;
+    case 'displacementDuctility': return k?.displacementDuctility ?? null;
+    case 'rotation': return k?.plasticRotationCapacity ?? null;
+    case 'deflection': return k?.deflection?.deflection ?? null;
+    case 'utilisation': return k?.deflection?.utilisation ?? null;
+    case 'strength': return k?.strengthUtilisation ?? null;
+    case 'governing': return k?.governingMode ?? null;
+    case 'status': return STATUS_ORDER[row.status];
+  }
+}
+
+/**
+ * Rows sorted by a column: text in natural order (B-2 before B-10), numbers by value; rows
+ * without a value always last, whatever the direction; ties keep the project order.
+ */
+export function sortRows(list: readonly OverviewRow[], column: OverviewColumn, descending: boolean): OverviewRow[] {
+  return list
+    .map((row, index) => ({ row, index, value: sortValue(row, column) }))
+    .sort((a, b) => {
+      if (a.value === null || b.value === null) return a.value === b.value ? a.index - b.index : a.value === null ? 1 : -1;
+      const order = typeof a.value === 'string' ? collator.compare(a.value, String(b.value)) : a.value - (b.value as number);
+      return (descending ? -order : order) || a.index - b.index;
+    })
+    .map((x) => x.row);
+}
+
+/** Rows whose status matches and whose mark, governing mode or notes contain the text (any case). */
+export function filterRows(list: readonly OverviewRow[], text: string, status: StatusFilter): OverviewRow[] {
+  const needle = text.trim().toLowerCase();
+  return list.filter((row) => {
+    if (status !== 'all' && !(status === 'pending' ? row.status === 'pending' || row.status === 'outdated' : row.status === status)) return false;
+    if (needle === '') return true;
+    return row.member.name.toLowerCase().includes(needle)
+      || (row.key?.governingMode.toLowerCase().includes(needle) ?? false)
+      || (row.member.notes?.toLowerCase().includes(needle) ?? false);
+  });
+}

@@ -1,0 +1,74 @@
+/**
+ * "Export report": the PDF of the member on screen or of the whole project, made in a report
+ * worker (report-worker.ts) and handed to the host to save (and open with the system viewer).
+ */
+import type { Project } from '../../../core/project/types.ts';
+import { toRaw } from 'vue';
+import packageJson from '../../../package.json';
+import { getHost } from '../host/index.ts';
+import { subproject } from '../project/dependencies.ts';
+import { useDocumentStore } from '../stores/document.ts';
+import { useWorkspaceStore } from '../stores/workspace.ts';
+import type { ReportReply, ReportRequest } from './report-protocol.ts';
+
+/** Version printed on the report's cover. */
+export const SOFTWARE_VERSION: string = packageJson.version;
+
+let nextId = 1;
+
+/** Runs one report request in a fresh worker (terminated afterwards: pdfmake and its fonts are large). */
+export function makeReportPdf(request: Omit<ReportRequest, 'id' | 'type'>, onProgress?: (reply: Extract<ReportReply, { type: 'progress' }>) => void): Promise<Uint8Array> {
+  const worker = new Worker(new URL('../workers/report-worker.ts', import.meta.url), { type: 'module', name: 'hingeline-report' });
+  const id = nextId++;
+  return new Promise<Uint8Array>((resolve, reject) => {
+    worker.onmessage = (event: MessageEvent<ReportReply>) => {
+      const reply = event.data;
+      if (reply.id !== id) return;
+      if (reply.type === 'progress') onProgress?.(reply);
+      else {
+        worker.terminate();
+        if (reply.type === 'pdf') resolve(reply.bytes);
+        else reject(new Error(reply.message));
+      }
+    };
+    worker.onerror = (event) => {
+      worker.terminate();
+      reject(new Error(`The report worker stopped: ${event.message || 'unknown error'}`));
+    };
+    worker.postMessage({ ...request, type: 'report', id } satisfies ReportRequest);
+  });
+}
+
+function fileBase(name: string): string {
+  return name.replace(/\.(hingeline|json)$/i, '').replace(/[\\/:*?"<>|]+/g, ' ').trim() || 'project';
+}
+
+/**
+ * Makes and exports the report. `member`: the member on screen; `project`: every member.
+ * Returns what the host wrote, or null when the user cancelled the save dialog.
+ */
+export async function exportReport(scope: 'member' | 'project'): Promise<{ name: string; path: string | null } | null> {
+  const documentStore = useDocumentStore();
+  const workspace = useWorkspaceStore();
+  const project = documentStore.project ? (toRaw(documentStore.project) as Project) : null;
+  if (!project) throw new Error('No project is open.');
+  const memberIds = scope === 'member' && workspace.selectedMemberId ? [workspace.selectedMemberId] : project.members.map((m) => m.id);
+  if (memberIds.length === 0) throw new Error('The project has no members to report.');
+  const part = scope === 'member' ? subproject(project, memberIds) : project;
+  const projectText = await documentStore.text();
+  const member = project.members.find((m) => m.id === memberIds[0]);
+  workspace.notify('info', `Making the report of ${scope === 'member' ? member?.name ?? 'the member' : `${memberIds.length} members`}…`, 3000);
+  const stages = { analysing: 'Report: analysing', drawing: 'Report: drawing the charts', writing: 'Report: writing the PDF' } as const;
+  let bytes: Uint8Array;
+  try {
+    workspace.task = { label: 'Report: starting', done: 0, total: 1 };
+    bytes = await makeReportPdf({ project: part, memberIds, projectText, generatedOn: new Date().toISOString(), softwareVersion: SOFTWARE_VERSION }, (progress) => {
+      workspace.task = { label: stages[progress.stage], done: progress.done, total: progress.total };
+    });
+  } finally {
+    workspace.task = null;
+  }
+  const base = fileBase(documentStore.title);
+  const suggestedName = scope === 'member' && member ? `${base} ${member.name} report.pdf` : `${base} report.pdf`;
+  return getHost().exportFile(bytes, { suggestedName, mime: 'application/pdf', openAfterwards: true });
+}

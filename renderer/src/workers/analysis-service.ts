@@ -1,0 +1,174 @@
+/**
+ * What an analysis worker does, written without worker globals so that component tests can run it
+ * in-process: requests in, replies out through `post`. Every engineering number comes from core/:
+ * analyzeMembers (core/analysis.ts), memberKeyResults, the section builder and equilibrium solver
+ * for states at a chosen curvature, validation, parsing and serialisation of project files.
+ *
+ * Long jobs run in chunks of members; between chunks the service yields to the event loop, so a
+ * `cancel` message can stop a job early (the members not yet analysed are returned to the caller).
+ */
+import { analyzeMembers } from '../../../core/analysis.ts';
+import type { Diagnostic } from '../../../core/diagnostics.ts';
+import { InputError } from '../../../core/diagnostics.ts';
+import type { MemberResult } from '../../../core/member/results.ts';
+import { memberKeyResults } from '../../../core/project/key-results.ts';
+import { displayMessage, parseProject, resultsSummaryCsv, serializeProject, validateProjectData } from '../../../core/project/index.ts';
+import type { UnitSystem } from '../../../core/project/types.ts';
+import { projectMaterials } from '../../../core/project/resolver.ts';
+import type { Project } from '../../../core/project/types.ts';
+import { buildSectionModel } from '../../../core/section/build.ts';
+import { solveEquilibrium } from '../../../core/section/equilibrium.ts';
+import { directionSign, type SectionModel } from '../../../core/section/model.ts';
+import { sectionState } from '../../../core/section/state.ts';
+import { placeDiagnostic, remapPaths } from './paths.ts';
+import type { CoveredItems, IndexMap, WorkerReply, WorkerRequest } from './protocol.ts';
+
+export interface AnalysisService {
+  handle(request: WorkerRequest): Promise<void>;
+}
+
+/** Lets queued messages (a cancel) be handled before the next chunk. */
+const yieldToEvents = (): Promise<void> => new Promise((resolve) => setTimeout(resolve, 0));
+
+function messageOf(error: unknown): string {
+  if (error instanceof InputError) return error.diagnostics.map((d) => `${d.path}: ${d.message}`).join('\n');
+  return error instanceof Error ? error.message : String(error);
+}
+
+/**
+ * The member result with every item path written for the whole project, and the values in its
+ * input errors in the project's display units (core's `displayMessage`, as validation does).
+ */
+function remapResult(result: MemberResult, map: IndexMap | null, system: UnitSystem): MemberResult {
+  const errors = result.errors.map((e) => ({ path: remapPaths(e.path, map), message: remapPaths(displayMessage(e.message, e.path, system), map) }));
+  if (!map) return { ...result, errors };
+  return {
+    ...result,
+    governingMode: remapPaths(result.governingMode, map),
+    warnings: result.warnings.map((w) => remapPaths(w, map)),
+    errors,
+    sections: result.sections.map((s) => ({ ...s, warnings: s.warnings.map((w) => remapPaths(w, map)) })),
+    loadDeflection: { ...result.loadDeflection, status: remapPaths(result.loadDeflection.status, map) },
+  };
+}
+
+function coveredItems(project: Project, whole: boolean): CoveredItems {
+  return {
+    materials: project.materials.map((m) => m.id),
+    sections: project.sections.map((s) => s.id),
+    members: project.members.map((m) => m.id),
+    project: whole,
+  };
+}
+
+export function createAnalysisService(post: (reply: WorkerReply) => void): AnalysisService {
+  const cancelled = new Set<number>();
+  /** Section models for states at a chosen curvature, by the section's inputs as JSON. */
+  const models = new Map<string, SectionModel>();
+
+  function validate(id: number, project: Project, map: IndexMap | null): void {
+    const { diagnostics } = validateProjectData(project);
+    post({ type: 'diagnostics', id, diagnostics: diagnostics.map((d) => placeDiagnostic(d, project, map)), covered: coveredItems(project, map === null) });
+  }
+
+  async function analyze(request: Extract<WorkerRequest, { type: 'analyze' }>): Promise<void> {
+    const started = performance.now();
+    const { project, indexMap, detailIds } = request;
+    if (request.validate) validate(request.id, project, indexMap);
+    const known = new Set(project.members.map((m) => m.id));
+    const ids = request.memberIds.filter((memberId) => known.has(memberId));
+    const details = new Set(detailIds);
+    const chunk = Math.max(1, Math.floor(request.chunkSize));
+    let done = 0;
+    let start = 0;
+    while (start < ids.length) {
+      if (cancelled.delete(request.id)) {
+        post({ type: 'cancelled', id: request.id, remaining: ids.slice(start) });
+        return;
+      }
+      // The first member (the one on screen) goes alone when its full results are wanted, so they come back soonest.
+      const size = start === 0 && details.has(ids[0]!) ? 1 : chunk;
+      const part = ids.slice(start, start + size);
+      const results = analyzeMembers(project, part);
+      for (const raw of results) {
+        const result = remapResult(raw, indexMap, project.info.unitSystem);
+        const definition = project.members.find((m) => m.id === result.memberId);
+        post({ type: 'member', id: request.id, memberId: result.memberId, key: memberKeyResults(result, definition), detail: details.has(result.memberId) ? result : null });
+        done += 1;
+        post({ type: 'progress', id: request.id, done, total: ids.length, memberId: result.memberId });
+      }
+      start += size;
+      if (start < ids.length) await yieldToEvents();
+    }
+    cancelled.delete(request.id);
+    post({ type: 'done', id: request.id, elapsedMs: performance.now() - started });
+  }
+
+  function stateAt(request: Extract<WorkerRequest, { type: 'state' }>): void {
+    const { project, sectionId, direction } = request;
+    const index = project.sections.findIndex((s) => s.id === sectionId);
+    const definition = project.sections[index];
+    if (!definition) throw new Error(`There is no section "${sectionId}" in the project.`);
+    const key = JSON.stringify([definition, project.materials, project.info.codeBasis]);
+    let model = models.get(key);
+    if (!model) {
+      model = buildSectionModel(definition, projectMaterials(project.materials, project.info.codeBasis), `sections[${index}] "${definition.name}"`).model;
+      if (models.size > 50) models.clear();
+      models.set(key, model);
+    }
+    const curvature = directionSign(direction) * Math.abs(request.curvature);
+    const outcome = solveEquilibrium(model, curvature, request.guess);
+    if (!outcome.ok) throw new Error(`The section state at this curvature could not be found: ${outcome.reason}.`);
+    const { state } = outcome;
+    post({ type: 'state', id: request.id, state: sectionState(model, direction, state.curvature, state.referenceStrain, state.moment, state.residual) });
+  }
+
+  return {
+    async handle(request) {
+      try {
+        switch (request.type) {
+          case 'cancel':
+            cancelled.add(request.target);
+            return;
+          case 'analyze':
+            await analyze(request);
+            return;
+          case 'validate':
+            validate(request.id, request.project, request.indexMap);
+            post({ type: 'done', id: request.id, elapsedMs: 0 });
+            return;
+          case 'parse': {
+            const parsed = parseProject(request.text);
+            post({ type: 'parsed', id: request.id, project: parsed.project, diagnostics: parsed.diagnostics as Diagnostic[] });
+            return;
+          }
+          case 'serialize':
+            post({ type: 'text', id: request.id, text: serializeProject(request.project) });
+            return;
+          case 'state':
+            stateAt(request);
+            return;
+          case 'csv': {
+            // Chunk by chunk, so that a large project never holds every full result at once;
+            // the header (one line, no line breaks inside) is kept from the first chunk only.
+            const { project } = request;
+            const ids = project.members.map((m) => m.id);
+            let text = '';
+            for (let start = 0; start < ids.length || start === 0; start += 20) {
+              const results = analyzeMembers(project, ids.slice(start, start + 20));
+              const part = resultsSummaryCsv(results, project.info.unitSystem, project);
+              text += start === 0 ? part : part.slice(part.indexOf('\r\n') + 2);
+              post({ type: 'progress', id: request.id, done: Math.min(start + 20, ids.length), total: ids.length, memberId: ids[Math.min(start + 19, ids.length - 1)] ?? '' });
+              if (start + 20 < ids.length) await yieldToEvents();
+              if (ids.length === 0) break;
+            }
+            post({ type: 'text', id: request.id, text });
+            return;
+          }
+        }
+      } catch (error) {
+        post({ type: 'error', id: request.id, message: messageOf(error) });
+      }
+    },
+  };
+}

@@ -1,0 +1,92 @@
+/**
+ * Messages between the renderer and its analysis workers. Everything is plain, structured-clone
+ * data. Every request carries an `id`; every reply names the request it answers.
+ *
+ * Item paths: jobs are sent as a sub-project (only the members asked for and what they use).
+ * `indexMap` gives, for each list of the sub-project, the index of each item in the whole project,
+ * so that every path the engine writes (`members[0] "B-1".span`) is turned back into the path of
+ * the whole project before it reaches the user.
+ */
+import type { Diagnostic } from '../../../core/diagnostics.ts';
+import type { BendingDirection } from '../../../core/section/model.ts';
+import type { MemberResult } from '../../../core/member/results.ts';
+import type { Project } from '../../../core/project/types.ts';
+import type { MemberKeyResults } from '../../../core/project/key-results.ts';
+import type { SectionState } from '../../../core/section/results.ts';
+
+export type ItemList = 'materials' | 'sections' | 'members';
+
+export interface IndexMap {
+  readonly materials: readonly number[];
+  readonly sections: readonly number[];
+  readonly members: readonly number[];
+}
+
+/** A diagnostic placed on one item of the project by id, with the field path inside the item. */
+export interface ItemDiagnostic {
+  /** The list the item is in, or `project` for the file, info and settings. */
+  readonly list: ItemList | 'project';
+  /** Item id (empty for `project`). */
+  readonly itemId: string;
+  /** Field path inside the item, e.g. `span`, `zones[1].from`, `shape.width` (empty: the item itself). */
+  readonly field: string;
+  /** The whole-project path as the engine wrote it, for lists of problems. */
+  readonly path: string;
+  readonly code: Diagnostic['code'];
+  readonly severity: Diagnostic['severity'];
+  readonly message: string;
+}
+
+/** The items a validation covered: their old diagnostics are replaced by the new ones. */
+export interface CoveredItems {
+  readonly materials: readonly string[];
+  readonly sections: readonly string[];
+  readonly members: readonly string[];
+  /** True when the file-level, info and settings checks were part of it. */
+  readonly project: boolean;
+}
+
+export type WorkerRequest =
+  | {
+      readonly type: 'analyze';
+      readonly id: number;
+      readonly project: Project;
+      readonly indexMap: IndexMap | null;
+      /** Members to analyse, in the order wanted (the member on screen first). */
+      readonly memberIds: readonly string[];
+      /** Members whose full results are wanted back (not only the key results). */
+      readonly detailIds: readonly string[];
+      /** Validate the (sub-)project first and send its diagnostics. */
+      readonly validate: boolean;
+      /** Members analysed together (sharing section analyses) between two checks for cancellation. */
+      readonly chunkSize: number;
+    }
+  | { readonly type: 'cancel'; readonly id: number; readonly target: number }
+  | { readonly type: 'validate'; readonly id: number; readonly project: Project; readonly indexMap: IndexMap | null }
+  | { readonly type: 'parse'; readonly id: number; readonly text: string }
+  | { readonly type: 'serialize'; readonly id: number; readonly project: Project }
+  | {
+      readonly type: 'state';
+      readonly id: number;
+      readonly project: Project;
+      readonly sectionId: string;
+      readonly direction: BendingDirection;
+      /** Curvature magnitude, 1/mm, and a first guess of the centroid strain. */
+      readonly curvature: number;
+      readonly guess: number;
+    }
+  | { readonly type: 'csv'; readonly id: number; readonly project: Project };
+
+export type WorkerReply =
+  | { readonly type: 'member'; readonly id: number; readonly memberId: string; readonly key: MemberKeyResults; readonly detail: MemberResult | null }
+  | { readonly type: 'progress'; readonly id: number; readonly done: number; readonly total: number; readonly memberId: string }
+  | { readonly type: 'diagnostics'; readonly id: number; readonly diagnostics: readonly ItemDiagnostic[]; readonly covered: CoveredItems }
+  | { readonly type: 'done'; readonly id: number; readonly elapsedMs: number }
+  | { readonly type: 'cancelled'; readonly id: number; readonly remaining: readonly string[] }
+  | { readonly type: 'parsed'; readonly id: number; readonly project: Project | null; readonly diagnostics: readonly Diagnostic[] }
+  | { readonly type: 'text'; readonly id: number; readonly text: string }
+  | { readonly type: 'state'; readonly id: number; readonly state: SectionState }
+  | { readonly type: 'error'; readonly id: number; readonly message: string };
+
+/** Distributes the `Omit` over a union, so that each request keeps its own fields. */
+export type WithoutId<T> = T extends unknown ? Omit<T, 'id'> : never;

@@ -1,0 +1,44 @@
+/**
+ * Takes the README screenshots (build/screenshots/) from the built web UI in Chromium:
+ *
+ *   npx tsx test/e2e/support/readme-screenshots.ts
+ *
+ * The demo project, 1440 × 900 pixels: the project overview, a member workspace with its charts,
+ * and the strain and stress profile at a key point.
+ */
+import { join } from 'node:path';
+import { ROOT, openApp, startE2e } from './environment.ts';
+
+const OUT = join(ROOT, 'build', 'screenshots');
+const context = await startE2e();
+try {
+  const { page } = await openApp(context);
+  await page.getByTestId('open-demo').click();
+  await page.waitForFunction(() => document.querySelector('[data-testid=analysis-status]')?.textContent?.includes('All results current'), undefined, { timeout: 60_000 });
+  await page.waitForTimeout(300);
+  await page.screenshot({ path: join(OUT, 'overview.png') });
+
+  await page.locator('[data-testid=member-list] [data-member="F-205"]').click();
+  await page.getByTestId('chart-moment-curvature').waitFor();
+  await page.getByTestId('inputs-tab-section').click();
+  await page.getByTestId('section-drawing').waitFor();
+  await page.waitForTimeout(500);
+  await page.screenshot({ path: join(OUT, 'member-workspace.png') });
+
+  await page.getByTestId('results-tab-load-deflection').click();
+  await page.getByTestId('inputs-tab-materials').click();
+  await page.waitForTimeout(500);
+  await page.screenshot({ path: join(OUT, 'load-deflection-and-materials.png') });
+
+  await page.getByTestId('results-tab-moment-curvature').click();
+  await page.getByTestId('inputs-tab-section').click();
+  await page.locator('[data-testid=key-points] tbody tr.clickable', { hasText: 'first yield' }).first().click();
+  await page.getByTestId('chart-stress-profile').waitFor();
+  await page.waitForTimeout(300);
+  await page.getByTestId('section-profile').evaluate((element) => element.scrollIntoView({ block: 'end' }));
+  await page.waitForTimeout(300);
+  await page.screenshot({ path: join(OUT, 'section-profile.png') });
+  console.log(`screenshots written to ${OUT}`);
+} finally {
+  await context.close();
+}

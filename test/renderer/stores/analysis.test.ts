@@ -1,0 +1,140 @@
+/**
+ * The analysis store with the real analysis service running in-process: whole-project analysis
+ * with progress, re-analysis of exactly the members an edit touches, diagnostics placed on
+ * fields, results of earlier inputs shown again on undo, cancel, and states at a curvature.
+ */
+import { describe, expect, it } from 'vitest';
+import { setMemberField, setSectionField } from '../../../renderer/src/project/edits.ts';
+import { useAnalysisStore } from '../../../renderer/src/stores/analysis.ts';
+import { useDocumentStore } from '../../../renderer/src/stores/document.ts';
+import type { WorkerRequest } from '../../../renderer/src/workers/protocol.ts';
+import { testEnvironment, until } from '../support.ts';
+
+type Analyze = Extract<WorkerRequest, { type: 'analyze' }>;
+const analyzeRequests = (requests: WorkerRequest[]) => requests.filter((r): r is Analyze => r.type === 'analyze');
+
+async function openAndAnalyse(kind: 'si' | 'us' = 'si') {
+  const env = testEnvironment();
+  const documentStore = useDocumentStore();
+  const analysis = useAnalysisStore();
+  documentStore.openDemo(kind);
+  await analysis.analyseAll();
+  return { env, documentStore, analysis };
+}
+
+const allCurrent = (analysis: ReturnType<typeof useAnalysisStore>, ids: readonly string[]) => ids.every((id) => analysis.keyOf(id)?.current === true);
+
+describe('whole-project analysis', () => {
+  it('gives every member current key results and reports progress to the end', async () => {
+    const { documentStore, analysis, env } = await openAndAnalyse();
+    const ids = documentStore.project!.members.map((m) => m.id);
+    expect(allCurrent(analysis, ids)).toBe(true);
+    expect(analysis.batch).toMatchObject({ running: false, done: ids.length, total: ids.length, outcome: 'done' });
+    expect(analysis.outdatedCount).toBe(0);
+    const [request] = analyzeRequests(env.requests);
+    expect(request!.memberIds).toEqual(ids);
+    expect(request!.validate).toBe(true);
+    // Key results are picked by core (memberKeyResults): an idealised yield moment below the ultimate one.
+    const key = analysis.keyOf('MB-1')!.key;
+    expect(key.yieldMoment).toBeGreaterThan(0);
+    expect(key.ultimateMoment!).toBeGreaterThanOrEqual(key.yieldMoment! * 0.8);
+    expect(key.governingMode.length).toBeGreaterThan(20);
+  }, 60_000);
+});
+
+describe('after an edit', () => {
+  it('re-analyses only the edited member, and the member on screen with its full results', async () => {
+    const { documentStore, analysis, env } = await openAndAnalyse();
+    analysis.focusedMemberId = 'MB-2';
+    await until(() => analysis.detailOf('MB-2')?.current === true, 'full results of MB-2');
+    const before = analyzeRequests(env.requests).length;
+    const otherKey = analysis.keyOf('MB-3')!.key;
+    documentStore.edit('Change span', (p) => setMemberField(p, 'MB-1', ['span'], 6900));
+    expect(analysis.keyOf('MB-1')!.current).toBe(false);
+    await until(() => analysis.keyOf('MB-1')?.current === true, 'MB-1 re-analysed');
+    const jobs = analyzeRequests(env.requests).slice(before);
+    expect(jobs.flatMap((j) => j.memberIds)).toEqual(['MB-1']);
+    expect(jobs[0]!.project.members.map((m) => m.id)).toEqual(['MB-1']);
+    expect(analysis.keyOf('MB-3')!.key).toBe(otherKey);
+  }, 60_000);
+
+  it('re-analyses every member using an edited section (members elsewhere untouched)', async () => {
+    const { documentStore, analysis, env } = await openAndAnalyse();
+    const before = analyzeRequests(env.requests).length;
+    documentStore.edit('Change height', (p) => setSectionField(p, 'T500-end', ['shape', 'height'], 550));
+    await until(() => allCurrent(analysis, documentStore.project!.members.map((m) => m.id)), 'all current again');
+    const analysed = analyzeRequests(env.requests).slice(before).flatMap((j) => j.memberIds).sort();
+    const users = documentStore.project!.members.filter((m) => m.zones.some((z) => z.sectionId === 'T500-end')).map((m) => m.id).sort();
+    expect(analysed).toEqual(users);
+    expect(users.length).toBeGreaterThan(0);
+    expect(users.length).toBeLessThan(documentStore.project!.members.length);
+  }, 60_000);
+
+  it('places core’s message on the field, naming the allowed range, and clears it when fixed', async () => {
+    const { documentStore, analysis } = await openAndAnalyse();
+    documentStore.edit('Change span', (p) => setMemberField(p, 'MB-1', ['span'], -2000));
+    await until(() => analysis.diagnosticsOf('members', 'MB-1', 'span').length > 0, 'a span diagnostic');
+    const [d] = analysis.diagnosticsOf('members', 'MB-1', 'span');
+    expect(d!.severity).toBe('error');
+    expect(d!.message).toMatch(/greater than 0/);
+    expect(d!.message).toMatch(/-2 m/);
+    await until(() => analysis.keyOf('MB-1')?.current === true, 'MB-1 analysed');
+    expect(analysis.keyOf('MB-1')!.key.status).toBe('input-error');
+    documentStore.edit('Change span', (p) => setMemberField(p, 'MB-1', ['span'], 7200));
+    await until(() => analysis.diagnosticsOf('members', 'MB-1', 'span').length === 0, 'the diagnostic to clear');
+  }, 60_000);
+
+  it('shows the earlier results again at once on undo, without analysing', async () => {
+    const { documentStore, analysis, env } = await openAndAnalyse();
+    const original = analysis.keyOf('MB-1')!.key;
+    documentStore.edit('Change span', (p) => setMemberField(p, 'MB-1', ['span'], 6900));
+    await until(() => analysis.keyOf('MB-1')?.current === true, 'MB-1 re-analysed');
+    expect(analysis.keyOf('MB-1')!.key).not.toBe(original);
+    const before = analyzeRequests(env.requests).length;
+    documentStore.undo();
+    expect(analysis.keyOf('MB-1')).toEqual({ key: original, current: true });
+    await new Promise((resolve) => setTimeout(resolve, 100));
+    expect(analyzeRequests(env.requests).length).toBe(before);
+  }, 60_000);
+});
+
+describe('cancel', () => {
+  it('stops the whole-project analysis at once and keeps what was done', async () => {
+    testEnvironment();
+    const documentStore = useDocumentStore();
+    const analysis = useAnalysisStore();
+    documentStore.openDemo('us');
+    const running = analysis.analyseAll();
+    await until(() => analysis.batch.done >= 1, 'the first member');
+    analysis.cancelAll();
+    await running;
+    expect(analysis.batch.running).toBe(false);
+    expect(analysis.batch.outcome).toBe('cancelled');
+    const ids = documentStore.project!.members.map((m) => m.id);
+    const analysed = ids.filter((id) => analysis.keyOf(id) !== null).length;
+    expect(analysed).toBeGreaterThanOrEqual(1);
+    expect(analysed).toBeLessThan(ids.length);
+    // Members left unanalysed are not picked up behind the user's back.
+    await new Promise((resolve) => setTimeout(resolve, 200));
+    expect(ids.filter((id) => analysis.keyOf(id) !== null).length).toBe(analysed);
+  }, 60_000);
+});
+
+describe('state at a curvature', () => {
+  it('reproduces the moment of a key point at its curvature (same solver as the curve)', async () => {
+    const { analysis } = await openAndAnalyse();
+    analysis.focusedMemberId = 'MB-1';
+    await until(() => analysis.detailOf('MB-1')?.current === true, 'full results of MB-1');
+    const section = analysis.detailOf('MB-1')!.result.sections[0]!;
+    const firstYield = section.sagging!.keyPoints.firstYield!;
+    const state = await analysis.stateAt(section.sectionId, 'sagging', firstYield.curvature, firstYield.referenceStrain);
+    expect(state.point.curvature).toBeCloseTo(firstYield.curvature, 12);
+    expect(Math.abs(state.point.moment - firstYield.moment) / firstYield.moment).toBeLessThan(1e-3);
+    expect(state.elements.length).toBeGreaterThan(0);
+  }, 60_000);
+
+  it('says why when the section does not exist', async () => {
+    const { analysis } = await openAndAnalyse();
+    await expect(analysis.stateAt('nope', 'sagging', 1e-5, 0)).rejects.toThrow(/no section "nope"/);
+  }, 60_000);
+});

@@ -1,0 +1,60 @@
+/**
+ * Support for the renderer's component and store tests: a fake host, analysis workers running
+ * in-process (the same service as the real Web Worker), a fresh Pinia, and waiting helpers.
+ */
+import { createPinia, setActivePinia, type Pinia } from 'pinia';
+import { createFakeHost, setHostForTesting, type FakeHost, type FakeHostSeed } from '../../renderer/src/host/index.ts';
+import { setWorkerFactory, type WorkerFactory, type WorkerLike } from '../../renderer/src/workers/engine.ts';
+import { inProcessWorkerFactory } from '../../renderer/src/workers/in-process.ts';
+import type { WorkerRequest } from '../../renderer/src/workers/protocol.ts';
+
+export interface TestEnvironment {
+  readonly host: FakeHost;
+  readonly pinia: Pinia;
+  /** Every request sent to any worker, in order. */
+  readonly requests: WorkerRequest[];
+}
+
+/** A factory that records requests and runs them in-process. */
+export function recordingFactory(requests: WorkerRequest[], inner: WorkerFactory = inProcessWorkerFactory): WorkerFactory {
+  return () => {
+    const worker = inner();
+    const wrapped: WorkerLike = {
+      get onmessage() { return worker.onmessage; },
+      set onmessage(handler) { worker.onmessage = handler; },
+      get onerror() { return worker.onerror; },
+      set onerror(handler) { worker.onerror = handler; },
+      postMessage(message) {
+        requests.push(message);
+        worker.postMessage(message);
+      },
+      terminate() {
+        worker.terminate();
+      },
+    };
+    return wrapped;
+  };
+}
+
+/** A fresh Pinia, a fake host and in-process workers, set as the app's. */
+export function testEnvironment(seed: FakeHostSeed = {}): TestEnvironment {
+  const host = createFakeHost(seed);
+  setHostForTesting(host);
+  const requests: WorkerRequest[] = [];
+  setWorkerFactory(recordingFactory(requests));
+  const pinia = createPinia();
+  setActivePinia(pinia);
+  return { host, pinia, requests };
+}
+
+/** Waits (real time) until `condition` holds; fails with `what` after `timeoutMs`. */
+export async function until(condition: () => boolean, what: string, timeoutMs = 20_000): Promise<void> {
+  const start = Date.now();
+  while (!condition()) {
+    if (Date.now() - start > timeoutMs) throw new Error(`timed out waiting for ${what}`);
+    await new Promise((resolve) => setTimeout(resolve, 10));
+  }
+}
+
+/** A worker that takes requests and never answers (for component tests that must not analyse). */
+export const silentFactory: WorkerFactory = () => ({ onmessage: null, onerror: null, postMessage: () => undefined, terminate: () => undefined });

@@ -1,0 +1,115 @@
+/**
+ * The application shell with the fake host: the recovery offer at start, menu commands (open the
+ * demo, add a member, undo, analyse), files opened from outside with unsaved changes, and the
+ * caution always on screen.
+ */
+import { flushPromises, mount, type VueWrapper } from '@vue/test-utils';
+import { afterEach, describe, expect, it } from 'vitest';
+import { demoProjectSI } from '../../../core/project/demo.ts';
+import { serializeProject } from '../../../core/project/file.ts';
+import App from '../../../renderer/src/App.vue';
+import type { FakeHostSeed } from '../../../renderer/src/host/index.ts';
+import { useDocumentStore } from '../../../renderer/src/stores/document.ts';
+import { testEnvironment, until } from '../support.ts';
+
+let wrapper: VueWrapper | null = null;
+afterEach(() => {
+  wrapper?.unmount();
+  wrapper = null;
+});
+
+async function app(seed: FakeHostSeed = {}) {
+  const env = testEnvironment(seed);
+  wrapper = mount(App, { attachTo: document.body, global: { plugins: [env.pinia], stubs: { ChartCanvas: true, MemberWorkspace: true } } });
+  await flushPromises();
+  return { env, wrapper, documentStore: useDocumentStore() };
+}
+
+const memberCount = (w: VueWrapper) => w.findAll('[data-testid=member-list] li').length;
+
+describe('App', () => {
+  it('starts on the start screen with the caution in view', async () => {
+    const { wrapper } = await app();
+    expect(wrapper.find('[data-testid=start-screen]').exists()).toBe(true);
+    expect(wrapper.get('[data-testid=caution]').text()).toBe('Results are for review by a qualified engineer and defer to local codes and licensed practice.');
+  });
+
+  it('offers to restore work autosaved by a session that ended abnormally', async () => {
+    const recovery = { text: serializeProject(demoProjectSI()), savedAt: '2026-03-02T10:15:00.000Z', name: 'yard.hingeline' };
+    const { env, wrapper, documentStore } = await app({ recovery });
+    await until(() => wrapper.find('[data-testid=dialog]').exists(), 'the recovery dialog');
+    expect(wrapper.get('[data-testid=dialog]').text()).toContain('yard.hingeline');
+    await wrapper.get('[data-testid=dialog-restore]').trigger('click');
+    await until(() => documentStore.project !== null, 'the restored project');
+    await until(() => env.host.calls.some((c) => c.method === 'clearRecovery'), 'clearRecovery');
+    expect(documentStore.dirty).toBe(true);
+    expect(env.host.recovery).toBeNull();
+  });
+
+  it('discards the autosaved work when asked, and forgets it', async () => {
+    const recovery = { text: serializeProject(demoProjectSI()), savedAt: '2026-03-02T10:15:00.000Z', name: 'yard.hingeline' };
+    const { env, wrapper, documentStore } = await app({ recovery });
+    await until(() => wrapper.find('[data-testid=dialog]').exists(), 'the recovery dialog');
+    await wrapper.get('[data-testid=dialog-discard]').trigger('click');
+    await until(() => env.host.recovery === null, 'clearRecovery');
+    expect(documentStore.project).toBeNull();
+  });
+
+  it('follows menu commands: open the demo, add a member, undo', async () => {
+    const { env, wrapper, documentStore } = await app();
+    env.host.emitMenuCommand('open-demo');
+    await until(() => documentStore.project !== null, 'the demo');
+    await flushPromises();
+    expect(memberCount(wrapper)).toBe(10);
+    expect(wrapper.find('[data-testid=overview]').exists()).toBe(true);
+    env.host.emitMenuCommand('add-member');
+    await flushPromises();
+    expect(memberCount(wrapper)).toBe(11);
+    expect(env.host.documentState.dirty).toBe(true);
+    env.host.emitMenuCommand('undo');
+    await flushPromises();
+    expect(memberCount(wrapper)).toBe(10);
+    expect(env.host.documentState.dirty).toBe(false);
+  });
+
+  it('asks before a file opened from outside replaces unsaved changes', async () => {
+    const { env, wrapper, documentStore } = await app();
+    env.host.emitMenuCommand('open-demo');
+    await until(() => documentStore.project !== null, 'the demo');
+    env.host.emitMenuCommand('add-member');
+    await flushPromises();
+    env.host.emitOpenFile({ name: 'yard.hingeline', path: '/p/yard.hingeline', text: serializeProject(demoProjectSI()) });
+    await until(() => wrapper.find('[data-testid=dialog]').exists(), 'the unsaved-changes question');
+    expect(wrapper.get('[data-testid=dialog]').text()).toContain('Save the changes');
+    await wrapper.get('[data-testid=dialog-discard]').trigger('click');
+    await until(() => documentStore.fileName === 'yard.hingeline', 'the file to open');
+    await flushPromises();
+    expect(memberCount(wrapper)).toBe(4);
+  });
+
+  it('keeps the project when the user cancels at the unsaved-changes question', async () => {
+    const { env, wrapper, documentStore } = await app();
+    env.host.emitMenuCommand('open-demo');
+    await until(() => documentStore.project !== null, 'the demo');
+    env.host.emitMenuCommand('add-member');
+    await flushPromises();
+    env.host.emitMenuCommand('open-demo');
+    await until(() => wrapper.find('[data-testid=dialog]').exists(), 'the unsaved-changes question');
+    await wrapper.get('[data-testid=dialog-cancel]').trigger('click');
+    await flushPromises();
+    expect(memberCount(wrapper)).toBe(11);
+  });
+
+  it('switches the display units as an undoable edit', async () => {
+    const { env, wrapper, documentStore } = await app();
+    env.host.emitMenuCommand('open-demo');
+    await until(() => documentStore.project !== null, 'the demo');
+    await flushPromises();
+    await wrapper.get('[data-testid=units-si]').trigger('click');
+    expect(documentStore.project!.info.unitSystem).toBe('si');
+    expect(documentStore.undoLabel).toBe('Show SI units');
+    expect(wrapper.get('[data-testid=units-si]').attributes('aria-checked')).toBe('true');
+    documentStore.undo();
+    expect(documentStore.project!.info.unitSystem).toBe('us');
+  });
+});

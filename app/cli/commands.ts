@@ -107,10 +107,12 @@ export async function runAnalysis(io: Io, project: Project, memberIds: readonly 
 }
 
 async function analyze(io: Io, command: Extract<Command, { kind: 'analyze' }>): Promise<number> {
-  const { project } = await loadForAnalysis(io, command.file);
+  const loaded = await loadForAnalysis(io, command.file);
+  // With --units the sentences in the results (governing mode, notes) follow the chosen system too.
+  const project = command.units ? { ...loaded.project, info: { ...loaded.project.info, unitSystem: command.units } } : loaded.project;
   const ids = selectedMembers(project, command.members);
   const results = await runAnalysis(io, project, ids, command.jobs);
-  const system = command.units ?? project.info.unitSystem;
+  const system = project.info.unitSystem;
   if (command.format === 'json') {
     io.stdout(`${JSON.stringify(analysisJson(project, results, system, command.file), null, 2)}\n`);
   } else if (command.format === 'csv') {

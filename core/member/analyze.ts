@@ -160,7 +160,10 @@ export function analyzeMember(member: MemberDefinition, context: MemberContext):
   let displacementDuctility: number | null = null;
   if (capacity?.firstYield && capacity.ultimate) {
     firstYieldDeflection = capacity.firstYield.deflection;
-    yieldDeflection = nominalYieldDeflection(capacity.points);
+    // Park's secant through 75 % of the largest load: from the exactly solved state when there is one.
+    const sp = capacity.secantPoint;
+    const base = capacity.points[0]!;
+    yieldDeflection = sp && sp.deflection > base.deflection ? base.deflection + (sp.deflection - base.deflection) / 0.75 : nominalYieldDeflection(capacity.points);
     ultimateDeflection = capacity.ultimate.deflection;
     displacementDuctility = yieldDeflection && yieldDeflection > 0 ? ultimateDeflection / yieldDeflection : null;
   }

@@ -92,9 +92,49 @@ export function buildBeamModel(support: SupportType, span: number, zones: readon
 
 /** Signed curvature (sagging positive) and flexibility dφ/dM for a signed moment in a zone. */
 export function zoneCurvature(zone: ZoneResponse, moment: number, out: ValueAndSlope): ValueAndSlope {
-  if (moment >= zone.sagging.momentAtZero) return zone.sagging.integration(moment, out);
+  out.piece = -1;
+  if (moment >= zone.sagging.momentAtZero) {
+    zone.sagging.integration(moment, out);
+    if (out.piece !== undefined && out.piece >= 0) out.piece += 1; // sagging pieces ≥ 1
+    return out;
+  }
   zone.hogging.integration(-moment, out);
   out.value = -out.value;
+  if (out.piece !== undefined && out.piece >= 0) out.piece = -(out.piece + 10); // hogging pieces ≤ −10
+  return out;
+}
+
+/**
+ * Segment integrals from curvatures already known at both ends: when both ends lie on the same
+ * linear piece of the law (no knot between them) the exact integrals are closed forms; otherwise
+ * segmentIntegrals splits the segment at the knots.
+ */
+export function segmentIntegralsFromEnds(
+  zone: ZoneResponse,
+  ma: number,
+  mb: number,
+  a: ValueAndSlope,
+  b: ValueAndSlope,
+  secant: boolean,
+  out: SegmentIntegrals,
+): SegmentIntegrals {
+  // Known pieces are ≥ 1 (sagging) or ≤ −10 (hogging); −1 … −9 mean unknown or off the table.
+  const pa0 = a.piece ?? -1;
+  const pb0 = b.piece ?? -1;
+  const sagging = pa0 >= 1 && pb0 >= 1;
+  const hogging = pa0 <= -10 && pb0 <= -10;
+  if (secant || !(sagging || hogging)) return segmentIntegrals(zone, ma, mb, secant, out);
+  if (pa0 !== pb0) return segmentAcrossKnots(zone, ma, mb, a, b, sagging, out);
+  const pa = a.value;
+  const pb = b.value;
+  out.phiA = pa;
+  out.phiB = pb;
+  out.i0 = (pa + pb) / 2;
+  out.i1 = (pa + 2 * pb) / 6;
+  const f = mb !== ma ? (pb - pa) / (mb - ma) : a.slope;
+  out.j00 = f / 3;
+  out.j11 = f / 3;
+  out.j01 = f / 6;
   return out;
 }
 
@@ -172,5 +212,65 @@ export function segmentIntegrals(zone: ZoneResponse, ma: number, mb: number, sec
     phi0 = phi1;
   }
   out.phiB = phi0;
+  return out;
+}
+
+const pieceT: number[] = [];
+const piecePhi: number[] = [];
+
+/**
+ * Exact segment integrals when both ends lie on the same branch of the law but on different
+ * pieces: the knots between them and their curvatures are read straight from the response's
+ * tables (no searching), then each linear piece is integrated in closed form.
+ */
+function segmentAcrossKnots(zone: ZoneResponse, ma: number, mb: number, a: ValueAndSlope, b: ValueAndSlope, sagging: boolean, out: SegmentIntegrals): SegmentIntegrals {
+  const response = sagging ? zone.sagging : zone.hogging;
+  const sign = sagging ? 1 : -1;
+  const knots = response.knotMoments;
+  const curvatures = response.knotCurvatures;
+  const count = knots.length;
+  // Table index of each end: piece − 1 (sagging) or −piece − 10 (hogging); the extension is past
+  // the end. (No closure here: this runs for most segments of every Newton iteration.)
+  let ia = sagging ? a.piece! - 1 : -a.piece! - 10;
+  let ib = sagging ? b.piece! - 1 : -b.piece! - 10;
+  if (ia >= 1_000_000) ia = count;
+  if (ib >= 1_000_000) ib = count;
+  const dm = mb - ma;
+  pieceT.length = 0;
+  piecePhi.length = 0;
+  pieceT.push(0);
+  piecePhi.push(a.value);
+  if (ib > ia) for (let k = ia + 1; k <= Math.min(ib, count - 1); k++) {
+    pieceT.push((sign * knots[k]! - ma) / dm);
+    piecePhi.push(sign * curvatures[k]!);
+  }
+  else for (let k = ia; k > ib && k >= 0; k--) {
+    if (k >= count) continue;
+    pieceT.push((sign * knots[k]! - ma) / dm);
+    piecePhi.push(sign * curvatures[k]!);
+  }
+  pieceT.push(1);
+  piecePhi.push(b.value);
+  out.i0 = 0;
+  out.i1 = 0;
+  out.j00 = 0;
+  out.j01 = 0;
+  out.j11 = 0;
+  for (let p = 0; p + 1 < pieceT.length; p++) {
+    const t0 = pieceT[p]!;
+    const t1 = pieceT[p + 1]!;
+    const span = t1 - t0;
+    if (!(span > 0)) continue;
+    const phi0 = piecePhi[p]!;
+    const phi1 = piecePhi[p + 1]!;
+    out.i0 += (span * (phi0 + phi1)) / 2;
+    out.i1 += (span * (phi0 * (2 * t0 + t1) + phi1 * (t0 + 2 * t1))) / 6;
+    const f = (phi1 - phi0) / (span * dm);
+    out.j00 += (f * ((1 - t0) ** 3 - (1 - t1) ** 3)) / 3;
+    out.j11 += (f * (t1 ** 3 - t0 ** 3)) / 3;
+    out.j01 += f * ((t1 * t1 - t0 * t0) / 2 - (t1 ** 3 - t0 ** 3) / 3);
+  }
+  out.phiA = a.value;
+  out.phiB = b.value;
   return out;
 }

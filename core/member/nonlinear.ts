@@ -20,7 +20,7 @@
  */
 import { solveLinear } from '../numeric/linear.ts';
 import type { BeamModel, ZoneResponse } from './beam-model.ts';
-import { segmentIntegrals, type SegmentIntegrals } from './beam-model.ts';
+import { segmentIntegrals, segmentIntegralsFromEnds, zoneCurvature, type SegmentIntegrals } from './beam-model.ts';
 import { hingeLength, type HingeLengthInput } from './hinge-length.ts';
 import type { CapacitySettings } from './definition.ts';
 import type { LoadDeflectionPoint, MemberEvent, PlasticHinge, SpanDistribution } from './results.ts';
@@ -89,9 +89,11 @@ class Equations {
   readonly n: number;
   readonly moment: Float64Array;
   private readonly seg: SegmentIntegrals = { i0: 0, i1: 0, j00: 0, j01: 0, j11: 0, phiA: 0, phiB: 0 };
+  private readonly ends: ValueAndSlope[];
   constructor(readonly beam: BeamModel, readonly loads: LoadingFields) {
     this.n = beam.x.length;
     this.moment = new Float64Array(this.n);
+    this.ends = Array.from({ length: this.n }, () => ({ value: 0, slope: 0, piece: -1 }));
   }
 
   /** Fills moments for redundants X and λ. */
@@ -137,10 +139,16 @@ class Equations {
       // Compatibility ∫ φ·m_i dx, integrated exactly for the piecewise-linear curvature law with the
       // moment linear between stations (segmentIntegrals splits each segment at the law's knots).
       const seg = this.seg;
+      // Curvature at every station once (each ends one segment and starts the next).
+      const ends = this.ends;
+      for (let i = 0; i < this.n; i++) {
+        const e = ends[i]!;
+        zoneCurvature(beam.zones[beam.stationZone[i]!]!, M[i]!, e);
+      }
       for (let k = 0; k < this.n - 1; k++) {
         const h = x[k + 1]! - x[k]!;
         if (h <= 0) continue;
-        segmentIntegrals(beam.zones[beam.segmentZone[k]!]!, M[k]!, M[k + 1]!, secant, seg);
+        segmentIntegralsFromEnds(beam.zones[beam.segmentZone[k]!]!, M[k]!, M[k + 1]!, ends[k]!, ends[k + 1]!, secant, seg);
         const w0 = seg.i0 - seg.i1;
         const w1 = seg.i1;
         const magnitude = h * 0.5 * (Math.abs(seg.phiA) + Math.abs(seg.phiB));
@@ -347,12 +355,17 @@ export function deflectionShape(beam: BeamModel, moment: Float64Array, hinges: r
   let slope = 0;
   let jump = 0;
   const seg: SegmentIntegrals = { i0: 0, i1: 0, j00: 0, j01: 0, j11: 0, phiA: 0, phiB: 0 };
+  let endA: ValueAndSlope = { value: 0, slope: 0, piece: -1 };
+  let endB: ValueAndSlope = { value: 0, slope: 0, piece: -1 };
+  zoneCurvature(beam.zones[beam.stationZone[0]!]!, moment[0]!, endB);
   for (let k = 0; k < n - 1; k++) {
     const h = x[k + 1]! - x[k]!;
     let dv = slope * h;
     let dSlope = 0;
+    [endA, endB] = [endB, endA];
+    zoneCurvature(beam.zones[beam.stationZone[k + 1]!]!, moment[k + 1]!, endB);
     if (h > 0) {
-      segmentIntegrals(beam.zones[beam.segmentZone[k]!]!, moment[k]!, moment[k + 1]!, false, seg);
+      segmentIntegralsFromEnds(beam.zones[beam.segmentZone[k]!]!, moment[k]!, moment[k + 1]!, endA, endB, false, seg);
       if (curvatureOut) {
         curvatureOut[k] = seg.phiA;
         curvatureOut[k + 1] = seg.phiB;
@@ -390,6 +403,11 @@ export interface CapacityCurve {
   readonly peak: { readonly lambda: number; readonly deflection: number };
   readonly ultimate: { readonly lambda: number; readonly deflection: number } | null;
   readonly failureCause: string;
+  /**
+   * The state at 75 % of the largest load, solved exactly (not read off the sampled curve), for the
+   * nominal yield deflection; null when that load lies beyond a softening hinge.
+   */
+  readonly secantPoint: { readonly loadFactor: number; readonly totalLoad: number; readonly deflection: number } | null;
 }
 
 interface Snapshot {
@@ -438,13 +456,14 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
   const retrack = (): boolean => {
     const before = hinges.map((h) => h.rotationPosition);
     trackSpanHinges(beam, eq.moment, hinges);
-    return hinges.some((h, i) => Math.abs(h.rotationPosition - before[i]!) > 1e-6 * span);
+    // A shift of a hundred-thousandth of the span does not change any result worth showing.
+    return hinges.some((h, i) => Math.abs(h.rotationPosition - before[i]!) > 1e-5 * span);
   };
   const solveAt = (lambda: number, guess: Snapshot): Snapshot | undefined => {
     const free = hinges.map((h, i) => (h.phase === 'softening' ? i : -1)).filter((i) => i >= 0);
     let start = { redundants: guess.redundants, lambda, rotations: free.map((i) => guess.rotations.get(i) ?? hinges[i]!.rotation) };
     let res = newton(eq, hinges, free, false, start);
-    for (let pass = 0; pass < 4 && res.converged && retrack(); pass++) {
+    for (let pass = 0; pass < 2 && res.converged && retrack(); pass++) {
       start = { redundants: res.redundants, lambda, rotations: res.rotations };
       res = newton(eq, hinges, free, false, start);
     }
@@ -490,7 +509,9 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
     }
     return deflectedValue;
   };
+  const loadControlStates: Snapshot[] = [];
   const record = (s: Snapshot, stage: 'integration' | 'mechanism') => {
+    if (stage === 'integration') loadControlStates.push(s);
     points.push({ loadFactor: s.lambda, totalLoad: loads.constantTotal + s.lambda * loads.patternTotal, deflection: controlDeflection(s), stage });
   };
   const distribution = (label: string, s: Snapshot): SpanDistribution => {
@@ -735,7 +756,7 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
       finished = true;
     }
   };
-  let step = lambdaRef / 24;
+  let step = lambdaRef / 20;
   let guard = 0;
   let previousState: Snapshot | undefined;
   while (!mechanism && !finished && guard++ < 4000) {
@@ -783,7 +804,7 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
       previousState = state;
       state = next;
       record(state, 'integration');
-      step = Math.min(step * 1.25, lambdaRef / 16);
+      step = Math.min(step * 1.25, lambdaRef / 12);
       continue;
     }
     previousState = undefined;
@@ -822,7 +843,7 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
     );
     const freeList = () => hinges.map((h, i) => (h.phase === 'softening' && i !== controlled ? i : -1)).filter((i) => i >= 0);
     const theta0 = hc.rotation;
-    const steps = 24;
+    const steps = 16;
     const dTheta = (hc.capacity - theta0) / steps;
     let current = state;
     const solveTheta = (theta: number, from: Snapshot): Snapshot | undefined => {
@@ -830,7 +851,7 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
       hingeVersion++;
       const free = freeList();
       let res = newton(eq, hinges, free, true, { redundants: from.redundants, lambda: from.lambda, rotations: free.map((i) => from.rotations.get(i) ?? hinges[i]!.rotation) }, controlled);
-      for (let pass = 0; pass < 4 && res.converged && retrack(); pass++) {
+      for (let pass = 0; pass < 2 && res.converged && retrack(); pass++) {
         res = newton(eq, hinges, free, true, { redundants: res.redundants, lambda: res.lambda, rotations: res.rotations }, controlled);
       }
       hingeVersion++;
@@ -867,20 +888,34 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
       let event: { ev: Stage; at: Snapshot; theta: number } | undefined;
       for (const ev of stageEvents()) {
         if (!(ev.g(current) < 0 && ev.g(next) >= 0)) continue;
+        // Regula falsi with the Illinois modification on the controlled rotation, to 1e-6 of it.
         let lo = theta;
         let hi = target;
         let loS = current;
         let hiS = next;
-        for (let it = 0; it < 40 && hi - lo > 1e-7 * hi; it++) {
-          const mid = 0.5 * (lo + hi);
+        let gLo = ev.g(current);
+        let gHi = ev.g(next);
+        let side = 0;
+        for (let it = 0; it < 40 && hi - lo > 1e-6 * hi; it++) {
+          let t = gLo < 0 && gHi > 0 ? -gLo / (gHi - gLo) : 0.5;
+          if (!(t > 0.001 && t < 0.999)) t = 0.5;
+          const mid = lo + t * (hi - lo);
           const sMid = solveTheta(mid, loS);
           if (!sMid) break;
-          if (ev.g(sMid) >= 0) {
+          const gMid = ev.g(sMid);
+          if (gMid >= 0) {
             hi = mid;
             hiS = sMid;
+            gHi = gMid;
+            if (side === 1) gLo /= 2;
+            side = 1;
+            if (gMid < 1e-5) break;
           } else {
             lo = mid;
             loS = sMid;
+            gLo = gMid;
+            if (side === -1) gHi /= 2;
+            side = -1;
           }
         }
         if (!event || hi < event.theta) event = { ev, at: hiS, theta: hi };
@@ -949,7 +984,42 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
     peak,
     ultimate,
     failureCause,
+    secantPoint: secantPoint(),
   };
+
+  /**
+   * Deflection at 75 % of the largest load, solved at that load: every hinge active then was still
+   * hardening (its rotation a function of its moment), so the state is path-independent and can be
+   * re-solved with the hinges as they are now, set back to hardening.
+   */
+  function secantPoint(): CapacityCurve['secantPoint'] {
+    if (points.length < 2 || loads.patternTotal <= 0) return null;
+    const pMax = Math.max(...points.map((p) => p.totalLoad));
+    const base = points[0]!.totalLoad;
+    const target = base + 0.75 * (pMax - base);
+    const lambda = (target - loads.constantTotal) / loads.patternTotal;
+    const firstSoftening = events.find((e) => e.kind === 'hinge' || e.kind === 'mechanism' || e.kind === 'peak');
+    if (!(lambda > 0) || (firstSoftening && firstSoftening.loadFactor <= lambda)) return null;
+    const guess = loadControlStates.reduce<Snapshot | undefined>((best, st) => (st.lambda <= lambda && (!best || st.lambda > best.lambda) ? st : best), undefined);
+    if (!guess) return null;
+    const saved = hinges.map((h) => ({ phase: h.phase, rotation: h.rotation, station: h.station, zone: h.zone, position: h.rotationPosition }));
+    hinges.forEach((h) => {
+      h.phase = 'hardening';
+    });
+    hingeVersion++;
+    const solved = solveAt(lambda, { lambda: guess.lambda, redundants: guess.redundants, rotations: new Map() });
+    const deflection = solved ? deflectionAt(solved)[controlIndex]! : null;
+    hinges.forEach((h, i) => {
+      const k = saved[i]!;
+      h.phase = k.phase;
+      h.rotation = k.rotation;
+      h.station = k.station;
+      h.zone = k.zone;
+      h.rotationPosition = k.position;
+    });
+    hingeVersion++;
+    return deflection === null ? null : { loadFactor: lambda, totalLoad: target, deflection };
+  }
 
   /** Why a section outside the hinges reached its peak, in words. */
   function overstressWords(o: { station: number; sign: 1 | -1 }): string {
@@ -991,6 +1061,7 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
       peak: { lambda: 0, deflection: 0 },
       ultimate: null,
       failureCause: reason,
+      secantPoint: null,
     };
   }
 }

@@ -43,6 +43,13 @@ export interface SectionResponse {
    * exactly along the span whatever the spacing of the stations. Empty for smooth laws.
    */
   knots(lo: number, hi: number, out: number[]): void;
+  /**
+   * The knots themselves and the integration curvature there (ascending). A table piece index p
+   * (ValueAndSlope.piece) lies between knotMoments[p] and knotMoments[p + 1]; the elastic extension
+   * beyond M′y lies after the last knot.
+   */
+  readonly knotMoments: readonly number[];
+  readonly knotCurvatures: readonly number[];
   /** plasticCurvature and its derivative in one table search. */
   plastic(m: number, out: ValueAndSlope): ValueAndSlope;
   /** Post-peak branch: plastic curvature (φ − φe) and moment pairs from the peak to ultimate, ascending in plastic curvature. */
@@ -52,6 +59,11 @@ export interface SectionResponse {
 export interface ValueAndSlope {
   value: number;
   slope: number;
+  /**
+   * Which linear piece of the law the value came from (set by table lookups; −1 when unknown).
+   * Two moments on the same piece have no knot between them, so a segment needs no splitting.
+   */
+  piece?: number;
 }
 
 /** Linear interpolation with the segment slope (0 outside the table, where values clamp). */
@@ -60,11 +72,13 @@ export function interpolateWithSlope(xs: readonly number[], ys: readonly number[
   if (n === 0) {
     out.value = 0;
     out.slope = 0;
+    out.piece = -1;
     return out;
   }
   if (x <= xs[0]! || x >= xs[n - 1]!) {
     out.value = x <= xs[0]! ? ys[0]! : ys[n - 1]!;
     out.slope = 0;
+    out.piece = x <= xs[0]! ? -2 : -3;
     return out;
   }
   let lo = 0;
@@ -78,6 +92,7 @@ export function interpolateWithSlope(xs: readonly number[], ys: readonly number[
   const x1 = xs[hi]!;
   out.slope = x1 > x0 ? (ys[hi]! - ys[lo]!) / (x1 - x0) : 0;
   out.value = ys[lo]! + out.slope * (x - x0);
+  out.piece = lo;
   return out;
 }
 
@@ -172,6 +187,7 @@ export function sectionResponse(curve: MomentCurvatureResult): SectionResponse |
     if (m < m0) {
       out.value = envPhi[0]! + (m - m0) * slope0;
       out.slope = slope0;
+      out.piece = -4;
       return out;
     }
     return interpolateWithSlope(envM, envPhi, m, out);
@@ -180,6 +196,7 @@ export function sectionResponse(curve: MomentCurvatureResult): SectionResponse |
     if (my !== null && m > my) {
       out.value = elasticSlope * m;
       out.slope = elasticSlope;
+      out.piece = 1_000_000;
       return out;
     }
     return actualWithSlope(m, out);
@@ -208,9 +225,12 @@ export function sectionResponse(curve: MomentCurvatureResult): SectionResponse |
     }
     for (let i = a; i < knotList.length && knotList[i]! < hi; i++) out.push(knotList[i]!);
   };
+  const knotCurvatures = knotList.map((m, i) => (my !== null && i === knotList.length - 1 ? phiY! : envPhi[i]!));
   return {
     integration,
     knots,
+    knotMoments: knotList,
+    knotCurvatures,
     plastic: plasticWithSlope,
     momentAtZero: m0,
     crackingMoment: curve.keyPoints.cracking?.moment ?? null,
@@ -253,9 +273,12 @@ export function plainConcreteResponse(stiffness: number, crackingMoment: number)
     integrationCurvature: lin,
     plasticCurvature: () => 0,
     knots: () => undefined,
+    knotMoments: [],
+    knotCurvatures: [],
     integration: (m, out) => {
       out.value = m / stiffness;
       out.slope = 1 / stiffness;
+      out.piece = 0;
       return out;
     },
     plastic: (_m, out) => {

@@ -83,6 +83,8 @@ function functionResponse(curvature: (m: number) => number, flexibility: (m: num
     integrationCurvature: curvature,
     plasticCurvature: () => 0,
     knots: () => undefined,
+    knotMoments: [],
+    knotCurvatures: [],
     integration: (m: number, out: ValueAndSlope) => {
       out.value = curvature(m);
       out.slope = flexibility(m);

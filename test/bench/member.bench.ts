@@ -1,7 +1,7 @@
 /**
  * Load–deflection speed (issue 3): a fixed–fixed beam with two sections (support zones with a
  * different section), full curve to ultimate (50+ load levels). Sections are analysed once outside
- * the timed loop. A fixed arithmetic workload is measured in the same run as a yardstick, so the
+ * the timed loop; stations as the project default (AnalysisSettings.stations). A fixed arithmetic workload is measured in the same run as a yardstick, so the
  * figure can be read as a ratio on a shared, noisy machine.
  */
 import { bench, describe } from 'vitest';
@@ -23,7 +23,7 @@ const zones = [
   const s = section(z.id)!;
   return zoneResponse(z.id, z.from, z.to, s.model!, s.elastic!, s.curves);
 });
-const beam = buildBeamModel('fixed-fixed', span, zones, [], 200);
+const beam = buildBeamModel('fixed-fixed', span, zones, [], project.settings.stations);
 const pattern = Float64Array.from(beam.x, (x) => releasedMoment('fixed-fixed', span, [{ kind: 'uniform', w: 30, from: 0, to: span }], x));
 const loading = { constant: new Float64Array(beam.x.length), pattern, constantTotal: 0, patternTotal: 30 * span };
 const settings = { pattern: 'proportional' as const, hingeLengthMethod: 'priestley-2007' as const };

@@ -35,7 +35,7 @@ export interface MomentCurvatureOptions {
   readonly bilinearMethod?: 'priestley-2007' | 'equal-energy';
   /** Safety cap on the number of curvature steps (default 600). */
   readonly maxSteps?: number;
-  /** Post-yield step as a fraction of the current curvature (default 0.08). */
+  /** Post-yield step as a fraction of the current curvature (default 0.10). */
   readonly postYieldGrowth?: number;
 }
 
@@ -350,8 +350,53 @@ export function momentCurvature(model: SectionModel, direction: BendingDirection
     status = { kind: 'not-converged', atCurvature: previous.kappa, message: `No limit state was reached within ${maxSteps} curvature steps (φ = ${previous.kappa.toExponential(3)} 1/mm).` };
   }
 
-  // --- peak: largest moment, refined between its neighbours ------------------------------------------
+  // --- refine where the curve bends: the member engine interpolates the curve linearly between
+  // points, so a point is added midway wherever the curve departs from the chord by more than
+  // 0.05 % of the largest moment (common practice, no source) ---------------------------------------
   snapshots.sort((p, q) => p.kappa - q.kappa);
+  {
+    let largest = 0;
+    for (const snap of snapshots) largest = Math.max(largest, Math.abs(snap.eq.moment));
+    const tolerance = 5e-4 * largest;
+    const refined: Snapshot[] = [snapshots[0]!];
+    const refine = (a: Snapshot, b: Snapshot, depth: number) => {
+      if (depth > 0 && b.kappa - a.kappa > 1e-9 * b.kappa) {
+        lastGuess = 0.5 * (a.eq.referenceStrain + b.eq.referenceStrain);
+        const mid = solve(0.5 * (a.kappa + b.kappa));
+        if (typeof mid !== 'string' && Math.abs(mid.moment - 0.5 * (a.eq.moment + b.eq.moment)) > tolerance) {
+          const m: Snapshot = { kappa: 0.5 * (a.kappa + b.kappa), eq: mid };
+          refine(a, m, depth - 1);
+          refined.push(m);
+          refine(m, b, depth - 1);
+          return;
+        }
+      }
+    };
+    // How far a point lies off the chord of its neighbours: a cheap estimate of how much the curve
+    // bends there, used to skip probing stretches that are plainly straight.
+    const bend = (i: number) => {
+      if (i <= 0 || i >= snapshots.length - 1) return Infinity;
+      const p = snapshots[i - 1]!;
+      const q = snapshots[i]!;
+      const r = snapshots[i + 1]!;
+      if (!(r.kappa > p.kappa)) return Infinity;
+      const chord = p.eq.moment + ((r.eq.moment - p.eq.moment) * (q.kappa - p.kappa)) / (r.kappa - p.kappa);
+      return Math.abs(q.eq.moment - chord);
+    };
+    for (let i = 1; i < snapshots.length; i++) {
+      const a = snapshots[i - 1]!;
+      const b = snapshots[i]!;
+      // A segment's midpoint departs from its chord by about a quarter of its ends' bend.
+      const straight = Math.max(bend(i - 1), bend(i)) < tolerance;
+      // Only between points of one branch: across a snap the chord is meaningless.
+      if (!a.jumped && !b.jumped && !straight) refine(a, b, 5);
+      refined.push(b);
+    }
+    snapshots.length = 0;
+    snapshots.push(...refined);
+  }
+
+  // --- peak: largest moment, refined between its neighbours ------------------------------------------
   let iMax = 0;
   for (let i = 1; i < snapshots.length; i++) if (sign * snapshots[i]!.eq.moment > sign * snapshots[iMax]!.eq.moment) iMax = i;
   if (iMax > 0 && iMax < snapshots.length - 1) {

@@ -9,7 +9,8 @@ import { formatQuantity } from '../units/format.ts';
 import type { ChartPoint, ChartSpec, MarkerShape, MarkerSpec, ReferenceLineSpec, SeriesSpec, UnitsInput } from './types.ts';
 import { axisFor, axisScale, display, finite, resolveUnits, unitFor, unitText } from './units.ts';
 
-const EVENT_WORDS: Readonly<Record<MemberEventKind, string>> = {
+/** Short names of the load–deflection events, shared by the chart and the report's event table. */
+export const EVENT_WORDS: Readonly<Record<MemberEventKind, string>> = {
   cracking: 'cracking',
   'first-yield': 'first yield',
   hinge: 'hinge at peak moment',

@@ -20,7 +20,7 @@
  */
 import { solveLinear } from '../numeric/linear.ts';
 import type { BeamModel, ZoneResponse } from './beam-model.ts';
-import { segmentIntegrals, segmentIntegralsFromEnds, zoneCurvature, type SegmentIntegrals } from './beam-model.ts';
+import { segmentIntegralsFromEnds, zoneCurvature, type SegmentIntegrals } from './beam-model.ts';
 import { hingeLength, type HingeLengthInput } from './hinge-length.ts';
 import type { CapacitySettings } from './definition.ts';
 import type { LoadDeflectionPoint, MemberEvent, PlasticHinge, SpanDistribution } from './results.ts';
@@ -745,11 +745,7 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
       activate(ev.site!, state);
       if (wasFirst) distributions.push(distribution('first yield', state));
     } else if (ev.kind === 'peak') {
-      const h = hinges[ev.hinge!]!;
-      h.phase = 'softening';
-      hingeVersion++;
-      state.rotations.set(ev.hinge!, h.rotation);
-      events.push({ kind: 'hinge', loadFactor: state.lambda, deflection: d, position: beam.x[h.station]!, description: `hinge at the ${SITE_WORDS[h.site]} reaches the peak moment of its section (θp = ${(h.rotation * 1000).toFixed(2)} mrad)` });
+      soften(ev.hinge!, state, d);
       if (hinges.filter((x) => x.phase === 'softening').length > r) mechanism = true;
     } else {
       finishUltimate(ev.kind === 'capacity' ? hinges[ev.hinge!]! : undefined, state);
@@ -927,12 +923,8 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
         record(current, 'mechanism');
         state = current;
         if (event.ev.kind === 'peak') {
-          const h = hinges[event.ev.hinge!]!;
           restore(current);
-          h.phase = 'softening';
-          hingeVersion++;
-          current.rotations.set(event.ev.hinge!, h.rotation);
-          events.push({ kind: 'hinge', loadFactor: current.lambda, deflection: controlDeflection(current), position: beam.x[h.station]!, description: `hinge at the ${SITE_WORDS[h.site]} reaches the peak moment of its section (θp = ${(h.rotation * 1000).toFixed(2)} mrad)` });
+          soften(event.ev.hinge!, current, controlDeflection(current));
           continue;
         }
         hc.rotation = event.theta;
@@ -1019,6 +1011,15 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
     });
     hingeVersion++;
     return deflection === null ? null : { loadFactor: lambda, totalLoad: target, deflection };
+  }
+
+  /** A hardening hinge reaches its section's peak moment: from now on its rotation is an unknown. */
+  function soften(index: number, at: Snapshot, deflection: number): void {
+    const h = hinges[index]!;
+    h.phase = 'softening';
+    hingeVersion++;
+    at.rotations.set(index, h.rotation);
+    events.push({ kind: 'hinge', loadFactor: at.lambda, deflection, position: beam.x[h.station]!, description: `hinge at the ${SITE_WORDS[h.site]} reaches the peak moment of its section (θp = ${(h.rotation * 1000).toFixed(2)} mrad)` });
   }
 
   /** Why a section outside the hinges reached its peak, in words. */

@@ -98,20 +98,7 @@ export function interpolateWithSlope(xs: readonly number[], ys: readonly number[
 
 /** Linear interpolation in a table ascending in `xs`; clamps outside. */
 export function interpolate(xs: readonly number[], ys: readonly number[], x: number): number {
-  const n = xs.length;
-  if (n === 0) return 0;
-  if (x <= xs[0]!) return ys[0]!;
-  if (x >= xs[n - 1]!) return ys[n - 1]!;
-  let lo = 0;
-  let hi = n - 1;
-  while (hi - lo > 1) {
-    const mid = (lo + hi) >> 1;
-    if (xs[mid]! <= x) lo = mid;
-    else hi = mid;
-  }
-  const x0 = xs[lo]!;
-  const x1 = xs[hi]!;
-  return x1 > x0 ? ys[lo]! + ((ys[hi]! - ys[lo]!) * (x - x0)) / (x1 - x0) : ys[hi]!;
+  return interpolateWithSlope(xs, ys, x, { value: 0, slope: 0 }).value;
 }
 
 /** Relative width of the moment band over which a load-controlled jump in curvature is spread. */

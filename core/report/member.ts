@@ -7,7 +7,8 @@
  */
 import type { DeflectionLimitCase, LoadFactors, MemberLoad } from '../member/definition.ts';
 import { defaultStrengthFactors } from '../member/analyze.ts';
-import type { MemberEventKind, MemberResult } from '../member/results.ts';
+import type { MemberResult } from '../member/results.ts';
+import { EVENT_WORDS } from '../charts/load-deflection.ts';
 import { drawingWithFacts, figureNode, pageOf, SUPPORT_WORDS, type WriteContext } from './context.ts';
 import type { MemberPlan } from './figures.ts';
 import { CAUTION_TEXT, COLOURS, bullets, cautionBox, dataTable, factsTable, h2, h3, heading, keepTogether, small, verdict, STYLES } from './layout.ts';
@@ -27,14 +28,6 @@ const LIMIT_WORDS: Readonly<Record<DeflectionLimitCase, string>> = {
   custom: 'limit set by the engineer',
 };
 
-const EVENT_WORDS: Readonly<Record<MemberEventKind, string>> = {
-  cracking: 'cracking',
-  'first-yield': 'first yield',
-  hinge: 'hinge at peak moment',
-  peak: 'peak load',
-  mechanism: 'mechanism',
-  ultimate: 'ultimate',
-};
 
 export const STATUS_WORDS: Readonly<Record<MemberResult['status'], { text: string; color: string }>> = {
   ok: { text: 'OK', color: COLOURS.pass },

@@ -111,12 +111,7 @@ export function sectionResultants(model: SectionModel, eps0: number, phi: number
   const yg = model.centroidDepth;
   for (const element of model.elements) {
     const eps = eps0 + phi * (yg - element.depth);
-    let stress = element.material.stress(eps - element.initialStrain);
-    if (element.displacedConcrete) {
-      const concrete = element.displacedConcrete.stress(eps);
-      if (concrete > 0) stress -= concrete;
-    }
-    add(stress * element.area, element.depth);
+    add(elementStress(element, eps) * element.area, element.depth);
   }
   return { compression: c, tension: t, compressionDepth: c > 0 ? cy / c : 0, tensionDepth: t > 0 ? ty / t : 0 };
 }
@@ -153,6 +148,22 @@ function forEachConcretePoint(model: SectionModel, eps0: number, phi: number, vi
       }
     }
   }
+}
+
+/**
+ * Stress carried by a discrete element at the substrate strain `eps` (MPa, compression positive),
+ * net of the concrete its area displaces. Displaced concrete is removed where it would be in
+ * compression only: in tension it is cracked (or negligible), and removing a brittle tensile stress
+ * would put a jump into the equilibrium equation. Testing the concrete stress rather than the strain
+ * keeps this continuous when shrinkage shifts the law (sustained load).
+ */
+export function elementStress(element: SectionModel['elements'][number], eps: number): number {
+  let stress = element.material.stress(eps - element.initialStrain);
+  if (element.displacedConcrete) {
+    const concrete = element.displacedConcrete.stress(eps);
+    if (concrete > 0) stress -= concrete;
+  }
+  return stress;
 }
 
 export function sectionForces(model: SectionModel, eps0: number, phi: number, out: SectionForces = { axial: 0, moment: 0, magnitude: 0 }): SectionForces {
@@ -216,15 +227,7 @@ export function sectionForces(model: SectionModel, eps0: number, phi: number, ou
   }
   for (const element of model.elements) {
     const eps = eps0 + phi * (yg - element.depth);
-    let stress = element.material.stress(eps - element.initialStrain);
-    // Displaced concrete is removed where it would be in compression only: in tension it is
-    // cracked (or negligible), and removing a brittle tensile stress would put a jump into the
-    // equilibrium equation. Testing the stress rather than the strain keeps this continuous when
-    // shrinkage shifts the law (sustained load).
-    if (element.displacedConcrete) {
-      const concrete = element.displacedConcrete.stress(eps);
-      if (concrete > 0) stress -= concrete;
-    }
+    const stress = elementStress(element, eps);
     const force = stress * element.area;
     axial += force;
     magnitude += force < 0 ? -force : force;

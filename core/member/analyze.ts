@@ -144,7 +144,7 @@ export function analyzeMember(member: MemberDefinition, context: MemberContext):
     patternTotal: totalLoad(patternLoads),
   };
   const capacity = totalLoad(patternLoads) > 0
-    ? capacityCurve(beam, loading, member.capacity, controlAt)
+    ? capacityCurve(beam, loading, member.capacity, controlAt, context.text)
     : null;
   if (!capacity) warnings.push('The load pattern for the load–deflection curve is empty (no live load for a live-only pattern): no capacity curve.');
   const spanHinge = capacity?.hinges.find((h) => h.direction === 'sagging');

@@ -8,6 +8,7 @@
  * since no bars are anchored there (common practice, no source).
  */
 import type { HingeLengthMethod } from './definition.ts';
+import type { QuantityText } from '../units/text.ts';
 
 export interface HingeLengthInput {
   readonly method: HingeLengthMethod;
@@ -23,6 +24,8 @@ export interface HingeLengthInput {
   readonly atSupport: boolean;
   /** User value for `method: 'user'`, mm. */
   readonly userLength?: number;
+  /** Formats the result in the project's display units after the formula (which keeps its published mm/MPa form). */
+  readonly text?: QuantityText;
 }
 
 export interface HingeLength {
@@ -62,6 +65,13 @@ export function corley1966(dMm: number, zMm: number): number {
 
 /** Hinge length for a member hinge, with the substituted formula. */
 export function hingeLength(input: HingeLengthInput): HingeLength {
+  const result = hingeLengthSI(input);
+  // The expressions are published in mm and MPa; a US project also gets the result in its units.
+  if (input.text && input.text.system === 'US') return { ...result, formula: `${result.formula}; Lp = ${input.text.section(result.length)}` };
+  return result;
+}
+
+function hingeLengthSI(input: HingeLengthInput): HingeLength {
   const { method, effectiveDepth: d, shearSpans, barDiameter: db, yieldStress: fy, ultimateStress: fu, atSupport } = input;
   const zSum = shearSpans.reduce((s, z) => s + Math.max(z, 0), 0);
   const zText = shearSpans.map(round).join(' + ');

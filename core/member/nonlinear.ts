@@ -19,6 +19,7 @@
  * Internal units: mm, N·mm, 1/mm, rad.
  */
 import { solveLinear } from '../numeric/linear.ts';
+import type { QuantityText } from '../units/text.ts';
 import type { BeamModel, ZoneResponse } from './beam-model.ts';
 import { segmentIntegralsFromEnds, zoneCurvature, type SegmentIntegrals } from './beam-model.ts';
 import { hingeLength, type HingeLengthInput } from './hinge-length.ts';
@@ -434,7 +435,7 @@ export function describePosition(x: number, span: number, support: BeamModel['su
  * @param loads   moment fields of the constant loads and of the pattern
  * @param capacity hinge length method etc.
  */
-export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: CapacitySettings, controlAt?: number): CapacityCurve {
+export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: CapacitySettings, controlAt?: number, text?: QuantityText): CapacityCurve {
   const eq = new Equations(beam, loads);
   const n = beam.x.length;
   const r = beam.redundants.length;
@@ -693,6 +694,7 @@ export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: C
       ultimateStress: data.ultimateStress,
       atSupport,
       ...(capacity.userHingeLength !== undefined ? { userLength: capacity.userHingeLength } : {}),
+      ...(text ? { text } : {}),
     };
     const hl = hingeLength(input);
     const length = Math.max(hl.length, 1);

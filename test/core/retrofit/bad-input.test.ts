@@ -18,7 +18,7 @@ function nothingLost(r: MemberResult) {
   expect(r.status).not.toBe('input-error');
   expect(r.loadDeflection.points.length).toBeGreaterThan(10);
   expect(r.service).not.toBeNull();
-  expect(r.shear).toBeDefined();
+  expect(r.shear!.capacities.length).toBeGreaterThan(0);
   expect(plainAndFinite(r.retrofit)).toEqual([]);
 }
 

@@ -6,7 +6,7 @@
  */
 import type { SectionDefinition } from '../section/definition.ts';
 import { layerArea } from '../section/definition.ts';
-import { barPositions, shapeHeight, webExtent } from '../section/build.ts';
+import { barPositions, hoopCentreline, shapeHeight, webExtent } from '../section/build.ts';
 import { shapeOutline, type Point } from '../section/shapes.ts';
 import { formatQuantity } from '../units/format.ts';
 import { PALETTE } from './palette.ts';
@@ -116,16 +116,11 @@ export function sectionDrawingSvg(definition: SectionDefinition, unitsInput: Uni
 
   // Hoop along the web, at its centreline.
   const hoops = definition.hoops;
-  if (hoops && web && finite(hoops.clearCover) && finite(hoops.diameter)) {
-    const offset = hoops.clearCover + hoops.diameter / 2;
-    const x0 = web.x0 + offset;
-    const x1 = web.x1 - offset;
-    const y0 = offset;
-    const y1 = height - offset;
-    if (x1 > x0 && y1 > y0) {
-      const radius = Math.min(2 * hoops.diameter, (x1 - x0) / 2, (y1 - y0) / 2) * k;
-      parts.push(`<rect x="${n2(X(x0))}" y="${n2(Y(y0))}" width="${n2((x1 - x0) * k)}" height="${n2((y1 - y0) * k)}" rx="${n2(radius)}" fill="none" stroke="${PALETTE.grey}" stroke-width="${n2(Math.max(hoops.diameter * k, 0.6))}"/>`);
-    }
+  const centreline = hoops ? hoopCentreline(definition.shape, hoops) : undefined;
+  if (hoops && centreline) {
+    const { x0, x1, y0, y1 } = centreline;
+    const radius = Math.min(2 * hoops.diameter, (x1 - x0) / 2, (y1 - y0) / 2) * k;
+    parts.push(`<rect x="${n2(X(x0))}" y="${n2(Y(y0))}" width="${n2((x1 - x0) * k)}" height="${n2((y1 - y0) * k)}" rx="${n2(radius)}" fill="none" stroke="${PALETTE.grey}" stroke-width="${n2(Math.max(hoops.diameter * k, 0.6))}"/>`);
   }
 
   // Bars.

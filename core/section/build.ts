@@ -48,6 +48,19 @@ export function webExtent(shape: SectionShape): { x0: number; x1: number } | und
   }
 }
 
+/**
+ * Rectangle through the centreline of the perimeter hoop around the web, mm (x from the left edge,
+ * y down from the top): the confined core of Mander et al. (1988). Undefined when the shape has no
+ * single web or the cover and hoop leave nothing inside. The analysis and both drawings use it.
+ */
+export function hoopCentreline(shape: SectionShape, hoops: { readonly clearCover: number; readonly diameter: number }): { x0: number; x1: number; y0: number; y1: number } | undefined {
+  const web = webExtent(shape);
+  if (!web || !Number.isFinite(hoops.clearCover) || !Number.isFinite(hoops.diameter)) return undefined;
+  const offset = hoops.clearCover + hoops.diameter / 2;
+  const rect = { x0: web.x0 + offset, x1: web.x1 - offset, y0: offset, y1: shapeHeight(shape) - offset };
+  return rect.x1 > rect.x0 && rect.y1 > rect.y0 ? rect : undefined;
+}
+
 /** Overall height of a shape, mm. */
 export function shapeHeight(shape: SectionShape): number {
   if (shape.kind === 'polygon') return Math.max(...shape.outline.map((p) => p.y)) - Math.min(...shape.outline.map((p) => p.y));
@@ -174,12 +187,9 @@ export function buildSectionModel(definition: SectionDefinition, materials: Mate
       if (!web) {
         problems.push({ code: 'inconsistent', path: `${path}.hoops.confineCore`, severity: 'error', message: `a confined core is supported for rectangle, tee, inverted-tee, ell and I shapes, not for a ${definition.shape.kind}` });
       } else {
-        const offset = hoops.clearCover + hoops.diameter / 2;
-        const x0 = web.x0 + offset;
-        const x1 = web.x1 - offset;
-        const y0 = offset;
-        const y1 = height - offset;
-        if (!(x1 - x0 > hoops.diameter && y1 - y0 > hoops.diameter)) {
+        const rect = hoopCentreline(definition.shape, hoops);
+        const { x0, x1, y0, y1 } = rect ?? { x0: 0, x1: 0, y0: 0, y1: 0 };
+        if (!rect || !(x1 - x0 > hoops.diameter && y1 - y0 > hoops.diameter)) {
           problems.push({ code: 'geometry', path: `${path}.hoops.clearCover`, severity: 'error', message: `cover ${hoops.clearCover} mm leaves no core inside the hoops of a ${web.x1 - web.x0} mm wide, ${height} mm deep web` });
         } else {
           core = { x0, x1, y0, y1 };

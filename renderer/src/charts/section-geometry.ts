@@ -6,7 +6,7 @@
  * Units: the definition in mm; labels in the display units of the project (core/units).
  */
 import type { SectionDefinition } from '../../../core/section/definition.ts';
-import { barPositions, shapeHeight, webExtent } from '../../../core/section/build.ts';
+import { barPositions, hoopCentreline, shapeHeight, webExtent } from '../../../core/section/build.ts';
 import { shapeOutline, type Point } from '../../../core/section/shapes.ts';
 import { formatQuantity, toDisplay, unitLabel, fromDisplay } from '../../../core/units/index.ts';
 import type { UnitSystem } from '../../../core/project/types.ts';
@@ -105,13 +105,10 @@ export function sectionGeometry(section: SectionDefinition, system: UnitSystem, 
   let hoop: SectionGeometry['hoop'] = null;
   let cover: Rect | null = null;
   let core: Rect | null = null;
+  const centreline = hoops && hoops.diameter > 0 ? hoopCentreline(section.shape, hoops) : undefined;
   if (hoops && web && finite(hoops.clearCover) && finite(hoops.diameter) && hoops.diameter > 0) {
-    const offset = hoops.clearCover + hoops.diameter / 2;
-    const x0 = web.x0 + offset;
-    const x1 = web.x1 - offset;
-    const y0 = offset;
-    const y1 = depth - offset;
-    if (x1 > x0 && y1 > y0) {
+    if (centreline) {
+      const { x0, x1, y0, y1 } = centreline;
       hoop = { x: X(x0), y: Y(y0), w: r2((x1 - x0) * k), h: r2((y1 - y0) * k), rx: r2(Math.min(2 * hoops.diameter, (x1 - x0) / 2) * k), stroke: r2(Math.max(hoops.diameter * k, 1)) };
       const c = hoops.clearCover;
       cover = { x: X(web.x0 + c), y: Y(c), w: r2((web.x1 - web.x0 - 2 * c) * k), h: r2((depth - 2 * c) * k) };

@@ -17,6 +17,7 @@
  *   const saved = await page.evaluate(() => window.hingelineTestHost!.savedFiles);
  * (Everything in the seed must be serialisable; Uint8Array exports are recorded as byte counts.)
  */
+import { eventChannel } from './event-channel.ts';
 import type { HostApi, MenuCommand, OpenedFile } from './host-api.ts';
 import { EXPORT_EXTENSIONS, PROJECT_EXTENSION } from './host-api.ts';
 
@@ -80,10 +81,8 @@ export function createFakeHost(seed: FakeHostSeed = {}): FakeHost {
   const saveAsQueue = [...(seed.saveAsQueue ?? [])];
   const files = new Map(Object.entries(seed.files ?? {}));
   let recent = [...(seed.recent ?? [])];
-  const menuListeners = new Set<(command: MenuCommand) => void>();
-  const fileListeners = new Set<(file: OpenedFile) => void>();
-  const pendingCommands: MenuCommand[] = [];
-  const pendingFiles: OpenedFile[] = [];
+  const commands = eventChannel<MenuCommand>();
+  const openedFiles = eventChannel<OpenedFile>();
   const calls: FakeHostCall[] = [];
   const exports: FakeExport[] = [];
   const autosaves: string[] = [];
@@ -168,26 +167,10 @@ export function createFakeHost(seed: FakeHostSeed = {}): FakeHost {
       documentState.title = state.title;
       documentState.dirty = state.dirty;
     },
-    onMenuCommand(listener) {
-      menuListeners.add(listener);
-      const waiting = pendingCommands.splice(0);
-      if (waiting.length > 0) queueMicrotask(() => waiting.forEach((command) => listener(command)));
-      return () => void menuListeners.delete(listener);
-    },
-    onOpenFile(listener) {
-      fileListeners.add(listener);
-      const waiting = pendingFiles.splice(0);
-      if (waiting.length > 0) queueMicrotask(() => waiting.forEach((file) => listener(file)));
-      return () => void fileListeners.delete(listener);
-    },
-    emitMenuCommand(command) {
-      if (menuListeners.size === 0) pendingCommands.push(command);
-      for (const listener of [...menuListeners]) listener(command);
-    },
-    emitOpenFile(file) {
-      if (fileListeners.size === 0) pendingFiles.push(file);
-      for (const listener of [...fileListeners]) listener(file);
-    },
+    onMenuCommand: (listener) => commands.subscribe(listener),
+    onOpenFile: (listener) => openedFiles.subscribe(listener),
+    emitMenuCommand: (command) => commands.emit(command),
+    emitOpenFile: (file) => openedFiles.emit(file),
   };
   return host;
 }

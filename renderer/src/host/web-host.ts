@@ -13,6 +13,7 @@
  * - Dropping a project file on the page opens it (`onOpenFile`).
  * - `?demo` in the address sends `open-demo` once to the first menu-command listener.
  */
+import { eventChannel } from './event-channel.ts';
 import {
   EXPORT_EXTENSIONS,
   PROJECT_EXTENSION,
@@ -135,12 +136,10 @@ export function createWebHost(overrides: Partial<WebHostDependencies> = {}): Web
   let title = 'Untitled';
   let tokenCounter = 0;
   const handles = new Map<string, FileHandleLike>();
-  const menuListeners = new Set<(command: MenuCommand) => void>();
-  const fileListeners = new Set<(file: OpenedFile) => void>();
-  const pendingCommands: MenuCommand[] = [];
-  const pendingFiles: OpenedFile[] = [];
+  const commands = eventChannel<MenuCommand>();
+  const openedFiles = eventChannel<OpenedFile>();
 
-  if (new URL(window.location.href).searchParams.has('demo')) pendingCommands.push('open-demo');
+  if (new URL(window.location.href).searchParams.has('demo')) commands.emit('open-demo');
 
   // Set aside the autosave of a visit that ended abnormally, then mark this visit open.
   const ready = (async () => {
@@ -151,15 +150,8 @@ export function createWebHost(overrides: Partial<WebHostDependencies> = {}): Web
     storage?.setItem(SESSION_MARKER_KEY, now().toISOString());
   })().catch((error: unknown) => console.warn('[hingeline] recovery storage unavailable:', error));
 
-  function emitCommand(command: MenuCommand): void {
-    if (menuListeners.size === 0) pendingCommands.push(command);
-    for (const listener of [...menuListeners]) listener(command);
-  }
-
-  function emitFile(file: OpenedFile): void {
-    if (fileListeners.size === 0) pendingFiles.push(file);
-    for (const listener of [...fileListeners]) listener(file);
-  }
+  const emitCommand = (command: MenuCommand): void => commands.emit(command);
+  const emitFile = (file: OpenedFile): void => openedFiles.emit(file);
 
   function tokenFor(handle: FileHandleLike | null): string | null {
     if (!handle) return null;
@@ -183,7 +175,7 @@ export function createWebHost(overrides: Partial<WebHostDependencies> = {}): Web
   const onKeyDown = (event: KeyboardEvent): void => {
     if (event.defaultPrevented || event.repeat) return;
     const command = menuCommandForKey(event, isTextField(event.target));
-    if (!command || menuListeners.size === 0) return;
+    if (!command || !commands.listening) return;
     event.preventDefault();
     emitCommand(command);
   };
@@ -283,19 +275,9 @@ export function createWebHost(overrides: Partial<WebHostDependencies> = {}): Web
       window.document.title = documentTitle({ title, dirty });
     },
 
-    onMenuCommand(listener) {
-      menuListeners.add(listener);
-      const waiting = pendingCommands.splice(0);
-      if (waiting.length > 0) queueMicrotask(() => waiting.forEach((command) => listener(command)));
-      return () => void menuListeners.delete(listener);
-    },
+    onMenuCommand: (listener) => commands.subscribe(listener),
 
-    onOpenFile(listener) {
-      fileListeners.add(listener);
-      const waiting = pendingFiles.splice(0);
-      if (waiting.length > 0) queueMicrotask(() => waiting.forEach((file) => listener(file)));
-      return () => void fileListeners.delete(listener);
-    },
+    onOpenFile: (listener) => openedFiles.subscribe(listener),
 
     dispose() {
       window.removeEventListener('keydown', onKeyDown, true);

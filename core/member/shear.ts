@@ -492,6 +492,7 @@ export function sectionShearCapacity(code: CodeBasis, zone: ShearZone, direction
   if (!geometry.hasTensionBars) notes.push(`No ${direction === 'sagging' ? 'bottom' : 'top'} tension bars: d taken as 0.8 of the depth and ρ = 0.`);
   if (hoops && !stirrups) notes.push('The stirrup steel could not be resolved: stirrups ignored.');
   const common = { bw, d, axialForce: model.axialForce };
+  const identity = { sectionId: zone.definition.id, sectionName: zone.definition.name, direction, code, effectiveDepth: d, webWidth: bw, hasTensionBars: geometry.hasTensionBars, concreteStrength: fc };
   if (code === 'ACI 318-19') {
     const lambda = zone.concrete.lightweightFactor ?? 1;
     const r = aciShearStrength({ ...common, fc, lambda, rhoW: rho, grossArea: geometry.concreteArea, stirrups });
@@ -500,14 +501,7 @@ export function sectionShearCapacity(code: CodeBasis, zone: ShearZone, direction
       ? `Vc = (0.17λ√f′c + Nu/6Ag)·bw·d = (0.17 × ${lambda} × ${c.sqrtFc.toFixed(2)} + ${c.axialStress.toFixed(2)}) × ${bw.toFixed(0)} × ${d.toFixed(0)} = ${kN(c.value)}`
       : `Vc = (0.66${c.expression === '(c)' ? `·λs` : ''}·λ·ρw^(1/3)·√f′c + Nu/6Ag)·bw·d${c.expression === '(c)' ? ` with λs = ${c.lambdaS.toFixed(3)}` : ''}, ρw = ${rho.toFixed(4)}: ${kN(c.value)}`;
     return {
-      sectionId: zone.definition.id,
-      sectionName: zone.definition.name,
-      direction,
-      code,
-      effectiveDepth: d,
-      webWidth: bw,
-      hasTensionBars: geometry.hasTensionBars,
-      concreteStrength: fc,
+      ...identity,
       stirrups: hoops && stirrups ? { legs: hoops.verticalLegs, diameter: hoops.diameter, spacing: hoops.spacing, area: stirrups.area, yieldStress: r.stirrupYield, meetsMinimum: r.meetsMinimum } : null,
       concreteContribution: c.value,
       stirrupContribution: r.steel,
@@ -524,14 +518,7 @@ export function sectionShearCapacity(code: CodeBasis, zone: ShearZone, direction
   const nominal = enShearStrength(enInput, { gammaC: 1, gammaS: 1 });
   const c = design.concrete;
   return {
-    sectionId: zone.definition.id,
-    sectionName: zone.definition.name,
-    direction,
-    code,
-    effectiveDepth: d,
-    webWidth: bw,
-    hasTensionBars: geometry.hasTensionBars,
-    concreteStrength: fc,
+    ...identity,
     stirrups: hoops && stirrups ? { legs: hoops.verticalLegs, diameter: hoops.diameter, spacing: hoops.spacing, area: stirrups.area, yieldStress: stirrups.yieldStress, meetsMinimum: design.meetsMinimum } : null,
     concreteContribution: c.value,
     stirrupContribution: design.steel,

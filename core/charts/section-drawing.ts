@@ -5,7 +5,7 @@
  * width and height in points (1 pt = 1/72 in), as in the report; the app may show it at any size.
  */
 import type { SectionDefinition } from '../section/definition.ts';
-import { layerArea } from '../section/definition.ts';
+import { layerArea, layerDiameter } from '../section/definition.ts';
 import { barPositions, hoopCentreline, shapeHeight, webExtent } from '../section/build.ts';
 import { shapeOutline, type Point } from '../section/shapes.ts';
 import { formatQuantity } from '../units/format.ts';
@@ -86,7 +86,7 @@ export function sectionDrawingSvg(definition: SectionDefinition, unitsInput: Uni
 
   // Layer labels and their widths decide the right margin.
   const layers = (definition.bars ?? []).map((layer, i) => {
-    const diameter = layer.diameter ?? Math.sqrt((4 * (layer.area ?? 0)) / Math.PI);
+    const diameter = layerDiameter(layer);
     const sized = layer.count !== undefined && layer.diameter !== undefined;
     const text = `${layer.label ?? `layer ${i + 1}`}: ${sized ? `${layer.count} × ${length(layer.diameter!)}` : 'area'} (${area(layerArea(layer))})`;
     return { layer, diameter, sized, text };

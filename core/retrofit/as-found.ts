@@ -27,7 +27,7 @@ import type { MemberDefinition } from '../member/definition.ts';
 import type { Project } from '../project/types.ts';
 import { barPositions } from '../section/build.ts';
 import type { BarLayer, SectionDefinition } from '../section/definition.ts';
-import { barArea, layerArea } from '../section/definition.ts';
+import { barArea, layerArea, layerDiameter } from '../section/definition.ts';
 import { shapeOutline } from '../section/shapes.ts';
 import { chordIntervals } from '../section/width-profile.ts';
 import { corrodedRuptureStrainFactor } from './corrosion.ts';
@@ -299,7 +299,7 @@ export function deriveAsFound(member: MemberDefinition, condition: AsFoundCondit
       for (const layer of bars) {
         const original = s.bars[layer.sourceIndex]!;
         const xs = barPositions(s, original);
-        const diameter = layer.diameter ?? Math.sqrt((4 * layerArea(layer)) / Math.PI);
+        const diameter = layerDiameter(layer);
         const depth = layer.depth - shift;
         if (layerInside(outline1, outcome.height, xs, depth, diameter)) kept.push({ ...layer, depth });
         else {

@@ -20,7 +20,7 @@ import type { ProjectMaterials } from '../project/resolver.ts';
 import { STANDARD_GRAVITY } from '../section/analyze.ts';
 import { partOf, shapeHeight } from '../section/build.ts';
 import type { SectionDefinition } from '../section/definition.ts';
-import { barArea } from '../section/definition.ts';
+import { barArea, layerDiameter } from '../section/definition.ts';
 import type { ConcretePart, DiscreteElement } from '../section/model.ts';
 import { shapeOutline } from '../section/shapes.ts';
 import { chordIntervals } from '../section/width-profile.ts';
@@ -130,7 +130,7 @@ export function concreteLayerSection(ref: ReferenceSection, scheme: ConcreteLaye
       problems.push({ code: 'unknown-reference', path: `${bt}.steelId`, severity: 'error', message: `the steel "${b.steelId}" could not be built` });
       return;
     }
-    const diameter = b.diameter ?? Math.sqrt((4 * (b.area ?? 0)) / Math.PI);
+    const diameter = layerDiameter(b);
     const area = b.count !== undefined && b.diameter !== undefined ? b.count * barArea(b.diameter) : b.area ?? 0;
     const r = diameter / 2;
     if (b.distanceFromFace - r < 0 || b.distanceFromFace + r > t) {

@@ -10,7 +10,7 @@ import { linearBrittleTension } from '../materials/concrete/tension.ts';
 import { clipProfile } from './elastic.ts';
 import type { ConfinementInput } from '../materials/specs.ts';
 import type { BarLayer, SectionDefinition } from './definition.ts';
-import { barArea, layerArea } from './definition.ts';
+import { barArea, layerArea, layerDiameter } from './definition.ts';
 import type { ConcretePart, DiscreteElement, SectionModel } from './model.ts';
 import { shapeOutline, type SectionShape } from './shapes.ts';
 import { chordIntervals, profileMoments, subtractProfile, widthProfile, type Strip } from './width-profile.ts';
@@ -137,7 +137,7 @@ function rectangleProfile(x0: number, x1: number, y0: number, y1: number): Strip
 /** Horizontal positions (mm) of the bars of a layer, for drawing and containment checks. */
 export function barPositions(definition: SectionDefinition, layer: BarLayer): number[] {
   const count = layer.count ?? 1;
-  const diameter = layer.diameter ?? Math.sqrt((4 * (layer.area ?? 0)) / Math.PI);
+  const diameter = layerDiameter(layer);
   const outline = shapeOutline(definition.shape);
   const web = webExtent(definition.shape);
   const cover = (definition.hoops?.clearCover ?? 40) + (definition.hoops?.diameter ?? 0);
@@ -240,7 +240,7 @@ export function buildSectionModel(definition: SectionDefinition, materials: Mate
     if (!steel) problems.push({ code: 'unknown-reference', path: `${at}.steelId`, severity: 'error', message: `no steel material with id "${layer.steelId}" in the library` });
     if (problems.length > before || !steel || !concrete) return;
     // Containment: each bar's circle must lie inside the concrete.
-    const diameter = layer.diameter ?? Math.sqrt((4 * layerArea(layer)) / Math.PI);
+    const diameter = layerDiameter(layer);
     const radius = diameter / 2;
     if (layer.depth - radius < 0 || layer.depth + radius > height) {
       problems.push({ code: 'outside-section', path: `${at}.depth`, severity: 'error', message: `a ${diameter.toFixed(0)} mm bar at depth ${layer.depth} mm sticks out of the ${height} mm deep section (allowed ${radius.toFixed(1)} to ${(height - radius).toFixed(1)} mm)` });
@@ -362,7 +362,7 @@ export function partOf(role: ConcretePart['role'], label: string, strips: Strip[
 function clearSpacings(layers: readonly BarLayer[], coreWidth: number, coreDepth: number): number[] {
   if (layers.length === 0) return [coreWidth, coreWidth, coreDepth, coreDepth];
   const sorted = [...layers].sort((a, b) => a.depth - b.depth);
-  const diameterOf = (l: BarLayer) => l.diameter ?? Math.sqrt((4 * (l.area ?? 0)) / Math.PI);
+  const diameterOf = layerDiameter;
   const gaps: number[] = [];
   for (const layer of [sorted[0]!, sorted[sorted.length - 1]!]) {
     // Counts are validated later; keep this estimate safe for any value (1 ≤ n ≤ 100).

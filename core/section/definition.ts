@@ -58,7 +58,15 @@ export function barArea(diameter: number): number {
 }
 
 /** Total steel area of a layer, mm². */
-export function layerArea(layer: BarLayer): number {
+export function layerArea(layer: Pick<BarLayer, 'count' | 'diameter' | 'area'>): number {
   if (layer.count !== undefined && layer.diameter !== undefined) return layer.count * barArea(layer.diameter);
   return layer.area ?? 0;
+}
+
+/**
+ * Bar diameter of a layer, mm; for a layer given by its total area only, the diameter of one bar of
+ * that area (used for drawings, containment checks and hinge lengths).
+ */
+export function layerDiameter(layer: Pick<BarLayer, 'count' | 'diameter' | 'area'>): number {
+  return layer.diameter ?? Math.sqrt((4 * layerArea(layer)) / Math.PI);
 }

@@ -5,7 +5,7 @@
  * its diameter, dimension lines and a scale bar. Drawn to scale: one factor for x and y.
  * Units: the definition in mm; labels in the display units of the project (core/units).
  */
-import type { SectionDefinition } from '../../../core/section/definition.ts';
+import { layerDiameter, type SectionDefinition } from '../../../core/section/definition.ts';
 import { barPositions, hoopCentreline, shapeHeight, webExtent } from '../../../core/section/build.ts';
 import { shapeOutline, type Point } from '../../../core/section/shapes.ts';
 import { formatQuantity, toDisplay, unitLabel, fromDisplay } from '../../../core/units/index.ts';
@@ -119,7 +119,7 @@ export function sectionGeometry(section: SectionDefinition, system: UnitSystem, 
   const bars: DrawnBar[] = [];
   const labels: LayerLabel[] = [];
   section.bars.forEach((layer, index) => {
-    const diameter = layer.diameter ?? Math.sqrt((4 * (layer.area ?? 0)) / Math.PI);
+    const diameter = layerDiameter(layer);
     if (!finite(layer.depth) || !finite(diameter) || diameter <= 0) {
       problems.push(`Layer ${index + 1} cannot be drawn (its depth or bar size is missing).`);
       return;

@@ -3,8 +3,36 @@ import tseslint from 'typescript-eslint';
 import pluginVue from 'eslint-plugin-vue';
 import globals from 'globals';
 
+/**
+ * The layers inside core/, lowest first. A folder (or a file at core/'s root) may import only the
+ * layers listed before it: the graph has no cycles (test/core/architecture.test.ts checks it) and
+ * a change in one layer reaches only the layers above it. DEVELOPERS.md, "Layers inside core/".
+ */
+const CORE_LAYERS = ['diagnostics.ts', 'numeric', 'units', 'materials', 'section', 'member', 'retrofit', 'assessment', 'project', 'analysis.ts', 'charts', 'report'];
+
+/** no-restricted-imports patterns that keep core/<layer> from importing the layers above it. */
+function coreLayerRules() {
+  return CORE_LAYERS.map((layer, index) => {
+    const above = CORE_LAYERS.slice(index + 1);
+    const files = layer.endsWith('.ts') ? [`core/${layer}`] : [`core/${layer}/**/*.ts`];
+    const patterns = above.map((upper) => ({
+      regex: upper.endsWith('.ts') ? `(^|/)${upper.replace('.', '\\.')}$` : `(^|/)${upper}/`,
+      message: `core/${layer} sits below core/${upper} and must not import it (DEVELOPERS.md, "Layers inside core/").`,
+    }));
+    return { files, rules: { 'no-restricted-imports': ['error', { patterns: [...CORE_OUTSIDE_PATTERNS, ...patterns] }] } };
+  });
+}
+
 const nodeBuiltins = [
   'node:*', 'fs', 'fs/promises', 'path', 'os', 'child_process', 'worker_threads', 'url', 'crypto', 'stream', 'http', 'net', 'util',
+];
+
+/** What core/ may never import, whatever its layer. */
+const CORE_OUTSIDE_PATTERNS = [
+  { group: ['**/app/**', '**/renderer/**'], message: 'core/ must not import from app/ or renderer/.' },
+  { group: ['electron', 'electron/*'], message: 'core/ must not use Electron.' },
+  { group: nodeBuiltins, message: 'core/ must not use Node APIs.' },
+  { group: ['vue', 'pinia', 'chart.js', 'chart.js/*', 'pdfmake', 'pdfmake/*', '@napi-rs/*'], message: 'core/ stays free of UI, PDF and canvas libraries; inject them.' },
 ];
 
 export default tseslint.config(
@@ -36,14 +64,7 @@ export default tseslint.config(
     files: ['core/**/*.ts'],
     languageOptions: { globals: { ...globals.es2022 } },
     rules: {
-      'no-restricted-imports': ['error', {
-        patterns: [
-          { group: ['**/app/**', '**/renderer/**'], message: 'core/ must not import from app/ or renderer/.' },
-          { group: ['electron', 'electron/*'], message: 'core/ must not use Electron.' },
-          { group: nodeBuiltins, message: 'core/ must not use Node APIs.' },
-          { group: ['vue', 'pinia', 'chart.js', 'chart.js/*', 'pdfmake', 'pdfmake/*', '@napi-rs/*'], message: 'core/ stays free of UI, PDF and canvas libraries; inject them.' },
-        ],
-      }],
+      'no-restricted-imports': ['error', { patterns: CORE_OUTSIDE_PATTERNS }],
       'no-restricted-globals': ['error',
         { name: 'window', message: 'core/ runs outside the browser.' },
         { name: 'document', message: 'core/ runs outside the browser.' },
@@ -60,6 +81,8 @@ export default tseslint.config(
       'no-restricted-properties': ['error', { object: 'Math', property: 'random', message: 'core/ is deterministic.' }],
     },
   },
+  // core/ layers: each imports only the layers below it (later entries override the rule above).
+  ...coreLayerRules(),
   // renderer/: browser only; never app/.
   {
     files: ['renderer/**/*.{ts,vue}'],

@@ -3,15 +3,13 @@
  * project → section analyses (once per section) → every member → plain results and a summary.
  * Pure and deterministic. Members are independent: one member's failure never stops the others.
  */
-import { BugError, InputError } from './diagnostics.ts';
-import type { MemberContext } from './member/analyze.ts';
-import { analyzeMemberWithRetrofit } from './retrofit/analyze.ts';
-import type { MemberResult } from './member/results.ts';
-import type { MemberDefinition } from './member/definition.ts';
-import type { Project } from './project/types.ts';
-import { projectMaterials } from './project/resolver.ts';
-import { quantityText } from './units/text.ts';
+import { assessMember, type AssessmentContext } from './assessment/member.ts';
+import type { MemberResult } from './assessment/results.ts';
+import { notAnalysed } from './assessment/variant.ts';
+import { materialLibrary } from './materials/library.ts';
+import type { Project, MemberDefinition } from './project/types.ts';
 import { analyzeSection, type SectionAnalysis } from './section/analyze.ts';
+import { quantityText } from './units/text.ts';
 
 export interface ProjectSummary {
   readonly memberCount: number;
@@ -34,7 +32,7 @@ export type ProgressListener = (done: number, total: number, memberId: string) =
 
 /** Section analyses on demand, computed once per section of the project. */
 export function sectionCache(project: Project): (id: string) => SectionAnalysis | undefined {
-  const materials = projectMaterials(project.materials, project.info.codeBasis);
+  const materials = materialLibrary(project.materials, project.info.codeBasis);
   const cache = new Map<string, SectionAnalysis>();
   return (id) => {
     const cached = cache.get(id);
@@ -67,7 +65,10 @@ export function analyzeMembers(project: Project, memberIds?: readonly string[], 
   const byContent = new Map<string, MemberResult>();
   const text = quantityText(project.info.unitSystem);
   members.forEach(({ m, index }, k) => {
-    const context: MemberContext = { code: project.info.codeBasis, segments: project.settings.stations, section, sectionIds, path: `members[${index}] "${m.name}"`, text };
+    const context: AssessmentContext = {
+      code: project.info.codeBasis, segments: project.settings.stations, section, sectionIds, path: `members[${index}] "${m.name}"`, text,
+      library: project, sectionSettings: project.settings,
+    };
     let result: MemberResult;
     // Members with an as-found condition or schemes carry derived ids of their own: never shared.
     const key = m.asFound || (m.schemes?.length ?? 0) > 0 ? `${m.id}\u0000unique` : contentKey(m);
@@ -79,20 +80,11 @@ export function analyzeMembers(project: Project, memberIds?: readonly string[], 
         onProgress?.(k + 1, members.length, m.id);
         return;
       }
-      result = analyzeMemberWithRetrofit(m, context, project);
+      result = assessMember(m, context);
       byContent.set(key, result);
     } catch (error) {
       // Keep going with the other members; this member reports what went wrong.
-      const message = error instanceof InputError ? error.message : error instanceof BugError ? `internal error (please report): ${error.message}` : `internal error (please report): ${String(error instanceof Error ? error.message : error)}`;
-      result = {
-        memberId: m.id, memberName: m.name, supports: m.supports, span: Number.isFinite(m.span) ? m.span : 0,
-        status: error instanceof InputError ? 'input-error' : 'not-converged',
-        governingMode: `Not analysed: ${message.split('\n')[0]}`,
-        sections: [], loadDeflection: { pattern: '', controlPosition: 0, points: [], events: [], status: 'not analysed' },
-        ductility: { firstYieldDeflection: null, yieldDeflection: null, ultimateDeflection: null, displacementDuctility: null, hinges: [], failureCause: '' },
-        distributions: [], service: null, strength: null, warnings: [],
-        errors: error instanceof InputError ? error.diagnostics.map((d) => ({ path: d.path, message: d.message })) : [{ path: `members[${index}]`, message }],
-      };
+      result = notAnalysed(m, error, context.path);
     }
     results.push(result);
     onProgress?.(k + 1, members.length, m.id);

@@ -120,3 +120,19 @@ export function throwIfErrors(diagnostics: readonly Diagnostic[]): void {
   const errors = diagnostics.filter((d) => d.severity === 'error');
   if (errors.length > 0) throw new InputError(errors);
 }
+
+/** A problem as results carry it: where, and what. */
+export interface Problem {
+  readonly path: string;
+  readonly message: string;
+}
+
+/** The errors among diagnostics, as results carry them. */
+export function errorsOf(diagnostics: readonly Diagnostic[]): Problem[] {
+  return diagnostics.filter((d) => d.severity === 'error').map((d) => ({ path: d.path, message: d.message }));
+}
+
+/** The warnings among diagnostics, each as one line `path: message`. */
+export function warningsOf(diagnostics: readonly Diagnostic[]): string[] {
+  return diagnostics.filter((d) => d.severity === 'warning').map((d) => `${d.path}: ${d.message}`);
+}

@@ -4,7 +4,6 @@
  */
 import { fileURLToPath } from 'node:url';
 import { analyzeMembers, summarize, type ProjectResults } from '../../core/analysis.ts';
-import type { MemberResult } from '../../core/member/results.ts';
 import { resultsSummaryCsv } from '../../core/project/csv.ts';
 import { demoProject, demoProjectSI } from '../../core/project/demo.ts';
 import { parseProject, serializeProject } from '../../core/project/file.ts';
@@ -14,6 +13,7 @@ import { EXIT, type Command } from './args.ts';
 import { analysisJson, diagnosticLines, problemCount, progressLine, RESULTS_CAUTION, tableReport, type Style } from './format.ts';
 import type { CliIo } from './io.ts';
 import { analyzeMembersParallel } from './parallel.ts';
+import type { MemberResult } from '../../core/assessment/results.ts';
 
 type Io = CliIo;
 

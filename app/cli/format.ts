@@ -6,12 +6,12 @@
  */
 import type { Diagnostic } from '../../core/diagnostics.ts';
 import type { ProjectResults } from '../../core/analysis.ts';
-import type { MemberResult } from '../../core/member/results.ts';
 import { memberKeyResults, type MemberKeyResults } from '../../core/project/key-results.ts';
 import { formatDiagnostic } from '../../core/project/validate.ts';
 import type { Project, UnitSystem } from '../../core/project/types.ts';
 import { formatFixed, formatNumber, NOT_A_VALUE, toDisplay, unitLabel, type Quantity, type UnitId, type UnitSystem as DisplaySystem } from '../../core/units/index.ts';
 import { RESULTS_CAUTION } from '../shared/about.ts';
+import type { MemberResult } from '../../core/assessment/results.ts';
 
 export { RESULTS_CAUTION };
 

@@ -10,9 +10,9 @@
  */
 import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
-import type { MemberResult } from '../../core/member/results.ts';
 import type { Project } from '../../core/project/types.ts';
 import type { WorkerInput, WorkerMessage } from './worker.ts';
+import type { MemberResult } from '../../core/assessment/results.ts';
 
 export interface ParallelOptions {
   /** Number of worker threads (default: min(available parallelism, number of members)); at least 1. */

@@ -4,10 +4,11 @@
  * load level (λ = 1) and the nominal yield and ultimate deflections that define the displacement
  * ductility.
  */
-import type { MemberEventKind, MemberResult } from '../member/results.ts';
+import type { MemberEventKind } from '../member/results.ts';
 import { formatQuantity } from '../units/format.ts';
 import type { ChartPoint, ChartSpec, MarkerShape, MarkerSpec, ReferenceLineSpec, SeriesSpec, UnitsInput } from './types.ts';
 import { axisFor, axisScale, display, finite, resolveUnits, unitFor, unitText } from './units.ts';
+import type { MemberResult } from '../assessment/results.ts';
 
 /** Short names of the load–deflection events, shared by the chart and the report's event table. */
 export const EVENT_WORDS: Readonly<Record<MemberEventKind, string>> = {

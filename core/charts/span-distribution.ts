@@ -2,11 +2,12 @@
  * Distributions along the span at chosen load levels: bending moment, curvature or deflection
  * against the position x from the left support, with the active plastic hinge zones shaded.
  */
-import type { MemberResult, SpanDistribution } from '../member/results.ts';
+import type { SpanDistribution } from '../member/results.ts';
 import type { Quantity } from '../units/quantities.ts';
 import { SERIES_COLOURS } from './palette.ts';
 import type { BandSpec, ChartSpec, SeriesSpec, UnitsInput } from './types.ts';
 import { axisFor, axisScale, display, finite, resolveUnits, unitText } from './units.ts';
+import type { MemberResult } from '../assessment/results.ts';
 
 export type SpanQuantity = 'moment' | 'curvature' | 'deflection';
 

@@ -1,8 +1,8 @@
 /**
- * One member from its definition to every number the UI, CLI and report show:
- * sections → moment–curvature → load–deflection to ultimate, plastic hinges and ductility →
- * service deflections against limits → flexural strength check → governing mode in one sentence.
- * Never throws for bad input or a physical outcome: problems come back in the result.
+ * One beam through the member engine: its sections' moment–curvature curves → the load–deflection
+ * curve to ultimate, plastic hinges and ductility → service deflections against their limits.
+ * The strength checks and the verdict are core/assessment's. Never throws for bad input or a
+ * physical outcome: problems come back in the result.
  */
 import type { Diagnostic } from '../diagnostics.ts';
 import { BugError } from '../diagnostics.ts';
@@ -10,12 +10,11 @@ import type { CodeBasis } from '../materials/specs.ts';
 import type { QuantityText } from '../units/text.ts';
 import type { SectionAnalysis } from '../section/analyze.ts';
 import { buildBeamModel, type BeamModel, type ZoneResponse } from './beam-model.ts';
-import type { LoadFactors, MemberDefinition, MemberLoad } from './definition.ts';
+import type { BeamDefinition, MemberLoad } from './definition.ts';
 import { capacityCurve, peakDeflectionPosition, solveStatic, type LoadingFields } from './nonlinear.ts';
-import type { MemberResult, SectionResult } from './results.ts';
+import type { BeamResult, SectionResult } from './results.ts';
 import { serviceDeflections, type ServiceZone } from './service.ts';
 import { releasedMoment, toStaticLoad, totalLoad, type StaticLoad } from './statics.ts';
-import { designResistance, strengthCheck, type ZoneResistance } from './strength.ts';
 import { validateMember } from './validate.ts';
 import { zoneResponse } from './zones.ts';
 import { plainConcreteResponse } from './section-response.ts';
@@ -33,29 +32,41 @@ export interface MemberContext {
   readonly text?: QuantityText;
 }
 
-/** Default strength factors of the code basis: ACI 318-19 Eq. (5.3.1b) 1.2D + 1.6L; EN 1990 Eq. (6.10) 1.35G + 1.5Q. */
-export function defaultStrengthFactors(code: CodeBasis): LoadFactors {
-  return code === 'ACI 318-19' ? { dead: 1.2, superimposed: 1.2, live: 1.6 } : { dead: 1.35, superimposed: 1.35, live: 1.5 };
+/** What the assessment needs from the beam's analysis besides its plain result. */
+export interface BeamAnalysis {
+  readonly result: BeamResult;
+  /** Input problems of the beam or its sections; when any, the result holds no analysis. */
+  readonly inputErrors: readonly Diagnostic[];
+  /** The load–deflection analysis: null when its load pattern is empty. */
+  readonly capacity: {
+    /** Load factor at ultimate on the pattern, null when no limit state was reached. */
+    readonly ultimateLoadFactor: number | null;
+    readonly failureCause: string;
+    readonly status: string;
+  } | null;
+  /** False when the load–deflection analysis or a section's curve stopped before a limit state. */
+  readonly converged: boolean;
 }
 
-
-function emptyResult(member: MemberDefinition, errors: readonly Diagnostic[], sections: SectionResult[] = []): MemberResult {
+/** The result of a beam that could not be analysed (input errors), keeping the sections that could. */
+export function unanalysedBeam(member: BeamDefinition, errors: readonly Diagnostic[], sections: readonly SectionResult[] = []): BeamResult {
   return {
     memberId: member.id,
     memberName: member.name,
     supports: member.supports,
     span: Number.isFinite(member.span) ? member.span : 0,
-    status: 'input-error',
-    governingMode: `Not analysed: ${errors.length} input problem${errors.length === 1 ? '' : 's'} to fix first.`,
     sections,
     loadDeflection: { pattern: '', controlPosition: 0, points: [], events: [], status: 'not analysed' },
     ductility: { firstYieldDeflection: null, yieldDeflection: null, ultimateDeflection: null, displacementDuctility: null, hinges: [], failureCause: '' },
     distributions: [],
     service: null,
-    strength: null,
     warnings: [],
     errors: errors.map((e) => ({ path: e.path, message: e.message })),
   };
+}
+
+function invalid(member: BeamDefinition, errors: readonly Diagnostic[], sections: readonly SectionResult[] = []): BeamAnalysis {
+  return { result: unanalysedBeam(member, errors, sections), inputErrors: errors, capacity: null, converged: true };
 }
 
 function sectionResult(s: SectionAnalysis): SectionResult | null {
@@ -97,15 +108,15 @@ export function nominalYieldDeflection(points: readonly { totalLoad: number; def
   return null;
 }
 
-export function analyzeMember(member: MemberDefinition, context: MemberContext): MemberResult {
+export function analyzeBeam(member: BeamDefinition, context: MemberContext): BeamAnalysis {
   const problems = validateMember(member, context.path, context.sectionIds);
-  if (problems.length > 0) return emptyResult(member, problems);
+  if (problems.length > 0) return invalid(member, problems);
   const span = member.span;
   const zoneSections = member.zones.map((z) => context.section(z.sectionId));
   const sectionErrors = zoneSections.flatMap((s, i) => (s ? s.errors : [{ code: 'unknown-reference' as const, path: `${context.path}.zones[${i}].sectionId`, severity: 'error' as const, message: 'section not found' }]));
   const uniqueSections = [...new Map(zoneSections.filter((s): s is SectionAnalysis => !!s).map((s) => [s.sectionId, s])).values()];
   const sections = uniqueSections.map(sectionResult).filter((s): s is SectionResult => s !== null);
-  if (sectionErrors.length > 0) return emptyResult(member, sectionErrors, sections);
+  if (sectionErrors.length > 0) return invalid(member, sectionErrors, sections);
   const analyses = zoneSections as SectionAnalysis[];
   const warnings: string[] = [...new Set(uniqueSections.flatMap((s) => s.warnings.map((w) => `Section "${s.sectionName}": ${w}`)))];
 
@@ -197,78 +208,14 @@ export function analyzeMember(member: MemberDefinition, context: MemberContext):
   });
   warnings.push(...service.warnings);
 
-  // --- strength -----------------------------------------------------------------------------------
-  const factors = member.strengthFactors ?? defaultStrengthFactors(context.code);
-  const factored = [
-    ...selfWeight.map((l) => ({ ...l, w: l.kind === 'uniform' ? l.w * factors.dead : 0 }) as StaticLoad),
-    ...byCase(['dead'], factors.dead),
-    ...byCase(['superimposed'], factors.superimposed),
-    ...byCase(['live'], factors.live),
-  ];
-  const elasticZones: ZoneResponse[] = member.zones.map((z, i) => {
-    const s = analyses[i]!;
-    const ei = s.codeModulus * s.elastic!.grossInertia;
-    const lin = plainConcreteResponse(ei, Number.MAX_VALUE);
-    return { ...responses[i]!, sagging: lin, hogging: lin };
-  });
-  const elasticBeam = buildBeamModel(member.supports, span, elasticZones, extraPoints, context.segments);
-  const demandState = solveStatic(elasticBeam, fieldOf(elasticBeam, factored));
-  let sag = 0;
-  let sagAt = 0;
-  let hog = 0;
-  let hogAt = 0;
-  demandState.moment.forEach((m, i) => {
-    if (m > sag) {
-      sag = m;
-      sagAt = elasticBeam.x[i]!;
-    }
-    if (-m > hog) {
-      hog = -m;
-      hogAt = elasticBeam.x[i]!;
-    }
-  });
-  const resistances: ZoneResistance[] = member.zones.map((z, i) => {
-    const s = analyses[i]!;
-    const curves = context.code === 'EN 1992-1-1' && s.designCurves ? s.designCurves : s.curves;
-    const r = (dir: 'sagging' | 'hogging') => designResistance(context.code, curves[dir], s.yieldStrain[dir], context.text);
-    const rs = r('sagging');
-    const rh = r('hogging');
-    return { from: z.from, to: z.to, sagging: rs.value, hogging: rh.value, notes: [`${s.sectionName}: sagging ${rs.note}; hogging ${rh.note}.`] };
-  });
-  const combination = context.code === 'ACI 318-19'
-    ? `${factors.dead}D + ${factors.live}L (ACI 318-19 5.3.1)`
-    : `${factors.dead}G + ${factors.live}Q (EN 1990 6.10)`;
-  const strength = strengthCheck(combination, { sagging: sag, saggingPosition: sagAt, hogging: hog, hoggingPosition: hogAt }, resistances);
-
-  // --- status and governing mode ----------------------------------------------------------------------
-  const serviceFails = service.service.checks.filter((c) => !c.pass);
   const notConverged = (capacity && !capacity.converged) || uniqueSections.some((s) => Object.values(s.curves).some((c) => c && c.status.kind !== 'complete'));
-  const status: MemberResult['status'] = notConverged ? 'not-converged' : serviceFails.length > 0 || !strength.pass ? 'check-fails' : 'ok';
-  const parts: string[] = [];
-  if (capacity?.ultimate) {
-    const ratio = capacity.ultimate.lambda;
-    parts.push(`Flexure: ${capacity.failureCause} at ${(proportional ? ratio : ratio).toFixed(2)} × the ${proportional ? 'service load' : 'live load (dead load held)'}${displacementDuctility ? `, displacement ductility μΔ = ${displacementDuctility.toFixed(1)}` : ''}`);
-  } else if (capacity) {
-    parts.push(`Flexure: ${capacity.status}`);
-  }
-  parts.push(`strength check ${strength.pass ? 'passes' : 'fails'} (utilisation ${strength.utilisation.toFixed(2)} under ${combination})`);
-  if (serviceFails.length > 0) {
-    const worst = serviceFails.reduce((a, b) => (b.utilisation > a.utilisation ? b : a));
-    parts.push(`deflection check fails: ${worst.utilisation.toFixed(2)} × ℓ/${worst.ratio} (${worst.quantity})`);
-  } else if (service.service.checks.length > 0) {
-    parts.push('deflection checks pass');
-  }
-  const governingMode = `${parts.join('; ')}.`;
-
   const distributions = [...(service.distribution ? [service.distribution] : []), ...(capacity?.distributions ?? [])];
   if (!Number.isFinite(span)) throw new BugError('span must be finite after validation');
-  return {
+  const result: BeamResult = {
     memberId: member.id,
     memberName: member.name,
     supports: member.supports,
     span,
-    status,
-    governingMode,
     sections,
     loadDeflection: {
       pattern: proportional ? 'all service loads (dead + live) increased together' : 'live load increased with the dead load held',
@@ -287,9 +234,14 @@ export function analyzeMember(member: MemberDefinition, context: MemberContext):
     },
     distributions,
     service: service.service,
-    strength,
     warnings,
     errors: [],
+  };
+  return {
+    result,
+    inputErrors: [],
+    capacity: capacity ? { ultimateLoadFactor: capacity.ultimate?.lambda ?? null, failureCause: capacity.failureCause, status: capacity.status } : null,
+    converged: !notConverged,
   };
 }
 

@@ -1,9 +1,10 @@
 /**
- * A member (beam) as the user defines it and the project file stores it. Internal units:
- * lengths mm, line loads N/mm, point loads N. Loads act downward when positive (gravity).
- * Positions x are measured from the left support (the fixed end of a cantilever).
+ * A beam as the member engine sees it: supports, span, zones of sections, loads and the settings of
+ * its analyses. The project file's member (core/project/types.ts MemberDefinition) is this plus the
+ * as-found condition and strengthening schemes of core/retrofit. Internal units: lengths mm, line
+ * loads N/mm, point loads N. Loads act downward when positive (gravity). Positions x are measured
+ * from the left support (the fixed end of a cantilever).
  */
-import type { AsFoundCondition, StrengtheningScheme } from '../retrofit/types.ts';
 
 /**
  * Support conditions of a single span. A cantilever is fixed at x = 0 and free at x = L; a
@@ -92,7 +93,7 @@ export interface CapacitySettings {
   readonly userHingeLength?: number;
 }
 
-export interface MemberDefinition {
+export interface BeamDefinition {
   readonly id: string;
   /** Mark as on the drawings, e.g. "B-12". */
   readonly name: string;
@@ -108,8 +109,4 @@ export interface MemberDefinition {
   readonly service: ServiceSettings;
   readonly capacity: CapacitySettings;
   readonly notes?: string;
-  /** The member as found: tested strengths and deterioration (core/retrofit). */
-  readonly asFound?: AsFoundCondition;
-  /** Strengthening schemes to compare (core/retrofit). */
-  readonly schemes?: readonly StrengtheningScheme[];
 }

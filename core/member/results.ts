@@ -1,14 +1,11 @@
 /**
- * Plain, serialisable results of a member analysis (internal units: mm, N, N·mm, rad, 1/mm).
- * Every number the UI, CLI and report show comes from here; none of them recomputes.
+ * Plain, serialisable results of the member engine for one beam (internal units: mm, N, N·mm, rad,
+ * 1/mm): sections, the load–deflection curve to ultimate, hinges and ductility, and the service
+ * deflections. The checks and verdicts built on them are core/assessment/results.ts.
  */
 import type { ElasticProperties } from '../section/elastic.ts';
 import type { MomentCurvatureResult } from '../section/results.ts';
 import type { DeflectionLimitCase, HingeLengthMethod, SupportType } from './definition.ts';
-import type { ShearResult } from './shear.ts';
-import type { RetrofitResult } from '../retrofit/types.ts';
-
-export type MemberStatus = 'ok' | 'check-fails' | 'not-converged' | 'input-error';
 
 /** Section results for one section used by the member, per bending direction it needs. */
 export interface SectionResult {
@@ -125,29 +122,12 @@ export interface ServiceDeflections {
   readonly checks: readonly DeflectionCheck[];
 }
 
-export interface StrengthCheck {
-  readonly combination: string;
-  /** Factored moment demands, N·mm (magnitudes) and where. */
-  readonly saggingDemand: number;
-  readonly saggingPosition: number;
-  readonly hoggingDemand: number;
-  readonly hoggingPosition: number;
-  /** Design flexural resistance (φMn or M_Rd), N·mm, at those positions. */
-  readonly saggingResistance: number | null;
-  readonly hoggingResistance: number | null;
-  readonly utilisation: number;
-  readonly pass: boolean;
-  readonly notes: string;
-}
-
-export interface MemberResult {
+/** What the member engine finds for one beam. */
+export interface BeamResult {
   readonly memberId: string;
   readonly memberName: string;
   readonly supports: SupportType;
   readonly span: number;
-  readonly status: MemberStatus;
-  /** One sentence: what governs the member. */
-  readonly governingMode: string;
   readonly sections: readonly SectionResult[];
   readonly loadDeflection: {
     readonly pattern: string;
@@ -170,11 +150,6 @@ export interface MemberResult {
   };
   readonly distributions: readonly SpanDistribution[];
   readonly service: ServiceDeflections | null;
-  readonly strength: StrengthCheck | null;
   readonly warnings: readonly string[];
   readonly errors: readonly { readonly path: string; readonly message: string }[];
-  /** Shear capacity and demand, flexure- or shear-governed (core/member/shear.ts). */
-  readonly shear?: ShearResult;
-  /** Design, as-found and strengthened variants (core/retrofit). */
-  readonly retrofit?: RetrofitResult;
 }

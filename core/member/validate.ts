@@ -3,7 +3,7 @@
  * sections exist). Every problem is reported with its path, value and allowed range.
  */
 import { checkNumber, type Diagnostic } from '../diagnostics.ts';
-import type { MemberDefinition } from './definition.ts';
+import type { BeamDefinition } from './definition.ts';
 
 const SUPPORTS = ['simply-supported', 'cantilever', 'fixed-fixed', 'propped-cantilever'];
 const LOAD_CASES = ['dead', 'superimposed', 'live'];
@@ -17,7 +17,7 @@ const m = (mm: number) => `${(mm / 1000).toFixed(3).replace(/\.?0+$/, '')} m`;
  * @param path e.g. `members[3] "B-12"`
  * @param sectionIds ids of the project's sections
  */
-export function validateMember(member: MemberDefinition, path: string, sectionIds: ReadonlySet<string>): Diagnostic[] {
+export function validateMember(member: BeamDefinition, path: string, sectionIds: ReadonlySet<string>): Diagnostic[] {
   const out: Diagnostic[] = [];
   const error = (code: Diagnostic['code'], at: string, message: string) => out.push({ code, path: `${path}.${at}`, severity: 'error', message });
   if (!SUPPORTS.includes(member.supports)) error('unknown-option', 'supports', `must be one of ${SUPPORTS.join(', ')}, got ${JSON.stringify(member.supports)}`);

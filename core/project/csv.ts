@@ -18,12 +18,13 @@
  */
 import type { Diagnostic } from '../diagnostics.ts';
 import type { CodeBasis } from '../materials/specs.ts';
-import type { CapacitySettings, MemberDefinition, MemberLoad, ServiceSettings, SupportType } from '../member/definition.ts';
-import type { LoadDeflectionPoint, MemberResult, SpanDistribution } from '../member/results.ts';
+import type { CapacitySettings, MemberLoad, ServiceSettings, SupportType } from '../member/definition.ts';
+import type { LoadDeflectionPoint, SpanDistribution } from '../member/results.ts';
 import type { MomentCurvatureResult } from '../section/results.ts';
 import { formatNumber, fromDisplay, toDisplay, unitLabel, UNITS, type Quantity, type UnitId, type UnitSystem as DisplaySystem } from '../units/index.ts';
 import { memberKeyResults } from './key-results.ts';
-import type { Project, UnitSystem } from './types.ts';
+import type { Project, UnitSystem, MemberDefinition } from './types.ts';
+import type { MemberResult } from '../assessment/results.ts';
 
 // --- reading ----------------------------------------------------------------------------------------
 

@@ -19,10 +19,10 @@
  * 1.128 in). Pure functions: each call returns a fresh object.
  */
 import type { MaterialSpec } from '../materials/specs.ts';
-import type { DeflectionLimitCase, HingeLengthMethod, MemberDefinition, MemberLoad, MemberZone, SupportType } from '../member/definition.ts';
+import type { DeflectionLimitCase, HingeLengthMethod, MemberLoad, MemberZone, SupportType } from '../member/definition.ts';
 import type { BarLayer, HoopSet, SectionDefinition } from '../section/definition.ts';
 import { fromDisplay } from '../units/index.ts';
-import { DEFAULT_SETTINGS, PROJECT_FORMAT, PROJECT_VERSION, type Project } from './types.ts';
+import { DEFAULT_SETTINGS, PROJECT_FORMAT, PROJECT_VERSION, type Project, type MemberDefinition } from './types.ts';
 
 /** Nine significant figures: exact conversions without binary noise in the file (6705.6, not 6705.600000000001). */
 const tidy = (x: number): number => Number(x.toPrecision(9));

@@ -9,9 +9,10 @@
  * reached, in the direction of the moment there (sagging for spans, hogging for a cantilever when
  * that is not known).
  */
-import type { MemberDefinition } from '../member/definition.ts';
-import type { MemberResult, PlasticHinge, DeflectionCheck } from '../member/results.ts';
+import type { PlasticHinge, DeflectionCheck } from '../member/results.ts';
 import type { MomentCurvatureResult } from '../section/results.ts';
+import type { MemberDefinition } from './types.ts';
+import type { MemberResult } from '../assessment/results.ts';
 
 export interface CriticalSection {
   readonly sectionId: string;

@@ -5,12 +5,21 @@
  */
 import type { CodeBasis, MaterialSpec } from '../materials/specs.ts';
 import type { SectionDefinition } from '../section/definition.ts';
-import type { MemberDefinition } from '../member/definition.ts';
+import type { BeamDefinition } from '../member/definition.ts';
+import type { AsFoundCondition, StrengtheningScheme } from '../retrofit/types.ts';
 
 export const PROJECT_FORMAT = 'hingeline-project';
 export const PROJECT_VERSION = 2;
 
 export type UnitSystem = 'si' | 'us';
+
+/** A member as the project file stores it: the beam, and what is known of it as it stands. */
+export interface MemberDefinition extends BeamDefinition {
+  /** The member as found: tested strengths and deterioration (core/retrofit). */
+  readonly asFound?: AsFoundCondition;
+  /** Strengthening schemes to compare (core/retrofit). */
+  readonly schemes?: readonly StrengtheningScheme[];
+}
 
 export interface ProjectInfo {
   readonly name: string;

@@ -21,19 +21,18 @@ import { z } from 'zod';
 import { checkNumber, type Diagnostic } from '../diagnostics.ts';
 import { validateConcreteSpec, validateFrpSpec, validateSteelSpec } from '../materials/factory.ts';
 import type { CodeBasis, ConcreteSpec, FrpSpec, MaterialSpec, SteelSpec } from '../materials/specs.ts';
-import type { MemberDefinition } from '../member/definition.ts';
 import { validateMember } from '../member/validate.ts';
 import { validateAsFound, validateSchemes } from '../retrofit/validate.ts';
 import { buildSectionModel, validateShape } from '../section/build.ts';
 import type { SectionDefinition } from '../section/definition.ts';
 import { InputError } from '../diagnostics.ts';
 import { formatNumber, toDisplay, unitLabel, type Quantity, type UnitSystem as DisplaySystem } from '../units/index.ts';
-import { projectMaterials } from './resolver.ts';
+import { materialLibrary } from '../materials/library.ts';
 import {
   analysisSettingsSchema, materialSpecSchema, memberDefinitionSchema, projectInfoSchema, projectSchema, sectionDefinitionSchema,
   unknownFields, MAX_NESTING,
 } from './schema.ts';
-import type { Project, UnitSystem } from './types.ts';
+import type { Project, UnitSystem, MemberDefinition } from './types.ts';
 
 /** Most points a polygon section (outline and voids together) may have. */
 export const MAX_POLYGON_POINTS = 1000;
@@ -53,7 +52,7 @@ const isObject = (v: unknown): v is Data => typeof v === 'object' && v !== null 
 
 /**
  * Path of an item in the file as messages show it: `members[3] "B-12"`, `sections[0] "S-1"`,
- * `materials[2] "grade60"` (materials by id, like core/project/resolver.ts).
+ * `materials[2] "grade60"` (materials by id, like core/materials/library.ts).
  */
 export function itemPath(list: 'materials' | 'sections' | 'members', index: number, item: unknown): string {
   const label = isObject(item) ? (list === 'materials' ? item.id : item.name) : undefined;
@@ -289,7 +288,7 @@ const CONFINEMENT_TO_HOOPS: Readonly<Record<string, string>> = { legsX: 'vertica
 
 /** Section checks of the section builder, with confinement problems placed on the section's hoops. */
 function sectionBuildDiagnostics(section: SectionDefinition, path: string, materials: readonly MaterialSpec[], code: CodeBasis): Diagnostic[] {
-  const resolver = projectMaterials(materials, code);
+  const resolver = materialLibrary(materials, code);
   const out: Diagnostic[] = [];
   try {
     const { warnings } = buildSectionModel(section, resolver, path);

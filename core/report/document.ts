@@ -11,7 +11,6 @@
  * figures listed by `reportCharts` (core/report/figures.ts), passes them as `images`, sets
  * `info.creationDate`, registers the report font (core/report/fonts.ts) and calls pdfmake.
  */
-import type { MemberResult } from '../member/results.ts';
 import { SUPPORT_WORDS, type WriteContext } from './context.ts';
 import { planReport, type ReportPlan } from './figures.ts';
 import { displaySystem, reportFormatter, type ReportFormatter } from './format.ts';
@@ -21,6 +20,7 @@ import { methodChapter } from './method.ts';
 import { ReferenceList } from './references.ts';
 import { sectionChapter } from './sections.ts';
 import type { Content, ContentNode, DocumentDefinition, ReportInput } from './types.ts';
+import type { MemberResult } from '../assessment/results.ts';
 
 /** `2026-03-14T09:30:00Z` → `2026-03-14 09:30 UTC` (text only; any other text is printed as given). */
 export function printableDate(iso: string): string {

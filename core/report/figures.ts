@@ -12,8 +12,7 @@ import { loadDeflectionChart } from '../charts/load-deflection.ts';
 import { spanPanelsChart } from '../charts/span-distribution.ts';
 import { sectionProfileChart } from '../charts/section-profile.ts';
 import { sectionDrawingSvg } from '../charts/section-drawing.ts';
-import type { MemberResult, SectionResult } from '../member/results.ts';
-import type { MemberDefinition } from '../member/definition.ts';
+import type { SectionResult } from '../member/results.ts';
 import type { SectionDefinition } from '../section/definition.ts';
 import type { BendingDirection } from '../section/model.ts';
 import type { KeyPointName } from '../section/results.ts';
@@ -21,6 +20,8 @@ import { displaySystem } from './format.ts';
 import { pageGeometry } from './layout.ts';
 import { REPORT_FONT_FAMILY } from './fonts.ts';
 import type { ReportFigure, ReportInput } from './types.ts';
+import type { MemberDefinition } from '../project/types.ts';
+import type { MemberResult } from '../assessment/results.ts';
 
 /** States whose strain and stress profiles are shown. */
 export const PROFILE_STATES: readonly { readonly name: KeyPointName; readonly words: string }[] = [

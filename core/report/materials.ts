@@ -2,12 +2,12 @@
  * The material laws a member's sections use, as the report lists them: the law's name (its
  * `label`), the parameters it was built from (the user's values with the code-basis defaults filled
  * in) and its published sources (`references`). Nothing is computed here beyond resolving the
- * inputs exactly as the analysis did (core/project/resolver.ts, core/section/build.ts).
+ * inputs exactly as the analysis did (core/materials/library.ts, core/section/build.ts).
  */
 import { resolveConcrete } from '../materials/build/concrete-defaults.ts';
 import type { CodeBasis, ConcreteSpec, SteelSpec } from '../materials/specs.ts';
 import type { ConcreteMaterial, SteelMaterial } from '../materials/types.ts';
-import { projectMaterials } from '../project/resolver.ts';
+import { materialLibrary } from '../materials/library.ts';
 import type { Project } from '../project/types.ts';
 import { buildSectionModel } from '../section/build.ts';
 import type { SectionDefinition } from '../section/definition.ts';
@@ -27,7 +27,7 @@ export interface MaterialLine {
 
 /** Resolved section models by section id (null when the section cannot be built). */
 export function sectionModels(project: Project): (id: string) => SectionModel | null {
-  const materials = projectMaterials(project.materials, project.info.codeBasis);
+  const materials = materialLibrary(project.materials, project.info.codeBasis);
   const cache = new Map<string, SectionModel | null>();
   return (id) => {
     if (cache.has(id)) return cache.get(id)!;
@@ -73,7 +73,7 @@ function steelParameters(spec: SteelSpec, law: SteelMaterial, f: ReportFormatter
  */
 export function materialLines(project: Project, sections: readonly SectionDefinition[], f: ReportFormatter): MaterialLine[] {
   const code = project.info.codeBasis;
-  const materials = projectMaterials(project.materials, code);
+  const materials = materialLibrary(project.materials, code);
   const models = sectionModels(project);
   const lines: MaterialLine[] = [];
   const seen = new Set<string>();

@@ -6,8 +6,6 @@
  * limitations and caution. Every number comes from the results and is only formatted here.
  */
 import type { DeflectionLimitCase, LoadFactors, MemberLoad } from '../member/definition.ts';
-import { defaultStrengthFactors } from '../member/analyze.ts';
-import type { MemberResult } from '../member/results.ts';
 import { EVENT_WORDS } from '../charts/load-deflection.ts';
 import { drawingWithFacts, figureNode, pageOf, SUPPORT_WORDS, type WriteContext } from './context.ts';
 import type { MemberPlan } from './figures.ts';
@@ -15,6 +13,8 @@ import { CAUTION_TEXT, COLOURS, bullets, cautionBox, dataTable, factsTable, h2, 
 import { HINGE_WORDS, METHOD_ANCHOR, memberMethod } from './method.ts';
 import { citationMarker, hingeLengthReference } from './references.ts';
 import type { Content, ContentNode } from './types.ts';
+import type { MemberResult } from '../assessment/results.ts';
+import { defaultStrengthFactors } from '../assessment/combinations.ts';
 
 const LOAD_CASE_WORDS: Readonly<Record<MemberLoad['loadCase'], string>> = { dead: 'dead', superimposed: 'superimposed dead', live: 'live' };
 
@@ -238,7 +238,7 @@ function strength(ctx: WriteContext, result: MemberResult): Content[] {
   ], 170)])];
 }
 
-/** Shear, when the analysis checked it (capacities and demands from core/member/shear.ts). */
+/** Shear, when the analysis checked it (capacities and demands from core/assessment/shear.ts). */
 function shear(ctx: WriteContext, result: MemberResult): Content[] {
   const v = result.shear;
   if (!v) return [];

@@ -23,8 +23,7 @@
 import { type Diagnostic } from '../diagnostics.ts';
 import { DEFAULT_HARDENING_STRAIN, defaultRuptureStrain, validateSteelSpec } from '../materials/build/steel.ts';
 import type { CodeBasis, ConcreteSpec, MaterialSpec, SteelSpec } from '../materials/specs.ts';
-import type { MemberDefinition } from '../member/definition.ts';
-import type { Project } from '../project/types.ts';
+import type { BeamDefinition } from '../member/definition.ts';
 import { barPositions } from '../section/build.ts';
 import type { BarLayer, SectionDefinition } from '../section/definition.ts';
 import { barArea, layerArea, layerDiameter } from '../section/definition.ts';
@@ -33,7 +32,7 @@ import { chordIntervals } from '../section/width-profile.ts';
 import { corrodedRuptureStrainFactor } from './corrosion.ts';
 import { inPlaceStrength } from './in-place-strength.ts';
 import { changeOutline, type OutlineChange, type SideCut } from './outline.ts';
-import type { AsFoundCondition, AsFoundSummary, CoverLossDefect } from './types.ts';
+import type { AsFoundCondition, AsFoundSummary, CoverLossDefect, Library } from './types.ts';
 import { memberSections, validateAsFound } from './validate.ts';
 
 /** Smallest rupture strain a steel spec may have (core/materials/build/steel.ts validation). */
@@ -130,16 +129,16 @@ function layerInside(outline: ReturnType<typeof shapeOutline>, height: number, x
  * nothing when there is an error.
  * @param path the member's path, e.g. `members[3] "B-12"`
  */
-export function deriveAsFound(member: MemberDefinition, condition: AsFoundCondition, project: Project, code: CodeBasis, path: string, options: AsFoundOptions = {}): AsFoundDerivation {
+export function deriveAsFound(member: BeamDefinition, condition: AsFoundCondition, library: Library, code: CodeBasis, path: string, options: AsFoundOptions = {}): AsFoundDerivation {
   const at = `${path}.asFound`;
   const variant = options.variant ?? 'as-found';
-  const diagnostics: Diagnostic[] = validateAsFound(condition, member, project, at);
+  const diagnostics: Diagnostic[] = validateAsFound(condition, member, library, at);
   const empty = (): AsFoundDerivation => ({
     materials: [], sections: new Map(), diagnostics, unchanged: false,
     summary: { concrete: [], steel: [], defects: [], sections: [], notes: condition.notes ?? '' },
   });
   if (diagnostics.some((d) => d.severity === 'error')) return empty();
-  const sections = memberSections(member, project);
+  const sections = memberSections(member, library);
   const specs: MaterialSpec[] = [];
   const warn = (p: string, message: string) => diagnostics.push({ code: 'inconsistent', path: p, severity: 'warning', message });
   const fail = (p: string, message: string) => diagnostics.push({ code: 'out-of-range', path: p, severity: 'error', message });
@@ -152,7 +151,7 @@ export function deriveAsFound(member: MemberDefinition, condition: AsFoundCondit
     const targets = c.concreteId !== undefined ? [c.concreteId] : usedConcretes;
     const result = inPlaceStrength(code, c);
     for (const id of targets) {
-      const spec = project.materials.find((m) => m.id === id && m.kind === 'concrete') as ConcreteSpec | undefined;
+      const spec = library.materials.find((m) => m.id === id && m.kind === 'concrete') as ConcreteSpec | undefined;
       if (!spec) continue;
       if (!(result.strength >= 10)) {
         fail(`${at}.cores[${i}]`, `the in-place strength ${result.formula} is below 10 MPa, the least the concrete laws accept: the cores are too weak or too scattered for this analysis (check for outliers or test more cores)`);
@@ -170,7 +169,7 @@ export function deriveAsFound(member: MemberDefinition, condition: AsFoundCondit
   const steelSpecs = new Map<string, SteelSpec>();
   const steelSummary: AsFoundSummary['steel'][number][] = [];
   (condition.steel ?? []).forEach((s, i) => {
-    const base = project.materials.find((m) => m.id === s.steelId && m.kind === 'steel') as SteelSpec;
+    const base = library.materials.find((m) => m.id === s.steelId && m.kind === 'steel') as SteelSpec;
     const derived: SteelSpec = {
       ...base,
       id: derivedId(s.steelId, member.id, variant),
@@ -189,7 +188,7 @@ export function deriveAsFound(member: MemberDefinition, condition: AsFoundCondit
     specs.push(derived);
     steelSummary.push({ steelId: s.steelId, derivedId: derived.id, source: s.source, yieldStress: derived.yieldStress, ultimateStress: derived.ultimateStress, ruptureStrain: derived.ruptureStrain ?? null, note: s.note ?? '' });
   });
-  const steelOf = (id: string): SteelSpec | undefined => steelSpecs.get(id) ?? (project.materials.find((m) => m.id === id && m.kind === 'steel') as SteelSpec | undefined);
+  const steelOf = (id: string): SteelSpec | undefined => steelSpecs.get(id) ?? (library.materials.find((m) => m.id === id && m.kind === 'steel') as SteelSpec | undefined);
   const steelIdOf = (id: string) => steelSpecs.get(id)?.id ?? id;
 
   // --- sections ----------------------------------------------------------------------------------------

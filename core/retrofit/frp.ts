@@ -16,13 +16,8 @@
  * equation text is checked against its in.-lb. form in test/references/retrofit-aci440.test.ts.
  * Units: MPa, mm, N, N·mm; strains dimensionless, compression positive.
  */
-import { SI_TEXT, type QuantityText } from '../units/text.ts';
-import type { CodeBasis } from '../materials/specs.ts';
 import type { FrpMaterial } from '../materials/types.ts';
-import { aciFlexureReductionFactor, designResistance } from '../member/strength.ts';
-import type { SectionAnalysis } from '../section/analyze.ts';
-import { sectionResultants } from '../section/forces.ts';
-import { directionSign, type BendingDirection, type DiscreteElement, type SectionModel } from '../section/model.ts';
+import { directionSign, type DiscreteElement, type SectionModel } from '../section/model.ts';
 import type { MomentCurvatureResult } from '../section/results.ts';
 import { strainAtDepth } from '../section/state.ts';
 import type { FrpDesign } from './types.ts';
@@ -132,68 +127,5 @@ export function frpElement(label: string, material: FrpMaterial, design: FrpDesi
     limitStrain: design.limitStrain,
     limitCause: design.limitCause,
     displacedConcrete: null,
-  };
-}
-
-/** A design flexural resistance (N·mm) with the nominal moment and the FRP part it was reduced from, and how it was found. */
-export interface FlexuralResistance {
-  /** Design resistance, N·mm (null without tension reinforcement in the direction). */
-  readonly value: number | null;
-  /** Nominal moment Mn of the point used, and the FRP's part Mnf, N·mm. */
-  readonly nominal: number | null;
-  readonly frpMoment: number;
-  readonly note: string;
-}
-
-/**
- * Design flexural resistance of a section in one direction, with ψf on the FRP's contribution:
- *  - ACI 318-19 basis: φ·(Mn − (1 − ψf)·Mnf) = φ(Mns + ψf·Mnf), Mn at εc = 0.003 or where the curve
- *    ends (FRP debonding or rupture) if sooner, φ from εt (ACI 318-19 Table 21.2.2);
- *  - EN 1992-1-1 basis: the same on the curve with design laws (M_Rd).
- * Mnf = Tf·(df − yc), Tf the FRP force and yc the depth of the compression resultant. Without FRP
- * it is exactly the engine's resistance (core/member/strength.ts designResistance).
- * @see ACI 440.2R-17 10.2.10; ACI 318-19 Table 21.2.2
- */
-export function flexuralDesignResistance(code: CodeBasis, analysis: SectionAnalysis, direction: BendingDirection, text: QuantityText = SI_TEXT): FlexuralResistance {
-  const curve = code === 'EN 1992-1-1' && analysis.designCurves ? analysis.designCurves[direction] : analysis.curves[direction];
-  const model = analysis.model;
-  const hasFrp = model?.elements.some((e) => e.kind === 'frp') ?? false;
-  const plain = designResistance(code, curve, analysis.yieldStrain[direction]);
-  if (!hasFrp || !curve || !model || plain.value === null) return { value: plain.value, nominal: null, frpMoment: 0, note: plain.note };
-  const kp = curve.keyPoints;
-  const at = kp.codeCrushing && (!kp.ultimate || kp.codeCrushing.curvature <= kp.ultimate.curvature) ? kp.codeCrushing : kp.peak;
-  if (!at) return { value: plain.value, nominal: null, frpMoment: 0, note: plain.note };
-  const frp = at.state.elements.filter((e) => e.kind === 'frp' && e.force < 0);
-  const tf = -frp.reduce((s, e) => s + e.force, 0);
-  const df = tf > 0 ? frp.reduce((s, e) => s - e.force * e.depth, 0) / tf : 0;
-  let yc: number;
-  if (code === 'ACI 318-19') {
-    yc = sectionResultants(model, at.referenceStrain, directionSign(direction) * at.curvature).compressionDepth;
-  } else {
-    // Design laws carry no concrete tension: the tension resultant is the elements' alone.
-    const tension = at.state.elements.filter((e) => e.force < 0);
-    const t = -tension.reduce((s, e) => s + e.force, 0);
-    const yt = t > 0 ? tension.reduce((s, e) => s - e.force * e.depth, 0) / t : 0;
-    const z = at.state.leverArm ?? 0;
-    yc = direction === 'sagging' ? yt - z : yt + z;
-  }
-  const mnf = tf * Math.abs(df - yc);
-  const reduced = at.moment - (1 - FRP_FLEXURE_REDUCTION) * mnf;
-  const kNm = (x: number) => text.moment(x);
-  const where = at === kp.peak ? 'where the curve ends (FRP limit before εc = 0.003)' : 'at εc = 0.003';
-  if (code === 'ACI 318-19') {
-    const phi = aciFlexureReductionFactor(at.maxSteelTensileStrain, analysis.yieldStrain[direction]);
-    return {
-      value: phi * reduced,
-      nominal: at.moment,
-      frpMoment: mnf,
-      note: `φ(Mns + ψf·Mnf) = ${phi.toFixed(3)} × (${kNm(at.moment - mnf)} + 0.85 × ${kNm(mnf)}) = ${kNm(phi * reduced)} (${where}, εt = ${(at.maxSteelTensileStrain * 1000).toFixed(2)} ‰; ACI 440.2R-17 10.2.10)`,
-    };
-  }
-  return {
-    value: reduced,
-    nominal: at.moment,
-    frpMoment: mnf,
-    note: `M_Rd = Mns + ψf·Mnf = ${kNm(at.moment - mnf)} + 0.85 × ${kNm(mnf)} = ${kNm(reduced)} from design laws (${where}; ψf of ACI 440.2R-17 10.2.10)`,
   };
 }

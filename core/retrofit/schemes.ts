@@ -16,7 +16,7 @@
  * Units: mm, N/mm (added self-weight), MPa.
  */
 import type { Diagnostic } from '../diagnostics.ts';
-import type { ProjectMaterials } from '../project/resolver.ts';
+import type { MaterialLibrary } from '../materials/library.ts';
 import { STANDARD_GRAVITY } from '../section/analyze.ts';
 import { partOf, shapeHeight } from '../section/build.ts';
 import type { SectionDefinition } from '../section/definition.ts';
@@ -64,7 +64,7 @@ export function faceOf(definition: SectionDefinition, face: 'top' | 'bottom'): {
 }
 
 /** Bars left outside the concrete by spalling, as elements that displace no concrete (and their drawing items). */
-export function exposedElements(exposed: readonly ExposedBars[], materials: ProjectMaterials, shift = 0): { elements: DiscreteElement[]; added: AddedItem[] } {
+export function exposedElements(exposed: readonly ExposedBars[], materials: MaterialLibrary, shift = 0): { elements: DiscreteElement[]; added: AddedItem[] } {
   const elements: DiscreteElement[] = [];
   const added: AddedItem[] = [];
   for (const b of exposed) {
@@ -81,7 +81,7 @@ export function exposedElements(exposed: readonly ExposedBars[], materials: Proj
  * A bonded element (FRP or plate) on the reference section: same outline, new id, the element
  * added (with the reference's exposed bars).
  */
-export function bondedSection(ref: ReferenceSection, id: string, name: string, materials: ProjectMaterials, element: DiscreteElement, item: AddedItem, addedWeight: number): SchemeSection {
+export function bondedSection(ref: ReferenceSection, id: string, name: string, materials: MaterialLibrary, element: DiscreteElement, item: AddedItem, addedWeight: number): SchemeSection {
   const exposed = exposedElements(ref.exposedBars, materials);
   return {
     id,
@@ -101,7 +101,7 @@ export function bondedSection(ref: ReferenceSection, id: string, name: string, m
  * @returns the section, or the problems found (bars outside the layer, unknown materials, shapes
  *          that cannot take a layer)
  */
-export function concreteLayerSection(ref: ReferenceSection, scheme: ConcreteLayerScheme, id: string, materials: ProjectMaterials, at: string): SchemeSection | Diagnostic[] {
+export function concreteLayerSection(ref: ReferenceSection, scheme: ConcreteLayerScheme, id: string, materials: MaterialLibrary, at: string): SchemeSection | Diagnostic[] {
   const problems: Diagnostic[] = [];
   const warnings: string[] = [];
   const t = scheme.thickness;

@@ -1,17 +1,22 @@
 /**
  * Existing beams and retrofit: what the user enters per member (the as-found condition and the
- * strengthening schemes to compare) and the plain, serialisable results.
+ * strengthening schemes to compare), the material and section library variants are derived from,
+ * and the plain data the derivations produce (what the as-found condition changed, the FRP design,
+ * the substrate strain at installation, what a variant adds to a section). The results of running
+ * the variants are core/assessment/results.ts.
  *
  * Internal units throughout: mm, N, MPa, N·mm, strains dimensionless (compression positive).
- * Results are for review by a qualified engineer and defer to local codes and licensed practice.
  */
 import type { MaterialSpec } from '../materials/specs.ts';
 import type { SectionDefinition } from '../section/definition.ts';
 import type { BendingDirection, ElementLimitCause } from '../section/model.ts';
-import type { KeyPointName, UltimateCause } from '../section/results.ts';
-import type { DeflectionCheck, MemberEvent, MemberStatus, PlasticHinge } from '../member/results.ts';
-import type { ShearResult } from '../member/shear.ts';
 import type { InPlaceStrength } from './in-place-strength.ts';
+
+/** The library variants are derived from: the project's material specs and section definitions. */
+export interface Library {
+  readonly materials: readonly MaterialSpec[];
+  readonly sections: readonly SectionDefinition[];
+}
 
 // =====================================================================================================
 // Input: as-found condition
@@ -176,24 +181,8 @@ export interface ConcreteLayerScheme extends SchemeBase {
 export type StrengtheningScheme = FrpScheme | SteelPlateScheme | ConcreteLayerScheme;
 
 // =====================================================================================================
-// Results
+// What derivations produce
 // =====================================================================================================
-
-/** One moment–curvature curve, compact: points, key points and the numbers a comparison needs. */
-export interface CurveSummary {
-  readonly direction: BendingDirection;
-  /** Curvature 1/mm and moment N·mm (magnitudes). */
-  readonly points: readonly { readonly curvature: number; readonly moment: number }[];
-  readonly keyPoints: readonly { readonly name: KeyPointName; readonly curvature: number; readonly moment: number; readonly description: string }[];
-  readonly ultimateCause: UltimateCause | null;
-  readonly status: string;
-  readonly peakMoment: number | null;
-  readonly firstYieldMoment: number | null;
-  readonly curvatureDuctility: number | null;
-  /** Design resistance (ACI φ(Mns + ψf·Mnf), EN M_Rd with ψf on the FRP), N·mm, and how it was found. */
-  readonly designResistance: number | null;
-  readonly designResistanceNote: string;
-}
 
 /** Something a variant adds to or changes in the section, for drawings and the report. */
 export interface AddedItem {
@@ -214,71 +203,6 @@ export interface AddedItem {
   readonly materialId: string;
   /** True for bars left outside the concrete by spalling (no bond along the spall, no displaced concrete). */
   readonly exposed?: boolean;
-}
-
-/** One section of a variant, compact: definition, added items and curves (mm, N·mm, 1/mm). */
-export interface VariantSection {
-  /** Id the variant analysed (derived: `<section>~<member>~<variant>`), and the library section it comes from. */
-  readonly sectionId: string;
-  readonly baseSectionId: string;
-  readonly sectionName: string;
-  /** The derived definition as analysed (outline, bars, hoops), for drawing. */
-  readonly definition: SectionDefinition;
-  readonly added: readonly AddedItem[];
-  readonly curves: readonly CurveSummary[];
-}
-
-/** Flexural strength check of a variant (station by station against each zone's design resistance). */
-export interface FlexuralCheck {
-  readonly combination: string;
-  readonly utilisation: number;
-  readonly pass: boolean;
-  /** Where the utilisation is largest, mm, and the moment and resistance there (N·mm, magnitudes). */
-  readonly position: number;
-  /** Section (as analysed by the variant) at that position. */
-  readonly sectionId: string;
-  readonly direction: BendingDirection;
-  readonly demand: number;
-  readonly resistance: number | null;
-  readonly notes: string;
-}
-
-/** Key results of one beam variant (original design, as found, or strengthened), compact. */
-export interface VariantResult {
-  /** 'original', 'as-found' or the scheme id. */
-  readonly key: string;
-  readonly label: string;
-  readonly status: MemberStatus;
-  readonly governingMode: string;
-  readonly sections: readonly VariantSection[];
-  readonly loadDeflection: {
-    readonly pattern: string;
-    readonly controlPosition: number;
-    /** Load factor, total load (N) and control deflection (mm). */
-    readonly points: readonly { readonly loadFactor: number; readonly totalLoad: number; readonly deflection: number }[];
-    readonly events: readonly MemberEvent[];
-  };
-  readonly capacity: {
-    readonly peakLoadFactor: number | null;
-    /** Largest total load of the pattern on the curve, N. */
-    readonly peakTotalLoad: number | null;
-    readonly ultimateDeflection: number | null;
-    readonly failureCause: string;
-  };
-  readonly ductility: {
-    /** False when shear governs: the values below are kept but not available as capacities. */
-    readonly available: boolean;
-    readonly note: string;
-    readonly yieldDeflection: number | null;
-    readonly ultimateDeflection: number | null;
-    readonly displacementDuctility: number | null;
-    readonly hinges: readonly PlasticHinge[];
-  };
-  readonly strength: FlexuralCheck | null;
-  readonly deflectionChecks: readonly DeflectionCheck[];
-  readonly shear: ShearResult | null;
-  readonly warnings: readonly string[];
-  readonly errors: readonly { readonly path: string; readonly message: string }[];
 }
 
 /** What the as-found condition changed. */
@@ -359,77 +283,3 @@ export interface InstallationStrain {
   readonly otherMethodStrain: number | null;
   readonly formula: string;
 }
-
-/** The ACI 440.2R-17 9.2 check: the unstrengthened member under (1.1 SD + 0.75 LL) if the strengthening is lost. */
-export interface LossOfStrengtheningCheck {
-  readonly combination: string;
-  readonly check: FlexuralCheck;
-  readonly source: string;
-}
-
-/** How a scheme compares with the beam it strengthens (as found, or the design beam). */
-export interface SchemeComparison {
-  readonly referenceKey: string;
-  /** The section and direction that govern the reference beam's strength check. */
-  readonly critical: { readonly baseSectionId: string; readonly direction: BendingDirection };
-  readonly moments: readonly {
-    readonly baseSectionId: string;
-    readonly direction: BendingDirection;
-    /** Peak moments of the curves and design resistances, N·mm; gains in percent. */
-    readonly referencePeak: number | null;
-    readonly schemePeak: number | null;
-    readonly peakGainPercent: number | null;
-    readonly referenceDesign: number | null;
-    readonly schemeDesign: number | null;
-    readonly designGainPercent: number | null;
-    /** Gain of the first-yield moment, percent (what the scheme does at service and up to yield). */
-    readonly firstYieldGainPercent: number | null;
-  }[];
-  readonly memberCapacity: { readonly reference: number | null; readonly scheme: number | null; readonly gainPercent: number | null };
-  readonly curvatureDuctility: { readonly reference: number | null; readonly scheme: number | null; readonly changePercent: number | null };
-  readonly displacementDuctility: { readonly reference: number | null; readonly scheme: number | null; readonly changePercent: number | null };
-  /** Rotation capacity θp,u of the critical hinge, rad. */
-  readonly hingeRotation: { readonly reference: number | null; readonly scheme: number | null; readonly changePercent: number | null };
-  readonly governingMode: { readonly reference: string; readonly scheme: string };
-  /** Plain words: the gain in strength and the change in ductility. */
-  readonly statement: string;
-}
-
-/** Everything reported for one strengthening scheme. */
-export interface SchemeResult {
-  readonly schemeId: string;
-  readonly name: string;
-  readonly kind: StrengtheningScheme['kind'];
-  /** One line: what the scheme adds. */
-  readonly description: string;
-  readonly variant: VariantResult | null;
-  readonly frp: FrpDesign | null;
-  readonly installation: readonly InstallationStrain[];
-  readonly comparison: SchemeComparison | null;
-  /** ACI 440.2R-17 9.2 (bonded schemes only; null for a cast concrete layer). */
-  readonly lossOfStrengthening: LossOfStrengtheningCheck | null;
-  readonly warnings: readonly string[];
-  readonly errors: readonly { readonly path: string; readonly message: string }[];
-}
-
-/** Design, as-found and strengthened variants of a member, compact, with comparisons (MemberResult.retrofit). */
-export interface RetrofitResult {
-  /** Which beam the member's main result describes: the as-found beam when a condition is given. */
-  readonly basis: 'as-found' | 'design';
-  /** The design beam (from the library data), compact. */
-  readonly original: VariantResult | null;
-  /** The as-found condition and beam, when given. */
-  readonly asFound: (AsFoundSummary & { readonly variant: VariantResult | null }) | null;
-  /** Key of the variant the schemes are compared with ('as-found' or 'original'). */
-  readonly referenceKey: string;
-  readonly schemes: readonly SchemeResult[];
-  /** Material specs derived for the analysis (as-found concrete and steel), for the report. */
-  readonly derivedMaterials: readonly MaterialSpec[];
-  readonly caution: string;
-  readonly warnings: readonly string[];
-  readonly errors: readonly { readonly path: string; readonly message: string }[];
-}
-
-/** The caution every retrofit result carries. */
-export const RETROFIT_CAUTION =
-  'As-found and strengthening results are for review by a qualified engineer and defer to local codes and licensed practice; in-place strengths, deterioration data and strengthening details must be confirmed on site.';

@@ -4,11 +4,10 @@
  * value and the allowed range (core/diagnostics.ts); nothing stops at the first.
  */
 import { checkNumber, type Diagnostic } from '../diagnostics.ts';
-import type { MemberDefinition } from '../member/definition.ts';
-import type { Project } from '../project/types.ts';
+import type { BeamDefinition } from '../member/definition.ts';
 import type { SectionDefinition } from '../section/definition.ts';
 import { MINIMUM_CORE_COUNT } from './in-place-strength.ts';
-import type { AsFoundCondition, InstallationLoad, StrengtheningScheme } from './types.ts';
+import type { AsFoundCondition, InstallationLoad, Library, StrengtheningScheme } from './types.ts';
 
 const DEFECT_KINDS = ['section-loss', 'cover-loss'];
 const FACES = ['top', 'bottom', 'left', 'right'];
@@ -19,13 +18,13 @@ function error(out: Diagnostic[], code: Diagnostic['code'], path: string, messag
 }
 
 /** Sections used by the member's zones, in zone order without repeats. */
-export function memberSections(member: MemberDefinition, project: Project): SectionDefinition[] {
+export function memberSections(member: BeamDefinition, library: Library): SectionDefinition[] {
   const ids = [...new Set((member.zones ?? []).map((z) => z.sectionId))];
-  return ids.map((id) => project.sections.find((s) => s.id === id)).filter((s): s is SectionDefinition => s !== undefined);
+  return ids.map((id) => library.sections.find((s) => s.id === id)).filter((s): s is SectionDefinition => s !== undefined);
 }
 
-function kindOf(project: Project, id: unknown): string | undefined {
-  return project.materials.find((m) => m.id === id)?.kind;
+function kindOf(library: Library, id: unknown): string | undefined {
+  return library.materials.find((m) => m.id === id)?.kind;
 }
 
 function checkText(out: Diagnostic[], path: string, value: unknown, required: boolean): void {
@@ -37,9 +36,9 @@ function checkText(out: Diagnostic[], path: string, value: unknown, required: bo
  * Checks an as-found condition.
  * @param path e.g. `members[3] "B-12".asFound`
  */
-export function validateAsFound(condition: AsFoundCondition, member: MemberDefinition, project: Project, path: string): Diagnostic[] {
+export function validateAsFound(condition: AsFoundCondition, member: BeamDefinition, library: Library, path: string): Diagnostic[] {
   const out: Diagnostic[] = [];
-  const sections = memberSections(member, project);
+  const sections = memberSections(member, library);
   const concreteIds = new Set(sections.map((s) => s.concreteId));
   const targeted = new Map<string, number>();
   (condition.cores ?? []).forEach((c, i) => {
@@ -65,7 +64,7 @@ export function validateAsFound(condition: AsFoundCondition, member: MemberDefin
   const steelSeen = new Set<string>();
   (condition.steel ?? []).forEach((s, i) => {
     const at = `${path}.steel[${i}]`;
-    if (kindOf(project, s.steelId) !== 'steel') error(out, 'unknown-reference', `${at}.steelId`, `no steel material with id ${JSON.stringify(s.steelId)} in the library`);
+    if (kindOf(library, s.steelId) !== 'steel') error(out, 'unknown-reference', `${at}.steelId`, `no steel material with id ${JSON.stringify(s.steelId)} in the library`);
     else if (steelSeen.has(s.steelId)) error(out, 'duplicate-id', `${at}.steelId`, `steel "${s.steelId}" already has test data: give one entry per steel`);
     steelSeen.add(s.steelId);
     if (s.source !== 'coupons' && s.source !== 'era-default') error(out, 'unknown-option', `${at}.source`, `must be "coupons" or "era-default", got ${JSON.stringify(s.source)}`);
@@ -127,16 +126,16 @@ function checkInstallation(out: Diagnostic[], at: string, load: InstallationLoad
  * the face, bars inside a new layer — is checked when the scheme is built).
  * @param path e.g. `members[3] "B-12".schemes`
  */
-export function validateSchemes(schemes: readonly StrengtheningScheme[], member: MemberDefinition, project: Project, path: string): Diagnostic[] {
+export function validateSchemes(schemes: readonly StrengtheningScheme[], member: BeamDefinition, library: Library, path: string): Diagnostic[] {
   const out: Diagnostic[] = [];
   if (!Array.isArray(schemes)) {
     error(out, 'schema', path, 'must be a list of strengthening schemes');
     return out;
   }
-  const sectionIds = new Set(memberSections(member, project).map((s) => s.id));
+  const sectionIds = new Set(memberSections(member, library).map((s) => s.id));
   const ids = new Set<string>();
   schemes.forEach((s, i) => {
-    out.push(...validateScheme(s, project, `${path}[${i}]`, sectionIds));
+    out.push(...validateScheme(s, library, `${path}[${i}]`, sectionIds));
     if (typeof s.id === 'string') {
       if (ids.has(s.id)) error(out, 'duplicate-id', `${path}[${i}].id`, `another scheme of the member already has the id "${s.id}"`);
       ids.add(s.id);
@@ -146,7 +145,7 @@ export function validateSchemes(schemes: readonly StrengtheningScheme[], member:
 }
 
 /** Checks one scheme (see validateSchemes). */
-export function validateScheme(s: StrengtheningScheme, project: Project, at: string, sectionIds: ReadonlySet<string>): Diagnostic[] {
+export function validateScheme(s: StrengtheningScheme, library: Library, at: string, sectionIds: ReadonlySet<string>): Diagnostic[] {
   const out: Diagnostic[] = [];
   if (typeof s.id !== 'string' || !/^[A-Za-z0-9_.-]{1,40}$/.test(s.id)) error(out, 'required', `${at}.id`, `must be 1–40 letters, digits, '-', '_' or '.', got ${JSON.stringify(s.id)}`);
   checkText(out, `${at}.name`, s.name, true);
@@ -164,7 +163,7 @@ export function validateScheme(s: StrengtheningScheme, project: Project, at: str
   };
   switch (s.kind) {
     case 'frp':
-      if (kindOf(project, s.frpId) !== 'frp') error(out, 'unknown-reference', `${at}.frpId`, `no FRP material with id ${JSON.stringify(s.frpId)} in the library`);
+      if (kindOf(library, s.frpId) !== 'frp') error(out, 'unknown-reference', `${at}.frpId`, `no FRP material with id ${JSON.stringify(s.frpId)} in the library`);
       checkNumber(out, `${at}.plyThickness`, s.plyThickness, { min: 0, exclusiveMin: true, max: 10, unit: 'mm' });
       if (checkNumber(out, `${at}.plies`, s.plies, { min: 1, max: 10 }) && !Number.isInteger(s.plies)) error(out, 'must-be-integer', `${at}.plies`, `must be a whole number of plies, got ${s.plies}`);
       checkNumber(out, `${at}.width`, s.width, { min: 0, exclusiveMin: true, max: 5000, unit: 'mm' });
@@ -172,7 +171,7 @@ export function validateScheme(s: StrengtheningScheme, project: Project, at: str
       checkInstallation(out, at, s.installation, s.installationStrainMethod);
       break;
     case 'steel-plate':
-      if (kindOf(project, s.steelId) !== 'steel') error(out, 'unknown-reference', `${at}.steelId`, `no steel material with id ${JSON.stringify(s.steelId)} in the library`);
+      if (kindOf(library, s.steelId) !== 'steel') error(out, 'unknown-reference', `${at}.steelId`, `no steel material with id ${JSON.stringify(s.steelId)} in the library`);
       checkNumber(out, `${at}.thickness`, s.thickness, { min: 0, exclusiveMin: true, max: 100, unit: 'mm' });
       checkNumber(out, `${at}.width`, s.width, { min: 0, exclusiveMin: true, max: 5000, unit: 'mm' });
       face(s.face, ['bottom', 'top']);
@@ -182,12 +181,12 @@ export function validateScheme(s: StrengtheningScheme, project: Project, at: str
       if (s.face !== 'top' && s.face !== 'bottom') error(out, 'unknown-option', `${at}.face`, `must be "top" or "bottom", got ${JSON.stringify(s.face)}`);
       checkNumber(out, `${at}.thickness`, s.thickness, { min: 0, exclusiveMin: true, max: 1000, unit: 'mm' });
       if (s.width !== undefined) checkNumber(out, `${at}.width`, s.width, { min: 0, exclusiveMin: true, max: 20000, unit: 'mm' });
-      if (kindOf(project, s.concreteId) !== 'concrete') error(out, 'unknown-reference', `${at}.concreteId`, `no concrete material with id ${JSON.stringify(s.concreteId)} in the library`);
+      if (kindOf(library, s.concreteId) !== 'concrete') error(out, 'unknown-reference', `${at}.concreteId`, `no concrete material with id ${JSON.stringify(s.concreteId)} in the library`);
       if (!Array.isArray(s.bars)) error(out, 'required', `${at}.bars`, 'a list of bar layers is required (it may be empty)');
       else {
         s.bars.forEach((b, j) => {
           const bt = `${at}.bars[${j}]`;
-          if (kindOf(project, b.steelId) !== 'steel') error(out, 'unknown-reference', `${bt}.steelId`, `no steel material with id ${JSON.stringify(b.steelId)} in the library`);
+          if (kindOf(library, b.steelId) !== 'steel') error(out, 'unknown-reference', `${bt}.steelId`, `no steel material with id ${JSON.stringify(b.steelId)} in the library`);
           checkNumber(out, `${bt}.distanceFromFace`, b.distanceFromFace, { min: 0, exclusiveMin: true, max: 1000, unit: 'mm' });
           if (b.count !== undefined || b.diameter !== undefined) {
             if (checkNumber(out, `${bt}.count`, b.count, { min: 1, max: 100 }) && !Number.isInteger(b.count)) error(out, 'must-be-integer', `${bt}.count`, `must be a whole number of bars, got ${b.count}`);

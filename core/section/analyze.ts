@@ -13,7 +13,7 @@ import { elasticPlasticSteel } from '../materials/steel/elastic-plastic.ts';
 import { sustainedConcrete } from '../materials/long-term.ts';
 import { resolveConcrete } from '../materials/build/concrete-defaults.ts';
 import type { SteelMaterial } from '../materials/types.ts';
-import type { ProjectMaterials } from '../project/resolver.ts';
+import type { MaterialLibrary } from '../materials/library.ts';
 import { buildSectionModel, type SectionAdditions } from './build.ts';
 import type { SectionDefinition } from './definition.ts';
 import { elasticProperties, type ElasticProperties } from './elastic.ts';
@@ -71,7 +71,7 @@ function curvesOf(model: SectionModel, options: MomentCurvatureOptions, warnings
 }
 
 /** Analyses a section of the project; never throws for bad input (errors are returned). */
-export function analyzeSection(definition: SectionDefinition, path: string, materials: ProjectMaterials, options: SectionAnalysisOptions): SectionAnalysis {
+export function analyzeSection(definition: SectionDefinition, path: string, materials: MaterialLibrary, options: SectionAnalysisOptions): SectionAnalysis {
   const warnings: string[] = [];
   const empty = (errors: Diagnostic[]): SectionAnalysis => ({
     sectionId: definition.id,

@@ -4,8 +4,9 @@
  * from the library. All problems are collected and thrown together as one InputError.
  */
 import { checkNumber, InputError, type Diagnostic } from '../diagnostics.ts';
-import type { ConcreteMaterial, SteelMaterial, UniaxialMaterial } from '../materials/types.ts';
+import type { ConcreteMaterial, UniaxialMaterial } from '../materials/types.ts';
 import { combineConcrete } from '../materials/concrete/combine.ts';
+import type { MaterialResolver } from '../materials/library.ts';
 import { linearBrittleTension } from '../materials/concrete/tension.ts';
 import { clipProfile } from './elastic.ts';
 import type { ConfinementInput } from '../materials/specs.ts';
@@ -15,12 +16,6 @@ import type { ConcretePart, DiscreteElement, SectionModel } from './model.ts';
 import { shapeOutline, type SectionShape } from './shapes.ts';
 import { chordIntervals, profileMoments, subtractProfile, widthProfile, type Strip } from './width-profile.ts';
 
-/** Looks up materials by id. The project layer implements it over its material library. */
-export interface MaterialResolver {
-  /** Unconfined law, and the confined core law when `confinement` is given and the model supports it. */
-  concrete(id: string, confinement?: ConfinementInput): { cover: ConcreteMaterial; core?: ConcreteMaterial; warnings?: readonly string[] } | undefined;
-  steel(id: string): SteelMaterial | undefined;
-}
 
 /** Extra parts added to a section by a strengthening scheme or an as-found condition (see core/retrofit). */
 export interface SectionAdditions {

@@ -7,12 +7,12 @@
 import { bench, describe } from 'vitest';
 import { benchProject, benchTee } from '../fixtures/bench-sections.ts';
 import { baselineMomentCurvature } from '../fixtures/fibre-baseline.ts';
-import { projectMaterials } from '../../core/project/resolver.ts';
+import { materialLibrary } from '../../core/materials/library.ts';
 import { buildSectionModel } from '../../core/section/build.ts';
 import { momentCurvature } from '../../core/section/moment-curvature.ts';
 
 const project = benchProject();
-const { model } = buildSectionModel(benchTee, projectMaterials(project.materials, 'ACI 318-19'));
+const { model } = buildSectionModel(benchTee, materialLibrary(project.materials, 'ACI 318-19'));
 const yieldStrain = model.elements[0]!.material.yieldStrain!;
 
 describe('moment–curvature of the benchmark T-beam, to ultimate', () => {

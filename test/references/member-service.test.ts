@@ -5,8 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { analyzeProject } from '../../core/analysis.ts';
-import type { Project } from '../../core/project/types.ts';
-import type { MemberDefinition } from '../../core/member/definition.ts';
+import type { Project, MemberDefinition } from '../../core/project/types.ts';
 import type { CodeBasis } from '../../core/materials/specs.ts';
 
 const b = 300;

@@ -4,14 +4,15 @@
  */
 import { describe, expect, it } from 'vitest';
 import { convertUnit } from '../../core/units/convert.ts';
-import { aciDebondingStrainSI, aciDebondingStrainUS, crackedSubstrateStrain, flexuralDesignResistance, frpDesign, frpElement, frpStrainLimit, FRP_FLEXURE_REDUCTION } from '../../core/retrofit/frp.ts';
-import { projectMaterials } from '../../core/project/resolver.ts';
+import { aciDebondingStrainSI, aciDebondingStrainUS, crackedSubstrateStrain, frpDesign, frpElement, frpStrainLimit, FRP_FLEXURE_REDUCTION } from '../../core/retrofit/frp.ts';
+import { materialLibrary } from '../../core/materials/library.ts';
 import { buildSectionModel } from '../../core/section/build.ts';
 import { elasticProperties } from '../../core/section/elastic.ts';
 import { momentCurvature } from '../../core/section/moment-curvature.ts';
 import { analyzeSection } from '../../core/section/analyze.ts';
 import type { MaterialSpec } from '../../core/materials/specs.ts';
 import type { SectionDefinition } from '../../core/section/definition.ts';
+import { flexuralDesignResistance } from '../../core/assessment/resistance.ts';
 
 const psi = (mpa: number) => convertUnit(mpa, 'MPa', 'psi');
 
@@ -65,7 +66,7 @@ describe('ACI 440.2R-17 10.2.3: substrate strain at installation by cracked elas
     expect(kd).toBeCloseTo(203.94, 1);
     const hand = (150e6 * (600 - kd)) / (icr * ec);
     expect(hand).toBeCloseTo(8.006e-4, 6);
-    const materials = projectMaterials([
+    const materials = materialLibrary([
       { kind: 'concrete', id: 'c30', name: 'C30', strength: 30, compressionModel: 'hognestad', tensionModel: 'none' },
       { kind: 'steel', id: 'g420', name: 'Grade 420', model: 'elastic-plastic', yieldStress: 420, ultimateStress: 420 },
     ], 'ACI 318-19');
@@ -124,7 +125,7 @@ const library: MaterialSpec[] = [
   { kind: 'frp', id: 'sheet', name: 'carbon sheet', tensileModulus: 230_000, ruptureStrain: 0.017, environmentalFactor: 0.95 },
   { kind: 'frp', id: 'laminate', name: 'carbon laminate', tensileModulus: 165_000, ruptureStrain: 0.017, environmentalFactor: 0.95 },
 ];
-const materials = projectMaterials(library, 'ACI 318-19');
+const materials = materialLibrary(library, 'ACI 318-19');
 const ec = 4700 * Math.sqrt(30); // ACI 318-19 Eq. 19.2.2.1.b
 
 function strengthened(bars: { count: number; diameter: number; depth: number }, frpId: string, tf: number, bf: number, epsBi: number) {

@@ -4,10 +4,10 @@
  * none hide each other), a span dimension and the zone boundaries. Horizontal scale only: the
  * beam depth is drawn at a fixed height, like a structural sketch. Positions are mm (internal).
  */
-import type { MemberDefinition, MemberLoad, SupportType } from '../../../core/member/definition.ts';
+import type { MemberLoad, SupportType } from '../../../core/member/definition.ts';
 import type { SectionDefinition } from '../../../core/section/definition.ts';
 import { formatQuantity } from '../../../core/units/index.ts';
-import type { UnitSystem } from '../../../core/project/types.ts';
+import type { UnitSystem, MemberDefinition } from '../../../core/project/types.ts';
 import { displaySystem } from '../project/units.ts';
 
 export type SupportSymbol = 'pin' | 'roller' | 'fixed' | 'free';

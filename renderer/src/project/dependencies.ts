@@ -6,8 +6,7 @@
  * held in internal units.
  */
 import type { MaterialSpec } from '../../../core/materials/specs.ts';
-import type { MemberDefinition } from '../../../core/member/definition.ts';
-import type { Project } from '../../../core/project/types.ts';
+import type { Project, MemberDefinition } from '../../../core/project/types.ts';
 import type { SectionDefinition } from '../../../core/section/definition.ts';
 
 /** Ids of the materials a section uses (concrete, bar steels, hoop steel), in that order, without repeats. */

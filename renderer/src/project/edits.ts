@@ -4,8 +4,7 @@
  * Items are addressed by id, fields by a path inside the item.
  */
 import type { MaterialSpec } from '../../../core/materials/specs.ts';
-import type { MemberDefinition } from '../../../core/member/definition.ts';
-import type { Project, ProjectInfo } from '../../../core/project/types.ts';
+import type { Project, ProjectInfo, MemberDefinition } from '../../../core/project/types.ts';
 import type { SectionDefinition } from '../../../core/section/definition.ts';
 import type { SectionShape } from '../../../core/section/shapes.ts';
 import { shapeHeight, webExtent } from '../../../core/section/build.ts';

@@ -5,9 +5,8 @@
  * in, kip/ft) and stored in internal units through core/units.
  */
 import type { CodeBasis, ConcreteSpec, MaterialSpec, SteelSpec } from '../../../core/materials/specs.ts';
-import type { MemberDefinition } from '../../../core/member/definition.ts';
 import { defaultImportService } from '../../../core/project/csv.ts';
-import { DEFAULT_SETTINGS, PROJECT_FORMAT, PROJECT_VERSION, type Project, type UnitSystem } from '../../../core/project/types.ts';
+import { DEFAULT_SETTINGS, PROJECT_FORMAT, PROJECT_VERSION, type Project, type UnitSystem, type MemberDefinition } from '../../../core/project/types.ts';
 import type { SectionDefinition } from '../../../core/section/definition.ts';
 import { fromDisplay } from '../../../core/units/index.ts';
 

@@ -4,8 +4,8 @@
  */
 import type { ConcreteCompressionModel, ConcreteTensionModel, SteelModel, CodeBasis } from '../../../core/materials/specs.ts';
 import type { DeflectionLimitCase, HingeLengthMethod, SupportType } from '../../../core/member/definition.ts';
-import type { MemberStatus } from '../../../core/member/results.ts';
 import type { ShapeKind } from '../../../core/section/shapes.ts';
+import type { MemberStatus } from '../../../core/assessment/results.ts';
 
 export const SUPPORT_LABELS: Readonly<Record<SupportType, string>> = {
   'simply-supported': 'Simply supported',

@@ -2,9 +2,9 @@
  * Sorting and filtering of the project overview (pure, so it can be tested on its own).
  * Values compared are the internal ones of the key results (never formatted text).
  */
-import type { MemberDefinition } from '../../../core/member/definition.ts';
 import type { MemberKeyResults } from '../../../core/project/key-results.ts';
 import type { OverviewColumn, StatusFilter } from '../stores/workspace.ts';
+import type { MemberDefinition } from '../../../core/project/types.ts';
 
 export type RowStatus = MemberKeyResults['status'] | 'pending' | 'outdated';
 

@@ -13,7 +13,6 @@
  */
 import { defineStore } from 'pinia';
 import { computed, reactive, ref, shallowRef, toRaw, watch } from 'vue';
-import type { MemberResult } from '../../../core/member/results.ts';
 import type { MemberKeyResults } from '../../../core/project/key-results.ts';
 import type { Project } from '../../../core/project/types.ts';
 import type { BendingDirection } from '../../../core/section/model.ts';
@@ -24,6 +23,7 @@ import { indexMapOf } from '../workers/paths.ts';
 import type { CoveredItems, ItemDiagnostic, ItemList, WorkerReply } from '../workers/protocol.ts';
 import { useDocumentStore } from './document.ts';
 import { perfMark } from '../components/ids.ts';
+import type { MemberResult } from '../../../core/assessment/results.ts';
 
 /** Delay between an edit and the re-analysis it causes while edits follow each other closely, ms (merges a burst of typing into one job). */
 export const AUTO_ANALYSIS_DELAY_MS = 12;

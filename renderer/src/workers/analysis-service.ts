@@ -10,11 +10,10 @@
 import { analyzeMembers } from '../../../core/analysis.ts';
 import type { Diagnostic } from '../../../core/diagnostics.ts';
 import { InputError } from '../../../core/diagnostics.ts';
-import type { MemberResult } from '../../../core/member/results.ts';
 import { memberKeyResults } from '../../../core/project/key-results.ts';
 import { displayMessage, parseProject, resultsSummaryCsv, serializeProject, validateProjectData } from '../../../core/project/index.ts';
 import type { UnitSystem } from '../../../core/project/types.ts';
-import { projectMaterials } from '../../../core/project/resolver.ts';
+import { materialLibrary } from '../../../core/materials/library.ts';
 import type { Project } from '../../../core/project/types.ts';
 import { buildSectionModel } from '../../../core/section/build.ts';
 import { solveEquilibrium } from '../../../core/section/equilibrium.ts';
@@ -22,6 +21,7 @@ import { directionSign, type SectionModel } from '../../../core/section/model.ts
 import { sectionState } from '../../../core/section/state.ts';
 import { placeDiagnostic, remapPaths } from './paths.ts';
 import type { CoveredItems, IndexMap, WorkerReply, WorkerRequest } from './protocol.ts';
+import type { MemberResult } from '../../../core/assessment/results.ts';
 
 export interface AnalysisService {
   handle(request: WorkerRequest): Promise<void>;
@@ -112,7 +112,7 @@ export function createAnalysisService(post: (reply: WorkerReply) => void): Analy
     const key = JSON.stringify([definition, project.materials, project.info.codeBasis]);
     let model = models.get(key);
     if (!model) {
-      model = buildSectionModel(definition, projectMaterials(project.materials, project.info.codeBasis), `sections[${index}] "${definition.name}"`).model;
+      model = buildSectionModel(definition, materialLibrary(project.materials, project.info.codeBasis), `sections[${index}] "${definition.name}"`).model;
       if (models.size > 50) models.clear();
       models.set(key, model);
     }

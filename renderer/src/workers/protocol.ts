@@ -9,10 +9,10 @@
  */
 import type { Diagnostic } from '../../../core/diagnostics.ts';
 import type { BendingDirection } from '../../../core/section/model.ts';
-import type { MemberResult } from '../../../core/member/results.ts';
 import type { Project } from '../../../core/project/types.ts';
 import type { MemberKeyResults } from '../../../core/project/key-results.ts';
 import type { SectionState } from '../../../core/section/results.ts';
+import type { MemberResult } from '../../../core/assessment/results.ts';
 
 export type ItemList = 'materials' | 'sections' | 'members';
 

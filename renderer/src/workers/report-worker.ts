@@ -10,9 +10,9 @@ import { analyzeMembers, summarize, type ProjectResults } from '../../../core/an
 import { buildReportDocument } from '../../../core/report/document.ts';
 import { reportCharts } from '../../../core/report/figures.ts';
 import { REPORT_FONT_FAMILY, REPORT_FONT_FILES, reportFontDescriptors } from '../../../core/report/fonts.ts';
-import type { MemberResult } from '../../../core/member/results.ts';
 import { chartPng } from '../report/render-charts.ts';
 import type { ReportReply, ReportRequest } from '../report/report-protocol.ts';
+import type { MemberResult } from '../../../core/assessment/results.ts';
 
 interface PdfMakeBrowser {
   addVirtualFileSystem(files: Record<string, string>): void;

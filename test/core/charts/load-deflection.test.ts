@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { loadDeflectionChart } from '../../../core/charts/load-deflection.ts';
-import type { MemberResult } from '../../../core/member/results.ts';
 import { memberResult } from './fixtures.ts';
+import type { MemberResult } from '../../../core/assessment/results.ts';
 
 describe('load–deflection chart', () => {
   it('plots the total pattern load against the control-point deflection in kN and mm', () => {

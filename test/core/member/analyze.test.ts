@@ -4,9 +4,9 @@
 import { describe, expect, it } from 'vitest';
 import { analyzeProject } from '../../../core/analysis.ts';
 import { validateMember } from '../../../core/member/validate.ts';
-import type { MemberDefinition } from '../../../core/member/definition.ts';
-import type { MemberResult } from '../../../core/member/results.ts';
 import { member, smallProject } from '../../fixtures/projects.ts';
+import type { MemberDefinition } from '../../../core/project/types.ts';
+import type { MemberResult } from '../../../core/assessment/results.ts';
 
 /** Every number anywhere in a result is finite (no NaN or Infinity can reach a user). */
 function allFinite(value: unknown, path = 'result'): string[] {

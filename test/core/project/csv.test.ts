@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { csvField, csvText, importMembersCsv, loadDeflectionCsv, momentCurvatureCsv, parseCsv, resultsSummaryCsv, spanDistributionCsv } from '../../../core/project/csv.ts';
-import type { MemberResult } from '../../../core/member/results.ts';
 import type { MomentCurvatureResult } from '../../../core/section/results.ts';
+import type { MemberResult } from '../../../core/assessment/results.ts';
 
 const HEADER_US = 'id,name,span [ft],supports,section,dead [kip/ft],superimposed [kip/ft],live [kip/ft],notes';
 

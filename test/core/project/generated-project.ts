@@ -4,9 +4,9 @@
  * constants of Numerical Recipes, 2nd ed., §7.1 — from memory — so every run builds the same
  * project). SI internal units (mm, N, MPa, N/mm), EN 1992-1-1.
  */
-import type { MemberDefinition, SupportType } from '../../../core/member/definition.ts';
+import type { SupportType } from '../../../core/member/definition.ts';
 import type { SectionDefinition } from '../../../core/section/definition.ts';
-import { DEFAULT_SETTINGS, type Project } from '../../../core/project/types.ts';
+import { DEFAULT_SETTINGS, type Project, type MemberDefinition } from '../../../core/project/types.ts';
 
 function generator(seed: number): () => number {
   let state = seed >>> 0;

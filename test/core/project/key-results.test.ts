@@ -1,8 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { memberKeyResults } from '../../../core/project/key-results.ts';
-import type { DeflectionCheck, MemberResult, PlasticHinge, SectionResult } from '../../../core/member/results.ts';
+import type { DeflectionCheck, PlasticHinge, SectionResult } from '../../../core/member/results.ts';
 import type { MomentCurvatureResult } from '../../../core/section/results.ts';
-import type { MemberDefinition } from '../../../core/member/definition.ts';
+import type { MemberDefinition } from '../../../core/project/types.ts';
+import type { MemberResult } from '../../../core/assessment/results.ts';
 
 function curve(yieldMoment: number, ultimateMoment: number, ductility: number | null): MomentCurvatureResult {
   return {

@@ -4,8 +4,8 @@
  * unit systems, a confined core, a member with an input error, and a large generated project.
  */
 import type { CodeBasis } from '../../../core/materials/specs.ts';
-import type { MemberDefinition, SupportType } from '../../../core/member/definition.ts';
-import type { Project, UnitSystem } from '../../../core/project/types.ts';
+import type { SupportType } from '../../../core/member/definition.ts';
+import type { Project, UnitSystem, MemberDefinition } from '../../../core/project/types.ts';
 import type { SectionDefinition } from '../../../core/section/definition.ts';
 
 const MATERIALS: Project['materials'] = [

@@ -5,8 +5,8 @@
 import { describe, expect, it } from 'vitest';
 import { analyzeProject } from '../../../core/analysis.ts';
 import { shapeHeight } from '../../../core/section/build.ts';
-import type { MemberResult } from '../../../core/member/results.ts';
 import { CORES_AND_DEFECTS, FRP_SCHEME, OVERLAY_SCHEME, PLATE_SCHEME, plainAndFinite, retrofitProject } from './retrofit-project.ts';
+import type { MemberResult } from '../../../core/assessment/results.ts';
 
 const analyse = (...args: Parameters<typeof retrofitProject>): MemberResult => analyzeProject(retrofitProject(...args)).members[0]!;
 

@@ -4,10 +4,10 @@
  */
 import { describe, expect, it } from 'vitest';
 import { analyzeProject } from '../../../core/analysis.ts';
-import type { MemberResult } from '../../../core/member/results.ts';
 import type { AsFoundCondition, StrengtheningScheme } from '../../../core/retrofit/types.ts';
 import { validateAsFound, validateSchemes } from '../../../core/retrofit/validate.ts';
 import { CORES_AND_DEFECTS, FRP_SCHEME, OVERLAY_SCHEME, plainAndFinite, retrofitProject } from './retrofit-project.ts';
+import type { MemberResult } from '../../../core/assessment/results.ts';
 
 const P = 'members[0] "B1"';
 const run = (overrides: Parameters<typeof retrofitProject>[1]): MemberResult => analyzeProject(retrofitProject('ACI 318-19', overrides)).members[0]!;

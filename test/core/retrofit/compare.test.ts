@@ -4,9 +4,9 @@
  * ultimate.
  */
 import { describe, expect, it } from 'vitest';
-import { compareVariants } from '../../../core/retrofit/compact.ts';
-import type { CurveSummary, VariantResult } from '../../../core/retrofit/types.ts';
+import { compareVariants } from '../../../core/assessment/compact.ts';
 import type { UltimateCause } from '../../../core/section/results.ts';
+import type { CurveSummary, VariantResult } from '../../../core/assessment/results.ts';
 
 function variant(key: string, o: { peak: number; design: number; firstYield: number; cause: UltimateCause; phiDuctility: number; mu: number; load: number; theta: number }): VariantResult {
   const curve: CurveSummary = {

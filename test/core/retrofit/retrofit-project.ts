@@ -3,9 +3,8 @@
  * an FRP sheet, an overlay concrete and a plate steel added, and a simply supported 6 m beam on the
  * 300 × 600 section whose as-found condition and schemes each test sets. SI internal units.
  */
-import type { MemberDefinition } from '../../../core/member/definition.ts';
 import type { CodeBasis } from '../../../core/materials/specs.ts';
-import type { Project } from '../../../core/project/types.ts';
+import type { Project, MemberDefinition } from '../../../core/project/types.ts';
 import type { AsFoundCondition, ConcreteLayerScheme, FrpScheme, SteelPlateScheme } from '../../../core/retrofit/types.ts';
 import { member, smallProject } from '../../fixtures/projects.ts';
 

@@ -5,9 +5,9 @@
 import { describe, expect, it, vi } from 'vitest';
 import { analyzeProject } from '../../../core/analysis.ts';
 import { CORES_AND_DEFECTS, FRP_SCHEME, retrofitProject } from './retrofit-project.ts';
-import type * as Shear from '../../../core/member/shear.ts';
+import type * as Shear from '../../../core/assessment/shear.ts';
 
-vi.mock('../../../core/member/shear.ts', async (importOriginal) => ({
+vi.mock('../../../core/assessment/shear.ts', async (importOriginal) => ({
   ...(await importOriginal<typeof Shear>()),
   memberShear: () => {
     throw new Error('simulated defect');

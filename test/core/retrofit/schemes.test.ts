@@ -3,18 +3,19 @@
  */
 import { describe, expect, it } from 'vitest';
 import { analyzeProject, sectionCache } from '../../../core/analysis.ts';
-import { designResistance } from '../../../core/member/strength.ts';
-import { flexuralDesignResistance, substrateStrainFromCurve } from '../../../core/retrofit/frp.ts';
+import { designResistance } from '../../../core/assessment/resistance.ts';
+import { substrateStrainFromCurve } from '../../../core/retrofit/frp.ts';
 import { faceOf } from '../../../core/retrofit/schemes.ts';
 import { STANDARD_GRAVITY } from '../../../core/section/analyze.ts';
 import { strainAtDepth } from '../../../core/section/state.ts';
 import { PLATE_SCHEME, retrofitProject } from './retrofit-project.ts';
+import { flexuralDesignResistance } from '../../../core/assessment/resistance.ts';
 
 const project = retrofitProject();
 const analysis = sectionCache(project)('r1')!;
 
 describe('FRP helpers', () => {
-  it('without FRP the design resistance is exactly the engine\'s (core/member/strength.ts)', () => {
+  it('without FRP the design resistance is exactly the engine\'s (core/assessment/resistance.ts)', () => {
     for (const dir of ['sagging', 'hogging'] as const) {
       expect(flexuralDesignResistance('ACI 318-19', analysis, dir).value).toBe(designResistance('ACI 318-19', analysis.curves[dir], analysis.yieldStrain[dir]).value);
     }

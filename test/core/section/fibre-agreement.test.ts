@@ -7,13 +7,13 @@
 import { describe, expect, it } from 'vitest';
 import { benchProject, benchTee } from '../../fixtures/bench-sections.ts';
 import { baselineMomentCurvature } from '../../fixtures/fibre-baseline.ts';
-import { projectMaterials } from '../../../core/project/resolver.ts';
+import { materialLibrary } from '../../../core/materials/library.ts';
 import { buildSectionModel } from '../../../core/section/build.ts';
 import { momentCurvature } from '../../../core/section/moment-curvature.ts';
 
 describe('engine versus a 1,000-fibre baseline (T-beam, three layers, Mander-confined web)', () => {
   const project = benchProject();
-  const { model } = buildSectionModel(benchTee, projectMaterials(project.materials, 'ACI 318-19'));
+  const { model } = buildSectionModel(benchTee, materialLibrary(project.materials, 'ACI 318-19'));
   const engine = momentCurvature(model, 'sagging', { codeCrushingStrain: 0.003 });
   const yieldStrain = model.elements[0]!.material.yieldStrain!;
   const base = baselineMomentCurvature(model, 0.003, yieldStrain, 2000, 1000);

@@ -9,7 +9,7 @@ import { buildSectionModel } from '../../../core/section/build.ts';
 import type { SectionDefinition } from '../../../core/section/definition.ts';
 import { momentCurvature } from '../../../core/section/moment-curvature.ts';
 import { forceTolerance } from '../../../core/section/equilibrium.ts';
-import { projectMaterials } from '../../../core/project/resolver.ts';
+import { materialLibrary } from '../../../core/materials/library.ts';
 import type { ConcreteSpec, MaterialSpec, SteelSpec } from '../../../core/materials/specs.ts';
 import { testConcrete, testSteel } from '../../fixtures/simple-materials.ts';
 import { sectionCache } from '../../../core/analysis.ts';
@@ -22,7 +22,7 @@ const rect = (b: number, h: number, bottom: { n: number; d: number }, top?: { n:
   id: 'r', name: 'r', shape: { kind: 'rectangle', width: b, height: h }, concreteId: 'c',
   bars: [{ steelId: 's', depth: h - cover, count: bottom.n, diameter: bottom.d }, ...(top ? [{ steelId: 's', depth: cover, count: top.n, diameter: top.d }] : [])],
 });
-const build = (def: SectionDefinition, materials: MaterialSpec[]) => buildSectionModel(def, projectMaterials(materials, 'ACI 318-19')).model;
+const build = (def: SectionDefinition, materials: MaterialSpec[]) => buildSectionModel(def, materialLibrary(materials, 'ACI 318-19')).model;
 
 describe('properties of the moment–curvature curve (random rectangular sections)', () => {
   const sections = fc.record({

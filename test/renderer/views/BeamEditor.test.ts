@@ -6,9 +6,8 @@
 import { createTestingPinia } from '@pinia/testing';
 import { mount } from '@vue/test-utils';
 import { describe, expect, it, vi } from 'vitest';
-import type { MemberDefinition } from '../../../core/member/definition.ts';
 import { demoProjectSI } from '../../../core/project/demo.ts';
-import type { Project } from '../../../core/project/types.ts';
+import type { Project, MemberDefinition } from '../../../core/project/types.ts';
 import { createFakeHost, setHostForTesting } from '../../../renderer/src/host/index.ts';
 import { useAnalysisStore } from '../../../renderer/src/stores/analysis.ts';
 import { useDocumentStore } from '../../../renderer/src/stores/document.ts';

@@ -8,13 +8,13 @@ import { defineComponent, h, type PropType } from 'vue';
 import { beforeAll, describe, expect, it, vi } from 'vitest';
 import { analyzeMembers } from '../../../core/analysis.ts';
 import type { ChartSpec } from '../../../core/charts/types.ts';
-import type { MemberResult } from '../../../core/member/results.ts';
 import { demoProjectSI } from '../../../core/project/demo.ts';
 import { memberKeyResults } from '../../../core/project/key-results.ts';
 import { useAnalysisStore } from '../../../renderer/src/stores/analysis.ts';
 import MomentCurvaturePanel from '../../../renderer/src/views/member/MomentCurvaturePanel.vue';
 import { setWorkerFactory } from '../../../renderer/src/workers/engine.ts';
 import { silentFactory, testEnvironment } from '../support.ts';
+import type { MemberResult } from '../../../core/assessment/results.ts';
 
 /** Stands in for the canvas chart: shows the spec's title and lets the test click a plotted point. */
 const ChartStub = defineComponent({

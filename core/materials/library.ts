@@ -1,15 +1,22 @@
 /**
- * Material lookup for one project: builds each material once (per confinement) and reports
- * problems with the material's path in the project file.
+ * Material lookup for a list of specs (a project's material library, or one with derived as-found
+ * specs added): builds each material once (per confinement) and reports problems with the
+ * material's path in the project file.
  */
 import type { Diagnostic } from '../diagnostics.ts';
 import { InputError } from '../diagnostics.ts';
-import { buildConcrete, buildSteel, buildFrp } from '../materials/factory.ts';
-import type { CodeBasis, ConcreteSpec, ConfinementInput, FrpSpec, MaterialSpec, SteelSpec } from '../materials/specs.ts';
-import type { ConcreteMaterial, FrpMaterial, SteelMaterial } from '../materials/types.ts';
-import type { MaterialResolver } from '../section/build.ts';
+import { buildConcrete, buildSteel, buildFrp } from './factory.ts';
+import type { CodeBasis, ConcreteSpec, ConfinementInput, FrpSpec, MaterialSpec, SteelSpec } from './specs.ts';
+import type { ConcreteMaterial, FrpMaterial, SteelMaterial } from './types.ts';
 
-export interface ProjectMaterials extends MaterialResolver {
+/** Looks up materials by id (what the section builder needs). */
+export interface MaterialResolver {
+  /** Unconfined law, and the confined core law when `confinement` is given and the model supports it. */
+  concrete(id: string, confinement?: ConfinementInput): { cover: ConcreteMaterial; core?: ConcreteMaterial; warnings?: readonly string[] } | undefined;
+  steel(id: string): SteelMaterial | undefined;
+}
+
+export interface MaterialLibrary extends MaterialResolver {
   concreteSpec(id: string): ConcreteSpec | undefined;
   steelSpec(id: string): SteelSpec | undefined;
   frp(id: string): FrpMaterial | undefined;
@@ -23,8 +30,8 @@ function materialPath(specs: readonly MaterialSpec[], id: string): string {
   return `materials[${i}] "${id}"`;
 }
 
-/** A caching resolver over a project's material library. */
-export function projectMaterials(specs: readonly MaterialSpec[], code: CodeBasis): ProjectMaterials {
+/** A caching resolver over a list of material specs. */
+export function materialLibrary(specs: readonly MaterialSpec[], code: CodeBasis): MaterialLibrary {
   const problems: Diagnostic[] = [];
   const reported = new Set<string>();
   const concreteCache = new Map<string, { cover: ConcreteMaterial; core?: ConcreteMaterial; warnings: string[] } | undefined>();

@@ -37,11 +37,11 @@ import type { BendingDirection, DiscreteElement, SectionModel } from '../section
 import { tensionSteel } from '../section/moment-curvature.ts';
 import { faces } from '../section/state.ts';
 import { stripWidthAt } from '../section/width-profile.ts';
-import { buildBeamModel, type ZoneResponse } from './beam-model.ts';
-import type { LoadFactors, MemberDefinition, MemberLoad, SupportType } from './definition.ts';
-import { solveStatic } from './nonlinear.ts';
-import { plainConcreteResponse } from './section-response.ts';
-import { releasedMoment, toStaticLoad, totalLoad, type StaticLoad } from './statics.ts';
+import { buildBeamModel, type ZoneResponse } from '../member/beam-model.ts';
+import type { BeamDefinition, LoadFactors, MemberLoad, SupportType } from '../member/definition.ts';
+import { solveStatic } from '../member/nonlinear.ts';
+import { plainConcreteResponse } from '../member/section-response.ts';
+import { releasedMoment, toStaticLoad, totalLoad, type StaticLoad } from '../member/statics.ts';
 
 // =====================================================================================================
 // ACI 318-19
@@ -546,7 +546,7 @@ export interface MemberLoadSets {
  * The member's loads by case, as core/member/analyze.ts assembles them: self-weight per zone (N/mm,
  * unless switched off), the user's dead, superimposed and live loads.
  */
-export function memberLoadSets(member: MemberDefinition, zoneSelfWeights: readonly number[]): MemberLoadSets {
+export function memberLoadSets(member: BeamDefinition, zoneSelfWeights: readonly number[]): MemberLoadSets {
   const span = member.span;
   const byCase = (c: MemberLoad['loadCase']) => member.loads.filter((l) => l.loadCase === c).map((l) => toStaticLoad(l, span));
   const selfWeight: StaticLoad[] = (member.includeSelfWeight ?? true) ? member.zones.map((z, i) => ({ kind: 'uniform', w: zoneSelfWeights[i] ?? 0, from: z.from, to: z.to })) : [];
@@ -617,7 +617,7 @@ export interface ElasticZone {
  * with the zones' stiffness — the engine's compatibility solution (core/member/nonlinear.ts
  * solveStatic) on linear responses, as the flexural strength check uses. 0 at a pin or free end.
  */
-export function elasticSupportMoments(member: MemberDefinition, zones: readonly ElasticZone[], loads: readonly StaticLoad[], segments: number): { left: number; right: number } {
+export function elasticSupportMoments(member: BeamDefinition, zones: readonly ElasticZone[], loads: readonly StaticLoad[], segments: number): { left: number; right: number } {
   if (member.supports === 'simply-supported' || member.supports === 'cantilever') return { left: 0, right: 0 };
   const dummy = { effectiveDepth: 1, barDiameter: 0, yieldStress: 1, ultimateStress: 1 };
   const responses: ZoneResponse[] = zones.map((z) => {
@@ -696,7 +696,7 @@ export interface ShearResult {
 /** Inputs of memberShear. */
 export interface MemberShearInput {
   readonly code: CodeBasis;
-  readonly member: MemberDefinition;
+  readonly member: BeamDefinition;
   /** One per member zone, in the member's zone order. */
   readonly zones: readonly ShearZone[];
   /** Strength combination factors and their description. */

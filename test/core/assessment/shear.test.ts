@@ -4,15 +4,14 @@
  */
 import { describe, expect, it } from 'vitest';
 import { analyzeProject, sectionCache } from '../../../core/analysis.ts';
-import type { MemberDefinition } from '../../../core/member/definition.ts';
-import { elasticSupportMoments, memberShear, releasedShear, type ShearZone } from '../../../core/member/shear.ts';
-import { projectMaterials } from '../../../core/project/resolver.ts';
-import type { Project } from '../../../core/project/types.ts';
+import { elasticSupportMoments, memberShear, releasedShear, type ShearZone } from '../../../core/assessment/shear.ts';
+import { materialLibrary } from '../../../core/materials/library.ts';
+import type { Project, MemberDefinition } from '../../../core/project/types.ts';
 import { member, smallProject } from '../../fixtures/projects.ts';
 
 function zonesOf(project: Project, m: MemberDefinition): ShearZone[] {
   const section = sectionCache(project);
-  const materials = projectMaterials(project.materials, project.info.codeBasis);
+  const materials = materialLibrary(project.materials, project.info.codeBasis);
   return m.zones.map((z) => {
     const definition = project.sections.find((s) => s.id === z.sectionId)!;
     return { from: z.from, to: z.to, definition, analysis: section(z.sectionId)!, concrete: materials.concreteSpec(definition.concreteId)!, stirrupYield: materials.steel(definition.hoops!.steelId)!.yieldStress };

@@ -7,41 +7,18 @@
  */
 import { SI_TEXT, type QuantityText } from '../units/text.ts';
 import type { CodeBasis } from '../materials/specs.ts';
-import { defaultStrengthFactors } from '../member/analyze.ts';
-import type { LoadFactors, MemberDefinition } from '../member/definition.ts';
-import type { MemberResult, PlasticHinge } from '../member/results.ts';
-import { combinedLoads, elasticSupportMoments, memberForcesAt, memberLoadSets, type ElasticZone, type ShearResult, type ShearZone } from '../member/shear.ts';
+import type { BeamDefinition, LoadFactors } from '../member/definition.ts';
+import type { PlasticHinge } from '../member/results.ts';
 import type { SectionAnalysis } from '../section/analyze.ts';
-import type { SectionDefinition } from '../section/definition.ts';
 import type { BendingDirection } from '../section/model.ts';
 import type { MomentCurvatureResult } from '../section/results.ts';
-import { flexuralDesignResistance } from './frp.ts';
-import type { AddedItem, CurveSummary, FlexuralCheck, SchemeComparison, VariantResult } from './types.ts';
-
-/** One analysed beam variant (internal to core/retrofit). */
-export interface VariantRun {
-  readonly key: string;
-  readonly label: string;
-  /** The member as analysed: zones point at the variant's section ids; added self-weight included. */
-  readonly member: MemberDefinition;
-  readonly analyses: ReadonlyMap<string, SectionAnalysis>;
-  readonly definitions: ReadonlyMap<string, SectionDefinition>;
-  /** Variant section id → library section id. */
-  readonly baseOf: ReadonlyMap<string, string>;
-  readonly added: ReadonlyMap<string, readonly AddedItem[]>;
-  readonly result: MemberResult;
-  readonly shear: ShearResult | null;
-  readonly zones: readonly ShearZone[];
-}
+import { flexuralDesignResistance } from './resistance.ts';
+import type { CurveSummary, FlexuralCheck, MemberResult, SchemeComparison, VariantResult } from './results.ts';
+import { combinedLoads, elasticSupportMoments, memberForcesAt, memberLoadSets, type ElasticZone, type ShearResult } from './shear.ts';
+import { strengthCombination } from './combinations.ts';
+import type { Setup, VariantRun } from './variant.ts';
 
 const finite = (x: number | null | undefined): number | null => (x !== null && x !== undefined && Number.isFinite(x) ? x : null);
-
-/** The strength combination of a member and its description, as core/member/analyze.ts writes it. */
-export function strengthCombination(member: MemberDefinition, code: CodeBasis): { factors: LoadFactors; text: string } {
-  const factors = member.strengthFactors ?? defaultStrengthFactors(code);
-  const text = code === 'ACI 318-19' ? `${factors.dead}D + ${factors.live}L (ACI 318-19 5.3.1)` : `${factors.dead}G + ${factors.live}Q (EN 1990 6.10)`;
-  return { factors, text };
-}
 
 /** A compact curve with its design resistance. */
 export function curveSummary(code: CodeBasis, analysis: SectionAnalysis, curve: MomentCurvatureResult, text: QuantityText = SI_TEXT): CurveSummary {
@@ -66,7 +43,7 @@ export function curveSummary(code: CodeBasis, analysis: SectionAnalysis, curve: 
  * as the engine's strength check) against the design resistance of the zone and direction there
  * (flexuralDesignResistance: ψf on FRP). Null when the member has no zones to check.
  */
-export function flexuralCheck(code: CodeBasis, member: MemberDefinition, zones: readonly { from: number; to: number; analysis: SectionAnalysis }[], factors: LoadFactors, combination: string, segments: number, text: QuantityText = SI_TEXT): FlexuralCheck | null {
+export function flexuralCheck(code: CodeBasis, member: BeamDefinition, zones: readonly { from: number; to: number; analysis: SectionAnalysis }[], factors: LoadFactors, combination: string, segments: number, text: QuantityText = SI_TEXT): FlexuralCheck | null {
   if (zones.length === 0 || zones.some((z) => !z.analysis.model || !z.analysis.elastic)) return null;
   const span = member.span;
   const sets = memberLoadSets(member, zones.map((z) => z.analysis.selfWeight));
@@ -283,4 +260,18 @@ export function compareVariants(reference: VariantResult, scheme: VariantResult,
     governingMode: { reference: reference.governingMode, scheme: scheme.governingMode },
     statement: `${statement}.`,
   };
+}
+
+/** The station-by-station strength check of a variant (ψf on FRP). */
+export function strengthOf(setup: Setup, run: VariantRun) {
+  if (run.result.status === 'input-error') return null;
+  const { factors, text } = strengthCombination(run.member, setup.code);
+  return flexuralCheck(setup.code, run.member, run.zones, factors, text, setup.segments, setup.text);
+}
+
+/** Compact result of a run, with its sentence. */
+export function compactOf(setup: Setup, run: VariantRun, prefix: string): VariantResult {
+  const strength = strengthOf(setup, run);
+  const sentence = composeGoverningMode(variantFlexureSentence(run.result, strength, run.member.capacity.pattern, setup.text), run.shear, prefix);
+  return compactVariant(setup.code, run, strength, sentence);
 }

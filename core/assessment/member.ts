@@ -1,0 +1,236 @@
+/**
+ * A member of the project assessed as a whole: the design beam (library data) and, for an existing
+ * beam, its as-found beam and each strengthening scheme — each run as a variant (variant.ts: the
+ * sections, the member engine, the strength check and shear), derived by core/retrofit, and
+ * compared (compact.ts):
+ *
+ *   design beam (library data) ───────────────────┐
+ *   as-found beam (derived by core/retrofit) ──────┼─ runVariant → compact results and comparisons
+ *   each scheme (derived from the as-found beam) ──┘
+ *
+ * The member's main result describes the beam as it is: the as-found beam when a valid condition
+ * is given, otherwise the design beam. `retrofit` holds the design beam, the as-found beam and each
+ * scheme compactly, with curve points for shared charts. Input problems of the condition or of a
+ * scheme are reported on the member (path, value, range) without losing the other results; a
+ * scheme that cannot be built is reported and the others go on.
+ *
+ * Pure and deterministic. Units: mm, N, N·mm, MPa.
+ */
+import { errorsOf, warningsOf, type Problem } from '../diagnostics.ts';
+import { materialLibrary, type MaterialLibrary } from '../materials/library.ts';
+import type { MemberContext } from '../member/analyze.ts';
+import type { BeamDefinition, MemberLoad } from '../member/definition.ts';
+import { deriveAsFound, type AsFoundDerivation } from '../retrofit/as-found.ts';
+import { exposedElements } from '../retrofit/schemes.ts';
+import type { AddedItem, AsFoundCondition, Library, StrengtheningScheme } from '../retrofit/types.ts';
+import { validateAsFound, validateSchemes } from '../retrofit/validate.ts';
+import type { SectionAnalysis } from '../section/analyze.ts';
+import type { SectionAdditions } from '../section/build.ts';
+import type { SectionDefinition } from '../section/definition.ts';
+import type { QuantityText } from '../units/text.ts';
+import { compactOf, composeGoverningMode } from './compact.ts';
+import { RETROFIT_CAUTION, type MemberResult, type RetrofitResult, type SchemeResult } from './results.ts';
+import { buildScheme, describeScheme } from './scheme.ts';
+import { assessBeam, librarySections, runVariant, type SectionSettings, type Setup, type VariantRun } from './variant.ts';
+
+/** What is known of an existing beam as it stands (core/retrofit). */
+export interface RetrofitInput {
+  readonly asFound?: AsFoundCondition;
+  readonly schemes?: readonly StrengtheningScheme[];
+}
+
+/** A member to assess: the beam and, for an existing beam, its as-found condition and schemes. */
+export type AssessedMember = BeamDefinition & RetrofitInput;
+
+/** What the assessment of one member needs from its project. */
+export interface AssessmentContext extends MemberContext {
+  /** The project's materials and sections (variants derive from them). */
+  readonly library: Library;
+  readonly sectionSettings: SectionSettings;
+  /** Quantities in sentences, in the project's display units. */
+  readonly text: QuantityText;
+}
+
+/** A member zone list pointing at other section ids. */
+function withZones(member: BeamDefinition, idOf: (libraryId: string) => string, extraLoads: readonly MemberLoad[] = []): BeamDefinition {
+  return { ...member, zones: member.zones.map((z) => ({ ...z, sectionId: idOf(z.sectionId) })), loads: [...member.loads, ...extraLoads] };
+}
+
+/** Analysis of an as-found derivation as a variant. */
+function asFoundRun(setup: Setup, member: BeamDefinition, derivation: AsFoundDerivation, key: string, label: string): { run: VariantRun; materials: MaterialLibrary } {
+  const materials = materialLibrary([...setup.library.materials, ...derivation.materials], setup.code);
+  const definitions = new Map<string, SectionDefinition>();
+  const baseOf = new Map<string, string>();
+  const additions = new Map<string, SectionAdditions>();
+  const added = new Map<string, readonly AddedItem[]>();
+  for (const d of derivation.sections.values()) {
+    definitions.set(d.id, d.definition);
+    baseOf.set(d.id, d.baseSectionId);
+    const exposed = exposedElements(d.exposedBars, materials);
+    if (exposed.elements.length > 0) {
+      additions.set(d.id, { elements: exposed.elements });
+      added.set(d.id, exposed.added);
+    }
+  }
+  const variantMember = withZones(member, (id) => derivation.sections.get(id)?.id ?? id);
+  return { run: runVariant(setup, { key, label, member: variantMember, definitions, baseOf, additions, added, materials }), materials };
+}
+
+/**
+ * Assesses a member with its shear and, when given, its as-found condition and strengthening
+ * schemes. Returns the member's result (see the module comment) with `shear` and `retrofit`.
+ * Throws only for a defect in the design beam's own analysis (core/analysis.ts reports it on the
+ * member); a defect in the shear or retrofit analysis is reported on the design beam's result.
+ * @param context the project's shared section analyses, library and settings
+ */
+export function assessMember(member: AssessedMember, context: AssessmentContext): MemberResult {
+  const design = assessBeam(member, context);
+  try {
+    return extend(member, context, design);
+  } catch (error) {
+    // A defect in the shear or retrofit analysis must not cost the member its flexural results.
+    const message = `internal error in the shear or retrofit analysis (please report): ${String(error instanceof Error ? error.message : error)}`;
+    return { ...design, errors: [...design.errors, { path: context.path, message }] };
+  }
+}
+
+function extend(member: AssessedMember, context: AssessmentContext, design: MemberResult): MemberResult {
+  const library = context.library;
+  const setup: Setup = { library, code: context.code, path: context.path, segments: context.segments, sectionSettings: context.sectionSettings, text: context.text };
+  const hasRetrofit = member.asFound !== undefined || (member.schemes !== undefined && member.schemes.length > 0);
+  if (design.status === 'input-error') {
+    if (!hasRetrofit) return design;
+    const problems = [
+      ...(member.asFound ? validateAsFound(member.asFound, member, library, `${context.path}.asFound`) : []),
+      ...(member.schemes ? validateSchemes(member.schemes, member, library, `${context.path}.schemes`) : []),
+    ];
+    return { ...design, errors: [...design.errors, ...errorsOf(problems)] };
+  }
+  const libraryMaterials = materialLibrary(library.materials, setup.code);
+  const designSections = librarySections(member, library);
+  const designAnalyses = new Map<string, SectionAnalysis>();
+  for (const id of designSections.keys()) {
+    const a = context.section(id);
+    if (a) designAnalyses.set(id, a);
+  }
+  const designRun = runVariant(setup, {
+    key: 'original', label: 'Design beam', member, definitions: designSections, baseOf: new Map([...designSections.keys()].map((id) => [id, id])),
+    materials: libraryMaterials, analyses: designAnalyses, result: design,
+  });
+  if (!hasRetrofit) return finishMain(design, designRun, null);
+
+  const warnings: string[] = [];
+  const errors: Problem[] = [];
+
+  // --- as found ------------------------------------------------------------------------------------
+  let derivation: AsFoundDerivation | null = null;
+  let found: { run: VariantRun; materials: MaterialLibrary } | null = null;
+  if (member.asFound) {
+    derivation = deriveAsFound(member, member.asFound, library, setup.code, context.path);
+    errors.push(...errorsOf(derivation.diagnostics));
+    warnings.push(...warningsOf(derivation.diagnostics));
+    if (errors.length === 0) {
+      if (derivation.unchanged) warnings.push(`${context.path}.asFound: gives no core, steel or defect data: the as-found beam is the design beam.`);
+      else {
+        found = asFoundRun(setup, member, derivation, 'as-found', 'As found');
+        if (found.run.result.status === 'input-error') {
+          // The engine refused a derived section: report why and keep the design beam as the result.
+          errors.push(...found.run.result.errors.map((e) => ({ path: e.path, message: `as-found beam: ${e.message}` })));
+          found = null;
+        }
+      }
+    }
+  }
+  const reference = found?.run ?? designRun;
+  const referenceMaterials = found?.materials ?? libraryMaterials;
+  const designCompact = compactOf(setup, designRun, 'Design beam: ');
+  const referenceCompact = found ? compactOf(setup, found.run, 'As found: ') : designCompact;
+
+  // --- schemes --------------------------------------------------------------------------------------
+  const schemeResults: SchemeResult[] = [];
+  const schemes = member.schemes ?? [];
+  if (schemes.length > 0) {
+    const schemeProblems = validateSchemes(schemes, member, library, `${context.path}.schemes`);
+    const asFoundBroken = member.asFound !== undefined && errors.length > 0;
+    let repaired: { derivation: AsFoundDerivation; run: VariantRun; materials: MaterialLibrary } | null | undefined;
+    const repairedReference = () => {
+      if (repaired !== undefined) return repaired;
+      if (!member.asFound || !derivation || derivation.unchanged) return (repaired = null);
+      const hasSpalls = (member.asFound.defects ?? []).some((d) => d.kind === 'cover-loss');
+      if (!hasSpalls) return (repaired = null);
+      const d = deriveAsFound(member, member.asFound, library, setup.code, context.path, { repairSpalls: true, variant: 'repaired' });
+      if (d.diagnostics.some((x) => x.severity === 'error')) return (repaired = null);
+      const r = asFoundRun(setup, member, d, 'repaired', 'As found, spalls repaired');
+      return (repaired = { derivation: d, ...r });
+    };
+    schemes.forEach((scheme, index) => {
+      const at = `${context.path}.schemes[${index}]`;
+      const own = schemeProblems.filter((p) => p.path === at || p.path.startsWith(`${at}.`) || p.path.startsWith(`${at}[`));
+      const description = describeScheme(scheme);
+      const base: SchemeResult = {
+        schemeId: String(scheme.id), name: String(scheme.name), kind: scheme.kind, description,
+        variant: null, frp: null, installation: [], comparison: null, lossOfStrengthening: null,
+        warnings: warningsOf(own), errors: errorsOf(own),
+      };
+      if (asFoundBroken) {
+        schemeResults.push({ ...base, errors: [...base.errors, { path: at, message: 'not analysed: fix the as-found condition first' }] });
+        return;
+      }
+      if (base.errors.length > 0) {
+        schemeResults.push(base);
+        return;
+      }
+      const rep = scheme.repairSpalls ? repairedReference() : null;
+      const ref = rep?.run ?? reference;
+      const refMaterials = rep?.materials ?? referenceMaterials;
+      const refDerivation = rep?.derivation ?? (found ? derivation : null);
+      schemeResults.push(buildScheme(setup, {
+        member, scheme, at, base,
+        reference: { run: ref, materials: refMaterials, derivation: refDerivation },
+        comparison: { run: reference, compact: referenceCompact },
+        derivedSpecs: found ? [...(derivation?.materials ?? []), ...(rep?.derivation.materials ?? [])] : [],
+      }));
+    });
+  }
+
+  const asFoundResult: RetrofitResult['asFound'] = member.asFound && derivation
+    ? { ...derivation.summary, variant: found ? referenceCompact : null }
+    : null;
+  const retrofit: RetrofitResult = {
+    basis: found ? 'as-found' : 'design',
+    original: designCompact,
+    asFound: asFoundResult,
+    referenceKey: found ? 'as-found' : 'original',
+    schemes: schemeResults,
+    derivedMaterials: derivation?.materials ?? [],
+    caution: RETROFIT_CAUTION,
+    warnings,
+    errors,
+  };
+  const main = found ? found.run.result : design;
+  const mainRun = found ? found.run : designRun;
+  const schemeErrors = schemeResults.flatMap((s) => s.errors);
+  const result = finishMain(main, mainRun, retrofit, found ? 'As found: ' : '');
+  return {
+    ...result,
+    warnings: [...result.warnings, ...warnings, ...schemeResults.flatMap((s) => s.warnings.map((w) => `Scheme "${s.name}": ${w}`))],
+    errors: [...result.errors, ...errors, ...schemeErrors],
+  };
+}
+
+/** The member's main result with shear, the extended governing mode, status and retrofit data. */
+function finishMain(result: MemberResult, run: VariantRun, retrofit: RetrofitResult | null, prefix = ''): MemberResult {
+  const shear = run.shear;
+  const status = result.status === 'ok' && shear?.factored && !shear.factored.pass ? 'check-fails' : result.status;
+  const extra: string[] = [...(shear?.warnings ?? [])];
+  if (shear && !shear.flexuralDuctilityAvailable) extra.push('Shear governs before the flexural mechanism: the displacement ductility and plastic hinge rotations are not available (kept for reference only).');
+  return {
+    ...result,
+    status,
+    governingMode: composeGoverningMode(result.governingMode, shear, prefix),
+    warnings: [...result.warnings, ...extra],
+    ...(shear ? { shear } : {}),
+    ...(retrofit ? { retrofit } : {}),
+  };
+}
+

@@ -1,0 +1,202 @@
+/**
+ * What the assessment reports for a member: the member engine's beam result (core/member) with the
+ * strength checks, the shear check, the status and the one-sentence governing mode — and, for an
+ * existing beam, its design, as-found and strengthened variants compactly with their comparison.
+ * Plain, serialisable data; every number the UI, CLI and report show comes from here and none of
+ * them recomputes. Internal units: mm, N, N·mm, rad, 1/mm.
+ */
+import type { MaterialSpec } from '../materials/specs.ts';
+import type { BeamResult, DeflectionCheck, MemberEvent, PlasticHinge } from '../member/results.ts';
+import type { AddedItem, AsFoundSummary, FrpDesign, InstallationStrain, StrengtheningScheme } from '../retrofit/types.ts';
+import type { SectionDefinition } from '../section/definition.ts';
+import type { BendingDirection } from '../section/model.ts';
+import type { KeyPointName, UltimateCause } from '../section/results.ts';
+import type { ShearResult } from './shear.ts';
+
+export type MemberStatus = 'ok' | 'check-fails' | 'not-converged' | 'input-error';
+
+export interface StrengthCheck {
+  readonly combination: string;
+  /** Factored moment demands, N·mm (magnitudes) and where. */
+  readonly saggingDemand: number;
+  readonly saggingPosition: number;
+  readonly hoggingDemand: number;
+  readonly hoggingPosition: number;
+  /** Design flexural resistance (φMn or M_Rd), N·mm, at those positions. */
+  readonly saggingResistance: number | null;
+  readonly hoggingResistance: number | null;
+  readonly utilisation: number;
+  readonly pass: boolean;
+  readonly notes: string;
+}
+
+/** Everything reported for one member. */
+export interface MemberResult extends BeamResult {
+  readonly status: MemberStatus;
+  /** One sentence: what governs the member. */
+  readonly governingMode: string;
+  readonly strength: StrengthCheck | null;
+  /** Shear capacity and demand, flexure- or shear-governed (core/assessment/shear.ts). */
+  readonly shear?: ShearResult;
+  /** Design, as-found and strengthened variants (core/assessment/member.ts). */
+  readonly retrofit?: RetrofitResult;
+}
+
+// =====================================================================================================
+// Existing beams: variants and their comparison
+// =====================================================================================================
+
+/** One moment–curvature curve, compact: points, key points and the numbers a comparison needs. */
+export interface CurveSummary {
+  readonly direction: BendingDirection;
+  /** Curvature 1/mm and moment N·mm (magnitudes). */
+  readonly points: readonly { readonly curvature: number; readonly moment: number }[];
+  readonly keyPoints: readonly { readonly name: KeyPointName; readonly curvature: number; readonly moment: number; readonly description: string }[];
+  readonly ultimateCause: UltimateCause | null;
+  readonly status: string;
+  readonly peakMoment: number | null;
+  readonly firstYieldMoment: number | null;
+  readonly curvatureDuctility: number | null;
+  /** Design resistance (ACI φ(Mns + ψf·Mnf), EN M_Rd with ψf on the FRP), N·mm, and how it was found. */
+  readonly designResistance: number | null;
+  readonly designResistanceNote: string;
+}
+
+/** One section of a variant, compact: definition, added items and curves (mm, N·mm, 1/mm). */
+export interface VariantSection {
+  /** Id the variant analysed (derived: `<section>~<member>~<variant>`), and the library section it comes from. */
+  readonly sectionId: string;
+  readonly baseSectionId: string;
+  readonly sectionName: string;
+  /** The derived definition as analysed (outline, bars, hoops), for drawing. */
+  readonly definition: SectionDefinition;
+  readonly added: readonly AddedItem[];
+  readonly curves: readonly CurveSummary[];
+}
+
+/** Flexural strength check of a variant (station by station against each zone's design resistance). */
+export interface FlexuralCheck {
+  readonly combination: string;
+  readonly utilisation: number;
+  readonly pass: boolean;
+  /** Where the utilisation is largest, mm, and the moment and resistance there (N·mm, magnitudes). */
+  readonly position: number;
+  /** Section (as analysed by the variant) at that position. */
+  readonly sectionId: string;
+  readonly direction: BendingDirection;
+  readonly demand: number;
+  readonly resistance: number | null;
+  readonly notes: string;
+}
+
+/** Key results of one beam variant (original design, as found, or strengthened), compact. */
+export interface VariantResult {
+  /** 'original', 'as-found' or the scheme id. */
+  readonly key: string;
+  readonly label: string;
+  readonly status: MemberStatus;
+  readonly governingMode: string;
+  readonly sections: readonly VariantSection[];
+  readonly loadDeflection: {
+    readonly pattern: string;
+    readonly controlPosition: number;
+    /** Load factor, total load (N) and control deflection (mm). */
+    readonly points: readonly { readonly loadFactor: number; readonly totalLoad: number; readonly deflection: number }[];
+    readonly events: readonly MemberEvent[];
+  };
+  readonly capacity: {
+    readonly peakLoadFactor: number | null;
+    /** Largest total load of the pattern on the curve, N. */
+    readonly peakTotalLoad: number | null;
+    readonly ultimateDeflection: number | null;
+    readonly failureCause: string;
+  };
+  readonly ductility: {
+    /** False when shear governs: the values below are kept but not available as capacities. */
+    readonly available: boolean;
+    readonly note: string;
+    readonly yieldDeflection: number | null;
+    readonly ultimateDeflection: number | null;
+    readonly displacementDuctility: number | null;
+    readonly hinges: readonly PlasticHinge[];
+  };
+  readonly strength: FlexuralCheck | null;
+  readonly deflectionChecks: readonly DeflectionCheck[];
+  readonly shear: ShearResult | null;
+  readonly warnings: readonly string[];
+  readonly errors: readonly { readonly path: string; readonly message: string }[];
+}
+
+/** The ACI 440.2R-17 9.2 check: the unstrengthened member under (1.1 SD + 0.75 LL) if the strengthening is lost. */
+export interface LossOfStrengtheningCheck {
+  readonly combination: string;
+  readonly check: FlexuralCheck;
+  readonly source: string;
+}
+
+/** How a scheme compares with the beam it strengthens (as found, or the design beam). */
+export interface SchemeComparison {
+  readonly referenceKey: string;
+  /** The section and direction that govern the reference beam's strength check. */
+  readonly critical: { readonly baseSectionId: string; readonly direction: BendingDirection };
+  readonly moments: readonly {
+    readonly baseSectionId: string;
+    readonly direction: BendingDirection;
+    /** Peak moments of the curves and design resistances, N·mm; gains in percent. */
+    readonly referencePeak: number | null;
+    readonly schemePeak: number | null;
+    readonly peakGainPercent: number | null;
+    readonly referenceDesign: number | null;
+    readonly schemeDesign: number | null;
+    readonly designGainPercent: number | null;
+    /** Gain of the first-yield moment, percent (what the scheme does at service and up to yield). */
+    readonly firstYieldGainPercent: number | null;
+  }[];
+  readonly memberCapacity: { readonly reference: number | null; readonly scheme: number | null; readonly gainPercent: number | null };
+  readonly curvatureDuctility: { readonly reference: number | null; readonly scheme: number | null; readonly changePercent: number | null };
+  readonly displacementDuctility: { readonly reference: number | null; readonly scheme: number | null; readonly changePercent: number | null };
+  /** Rotation capacity θp,u of the critical hinge, rad. */
+  readonly hingeRotation: { readonly reference: number | null; readonly scheme: number | null; readonly changePercent: number | null };
+  readonly governingMode: { readonly reference: string; readonly scheme: string };
+  /** Plain words: the gain in strength and the change in ductility. */
+  readonly statement: string;
+}
+
+/** Everything reported for one strengthening scheme. */
+export interface SchemeResult {
+  readonly schemeId: string;
+  readonly name: string;
+  readonly kind: StrengtheningScheme['kind'];
+  /** One line: what the scheme adds. */
+  readonly description: string;
+  readonly variant: VariantResult | null;
+  readonly frp: FrpDesign | null;
+  readonly installation: readonly InstallationStrain[];
+  readonly comparison: SchemeComparison | null;
+  /** ACI 440.2R-17 9.2 (bonded schemes only; null for a cast concrete layer). */
+  readonly lossOfStrengthening: LossOfStrengtheningCheck | null;
+  readonly warnings: readonly string[];
+  readonly errors: readonly { readonly path: string; readonly message: string }[];
+}
+
+/** Design, as-found and strengthened variants of a member, compact, with comparisons (MemberResult.retrofit). */
+export interface RetrofitResult {
+  /** Which beam the member's main result describes: the as-found beam when a condition is given. */
+  readonly basis: 'as-found' | 'design';
+  /** The design beam (from the library data), compact. */
+  readonly original: VariantResult | null;
+  /** The as-found condition and beam, when given. */
+  readonly asFound: (AsFoundSummary & { readonly variant: VariantResult | null }) | null;
+  /** Key of the variant the schemes are compared with ('as-found' or 'original'). */
+  readonly referenceKey: string;
+  readonly schemes: readonly SchemeResult[];
+  /** Material specs derived for the analysis (as-found concrete and steel), for the report. */
+  readonly derivedMaterials: readonly MaterialSpec[];
+  readonly caution: string;
+  readonly warnings: readonly string[];
+  readonly errors: readonly { readonly path: string; readonly message: string }[];
+}
+
+/** The caution every retrofit result carries. */
+export const RETROFIT_CAUTION =
+  'As-found and strengthening results are for review by a qualified engineer and defer to local codes and licensed practice; in-place strengths, deterioration data and strengthening details must be confirmed on site.';

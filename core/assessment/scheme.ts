@@ -1,0 +1,264 @@
+/**
+ * One strengthening scheme of an existing beam as a variant: the substrate strain when a bonded
+ * item is installed (ACI 440.2R-17 10.2.3), the derived sections (core/retrofit/schemes.ts), the
+ * variant run (variant.ts), its comparison with the beam it strengthens (compact.ts) and the
+ * ACI 440.2R-17 9.2 check of the beam without its strengthening.
+ * Units: mm, N, N·mm, MPa.
+ */
+import { errorsOf, type Problem } from '../diagnostics.ts';
+import type { MaterialLibrary } from '../materials/library.ts';
+import { materialLibrary } from '../materials/library.ts';
+import type { FrpSpec, MaterialSpec } from '../materials/specs.ts';
+import type { BeamDefinition, MemberLoad } from '../member/definition.ts';
+import { derivedId, type AsFoundDerivation } from '../retrofit/as-found.ts';
+import { crackedSubstrateStrain, frpDesign, frpElement, substrateStrainFromCurve } from '../retrofit/frp.ts';
+import { bondedSection, concreteLayerSection, faceOf, STEEL_DENSITY, type ReferenceSection, type SchemeSection } from '../retrofit/schemes.ts';
+import type { AddedItem, FrpDesign, FrpScheme, InstallationStrain, SteelPlateScheme, StrengtheningScheme } from '../retrofit/types.ts';
+import { STANDARD_GRAVITY, type SectionAnalysis } from '../section/analyze.ts';
+import type { SectionAdditions } from '../section/build.ts';
+import { elasticProperties, type CrackedProperties } from '../section/elastic.ts';
+import type { BendingDirection, DiscreteElement } from '../section/model.ts';
+import { compactOf, compareVariants, flexuralCheck } from './compact.ts';
+import type { SchemeResult, VariantResult } from './results.ts';
+import { combinedLoads, elasticSupportMoments, memberForcesAt, memberLoadSets, type ElasticZone } from './shear.ts';
+import { librarySections, runVariant, type Setup, type VariantRun } from './variant.ts';
+
+/** The beam a scheme strengthens: its run, materials and (for an as-found beam) its derivation. */
+export interface SchemeReference {
+  readonly run: VariantRun;
+  readonly materials: MaterialLibrary;
+  readonly derivation: AsFoundDerivation | null;
+}
+
+/** What one scheme is built from and compared with. */
+export interface SchemeInput {
+  readonly member: BeamDefinition;
+  readonly scheme: StrengtheningScheme;
+  /** Path of the scheme in the project file. */
+  readonly at: string;
+  /** The scheme's result so far (identity, its own input warnings). */
+  readonly base: SchemeResult;
+  /** The beam the scheme strengthens (the as-found beam, spalls repaired when the scheme asks). */
+  readonly reference: SchemeReference;
+  /** The beam the scheme is compared with (the as-found beam, or the design beam). */
+  readonly comparison: { readonly run: VariantRun; readonly compact: VariantResult };
+  /** Derived material specs the scheme's materials are resolved with. */
+  readonly derivedSpecs: readonly MaterialSpec[];
+}
+
+export function describeScheme(s: StrengtheningScheme): string {
+  switch (s.kind) {
+    case 'frp':
+      return `externally bonded FRP on the ${s.face ?? 'bottom'} face: ${s.plies} × ${s.plyThickness} mm × ${s.width} mm (${s.frpId})`;
+    case 'steel-plate':
+      return `bonded steel plate on the ${s.face ?? 'bottom'} face: ${s.thickness} × ${s.width} mm (${s.steelId})`;
+    case 'concrete-layer':
+      return `new concrete ${s.face === 'top' ? 'overlay' : 'layer under the soffit'} ${s.thickness} mm (${s.concreteId}) with ${s.bars.length} bar layer${s.bars.length === 1 ? '' : 's'}`;
+  }
+}
+
+
+/** Reference section of a library section for a scheme: the reference variant's derived section, or the library one. */
+function referenceSection(baseId: string, ref: VariantRun, derivation: AsFoundDerivation | null): ReferenceSection {
+  const d = derivation?.sections.get(baseId);
+  if (d) return { id: d.id, baseSectionId: baseId, definition: d.definition, exposedBars: d.exposedBars };
+  const id = [...ref.baseOf.entries()].find(([, b]) => b === baseId)?.[0] ?? baseId;
+  return { id, baseSectionId: baseId, definition: ref.definitions.get(id)!, exposedBars: [] };
+}
+
+/** Largest moment of one sense (N·mm magnitude) within a set of zones under installation loads, and where. */
+function installationMoment(setup: Setup, ref: VariantRun, scheme: FrpScheme | SteelPlateScheme, zoneIndices: readonly number[], direction: BendingDirection): { moment: number; position: number } {
+  const member = ref.member;
+  const f = scheme.installation ?? {};
+  const loads = combinedLoads(memberLoadSets(member, ref.zones.map((z) => z.analysis.selfWeight)), { dead: f.dead ?? 1, superimposed: f.superimposed ?? 1, live: f.live ?? 0 });
+  const elastic: ElasticZone[] = ref.zones.map((z) => ({ from: z.from, to: z.to, sectionId: z.analysis.sectionId, stiffness: z.analysis.codeModulus * (z.analysis.elastic?.grossInertia ?? 0) }));
+  const ends = elasticSupportMoments(member, elastic, loads, setup.segments);
+  let best = { moment: 0, position: 0 };
+  const sign = direction === 'sagging' ? 1 : -1;
+  for (const i of zoneIndices) {
+    const z = member.zones[i]!;
+    const n = Math.max(8, Math.ceil((setup.segments * (z.to - z.from)) / member.span));
+    for (let k = 0; k <= n; k++) {
+      const x = z.from + ((z.to - z.from) * k) / n;
+      for (const side of ['left', 'right'] as const) {
+        const mx = sign * memberForcesAt(member.supports, member.span, loads, ends, x, side).moment;
+        if (mx > best.moment) best = { moment: mx, position: x };
+      }
+    }
+  }
+  return best;
+}
+
+/** Builds, analyses and compares one scheme. */
+export function buildScheme(setup: Setup, input: SchemeInput): SchemeResult {
+  const { member, scheme, at, base, derivedSpecs } = input;
+  const { run: ref, materials: refMaterials, derivation: refDerivation } = input.reference;
+  const { run: comparisonRun, compact: comparisonCompact } = input.comparison;
+  const code = setup.code;
+  const errors: Problem[] = [...base.errors];
+  const warnings: string[] = [...base.warnings];
+  const designSections = librarySections(member, setup.library);
+  const targets = new Set(scheme.sectionIds ?? [...designSections.keys()]);
+  const materials = materialLibrary([...setup.library.materials, ...derivedSpecs], code);
+  const sections = new Map<string, SchemeSection>();
+  const installation: InstallationStrain[] = [];
+  let frp: FrpDesign | null = null;
+  for (const baseId of targets) {
+    const refSection = referenceSection(baseId, ref, refDerivation);
+    const id = derivedId(baseId, member.id, scheme.id);
+    const name = `${refSection.definition.name} + ${scheme.name}`;
+    if (scheme.kind === 'concrete-layer') {
+      const built = concreteLayerSection(refSection, scheme, id, materials, at);
+      if (Array.isArray(built)) errors.push(...errorsOf(built));
+      else {
+        sections.set(baseId, built);
+        warnings.push(...built.warnings);
+      }
+      continue;
+    }
+    // Bonded items: width on the face, then the substrate strain at installation.
+    const face = scheme.face ?? 'bottom';
+    const faceData = faceOf(refSection.definition, face);
+    if (scheme.width > faceData.width + 1e-6) {
+      errors.push({ path: `${at}.width`, message: `must be at most the ${faceData.width.toFixed(0)} mm width of the ${face} face of section "${baseId}", got ${scheme.width} mm` });
+      continue;
+    }
+    const direction: BendingDirection = face === 'bottom' ? 'sagging' : 'hogging';
+    const refAnalysis = ref.analyses.get(refSection.id);
+    if (!refAnalysis?.model || !refAnalysis.elastic) {
+      errors.push({ path: at, message: `section "${baseId}" of the beam being strengthened has no valid model` });
+      continue;
+    }
+    const zoneIndices = member.zones.map((z, i) => (z.sectionId === baseId ? i : -1)).filter((i) => i >= 0);
+    const inst = installationMoment(setup, ref, scheme, zoneIndices, direction);
+    const curve = refAnalysis.curves[direction];
+    const capacity = curve?.keyPoints.peak?.moment ?? null;
+    const firstYield = curve?.keyPoints.firstYield?.moment ?? null;
+    if (capacity !== null && inst.moment > capacity) {
+      errors.push({ path: `${at}.installation`, message: `the moment when the strengthening is bonded, ${setup.text.moment(inst.moment)} at ${setup.text.span(inst.position)}, exceeds the capacity of the unstrengthened section "${refAnalysis.sectionName}" (${setup.text.moment(capacity)}): the beam could not carry the installation load — reduce it (prop or unload the beam) before strengthening` });
+      continue;
+    }
+    if (firstYield !== null && inst.moment > firstYield) {
+      warnings.push(`the installation moment ${setup.text.moment(inst.moment)} in section "${baseId}" is above first yield (${setup.text.moment(firstYield)}): the cracked elastic substrate strain does not hold beyond yield; consider propping during installation`);
+    }
+    const itemDepth = scheme.kind === 'frp' ? faceData.depth : face === 'bottom' ? faceData.depth + scheme.thickness / 2 : -scheme.thickness / 2;
+    const model = refAnalysis.model;
+    const ec = refAnalysis.codeModulus;
+    // Cracked transformed properties at the code modulus Ec (ACI 440.2R-17 10.2.3).
+    const c = crackedAt(refAnalysis, direction, ec);
+    const compressionFace = direction === 'sagging' ? 0 : model.height;
+    const df = Math.abs(itemDepth - compressionFace);
+    let elasticStrain: number | null = null;
+    let kd: number | null = null;
+    let icr: number | null = null;
+    if (c) {
+      kd = c.neutralAxisDepth;
+      icr = c.inertia;
+      elasticStrain = -crackedSubstrateStrain(inst.moment, df, kd, icr, ec);
+    }
+    const curveStrain = curve ? substrateStrainFromCurve(model, curve, inst.moment, itemDepth) : null;
+    const method = scheme.installationStrainMethod ?? 'cracked-elastic';
+    let strain = method === 'cracked-elastic' ? elasticStrain ?? curveStrain : curveStrain ?? elasticStrain;
+    if (strain === null) {
+      warnings.push(`section "${baseId}": no substrate strain could be found for the installation moment; zero used`);
+      strain = 0;
+    }
+    const other = method === 'cracked-elastic' ? curveStrain : elasticStrain;
+    installation.push({
+      baseSectionId: baseId,
+      sectionId: id,
+      moment: inst.moment,
+      position: inst.position,
+      direction,
+      capacity,
+      firstYieldMoment: firstYield,
+      method,
+      neutralAxisDepth: kd,
+      crackedInertia: icr,
+      concreteModulus: ec,
+      strain,
+      otherMethodStrain: other,
+      formula: kd !== null && icr !== null
+        ? `εbi = M·(df − kd)/(Icr·Ec) = ${setup.text.moment(inst.moment)} × (${setup.text.section(df)} − ${setup.text.section(kd)}) / (${setup.text.secondMoment(icr)} × ${setup.text.stress(ec)}) = ${(-(elasticStrain ?? 0)).toExponential(3)} (ACI 440.2R-17 10.2.3)${method === 'moment-curvature' ? `; used: ${(-strain).toExponential(3)} from the moment–curvature curve` : ''}`
+        : `εbi = ${(-strain).toExponential(3)} from the moment–curvature curve`,
+    });
+    if (scheme.kind === 'frp') {
+      const spec = materials.frpSpec(scheme.frpId) as FrpSpec | undefined;
+      const material = materials.frp(scheme.frpId);
+      if (!spec || !material) {
+        const cause = materials.problems.filter((p) => p.severity === 'error').map((p) => `${p.path}: ${p.message}`).join('; ');
+        errors.push({ path: `${at}.frpId`, message: `the FRP material "${scheme.frpId}" could not be built${cause ? ` (${cause})` : ''}` });
+        continue;
+      }
+      const concreteStrength = refMaterials.concreteSpec(refSection.definition.concreteId)?.strength ?? 0;
+      const design = frpDesign({ plyThickness: scheme.plyThickness, plies: scheme.plies, width: scheme.width, tensileModulus: spec.tensileModulus, ruptureStrain: spec.ruptureStrain, environmentalFactor: spec.environmentalFactor }, concreteStrength);
+      frp ??= design;
+      const label = `${scheme.name}: FRP ${scheme.plies} × ${scheme.plyThickness} mm × ${scheme.width} mm`;
+      const element = frpElement(label, material, design, itemDepth, strain);
+      const item: AddedItem = { kind: 'frp', label, depth: itemDepth, width: scheme.width, area: design.area, initialStrain: strain, limitStrain: design.limitStrain, limitCause: design.limitCause, materialId: scheme.frpId };
+      sections.set(baseId, bondedSection(refSection, id, name, materials, element, item, 0));
+    } else {
+      const steel = materials.steel(scheme.steelId);
+      if (!steel) {
+        errors.push({ path: `${at}.steelId`, message: `the steel "${scheme.steelId}" could not be built` });
+        continue;
+      }
+      const label = `${scheme.name}: steel plate ${scheme.thickness} × ${scheme.width} mm`;
+      const area = scheme.thickness * scheme.width;
+      const element: DiscreteElement = { kind: 'plate', label, sourceIndex: 0, area, depth: itemDepth, material: steel, initialStrain: strain, limitStrain: steel.ruptureStrain, limitCause: 'steel-rupture', displacedConcrete: null };
+      const item: AddedItem = { kind: 'plate', label, depth: itemDepth, width: scheme.width, area, initialStrain: strain, limitStrain: steel.ruptureStrain, limitCause: 'steel-rupture', materialId: scheme.steelId };
+      // ρ (kg/m³) · g · A (mm²) · 1e-9 = N/mm
+      sections.set(baseId, bondedSection(refSection, id, name, materials, element, item, STEEL_DENSITY * STANDARD_GRAVITY * area * 1e-9));
+    }
+  }
+  if (errors.length > 0 || sections.size === 0) {
+    if (errors.length === 0) errors.push({ path: at, message: 'the scheme applies to no section of the member' });
+    return { ...base, installation, frp, errors, warnings };
+  }
+
+  // Variant member: targeted zones on the scheme's sections, the rest on the reference's.
+  const definitions = new Map(ref.definitions);
+  const baseOf = new Map(ref.baseOf);
+  const additions = new Map<string, SectionAdditions>();
+  const added = new Map(ref.added);
+  for (const s of sections.values()) {
+    definitions.set(s.id, s.definition);
+    baseOf.set(s.id, s.baseSectionId);
+    additions.set(s.id, { parts: s.parts, elements: s.elements });
+    added.set(s.id, s.added);
+  }
+  const idOfZone = (refId: string) => {
+    const baseId = ref.baseOf.get(refId) ?? refId;
+    return sections.get(baseId)?.id ?? refId;
+  };
+  const extraLoads: MemberLoad[] = (member.includeSelfWeight ?? true)
+    ? ref.member.zones.flatMap((z) => {
+      const s = sections.get(ref.baseOf.get(z.sectionId) ?? z.sectionId);
+      return s && s.addedWeight > 0 ? [{ kind: 'uniform' as const, loadCase: 'dead' as const, magnitude: s.addedWeight, from: z.from, to: z.to, label: `self-weight of ${scheme.name}` }] : [];
+    })
+    : [];
+  const variantMember: BeamDefinition = { ...ref.member, zones: ref.member.zones.map((z) => ({ ...z, sectionId: idOfZone(z.sectionId) })), loads: [...ref.member.loads, ...extraLoads] };
+  const unchanged = new Map([...ref.analyses].filter(([id]) => !sections.has(ref.baseOf.get(id) ?? id)));
+  const run = runVariant(setup, { key: scheme.id, label: scheme.name, member: variantMember, definitions, baseOf, additions, added, materials, analyses: unchanged });
+  const variant = compactOf(setup, run, `${scheme.name}: `);
+  const comparison = run.result.status === 'input-error' ? null : compareVariants(comparisonCompact, variant, scheme.name, setup.text);
+  // ACI 440.2R-17 9.2: the unstrengthened member under 1.1 SD + 0.75 LL (bonded schemes only).
+  let lossOfStrengthening: SchemeResult['lossOfStrengthening'] = null;
+  if (scheme.kind !== 'concrete-layer') {
+    const combination = `1.1 SD + 0.75 LL (ACI 440.2R-17 Eq. 9.2, strengthening lost)`;
+    const check = flexuralCheck(code, comparisonRun.member, comparisonRun.zones, { dead: 1.1, superimposed: 1.1, live: 0.75 }, combination, setup.segments, setup.text);
+    if (check) {
+      lossOfStrengthening = { combination, check, source: 'ACI 440.2R-17 9.2, Eq. (9.2) (from memory): (φRn)existing ≥ (1.1 SDL + 0.75 SLL)new, with the design resistance of the beam before strengthening' };
+      if (!check.pass) warnings.push(`ACI 440.2R-17 9.2 limit not met: without the strengthening the beam could not carry 1.1 SD + 0.75 LL (utilisation ${check.utilisation.toFixed(2)} at ${setup.text.span(check.position)}): the strengthening exceeds what the existing beam allows`);
+    }
+  }
+  if (!variant.ductility.available) warnings.push('shear governs the strengthened beam before its flexural mechanism: its ductility and hinge rotations are not available');
+  return { ...base, variant, frp, installation, comparison, lossOfStrengthening, warnings: [...warnings, ...run.result.warnings.filter((w) => !comparisonRun.result.warnings.includes(w))], errors: [...errors, ...run.result.errors] };
+}
+
+/** Cracked transformed properties of an analysed section at the concrete modulus Ec (MPa); null without tension steel. */
+function crackedAt(analysis: SectionAnalysis, direction: BendingDirection, ec: number): CrackedProperties | null {
+  const own = analysis.elastic;
+  const e = own && own.concreteModulus === ec ? own : analysis.model ? elasticProperties(analysis.model, { concreteModulus: ec }) : null;
+  return e ? (direction === 'sagging' ? e.cracked.sagging : e.cracked.hogging) : null;
+}

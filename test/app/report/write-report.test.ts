@@ -68,7 +68,7 @@ describe('PDF report (pdfmake in Node)', () => {
     const again = await renderReportBuffer(options);
     expect(again.equals(bytes)).toBe(true);
     expect(bytes.toString('latin1')).toContain('(D:20260314093000Z)');
-  });
+  }, 60_000);
 
   it('draws charts as images too, with the same text around them', async () => {
     const png = await renderReportBuffer({ ...options, chartFormat: 'png', chartWorkers: 0 });

@@ -20,7 +20,7 @@
 import { readFileSync } from 'node:fs';
 import { analyzeProject } from '../../../core/analysis.ts';
 import { analysisBlockers, parseProject } from '../../../core/project/index.ts';
-import type { MemberResult } from '../../../core/member/results.ts';
+import type { MemberResult } from '../../../core/assessment/results.ts';
 
 // ---------------------------------------------------------------------------------------------------
 // Record shape (see the header block of specimens.json for the field-by-field description)

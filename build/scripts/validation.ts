@@ -152,7 +152,9 @@ keeps both so the comparison can be re-read with either.
 ${set.specimens.length} accepted specimens from ${sourcesUsed} sources. The issue asks for at least 30 (aim 50–80)
 from several laboratories. The publications below were identified and are listed with why they are
 not (yet) in the set; "not-transcribed" means the specimen tables could not be read from the copies
-available when the set was assembled, and no value was filled in from memory.
+available when the set was assembled, and no value was filled in from memory. How the sources were
+searched, what the stored copies hold and which full texts would fill the set fastest:
+\`test/references/flexure-tests/SOURCES.md\`.
 
 | source | specimens | status | reason |
 |---|---|---|---|

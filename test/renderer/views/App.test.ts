@@ -70,7 +70,8 @@ describe('App', () => {
     await flushPromises();
     expect(memberCount(wrapper)).toBe(10);
     expect(env.host.documentState.dirty).toBe(false);
-  });
+    // Opening the demo analyses every member: seconds on a busy shared machine, so not the default 5 s.
+  }, 60_000);
 
   it('asks before a file opened from outside replaces unsaved changes', async () => {
     const { env, wrapper, documentStore } = await app();

@@ -25,7 +25,7 @@ export type OutputFormat = 'table' | 'json' | 'csv';
 export type Command =
   | { readonly kind: 'help'; readonly topic?: string }
   | { readonly kind: 'version' }
-  | { readonly kind: 'analyze'; readonly file: string; readonly members: readonly string[]; readonly format: OutputFormat; readonly units?: UnitSystem; readonly jobs?: number }
+  | { readonly kind: 'analyze'; readonly file: string; readonly members: readonly string[]; readonly format: OutputFormat; readonly units?: UnitSystem; readonly jobs?: number; readonly bom?: boolean }
   | { readonly kind: 'report'; readonly file: string; readonly out: string; readonly members: readonly string[]; readonly jobs?: number }
   | { readonly kind: 'validate'; readonly file: string; readonly format: 'text' | 'json' }
   | { readonly kind: 'demo'; readonly out?: string; readonly si: boolean; readonly force: boolean };
@@ -38,7 +38,7 @@ const GENERAL_HELP = `hingeline — moment–curvature, load–deflection, plast
 assessment of reinforced-concrete beams, from the command line.
 
 Usage:
-  hingeline analyze FILE [--member ID]... [--format table|json|csv] [--units us|si] [--jobs N]
+  hingeline analyze FILE [--member ID]... [--format table|json|csv [--bom]] [--units us|si] [--jobs N]
   hingeline report FILE --out REPORT.pdf [--member ID]... [--jobs N]
   hingeline validate FILE [--format text|json]
   hingeline demo [--out FILE] [--si] [--force]
@@ -62,6 +62,8 @@ utilisation, the status and the governing mode.
 Options:
   --member ID       analyse only this member (repeat for several)
   --format FORMAT   table (default), json (documented in docs/cli.md) or csv
+  --bom             with --format csv: start with a UTF-8 byte-order mark, so that spreadsheet
+                    programs read the units (kip·ft, φu/φy) as UTF-8
   --units SYSTEM    us or si (default: the project's display unit system)
   --jobs N          number of worker threads (default: one per core, at most one per member;
                     1 analyses in this process)
@@ -132,8 +134,11 @@ export function parseArguments(argv: readonly string[]): ParsedArguments {
   if (first === undefined || first === '--help' || first === '-h') return { ok: true, command: { kind: 'help' } };
   if (first === '--version' || first === '-v') return { ok: true, command: { kind: 'version' } };
   if (first === 'help') {
-    if (rest[0] !== undefined && !(COMMANDS as readonly string[]).includes(rest[0])) return usage(`unknown command "${rest[0]}" (commands: ${COMMANDS.join(', ')})`);
-    return { ok: true, command: { kind: 'help', ...(rest[0] ? { topic: rest[0] } : {}) } };
+    // `help --help`, `help analyze -h`: asking for help about help is still asking for help.
+    const words = rest.filter((word) => word !== '--help' && word !== '-h');
+    if (words.length > 1) return usage(`"help" takes one command, got ${words.length}: ${words.join(' ')}`);
+    if (words[0] !== undefined && !(COMMANDS as readonly string[]).includes(words[0])) return usage(`unknown command "${words[0]}" (commands: ${COMMANDS.join(', ')})`);
+    return { ok: true, command: { kind: 'help', ...(words[0] ? { topic: words[0] } : {}) } };
   }
   if (!(COMMANDS as readonly string[]).includes(first)) {
     return usage(first.startsWith('-') ? `unknown option "${first}" (a command comes first: ${COMMANDS.join(', ')})` : `unknown command "${first}" (commands: ${COMMANDS.join(', ')})`);
@@ -155,16 +160,17 @@ export function parseArguments(argv: readonly string[]): ParsedArguments {
         out: { type: 'string' },
         si: { type: 'boolean' },
         force: { type: 'boolean' },
+        bom: { type: 'boolean' },
       },
     });
   } catch (error) {
     const message = error instanceof Error ? error.message.replace(/\. To specify a positional argument[\s\S]*$/, '') : String(error);
     return usage(message.charAt(0).toLowerCase() + message.slice(1), topic);
   }
-  const values = parsed.values as { member?: string[]; format?: string; units?: string; jobs?: string; out?: string; si?: boolean; force?: boolean };
+  const values = parsed.values as { member?: string[]; format?: string; units?: string; jobs?: string; out?: string; si?: boolean; force?: boolean; bom?: boolean };
   const positionals = parsed.positionals;
   const allowed: Readonly<Record<string, readonly string[]>> = {
-    analyze: ['member', 'format', 'units', 'jobs'],
+    analyze: ['member', 'format', 'units', 'jobs', 'bom'],
     report: ['member', 'out', 'jobs'],
     validate: ['format'],
     demo: ['out', 'si', 'force'],
@@ -198,5 +204,6 @@ export function parseArguments(argv: readonly string[]): ParsedArguments {
   if (format !== 'table' && format !== 'json' && format !== 'csv') return usage(`--format must be table, json or csv, got "${format}"`, topic);
   const units = values.units;
   if (units !== undefined && units !== 'us' && units !== 'si') return usage(`--units must be us or si, got "${units}"`, topic);
-  return { ok: true, command: { kind: 'analyze', file, members, format, ...(units ? { units } : {}), ...(jobs ? { jobs } : {}) } };
+  if (values.bom && format !== 'csv') return usage('--bom goes with --format csv', topic);
+  return { ok: true, command: { kind: 'analyze', file, members, format, ...(units ? { units } : {}), ...(jobs ? { jobs } : {}), ...(values.bom ? { bom: true } : {}) } };
 }

@@ -40,13 +40,23 @@ async function readProjectText(io: Io, file: string): Promise<string> {
   }
 }
 
+/** Why a write failed, in words (a NotRegularFileError names what is at the path). */
+function writeProblem(error: unknown): string {
+  const code = (error as { code?: string }).code;
+  return code === 'ENOENT' ? 'the folder does not exist' : code === 'EACCES' || code === 'EPERM' ? 'permission denied' : code === 'EISDIR' ? 'it is a folder' : code === 'ENOTDIR' ? 'a part of the path is not a folder' : code === 'ENOSPC' ? 'the disk is full' : code === 'EROFS' ? 'the disk is read-only' : error instanceof Error ? error.message : String(error);
+}
+
+/** Fails at once (exit 2) when `file` cannot be written: before the work, not after it. */
+async function checkOutput(io: Io, file: string): Promise<void> {
+  const problem = await io.outputProblem(io.resolvePath(file));
+  if (problem !== null) throw new CliFailure(`cannot write ${file}: ${problem}`, EXIT.usage);
+}
+
 async function writeOutput(io: Io, file: string, text: string): Promise<void> {
   try {
     await io.writeText(file, text);
   } catch (error) {
-    const code = (error as { code?: string }).code;
-    const reason = code === 'ENOENT' ? 'the folder does not exist' : code === 'EACCES' ? 'permission denied' : code === 'EISDIR' ? 'it is a folder' : error instanceof Error ? error.message : String(error);
-    throw new CliFailure(`cannot write ${file}: ${reason}`, EXIT.usage);
+    throw new CliFailure(`cannot write ${file}: ${writeProblem(error)}`, EXIT.usage);
   }
 }
 
@@ -116,7 +126,8 @@ async function analyze(io: Io, command: Extract<Command, { kind: 'analyze' }>): 
   if (command.format === 'json') {
     io.stdout(`${JSON.stringify(analysisJson(project, results, system, command.file), null, 2)}\n`);
   } else if (command.format === 'csv') {
-    io.stdout(resultsSummaryCsv(results.members, system, project));
+    // A byte-order mark tells spreadsheet programs that the text is UTF-8 (else "kip·ft" shows garbled).
+    io.stdout(`${command.bom ? '\uFEFF' : ''}${resultsSummaryCsv(results.members, system, project)}`);
     io.stderr(`Caution: ${RESULTS_CAUTION}\n`);
   } else {
     io.stdout(tableReport(project, results, { system, width: io.stdoutIsTTY ? io.columns : 110, style: stdoutStyle(io) }));
@@ -145,6 +156,7 @@ async function demo(io: Io, command: Extract<Command, { kind: 'demo' }>): Promis
     return EXIT.ok;
   }
   if (io.exists(command.out) && !command.force) throw new CliFailure(`${command.out} already exists; use --force to overwrite it`, EXIT.usage);
+  await checkOutput(io, command.out);
   await writeOutput(io, command.out, text);
   io.stderr(`wrote ${command.out}\n`);
   return EXIT.ok;
@@ -170,11 +182,18 @@ async function report(io: Io, command: Extract<Command, { kind: 'report' }>, rep
     io.stderr('The PDF report is not available in this installation yet (its builder, app/report/write-report.ts, is missing). Use "hingeline analyze" for the results meanwhile.\n');
     return EXIT.missingFeature;
   }
+  await checkOutput(io, command.out);
   const { project, text } = await loadForAnalysis(io, command.file);
   const ids = selectedMembers(project, command.members);
   const results = await runAnalysis(io, project, ids, command.jobs);
   const outPath = io.resolvePath(command.out);
-  await writeReport({ project, results, ...(ids ? { memberIds: ids } : {}), outPath, sourceText: text });
+  try {
+    await writeReport({ project, results, ...(ids ? { memberIds: ids } : {}), outPath, sourceText: text });
+  } catch (error) {
+    // The path was fine at the start; it may have changed since, or the disk may be full.
+    if (/^E[A-Z]+$/.test(String((error as { code?: unknown }).code))) throw new CliFailure(`cannot write ${command.out}: ${writeProblem(error)}`, EXIT.usage);
+    throw error;
+  }
   io.stderr(`wrote ${command.out}\n`);
   return EXIT.ok;
 }

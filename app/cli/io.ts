@@ -3,8 +3,9 @@
  * receive a CliIo, so tests run them against an in-memory one (see test/app/cli).
  */
 import { existsSync } from 'node:fs';
-import { readFile, writeFile } from 'node:fs/promises';
-import { resolve } from 'node:path';
+import { readFile, stat } from 'node:fs/promises';
+import { dirname, resolve } from 'node:path';
+import { assertWritableTarget, writeFileAtomic } from '../main/atomic-write.ts';
 
 export interface CliIo {
   stdout(text: string): void;
@@ -18,7 +19,13 @@ export interface CliIo {
   /** Colours allowed at all (NO_COLOR not set); each stream also has to be a terminal. */
   readonly colorAllowed: boolean;
   readText(path: string): Promise<string>;
+  /** Writes atomically; only to a regular file or a new path (app/main/atomic-write.ts). */
   writeText(path: string, text: string): Promise<void>;
+  /**
+   * Why `path` cannot be written (its folder is missing, or something other than a regular file is
+   * there), or null when it can. Checked before long work, so a bad --out fails at once.
+   */
+  outputProblem(path: string): Promise<string | null>;
   exists(path: string): boolean;
   /** Absolute path of `path` from the working directory. */
   resolvePath(path: string): string;
@@ -48,10 +55,28 @@ export function nodeIo(): CliIo {
     columns: process.stdout.columns ?? process.stderr.columns ?? 80,
     colorAllowed: process.env.NO_COLOR === undefined || process.env.NO_COLOR === '',
     readText: (path) => readFile(path, 'utf8'),
-    writeText: (path, text) => writeFile(path, text, 'utf8'),
+    writeText: async (path, text) => void (await writeFileAtomic(path, text)),
+    outputProblem: (path) => outputProblem(resolve(path)),
     exists: (path) => existsSync(path),
     resolvePath: (path) => resolve(path),
     signal: controller.signal,
     env: process.env,
   };
+}
+
+/** See `CliIo.outputProblem`. */
+export async function outputProblem(path: string): Promise<string | null> {
+  const folder = dirname(path);
+  try {
+    if (!(await stat(folder)).isDirectory()) return `${folder} is not a folder`;
+  } catch (error) {
+    const code = (error as NodeJS.ErrnoException).code;
+    return code === 'ENOENT' ? `the folder ${folder} does not exist` : code === 'ENOTDIR' ? `a part of ${folder} is not a folder` : code === 'EACCES' ? `permission denied for ${folder}` : String(error);
+  }
+  try {
+    await assertWritableTarget(path);
+  } catch (error) {
+    return (error as NodeJS.ErrnoException).code === 'EISDIR' ? 'it is a folder' : error instanceof Error ? error.message : String(error);
+  }
+  return null;
 }

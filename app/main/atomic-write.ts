@@ -11,8 +11,13 @@
  * Whatever moment the process dies, the target holds either the complete old content or the
  * complete new content, never a mixture; at worst a temp file named
  * `.<name>.hingeline-tmp-<pid>-<token>` is left, which the next write to that target removes.
+ *
+ * Only regular files are replaced: a target that is a folder, a device (`/dev/null`), a FIFO or a
+ * socket is refused with a `NotRegularFileError` before anything is written, and checked again just
+ * before the final rename (a rename would otherwise replace the device node itself when run as root).
  */
 import { randomBytes } from 'node:crypto';
+import type { Stats } from 'node:fs';
 import { copyFile, link, lstat, open, readdir, realpath, rename, stat, unlink } from 'node:fs/promises';
 import { basename, dirname, join } from 'node:path';
 
@@ -50,6 +55,52 @@ export interface AtomicWriteResult {
   readonly backupPath: string | null;
   /** Leftover temp files from interrupted writes that were removed first. */
   readonly removedStaleTemps: readonly string[];
+}
+
+/** What sits at a path, in words, for messages. */
+export type FileKind = 'folder' | 'character device' | 'block device' | 'named pipe (FIFO)' | 'socket' | 'special file';
+
+/**
+ * The target of a write exists and is not a regular file (or a link to one). `code` is `EISDIR` for
+ * a folder (as Node's own errors) and `ENOTREGULAR` otherwise; the message says what is there.
+ */
+export class NotRegularFileError extends Error {
+  readonly code: 'EISDIR' | 'ENOTREGULAR';
+  readonly path: string;
+  readonly kind: FileKind;
+  constructor(path: string, kind: FileKind) {
+    super(`${path} is a ${kind}, not a regular file; only regular files (or new paths) are written`);
+    this.name = 'NotRegularFileError';
+    this.code = kind === 'folder' ? 'EISDIR' : 'ENOTREGULAR';
+    this.path = path;
+    this.kind = kind;
+  }
+}
+
+function kindOf(info: Stats): FileKind | null {
+  if (info.isFile()) return null;
+  if (info.isDirectory()) return 'folder';
+  if (info.isCharacterDevice()) return 'character device';
+  if (info.isBlockDevice()) return 'block device';
+  if (info.isFIFO()) return 'named pipe (FIFO)';
+  if (info.isSocket()) return 'socket';
+  return 'special file';
+}
+
+/**
+ * Resolves once `path` is either absent or a regular file (symbolic links followed); rejects with
+ * `NotRegularFileError` otherwise. Other errors of `stat` (permission denied…) reject as they are.
+ */
+export async function assertWritableTarget(path: string): Promise<void> {
+  let info: Stats;
+  try {
+    info = await stat(path);
+  } catch (error) {
+    if ((error as NodeJS.ErrnoException).code === 'ENOENT') return;
+    throw error;
+  }
+  const kind = kindOf(info);
+  if (kind !== null) throw new NotRegularFileError(path, kind);
 }
 
 /** `<target>.bak`. */
@@ -205,7 +256,10 @@ async function keepPreviousVersion(source: string, backupPath: string): Promise<
 
 async function writeNow(target: string, data: Uint8Array | string, options: AtomicWriteOptions): Promise<AtomicWriteResult> {
   const path = await realpath(target).catch(() => target);
+  // Refuse before anything is written (or any temp file is made next to a device).
+  await assertWritableTarget(path);
   const backupPath = options.keepBackup ? backupPathFor(path) : null;
+  if (backupPath) await assertWritableTarget(backupPath);
   const removedStaleTemps = [
     ...(await removeStaleTemps(path)),
     ...(backupPath ? await removeStaleTemps(backupPath) : []),
@@ -227,6 +281,8 @@ async function writeNow(target: string, data: Uint8Array | string, options: Atom
       keptBackup = backupPath;
       await report('backed-up', bytes.byteLength);
     }
+    // Something else may have been put at the path meanwhile: never rename over it.
+    await assertWritableTarget(path);
     await renameWithRetry(tempPath, path);
     await syncFolder(dirname(path));
     await report('committed', bytes.byteLength);
@@ -242,7 +298,8 @@ async function writeNow(target: string, data: Uint8Array | string, options: Atom
 /**
  * Writes `data` (a string is encoded as UTF-8) to `target` so that the target is never left
  * half-written. Writes to the same target are queued, never interleaved. The parent folder must
- * exist. Rejects with the file-system error (and removes its temp file) when the write fails.
+ * exist. Rejects with `NotRegularFileError` when the target is a folder, device, FIFO or socket,
+ * and with the file-system error (removing its temp file) when the write fails.
  */
 export function writeFileAtomic(target: string, data: Uint8Array | string, options: AtomicWriteOptions = {}): Promise<AtomicWriteResult> {
   const previous = queues.get(target) ?? Promise.resolve();

@@ -33,6 +33,9 @@ describe('parseArguments', () => {
     expect(command(['help', 'analyze'])).toEqual({ kind: 'help', topic: 'analyze' });
     expect(command(['validate', '--help'])).toEqual({ kind: 'help', topic: 'validate' });
     expect(command(['--version'])).toEqual({ kind: 'version' });
+    // Help about help is help (issue 15 item 10: `hingeline help --help` exited 2).
+    expect(command(['help', '--help'])).toEqual({ kind: 'help' });
+    expect(command(['help', '-h', 'report'])).toEqual({ kind: 'help', topic: 'report' });
   });
 
   it.each([
@@ -50,6 +53,9 @@ describe('parseArguments', () => {
     [['validate', 'a', '--format', 'csv'], /--format must be text or json/],
     [['demo', 'file.json'], /takes no file argument/],
     [['help', 'nope'], /unknown command "nope"/],
+    [['help', 'analyze', 'report'], /"help" takes one command, got 2/],
+    [['analyze', 'a', '--bom'], /--bom goes with --format csv/],
+    [['validate', 'a', '--bom'], /"validate" does not take --bom/],
     [['analyze', 'a', '--member'], /argument missing/i],
   ])('refuses %j', (argv, message) => {
     expect(usage(argv as string[]).message).toMatch(message);

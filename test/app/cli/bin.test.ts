@@ -3,7 +3,7 @@
  * a folder outside the repository (as `npx hingeline` would be from a project folder).
  */
 import { spawnSync } from 'node:child_process';
-import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -49,5 +49,19 @@ describe('the hingeline command', () => {
     expect(missing.code).toBe(2);
     expect(missing.stdout).toBe('');
     expect(missing.stderr).toBe('hingeline: cannot read nope.hingeline: no such file\n');
+  }, 60_000);
+
+  it('never replaces a device, and exits 2 for --out in a missing folder or onto a folder', () => {
+    expect(run('demo', '--out', 'd.hingeline', '--force').code).toBe(0);
+    const before = statSync('/dev/null');
+    const device = run('report', 'd.hingeline', '--out', '/dev/null');
+    expect(device).toEqual({ code: 2, stdout: '', stderr: 'hingeline: cannot write /dev/null: /dev/null is a character device, not a regular file; only regular files (or new paths) are written\n' });
+    const after = statSync('/dev/null');
+    expect(after.isCharacterDevice()).toBe(true);
+    expect([after.ino, after.rdev]).toEqual([before.ino, before.rdev]);
+    expect(run('report', 'd.hingeline', '--out', 'no-such-folder/r.pdf')).toMatchObject({ code: 2, stderr: `hingeline: cannot write no-such-folder/r.pdf: the folder ${join(work, 'no-such-folder')} does not exist\n` });
+    mkdirSync(join(work, 'out.pdf'));
+    expect(run('report', 'd.hingeline', '--out', 'out.pdf')).toMatchObject({ code: 2, stderr: 'hingeline: cannot write out.pdf: it is a folder\n' });
+    expect(run('demo', '--out', '/dev/null', '--force')).toMatchObject({ code: 2, stderr: expect.stringMatching(/^hingeline: cannot write \/dev\/null: \/dev\/null is a character device/) });
   }, 60_000);
 });

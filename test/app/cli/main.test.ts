@@ -38,6 +38,7 @@ function memoryIo(files: Record<string, string> = {}, options: { tty?: boolean; 
       if (path.startsWith('/no-such-dir/')) throw Object.assign(new Error('ENOENT'), { code: 'ENOENT' });
       store.set(path, text);
     },
+    outputProblem: async (path) => (path.startsWith('/no-such-dir/') ? 'the folder /no-such-dir does not exist' : path === '/virtual/a-folder' ? 'it is a folder' : null),
     exists: (path) => store.has(path) || (path.startsWith('/') && !path.startsWith('/virtual/') && existsOnDisk(path)),
     resolvePath: (path) => (path.startsWith('/') ? path : `/virtual/${path}`),
     signal: new AbortController().signal,
@@ -103,7 +104,7 @@ describe('hingeline demo', () => {
   it('says when the file cannot be written (exit 2)', async () => {
     const io = memoryIo();
     expect(await main(['demo', '--out', '/no-such-dir/d.hingeline'], io)).toBe(2);
-    expect(io.err()).toBe('hingeline: cannot write /no-such-dir/d.hingeline: the folder does not exist\n');
+    expect(io.err()).toBe('hingeline: cannot write /no-such-dir/d.hingeline: the folder /no-such-dir does not exist\n');
   });
 });
 
@@ -168,6 +169,20 @@ describe('hingeline analyze', () => {
     expect(header).toMatch(/^member id,name,supports,span \[m\],status,My \[kN·m\]/);
     expect(first).toMatch(/^B-204,B-204,simply-supported,6\.7056,check-fails,/);
     expect(io.err()).toMatch(/^Caution: Results are for review/);
+    expect(io.out().charCodeAt(0)).toBe('m'.charCodeAt(0));
+  });
+
+  it('starts the CSV with a UTF-8 byte-order mark with --bom, and is otherwise the same', async () => {
+    const text = serializeProject(twoMembers());
+    const plain = memoryIo({ 'p.hingeline': text });
+    await main(['analyze', 'p.hingeline', '--jobs', '1', '--format', 'csv'], plain);
+    const marked = memoryIo({ 'p.hingeline': text });
+    await main(['analyze', 'p.hingeline', '--jobs', '1', '--format', 'csv', '--bom'], marked);
+    expect(marked.out()).toBe(`\uFEFF${plain.out()}`);
+    // As bytes: EF BB BF, then the header with "kip·ft" in UTF-8 (· is C2 B7).
+    const bytes = Buffer.from(marked.out(), 'utf8');
+    expect([...bytes.subarray(0, 3)]).toEqual([0xef, 0xbb, 0xbf]);
+    expect(bytes.includes(Buffer.from([0x6b, 0x69, 0x70, 0xc2, 0xb7, 0x66, 0x74]))).toBe(true);
   });
 
   it('analyses on worker threads by default with the same results', async () => {
@@ -245,6 +260,31 @@ export async function writeReport(o) {
     const call = JSON.parse(readFileSync(join(dir, 'call.json'), 'utf8'));
     expect(call).toEqual({ members: ['C-101'], memberIds: ['C-101'], outPath: '/virtual/r.pdf', source: text.length, name: twoMembers().info.name });
     expect(io.err()).toBe('wrote r.pdf\n');
+    rmSync(dir, { recursive: true, force: true });
+  });
+});
+
+describe('hingeline report --out that cannot be written', () => {
+  it('exits 2 at once, before analysing, for a missing folder or a folder at the path (docs/cli.md exit codes)', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'hingeline-report-'));
+    const module = join(dir, 'write-report.mjs');
+    writeFileSync(module, `export async function writeReport() { throw new Error('must not be called'); }\n`);
+    for (const [out, reason] of [['/no-such-dir/r.pdf', 'the folder /no-such-dir does not exist'], ['a-folder', 'it is a folder']]) {
+      const io = memoryIo({ 'p.hingeline': serializeProject(twoMembers()) }, { tty: true });
+      expect(await main(['report', 'p.hingeline', '--out', out!, '--jobs', '1'], io, { reportModule: pathToFileURL(module) })).toBe(2);
+      // Nothing was analysed: no progress bar was drawn.
+      expect(io.err()).toBe(`hingeline: cannot write ${out}: ${reason}\n`);
+    }
+    rmSync(dir, { recursive: true, force: true });
+  });
+
+  it('exits 2 with the reason when the write fails after the analysis (the path changed meanwhile)', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'hingeline-report-'));
+    const module = join(dir, 'write-report.mjs');
+    writeFileSync(module, `export async function writeReport(o) { throw Object.assign(new Error(o.outPath + ' is a named pipe (FIFO), not a regular file; only regular files (or new paths) are written'), { code: 'ENOTREGULAR' }); }\n`);
+    const io = memoryIo({ 'p.hingeline': serializeProject(twoMembers()) });
+    expect(await main(['report', 'p.hingeline', '--out', 'r.pdf', '--member', 'C-101', '--jobs', '1'], io, { reportModule: pathToFileURL(module) })).toBe(2);
+    expect(io.err()).toBe('hingeline: cannot write r.pdf: /virtual/r.pdf is a named pipe (FIFO), not a regular file; only regular files (or new paths) are written\n');
     rmSync(dir, { recursive: true, force: true });
   });
 });

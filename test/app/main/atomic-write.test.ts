@@ -1,11 +1,11 @@
-import { spawn, type ChildProcess } from 'node:child_process';
+import { execFileSync, spawn, type ChildProcess } from 'node:child_process';
 import { once } from 'node:events';
-import { chmod, mkdir, mkdtemp, readdir, readFile, rm, stat, symlink, writeFile } from 'node:fs/promises';
+import { chmod, lstat, mkdir, mkdtemp, readdir, readFile, rm, stat, symlink, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { backupPathFor, removeStaleTemps, TEMP_MARKER, writeFileAtomic } from '../../../app/main/atomic-write.ts';
+import { assertWritableTarget, backupPathFor, NotRegularFileError, removeStaleTemps, TEMP_MARKER, writeFileAtomic } from '../../../app/main/atomic-write.ts';
 
 const repoRoot = fileURLToPath(new URL('../../../', import.meta.url));
 const childScript = fileURLToPath(new URL('../fixtures/atomic-write-child.ts', import.meta.url));
@@ -202,11 +202,61 @@ describe('writeFileAtomic in process', () => {
     expect(await readdir(folder)).toEqual([]);
   });
 
-  it('removes its temp file and keeps the old content when the final rename fails', async () => {
+  it('refuses a folder at the target path, writing nothing', async () => {
     const target = join(folder, 'occupied');
-    await mkdir(target); // a folder where the file should go: rename fails with EISDIR
-    await expect(writeFileAtomic(target, 'data')).rejects.toBeInstanceOf(Error);
+    await mkdir(target);
+    const refusal = writeFileAtomic(target, 'data');
+    await expect(refusal).rejects.toBeInstanceOf(NotRegularFileError);
+    await expect(refusal).rejects.toMatchObject({ code: 'EISDIR', kind: 'folder', message: `${target} is a folder, not a regular file; only regular files (or new paths) are written` });
     expect(await readdir(folder)).toEqual(['occupied']);
+    expect(await readdir(target)).toEqual([]);
+  });
+
+  it('refuses a character device and leaves it in place (/dev/null is still a device afterwards)', async () => {
+    const before = await stat('/dev/null');
+    expect(before.isCharacterDevice()).toBe(true);
+    await expect(writeFileAtomic('/dev/null', '%PDF-1.7 not a device')).rejects.toMatchObject({ code: 'ENOTREGULAR', kind: 'character device' });
+    const after = await stat('/dev/null');
+    expect(after.isCharacterDevice()).toBe(true);
+    expect(after.ino).toBe(before.ino);
+    expect(after.rdev).toBe(before.rdev);
+  });
+
+  it('refuses a symbolic link that leads to a device, and a named pipe', async () => {
+    const link = join(folder, 'report.pdf');
+    await symlink('/dev/null', link);
+    await expect(writeFileAtomic(link, 'x')).rejects.toMatchObject({ code: 'ENOTREGULAR', path: '/dev/null' });
+    const fifo = join(folder, 'pipe');
+    execFileSync('mkfifo', [fifo]);
+    await expect(writeFileAtomic(fifo, 'x')).rejects.toMatchObject({ code: 'ENOTREGULAR', kind: 'named pipe (FIFO)' });
+    expect((await lstat(fifo)).isFIFO()).toBe(true);
+    expect((await readdir(folder)).sort()).toEqual(['pipe', 'report.pdf']);
+  });
+
+  it('refuses to keep a backup over something that is not a regular file', async () => {
+    const target = join(folder, 'b.hingeline');
+    await writeFile(target, 'old');
+    await mkdir(backupPathFor(target));
+    await expect(writeFileAtomic(target, 'new', { keepBackup: true })).rejects.toMatchObject({ code: 'EISDIR' });
+    expect(await readFile(target, 'utf8')).toBe('old');
+  });
+
+  it('checks the target again just before the final rename', async () => {
+    const target = join(folder, 'swapped');
+    const write = writeFileAtomic(target, 'data', {
+      onProgress: async (progress) => {
+        // A folder appears at the path while the data is being written.
+        if (progress.stage === 'synced') await mkdir(target);
+      },
+    });
+    await expect(write).rejects.toMatchObject({ code: 'EISDIR' });
+    expect(await readdir(folder)).toEqual(['swapped']);
+  });
+
+  it('accepts a new path and a regular file', async () => {
+    await expect(assertWritableTarget(join(folder, 'new.pdf'))).resolves.toBeUndefined();
+    await writeFile(join(folder, 'old.pdf'), 'x');
+    await expect(assertWritableTarget(join(folder, 'old.pdf'))).resolves.toBeUndefined();
   });
 });
 

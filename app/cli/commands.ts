@@ -105,7 +105,7 @@ export async function runAnalysis(io: Io, project: Project, memberIds: readonly 
   let members: MemberResult[];
   try {
     members = jobs === 1
-      ? analyzeMembers(project, memberIds, onProgress)
+      ? await io.withImmediateInterrupt(() => analyzeMembers(project, memberIds, onProgress))
       : await analyzeMembersParallel(project, memberIds, { ...(jobs ? { workers: jobs } : {}), signal: io.signal, onProgress });
   } catch (error) {
     if (error instanceof Error && error.name === 'AbortError') throw new CliFailure('stopped: the analysis was cancelled', EXIT.interrupted);
@@ -188,7 +188,7 @@ async function report(io: Io, command: Extract<Command, { kind: 'report' }>, rep
   const results = await runAnalysis(io, project, ids, command.jobs);
   const outPath = io.resolvePath(command.out);
   try {
-    await writeReport({ project, results, ...(ids ? { memberIds: ids } : {}), outPath, sourceText: text });
+    await io.withImmediateInterrupt(() => writeReport({ project, results, ...(ids ? { memberIds: ids } : {}), outPath, sourceText: text }));
   } catch (error) {
     // The path was fine at the start; it may have changed since, or the disk may be full.
     if (/^E[A-Z]+$/.test(String((error as { code?: unknown }).code))) throw new CliFailure(`cannot write ${command.out}: ${writeProblem(error)}`, EXIT.usage);

@@ -29,15 +29,23 @@ export interface CliIo {
   exists(path: string): boolean;
   /** Absolute path of `path` from the working directory. */
   resolvePath(path: string): string;
-  /** Aborts when the user presses Ctrl+C. */
+  /** Aborts when the user presses Ctrl+C (while this thread is free to notice it). */
   readonly signal: AbortSignal;
+  /**
+   * Runs work that keeps this thread busy for long stretches (an analysis on this thread, pdfmake's
+   * layout). Ctrl+C cannot be noticed by JavaScript then, so meanwhile it ends the process at once,
+   * as the operating system's default does (exit status 130 in the shell); nothing is being written
+   * during such work, and an interrupted atomic write leaves only a temp file the next write removes.
+   */
+  withImmediateInterrupt<T>(work: () => T | Promise<T>): Promise<T>;
   readonly env: Readonly<Record<string, string | undefined>>;
 }
 
 /** The real thing: process streams, the file system and SIGINT. */
 export function nodeIo(): CliIo {
   const controller = new AbortController();
-  process.once('SIGINT', () => controller.abort());
+  const onInterrupt = () => controller.abort();
+  process.once('SIGINT', onInterrupt);
   // A reader that stops early (`hingeline analyze … | head`) closes the pipe: end quietly.
   for (const stream of [process.stdout, process.stderr]) {
     stream.on('error', (error: NodeJS.ErrnoException) => {
@@ -60,6 +68,16 @@ export function nodeIo(): CliIo {
     exists: (path) => existsSync(path),
     resolvePath: (path) => resolve(path),
     signal: controller.signal,
+    withImmediateInterrupt: async (work) => {
+      // Without a listener Node restores the default action of SIGINT: the process ends at once.
+      const listening = process.listeners('SIGINT').includes(onInterrupt);
+      if (listening) process.off('SIGINT', onInterrupt);
+      try {
+        return await work();
+      } finally {
+        if (listening && !controller.signal.aborted) process.once('SIGINT', onInterrupt);
+      }
+    },
     env: process.env,
   };
 }

@@ -2,13 +2,15 @@
  * The installed command end to end: `node build/bin/hingeline.mjs …` in a child process, run from
  * a folder outside the repository (as `npx hingeline` would be from a project folder).
  */
-import { spawnSync } from 'node:child_process';
+import { spawn, spawnSync } from 'node:child_process';
+import { once } from 'node:events';
 import { mkdirSync, mkdtempSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { afterAll, describe, expect, it } from 'vitest';
-import { parseProject } from '../../../core/project/file.ts';
+import { parseProject, serializeProject } from '../../../core/project/file.ts';
+import { generatedProject } from '../../core/project/generated-project.ts';
 
 const BIN = fileURLToPath(new URL('../../../build/bin/hingeline.mjs', import.meta.url));
 const work = mkdtempSync(join(tmpdir(), 'hingeline-bin-'));
@@ -63,5 +65,24 @@ describe('the hingeline command', () => {
     mkdirSync(join(work, 'out.pdf'));
     expect(run('report', 'd.hingeline', '--out', 'out.pdf')).toMatchObject({ code: 2, stderr: 'hingeline: cannot write out.pdf: it is a folder\n' });
     expect(run('demo', '--out', '/dev/null', '--force')).toMatchObject({ code: 2, stderr: expect.stringMatching(/^hingeline: cannot write \/dev\/null: \/dev\/null is a character device/) });
+  }, 60_000);
+
+  it('stops within a second on Ctrl+C while analysing in this thread (--jobs 1)', async () => {
+    // 1,000 members take well over ten seconds in one thread; the interrupt comes a few seconds in.
+    writeFileSync(join(work, 'large.hingeline'), serializeProject(generatedProject(1000)));
+    const child = spawn(process.execPath, [BIN, 'analyze', 'large.hingeline', '--jobs', '1', '--format', 'json'], { cwd: work, stdio: ['ignore', 'pipe', 'pipe'] });
+    let stdout = '';
+    child.stdout.on('data', (chunk: Buffer) => (stdout += chunk.toString()));
+    const exited = once(child, 'exit');
+    await new Promise((resolve) => setTimeout(resolve, 4000));
+    expect(child.exitCode).toBeNull();
+    const sent = performance.now();
+    child.kill('SIGINT');
+    const [code, signal] = (await exited) as [number | null, NodeJS.Signals | null];
+    const seconds = (performance.now() - sent) / 1000;
+    // Ended by the interrupt (status 130 in a shell), not by finishing: no results were printed.
+    expect(code === 130 || signal === 'SIGINT').toBe(true);
+    expect(stdout).toBe('');
+    expect(seconds).toBeLessThan(1);
   }, 60_000);
 });

@@ -42,6 +42,7 @@ function memoryIo(files: Record<string, string> = {}, options: { tty?: boolean; 
     exists: (path) => store.has(path) || (path.startsWith('/') && !path.startsWith('/virtual/') && existsOnDisk(path)),
     resolvePath: (path) => (path.startsWith('/') ? path : `/virtual/${path}`),
     signal: new AbortController().signal,
+    withImmediateInterrupt: async (work) => work(),
     env: options.env ?? {},
   };
 }

@@ -10,6 +10,7 @@ import { parseProject, serializeProject } from '../../core/project/file.ts';
 import { analysisBlockers } from '../../core/project/validate.ts';
 import type { Project } from '../../core/project/types.ts';
 import { EXIT, type Command } from './args.ts';
+import { ownModule } from './bundle.ts';
 import { analysisJson, diagnosticLines, problemCount, progressLine, RESULTS_CAUTION, tableReport, type Style } from './format.ts';
 import type { CliIo } from './io.ts';
 import { analyzeMembersParallel } from './parallel.ts';
@@ -165,7 +166,7 @@ async function demo(io: Io, command: Extract<Command, { kind: 'demo' }>): Promis
 /** The report builder's entry, when this installation has it (app/report/write-report.ts). */
 export type WriteReport = (options: { project: Project; results: ProjectResults; memberIds?: string[]; outPath: string; sourceText: string }) => Promise<void>;
 
-const REPORT_MODULE = new URL('../report/write-report.ts', import.meta.url);
+const REPORT_MODULE = ownModule(import.meta.url, 'write-report.mjs', '../report/write-report.ts');
 
 /** Loads the report builder; null when the module is not part of this installation. */
 export async function loadReportWriter(io: Io, moduleUrl: URL = REPORT_MODULE): Promise<WriteReport | null> {

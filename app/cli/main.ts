@@ -3,19 +3,13 @@
  * the command and returns the exit code; it never throws and never prints a stack trace unless
  * HINGELINE_DEBUG is set. See docs/cli.md.
  */
-import { readFileSync } from 'node:fs';
+import packageJson from '../../package.json' with { type: 'json' };
 import { EXIT, helpText, parseArguments } from './args.ts';
-import { CliFailure, runCommand } from './commands.ts';
 import type { CliIo } from './io.ts';
 
 /** The package version (package.json). */
 export function packageVersion(): string {
-  try {
-    const pkg = JSON.parse(readFileSync(new URL('../../package.json', import.meta.url), 'utf8')) as { version?: unknown };
-    return typeof pkg.version === 'string' ? pkg.version : 'unknown';
-  } catch {
-    return 'unknown';
-  }
+  return packageJson.version;
 }
 
 /** Runs the command line with `argv` (the arguments after `hingeline`) and returns the exit code. */
@@ -34,6 +28,8 @@ export async function main(argv: readonly string[], io: CliIo, options: { report
     io.stdout(`hingeline ${packageVersion()}\n`);
     return EXIT.ok;
   }
+  // Loaded only for a command: help and --version start without the engine.
+  const { CliFailure, runCommand } = await import('./commands.ts');
   try {
     return await runCommand(io, command, options);
   } catch (error) {

@@ -5,12 +5,13 @@
  *
  * Members are dealt round-robin to the workers (member i to worker i mod n), which balances long and
  * short members well in practice. Each worker analyses the sections its members use once.
- * Workers run TypeScript through tsx: worker-entry.mjs registers tsx's loader in the worker, then
- * loads worker.ts.
+ * Workers start from the bundle (out/cli/<build>/cli-worker.mjs); from the sources, worker-entry.mjs
+ * registers tsx's loader in the worker, then loads worker.ts.
  */
 import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
 import type { Project } from '../../core/project/types.ts';
+import { ownModule } from './bundle.ts';
 import type { WorkerInput, WorkerMessage } from './worker.ts';
 import type { MemberResult } from '../../core/assessment/results.ts';
 
@@ -23,7 +24,7 @@ export interface ParallelOptions {
   readonly onProgress?: (done: number, total: number, memberId: string) => void;
 }
 
-const WORKER_ENTRY = new URL('./worker-entry.mjs', import.meta.url);
+const WORKER_ENTRY = ownModule(import.meta.url, 'cli-worker.mjs', './worker-entry.mjs');
 
 /** Default worker count: one per core the OS offers, no more than there are members, at least 1. */
 export function defaultWorkerCount(members: number, cores: number = availableParallelism()): number {

@@ -6,9 +6,10 @@
  */
 import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
+import { ownModule } from '../cli/bundle.ts';
 import type { ChartJob, ChartJobResult } from './chart-worker.ts';
 
-const WORKER_ENTRY = new URL('./chart-worker-entry.mjs', import.meta.url);
+const WORKER_ENTRY = ownModule(import.meta.url, 'chart-worker.mjs', './chart-worker-entry.mjs');
 
 /** Worker count: one per core, at most `jobs`, at least 1. */
 export function chartWorkerCount(jobs: number, cores: number = availableParallelism()): number {

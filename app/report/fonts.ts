@@ -1,47 +1,62 @@
 /**
- * Node side of the report font (core/report/fonts.ts): where the Roboto TTF files are (shipped by
- * pdfmake under the SIL Open Font License 1.1) and their registration with the chart canvas.
+ * Node side of the report fonts (core/report/fonts.ts): where the files are — Roboto shipped by
+ * pdfmake, the Noto fallbacks by their @expo-google-fonts packages, all under the SIL Open Font
+ * License 1.1 — their metrics for the charts, and the Roboto registration with the chart canvas
+ * (used only for PNG charts).
  */
-import { existsSync } from 'node:fs';
+import { existsSync, readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
-import { GlobalFonts } from '@napi-rs/canvas';
-import { REPORT_FONT_FAMILY, REPORT_FONT_FILES, reportFontDescriptors, type FontDescriptor } from '../../core/report/fonts.ts';
+import { REPORT_FONT_FAMILY, REPORT_FONT_FILES, reportFontDescriptors, reportFontFiles, reportFontSet, type FontDescriptor } from '../../core/report/fonts.ts';
+import type { ReportFontSet } from '../../core/report/scripts.ts';
 
-let fontDirectory: string | undefined;
+const require = createRequire(import.meta.url);
+let robotoFolder: string | undefined;
 
 /** Folder holding pdfmake's Roboto TTF files (resolved once). Throws with a clear message when missing. */
 export function reportFontDirectory(): string {
-  if (fontDirectory) return fontDirectory;
-  const require = createRequire(import.meta.url);
-  const packageJson = require.resolve('pdfmake/package.json');
-  const folder = join(dirname(packageJson), 'fonts', 'Roboto');
+  if (robotoFolder) return robotoFolder;
+  const folder = join(dirname(require.resolve('pdfmake/package.json')), 'fonts', 'Roboto');
   const missing = Object.values(REPORT_FONT_FILES).filter((file) => !existsSync(join(folder, file)));
   if (missing.length > 0) throw new Error(`The report font is missing from ${folder}: ${missing.join(', ')} (reinstall pdfmake).`);
-  fontDirectory = folder;
+  robotoFolder = folder;
   return folder;
 }
 
-/** Absolute paths of the four font files. */
+/** Absolute path of a report font file named as in core/report/fonts.ts (a Roboto file name or `package/path`). */
+export function reportFontPath(file: string): string {
+  if (!file.includes('/')) return join(reportFontDirectory(), file);
+  try {
+    return require.resolve(file);
+  } catch {
+    throw new Error(`The report font ${file} is missing (run "npm install").`);
+  }
+}
+
+/** Absolute paths of every font file the report may embed. */
 export function reportFontPaths(): string[] {
-  const folder = reportFontDirectory();
-  return Object.values(REPORT_FONT_FILES).map((file) => join(folder, file));
+  return [...Object.values(REPORT_FONT_FILES).map((file) => reportFontPath(file)), ...reportFontFiles().filter((f) => f.family !== REPORT_FONT_FAMILY).map((f) => reportFontPath(f.file))];
 }
 
 /** pdfmake font descriptors with absolute paths. */
 export function nodeFontDescriptors(): Record<string, FontDescriptor> {
-  const folder = reportFontDirectory();
-  return reportFontDescriptors((file) => join(folder, file));
+  return reportFontDescriptors(reportFontPath);
+}
+
+let fontSet: ReportFontSet | undefined;
+
+/** The report's font metrics (read once per process). */
+export function nodeReportFontSet(): ReportFontSet {
+  fontSet ??= reportFontSet((file) => readFileSync(reportFontPath(file)));
+  return fontSet;
 }
 
 let registered = false;
 
-/** Registers the report font with @napi-rs/canvas under REPORT_FONT_FAMILY (once per process). */
-export function registerCanvasFonts(): void {
+/** Registers Roboto with @napi-rs/canvas under REPORT_FONT_FAMILY (once per process; PNG charts). */
+export async function registerCanvasFonts(): Promise<void> {
   if (registered) return;
-  const folder = reportFontDirectory();
-  for (const file of [REPORT_FONT_FILES.normal, REPORT_FONT_FILES.bold]) {
-    GlobalFonts.registerFromPath(join(folder, file), REPORT_FONT_FAMILY);
-  }
+  const { GlobalFonts } = await import('@napi-rs/canvas');
+  for (const file of [REPORT_FONT_FILES.normal, REPORT_FONT_FILES.bold]) GlobalFonts.registerFromPath(reportFontPath(file), REPORT_FONT_FAMILY);
   registered = true;
 }

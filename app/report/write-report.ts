@@ -10,6 +10,7 @@ import { buildReportDocument } from '../../core/report/document.ts';
 import { reportCharts } from '../../core/report/figures.ts';
 import { writeFileAtomic } from '../main/atomic-write.ts';
 import packageJson from '../../package.json' with { type: 'json' };
+import { nodeReportFontSet } from './fonts.ts';
 import { renderPdf } from './pdf.ts';
 import type { ChartJob } from './chart-worker.ts';
 import { chartWorkerCount, renderChartsInWorkers } from './chart-workers.ts';
@@ -29,7 +30,7 @@ export interface ReportOptions {
   readonly generatedOn?: string;
   /** Version printed on the cover (default: the package version). */
   readonly softwareVersion?: string;
-  /** Charts as vectors or as 144 dpi images (default `auto`: vectors up to VECTOR_CHART_LIMIT charts). */
+  /** Charts as vectors or as 144 dpi images (default `auto`: vectors). */
   readonly chartFormat?: ChartFormat | 'auto';
   /** Worker threads for the charts (see `ImageOptions.workers`). */
   readonly chartWorkers?: number;
@@ -45,22 +46,15 @@ export function projectHash(sourceText: string): string {
   return createHash('sha256').update(sourceText, 'utf8').digest('hex');
 }
 
-/** How charts go into the PDF: vector (SVG) or raster (PNG at 144 dpi). */
+/**
+ * How charts go into the PDF: vector (SVG, the default, also for `auto`) or raster (PNG at 144 dpi).
+ * The charts are recorded as compact SVG (core/report/svg-canvas.ts: a few kB and a few ms of
+ * pdfmake's time each), smaller in the PDF than images and sharp in print.
+ */
 export type ChartFormat = 'svg' | 'png';
 
-/**
- * Charts up to which `auto` draws vectors. Vector charts are sharper but pdfmake lays each out in
- * about 40 ms against 1 ms for an image, so large reports use images.
- */
-export const VECTOR_CHART_LIMIT = 120;
-
-/** The chart format for a report with `charts` charts: `svg` up to VECTOR_CHART_LIMIT, else `png`. */
-export function autoChartFormat(charts: number): ChartFormat {
-  return charts <= VECTOR_CHART_LIMIT ? 'svg' : 'png';
-}
-
 export interface ImageOptions {
-  /** Chart format (default `auto`: see `autoChartFormat`). */
+  /** Chart format (default and `auto`: `svg`). */
   readonly format?: ChartFormat | 'auto';
   /** Worker threads for drawing charts: 0 draws on this thread (default: 0 below 40 charts, else one per core). */
   readonly workers?: number;
@@ -75,8 +69,7 @@ export const WORKER_THRESHOLD = 40;
  */
 export async function renderReportImages(options: Pick<ReportOptions, 'project' | 'results' | 'memberIds'>, imageOptions: ImageOptions = {}): Promise<Record<string, string>> {
   const figures = reportCharts(options);
-  const chartCount = Object.values(figures).filter((f) => f.kind === 'chart').length;
-  const format = imageOptions.format === undefined || imageOptions.format === 'auto' ? autoChartFormat(chartCount) : imageOptions.format;
+  const format: ChartFormat = imageOptions.format === 'png' ? 'png' : 'svg';
   const images: Record<string, string> = {};
   const jobs: ChartJob[] = [];
   for (const [id, figure] of Object.entries(figures)) {
@@ -102,6 +95,7 @@ export async function renderReportBuffer(options: ReportOptions): Promise<Buffer
     ...(options.memberIds ? { memberIds: options.memberIds } : {}),
     images: await renderReportImages(options, { format: options.chartFormat ?? 'auto', ...(options.chartWorkers !== undefined ? { workers: options.chartWorkers } : {}) }),
     meta: { softwareVersion: options.softwareVersion ?? SOFTWARE_VERSION, projectHash: projectHash(options.sourceText), generatedOn },
+    fonts: nodeReportFontSet(),
   });
   return renderPdf(definition, generatedOn);
 }

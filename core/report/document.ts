@@ -18,6 +18,7 @@ import { CAUTION_TEXT, COLOURS, DEFAULT_STYLE, FOOTER_CAUTION, STYLES, cautionBo
 import { memberChapter, statusCell } from './member.ts';
 import { methodChapter } from './method.ts';
 import { ReferenceList } from './references.ts';
+import { withFonts } from './scripts.ts';
 import { sectionChapter } from './sections.ts';
 import type { Content, ContentNode, DocumentDefinition, ReportInput } from './types.ts';
 import type { MemberResult } from '../assessment/results.ts';
@@ -175,6 +176,9 @@ export function buildReportDocument(input: ReportInput): DocumentDefinition {
   ];
   // A new node on every call: pdfmake annotates nodes while laying them out, so none may be shared.
   const rule = (): ContentNode => ({ canvas: [{ type: 'line', x1: 0, y1: 0, x2: page.contentWidth, y2: 0, lineWidth: 0.4, lineColor: COLOURS.rule }] });
+  const fonts = input.fonts;
+  // Names in scripts the report font lacks, and right-to-left text: fallback fonts, visual order.
+  const scripted = <T,>(c: T): T => (fonts ? withFonts(c, fonts) : c);
   return {
     pageSize: page.pageSize,
     pageOrientation: 'portrait',
@@ -187,8 +191,8 @@ export function buildReportDocument(input: ReportInput): DocumentDefinition {
       creator: `Hingeline ${meta.softwareVersion}`,
       producer: `Hingeline ${meta.softwareVersion}`,
     },
-    content,
-    header: (currentPage: number) => (currentPage === 1 ? null : {
+    content: scripted(content),
+    header: (currentPage: number) => (currentPage === 1 ? null : scripted<Content>({
       margin: [page.margins[0], 24, page.margins[2], 0],
       stack: [
         {
@@ -199,8 +203,8 @@ export function buildReportDocument(input: ReportInput): DocumentDefinition {
         },
         { ...rule(), margin: [0, 4, 0, 0] },
       ],
-    }),
-    footer: (currentPage: number, pageCount: number) => ({
+    })),
+    footer: (currentPage: number, pageCount: number) => scripted<Content>({
       margin: [page.margins[0], 14, page.margins[2], 0],
       stack: [
         rule(),

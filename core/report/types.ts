@@ -6,6 +6,7 @@
 import type { ChartSpec } from '../charts/types.ts';
 import type { ProjectResults } from '../analysis.ts';
 import type { Project } from '../project/types.ts';
+import type { ReportFontSet } from './scripts.ts';
 
 export interface ReportMeta {
   /** Version of the program that produced the report, e.g. `0.1.0`. */
@@ -27,6 +28,13 @@ export interface ReportInput {
    */
   readonly images: Readonly<Record<string, string>>;
   readonly meta: ReportMeta;
+  /**
+   * The report's fonts with their metrics (core/report/fonts.ts `reportFontSet`). When given, text the
+   * report font cannot print (Hebrew, Arabic, emoji in names) is set in the fallback fonts and
+   * right-to-left text is put in visual order (scripts.ts); the host must register the same families
+   * with pdfmake (`reportFontDescriptors`).
+   */
+  readonly fonts?: ReportFontSet;
 }
 
 /** A figure the document needs: a chart to draw from its spec, or a ready SVG drawing. Sizes in points. */

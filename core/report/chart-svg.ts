@@ -1,0 +1,31 @@
+/**
+ * One chart of the report as SVG text: chart.js (injected, core stays free of it) draws the spec's
+ * configuration (core/charts/chartjs-config.ts, the same as on screen) on the recording canvas of
+ * svg-canvas.ts. Used by the command line and by the app's report worker alike, so both print the
+ * same figures.
+ */
+import { toChartJsConfig } from '../charts/chartjs-config.ts';
+import type { ChartSpec } from '../charts/types.ts';
+import type { ReportFontSet } from './scripts.ts';
+import { SvgCanvasContext } from './svg-canvas.ts';
+
+/** The parts of chart.js this needs: the Chart class (with its registerables registered) and BasicPlatform. */
+export interface ChartJsLibrary {
+  readonly Chart: new (item: unknown, config: never) => { destroy(): void };
+  readonly BasicPlatform: unknown;
+}
+
+/**
+ * `spec` drawn at `width` × `height` points (= CSS pixels of the canvas) as an SVG document.
+ * Deterministic: the same spec, size and fonts give the same text.
+ */
+export function chartSvg(chartJs: ChartJsLibrary, spec: ChartSpec, width: number, height: number, fonts: ReportFontSet): string {
+  const context = new SvgCanvasContext(Math.round(width), Math.round(height), fonts);
+  const config = toChartJsConfig(spec, { fontFamily: fonts.primary.family, devicePixelRatio: 1, platform: chartJs.BasicPlatform });
+  const chart = new chartJs.Chart(context.canvas, config as never);
+  try {
+    return context.toSvg();
+  } finally {
+    chart.destroy();
+  }
+}

@@ -1,0 +1,102 @@
+import { BasicPlatform, Chart, registerables } from 'chart.js';
+import { describe, expect, it } from 'vitest';
+import { analyzeProject } from '../../../core/analysis.ts';
+import { loadDeflectionChart } from '../../../core/charts/load-deflection.ts';
+import { chartSvg } from '../../../core/report/chart-svg.ts';
+import { parseFont, svgPaint, SvgCanvasContext } from '../../../core/report/svg-canvas.ts';
+import { reportTestProject } from './fixtures.ts';
+import { testFontSet } from './report-fonts.ts';
+
+const fonts = testFontSet();
+
+describe('SvgCanvasContext', () => {
+  it('keeps a dashed line one path with a dash array, and joins strokes of the same style', () => {
+    const ctx = new SvgCanvasContext(100, 50, fonts);
+    ctx.strokeStyle = '#2364aa';
+    ctx.lineWidth = 1.5;
+    ctx.setLineDash([6, 3]);
+    for (const y of [10, 20]) {
+      ctx.beginPath();
+      ctx.moveTo(0, y);
+      ctx.lineTo(100, y);
+      ctx.stroke();
+    }
+    ctx.setLineDash([]);
+    ctx.beginPath();
+    ctx.moveTo(0, 30);
+    ctx.lineTo(100, 30);
+    ctx.stroke();
+    expect(ctx.toSvg()).toBe('<svg xmlns="http://www.w3.org/2000/svg" width="100" height="50" viewBox="0 0 100 50">'
+      + '<path fill="none" stroke="#2364aa" stroke-width="1.5" stroke-dasharray="6 3" d="M0 10L100 10M0 20L100 20"/>'
+      + '<path fill="none" stroke="#2364aa" stroke-width="1.5" d="M0 30L100 30"/></svg>');
+  });
+
+  it('writes a clip only for drawings that reach outside it, and applies transforms to the path', () => {
+    const ctx = new SvgCanvasContext(100, 100, fonts);
+    ctx.save();
+    ctx.beginPath();
+    ctx.rect(10, 10, 50, 50);
+    ctx.clip();
+    ctx.fillStyle = 'rgba(210, 105, 30, 0.5)';
+    ctx.fillRect(20, 20, 10, 10);
+    ctx.translate(40, 0);
+    ctx.fillRect(20, 20, 10, 10);
+    ctx.restore();
+    ctx.fillRect(0, 0, 5, 5);
+    expect(ctx.toSvg()).toBe('<svg xmlns="http://www.w3.org/2000/svg" width="100" height="100" viewBox="0 0 100 100"><defs><clipPath id="c0"><rect x="10" y="10" width="50" height="50"/></clipPath></defs>'
+      + '<path fill="#d2691e" fill-opacity="0.5" d="M20 20L30 20L30 30L20 30Z"/>'
+      + '<path fill="#d2691e" fill-opacity="0.5" d="M60 20L70 20L70 30L60 30Z" clip-path="url(#c0)"/>'
+      // restore() brought back the fill style saved before: black.
+      + '<path fill="#000000" d="M0 0L5 0L5 5L0 5Z"/></svg>');
+  });
+
+  it('places text by the fonts’ advance widths: centred, on the middle of the em box', () => {
+    const ctx = new SvgCanvasContext(200, 40, fonts);
+    ctx.font = '10px Roboto';
+    ctx.textAlign = 'center';
+    ctx.textBaseline = 'middle';
+    ctx.fillStyle = '#39424c';
+    ctx.fillText('Δ = 12 mm', 100, 20);
+    const width = [...'Δ = 12 mm'].reduce((sum, c) => sum + fonts.primary.normal.advance(c.codePointAt(0)!), 0) * 10;
+    expect(ctx.measureText('Δ = 12 mm').width).toBeCloseTo(width, 9);
+    const m = /<text x="([^"]+)" y="([^"]+)" font-family="Roboto" font-size="10" fill="#39424c">Δ = 12 mm<\/text>/.exec(ctx.toSvg());
+    expect(Number(m![1])).toBeCloseTo(100 - width / 2, 3);
+    const { ascent, descent } = fonts.primary.normal;
+    expect(Number(m![2])).toBeCloseTo(20 + ((ascent - descent) / 2) * 10, 3);
+  });
+
+  it('writes a Hebrew name as pieces in their fonts, left to right', () => {
+    const ctx = new SvgCanvasContext(200, 40, fonts);
+    ctx.font = '500 11px Roboto';
+    ctx.fillText('Beam קורה', 0, 20);
+    const texts = [...ctx.toSvg().matchAll(/<text[^>]*font-family="([^"]+)"[^>]*font-weight="bold"[^>]*>([^<]*)<\/text>/g)].map((m) => `${m[1]}:${m[2]}`);
+    expect(texts).toEqual(['Roboto:Beam ', 'NotoSansHebrew:קורה']);
+  });
+
+  it('reads CSS colours and fonts', () => {
+    expect(svgPaint('rgba(255, 255, 255, 0.85)')).toEqual({ colour: '#ffffff', opacity: 0.85 });
+    expect(svgPaint('#2364AA')).toEqual({ colour: '#2364aa', opacity: 1 });
+    expect(svgPaint('#11223380').opacity).toBeCloseTo(128 / 255, 12);
+    expect(parseFont('500 11px Roboto')).toEqual({ size: 11, bold: true, family: 'Roboto' });
+    expect(parseFont('normal 8.5px "Roboto", sans-serif')).toEqual({ size: 8.5, bold: false, family: '"Roboto", sans-serif' });
+  });
+});
+
+describe('chartSvg: a report chart drawn by chart.js on the recording canvas', () => {
+  Chart.register(...registerables);
+  const results = analyzeProject(reportTestProject());
+  const spec = loadDeflectionChart(results.members[0]!, 'si');
+  const svg = chartSvg({ Chart, BasicPlatform } as never, spec, 495, 250, fonts);
+
+  it('holds the title, axis titles, legend and marker labels as text in the report font', () => {
+    expect(svg.startsWith('<svg xmlns="http://www.w3.org/2000/svg" width="495" height="250"')).toBe(true);
+    const text = [...svg.matchAll(/<text[^>]*>([^<]*)<\/text>/g)].map((m) => m[1]).join(' | ');
+    for (const words of [spec.title, spec.x.label, spec.y.label, ...spec.markers.filter((m) => m.label !== '').map((m) => m.label)]) expect(text).toContain(words);
+    expect(svg).not.toMatch(/NaN|Infinity/);
+  });
+
+  it('is small and deterministic', () => {
+    expect(svg.length).toBeLessThan(20_000);
+    expect(chartSvg({ Chart, BasicPlatform } as never, spec, 495, 250, fonts)).toBe(svg);
+  });
+});

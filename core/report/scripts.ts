@@ -161,11 +161,19 @@ export function textWidth(text: string, fonts: ReportFontSet, bold = false): num
 type Node = { [key: string]: unknown };
 
 /** Inline pieces of a string, or null when it needs no other font and no reordering. */
+/**
+ * Right-to-left text up to this length is kept on one line (its spaces become no-break spaces): its
+ * visual order is computed for the whole string, so a line break would put its words on the wrong
+ * lines. Longer text may wrap (see the limitation above).
+ */
+export const RTL_NO_WRAP_LENGTH = 60;
+
 function inlinePieces(text: string, fonts: ReportFontSet): Node[] | null {
   if (PLAIN.test(text)) return null;
   const pieces = textPieces(text, fonts);
-  if (pieces.length === 1 && pieces[0]!.family === fonts.primary.family) return null;
-  return pieces.map((p) => (p.family === fonts.primary.family ? { text: p.text } : { text: p.text, font: p.family }));
+  if (pieces.length === 1 && pieces[0]!.family === fonts.primary.family && !pieces[0]!.rightToLeft) return null;
+  const noWrap = text.length <= RTL_NO_WRAP_LENGTH && pieces.some((p) => p.rightToLeft);
+  return pieces.map((p) => ({ text: noWrap ? p.text.replace(/ /g, '\u00A0') : p.text, ...(p.family === fonts.primary.family ? {} : { font: p.family }), ...(noWrap ? { noWrap: true } : {}) }));
 }
 
 function textValue(value: unknown, fonts: ReportFontSet): unknown {

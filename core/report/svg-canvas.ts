@@ -112,8 +112,7 @@ export class SvgCanvasContext {
       transform: IDENTITY, fillStyle: '#000000', strokeStyle: '#000000', lineWidth: 1, lineCap: 'butt', lineJoin: 'miter', miterLimit: 10,
       dash: [], dashOffset: 0, font: '10px sans-serif', textAlign: 'start', textBaseline: 'alphabetic', globalAlpha: 1, clip: null,
     };
-    const context = this;
-    this.canvas = { width, height, style: {}, getContext: (kind) => (kind === '2d' ? context : null) };
+    this.canvas = { width, height, style: {}, getContext: (kind) => (kind === '2d' ? this : null) };
   }
 
   // --- state -----------------------------------------------------------------------------------

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { renderChartPng, renderChartSvg, tidySvg } from '../../../app/report/render-chart.ts';
+import { renderChartPng, renderChartSvg } from '../../../app/report/render-chart.ts';
 import { loadDeflectionChart } from '../../../core/charts/load-deflection.ts';
 import { analyzeProject } from '../../../core/analysis.ts';
 import { reportTestProject } from '../../core/report/fixtures.ts';
@@ -28,8 +28,4 @@ describe('charts drawn in Node with chart.js', () => {
     expect([bytes.readUInt32BE(16), bytes.readUInt32BE(20)]).toEqual([600, 400]);
   });
 
-  it('rewrites shaped canvas text as plain text for the PDF', () => {
-    const raw = '<?xml version="1.0"?>\n<svg><text x="1, 2.5, 4, " y="3, ">\uFB01rst</text><text x="" y=""></text><clipPath id="cl_9"><rect x="1" y="2"/></clipPath><g clip-path="url(#cl_9)"/></svg>';
-    expect(tidySvg(raw)).toBe('<svg><text x="1" y="3">first</text><clipPath id="c0"><rect x="1" y="2"/></clipPath><g clip-path="url(#c0)"/></svg>');
-  });
 });

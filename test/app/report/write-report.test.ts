@@ -8,6 +8,8 @@ import { reportFormatter } from '../../../core/report/format.ts';
 import { CAUTION_TEXT } from '../../../core/report/layout.ts';
 import { projectHash, renderReportBuffer, writeReport } from '../../../app/report/write-report.ts';
 import { reportTestProject } from '../../core/report/fixtures.ts';
+import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
+import type { TextItem } from 'pdfjs-dist/types/src/display/api';
 import { pdfText, words, type PdfText } from './pdf-text.ts';
 
 const project = reportTestProject();
@@ -102,3 +104,42 @@ describe('writeReport', () => {
     expect(await readdir(folder)).toEqual(['report.pdf']);
   }, 60_000);
 });
+
+describe('names in Hebrew, Arabic and with emoji (issue 17)', () => {
+  const names = ['קורה ראשית 2', 'جسر الطابق', 'Beam 🏗️ east'];
+  const named = { ...project, members: project.members.map((m, i) => (i < 3 ? { ...m, name: names[i]! } : m)) };
+  const namedResults = analyzeProject(named);
+  let pdf: Buffer;
+  let read: PdfText;
+  beforeAll(async () => {
+    pdf = await renderReportBuffer({ ...options, project: named, results: namedResults, memberIds: named.members.slice(0, 3).map((m) => m.id) });
+    read = await pdfText(pdf);
+  }, 120_000);
+
+  it('embeds fonts that have their glyphs (Noto Sans Hebrew, Noto Sans Arabic, Noto Emoji)', () => {
+    const fonts = [...pdf.toString('latin1').matchAll(/\/BaseFont \/[A-Z]{6}\+(\S+)/g)].map((m) => m[1]);
+    for (const family of ['NotoSansHebrew-Regular', 'NotoSansHebrew-Medium', 'NotoSansArabic-Medium', 'NotoEmoji-Medium']) expect(fonts).toContain(family);
+  });
+
+  it('reads the names back from the PDF text', () => {
+    // Shaped Arabic comes back as presentation forms, and joining glyphs as control characters in
+    // the PDF's text map (pdfkit): compare after compatibility normalisation, without controls.
+    const flat = read.all.normalize('NFKC').replace(/[\s\u0000-\u001f]+/g, '');
+    for (const word of ['קורה', 'ראשית', 'الطابق', 'جسر', 'Beam🏗️east']) expect(flat).toContain(word);
+  });
+
+  it('puts the words of a right-to-left name in visual order: the first word rightmost', async () => {
+    const document = await getDocument({ data: new Uint8Array(pdf), verbosity: 0 }).promise;
+    const page = await document.getPage(3);
+    const items = (await page.getTextContent()).items.filter((i): i is TextItem => 'str' in i);
+    const x = (word: string) => items.find((i) => i.str.replace(/\s+/g, '') === word)?.transform[4] as number;
+    // Read right to left: "קורה" first, then "ראשית", then "2"; on the page the order is reversed.
+    expect(x('2')).toBeLessThan(x('ראשית'));
+    expect(x('ראשית')).toBeLessThan(x('קורה'));
+    // And on one line.
+    const y = (word: string) => items.find((i) => i.str.replace(/\s+/g, '') === word)?.transform[5] as number;
+    expect(y('ראשית')).toBe(y('קורה'));
+    await document.destroy();
+  });
+});
+

@@ -52,12 +52,14 @@ describe('withFonts: the document definition', () => {
     ];
     const out = withFonts(tree, fonts) as unknown[];
     expect(out[0]).toBe(untouched);
+    // Short right-to-left text stays on one line (no-break spaces, noWrap): its order is for one line.
+    const rtl = { noWrap: true };
     expect((out[1] as { table: { body: unknown[][] } }).table.body).toEqual([
-      ['Member', { text: [{ text: 'ראשית', font: 'NotoSansHebrew' }, { text: ' ' }, { text: 'קורה', font: 'NotoSansHebrew' }] }],
-      ['B-1', { text: [{ text: 'جسر', font: 'NotoSansArabic' }], bold: true }],
+      ['Member', { text: [{ text: 'ראשית', font: 'NotoSansHebrew', ...rtl }, { text: '\u00A0', ...rtl }, { text: 'קורה', font: 'NotoSansHebrew', ...rtl }] }],
+      ['B-1', { text: [{ text: 'جسر', font: 'NotoSansArabic', ...rtl }], bold: true }],
     ]);
     expect((out[2] as { stack: unknown[] }).stack).toEqual([{ text: [{ text: '🏗️', font: 'NotoEmoji' }, { text: ' Site' }] }]);
-    expect((out[2] as { columns: { text: unknown[] }[] }).columns[0]!.text).toEqual(['Beam ', { text: 'קורה', font: 'NotoSansHebrew' }]);
+    expect((out[2] as { columns: { text: unknown[] }[] }).columns[0]!.text).toEqual(['Beam ', { text: 'קורה', font: 'NotoSansHebrew', noWrap: true }]);
     expect(tree[1]).toEqual({ table: { body: [['Member', 'קורה ראשית'], ['B-1', { text: 'جسر', bold: true }]] } });
   });
 });

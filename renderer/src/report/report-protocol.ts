@@ -15,7 +15,13 @@ export interface ReportRequest {
   readonly softwareVersion: string;
 }
 
+/**
+ * Stages of making a report, in order: analysing the members, drawing the charts, laying out the
+ * pages (pdfmake, no finer progress), writing the pages (`done` of `total` in thousandths).
+ */
+export type ReportStage = 'analysing' | 'drawing' | 'laying-out' | 'writing';
+
 export type ReportReply =
-  | { readonly type: 'progress'; readonly id: number; readonly stage: 'analysing' | 'drawing' | 'writing'; readonly done: number; readonly total: number }
+  | { readonly type: 'progress'; readonly id: number; readonly stage: ReportStage; readonly done: number; readonly total: number }
   | { readonly type: 'pdf'; readonly id: number; readonly bytes: Uint8Array; readonly pages: number | null }
   | { readonly type: 'error'; readonly id: number; readonly message: string };

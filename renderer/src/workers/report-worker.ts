@@ -1,58 +1,47 @@
 /**
- * The PDF report, made off the UI thread: analyse the members (core/analysis), plan and draw the
- * figures (core/report + chart.js on an OffscreenCanvas), build the document definition
- * (core/report) and lay it out with pdfmake 0.3's browser build, Roboto embedded from pdfmake's own
- * font files. Loaded only when a report is asked for.
+ * The PDF report, made off the UI thread with the same code as the command line: analyse the
+ * members (core/analysis), draw the charts with chart.js on core's recording canvas (chartSvg, the
+ * same SVG as `hingeline report`), build the document definition (core/report, with the fallback
+ * fonts for names in other scripts) and lay it out with pdfmake 0.3's browser build. Loaded only when
+ * a report is asked for; the page stops it (terminate) to cancel.
  */
 import pdfMakeModule from 'pdfmake/build/pdfmake.js';
-import vfs from 'pdfmake/build/vfs_fonts.js';
+import { BasicPlatform } from 'chart.js';
 import { analyzeMembers, summarize, type ProjectResults } from '../../../core/analysis.ts';
+import { chartSvg } from '../../../core/report/chart-svg.ts';
 import { buildReportDocument } from '../../../core/report/document.ts';
 import { reportCharts } from '../../../core/report/figures.ts';
-import { REPORT_FONT_FAMILY, REPORT_FONT_FILES, reportFontDescriptors } from '../../../core/report/fonts.ts';
-import { chartPng } from '../report/render-charts.ts';
-import type { ReportReply, ReportRequest } from '../report/report-protocol.ts';
+import { reportFontDescriptors } from '../../../core/report/fonts.ts';
 import type { MemberResult } from '../../../core/assessment/results.ts';
+import { chartJs } from '../charts/chartjs.ts';
+import { loadReportFonts, type BrowserReportFonts } from '../report/report-fonts.ts';
+import type { ReportReply, ReportRequest } from '../report/report-protocol.ts';
 
 interface PdfMakeBrowser {
   addVirtualFileSystem(files: Record<string, string>): void;
   setFonts(fonts: Record<string, unknown>): void;
   setUrlAccessPolicy(policy: (url: string) => boolean): void;
+  setProgressCallback(callback: (fraction: number) => void): void;
   createPdf(definition: unknown): { getBuffer(): Promise<Uint8Array> };
 }
 
 interface WorkerScope {
   postMessage(message: ReportReply, transfer?: Transferable[]): void;
   addEventListener(type: 'message', listener: (event: MessageEvent<ReportRequest>) => void): void;
-  fonts?: { add(face: FontFace): void };
 }
 
 const scope = self as unknown as WorkerScope;
 const pdfMake = ((pdfMakeModule as unknown as { default?: PdfMakeBrowser }).default ?? pdfMakeModule) as unknown as PdfMakeBrowser;
-const files = ((vfs as unknown as { default?: Record<string, string> }).default ?? vfs) as unknown as Record<string, string>;
-let ready: Promise<void> | null = null;
+let ready: Promise<BrowserReportFonts> | null = null;
 
-function bytesOf(base64: string): Uint8Array<ArrayBuffer> {
-  const text = atob(base64);
-  const out = new Uint8Array(text.length);
-  for (let i = 0; i < text.length; i++) out[i] = text.charCodeAt(i);
-  return out;
-}
-
-/** pdfmake's fonts, and the same faces for the chart canvas (so chart text is Roboto too). */
-function prepare(): Promise<void> {
-  ready ??= (async () => {
-    pdfMake.addVirtualFileSystem(files);
+/** pdfmake's fonts (Roboto and the Noto fallbacks), loaded once per worker. */
+function prepare(): Promise<BrowserReportFonts> {
+  ready ??= loadReportFonts().then((loaded) => {
+    pdfMake.addVirtualFileSystem(loaded.vfs);
     pdfMake.setFonts(reportFontDescriptors());
     pdfMake.setUrlAccessPolicy(() => false);
-    if (scope.fonts && typeof FontFace !== 'undefined') {
-      const faces = [
-        new FontFace(REPORT_FONT_FAMILY, bytesOf(files[REPORT_FONT_FILES.normal]!), { weight: '400' }),
-        new FontFace(REPORT_FONT_FAMILY, bytesOf(files[REPORT_FONT_FILES.bold]!), { weight: '500 700' }),
-      ];
-      for (const face of faces) scope.fonts.add(await face.load());
-    }
-  })();
+    return loaded;
+  });
   return ready;
 }
 
@@ -63,22 +52,23 @@ async function sha256(text: string): Promise<string> {
 }
 
 async function report(request: ReportRequest): Promise<void> {
-  await prepare();
+  const { fonts } = await prepare();
+  const progress = (stage: Extract<ReportReply, { type: 'progress' }>['stage'], done: number, total: number) => scope.postMessage({ type: 'progress', id: request.id, stage, done, total });
   const { project, memberIds } = request;
   const members: MemberResult[] = [];
   for (const id of memberIds) {
     members.push(...analyzeMembers(project, [id]));
-    scope.postMessage({ type: 'progress', id: request.id, stage: 'analysing', done: members.length, total: memberIds.length });
+    progress('analysing', members.length, memberIds.length);
   }
   const results: ProjectResults = { projectName: project.info.name, codeBasis: project.info.codeBasis, members, summary: summarize(members) };
-  const figures = reportCharts({ project, results, memberIds });
+  const figures = Object.entries(reportCharts({ project, results, memberIds }));
   const images: Record<string, string> = {};
-  const entries = Object.entries(figures);
+  const library = { Chart: chartJs(), BasicPlatform };
   let drawn = 0;
-  for (const [id, figure] of entries) {
-    images[id] = figure.kind === 'svg' ? figure.svg : await chartPng(figure.spec, figure.width, figure.height);
+  for (const [id, figure] of figures) {
+    images[id] = figure.kind === 'svg' ? figure.svg : chartSvg(library as never, figure.spec, figure.width, figure.height, fonts);
     drawn += 1;
-    if (drawn % 4 === 0 || drawn === entries.length) scope.postMessage({ type: 'progress', id: request.id, stage: 'drawing', done: drawn, total: entries.length });
+    if (drawn % 4 === 0 || drawn === figures.length) progress('drawing', drawn, figures.length);
   }
   const definition = buildReportDocument({
     project,
@@ -86,8 +76,17 @@ async function report(request: ReportRequest): Promise<void> {
     memberIds,
     images,
     meta: { softwareVersion: request.softwareVersion, projectHash: await sha256(request.projectText), generatedOn: request.generatedOn },
+    fonts,
   });
-  scope.postMessage({ type: 'progress', id: request.id, stage: 'writing', done: 0, total: 1 });
+  progress('laying-out', 0, 1);
+  let reported = -1;
+  pdfMake.setProgressCallback((fraction) => {
+    const thousandths = Math.floor(fraction * 1000);
+    if (thousandths - reported >= 10) {
+      reported = thousandths;
+      progress('writing', thousandths, 1000);
+    }
+  });
   const creationDate = new Date(request.generatedOn);
   const buffer = await pdfMake.createPdf({ ...definition, info: { ...definition.info, creationDate } }).getBuffer();
   const bytes = new Uint8Array(buffer.byteLength);

@@ -1,0 +1,88 @@
+/**
+ * The PDF export of the app (issue 15 items 5 and 9, issue 16): a progress bar with Cancel, and the
+ * same PDF as `hingeline report` for the same project — one chart path (core's recording canvas),
+ * the same fonts, the same layout. Runs the web build in Debian's Chromium with the fake host.
+ */
+import { writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { analyzeProject } from '../../core/analysis.ts';
+import { demoProjectSI } from '../../core/project/demo.ts';
+import { serializeProject } from '../../core/project/file.ts';
+import { renderReportBuffer } from '../../app/report/write-report.ts';
+import packageJson from '../../package.json' with { type: 'json' };
+import { pdfText } from '../app/report/pdf-text.ts';
+import { ARTIFACTS, openApp, snap, startE2e, type E2eContext } from './support/environment.ts';
+
+let context: E2eContext;
+let page: Page;
+let problems: string[];
+
+interface HostView {
+  exports: { name: string; mime: string; byteLength: number }[];
+}
+const host = (p: Page) => p.evaluate(() => (window as unknown as { hingelineTestHost: HostView }).hingelineTestHost);
+
+beforeAll(async () => {
+  context = await startE2e();
+  ({ page, problems } = await openApp(context));
+  await page.getByTestId('open-demo-si').click();
+  await page.waitForFunction(() => document.querySelector('[data-testid=analysis-status]')?.textContent?.includes('All results current'), undefined, { timeout: 120_000 });
+});
+
+afterAll(async () => {
+  await context?.close();
+});
+
+async function exportProjectPdf(p: Page): Promise<void> {
+  await p.getByTestId('export').click();
+  await p.getByTestId('export-project-pdf').click();
+}
+
+describe('PDF export in the app', () => {
+  it('shows a progress bar and stops at once on Cancel, exporting nothing', async () => {
+    await exportProjectPdf(page);
+    const bar = page.getByTestId('report-progress-bar');
+    await bar.waitFor({ state: 'visible', timeout: 60_000 });
+    expect(await page.getByTestId('report-progress').textContent()).toContain('PDF report of the project');
+    await snap(page, 'report-progress');
+    await page.getByTestId('report-cancel').click();
+    await page.getByTestId('report-progress').waitFor({ state: 'detached', timeout: 10_000 });
+    expect((await host(page)).exports).toHaveLength(0);
+    await expect.poll(() => page.locator('body').textContent()).toContain('The PDF report was cancelled.');
+  });
+
+  it('exports the same PDF as the command line for the same project: same pages, same text, same size', async () => {
+    await exportProjectPdf(page);
+    // The bar moves forward while the report is made.
+    const values: number[] = [];
+    while ((await host(page)).exports.length === 0) {
+      const now = await page.getByTestId('report-progress-bar').getAttribute('aria-valuenow', { timeout: 1000 }).catch(() => null);
+      if (now !== null) values.push(Number(now));
+      await page.waitForTimeout(250);
+    }
+    expect(values.length).toBeGreaterThan(0);
+    expect(values).toEqual([...values].sort((a, b) => a - b));
+    const exported = (await host(page)).exports[0]!;
+    expect(exported.mime).toBe('application/pdf');
+    const app = Buffer.from(await page.evaluate(() => (window as unknown as { __hingelinePdf?: number[] }).__hingelinePdf ?? []));
+    writeFileSync(join(ARTIFACTS, 'report-app-si.pdf'), app);
+
+    // The command line's report of the same project, with the date the app used.
+    const stamp = /\/CreationDate \(D:(\d{4})(\d{2})(\d{2})(\d{2})(\d{2})(\d{2})Z\)/.exec(app.toString('latin1'));
+    expect(stamp).not.toBeNull();
+    const generatedOn = `${stamp![1]}-${stamp![2]}-${stamp![3]}T${stamp![4]}:${stamp![5]}:${stamp![6]}Z`;
+    const project = demoProjectSI();
+    const cli = await renderReportBuffer({ project, results: analyzeProject(project), sourceText: serializeProject(project), generatedOn, softwareVersion: packageJson.version, chartWorkers: 0 });
+    writeFileSync(join(ARTIFACTS, 'report-cli-si.pdf'), cli);
+
+    const [a, c] = [await pdfText(app), await pdfText(cli)];
+    expect(a.pages.length).toBe(c.pages.length);
+    a.pages.forEach((text, i) => expect(text, `page ${i + 1}`).toBe(c.pages[i]));
+    // Same figures drawn the same way: the files differ at most by how each build of pdfmake writes them.
+    expect(Math.abs(app.length - cli.length) / cli.length).toBeLessThan(0.02);
+    expect(app.toString('latin1').match(/\/Subtype \/Image/g)).toBeNull();
+    expect(problems).toEqual([]);
+  }, 600_000);
+});

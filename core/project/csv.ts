@@ -1,5 +1,5 @@
 /**
- * CSV in and out, as pure functions on strings (RFC 4180: comma-separated, fields with commas,
+ * CSV in and out, as pure functions on strings, read and written by papaparse (RFC 4180: comma-separated, fields with commas,
  * quotes or line breaks in double quotes, "" for a quote; CRLF or LF line ends; a UTF-8 byte-order
  * mark is accepted on input).
  *
@@ -16,6 +16,7 @@
  * along the span), with the unit of every column in its header, in the chosen display system.
  * Empty fields stand for values that do not exist (never NaN).
  */
+import Papa from 'papaparse';
 import type { Diagnostic } from '../diagnostics.ts';
 import type { CodeBasis } from '../materials/specs.ts';
 import type { CapacitySettings, MemberLoad, ServiceSettings, SupportType } from '../member/definition.ts';
@@ -35,61 +36,45 @@ export interface CsvRecord {
 }
 
 /**
- * Splits CSV text into records (RFC 4180). Blank lines are skipped. An unclosed quote runs to the end
- * of the text and is reported in `problems`.
+ * Splits CSV text into records (RFC 4180), with papaparse. CRLF, LF and lone CR line ends are read
+ * alike (also inside quoted fields, which then hold LF). Blank lines are skipped. An unclosed quote
+ * runs to the end of the text and is reported in `problems`. Each record carries the line of the file
+ * it starts on, for messages.
  */
 export function parseCsv(text: string, delimiter = ','): { records: CsvRecord[]; problems: Diagnostic[] } {
-  const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
+  const body = (text.charCodeAt(0) === 0xfeff ? text.slice(1) : text).replace(/\r\n?/g, '\n');
+  // Line of each offset: the number of line breaks before it, plus one.
+  const breaks: number[] = [];
+  for (let i = body.indexOf('\n'); i >= 0; i = body.indexOf('\n', i + 1)) breaks.push(i);
+  const lineAt = (at: number) => {
+    let lo = 0;
+    let hi = breaks.length;
+    while (lo < hi) {
+      const mid = (lo + hi) >> 1;
+      if (breaks[mid]! < at) lo = mid + 1;
+      else hi = mid;
+    }
+    return lo + 1;
+  };
   const records: CsvRecord[] = [];
   const problems: Diagnostic[] = [];
-  let fields: string[] = [];
-  let field = '';
-  let quoted = false;
-  let line = 1;
-  let recordLine = 1;
-  let fieldStarted = false;
-  const endRecord = () => {
-    fields.push(field);
-    if (!(fields.length === 1 && fields[0]!.trim() === '' && !fieldStarted)) records.push({ line: recordLine, fields });
-    fields = [];
-    field = '';
-    fieldStarted = false;
-  };
-  for (let i = 0; i < body.length; i++) {
-    const c = body[i]!;
-    if (quoted) {
-      if (c === '"') {
-        if (body[i + 1] === '"') {
-          field += '"';
-          i++;
-        } else {
-          quoted = false;
-        }
-      } else {
-        if (c === '\n') line++;
-        field += c;
-      }
-      continue;
-    }
-    if (c === '"' && field.trim() === '') {
-      quoted = true;
-      field = '';
-      fieldStarted = true;
-    } else if (c === delimiter) {
-      fields.push(field);
-      field = '';
-      fieldStarted = true;
-    } else if (c === '\n' || c === '\r') {
-      if (c === '\r' && body[i + 1] === '\n') i++;
-      endRecord();
-      line++;
-      recordLine = line;
-    } else {
-      field += c;
-    }
-  }
-  if (quoted) problems.push({ code: 'parse', path: `row ${recordLine}`, severity: 'error', message: 'a quoted field is not closed: a double quote (") is missing' });
-  if (field !== '' || fields.length > 0 || fieldStarted) endRecord();
+  let start = 0;
+  Papa.parse<string[]>(body, {
+    delimiter,
+    quoteChar: '"',
+    escapeChar: '"',
+    newline: '\n',
+    skipEmptyLines: false,
+    step: (row) => {
+      const from = body[start] === '\n' ? start + 1 : start;
+      const line = lineAt(from);
+      start = row.meta.cursor;
+      if (row.errors.some((error) => error.type === 'Quotes')) problems.push({ code: 'parse', path: `row ${line}`, severity: 'error', message: 'a quoted field is not closed: a double quote (") is missing' });
+      const fields = row.data;
+      if (fields.length === 1 && fields[0]!.trim() === '') return;
+      records.push({ line, fields });
+    },
+  });
   return { records, problems };
 }
 
@@ -302,19 +287,26 @@ export function importMembersCsv(text: string, options: MemberCsvOptions = {}): 
 
 // --- writing ----------------------------------------------------------------------------------------
 
-/** One CSV field: numbers to nine significant figures, empty when missing or not finite; quoted when needed; text that a spreadsheet would run as a formula is prefixed with '. */
-export function csvField(value: string | number | null | undefined, options: { text?: boolean } = {}): string {
+/** The text of one cell: numbers to nine significant figures, empty when missing or not finite; text that a spreadsheet would run as a formula is prefixed with '. */
+function cellText(value: string | number | null | undefined, options: { text?: boolean } = {}): string {
   if (value === null || value === undefined) return '';
   // Nine significant figures, shortest form (1234.5, 0.0035, 1e-9), -0 as 0.
   if (typeof value === 'number') return Number.isFinite(value) ? String(Number(value.toPrecision(9)) + 0) : '';
   // A text cell starting with = + - @ would be run as a formula by spreadsheets (CSV injection).
-  const safe = options.text !== false && /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
-  return /[",\r\n]|^\s|\s$/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
+  return options.text !== false && /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
+}
+
+/** Quote a cell when it holds the separator, a quote or a line break, or starts or ends with a space. */
+const needsQuotes = (cell: unknown): boolean => typeof cell === 'string' && /[",\r\n]|^\s|\s$/.test(cell);
+
+/** One CSV field (see `cellText`), quoted when needed (RFC 4180, through papaparse). */
+export function csvField(value: string | number | null | undefined, options: { text?: boolean } = {}): string {
+  return Papa.unparse([[cellText(value, options)]], { quotes: needsQuotes, newline: '\r\n', escapeFormulae: false });
 }
 
 /** Rows to CSV text: CRLF line ends (RFC 4180), a final line end. */
 export function csvText(rows: readonly (readonly (string | number | null | undefined)[])[]): string {
-  return rows.map((row) => row.map((v) => csvField(v)).join(',')).join('\r\n') + '\r\n';
+  return `${Papa.unparse(rows.map((row) => row.map((v) => cellText(v))), { quotes: needsQuotes, newline: '\r\n', escapeFormulae: false })}\r\n`;
 }
 
 const displaySystem = (system: UnitSystem): DisplaySystem => (system === 'us' ? 'US' : 'SI');

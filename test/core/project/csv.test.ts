@@ -21,6 +21,16 @@ describe('parseCsv (RFC 4180)', () => {
     expect(problems[0]).toMatchObject({ code: 'parse', path: 'row 2' });
   });
 
+  it('reads CRLF, LF and lone CR line ends alike and numbers the records by the line they start on', () => {
+    const { records } = parseCsv('id,name\r1,"two\r\nlines"\n2,x\r\n');
+    expect(records).toEqual([{ line: 1, fields: ['id', 'name'] }, { line: 2, fields: ['1', 'two\nlines'] }, { line: 4, fields: ['2', 'x'] }]);
+  });
+
+  it('reads back what it writes (quotes, commas, line breaks, edge spaces, empty fields)', () => {
+    const rows = [['id', 'name, with comma', 'say "hi"'], ['B-1', 'two\nlines', ' lead'], ['', 'x', '']];
+    expect(parseCsv(csvText(rows)).records.map((r) => r.fields)).toEqual(rows);
+  });
+
   it('reads the last record without a final line end, and skips a byte-order mark', () => {
     expect(parseCsv('\uFEFFa,b\n1,2').records).toEqual([{ line: 1, fields: ['a', 'b'] }, { line: 2, fields: ['1', '2'] }]);
   });

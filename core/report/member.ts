@@ -9,7 +9,7 @@ import type { DeflectionLimitCase, LoadFactors, MemberLoad } from '../member/def
 import { EVENT_WORDS } from '../charts/load-deflection.ts';
 import { drawingWithFacts, figureNode, pageOf, SUPPORT_WORDS, type WriteContext } from './context.ts';
 import type { MemberPlan } from './figures.ts';
-import { CAUTION_TEXT, COLOURS, bullets, cautionBox, dataTable, factsTable, h2, h3, heading, keepTogether, small, verdict, STYLES } from './layout.ts';
+import { CAUTION_TEXT, COLOURS, KEEP_TOGETHER_ROWS, bullets, cautionBox, dataTable, factsTable, h2, h3, heading, keepTogether, small, verdict, STYLES } from './layout.ts';
 import { HINGE_WORDS, METHOD_ANCHOR, memberMethod } from './method.ts';
 import { citationMarker, hingeLengthReference } from './references.ts';
 import type { Content, ContentNode } from './types.ts';
@@ -277,12 +277,16 @@ function warnings(result: MemberResult | null): Content[] {
     items.push({ text: 'No analysis results were supplied for this member.', color: COLOURS.fail });
   }
   const list = items.length > 0 ? bullets(items) : { text: 'The analysis raised no warnings for this member (warnings of its sections are listed in their chapters).', ...STYLES.body };
-  return [
-    small(items.length, [h2('Warnings and limitations'), list]),
+  // The caution closes the chapter together with the limitations it qualifies (and the warnings when
+  // they are few): a page never holds the caution box alone.
+  const closing: Content[] = [
     { text: `The general limitations of the method apply: ${result?.shear ? 'flexure and shear only (no torsion, bond or anchorage checks)' : 'flexure only'}; plane sections and perfect bond; static, monotonic loading; the strength check is not a complete code design.`, ...STYLES.body },
     { text: ['Limitations in full: Method chapter, page ', pageOf(METHOD_ANCHOR)], ...STYLES.note },
     cautionBox('Caution', CAUTION_TEXT),
   ];
+  return items.length <= KEEP_TOGETHER_ROWS
+    ? [keepTogether([h2('Warnings and limitations'), list, ...closing])]
+    : [{ stack: [h2('Warnings and limitations'), list] }, keepTogether(closing)];
 }
 
 /** The chapter of one member. */

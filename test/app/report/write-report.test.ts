@@ -4,6 +4,8 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { analyzeProject } from '../../../core/analysis.ts';
+import { demoProjectSI } from '../../../core/project/demo.ts';
+import { serializeProject } from '../../../core/project/file.ts';
 import { reportFormatter } from '../../../core/report/format.ts';
 import { CAUTION_TEXT } from '../../../core/report/layout.ts';
 import { projectHash, renderReportBuffer, writeReport } from '../../../app/report/write-report.ts';
@@ -143,3 +145,17 @@ describe('names in Hebrew, Arabic and with emoji (issue 17)', () => {
   });
 });
 
+
+describe('layout of the SI demo report (issue 15 item 12)', () => {
+  it('has no page that holds only the caution box', async () => {
+    const si = demoProjectSI();
+    const read = await pdfText(await renderReportBuffer({ project: si, results: analyzeProject(si), sourceText: serializeProject(si), generatedOn: '2026-03-14T09:00:00Z' }));
+    const header = `${si.info.name} ${si.info.codeBasis} · SI units`;
+    for (const [i, page] of read.pages.entries()) {
+      // What is on the page besides the running header and footer.
+      const body = words(page).replace(header, '').replace(/Project \S+ · revision \S+ For review by a qualified engineer\. Local codes and licensed practice govern\. Page \d+ of \d+/, '').trim();
+      const withoutCaution = body.replace(words(`Caution ${CAUTION_TEXT}`), '').trim();
+      expect(withoutCaution, `page ${i + 1} holds only the caution box`).not.toBe('');
+    }
+  }, 300_000);
+});

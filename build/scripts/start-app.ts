@@ -4,7 +4,8 @@
  * offline machine), say so once and serve the same interface in the browser on 127.0.0.1.
  *
  * Options: `--web` serves the browser build even when Electron is available; `--no-build`
- * (or HINGELINE_SKIP_BUILD=1) reuses existing builds. HINGELINE_PORT picks the port (default: free).
+ * (or HINGELINE_SKIP_BUILD=1) reuses existing builds; `--verbose` (or HINGELINE_VERBOSE=1) shows the
+ * bundlers' own reports, which are hidden otherwise. HINGELINE_PORT picks the port (default: free).
  */
 import { spawn, spawnSync } from 'node:child_process';
 import { existsSync, readFileSync } from 'node:fs';
@@ -86,18 +87,38 @@ export interface StartOutput {
   error(message: string): void;
 }
 
-async function buildWeb(): Promise<void> {
-  const { build } = await import('vite');
-  await build({ configFile: join(PROJECT_ROOT, 'vite.web.config.ts'), logLevel: 'warn' });
+/**
+ * The bundlers' own reports (plugin timing tables, chunk-size advice) are for whoever works on the
+ * build: shown with `--verbose` or HINGELINE_VERBOSE=1, otherwise only errors are printed.
+ */
+export function buildVerbose(args: readonly string[], env: Readonly<Record<string, string | undefined>>): boolean {
+  return args.includes('--verbose') || env.HINGELINE_VERBOSE === '1';
 }
 
-function buildElectron(): boolean {
+/** Inline options for Vite's build of the web UI: quiet (errors only, no timing tables) unless verbose. */
+export function webBuildOptions(verbose: boolean) {
+  return {
+    configFile: join(PROJECT_ROOT, 'vite.web.config.ts'),
+    logLevel: verbose ? ('info' as const) : ('error' as const),
+    ...(verbose ? {} : { build: { chunkSizeWarningLimit: 100_000, rolldownOptions: { checks: { pluginTimings: false } } } }),
+  };
+}
+
+async function buildWeb(verbose: boolean): Promise<void> {
+  const { build } = await import('vite');
+  await build(webBuildOptions(verbose));
+}
+
+function buildElectron(verbose: boolean, output: StartOutput): boolean {
   const electronVite = packageFolder('electron-vite');
   if (!electronVite) return false;
-  const result = spawnSync(process.execPath, [join(electronVite, 'bin/electron-vite.js'), 'build', '--config', 'electron.config.ts'], {
+  const result = spawnSync(process.execPath, [join(electronVite, 'bin/electron-vite.js'), 'build', '--config', 'electron.config.ts', ...(verbose ? [] : ['--logLevel', 'error'])], {
     cwd: PROJECT_ROOT,
-    stdio: 'inherit',
+    stdio: verbose ? 'inherit' : ['ignore', 'pipe', 'pipe'],
+    encoding: 'utf8',
   });
+  // Quiet unless it failed: then everything it said is needed.
+  if (!verbose && result.status !== 0) output.error(`${result.stdout ?? ''}${result.stderr ?? ''}`.trim());
   return result.status === 0;
 }
 
@@ -112,7 +133,7 @@ function runElectron(binary: string): Promise<number> {
   });
 }
 
-async function serveWeb(output: StartOutput, skipBuild: boolean): Promise<number> {
+async function serveWeb(output: StartOutput, skipBuild: boolean, verbose: boolean): Promise<number> {
   let port: number;
   try {
     port = portFromEnvironment(process.env);
@@ -121,7 +142,7 @@ async function serveWeb(output: StartOutput, skipBuild: boolean): Promise<number
     return 2;
   }
   const webRoot = join(PROJECT_ROOT, 'out/web');
-  if (!skipBuild || !existsSync(join(webRoot, 'index.html'))) await buildWeb();
+  if (!skipBuild || !existsSync(join(webRoot, 'index.html'))) await buildWeb(verbose);
   let server;
   try {
     server = await startWebServer(webRoot, port);
@@ -141,16 +162,17 @@ async function serveWeb(output: StartOutput, skipBuild: boolean): Promise<number
 /** Runs `npm start`; resolves to the exit code. */
 export async function main(args: readonly string[], output: StartOutput = { log: console.log, error: console.error }): Promise<number> {
   const skipBuild = args.includes('--no-build') || process.env.HINGELINE_SKIP_BUILD === '1';
+  const verbose = buildVerbose(args, process.env);
   if (args.includes('--web')) {
     output.log('Hingeline: serving the browser build (--web).');
-    return serveWeb(output, skipBuild);
+    return serveWeb(output, skipBuild, verbose);
   }
   const runtime = checkElectronRuntime(probeThisMachine());
   if (!runtime.available) {
     output.log(`Hingeline: the Electron runtime is not available (${runtime.reason}), so the same interface is served in your browser instead.`);
-    return serveWeb(output, skipBuild);
+    return serveWeb(output, skipBuild, verbose);
   }
-  if (!skipBuild && !buildElectron()) {
+  if (!skipBuild && !buildElectron(verbose, output)) {
     output.error('Hingeline: the desktop build failed (see the messages above).');
     return 1;
   }

@@ -1,6 +1,6 @@
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { checkElectronRuntime, type RuntimeProbe } from '../../../build/scripts/start-app.ts';
+import { buildVerbose, checkElectronRuntime, webBuildOptions, type RuntimeProbe } from '../../../build/scripts/start-app.ts';
 
 function probe(files: Record<string, string>, overrides: Partial<RuntimeProbe> = {}): RuntimeProbe {
   return {
@@ -47,5 +47,20 @@ describe('checkElectronRuntime (decided from files only, never by requiring elec
     expect(checkElectronRuntime(probe(files, { env: {} }))).toEqual({ available: false, reason: 'there is no graphical display (DISPLAY and WAYLAND_DISPLAY are unset)' });
     expect(checkElectronRuntime(probe(files, { env: { WAYLAND_DISPLAY: 'wayland-0' } })).available).toBe(true);
     expect(checkElectronRuntime(probe(files, { env: {}, platform: 'win32' })).available).toBe(true);
+  });
+});
+
+describe('the bundlers’ own reports during npm start (issue 15 item 10)', () => {
+  it('are hidden unless asked for with --verbose or HINGELINE_VERBOSE=1', () => {
+    expect(buildVerbose([], {})).toBe(false);
+    expect(buildVerbose(['--web'], { HINGELINE_VERBOSE: '0' })).toBe(false);
+    expect(buildVerbose(['--verbose'], {})).toBe(true);
+    expect(buildVerbose([], { HINGELINE_VERBOSE: '1' })).toBe(true);
+    const quiet = webBuildOptions(false);
+    expect(quiet.logLevel).toBe('error');
+    expect(quiet.build).toEqual({ chunkSizeWarningLimit: 100_000, rolldownOptions: { checks: { pluginTimings: false } } });
+    const verbose = webBuildOptions(true);
+    expect(verbose.logLevel).toBe('info');
+    expect('build' in verbose).toBe(false);
   });
 });

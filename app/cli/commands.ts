@@ -13,7 +13,7 @@ import { EXIT, type Command } from './args.ts';
 import { ownModule } from './bundle.ts';
 import { analysisJson, diagnosticLines, problemCount, progressLine, RESULTS_CAUTION, tableReport, type Style } from './format.ts';
 import type { CliIo } from './io.ts';
-import { analyzeMembersParallel } from './parallel.ts';
+import { analyzeMembersParallel, defaultWorkerCount } from './parallel.ts';
 import type { MemberResult } from '../../core/assessment/results.ts';
 
 type Io = CliIo;
@@ -104,10 +104,13 @@ export async function runAnalysis(io: Io, project: Project, memberIds: readonly 
   const total = memberIds?.length ?? project.members.length;
   onProgress(0, total, '');
   let members: MemberResult[];
+  // Without --jobs: as many workers as there are free cores (none when the machine is busy or the
+  // project small: then this thread analyses, which is never slower than one worker).
+  const workers = jobs ?? defaultWorkerCount(total);
   try {
-    members = jobs === 1
+    members = workers === 1
       ? await io.withImmediateInterrupt(() => analyzeMembers(project, memberIds, onProgress))
-      : await analyzeMembersParallel(project, memberIds, { ...(jobs ? { workers: jobs } : {}), signal: io.signal, onProgress });
+      : await analyzeMembersParallel(project, memberIds, { workers, signal: io.signal, onProgress });
   } catch (error) {
     if (error instanceof Error && error.name === 'AbortError') throw new CliFailure('stopped: the analysis was cancelled', EXIT.interrupted);
     throw error;

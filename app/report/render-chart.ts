@@ -7,7 +7,7 @@
  * as vectors with real text. PNG (144 dpi, on an @napi-rs/canvas canvas, loaded only then) remains
  * for hosts that ask for images.
  */
-import { BasicPlatform, Chart, registerables } from 'chart.js';
+import { BasicPlatform, Chart, Filler, Legend, LineElement, LinearScale, PointElement, ScatterController, SubTitle, Title, Tooltip } from 'chart.js';
 import { toChartJsConfig, type ChartJsConfigOptions } from '../../core/charts/chartjs-config.ts';
 import type { ChartSpec } from '../../core/charts/types.ts';
 import { chartSvg } from '../../core/report/chart-svg.ts';
@@ -19,7 +19,9 @@ let chartJsReady = false;
 
 function chartJs(): { Chart: typeof Chart; BasicPlatform: typeof BasicPlatform } {
   if (!chartJsReady) {
-    Chart.register(...registerables);
+    // The same components in the same order as the app (renderer/src/charts/chartjs.ts): plugins draw
+    // in registration order, so the report's SVG is then the same element for element.
+    Chart.register(ScatterController, LineElement, PointElement, LinearScale, Legend, Title, SubTitle, Tooltip, Filler);
     chartJsReady = true;
   }
   return { Chart, BasicPlatform };

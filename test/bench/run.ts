@@ -20,6 +20,8 @@
  *  - `npm test` on a loaded machine and the edit → chart row are measured by their own runs (the
  *    test suite itself; test/bench/ui-speed.ts); the table says so.
  *
+ * (It replaces the earlier report and project benchmark files; the engine files remain.)
+ *
  * Usage: npm run bench [-- --skip-app]   (the load average is printed at the start and the end)
  */
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';

@@ -48,6 +48,8 @@ export function acceleratorFor(command: MenuCommand, platform: NodeJS.Platform):
       return 'CmdOrCtrl+Enter';
     case 'add-member':
       return 'Shift+CmdOrCtrl+M';
+    case 'shortcuts':
+      return 'CmdOrCtrl+/';
     default:
       return undefined;
   }
@@ -144,7 +146,7 @@ export function menuTemplate(context: MenuContext, actions: MenuActions): MenuIt
   };
 
   const windowMenu: MenuItemConstructorOptions[] = isMac ? [{ role: 'windowMenu' }] : [];
-  const help: MenuItemConstructorOptions = { label: '&Help', role: 'help', submenu: [about] };
+  const help: MenuItemConstructorOptions = { label: '&Help', role: 'help', submenu: [item('&Keyboard shortcuts', 'shortcuts'), separator, about] };
 
   return [...appMenu, file, edit, view, ...windowMenu, help];
 }

@@ -17,6 +17,7 @@ export const MENU_COMMANDS = [
   'about',
   'add-member',
   'analyze',
+  'shortcuts',
 ] as const;
 
 export type MenuCommand = (typeof MENU_COMMANDS)[number];

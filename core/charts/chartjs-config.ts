@@ -38,7 +38,18 @@ export interface ChartInstanceLike {
   readonly width: number;
   readonly height: number;
   readonly chartArea: { readonly left: number; readonly right: number; readonly top: number; readonly bottom: number };
-  readonly scales: Readonly<Record<string, { getPixelForValue(value: number): number } | undefined>>;
+  readonly scales: Readonly<Record<string, ScaleLike | undefined>>;
+}
+
+/** The parts of a chart.js scale the overlay and the title fitting read (pixels; bounds once laid out). */
+export interface ScaleLike {
+  getPixelForValue(value: number): number;
+  readonly left?: number;
+  readonly right?: number;
+  readonly top?: number;
+  readonly bottom?: number;
+  readonly width?: number;
+  readonly height?: number;
 }
 
 export interface ChartJsPlugin {
@@ -108,12 +119,62 @@ function inside(r: Rect, area: ChartInstanceLike['chartArea']): boolean {
   return r.x >= area.left && r.x + r.w <= area.right && r.y >= area.top && r.y + r.h <= area.bottom;
 }
 
+/**
+ * The part of the plot a marker belongs to: the chart area, narrowed to its x axis's extent when
+ * that axis is one panel of several side by side.
+ */
+function panelOf(xs: ScaleLike, area: ChartInstanceLike['chartArea']): ChartInstanceLike['chartArea'] {
+  if (xs.left === undefined || xs.right === undefined || (xs.left <= area.left + 0.5 && xs.right >= area.right - 0.5)) return area;
+  return { left: Math.max(area.left, xs.left), right: Math.min(area.right, xs.right), top: area.top, bottom: area.bottom };
+}
+
 function toData(points: readonly ChartPoint[]): { x: number | null; y: number | null }[] {
   return points.map((p) => (p === null ? { x: null, y: null } : { x: p.x, y: p.y }));
 }
 
-function axisOptions(axis: AxisSpec, id: 'x' | 'y' | 'x2' | 'y2', font: (size: number, weight?: string) => Record<string, unknown>, base: number): Record<string, unknown> {
+/**
+ * An axis title that fits the length of its axis: the whole label on one line when it fits, else
+ * the name and the unit on two lines (`Stress σ, compression +` / `(psi)`), else the name broken
+ * at its commas as well. Never cut: a title wider than the plot was clipped at both ends.
+ */
+export function fitAxisTitle(label: string, available: number, measure: (text: string) => number): string | string[] {
+  if (!(available > 0) || measure(label) <= available) return label;
+  const open = label.lastIndexOf(' (');
+  const name = open > 0 ? label.slice(0, open) : label;
+  const unit = open > 0 ? label.slice(open + 1) : '';
+  const lines = [name, ...(unit ? [unit] : [])];
+  if (lines.every((line) => measure(line) <= available)) return lines;
+  const parts = name.split(/,\s+/);
+  return [...parts.map((part, i) => (i < parts.length - 1 ? `${part},` : part)), ...(unit ? [unit] : [])];
+}
+
+/** Data range of the series and markers drawn on axis `id` (display units), or null. */
+function dataRange(spec: ChartSpec, id: 'x' | 'x2'): [number, number] | null {
+  let low = Infinity;
+  let high = -Infinity;
+  const take = (v: number) => {
+    if (!Number.isFinite(v)) return;
+    low = Math.min(low, v);
+    high = Math.max(high, v);
+  };
+  for (const series of spec.series) if ((series.xAxis ?? 'x') === id) for (const p of series.points) if (p) take(p.x);
+  for (const m of spec.markers) if ((m.xAxis ?? 'x') === id) take(m.x);
+  return low <= high ? [low, high] : null;
+}
+
+function axisOptions(axis: AxisSpec, id: 'x' | 'y' | 'x2' | 'y2', font: (size: number, weight?: string) => Record<string, unknown>, base: number, family: string, spec: ChartSpec): Record<string, unknown> {
   const horizontal = id.startsWith('x');
+  // A panel of stacked x axes: its own range with an empty margin at each end, ticks at round values only.
+  const range = axis.panelMargin !== undefined && horizontal && axis.min === undefined && axis.max === undefined ? dataRange(spec, id as 'x' | 'x2') : null;
+  const panel = range
+    ? (() => {
+        const low = axis.includeZero ? Math.min(0, range[0]) : range[0];
+        const high = axis.includeZero ? Math.max(0, range[1]) : range[1];
+        const pad = (high - low || Math.abs(high) || 1) * axis.panelMargin!;
+        return { min: low - pad, max: high + pad };
+      })()
+    : null;
+  const titleFont = font(base);
   return {
     type: 'linear',
     axis: horizontal ? 'x' : 'y',
@@ -121,15 +182,42 @@ function axisOptions(axis: AxisSpec, id: 'x' | 'y' | 'x2' | 'y2', font: (size: n
     reverse: axis.reverse ?? false,
     beginAtZero: axis.includeZero ?? false,
     // Head room so that markers and their labels at the ends of the data stay inside the plot.
-    ...(axis.min === undefined && axis.max === undefined ? { grace: '5%' } : {}),
+    ...(axis.min === undefined && axis.max === undefined && !panel ? { grace: '5%' } : {}),
     ...(axis.min !== undefined ? { min: axis.min } : {}),
     ...(axis.max !== undefined ? { max: axis.max } : {}),
-    title: { display: true, text: axis.label, color: TEXT_COLOUR, font: font(base) },
-    ticks: { color: TEXT_COLOUR, font: font(base - 0.5), maxTicksLimit: horizontal ? 9 : 8, padding: 3 },
+    ...(panel ? { min: panel.min, max: panel.max } : {}),
+    title: {
+      display: true,
+      // Scriptable: measured against the axis length once chart.js has laid the axis out.
+      text: (context: { chart?: { ctx?: ChartContext2D; width?: number; height?: number }; scale?: ScaleLike }) => {
+        const ctx = context.chart?.ctx;
+        if (!ctx || typeof ctx.measureText !== 'function') return axis.label;
+        const length = (horizontal ? context.scale?.width : context.scale?.height) || ((horizontal ? context.chart?.width : context.chart?.height) ?? 0) - 40;
+        ctx.save();
+        ctx.font = `${titleFont.size as number}px ${family}`;
+        const fitted = fitAxisTitle(axis.label, length - 4, (text) => ctx.measureText(text).width);
+        ctx.restore();
+        return fitted;
+      },
+      color: TEXT_COLOUR,
+      font: titleFont,
+    },
+    ticks: { color: TEXT_COLOUR, font: font(base - 0.5), maxTicksLimit: horizontal ? (axis.stack !== undefined ? 6 : 9) : 8, padding: 3, ...(panel ? { includeBounds: false } : {}) },
     grid: { color: GRID_COLOUR, drawTicks: false, drawOnChartArea: id === 'x' || id === 'y' || axis.stack !== undefined },
     border: { color: PALETTE.grey },
     ...(axis.stack !== undefined ? { stack: axis.stack, stackWeight: axis.stackWeight ?? 1, offset: true } : {}),
   };
+}
+
+/** True when a series draws something one can see: two distinct points at least. */
+function drawsSomething(series: SeriesSpec): boolean {
+  let first: { x: number; y: number } | null = null;
+  for (const p of series.points) {
+    if (!p || !Number.isFinite(p.x) || !Number.isFinite(p.y)) continue;
+    if (!first) first = p;
+    else if (p.x !== first.x || p.y !== first.y) return true;
+  }
+  return false;
 }
 
 function datasetOf(series: SeriesSpec): ChartJsDataset {
@@ -146,11 +234,13 @@ function datasetOf(series: SeriesSpec): ChartJsDataset {
     borderDash: dashPattern(series.style),
     pointRadius: 0,
     pointHoverRadius: 0,
-    pointStyle: 'line',
+    // The legend sample: a line in the series' dash and width, or a filled box for a filled series.
+    pointStyle: series.fill ? 'rect' : 'line',
     tension: 0,
     spanGaps: false,
     fill: series.fill ? 'shape' : false,
-    hideInLegend: series.hideInLegend ?? false,
+    // A series that draws nothing visible has no place in the legend.
+    hideInLegend: (series.hideInLegend ?? false) || !drawsSomething(series),
     order: 2,
   };
 }
@@ -210,6 +300,22 @@ function overlayPlugin(spec: ChartSpec, fontFamily: string, fontSize: number, ba
       }
       ctx.setLineDash([]);
       ctx.restore();
+      // Panels side by side (stacked x axes): a rule at the left edge of each panel after the first.
+      const panels = (['x', 'x2'] as const).map((id) => (spec[id]?.stack !== undefined ? chart.scales[id] : undefined)).filter((sc): sc is ScaleLike => sc?.left !== undefined);
+      if (panels.length > 1) {
+        ctx.save();
+        ctx.strokeStyle = PALETTE.grey;
+        ctx.lineWidth = 1;
+        ctx.setLineDash([]);
+        for (const sc of panels) {
+          if (sc.left! <= area.left + 0.5) continue;
+          ctx.beginPath();
+          ctx.moveTo(sc.left!, area.top);
+          ctx.lineTo(sc.left!, area.bottom);
+          ctx.stroke();
+        }
+        ctx.restore();
+      }
     },
     afterDatasetsDraw(chart) {
       const { ctx, chartArea: area } = chart;
@@ -241,23 +347,31 @@ function overlayPlugin(spec: ChartSpec, fontFamily: string, fontSize: number, ba
         label(ctx, line.label, r);
         placed.push(r);
       }
-      // Marker labels: try eight places around each marker, keep clear of earlier labels and markers.
-      const markerBoxes: Rect[] = spec.markers.flatMap((m) => {
+      // Marker labels. Markers within a few pixels of each other (peak and ultimate at the end of
+      // a curve) share one label; each label tries places around its marker, nearest first, clear
+      // of earlier labels and of every marker, inside the marker's own panel.
+      const positioned = spec.markers.flatMap((m) => {
         const xs = chart.scales[m.xAxis ?? 'x'];
         const ys = chart.scales[m.yAxis ?? 'y'];
         if (!xs || !ys) return [];
-        return [{ x: xs.getPixelForValue(m.x) - 4, y: ys.getPixelForValue(m.y) - 4, w: 8, h: 8 }];
-      });
-      for (const m of spec.markers) {
-        if (m.label === '') continue;
-        const xs = chart.scales[m.xAxis ?? 'x'];
-        const ys = chart.scales[m.yAxis ?? 'y'];
-        if (!xs || !ys) continue;
         const px = xs.getPixelForValue(m.x);
         const py = ys.getPixelForValue(m.y);
-        const w = ctx.measureText(m.label).width;
+        return Number.isFinite(px) && Number.isFinite(py) ? [{ m, px, py, bounds: panelOf(xs, area) }] : [];
+      });
+      const markerBoxes: Rect[] = positioned.map(({ px, py }) => ({ x: px - 4, y: py - 4, w: 8, h: 8 }));
+      const groups: { px: number; py: number; texts: string[]; bounds: ChartInstanceLike['chartArea'] }[] = [];
+      for (const { m, px, py, bounds } of positioned) {
+        if (m.label === '') continue;
+        const near = groups.find((g) => g.bounds.left === bounds.left && g.bounds.right === bounds.right && Math.hypot(g.px - px, g.py - py) < 7);
+        if (near) {
+          if (!near.texts.includes(m.label)) near.texts.push(m.label);
+        } else groups.push({ px, py, texts: [m.label], bounds });
+      }
+      for (const { px, py, texts, bounds } of groups) {
+        const text = texts.join(', ');
+        const w = ctx.measureText(text).width;
         const candidates: Rect[] = [];
-        for (const reach of [0, 1, 2, 3]) {
+        for (const reach of [0, 1, 2, 3, 4, 5]) {
           const d = reach * (height + 1);
           candidates.push(
             { x: px + 6, y: py - height - 2 - d, w, h: height },
@@ -265,10 +379,11 @@ function overlayPlugin(spec: ChartSpec, fontFamily: string, fontSize: number, ba
             { x: px - w - 6, y: py - height - 2 - d, w, h: height },
             { x: px - w - 6, y: py + 2 + d, w, h: height },
           );
-          if (reach === 0) candidates.push({ x: px - w / 2, y: py - height - 6, w, h: height }, { x: px - w / 2, y: py + 6, w, h: height });
+          if (reach === 0) candidates.push({ x: px - w / 2, y: py - height - 6, w, h: height }, { x: px - w / 2, y: py + 6, w, h: height }, { x: px + 8, y: py - height / 2, w, h: height }, { x: px - w - 8, y: py - height / 2, w, h: height });
         }
-        const clear = (c: Rect) => inside(c, area) && !placed.some((q) => overlaps(c, q)) && !markerBoxes.some((q) => overlaps(c, q));
-        const r = candidates.find(clear) ?? candidates.find((c) => inside(c, area) && !placed.some((q) => overlaps(c, q))) ?? candidates.find((c) => inside(c, area)) ?? candidates[0]!;
+        const within = (c: Rect) => inside(c, bounds);
+        const clear = (c: Rect) => within(c) && !placed.some((q) => overlaps(c, q)) && !markerBoxes.some((q) => overlaps(c, q));
+        const r = candidates.find(clear) ?? candidates.find((c) => within(c) && !placed.some((q) => overlaps(c, q))) ?? candidates.find((c) => inside(c, area) && !placed.some((q) => overlaps(c, q))) ?? candidates.find(within) ?? candidates[0]!;
         // A label moved away from its marker gets a thin leader line.
         const nx = Math.min(Math.max(px, r.x), r.x + r.w);
         const ny = Math.min(Math.max(py, r.y), r.y + r.h);
@@ -280,7 +395,7 @@ function overlayPlugin(spec: ChartSpec, fontFamily: string, fontSize: number, ba
           ctx.lineTo(nx, ny);
           ctx.stroke();
         }
-        label(ctx, m.label, r);
+        label(ctx, text, r);
         placed.push(r);
       }
       if (spec.emptyMessage) {
@@ -333,13 +448,13 @@ export function toChartJsConfig(spec: ChartSpec, options: ChartJsConfigOptions =
     }
   }
   const scales: Record<string, unknown> = {
-    x: axisOptions(spec.x, 'x', font, size),
-    y: axisOptions(spec.y, 'y', font, size),
+    x: axisOptions(spec.x, 'x', font, size, family, spec),
+    y: axisOptions(spec.y, 'y', font, size, family, spec),
   };
-  if (spec.x2) scales.x2 = axisOptions(spec.x2, 'x2', font, size);
-  if (spec.y2) scales.y2 = axisOptions(spec.y2, 'y2', font, size);
+  if (spec.x2) scales.x2 = axisOptions(spec.x2, 'x2', font, size, family, spec);
+  if (spec.y2) scales.y2 = axisOptions(spec.y2, 'y2', font, size, family, spec);
   const showTitle = options.title ?? true;
-  const legendWanted = (options.legend ?? true) && spec.series.some((s) => !s.hideInLegend);
+  const legendWanted = (options.legend ?? true) && datasets.some((d) => d.label !== 'markers' && !d.hideInLegend);
   return {
     type: 'scatter',
     data: { datasets },
@@ -361,10 +476,25 @@ export function toChartJsConfig(spec: ChartSpec, options: ChartJsConfigOptions =
             color: TEXT_COLOUR,
             font: font(size - 0.5),
             usePointStyle: true,
-            boxWidth: 18,
-            boxHeight: 6,
-            padding: 8,
+            // Samples long enough to tell a dashed line (6 on, 4 off) from a solid one.
+            pointStyleWidth: 34,
+            boxWidth: 34,
+            boxHeight: 8,
+            padding: 10,
             filter: (item: { datasetIndex?: number }, data: { datasets: { hideInLegend?: boolean }[] }) => !(data.datasets[item.datasetIndex ?? -1]?.hideInLegend ?? false),
+            // chart.js would draw point-style samples with the style of a point (solid, width 1):
+            // the sample is the series' own line instead, with its dash, width and colour.
+            generateLabels: (chart: { data: { datasets: readonly ChartJsDataset[] }; isDatasetVisible?: (index: number) => boolean }) => chart.data.datasets.map((d, i) => ({
+              text: d.label,
+              datasetIndex: i,
+              hidden: chart.isDatasetVisible ? !chart.isDatasetVisible(i) : false,
+              fillStyle: d.backgroundColor,
+              strokeStyle: d.borderColor,
+              lineWidth: d.borderWidth,
+              lineDash: d.borderDash,
+              pointStyle: d.pointStyle,
+              fontColor: TEXT_COLOUR,
+            })),
           },
         },
         tooltip: { enabled: options.tooltips ?? false },

@@ -70,7 +70,10 @@ export function loadDeflectionChart(member: MemberResult, unitsInput: UnitsInput
       current.points.push(q);
     }
   }
-  stages.forEach((s, i) => {
+  // A stage that does not advance (the mechanism stage of a beam whose last hinge ends the curve
+  // at once) draws nothing: it gets no series and so no legend entry.
+  const advances = (points: readonly NonNullable<ChartPoint>[]) => points.some((p) => p.x !== points[0]!.x || p.y !== points[0]!.y);
+  stages.filter((s) => advances(s.points)).forEach((s, i, drawn) => {
     series.push({
       id: `stage-${i}`,
       label: s.stage === 'integration' ? 'curvature integrated along the span' : 'mechanism (hinge rotation control)',
@@ -78,7 +81,7 @@ export function loadDeflectionChart(member: MemberResult, unitsInput: UnitsInput
       colour: s.stage === 'integration' ? 'blue' : 'orange',
       style: s.stage === 'integration' ? 'solid' : 'dashed',
       width: 1.8,
-      hideInLegend: stages.findIndex((t) => t.stage === s.stage) !== i,
+      hideInLegend: drawn.findIndex((t) => t.stage === s.stage) !== i,
     });
   });
 

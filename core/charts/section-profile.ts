@@ -8,7 +8,7 @@ import type { SectionState } from '../section/results.ts';
 import { formatQuantity } from '../units/format.ts';
 import type { ChartSpec, MarkerSpec, ReferenceLineSpec, SeriesSpec, UnitsInput } from './types.ts';
 import { SERIES_COLOURS } from './palette.ts';
-import { axisFor, axisScale, display, finite, resolveUnits, unitFor, unitText } from './units.ts';
+import { axisFor, axisScale, display, engineeringText, finite, resolveUnits, unitFor, unitText } from './units.ts';
 import type { DisplayUnits } from './types.ts';
 
 export type ProfileKind = 'strain' | 'stress';
@@ -27,7 +27,7 @@ function shortLabel(label: string): string {
 }
 
 function stateSubtitle(state: SectionState, units: DisplayUnits): string {
-  const curvature = formatQuantity('curvature', state.point.curvature, units.system, { unit: unitFor('curvature', units) });
+  const curvature = engineeringText(display('curvature', state.point.curvature, units), unitText('curvature', units));
   const moment = formatQuantity('moment', state.point.moment, units.system, { unit: unitFor('moment', units) });
   return `${state.direction}: φ = ${curvature}, M = ${moment}`;
 }

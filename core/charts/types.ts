@@ -46,6 +46,12 @@ export interface AxisSpec {
    */
   readonly stack?: string;
   readonly stackWeight?: number;
+  /**
+   * Empty margin inside each end of a panel of stacked x axes, as a fraction of its data range
+   * (display units), so that the end tick labels of neighbouring panels do not meet. Ticks stay
+   * at round values.
+   */
+  readonly panelMargin?: number;
 }
 
 export interface SeriesSpec {

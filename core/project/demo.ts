@@ -22,6 +22,7 @@ import type { MaterialSpec } from '../materials/specs.ts';
 import type { DeflectionLimitCase, HingeLengthMethod, MemberLoad, MemberZone, SupportType } from '../member/definition.ts';
 import type { BarLayer, HoopSet, SectionDefinition } from '../section/definition.ts';
 import { fromDisplay } from '../units/index.ts';
+import { astmBarDiameter } from '../section/bar-designations.ts';
 import { DEFAULT_SETTINGS, PROJECT_FORMAT, PROJECT_VERSION, type Project, type MemberDefinition } from './types.ts';
 
 /** Nine significant figures: exact conversions without binary noise in the file (6705.6, not 6705.600000000001). */
@@ -37,9 +38,8 @@ const pcf = (v: number) => tidy(fromDisplay('density', v, 'US'));
 const klf = (v: number) => tidy(fromDisplay('lineLoad', v, 'US'));
 const kip = (v: number) => tidy(fromDisplay('force', v, 'US'));
 
-/** ASTM A615 nominal bar diameters, in (from memory). */
-const BAR_DIAMETER_IN: Readonly<Record<number, number>> = { 3: 0.375, 4: 0.5, 5: 0.625, 6: 0.75, 7: 0.875, 8: 1.0, 9: 1.128 };
-const barSize = (size: number): number => inch(BAR_DIAMETER_IN[size]!);
+/** Nominal diameter of ASTM bar #`size`, mm (core/section/bar-designations.ts). */
+const barSize = (size: number): number => astmBarDiameter(size)!;
 
 /** A layer of `count` #`size` bars at `depthIn` inches below the top. */
 function bars(steelId: string, count: number, size: number, depthIn: number, label: string, spread?: BarLayer['spread']): BarLayer {

@@ -4,9 +4,11 @@
  */
 import type { Diagnostic } from '../../core/diagnostics.ts';
 
+import { revertFocusedField } from './composables/field-history.ts';
 import { getHost, RESULTS_CAUTION, type MenuCommand, type OpenedFile } from './host/index.ts';
-import { duplicateMember, addMember, deleteMember } from './project/edits.ts';
+import { addMemberWithOwnSection, duplicateMember, deleteMember } from './project/edits.ts';
 import { newMember } from './project/factories.ts';
+import { shortcutsFor } from './project/shortcuts.ts';
 import { useAnalysisStore } from './stores/analysis.ts';
 import { ProjectFileError, useDocumentStore } from './stores/document.ts';
 import { useWorkspaceStore } from './stores/workspace.ts';
@@ -20,13 +22,6 @@ function describeDiagnostic(d: Diagnostic): string {
 
 function baseName(name: string): string {
   return name.replace(/\.(hingeline|json)$/i, '').replace(/[\\/:*?"<>|]+/g, ' ').trim() || 'project';
-}
-
-function isTextField(element: Element | null): boolean {
-  if (!element) return false;
-  const tag = element.tagName.toLowerCase();
-  if (tag === 'textarea' || (element as HTMLElement).isContentEditable) return true;
-  return tag === 'input' && !['button', 'checkbox', 'radio', 'range', 'color', 'file', 'submit', 'reset'].includes((element as HTMLInputElement).type);
 }
 
 export function useCommands() {
@@ -66,6 +61,7 @@ export function useCommands() {
 
   function afterOpen(): void {
     analysis.reset();
+    workspace.resetForDocument();
     const first = documentStore.project?.members[0];
     workspace.selectedMemberId = first?.id ?? null;
     workspace.showOverview();
@@ -143,6 +139,7 @@ export function useCommands() {
     if (choice === 'cancel') return;
     documentStore.createNew(choice.startsWith('us') ? 'us' : 'si', choice.endsWith('en') ? 'EN 1992-1-1' : 'ACI 318-19');
     analysis.reset();
+    workspace.resetForDocument();
     const first = documentStore.project?.members[0];
     if (first) workspace.openMember(first.id);
   }
@@ -182,28 +179,40 @@ export function useCommands() {
     }
   }
 
+  /**
+   * The app's undo, also inside a field (never the browser's own, which would replay keystrokes
+   * into text the app has rewritten): a field's unstored text goes first, then the last edit.
+   */
   function undo(): void {
-    if (isTextField(document.activeElement) && document.execCommand('undo')) return;
+    if (revertFocusedField()) return;
     documentStore.undo();
   }
 
   function redo(): void {
-    if (isTextField(document.activeElement) && document.execCommand('redo')) return;
+    if (revertFocusedField()) return;
     documentStore.redo();
   }
 
+  /**
+   * Adds a member after the one open (or at the end). It gets its own copy of the open member's
+   * section (else of the last member's, else of the first section), never a silent share: its
+   * Section tab says where the copy came from, and another section can be chosen there.
+   */
   function addNewMember(): void {
     const project = documentStore.project;
     if (!project) return;
-    const current = project.members.find((m) => m.id === workspace.selectedMemberId);
-    const sectionId = current?.zones[0]?.sectionId ?? project.sections[0]?.id;
-    if (!sectionId) {
+    const current = project.members.find((m) => m.id === workspace.selectedMemberId && workspace.view === 'member');
+    const from = current ?? project.members[project.members.length - 1];
+    const template = project.sections.find((s) => s.id === from?.zones[0]?.sectionId) ?? project.sections[0];
+    if (!template) {
       workspace.notify('error', 'Add a section to the project before adding members.');
       return;
     }
-    const member = newMember(project, sectionId);
-    documentStore.edit(`Add member ${member.name}`, (p) => addMember(p, member, current?.id));
+    const member = newMember(project, template.id);
+    const added = addMemberWithOwnSection(project, member, template, current?.id);
+    documentStore.edit(`Add member ${member.name}`, (p) => (p === project ? added.project : addMemberWithOwnSection(p, member, template, current?.id).project));
     workspace.openMember(member.id);
+    workspace.notify('info', `${member.name} has its own section “${added.section.name}”, copied from ${from ? `${from.name}’s` : 'the first'} section. Choose another in its Section tab.`, 7000);
   }
 
   function duplicate(memberId: string): void {
@@ -239,6 +248,16 @@ export function useCommands() {
     });
   }
 
+  async function shortcuts(): Promise<void> {
+    const mac = typeof navigator !== 'undefined' && /Mac|iPhone|iPad/.test(navigator.platform || navigator.userAgent);
+    await workspace.ask({
+      title: 'Keyboard shortcuts',
+      message: host.kind === 'electron' ? 'The same commands are in the menus.' : 'In the browser some keys (new window, print) stay with the browser.',
+      table: shortcutsFor(host.kind, mac).map((s) => [s.keys, s.action] as const),
+      buttons: [{ id: 'ok', label: 'Close', kind: 'primary' }],
+    });
+  }
+
   async function run(command: MenuCommand): Promise<void> {
     switch (command) {
       case 'new': return createNew();
@@ -253,8 +272,9 @@ export function useCommands() {
       case 'about': return about();
       case 'add-member': return addNewMember();
       case 'analyze': return analysis.analyseAll();
+      case 'shortcuts': return shortcuts();
     }
   }
 
-  return { run, open, openFile, openRecent, openDemo, createNew, save, exportCsv, exportPdf, undo, redo, addNewMember, duplicate, remove, about, confirmDiscard };
+  return { run, shortcuts, open, openFile, openRecent, openDemo, createNew, save, exportCsv, exportPdf, undo, redo, addNewMember, duplicate, remove, about, confirmDiscard };
 }

@@ -28,9 +28,10 @@ export interface OpenedFile {
 
 /**
  * Commands from the native menu (Electron) or keyboard shortcuts (browser).
- * `undo`/`redo` arrive even while a text field has focus (Electron menu accelerators fire first);
- * the receiver should let the focused field undo its own text in that case
- * (e.g. `document.execCommand('undo')`). The browser host leaves Ctrl+Z/Y in text fields alone.
+ * `undo`/`redo` arrive also while a text field has focus (Electron menu accelerators fire first;
+ * the browser host takes Ctrl+Z/Y in fields too): the app's undo owns them everywhere, never the
+ * browser's own undo of a field (commands.ts, composables/field-history.ts).
+ * `shortcuts` shows the list of keyboard shortcuts.
  * `about` is never sent by the desktop menu, which shows the native About box (version and the
  * results caution) itself; the browser has no menu, so the renderer offers its own About.
  */
@@ -46,7 +47,8 @@ export type MenuCommand =
   | 'redo'
   | 'about'
   | 'add-member'
-  | 'analyze';
+  | 'analyze'
+  | 'shortcuts';
 
 export interface HostApi {
   readonly kind: 'electron' | 'web';
@@ -102,6 +104,7 @@ export const MENU_COMMANDS: readonly MenuCommand[] = [
   'about',
   'add-member',
   'analyze',
+  'shortcuts',
 ];
 
 /** Export MIME types every host accepts, with their file extensions. */

@@ -8,7 +8,8 @@
  *   ended abnormally (tab crash, browser killed, or leaving despite the unsaved-changes warning),
  *   and its autosave is offered through `takeRecovery()`.
  * - Recent files: names in localStorage; file handles (when the browser gives them) in IndexedDB.
- * - No native menu: Ctrl/Cmd+S, Shift+S, O, Z, Y, Shift+Z and Enter become MenuCommands.
+ * - No native menu: Ctrl/Cmd+S, Shift+S, O, Z, Y, Shift+Z, Enter and / become MenuCommands (undo
+ *   and redo also inside text fields: the app's undo, never the browser's).
  * - Unsaved changes: the browser's `beforeunload` warning.
  * - Dropping a project file on the page opens it (`onOpenFile`).
  * - `?demo` in the address sends `open-demo` once to the first menu-command listener.
@@ -43,28 +44,20 @@ export interface KeyLike {
 
 /**
  * The MenuCommand for a key press, or null. Ctrl (or Cmd) with S, Shift+S, O, Z, Shift+Z, Y,
- * Enter. Undo and redo are left to the browser while a text field has focus (`inTextField`),
- * so typing keeps its own undo.
+ * Enter. Undo and redo are the app's also inside a text field: the browser's own undo of a
+ * field would replay keystrokes into text the app has since rewritten (after an undo, a unit
+ * switch), garbling it; the app's undo restores values and the fields show them.
  */
-export function menuCommandForKey(event: KeyLike, inTextField: boolean): MenuCommand | null {
+export function menuCommandForKey(event: KeyLike): MenuCommand | null {
   if (!(event.ctrlKey || event.metaKey) || event.altKey) return null;
   const key = event.key.toLowerCase();
   if (key === 's') return event.shiftKey ? 'save-as' : 'save';
   if (key === 'o' && !event.shiftKey) return 'open';
   if (key === 'enter' && !event.shiftKey) return 'analyze';
-  if (inTextField) return null;
   if (key === 'z') return event.shiftKey ? 'redo' : 'undo';
   if (key === 'y' && !event.shiftKey) return 'redo';
+  if (key === '/' && !event.shiftKey) return 'shortcuts';
   return null;
-}
-
-function isTextField(target: EventTarget | null): boolean {
-  const element = target as (HTMLElement & { type?: string }) | null;
-  if (!element || typeof element.tagName !== 'string') return false;
-  const tag = element.tagName.toLowerCase();
-  if (tag === 'textarea' || element.isContentEditable) return true;
-  if (tag !== 'input') return false;
-  return !['button', 'checkbox', 'radio', 'range', 'color', 'file', 'submit', 'reset', 'image'].includes(element.type ?? 'text');
 }
 
 /** `Beam B1 — Hingeline`, with `• ` in front when there are unsaved changes. */
@@ -174,7 +167,7 @@ export function createWebHost(overrides: Partial<WebHostDependencies> = {}): Web
 
   const onKeyDown = (event: KeyboardEvent): void => {
     if (event.defaultPrevented || event.repeat) return;
-    const command = menuCommandForKey(event, isTextField(event.target));
+    const command = menuCommandForKey(event);
     if (!command || !commands.listening) return;
     event.preventDefault();
     emitCommand(command);

@@ -44,6 +44,17 @@ export function addMember(project: Project, member: MemberDefinition, afterId?: 
   return { ...project, members };
 }
 
+/**
+ * Adds a member with a section of its own: a copy of `template` (so that editing the new
+ * member's section never changes the members that use the template). Returns the project and
+ * the copy.
+ */
+export function addMemberWithOwnSection(project: Project, member: MemberDefinition, template: SectionDefinition, afterId?: string): { project: Project; section: SectionDefinition } {
+  const section = sectionCopy(project, template);
+  const own: MemberDefinition = { ...member, zones: member.zones.map((z) => ({ ...z, sectionId: section.id })) };
+  return { project: addMember({ ...project, sections: [...project.sections, section] }, own, afterId), section };
+}
+
 export function deleteMember(project: Project, id: string): Project {
   return { ...project, members: project.members.filter((m) => m.id !== id) };
 }

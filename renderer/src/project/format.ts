@@ -2,14 +2,24 @@
  * Display formatting for the views: internal values to text in the project's unit system
  * (core/units `formatQuantity`), and pure numbers. Never shows NaN or Infinity (an em dash instead).
  */
-import { formatNumber, formatQuantity, NOT_A_VALUE, type Quantity, type QuantityFormatOptions } from '../../../core/units/index.ts';
+import { engineeringText } from '../../../core/charts/units.ts';
+import { displayUnit, formatNumber, formatQuantity, NOT_A_VALUE, toDisplay, type Quantity, type QuantityFormatOptions } from '../../../core/units/index.ts';
 import type { UnitSystem } from '../../../core/project/types.ts';
 import { displaySystem } from './units.ts';
 
-/** `150 kN·m` / `111 kip·ft`; an em dash for a missing or non-finite value. */
+/**
+ * `150 kN·m` / `111 kip·ft`; an em dash for a missing or non-finite value. Curvatures, whose
+ * values in 1/in or 1/m have many leading zeros, are written in engineering notation
+ * (`8.54×10⁻⁶ 1/in`) unless the options ask for a format.
+ */
 export function quantityText(quantity: Quantity, value: number | null | undefined, system: UnitSystem, options: QuantityFormatOptions = {}): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return NOT_A_VALUE;
-  return formatQuantity(quantity, value, displaySystem(system), options);
+  const unitSystem = displaySystem(system);
+  if (quantity === 'curvature' && options.decimals === undefined && options.sigFigs === undefined) {
+    const shown = toDisplay(quantity, value, unitSystem, options.unit);
+    return engineeringText(shown, options.withUnit === false ? '' : displayUnit(quantity, unitSystem, options.unit).label);
+  }
+  return formatQuantity(quantity, value, unitSystem, options);
 }
 
 /** A pure number to engineering precision (3–4 significant figures); em dash when missing. */

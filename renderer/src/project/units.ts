@@ -72,7 +72,8 @@ const NUMBER = /^([+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?)\s*(.*)$/;
 export function parseInput(text: string, quantity: Quantity | null, system: UnitSystem): ParsedInput {
   let body = text.trim().replace(/[\u2009\u202f\u00a0]/g, ' ').replace(/[\u2212\u2013]/g, '-');
   if (body === '') return { ok: false, message: 'enter a value' };
-  const unitHint = quantity ? ` in ${fieldUnit(quantity, system)}` : '';
+  // "(unit: in)" rather than "in in" when the unit is the inch.
+  const unitHint = quantity ? ` (unit: ${fieldUnit(quantity, system)})` : '';
   // Thousands separators: commas before a decimal point, or spaces between digit groups.
   if (/^[+-]?\d{1,3}(,\d{3})+(\.\d*)?(\D.*)?$/.test(body) && body.includes('.')) body = body.replace(/,(?=\d{3})/g, '');
   else if (/^[+-]?\d{1,3},\d{3}(\D.*)?$/.test(body)) {
@@ -80,7 +81,7 @@ export function parseInput(text: string, quantity: Quantity | null, system: Unit
   } else if (/^[+-]?\d*,\d+/.test(body)) body = body.replace(',', '.');
   body = body.replace(/^([+-]?\d{1,3}(?: \d{3})+)(?=$|[.\sA-Za-z'"%‰µ])/, (group) => group.replace(/ /g, ''));
   const match = NUMBER.exec(body);
-  if (!match) return { ok: false, message: `"${text.trim()}" is not a number; type a value${unitHint}` };
+  if (!match) return { ok: false, message: `"${text.trim()}" is not a number; type a number${unitHint}` };
   const number = Number(match[1]);
   if (!Number.isFinite(number)) return { ok: false, message: `"${text.trim()}" is too large a number` };
   const unitText = match[2]!.trim();

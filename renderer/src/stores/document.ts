@@ -11,6 +11,7 @@ import { computed, ref, shallowRef, toRaw, watch } from 'vue';
 import type { Diagnostic } from '../../../core/diagnostics.ts';
 import { demoProject, demoProjectSI } from '../../../core/project/demo.ts';
 import type { Project } from '../../../core/project/types.ts';
+import { historyRevision } from '../composables/field-history.ts';
 import { getHost, type OpenedFile } from '../host/index.ts';
 import { PROJECT_EXTENSION } from '../host/host-api.ts';
 import { isoDate, newProject } from '../project/factories.ts';
@@ -106,6 +107,7 @@ export const useDocumentStore = defineStore('document', () => {
     if (!last || !project.value) return;
     past.value = past.value.slice(0, -1);
     future.value = [...future.value, { project: project.value, label: last.label }];
+    historyRevision.value++;
     project.value = last.project;
     coalescing = null;
   }
@@ -115,6 +117,7 @@ export const useDocumentStore = defineStore('document', () => {
     if (!next || !project.value) return;
     future.value = future.value.slice(0, -1);
     past.value = [...past.value, { project: project.value, label: next.label }];
+    historyRevision.value++;
     project.value = next.project;
     coalescing = null;
   }

@@ -25,6 +25,8 @@ export interface DialogRequest {
   readonly message: string;
   /** Optional list under the message (e.g. problems found in a file). */
   readonly details?: readonly string[];
+  /** Optional two-column table under the message (e.g. keys and what they do). */
+  readonly table?: readonly (readonly [string, string])[];
   readonly buttons: readonly DialogButton[];
   /** Button id chosen by Escape (default: the last button). */
   readonly cancelId?: string;
@@ -47,6 +49,8 @@ export const useWorkspaceStore = defineStore('workspace', () => {
   const sortDescending = ref(false);
   const filterText = ref('');
   const statusFilter = ref<StatusFilter>('all');
+  /** Text of the side bar's member search. */
+  const memberFilter = ref('');
   /** Input tab of the member workspace. */
   const inputTab = ref<'beam' | 'section' | 'materials'>('beam');
   /** Result tab of the member workspace. */
@@ -67,6 +71,14 @@ export const useWorkspaceStore = defineStore('workspace', () => {
 
   function showOverview(): void {
     view.value = 'overview';
+  }
+
+  /** Another document was opened (or made): filters of the last one would hide its members. */
+  function resetForDocument(): void {
+    filterText.value = '';
+    statusFilter.value = 'all';
+    memberFilter.value = '';
+    zoneIndex.value = 0;
   }
 
   function sortBy(column: OverviewColumn): void {
@@ -107,7 +119,7 @@ export const useWorkspaceStore = defineStore('workspace', () => {
   }
 
   return {
-    view, selectedMemberId, sortColumn, sortDescending, filterText, statusFilter, inputTab, resultTab, zoneIndex, dialog, notices, task,
-    openMember, showOverview, sortBy, ask, answer, notify, dismiss,
+    view, selectedMemberId, sortColumn, sortDescending, filterText, statusFilter, memberFilter, inputTab, resultTab, zoneIndex, dialog, notices, task,
+    openMember, showOverview, resetForDocument, sortBy, ask, answer, notify, dismiss,
   };
 });

@@ -65,29 +65,40 @@ describe('menuCommandForKey', () => {
   });
 
   it('maps Ctrl/Cmd shortcuts to commands', () => {
-    expect(menuCommandForKey(key('s', { ctrlKey: true }), false)).toBe('save');
-    expect(menuCommandForKey(key('S', { metaKey: true, shiftKey: true }), false)).toBe('save-as');
-    expect(menuCommandForKey(key('o', { ctrlKey: true }), false)).toBe('open');
-    expect(menuCommandForKey(key('z', { ctrlKey: true }), false)).toBe('undo');
-    expect(menuCommandForKey(key('Z', { metaKey: true, shiftKey: true }), false)).toBe('redo');
-    expect(menuCommandForKey(key('y', { ctrlKey: true }), false)).toBe('redo');
-    expect(menuCommandForKey(key('Enter', { ctrlKey: true }), false)).toBe('analyze');
+    expect(menuCommandForKey(key('s', { ctrlKey: true }))).toBe('save');
+    expect(menuCommandForKey(key('S', { metaKey: true, shiftKey: true }))).toBe('save-as');
+    expect(menuCommandForKey(key('o', { ctrlKey: true }))).toBe('open');
+    expect(menuCommandForKey(key('z', { ctrlKey: true }))).toBe('undo');
+    expect(menuCommandForKey(key('Z', { metaKey: true, shiftKey: true }))).toBe('redo');
+    expect(menuCommandForKey(key('y', { ctrlKey: true }))).toBe('redo');
+    expect(menuCommandForKey(key('Enter', { ctrlKey: true }))).toBe('analyze');
   });
 
-  it('leaves undo and redo to text fields but still saves from them', () => {
-    expect(menuCommandForKey(key('z', { ctrlKey: true }), true)).toBeNull();
-    expect(menuCommandForKey(key('y', { ctrlKey: true }), true)).toBeNull();
-    expect(menuCommandForKey(key('s', { ctrlKey: true }), true)).toBe('save');
+  it('opens the list of keyboard shortcuts with Ctrl+/', () => {
+    expect(menuCommandForKey(key('/', { ctrlKey: true }))).toBe('shortcuts');
   });
 
   it('ignores keys without Ctrl/Cmd, with Alt, and unrelated letters', () => {
-    expect(menuCommandForKey(key('s'), false)).toBeNull();
-    expect(menuCommandForKey(key('s', { ctrlKey: true, altKey: true }), false)).toBeNull();
-    expect(menuCommandForKey(key('p', { ctrlKey: true }), false)).toBeNull();
+    expect(menuCommandForKey(key('s'))).toBeNull();
+    expect(menuCommandForKey(key('s', { ctrlKey: true, altKey: true }))).toBeNull();
+    expect(menuCommandForKey(key('p', { ctrlKey: true }))).toBeNull();
   });
 });
 
 describe('web host keyboard and page events', () => {
+  it('takes Ctrl+Z inside a text field for the app (never the undo of the browser)', () => {
+    const window = browserWindow();
+    const { host } = hostIn(window);
+    const received: MenuCommand[] = [];
+    host.onMenuCommand((command) => received.push(command));
+    const input = window.document.createElement('input');
+    window.document.body.appendChild(input);
+    const event = new window.KeyboardEvent('keydown', { key: 'z', ctrlKey: true, bubbles: true, cancelable: true });
+    input.dispatchEvent(event);
+    expect(received).toEqual(['undo']);
+    expect(event.defaultPrevented).toBe(true);
+  });
+
   it('turns Ctrl+S into the save command and stops the browser from saving the page', () => {
     const window = browserWindow();
     const { host } = hostIn(window);
@@ -97,19 +108,6 @@ describe('web host keyboard and page events', () => {
     window.document.body.dispatchEvent(event);
     expect(received).toEqual(['save']);
     expect(event.defaultPrevented).toBe(true);
-  });
-
-  it('lets a focused text field undo its own typing', () => {
-    const window = browserWindow();
-    const { host } = hostIn(window);
-    const received: MenuCommand[] = [];
-    host.onMenuCommand((command) => received.push(command));
-    const field = window.document.createElement('input');
-    window.document.body.appendChild(field);
-    const undo = new window.KeyboardEvent('keydown', { key: 'z', ctrlKey: true, bubbles: true, cancelable: true });
-    field.dispatchEvent(undo);
-    expect(received).toEqual([]);
-    expect(undo.defaultPrevented).toBe(false);
   });
 
   it('does not swallow shortcuts while nobody listens, nor after dispose', () => {

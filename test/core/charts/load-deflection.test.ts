@@ -37,6 +37,15 @@ describe('load–deflection chart', () => {
     expect(spec.markers.length).toBeLessThan(m.loadDeflection.events.length + 1);
   });
 
+  it('gives a stage that does not advance no series (and so no legend entry)', () => {
+    const m = memberResult('B-1');
+    const last = m.loadDeflection.points[m.loadDeflection.points.length - 1]!;
+    const stuck = { ...last, stage: 'mechanism' as const };
+    const withStuck: MemberResult = { ...m, loadDeflection: { ...m.loadDeflection, points: [...m.loadDeflection.points.map((p) => ({ ...p, stage: 'integration' as const })), stuck, stuck, stuck] } };
+    const spec = loadDeflectionChart(withStuck, 'si');
+    expect(spec.series.map((s) => s.label)).toEqual(['curvature integrated along the span']);
+  });
+
   it('names a live-only pattern on the load axis', () => {
     const spec = loadDeflectionChart(memberResult('C-1'), 'us');
     expect(spec.y.label).toBe('Live load P (dead load held) (kip)');

@@ -33,10 +33,38 @@ describe('moment–curvature chart', () => {
     expect(bilinear.points).toEqual([{ x: 0, y: 0 }, { x: b.yieldCurvature * 1000, y: b.yieldMoment / 1e6 }, { x: b.ultimateCurvature * 1000, y: b.ultimateMoment / 1e6 }]);
   });
 
-  it('shows both bending directions of a section, each named in the legend and on its markers', () => {
+  it('shows both bending directions side by side, each in its own panel, with one curvature factor', () => {
     const spec = sectionMomentCurvatureChart(section(), 'si');
     expect(spec.title).toContain(section().sectionName);
     expect(spec.series.map((s) => s.label)).toEqual(['computed, sagging', 'bilinear idealisation, sagging', 'computed, hogging', 'bilinear idealisation, hogging']);
+    expect(spec.series.map((s) => s.xAxis ?? 'x')).toEqual(['x', 'x', 'x2', 'x2']);
+    expect(spec.x.label).toMatch(/^Curvature φ, sagging/);
+    expect(spec.x2!.label).toMatch(/^Curvature φ, hogging/);
+    expect(spec.x.stack).toBe('panels');
+    expect(spec.x2!.stack).toBe('panels');
+    expect(spec.x2!.scale).toBe(spec.x.scale);
+    // The panel names the direction; the marker says what happens.
+    expect(spec.markers.filter((m) => m.xAxis === 'x2').map((m) => m.label)).toContain('ultimate');
+    expect(spec.markers.some((m) => /\((sagging|hogging)\)/.test(m.label))).toBe(false);
+  });
+
+  it('draws one direction of a section with the factor of the whole section, so that views agree', () => {
+    const both = sectionMomentCurvatureChart(section(), 'us');
+    const sagging = sectionMomentCurvatureChart(section(), 'us', { directions: ['sagging'] });
+    const hogging = sectionMomentCurvatureChart(section(), 'us', { directions: ['hogging'] });
+    expect(sagging.x.scale).toBe(both.x.scale);
+    expect(hogging.x.scale).toBe(both.x.scale);
+    expect(hogging.subtitle).toBe('hogging bending');
+    expect(hogging.x2).toBeUndefined();
+    const kp = section().hogging!.keyPoints.ultimate!;
+    const marker = hogging.markers.find((m) => m.label === 'ultimate')!;
+    // 1/in = 25.4 × 1/mm (NIST SP 811 B.8: 1 in = 25.4 mm)
+    expect(marker.x * hogging.x.scale).toBeCloseTo(kp.curvature * 25.4, 12);
+  });
+
+  it('names both directions on the markers when they share one pair of axes', () => {
+    const spec = sectionMomentCurvatureChart(section(), 'si', { layout: 'overlay' });
+    expect(spec.x2).toBeUndefined();
     expect(spec.markers.some((m) => m.label === 'ultimate (hogging)')).toBe(true);
   });
 

@@ -42,7 +42,7 @@ afterAll(() => {
   vi.restoreAllMocks();
 });
 
-function spec(title: string, moment: number): ChartSpec {
+function spec(title: string, moment: number, system: 'si' | 'us' = 'si'): ChartSpec {
   const point = (curvature: number, m: number) => ({ curvature, moment: m, neutralAxisDepth: 100, compressionFaceStrain: 0, tensionFaceStrain: 0, maxSteelTensileStrain: 0, referenceStrain: 0, residual: 0 });
   return {
     ...momentCurvatureChart({
@@ -54,7 +54,7 @@ function spec(title: string, moment: number): ChartSpec {
       firstYieldCurvatureDuctility: null,
       warnings: [],
       solves: 3,
-    }, 'si'),
+    }, system),
     title,
   };
 }
@@ -82,6 +82,19 @@ describe('ChartCanvas', () => {
     expect(exposed.chart).toBe(first);
     expect(exposed.chart!.data.datasets[0]!.data[2]!.y).toBeCloseTo(300, 9);
     expect(performance.getEntriesByName('hl:chart:moment-curvature').length).toBeGreaterThanOrEqual(2);
+    wrapper.unmount();
+  });
+
+  it('names a clicked point with the axis factor put back (0.00127 1/in, not 1.27 1/in)', () => {
+    const us = spec('US', 2e8, 'us');
+    // 5e-5 1/mm × 25.4 mm/in = 1.27e-3 1/in (NIST SP 811 B.8): plotted as 1.27 on a ×10⁻³ axis
+    expect(us.x.scale).toBe(1e-3);
+    const wrapper = mount(ChartCanvas, { props: { spec: us, clickable: true }, attachTo: document.body });
+    const exposed = wrapper.vm as unknown as { chart: { options: { plugins: { tooltip: { callbacks: { label: (item: object) => string } } } }; data: { datasets: { data: { x: number; y: number }[] }[] } } };
+    const point = exposed.chart.data.datasets[0]!.data[2]!;
+    expect(point.x).toBeCloseTo(1.27, 9);
+    const text = exposed.chart.options.plugins.tooltip.callbacks.label({ datasetIndex: 0, dataIndex: 2, parsed: point });
+    expect(text).toMatch(/^computed, sagging: 1\.27(0)?×10⁻³ 1\/in, \d+(\.\d+)? kip·ft$/);
     wrapper.unmount();
   });
 

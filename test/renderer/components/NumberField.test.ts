@@ -5,6 +5,7 @@
 import { mount } from '@vue/test-utils';
 import { describe, expect, it } from 'vitest';
 import NumberField from '../../../renderer/src/components/NumberField.vue';
+import { historyRevision, revertFocusedField } from '../../../renderer/src/composables/field-history.ts';
 
 function field(props: Record<string, unknown> = {}) {
   return mount(NumberField, { props: { modelValue: 7315.2, quantity: 'spanLength', system: 'us', label: 'Span', ...props } });
@@ -91,5 +92,57 @@ describe('NumberField', () => {
     await input.trigger('blur');
     expect(input.element.value).toBe('23.622047');
     expect(wrapper.emitted('done')).toHaveLength(1);
+  });
+
+  it('shows a value restored by undo also while it has the focus (the text follows the value)', async () => {
+    const wrapper = field({ quantity: 'sectionLength', modelValue: 609.6 });
+    const input = wrapper.get('input');
+    await input.trigger('focus');
+    await input.setValue('30');
+    await wrapper.setProps({ modelValue: 762 });
+    // Typing: the field keeps the user's spelling.
+    await input.setValue('30.');
+    await wrapper.setProps({ modelValue: 762 });
+    expect(input.element.value).toBe('30.');
+    // Undo (the document store bumps the history revision) restores 24 in, focused or not.
+    historyRevision.value++;
+    await wrapper.setProps({ modelValue: 609.6 });
+    expect(input.element.value).toBe('24');
+    await input.setValue('25');
+    await wrapper.setProps({ modelValue: 635 });
+    expect(input.element.value).toBe('25');
+  });
+
+  it('Ctrl+Z in a field holding text not yet stored gives that text up first, and nothing else', async () => {
+    const wrapper = field();
+    const input = wrapper.get('input');
+    await input.trigger('focus');
+    await input.setValue('2O');
+    expect(revertFocusedField()).toBe(true);
+    await wrapper.vm.$nextTick();
+    expect(input.element.value).toBe('24');
+    expect(input.attributes('aria-invalid')).toBe('false');
+    // Nothing unstored left: the next Ctrl+Z goes to the app's undo.
+    expect(revertFocusedField()).toBe(false);
+    await input.trigger('blur');
+    expect(revertFocusedField()).toBe(false);
+  });
+
+  it('reads and writes a notation of its own (bar sizes) and passes what else it read', async () => {
+    const wrapper = field({
+      quantity: 'sectionLength',
+      modelValue: 25.4,
+      textOf: (v: number | undefined) => (v === 25.4 ? '#8' : null),
+      read: (text: string) => (text.includes('#') ? { ok: true, value: 28.6512, extra: 3 } : null),
+    });
+    const input = wrapper.get('input');
+    expect(input.element.value).toBe('#8');
+    // The unit is not shown beside a designation.
+    expect(wrapper.get('.unit').text()).toBe('');
+    await input.setValue('3 #9');
+    expect(wrapper.emitted('update:modelValue')).toEqual([[28.6512, 3]]);
+    await input.setValue('1.25');
+    expect(wrapper.emitted('update:modelValue')![1]).toEqual([31.75]);
+    expect(wrapper.get('.unit').text()).toBe('in');
   });
 });

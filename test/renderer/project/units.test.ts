@@ -76,6 +76,13 @@ describe('typed numbers', () => {
     if (!text.ok) expect(text.message).toMatch(/unknown unit "x"/);
   });
 
+  it('names the unit of an inch field without writing "in in"', () => {
+    const parsed = parseInput('abc', 'sectionLength', 'us');
+    expect(parsed).toEqual({ ok: false, message: '"abc" is not a number; type a number (unit: in)' });
+    const plain = parseInput('abc', null, 'us');
+    expect(plain.ok ? '' : plain.message).toBe('"abc" is not a number; type a number');
+  });
+
   it('accepts a typographic minus sign', () => {
     expect(value('\u22125', 'force', 'si')).toBe(-5000);
   });

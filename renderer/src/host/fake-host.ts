@@ -10,6 +10,7 @@
  *
  * End-to-end tests (playwright, against the built web app): define the seed before any page
  * script runs; `getHost()` then builds a fake host from it and attaches controls to the object.
+ * The browser host's keyboard shortcuts work there too (`listenForShortcuts`).
  *   await page.addInitScript((seed) => { window.hingelineTestHost = seed; }, { openQueue: [...] });
  *   await page.goto(url);
  *   await page.evaluate(() => window.hingelineTestHost!.emitMenuCommand!('analyze'));
@@ -20,6 +21,7 @@
 import { eventChannel } from './event-channel.ts';
 import type { HostApi, MenuCommand, OpenedFile } from './host-api.ts';
 import { EXPORT_EXTENSIONS, PROJECT_EXTENSION } from './host-api.ts';
+import { listenForShortcuts } from './web-host.ts';
 
 export interface FakeHostSeed {
   /** Host kind to report (default 'web'). */
@@ -57,6 +59,8 @@ export interface FakeHost extends HostApi {
   readonly documentState: { title: string; dirty: boolean };
   readonly autosaves: string[];
   recovery: { text: string; savedAt: string; name: string } | null;
+  /** Someone subscribed to menu commands. */
+  readonly listening: boolean;
   emitMenuCommand(command: MenuCommand): void;
   emitOpenFile(file: OpenedFile): void;
 }
@@ -100,6 +104,9 @@ export function createFakeHost(seed: FakeHostSeed = {}): FakeHost {
 
   const host: FakeHost = {
     kind: seed.kind ?? 'web',
+    get listening() {
+      return commands.listening;
+    },
     calls,
     files,
     exports,
@@ -189,5 +196,7 @@ export function createFakeHostFromGlobal(global: FakeHostGlobal): FakeHost {
   Object.defineProperty(global, 'savedFiles', { configurable: true, enumerable: true, get: () => Object.fromEntries(host.files) });
   global.emitMenuCommand = (command) => host.emitMenuCommand(command);
   global.emitOpenFile = (file) => host.emitOpenFile(file);
+  // In a browser page (end-to-end tests) the keys do what they do under the browser host.
+  if (typeof window !== 'undefined' && typeof window.addEventListener === 'function') listenForShortcuts(window, (command) => host.emitMenuCommand(command), () => host.listening);
   return host;
 }

@@ -60,6 +60,23 @@ export function menuCommandForKey(event: KeyLike): MenuCommand | null {
   return null;
 }
 
+/**
+ * Turns the browser's key presses into menu commands (capture phase, before any field sees them)
+ * while someone listens; returns the function that stops it. Used by the browser host, and by
+ * the fake host of the end-to-end tests so that they press the same keys.
+ */
+export function listenForShortcuts(target: Window, emit: (command: MenuCommand) => void, listening: () => boolean): () => void {
+  const onKeyDown = (event: KeyboardEvent): void => {
+    if (event.defaultPrevented || event.repeat) return;
+    const command = menuCommandForKey(event);
+    if (!command || !listening()) return;
+    event.preventDefault();
+    emit(command);
+  };
+  target.addEventListener('keydown', onKeyDown, true);
+  return () => target.removeEventListener('keydown', onKeyDown, true);
+}
+
 /** `Beam B1 — Hingeline`, with `• ` in front when there are unsaved changes. */
 export function documentTitle(state: { title: string; dirty: boolean }): string {
   const title = state.title.trim().length > 0 ? `${state.title.trim()} — Hingeline` : 'Hingeline';
@@ -165,13 +182,6 @@ export function createWebHost(overrides: Partial<WebHostDependencies> = {}): Web
     if (handle) await store.set(`${RECENT_HANDLE_PREFIX}${name}`, handle).catch(() => undefined);
   }
 
-  const onKeyDown = (event: KeyboardEvent): void => {
-    if (event.defaultPrevented || event.repeat) return;
-    const command = menuCommandForKey(event);
-    if (!command || !commands.listening) return;
-    event.preventDefault();
-    emitCommand(command);
-  };
   const onBeforeUnload = (event: BeforeUnloadEvent): void => {
     if (!dirty) return;
     event.preventDefault();
@@ -197,7 +207,7 @@ export function createWebHost(overrides: Partial<WebHostDependencies> = {}): Web
       (error: unknown) => console.warn('[hingeline] dropped file not opened:', error),
     );
   };
-  window.addEventListener('keydown', onKeyDown, true);
+  const stopShortcuts = listenForShortcuts(window, emitCommand, () => commands.listening);
   window.addEventListener('beforeunload', onBeforeUnload);
   window.addEventListener('pagehide', onPageHide);
   window.addEventListener('dragover', onDragOver);
@@ -273,7 +283,7 @@ export function createWebHost(overrides: Partial<WebHostDependencies> = {}): Web
     onOpenFile: (listener) => openedFiles.subscribe(listener),
 
     dispose() {
-      window.removeEventListener('keydown', onKeyDown, true);
+      stopShortcuts();
       window.removeEventListener('beforeunload', onBeforeUnload);
       window.removeEventListener('pagehide', onPageHide);
       window.removeEventListener('dragover', onDragOver);

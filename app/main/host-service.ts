@@ -21,6 +21,8 @@ import { writeFileAtomic } from './atomic-write.ts';
 import type { PathGrants } from './path-grants.ts';
 import type { RecentFiles } from './recent-files.ts';
 import type { RecoveryStore } from './recovery-store.ts';
+import { sanitizeSvg, UnsafeSvgError } from './svg-sanitize.ts';
+import { AutosaveThrottle } from './autosave-throttle.ts';
 
 /** Largest project file the host reads, in bytes. */
 export const MAX_PROJECT_FILE_BYTES = 64 * 1024 * 1024;
@@ -48,7 +50,11 @@ export interface HostServiceDependencies {
   readonly defaultFolder: string;
   /** Opens a file we just wrote with the system's default application; resolves to '' or an error text. */
   readonly openWithSystem: (path: string) => Promise<string>;
+  /** Shows a file we just wrote in the system's file manager (for types not opened with a program). */
+  readonly revealInFolder?: (path: string) => void;
   readonly onRecentChanged?: (files: readonly string[]) => void;
+  /** Least time between two autosave writes, ms (default 2000; tests pass their own). */
+  readonly autosaveIntervalMs?: number;
   readonly onSaveStarted?: () => void;
   readonly onSaveFinished?: (saved: boolean) => void;
   readonly log?: (message: string) => void;
@@ -91,9 +97,12 @@ function decodeProjectText(bytes: Uint8Array, name: string): string {
 export class HostService {
   private lastFolder: string;
   private documentTitle = 'Untitled';
+  /** The renderer's autosaves, at most one write per interval (autosave-throttle.ts). */
+  private readonly autosaves: AutosaveThrottle;
 
   constructor(private readonly deps: HostServiceDependencies) {
     this.lastFolder = deps.defaultFolder;
+    this.autosaves = new AutosaveThrottle((text) => this.deps.recovery.autosave(text, this.documentTitle), { minIntervalMs: deps.autosaveIntervalMs ?? 2000 });
   }
 
   /** The title the renderer reported last; stored with autosaves. */
@@ -121,7 +130,7 @@ export class HostService {
     }
     const text = decodeProjectText(bytes, name);
     if (text.length > IPC_LIMITS.projectTextChars) throw new HostError(`“${name}” is too large to open.`);
-    this.deps.grants.grant(path);
+    await this.deps.grants.grant(path);
     this.lastFolder = dirname(path);
     await this.remember(path);
     return { name, path, text };
@@ -168,22 +177,34 @@ export class HostService {
       const { path, suggestedName, saveAs } = request.options;
       let target = !saveAs && path !== null && this.deps.grants.isGranted(path) ? path : null;
       if (path !== null && !saveAs && target === null) this.deps.log?.(`save: ${path} was not granted; asking where to save`);
+      // A granted path is written where it led when granted; a path that now leads elsewhere is refused.
+      let writeTo = target;
+      if (target !== null) {
+        const checked = await this.deps.grants.writeTarget(target);
+        if (!checked.ok) {
+          this.deps.log?.(`save: refused to write ${target}: ${checked.reason}`);
+          throw new HostError(`“${basename(target)}” was not saved: since it was opened, ${checked.reason}. Nothing was written; use Save As to choose where to save.`);
+        }
+        writeTo = checked.path;
+      }
       if (target === null) {
         const proposed = join(path !== null ? dirname(path) : this.lastFolder, withProjectExtension(sanitizeFileName(suggestedName)));
         const chosen = await this.deps.dialogs.chooseProjectSavePath(proposed);
         if (chosen === null) return null;
         target = isProjectFileName(chosen) ? chosen : `${chosen}${PROJECT_EXTENSION}`;
+        writeTo = target;
       }
       try {
-        await writeFileAtomic(target, request.text, { keepBackup: true });
+        await writeFileAtomic(writeTo ?? target, request.text, { keepBackup: true });
       } catch (error) {
         throw new HostError(`“${basename(target)}” could not be saved: ${describeFileError(error)}. The previous version on disk is unchanged.`);
       }
-      this.deps.grants.grant(target);
+      await this.deps.grants.grant(target);
       this.lastFolder = dirname(target);
       await this.remember(target);
       // The document on disk now matches what was autosaved; nothing is left to recover.
       await this.deps.recovery.discardAutosave().catch(() => undefined);
+      this.autosaves.reset();
       saved = true;
       return { name: basename(target), path: target };
     } finally {
@@ -191,21 +212,38 @@ export class HostService {
     }
   }
 
-  /** Asks where to export, writes atomically, and opens the file afterwards if asked. */
+  /**
+   * Asks where to export, writes atomically, and opens the file afterwards if asked. An SVG is
+   * written without anything active in it (scripts, event handlers, links out; svg-sanitize.ts)
+   * and is never opened with the default program (usually a web browser, which would run what
+   * a script-bearing SVG holds): its folder is shown instead.
+   */
   async exportFile(request: ExportFileRequest): Promise<SavedFilePayload | null> {
     const type = exportTypeFor(request.options.mime);
     if (!type) throw new HostError(`Files of type ${request.options.mime} cannot be exported.`);
+    const svg = type.mime === 'image/svg+xml';
+    let data = request.data;
+    if (svg) {
+      try {
+        const text = typeof data === 'string' ? data : new TextDecoder('utf-8', { fatal: true }).decode(data);
+        data = sanitizeSvg(text);
+      } catch (error) {
+        throw new HostError(`The SVG was not exported: ${error instanceof UnsafeSvgError ? error.message : 'it is not UTF-8 text'}.`);
+      }
+    }
     const stem = sanitizeFileName(request.options.suggestedName.replace(new RegExp(`\\${type.extension}$`, 'i'), ''), 'Export');
     const chosen = await this.deps.dialogs.chooseExportPath(join(this.lastFolder, `${stem}${type.extension}`), type);
     if (chosen === null) return null;
     const target = withExtension(chosen, type.extension);
     try {
-      await writeFileAtomic(target, request.data);
+      await writeFileAtomic(target, data);
     } catch (error) {
       throw new HostError(`“${basename(target)}” could not be written: ${describeFileError(error)}.`);
     }
     this.lastFolder = dirname(target);
-    if (request.options.openAfterwards) {
+    if (request.options.openAfterwards && svg) {
+      this.deps.revealInFolder?.(target);
+    } else if (request.options.openAfterwards) {
       // Only ever the path we have just written, never a path from the renderer.
       const problem = await this.deps.openWithSystem(target);
       if (problem) this.deps.log?.(`export: could not open ${target}: ${problem}`);
@@ -213,8 +251,9 @@ export class HostService {
     return { name: basename(target), path: target };
   }
 
+  /** Keeps a recovery copy of the renderer's document (rate-limited: calls in quick succession are merged). */
   async autosave(text: string): Promise<void> {
-    await this.deps.recovery.autosave(text, this.documentTitle);
+    await this.autosaves.submit(text);
   }
 
   takeRecovery(): Promise<RecoveryPayload | null> {

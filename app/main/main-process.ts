@@ -136,6 +136,7 @@ export function startMainProcess(options: MainProcessOptions = {}): Promise<Main
     grants,
     defaultFolder: app.getPath('documents'),
     openWithSystem: (path) => shell.openPath(path),
+    revealInFolder: (path) => shell.showItemInFolder(path),
     onRecentChanged: (files) => {
       const top = files[0] ?? null;
       if (top !== null && top !== topRecent && platform !== 'linux') app.addRecentDocument(top);

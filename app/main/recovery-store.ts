@@ -5,10 +5,14 @@
  * - `session-open.json`: written when a session starts, removed when it ends cleanly. Finding it
  *   at the next start means the last session crashed or was killed.
  * - `autosave.json`: the latest autosave of the open document, written atomically.
- * - `recovered.json`: the autosave of a crashed session, set aside at start so this session's
- *   autosaves cannot overwrite it; offered by `takeRecovery()` until `clearRecovery()`.
+ * - `recovered.json`, `recovered-2.json`, …: the autosaves of crashed sessions (or of crashed
+ *   renderers), set aside so that no later autosave can overwrite them. A second crash before
+ *   the user answered about the first sets its autosave aside under the next number: nothing the
+ *   user has not answered about is ever replaced. `takeRecovery()` offers the oldest until
+ *   `clearRecovery()`; then the next one. At most `MAX_RECOVERIES` wait; beyond that the oldest
+ *   goes (ten crashes without an answer).
  */
-import { access, mkdir, readFile, rename, unlink } from 'node:fs/promises';
+import { access, mkdir, readdir, readFile, rename, unlink } from 'node:fs/promises';
 import { join } from 'node:path';
 import type { RecoveryPayload } from '../shared/bridge.ts';
 import { validateRecovery } from '../shared/validators.ts';
@@ -16,6 +20,9 @@ import { writeFileAtomic } from './atomic-write.ts';
 
 const AUTOSAVE_FORMAT = 'hingeline-autosave';
 const AUTOSAVE_VERSION = 1;
+/** Recovery files kept waiting for an answer at most. */
+export const MAX_RECOVERIES = 10;
+const RECOVERED = /^recovered(?:-(\d+))?\.json$/;
 
 export interface RecoveryStoreOptions {
   /** Clock for `savedAt` (tests pass a fixed one). */
@@ -67,6 +74,7 @@ async function removeIfPresent(path: string): Promise<void> {
 export class RecoveryStore {
   readonly markerPath: string;
   readonly autosavePath: string;
+  /** The first recovery file (`recovered.json`); later ones are numbered. */
   readonly recoveredPath: string;
   private readonly now: () => Date;
 
@@ -78,7 +86,7 @@ export class RecoveryStore {
   }
 
   /**
-   * Starts a session: if the last one did not end cleanly, its autosave becomes the recovery
+   * Starts a session: if the last one did not end cleanly, its autosave becomes a recovery
    * candidate; a leftover autosave of a clean session is discarded. Then marks this session open.
    */
   async beginSession(): Promise<SessionStart> {
@@ -94,18 +102,39 @@ export class RecoveryStore {
     return { previousSessionCrashed, recoveryAvailable: (await this.takeRecovery()) !== null };
   }
 
+  /** The recovery files waiting, oldest first: [number, path]. */
+  private async waiting(): Promise<[number, string][]> {
+    let names: string[];
+    try {
+      names = await readdir(this.folder);
+    } catch {
+      return [];
+    }
+    return names
+      .map((name) => [RECOVERED.exec(name), name] as const)
+      .filter((entry): entry is readonly [RegExpExecArray, string] => entry[0] !== null)
+      .map(([match, name]): [number, string] => [match[1] === undefined ? 1 : Number(match[1]), join(this.folder, name)])
+      .sort((a, b) => a[0] - b[0]);
+  }
+
   /**
-   * Makes the current autosave the recovery candidate (after a crash of the previous session,
-   * or of this session's renderer). Returns false when there was no autosave.
+   * Makes the current autosave a recovery candidate (after a crash of the previous session, or
+   * of this session's renderer), after those already waiting: never over one of them. Returns
+   * false when there was no autosave.
    */
   async setAsideAutosave(): Promise<boolean> {
+    if (!(await exists(this.autosavePath))) return false;
+    const waiting = await this.waiting();
+    const next = waiting.length === 0 ? 1 : waiting[waiting.length - 1]![0] + 1;
+    const target = next === 1 ? this.recoveredPath : join(this.folder, `recovered-${next}.json`);
     try {
-      await rename(this.autosavePath, this.recoveredPath);
-      return true;
+      await rename(this.autosavePath, target);
     } catch (error) {
       if ((error as NodeJS.ErrnoException).code === 'ENOENT') return false;
       throw error;
     }
+    for (const [, path] of waiting.slice(0, Math.max(0, waiting.length + 1 - MAX_RECOVERIES))) await removeIfPresent(path);
+    return true;
   }
 
   /** Saves the open document's text (atomically) with its title and the current time. */
@@ -115,21 +144,29 @@ export class RecoveryStore {
   }
 
   /**
-   * The document autosaved by a session that crashed, or null. Does not remove it: call
-   * `clearRecovery()` once the user restored or declined it.
+   * The oldest document autosaved by a session (or renderer) that crashed and not yet answered
+   * about, or null. Does not remove it: call `clearRecovery()` once the user restored or declined
+   * it. A recovery file that cannot be read is dropped.
    */
   async takeRecovery(): Promise<RecoveryPayload | null> {
-    let text: string;
-    try {
-      text = await readFile(this.recoveredPath, 'utf8');
-    } catch {
-      return null;
+    for (const [, path] of await this.waiting()) {
+      let text: string | null = null;
+      try {
+        text = await readFile(path, 'utf8');
+      } catch {
+        text = null;
+      }
+      const payload = text === null ? null : parseAutosave(text);
+      if (payload) return payload;
+      await removeIfPresent(path);
     }
-    return parseAutosave(text);
+    return null;
   }
 
+  /** Forgets the recovery `takeRecovery()` offered (the oldest); the next one, if any, is offered then. */
   async clearRecovery(): Promise<void> {
-    await removeIfPresent(this.recoveredPath);
+    const [oldest] = await this.waiting();
+    if (oldest) await removeIfPresent(oldest[1]);
   }
 
   /** Drops the current autosave, e.g. after the document was saved or closed without changes. */

@@ -36,12 +36,26 @@ export function recordingFactory(requests: WorkerRequest[], inner: WorkerFactory
   };
 }
 
-/** A fresh Pinia, a fake host and in-process workers, set as the app's. */
-export function testEnvironment(seed: FakeHostSeed = {}): TestEnvironment {
+/**
+ * In-process workers that read, write and validate project files but never analyse (requests to
+ * analyse stay unanswered): for shell tests that need no results, so that they stay light on a
+ * busy machine.
+ */
+export const noAnalysisFactory: WorkerFactory = () => {
+  const worker = inProcessWorkerFactory();
+  const post = worker.postMessage.bind(worker);
+  worker.postMessage = (message) => {
+    if (message.type !== 'analyze') post(message);
+  };
+  return worker;
+};
+
+/** A fresh Pinia, a fake host and in-process workers (`analyse: false`: no analyses), set as the app's. */
+export function testEnvironment(seed: FakeHostSeed = {}, options: { analyse?: boolean } = {}): TestEnvironment {
   const host = createFakeHost(seed);
   setHostForTesting(host);
   const requests: WorkerRequest[] = [];
-  setWorkerFactory(recordingFactory(requests));
+  setWorkerFactory(recordingFactory(requests, options.analyse === false ? noAnalysisFactory : inProcessWorkerFactory));
   const pinia = createPinia();
   setActivePinia(pinia);
   return { host, pinia, requests };

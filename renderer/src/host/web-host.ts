@@ -6,7 +6,7 @@
  * - Autosave and recovery in IndexedDB. A "session open" marker in localStorage is removed when
  *   the page is left without unsaved changes; finding it at the next start means the last visit
  *   ended abnormally (tab crash, browser killed, or leaving despite the unsaved-changes warning),
- *   and its autosave is offered through `takeRecovery()`.
+ *   and its autosave is offered through `takeRecovery()`, after any copy still unanswered.
  * - Recent files: names in localStorage; file handles (when the browser gives them) in IndexedDB.
  * - No native menu: Ctrl/Cmd+S, Shift+S, O, Z, Y, Shift+Z, Enter and / become MenuCommands (undo
  *   and redo also inside text fields: the app's undo, never the browser's).
@@ -95,6 +95,15 @@ function asAutosaveRecord(value: unknown): AutosaveRecord | null {
   return typeof text === 'string' && typeof savedAt === 'string' && typeof name === 'string' ? { text, savedAt, name } : null;
 }
 
+/** Recovery copies kept waiting for an answer at most (the oldest goes beyond that). */
+export const MAX_RECOVERIES = 10;
+
+/** The recovery copies waiting, oldest first (an earlier version stored one record, not a list). */
+function asRecoveryList(value: unknown): AutosaveRecord[] {
+  const items = Array.isArray(value) ? value : value === undefined || value === null ? [] : [value];
+  return items.map(asAutosaveRecord).filter((r): r is AutosaveRecord => r !== null);
+}
+
 function readRecent(storage: Storage | null): string[] {
   try {
     const parsed: unknown = JSON.parse(storage?.getItem(RECENT_KEY) ?? '[]');
@@ -151,11 +160,15 @@ export function createWebHost(overrides: Partial<WebHostDependencies> = {}): Web
 
   if (new URL(window.location.href).searchParams.has('demo')) commands.emit('open-demo');
 
-  // Set aside the autosave of a visit that ended abnormally, then mark this visit open.
+  // Set aside the autosave of a visit that ended abnormally (after any still waiting for an
+  // answer: a second crash never replaces the first one's copy), then mark this visit open.
   const ready = (async () => {
     const previousVisitOpen = (storage?.getItem(SESSION_MARKER_KEY) ?? null) !== null;
     const autosaved = asAutosaveRecord(await store.get(AUTOSAVE_KEY).catch(() => null));
-    if (autosaved && previousVisitOpen) await store.set(RECOVERED_KEY, autosaved);
+    if (autosaved && previousVisitOpen) {
+      const waiting = asRecoveryList(await store.get(RECOVERED_KEY).catch(() => null));
+      await store.set(RECOVERED_KEY, [...waiting, autosaved].slice(-MAX_RECOVERIES));
+    }
     if (autosaved) await store.delete(AUTOSAVE_KEY);
     storage?.setItem(SESSION_MARKER_KEY, now().toISOString());
   })().catch((error: unknown) => console.warn('[hingeline] recovery storage unavailable:', error));
@@ -264,12 +277,14 @@ export function createWebHost(overrides: Partial<WebHostDependencies> = {}): Web
 
     async takeRecovery() {
       await ready;
-      return asAutosaveRecord(await store.get(RECOVERED_KEY));
+      return asRecoveryList(await store.get(RECOVERED_KEY))[0] ?? null;
     },
 
     async clearRecovery() {
       await ready;
-      await store.delete(RECOVERED_KEY);
+      const rest = asRecoveryList(await store.get(RECOVERED_KEY)).slice(1);
+      if (rest.length > 0) await store.set(RECOVERED_KEY, rest);
+      else await store.delete(RECOVERED_KEY);
     },
 
     setDocumentState(state) {

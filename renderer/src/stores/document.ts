@@ -24,6 +24,8 @@ export const HISTORY_LIMIT = 200;
 export const COALESCE_MS = 1500;
 /** Idle time after an edit before the autosave copy is written, ms. */
 export const AUTOSAVE_IDLE_MS = 4000;
+/** Longest an edit waits for its autosave while editing goes on without a pause, ms. */
+export const AUTOSAVE_MAX_WAIT_MS = 30_000;
 
 export interface HistoryEntry {
   readonly project: Project;
@@ -193,18 +195,32 @@ export const useDocumentStore = defineStore('document', () => {
   // Window title and the unsaved-changes flag (the host warns on close).
   watch([title, dirty], ([t, d]) => host.setDocumentState({ title: t.slice(0, 300), dirty: d }), { immediate: true });
 
-  // Autosave after a few seconds of idle editing.
+  // Autosave after a few seconds of idle editing, and at least every AUTOSAVE_MAX_WAIT_MS while
+  // editing goes on: never more often than once per AUTOSAVE_IDLE_MS (the desktop host limits
+  // the rate of writes again on its side).
+  let unsavedSince: number | null = null;
+  let lastAutosave = Number.NEGATIVE_INFINITY;
+  function writeAutosave(): void {
+    autosaveTimer = null;
+    unsavedSince = null;
+    if (!dirty.value) return;
+    lastAutosave = Date.now();
+    text().then((content) => host.autosave(content)).catch(() => {
+      // An autosave that fails is retried after the next edit; the document itself is intact.
+    });
+  }
   watch(project, () => {
     if (autosaveTimer) clearTimeout(autosaveTimer);
     autosaveTimer = null;
-    if (!dirty.value) return;
-    autosaveTimer = setTimeout(() => {
-      autosaveTimer = null;
-      if (!dirty.value) return;
-      text().then((content) => host.autosave(content)).catch(() => {
-        // An autosave that fails is retried after the next edit; the document itself is intact.
-      });
-    }, AUTOSAVE_IDLE_MS);
+    if (!dirty.value) {
+      unsavedSince = null;
+      return;
+    }
+    const now = Date.now();
+    unsavedSince ??= now;
+    const overdue = unsavedSince + AUTOSAVE_MAX_WAIT_MS - now;
+    const delay = Math.max(Math.min(AUTOSAVE_IDLE_MS, overdue), lastAutosave + AUTOSAVE_IDLE_MS - now, 0);
+    autosaveTimer = setTimeout(writeAutosave, delay);
   });
 
   return {

@@ -1,4 +1,4 @@
-import { mkdir, open, readdir, readFile, writeFile } from 'node:fs/promises';
+import { lstat, mkdir, open, readdir, readFile, rename, symlink, unlink, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { describeFileError, HostError, MAX_PROJECT_FILE_BYTES } from '../../../app/main/host-service.ts';
@@ -68,6 +68,77 @@ describe('opening projects', () => {
   });
 });
 
+describe('saving to a granted path whose links changed', () => {
+  it('writes where the granted path led when it was opened (a link resolved once)', async () => {
+    const real = join(setup.folder, 'data', 'Beam B1.hingeline');
+    await mkdir(join(setup.folder, 'data'));
+    await writeFile(real, project);
+    const link = join(setup.folder, 'Documents', 'Beam B1.hingeline');
+    await symlink(real, link);
+    setup.openAnswers.push(link);
+    await setup.service.openProject();
+    const saved = await setup.service.saveProject({ text: 'v2', options: { path: link, suggestedName: 'Beam B1', saveAs: false } });
+    expect(saved?.path).toBe(link);
+    expect(await readFile(real, 'utf8')).toBe('v2');
+    // The link is still a link (not replaced by a copy of the file).
+    expect((await lstat(link)).isSymbolicLink()).toBe(true);
+  });
+
+  it('refuses to write through a link put in place of the granted file, and writes nothing', async () => {
+    const path = join(setup.folder, 'Documents', 'Beam B2.hingeline');
+    await writeFile(path, project);
+    setup.openAnswers.push(path);
+    await setup.service.openProject();
+    const victim = join(setup.folder, 'victim.txt');
+    await writeFile(victim, 'precious');
+    await unlink(path);
+    await symlink(victim, path);
+    await expect(setup.service.saveProject({ text: 'overwrite', options: { path, suggestedName: 'Beam B2', saveAs: false } })).rejects.toThrow(
+      new RegExp(`“Beam B2\\.hingeline” was not saved: since it was opened, its path now leads to ${victim.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')} .*use Save As`),
+    );
+    expect(await readFile(victim, 'utf8')).toBe('precious');
+    expect(setup.dialogs.chooseProjectSavePath).not.toHaveBeenCalled();
+    expect(setup.log).toHaveBeenCalledWith(expect.stringContaining('refused to write'));
+    expect(setup.onSaveFinished).toHaveBeenCalledWith(false);
+  });
+
+  it('refuses when a folder on the way became a link to another place', async () => {
+    await mkdir(join(setup.folder, 'job'));
+    const path = join(setup.folder, 'job', 'Beam B3.hingeline');
+    await writeFile(path, project);
+    setup.openAnswers.push(path);
+    await setup.service.openProject();
+    await mkdir(join(setup.folder, 'elsewhere'));
+    await rename(join(setup.folder, 'job'), join(setup.folder, 'job-old'));
+    await symlink(join(setup.folder, 'elsewhere'), join(setup.folder, 'job'));
+    await expect(setup.service.saveProject({ text: 'x', options: { path, suggestedName: 'Beam B3', saveAs: false } })).rejects.toThrow(/was not saved: since it was opened, its path now leads to/);
+    expect(await readdir(join(setup.folder, 'elsewhere'))).toEqual([]);
+  });
+
+  it('refuses a path that became a loop of links', async () => {
+    const path = join(setup.folder, 'Documents', 'loop.hingeline');
+    await writeFile(path, project);
+    await setup.grants.grant(path);
+    await unlink(path);
+    await symlink(path, path);
+    await expect(setup.service.saveProject({ text: 'x', options: { path, suggestedName: 'loop', saveAs: false } })).rejects.toThrow(/its path has become a loop of links/);
+  });
+
+  it('still saves with Save As to a place the user chooses', async () => {
+    const path = join(setup.folder, 'Documents', 'Beam B4.hingeline');
+    await writeFile(path, project);
+    setup.openAnswers.push(path);
+    await setup.service.openProject();
+    await unlink(path);
+    await symlink(join(setup.folder, 'victim.txt'), path);
+    const chosen = join(setup.folder, 'Documents', 'Beam B4 saved.hingeline');
+    setup.saveAnswers.push(chosen);
+    const saved = await setup.service.saveProject({ text: 'kept', options: { path, suggestedName: 'Beam B4', saveAs: true } });
+    expect(saved?.path).toBe(chosen);
+    expect(await readFile(chosen, 'utf8')).toBe('kept');
+  });
+});
+
 describe('saving projects', () => {
   it('asks where to save a new document, proposing the suggested name with the project extension', async () => {
     const target = join(setup.folder, 'Documents', 'Beam B1.hingeline');
@@ -121,7 +192,7 @@ describe('saving projects', () => {
     const notAFolder = join(setup.folder, 'plain-file');
     await writeFile(notAFolder, 'I am a file');
     const target = join(notAFolder, 'a.hingeline');
-    setup.grants.grant(target);
+    await setup.grants.grant(target);
     await expect(setup.service.saveProject({ text: 'new', options: { path: target, suggestedName: 'a', saveAs: false } })).rejects.toThrow(
       '“a.hingeline” could not be saved: a part of the path is not a folder. The previous version on disk is unchanged.',
     );
@@ -149,6 +220,24 @@ describe('exporting', () => {
     expect(setup.openWithSystem).toHaveBeenCalledExactlyOnceWith(target);
   });
 
+  it('writes an SVG without anything active in it and shows it in its folder instead of opening it', async () => {
+    const target = join(setup.folder, 'Documents', 'section.svg');
+    setup.exportAnswers.push(target);
+    const svg = '<svg xmlns="http://www.w3.org/2000/svg" onload="fetch(`https://x`)"><script>alert(1)</script><rect width="10" height="5"/></svg>';
+    await setup.service.exportFile({ data: new TextEncoder().encode(svg), options: { suggestedName: 'section', mime: 'image/svg+xml', openAfterwards: true } });
+    expect(await readFile(target, 'utf8')).toBe('<svg xmlns="http://www.w3.org/2000/svg"><rect width="10" height="5"/></svg>');
+    expect(setup.openWithSystem).not.toHaveBeenCalled();
+    expect(setup.revealInFolder).toHaveBeenCalledExactlyOnceWith(target);
+  });
+
+  it('refuses an SVG it cannot make safe, writing nothing', async () => {
+    const target = join(setup.folder, 'Documents', 'bad.svg');
+    setup.exportAnswers.push(target);
+    await expect(setup.service.exportFile({ data: '<!DOCTYPE svg [<!ENTITY a "b">]><svg/>', options: { suggestedName: 'bad', mime: 'image/svg+xml', openAfterwards: false } })).rejects.toThrow(/The SVG was not exported: the SVG declares a document type/);
+    await expect(readFile(target)).rejects.toThrow();
+    expect(setup.dialogs.chooseExportPath).not.toHaveBeenCalled();
+  });
+
   it('does not open a CSV unless asked, and does not double the extension', async () => {
     setup.exportAnswers.push(join(setup.folder, 'results.csv'));
     const saved = await setup.service.exportFile({ data: 'a;b\n', options: { suggestedName: 'results.csv', mime: 'text/csv', openAfterwards: false } });
@@ -165,6 +254,19 @@ describe('exporting', () => {
 });
 
 describe('autosave and recovery through the service', () => {
+  it('merges a burst of autosaves from the renderer into few writes of the latest text', async () => {
+    const writes: string[] = [];
+    const original = setup.recovery.autosave.bind(setup.recovery);
+    setup.recovery.autosave = async (text, name) => {
+      writes.push(text);
+      await original(text, name);
+    };
+    await Promise.all(Array.from({ length: 200 }, (_, i) => setup.service.autosave(`draft ${i}`)));
+    // The first call writes at once; the 199 that follow within the interval become one write.
+    expect(writes).toEqual(['draft 0', 'draft 199']);
+    expect(JSON.parse(await readFile(setup.recovery.autosavePath, 'utf8')).text).toBe('draft 199');
+  });
+
   it('stores the autosave under the title the renderer reported', async () => {
     setup.service.setDocumentTitle('Beam B1');
     await setup.service.autosave('{"draft":true}');

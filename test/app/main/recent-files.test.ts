@@ -67,9 +67,9 @@ describe('parseRecentFiles', () => {
 });
 
 describe('PathGrants', () => {
-  it('grants exactly the paths main handed out, normalised', () => {
+  it('grants exactly the paths main handed out, normalised', async () => {
     const grants = new PathGrants();
-    grants.grant('/jobs/sub/../a.hingeline');
+    await grants.grant('/jobs/sub/../a.hingeline');
     expect(grants.isGranted('/jobs/a.hingeline')).toBe(true);
     expect(grants.isGranted('/jobs/b.hingeline')).toBe(false);
     expect(grants.isGranted('/etc/passwd')).toBe(false);

@@ -2,7 +2,7 @@ import { mkdtemp, readdir, readFile, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { parseAutosave, RecoveryStore, serializeAutosave } from '../../../app/main/recovery-store.ts';
+import { MAX_RECOVERIES, parseAutosave, RecoveryStore, serializeAutosave } from '../../../app/main/recovery-store.ts';
 
 let folder: string;
 const clock = () => new Date('2026-05-06T07:08:09.000Z');
@@ -83,6 +83,48 @@ describe('RecoveryStore', () => {
     await store.autosave('unsaved edits', 'Beam');
     expect(await store.setAsideAutosave()).toBe(true);
     expect((await store.takeRecovery())?.text).toBe('unsaved edits');
+  });
+
+  it('a second crash before the user answered keeps the first crash’s document, and offers both in turn', async () => {
+    const first = new RecoveryStore(folder, { now: clock });
+    await first.beginSession();
+    await first.autosave('work before the first crash', 'Frame A');
+    // Crash 1. The next session starts and sets that work aside; the question is on screen…
+    const second = new RecoveryStore(folder, { now: () => new Date('2026-05-07T00:00:00.000Z') });
+    await second.beginSession();
+    await second.autosave('work before the second crash', 'Frame B');
+    // …and the renderer crashes before the user answered (or the whole app does).
+    expect(await second.setAsideAutosave()).toBe(true);
+    const third = new RecoveryStore(folder, { now: clock });
+    await third.beginSession();
+    expect((await readdir(folder)).filter((n) => n.startsWith('recovered')).sort()).toEqual(['recovered-2.json', 'recovered.json']);
+    expect(await third.takeRecovery()).toMatchObject({ text: 'work before the first crash', name: 'Frame A' });
+    await third.clearRecovery();
+    expect(await third.takeRecovery()).toMatchObject({ text: 'work before the second crash', name: 'Frame B' });
+    await third.clearRecovery();
+    expect(await third.takeRecovery()).toBeNull();
+  });
+
+  it('keeps at most MAX_RECOVERIES unanswered documents, dropping the oldest', async () => {
+    const store = new RecoveryStore(folder, { now: clock });
+    await store.beginSession();
+    for (let i = 1; i <= MAX_RECOVERIES + 2; i++) {
+      await store.autosave(`crash ${i}`, 'Beam');
+      await store.setAsideAutosave();
+    }
+    expect((await readdir(folder)).filter((n) => n.startsWith('recovered'))).toHaveLength(MAX_RECOVERIES);
+    expect((await store.takeRecovery())?.text).toBe('crash 3');
+  });
+
+  it('skips an unreadable recovery and offers the next one', async () => {
+    const store = new RecoveryStore(folder, { now: clock });
+    await store.beginSession();
+    await store.autosave('first', 'A');
+    await store.setAsideAutosave();
+    await store.autosave('second', 'B');
+    await store.setAsideAutosave();
+    await writeFile(join(folder, 'recovered.json'), 'not json');
+    expect((await store.takeRecovery())?.text).toBe('second');
   });
 
   it('writes the autosave as a versioned envelope', async () => {

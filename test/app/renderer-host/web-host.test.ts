@@ -199,6 +199,39 @@ describe('web host autosave and recovery', () => {
     expect(await next.takeRecovery()).toBeNull();
   });
 
+  it('a second crash before the first was answered keeps both copies, offered oldest first', async () => {
+    const store = createMemoryStore();
+    const firstWindow = browserWindow();
+    const first = hostIn(firstWindow, { store }).host;
+    first.setDocumentState({ title: 'Frame A', dirty: true });
+    await first.autosave('work A');
+    // Tab 1 dies. Visit 2 sets its work aside and shows the question; the user has not answered…
+    const secondWindow = browserWindow();
+    secondWindow.localStorage.setItem(SESSION_MARKER_KEY, firstWindow.localStorage.getItem(SESSION_MARKER_KEY)!);
+    const second = hostIn(secondWindow, { store }).host;
+    expect((await second.takeRecovery())?.text).toBe('work A');
+    second.setDocumentState({ title: 'Frame B', dirty: true });
+    await second.autosave('work B');
+    // …and tab 2 dies too.
+    const thirdWindow = browserWindow();
+    thirdWindow.localStorage.setItem(SESSION_MARKER_KEY, secondWindow.localStorage.getItem(SESSION_MARKER_KEY)!);
+    const third = hostIn(thirdWindow, { store }).host;
+    expect(await third.takeRecovery()).toMatchObject({ text: 'work A', name: 'Frame A' });
+    await third.clearRecovery();
+    expect(await third.takeRecovery()).toMatchObject({ text: 'work B', name: 'Frame B' });
+    await third.clearRecovery();
+    expect(await third.takeRecovery()).toBeNull();
+  });
+
+  it('reads a recovery copy stored by an earlier version (one record, not a list)', async () => {
+    const store = createMemoryStore();
+    await store.set('recovered', { text: 'old', savedAt: '2026-01-01T00:00:00.000Z', name: 'Old' });
+    const { host } = hostIn(browserWindow(), { store });
+    expect((await host.takeRecovery())?.text).toBe('old');
+    await host.clearRecovery();
+    expect(await host.takeRecovery()).toBeNull();
+  });
+
   it('leaving with everything saved ends the visit cleanly; leaving with unsaved changes does not', async () => {
     const window = browserWindow();
     const store = createMemoryStore();

@@ -6,7 +6,7 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { demoProjectSI } from '../../../core/project/demo.ts';
 import { serializeProject } from '../../../core/project/file.ts';
 import { setMemberField } from '../../../renderer/src/project/edits.ts';
-import { AUTOSAVE_IDLE_MS, HISTORY_LIMIT, ProjectFileError, useDocumentStore } from '../../../renderer/src/stores/document.ts';
+import { AUTOSAVE_IDLE_MS, AUTOSAVE_MAX_WAIT_MS, HISTORY_LIMIT, ProjectFileError, useDocumentStore } from '../../../renderer/src/stores/document.ts';
 import { testEnvironment } from '../support.ts';
 
 afterEach(() => {
@@ -95,6 +95,23 @@ describe('unsaved changes', () => {
     await vi.advanceTimersByTimeAsync(1000);
     await vi.waitFor(() => expect(env.host.autosaves).toHaveLength(1));
     expect(JSON.parse(env.host.autosaves[0]!).members[0].span).toBe(8100);
+  });
+
+  it(`are autosaved at least every ${AUTOSAVE_MAX_WAIT_MS / 1000} s while editing never pauses, and never more often than every ${AUTOSAVE_IDLE_MS / 1000} s`, async () => {
+    vi.useFakeTimers();
+    const { env, store } = openSI();
+    const at: number[] = [];
+    const start = Date.now();
+    // An edit every second for 75 s: the idle autosave never comes.
+    for (let i = 1; i <= 75; i++) {
+      store.edit(`step ${i}`, (p) => setMemberField(p, 'MB-1', ['span'], 7200 + i));
+      await vi.advanceTimersByTimeAsync(1000);
+      while (at.length < env.host.autosaves.length) at.push(Date.now() - start);
+    }
+    expect(env.host.autosaves.length).toBeGreaterThanOrEqual(2);
+    expect(at[0]).toBeLessThanOrEqual(AUTOSAVE_MAX_WAIT_MS + 1000);
+    for (let i = 1; i < at.length; i++) expect(at[i]! - at[i - 1]!).toBeGreaterThanOrEqual(AUTOSAVE_IDLE_MS);
+    for (let i = 1; i < at.length; i++) expect(at[i]! - at[i - 1]!).toBeLessThanOrEqual(AUTOSAVE_MAX_WAIT_MS + 1000);
   });
 
   it('are not autosaved when there are none', async () => {

@@ -19,8 +19,9 @@ afterEach(() => {
   wrapper = null;
 });
 
+/** The shell needs no analysis results here: the workers read and write files but do not analyse. */
 async function app(seed: FakeHostSeed = {}) {
-  const env = testEnvironment(seed);
+  const env = testEnvironment(seed, { analyse: false });
   wrapper = mount(App, { attachTo: document.body, global: { plugins: [env.pinia], stubs: { ChartCanvas: true, MemberWorkspace: true } } });
   await flushPromises();
   return { env, wrapper, documentStore: useDocumentStore() };

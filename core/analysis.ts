@@ -53,9 +53,10 @@ export function sectionCache(project: Project): (id: string) => SectionAnalysis 
 /**
  * Analyses the members whose ids are given (all when omitted), in project order.
  * A defect inside one member's analysis is caught and reported on that member.
+ * `section` may be a `sectionCache` of the same project already used (e.g. to send the section
+ * curves ahead), so that no section is analysed twice.
  */
-export function analyzeMembers(project: Project, memberIds?: readonly string[], onProgress?: ProgressListener): MemberResult[] {
-  const section = sectionCache(project);
+export function analyzeMembers(project: Project, memberIds?: readonly string[], onProgress?: ProgressListener, section: (id: string) => SectionAnalysis | undefined = sectionCache(project)): MemberResult[] {
   const sectionIds = new Set(project.sections.map((s) => s.id));
   const wanted = memberIds ? new Set(memberIds) : undefined;
   const members = project.members.map((m, index) => ({ m, index })).filter(({ m }) => !wanted || wanted.has(m.id));

@@ -69,7 +69,8 @@ function invalid(member: BeamDefinition, errors: readonly Diagnostic[], sections
   return { result: unanalysedBeam(member, errors, sections), inputErrors: errors, capacity: null, converged: true };
 }
 
-function sectionResult(s: SectionAnalysis): SectionResult | null {
+/** What a member result shows of one section analysis (null for a section that could not be built). */
+export function sectionResult(s: SectionAnalysis): SectionResult | null {
   if (!s.model || !s.elastic) return null;
   return {
     sectionId: s.sectionId,

@@ -24,6 +24,7 @@ import type { CoveredItems, ItemDiagnostic, ItemList, WorkerReply } from '../wor
 import { useDocumentStore } from './document.ts';
 import { perfMark } from '../components/ids.ts';
 import type { MemberResult } from '../../../core/assessment/results.ts';
+import type { SectionResult } from '../../../core/member/results.ts';
 
 /** Delay between an edit and the re-analysis it causes while edits follow each other closely, ms (merges a burst of typing into one job). */
 export const AUTO_ANALYSIS_DELAY_MS = 12;
@@ -45,6 +46,11 @@ interface DetailEntry {
   readonly inputs: readonly unknown[];
 }
 
+interface SectionsEntry {
+  readonly sections: readonly SectionResult[];
+  readonly inputs: readonly unknown[];
+}
+
 export interface MemberKeyView {
   readonly key: MemberKeyResults;
   /** False when the member changed since these results were computed (shown as outdated). */
@@ -58,6 +64,12 @@ export interface MemberDetailView {
 
 const itemKey = (list: ItemList | 'project', id: string) => `${list}:${id}`;
 
+/** The same section results (ids, and the same curves end to end): the engine is deterministic, so equal inputs give equal curves. */
+function sameSections(a: readonly SectionResult[], b: readonly SectionResult[]): boolean {
+  const curveEnd = (c: SectionResult['sagging']) => (c ? `${c.points.length}:${c.points[c.points.length - 1]?.moment}:${c.points[c.points.length - 1]?.curvature}` : '');
+  return a.length === b.length && a.every((s, i) => s.sectionId === b[i]!.sectionId && curveEnd(s.sagging) === curveEnd(b[i]!.sagging) && curveEnd(s.hogging) === curveEnd(b[i]!.hogging));
+}
+
 export const useAnalysisStore = defineStore('analysis', () => {
   const documentStore = useDocumentStore();
   /**
@@ -66,8 +78,12 @@ export const useAnalysisStore = defineStore('analysis', () => {
    */
   const revision = ref(0);
   const diagnosticsRevision = ref(0);
+  /** Bumped when section curves arrive ahead of a member result: only the section views re-render. */
+  const sectionsRevision = ref(0);
   const keys = new Map<string, KeyEntry[]>();
   const details = new Map<string, DetailEntry>();
+  /** Section results sent ahead of the member result, for the member on screen. */
+  const previews = new Map<string, SectionsEntry>();
   const diagnostics = new Map<string, ItemDiagnostic[]>();
   /** Inputs of each member when it was last sent for analysis (or found analysed). */
   const considered = new Map<string, readonly unknown[]>();
@@ -121,6 +137,23 @@ export const useAnalysisStore = defineStore('analysis', () => {
     return { result: entry.result, current: sameInputs(entry.inputs, memberInputs(project, memberId)) };
   }
 
+  /**
+   * The section results (moment–curvature curves) of a member for its current inputs: those sent
+   * ahead of the member result while it is being analysed, else those of its current result;
+   * null while neither is there.
+   */
+  function sectionsOf(memberId: string): readonly SectionResult[] | null {
+    void revision.value;
+    void sectionsRevision.value;
+    const project = documentStore.project;
+    if (!project) return null;
+    const inputs = memberInputs(project, memberId);
+    const detail = details.get(memberId);
+    if (detail && sameInputs(detail.inputs, inputs)) return detail.result.sections;
+    const preview = previews.get(memberId);
+    return preview && sameInputs(preview.inputs, inputs) ? preview.sections : null;
+  }
+
   /** Diagnostics of an item; with `field`, only those of that field (exactly) or, with `prefix`, of fields under it. */
   function diagnosticsOf(list: ItemList | 'project', id: string, field?: string, prefix = false): ItemDiagnostic[] {
     void diagnosticsRevision.value;
@@ -153,8 +186,13 @@ export const useAnalysisStore = defineStore('analysis', () => {
     const entries = (keys.get(memberId) ?? []).filter((e) => !sameInputs(e.inputs, inputs));
     keys.set(memberId, [{ key, inputs }, ...entries].slice(0, KEY_HISTORY));
     if (detail) {
+      // The sections sent ahead were computed from the same inputs by the same engine: keep
+      // those objects, so that the charts drawn from them are not drawn a second time.
+      const preview = previews.get(memberId);
+      previews.delete(memberId);
+      const result = preview && sameInputs(preview.inputs, inputs) && sameSections(preview.sections, detail.sections) ? { ...detail, sections: preview.sections } : detail;
       details.delete(memberId);
-      details.set(memberId, { result: detail, inputs });
+      details.set(memberId, { result, inputs });
       while (details.size > DETAIL_CACHE_SIZE) {
         const oldest = [...details.keys()].find((id) => id !== focusedMemberId.value);
         if (oldest === undefined) break;
@@ -184,7 +222,22 @@ export const useAnalysisStore = defineStore('analysis', () => {
   /** Replies of a job; `urgent`: shown at once (the member being edited), else at the next frame. */
   function onReply(inputsAtSend: ReadonlyMap<string, readonly unknown[]>, progress: { done: number; total: number }, urgent = true) {
     return (reply: WorkerReply) => {
-      if (reply.type === 'member') remember(reply.memberId, reply.key, reply.detail, inputsAtSend.get(reply.memberId), urgent);
+      if (reply.type === 'member') {
+        const inputs = inputsAtSend.get(reply.memberId);
+        // Sections sent ahead in this job and left out of the result: put back (same analyses).
+        const ahead = reply.sectionsSent ? previews.get(reply.memberId) : undefined;
+        const usable = ahead && inputs && sameInputs(ahead.inputs, inputs);
+        // (Were they gone — the project was reset meanwhile — only the key results are kept.)
+        const detail = !reply.detail || !reply.sectionsSent ? reply.detail : usable ? { ...reply.detail, sections: ahead.sections } : null;
+        remember(reply.memberId, reply.key, detail, inputs, urgent);
+      }
+      else if (reply.type === 'sections') {
+        const inputs = inputsAtSend.get(reply.memberId);
+        if (!inputs) return;
+        previews.set(reply.memberId, { sections: reply.sections, inputs });
+        if (reply.memberId === focusedMemberId.value) perfMark('hl:analysis:sections');
+        sectionsRevision.value++;
+      }
       else if (reply.type === 'progress') {
         progress.done = reply.done;
         progress.total = reply.total;
@@ -407,6 +460,7 @@ export const useAnalysisStore = defineStore('analysis', () => {
     if (runningInteractive) engines().interactive.cancel(runningInteractive.id);
     keys.clear();
     details.clear();
+    previews.clear();
     diagnostics.clear();
     considered.clear();
     validated.clear();
@@ -428,6 +482,6 @@ export const useAnalysisStore = defineStore('analysis', () => {
 
   return {
     revision, diagnosticsRevision, focusedMemberId, batch, interactive, lastError, detailArrivals, outdatedCount, allDiagnostics,
-    keyOf, detailOf, diagnosticsOf, analyseAll, cancelAll, stateAt, resultsCsv, reset, schedule,
+    keyOf, detailOf, sectionsOf, diagnosticsOf, analyseAll, cancelAll, stateAt, resultsCsv, reset, schedule,
   };
 });

@@ -13,6 +13,7 @@ import type { Project } from '../../../core/project/types.ts';
 import type { MemberKeyResults } from '../../../core/project/key-results.ts';
 import type { SectionState } from '../../../core/section/results.ts';
 import type { MemberResult } from '../../../core/assessment/results.ts';
+import type { SectionResult } from '../../../core/member/results.ts';
 
 export type ItemList = 'materials' | 'sections' | 'members';
 
@@ -78,7 +79,18 @@ export type WorkerRequest =
   | { readonly type: 'csv'; readonly id: number; readonly project: Project };
 
 export type WorkerReply =
-  | { readonly type: 'member'; readonly id: number; readonly memberId: string; readonly key: MemberKeyResults; readonly detail: MemberResult | null }
+  /**
+   * A member analysed: key results, and the full result when asked for. `sectionsSent`: its
+   * sections went ahead in a `sections` reply of this job and are left out of `detail` (empty),
+   * so that the largest part of the result crosses to the page once.
+   */
+  | { readonly type: 'member'; readonly id: number; readonly memberId: string; readonly key: MemberKeyResults; readonly detail: MemberResult | null; readonly sectionsSent?: boolean }
+  /**
+   * The section results (moment–curvature) of the member on screen, sent before its member
+   * analysis: the section chart follows an edit without waiting for the load–deflection analysis.
+   * The same objects as the `sections` of the member result that follows (same inputs, same engine).
+   */
+  | { readonly type: 'sections'; readonly id: number; readonly memberId: string; readonly sections: readonly SectionResult[] }
   | { readonly type: 'progress'; readonly id: number; readonly done: number; readonly total: number; readonly memberId: string }
   | { readonly type: 'diagnostics'; readonly id: number; readonly diagnostics: readonly ItemDiagnostic[]; readonly covered: CoveredItems }
   | { readonly type: 'done'; readonly id: number; readonly elapsedMs: number }

@@ -43,6 +43,27 @@ describe('whole-project analysis', () => {
 });
 
 describe('after an edit', () => {
+  it('shows the section curves of the member on screen before its member result, and keeps them after', async () => {
+    const { documentStore, analysis } = await openAndAnalyse();
+    analysis.focusedMemberId = 'MB-1';
+    await until(() => analysis.detailOf('MB-1')?.current === true, 'full results of MB-1');
+    const sectionId = documentStore.project!.members.find((m) => m.id === 'MB-1')!.zones[0]!.sectionId;
+    const before = analysis.sectionsOf('MB-1')!;
+    documentStore.edit('Change height', (p) => setSectionField(p, sectionId, ['shape', 'height'], 550));
+    // New inputs: nothing current until the worker answers.
+    expect(analysis.sectionsOf('MB-1')).toBeNull();
+    await until(() => analysis.sectionsOf('MB-1') !== null, 'the section curves');
+    const early = analysis.sectionsOf('MB-1')!;
+    expect(early).not.toBe(before);
+    const afterEarly = analysis.detailOf('MB-1');
+    // The member result may still be the old one while the new section curves are already there.
+    if (afterEarly && !afterEarly.current) expect(afterEarly.result.sections).not.toBe(early);
+    await until(() => analysis.detailOf('MB-1')?.current === true, 'the new member result');
+    // The member result holds the very objects sent ahead: the chart is not drawn again for nothing.
+    expect(analysis.detailOf('MB-1')!.result.sections).toBe(early);
+    expect(analysis.sectionsOf('MB-1')).toBe(early);
+  }, 60_000);
+
   it('re-analyses only the edited member, and the member on screen with its full results', async () => {
     const { documentStore, analysis, env } = await openAndAnalyse();
     analysis.focusedMemberId = 'MB-2';

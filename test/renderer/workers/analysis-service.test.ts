@@ -3,6 +3,7 @@
  * full results only where asked, file parsing and writing, and errors as messages.
  */
 import { describe, expect, it } from 'vitest';
+import { analyzeMembers } from '../../../core/analysis.ts';
 import { demoProjectSI } from '../../../core/project/demo.ts';
 import { parseProject, serializeProject } from '../../../core/project/file.ts';
 import { createAnalysisService } from '../../../renderer/src/workers/analysis-service.ts';
@@ -40,6 +41,20 @@ describe('analyze', () => {
       expect(done).toBeGreaterThanOrEqual(1);
       expect(last.remaining).toEqual(ids.slice(done));
     }
+  }, 60_000);
+
+  it('sends the section curves of the member on screen first, equal to those of its member result, and not twice', async () => {
+    const { replies, service: s } = service();
+    await s.handle({ type: 'analyze', id: 9, project, indexMap: null, memberIds: ['MB-1', 'MB-2'], detailIds: ['MB-1'], validate: false, chunkSize: 4 });
+    expect(replies.map((r) => r.type).slice(0, 2)).toEqual(['sections', 'member']);
+    const sections = replies[0]!.type === 'sections' ? replies[0]!.sections : [];
+    const reply = replies[1]!;
+    expect(reply).toMatchObject({ type: 'member', memberId: 'MB-1', sectionsSent: true });
+    if (reply.type === 'member') expect(reply.detail!.sections).toEqual([]);
+    // The same as the member's own analysis gives.
+    expect(sections).toEqual(analyzeMembers(project, ['MB-1'])[0]!.sections);
+    // Only for the member whose full results are wanted.
+    expect(replies.filter((r) => r.type === 'sections')).toHaveLength(1);
   }, 60_000);
 
   it('ignores ids that are not in the project', async () => {

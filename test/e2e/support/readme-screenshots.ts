@@ -4,7 +4,8 @@
  *   npx tsx test/e2e/support/readme-screenshots.ts
  *
  * The demo project, 1440 × 900 pixels: the project overview, a member workspace with its charts,
- * and the strain and stress profile at a key point.
+ * the strain and stress profile at a key point, both bending directions side by side, and a member
+ * after the switch to SI units.
  */
 import { join } from 'node:path';
 import { ROOT, openApp, startE2e } from './environment.ts';
@@ -38,6 +39,19 @@ try {
   await page.getByTestId('section-profile').evaluate((element) => element.scrollIntoView({ block: 'end' }));
   await page.waitForTimeout(300);
   await page.screenshot({ path: join(OUT, 'section-profile.png') });
+
+  await page.locator('[data-testid=section-profile]').getByRole('button', { name: 'Close' }).click();
+  await page.getByTestId('direction-both').click();
+  await page.waitForTimeout(500);
+  await page.getByTestId('chart-moment-curvature').evaluate((element) => element.scrollIntoView({ block: 'center' }));
+  await page.waitForTimeout(300);
+  await page.screenshot({ path: join(OUT, 'moment-curvature-both.png') });
+
+  await page.getByTestId('units-si').click();
+  await page.getByTestId('member-workspace').evaluate((element) => element.parentElement!.scrollTo(0, 0));
+  await page.getByTestId('direction-sagging').click();
+  await page.waitForTimeout(600);
+  await page.screenshot({ path: join(OUT, 'member-si.png') });
   console.log(`screenshots written to ${OUT}`);
 } finally {
   await context.close();

@@ -65,8 +65,8 @@ Options:
   --bom             with --format csv: start with a UTF-8 byte-order mark, so that spreadsheet
                     programs read the units (kip·ft, φu/φy) as UTF-8
   --units SYSTEM    us or si (default: the project's display unit system)
-  --jobs N          number of worker threads (default: one per free core, at most one per
-                    eight members; 1 analyses in this thread)
+  --jobs N          number of worker threads (default: one per core, at most one per eight
+                    members; 1 analyses in this thread)
   -h, --help        show this help
 
 Problems in the file are printed to stderr; members with input errors are reported as such and

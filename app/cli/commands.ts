@@ -104,8 +104,8 @@ export async function runAnalysis(io: Io, project: Project, memberIds: readonly 
   const total = memberIds?.length ?? project.members.length;
   onProgress(0, total, '');
   let members: MemberResult[];
-  // Without --jobs: as many workers as there are free cores (none when the machine is busy or the
-  // project small: then this thread analyses, which is never slower than one worker).
+  // Without --jobs: one worker per core (none for a small project: this thread analyses, which is
+  // never slower than a single worker).
   const workers = jobs ?? defaultWorkerCount(total);
   try {
     members = workers === 1

@@ -14,19 +14,12 @@ describe('partition', () => {
 });
 
 describe('defaultWorkerCount', () => {
-  it('is the number of free cores, one per eight members at most, and at least one', () => {
-    expect(defaultWorkerCount(1000, 2, 0)).toBe(2);
-    expect(defaultWorkerCount(1000, 8, 0.3)).toBe(8);
-    expect(defaultWorkerCount(20, 8, 0)).toBe(2);
-    expect(defaultWorkerCount(1, 8, 0)).toBe(1);
-    expect(defaultWorkerCount(0, 8, 0)).toBe(1);
-  });
-
-  it('falls back to this thread when other work already keeps the cores busy', () => {
-    // Two cores, one busy: one free core, so no second thread.
-    expect(defaultWorkerCount(1000, 2, 1)).toBe(1);
-    expect(defaultWorkerCount(1000, 2, 9)).toBe(1);
-    expect(defaultWorkerCount(1000, 8, 5.2)).toBe(3);
+  it('is the number of cores, one per eight members at most, and at least one (1: this thread)', () => {
+    expect(defaultWorkerCount(1000, 2)).toBe(2);
+    expect(defaultWorkerCount(1000, 8)).toBe(8);
+    expect(defaultWorkerCount(20, 8)).toBe(2);
+    expect(defaultWorkerCount(7, 8)).toBe(1);
+    expect(defaultWorkerCount(0, 8)).toBe(1);
   });
 });
 

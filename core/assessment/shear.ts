@@ -39,7 +39,7 @@ import { faces } from '../section/state.ts';
 import { stripWidthAt } from '../section/width-profile.ts';
 import { buildBeamModel, type ZoneResponse } from '../member/beam-model.ts';
 import type { BeamDefinition, LoadFactors, MemberLoad, SupportType } from '../member/definition.ts';
-import { solveStatic } from '../member/nonlinear.ts';
+import { solveStatic } from '../member/static.ts';
 import { plainConcreteResponse } from '../member/section-response.ts';
 import { releasedMoment, toStaticLoad, totalLoad, type StaticLoad } from '../member/statics.ts';
 

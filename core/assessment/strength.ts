@@ -7,7 +7,7 @@
 import type { CodeBasis } from '../materials/specs.ts';
 import { buildBeamModel, type ZoneResponse } from '../member/beam-model.ts';
 import type { BeamDefinition, MemberLoad } from '../member/definition.ts';
-import { solveStatic } from '../member/nonlinear.ts';
+import { solveStatic } from '../member/static.ts';
 import { plainConcreteResponse } from '../member/section-response.ts';
 import { releasedMoment, toStaticLoad, type StaticLoad } from '../member/statics.ts';
 import type { SectionAnalysis } from '../section/analyze.ts';

@@ -16,7 +16,7 @@ import { elasticProperties } from '../section/elastic.ts';
 import type { SectionModel, BendingDirection } from '../section/model.ts';
 import type { ServiceSettings, SupportType, DeflectionLimitCase } from './definition.ts';
 import { buildBeamModel, type BeamModel, type ZoneResponse } from './beam-model.ts';
-import { solveStatic, type StaticState } from './nonlinear.ts';
+import { solveStatic, type StaticState } from './static.ts';
 import { releasedMoment, type StaticLoad } from './statics.ts';
 import type { SectionResponse, ValueAndSlope } from './section-response.ts';
 import {

@@ -1,9 +1,12 @@
 /**
- * Bracketed root finding (Brent's method): robust for any continuous function with a sign change
- * on [a, b], superlinear near a simple root. Used for neutral-axis equilibrium and for locating
- * events (cracking, yield, crushing) along a moment–curvature curve.
- *
- * @see R. P. Brent, "Algorithms for Minimization without Derivatives", 1973, ch. 4.
+ * Bracketed root finding:
+ *  - Brent's method (brentRoot): robust for any continuous function with a sign change on [a, b],
+ *    superlinear near a simple root. Used for neutral-axis equilibrium and for locating events
+ *    (cracking, yield, crushing) along a moment–curvature curve.
+ *    @see R. P. Brent, "Algorithms for Minimization without Derivatives", 1973, ch. 4.
+ *  - regula falsi with the Illinois modification on solved states (regulaFalsiEvent): where each
+ *    evaluation is a nonlinear solve started from the nearest state, e.g. the load at which a
+ *    member event happens. @see Dowell & Jarratt (1971), BIT 11, 168–174 (from memory).
  */
 export interface RootResult {
   /** The root estimate (last iterate). */
@@ -15,7 +18,7 @@ export interface RootResult {
 }
 
 export interface RootOptions {
-  /** Absolute tolerance on x (default 1e-14 relative to |x|, plus this). */
+  /** Absolute tolerance on x (default 1e-15); the convergence test adds 2·ε·|x| to half of it. */
   readonly xTolerance?: number;
   /** Stop as soon as |f(x)| ≤ fTolerance (default 0: rely on xTolerance). */
   readonly fTolerance?: number;
@@ -137,4 +140,54 @@ export function bracketRoot(
     h *= growth;
   }
   return undefined;
+}
+
+/** One end of a bracket of regulaFalsiEvent: the parameter and the state solved there. */
+export interface SolvedPoint<S> {
+  readonly x: number;
+  readonly state: S;
+}
+
+/**
+ * The state where an event function g crosses zero between two solved states (g(a) < 0 ≤ g(b)),
+ * by regula falsi with the Illinois modification (superlinear, always bracketed). Each new point is
+ * solved from the bracket's lower end; a failed solve ends the search. Returns the bracketing point
+ * on the event side (g ≥ 0): at the latest once g < `closeEnough` (default 1e-5 — event functions
+ * are ratios to thresholds known to five figures at best, and flat stretches would otherwise make
+ * the search crawl), or once the bracket is narrower than xTolerance(x of its upper end).
+ */
+export function regulaFalsiEvent<S>(
+  a: SolvedPoint<S>,
+  b: SolvedPoint<S>,
+  solve: (x: number, from: S) => S | undefined,
+  g: (state: S) => number,
+  options: { readonly maxIterations: number; readonly xTolerance: (upper: number) => number; readonly closeEnough?: number },
+): SolvedPoint<S> {
+  const closeEnough = options.closeEnough ?? 1e-5;
+  let lo = a;
+  let hi = b;
+  let gLo = g(lo.state);
+  let gHi = g(hi.state);
+  let side = 0;
+  for (let it = 0; it < options.maxIterations && hi.x - lo.x > options.xTolerance(hi.x); it++) {
+    let t = gLo < 0 && gHi > 0 ? -gLo / (gHi - gLo) : 0.5;
+    if (!(t > 0.001 && t < 0.999)) t = 0.5;
+    const x = lo.x + t * (hi.x - lo.x);
+    const state = solve(x, lo.state);
+    if (state === undefined) break;
+    const gx = g(state);
+    if (gx >= 0) {
+      hi = { x, state };
+      gHi = gx;
+      if (side === 1) gLo /= 2;
+      side = 1;
+      if (gx < closeEnough) break;
+    } else {
+      lo = { x, state };
+      gLo = gx;
+      if (side === -1) gHi /= 2;
+      side = -1;
+    }
+  }
+  return hi;
 }

@@ -9,7 +9,7 @@ import { benchProject } from '../fixtures/bench-sections.ts';
 import { sectionCache } from '../../core/analysis.ts';
 import { buildBeamModel } from '../../core/member/beam-model.ts';
 import { zoneResponse } from '../../core/member/zones.ts';
-import { capacityCurve } from '../../core/member/nonlinear.ts';
+import { capacityCurve } from '../../core/member/capacity.ts';
 import { releasedMoment } from '../../core/member/statics.ts';
 
 const project = benchProject();

@@ -6,7 +6,7 @@ import { describe, expect, it } from 'vitest';
 import { testConcrete, testSteel } from '../fixtures/simple-materials.ts';
 import { fixedResolver } from '../fixtures/sections.ts';
 import { beamOf, fieldOf } from '../fixtures/beams.ts';
-import { capacityCurve } from '../../core/member/nonlinear.ts';
+import { capacityCurve } from '../../core/member/capacity.ts';
 import type { SupportType } from '../../core/member/definition.ts';
 import type { SectionDefinition } from '../../core/section/definition.ts';
 import { nominalYieldDeflection } from '../../core/member/analyze.ts';

@@ -6,7 +6,7 @@ import { describe, expect, it } from 'vitest';
 import { testConcrete, testSteel } from '../../fixtures/simple-materials.ts';
 import { fixedResolver } from '../../fixtures/sections.ts';
 import { beamOf, fieldOf } from '../../fixtures/beams.ts';
-import { solveStatic } from '../../../core/member/nonlinear.ts';
+import { solveStatic } from '../../../core/member/static.ts';
 import type { SectionDefinition } from '../../../core/section/definition.ts';
 import type { SupportType } from '../../../core/member/definition.ts';
 

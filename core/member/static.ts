@@ -1,0 +1,44 @@
+/**
+ * Equilibrium and deflected shape under a fixed load, without plastic hinges: the service states
+ * and the elastic analyses of the strength checks.
+ * Internal units: mm, N·mm, 1/mm.
+ */
+import type { BeamModel } from './beam-model.ts';
+import { deflectionShape } from './deflection.ts';
+import { Equations, newton, type LoadingFields } from './equations.ts';
+
+export interface StaticState {
+  readonly converged: boolean;
+  readonly redundants: readonly number[];
+  readonly moment: Float64Array;
+  readonly curvature: Float64Array;
+  readonly deflection: Float64Array;
+  /** Largest |M|/M′y over the stations (> 1: the load passes first yield somewhere). */
+  readonly yieldRatio: number;
+  /** Largest |M|/Mpeak over the stations (> 1: the section cannot carry the load). */
+  readonly peakRatio: number;
+}
+
+/**
+ * Equilibrium and deflected shape under a fixed load (no plastic hinges): the service states.
+ * @param fields released-structure moments of the load at every station, N·mm
+ */
+export function solveStatic(beam: BeamModel, fields: Float64Array): StaticState {
+  const loads: LoadingFields = { constant: fields, pattern: new Float64Array(fields.length), constantTotal: 0, patternTotal: 0 };
+  const eq = new Equations(beam, loads);
+  const res = newton(eq, [], [], false, { redundants: new Array(beam.redundants.length).fill(0), lambda: 0, rotations: [] });
+  const moment = Float64Array.from(eq.moments(res.redundants, 0));
+  const curvature = new Float64Array(moment.length);
+  const deflection = deflectionShape(beam, moment, [], curvature);
+  let yieldRatio = 0;
+  let peakRatio = 0;
+  for (let i = 0; i < moment.length; i++) {
+    const m = moment[i]!;
+    const zone = beam.zones[beam.segmentZone[Math.min(i, moment.length - 2)]!]!;
+    const resp = m >= 0 ? zone.sagging : zone.hogging;
+    if (resp.firstYieldMoment) yieldRatio = Math.max(yieldRatio, Math.abs(m) / resp.firstYieldMoment);
+    if (resp.peakMoment > 0) peakRatio = Math.max(peakRatio, Math.abs(m) / resp.peakMoment);
+  }
+  return { converged: res.converged, redundants: res.redundants, moment, curvature, deflection, yieldRatio, peakRatio };
+}
+

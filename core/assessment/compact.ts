@@ -14,7 +14,10 @@ import type { BendingDirection } from '../section/model.ts';
 import type { MomentCurvatureResult } from '../section/results.ts';
 import { flexuralDesignResistance } from './resistance.ts';
 import type { CurveSummary, FlexuralCheck, MemberResult, SchemeComparison, VariantResult } from './results.ts';
-import { combinedLoads, elasticSupportMoments, memberForcesAt, memberLoadSets, type ElasticZone, type ShearResult } from './shear.ts';
+import { combinedLoads, memberLoadSets } from './combinations.ts';
+import { elasticSupportMoments, type ElasticZone } from './demand.ts';
+import { memberForcesAt } from '../member/statics.ts';
+import type { ShearResult } from './shear.ts';
 import { strengthCombination } from './combinations.ts';
 import type { Setup, VariantRun } from './variant.ts';
 

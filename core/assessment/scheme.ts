@@ -20,7 +20,9 @@ import { elasticProperties, type CrackedProperties } from '../section/elastic.ts
 import type { BendingDirection, DiscreteElement } from '../section/model.ts';
 import { compactOf, compareVariants, flexuralCheck } from './compact.ts';
 import type { SchemeResult, VariantResult } from './results.ts';
-import { combinedLoads, elasticSupportMoments, memberForcesAt, memberLoadSets, type ElasticZone } from './shear.ts';
+import { combinedLoads, memberLoadSets } from './combinations.ts';
+import { elasticSupportMoments, type ElasticZone } from './demand.ts';
+import { memberForcesAt } from '../member/statics.ts';
 import { librarySections, runVariant, type Setup, type VariantRun } from './variant.ts';
 
 /** The beam a scheme strengthens: its run, materials and (for an as-found beam) its derivation. */

@@ -8,8 +8,8 @@ import type { CodeBasis } from '../materials/specs.ts';
 import { buildBeamModel, type ZoneResponse } from '../member/beam-model.ts';
 import type { BeamDefinition, MemberLoad } from '../member/definition.ts';
 import { solveStatic } from '../member/static.ts';
-import { plainConcreteResponse } from '../member/section-response.ts';
 import { releasedMoment, toStaticLoad, type StaticLoad } from '../member/statics.ts';
+import { elasticZone } from '../member/zones.ts';
 import type { SectionAnalysis } from '../section/analyze.ts';
 import type { QuantityText } from '../units/text.ts';
 import { strengthCombination } from './combinations.ts';
@@ -74,12 +74,7 @@ export function memberStrength(member: BeamDefinition, analyses: readonly Sectio
     ...byCase(['superimposed'], factors.superimposed),
     ...byCase(['live'], factors.live),
   ];
-  const dummy = { effectiveDepth: 1, barDiameter: 0, yieldStress: 1, ultimateStress: 1 };
-  const elasticZones: ZoneResponse[] = member.zones.map((z, i) => {
-    const s = analyses[i]!;
-    const lin = plainConcreteResponse(s.codeModulus * s.elastic!.grossInertia, Number.MAX_VALUE);
-    return { sectionId: z.sectionId, from: z.from, to: z.to, sagging: lin, hogging: lin, hingeData: { sagging: dummy, hogging: dummy } };
-  });
+  const elasticZones: ZoneResponse[] = member.zones.map((z, i) => elasticZone(z.sectionId, z.from, z.to, analyses[i]!.codeModulus * analyses[i]!.elastic!.grossInertia));
   const elasticBeam = buildBeamModel(member.supports, span, elasticZones, extraPoints, segments);
   const demandState = solveStatic(elasticBeam, Float64Array.from(elasticBeam.x, (x) => releasedMoment(elasticBeam.support, span, factored, x)));
   let sag = 0;

@@ -17,7 +17,8 @@ import type { SectionDefinition } from '../section/definition.ts';
 import { SI_TEXT, type QuantityText } from '../units/text.ts';
 import { strengthCombination } from './combinations.ts';
 import type { MemberResult } from './results.ts';
-import { memberShear, type ShearResult, type ShearZone } from './shear.ts';
+import { memberShear, type ShearResult } from './shear.ts';
+import type { ShearZone } from './shear-section.ts';
 import { memberStrength } from './strength.ts';
 
 /** How the sections of a variant are analysed (the project's analysis settings). */

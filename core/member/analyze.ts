@@ -19,8 +19,7 @@ import type { BeamResult, SectionResult } from './results.ts';
 import { serviceDeflections, type ServiceZone } from './service.ts';
 import { releasedMoment, toStaticLoad, totalLoad, type StaticLoad } from './statics.ts';
 import { validateMember } from './validate.ts';
-import { zoneResponse } from './zones.ts';
-import { plainConcreteResponse } from './section-response.ts';
+import { elasticZone, zoneResponse } from './zones.ts';
 
 export interface MemberContext {
   readonly code: CodeBasis;
@@ -143,11 +142,7 @@ export function analyzeBeam(member: BeamDefinition, context: MemberContext): Bea
   const constantLoads = proportional ? [] : deadLoads;
   // Control point of the load–deflection curve: where the elastic deflection under the pattern
   // peaks, found on a fine elastic model and made a station of the analysis model.
-  const elasticResponses: ZoneResponse[] = member.zones.map((z, i) => {
-    const s = analyses[i]!;
-    const lin = plainConcreteResponse(s.codeModulus * s.elastic!.grossInertia, Number.MAX_VALUE);
-    return { ...responses[i]!, sagging: lin, hogging: lin };
-  });
+  const elasticResponses: ZoneResponse[] = member.zones.map((z, i) => elasticZone(z.sectionId, z.from, z.to, analyses[i]!.codeModulus * analyses[i]!.elastic!.grossInertia));
   const probeBeam = buildBeamModel(member.supports, span, elasticResponses, extraPoints, 240);
   const probe = solveStatic(probeBeam, fieldOf(probeBeam, patternLoads.length > 0 ? patternLoads : deadLoads));
   const controlAt = Math.round(peakDeflectionPosition(probeBeam.x, probe.deflection) * 10) / 10;

@@ -107,3 +107,46 @@ export function fixedEndMoments(span: number, loads: readonly StaticLoad[]): { l
   }
   return { left, right };
 }
+
+/**
+ * Shear of the released structure at x, N (V = dM/dx, sagging-positive moments): simple span
+ * V = RA − loads left of x; cantilever (fixed at 0) V = loads right of x. `side` picks the value
+ * just left or right of x where a point load sits there.
+ */
+export function releasedShear(support: SupportType, span: number, loads: readonly StaticLoad[], x: number, side: 'left' | 'right'): number {
+  if (support === 'cantilever') {
+    let v = 0;
+    for (const l of loads) {
+      if (l.kind === 'point') {
+        if (l.a > x || (side === 'left' && l.a === x)) v += l.p;
+      } else {
+        const a = Math.max(l.from, x);
+        if (l.to > a) v += l.w * (l.to - a);
+      }
+    }
+    return v;
+  }
+  let reaction = 0;
+  for (const l of loads) {
+    if (l.kind === 'point') reaction += (l.p * (span - l.a)) / span;
+    else reaction += (l.w * (l.to - l.from) * (span - (l.from + l.to) / 2)) / span;
+  }
+  let v = reaction;
+  for (const l of loads) {
+    if (l.kind === 'point') {
+      if (l.a < x || (side === 'right' && l.a === x)) v -= l.p;
+    } else {
+      const b = Math.min(l.to, x);
+      if (b > l.from) v -= l.w * (b - l.from);
+    }
+  }
+  return v;
+}
+
+/** Moment (N·mm) and shear (N) at x for released loads plus support moments (sagging positive). */
+export function memberForcesAt(support: SupportType, span: number, loads: readonly StaticLoad[], ends: { left: number; right: number }, x: number, side: 'left' | 'right'): { moment: number; shear: number } {
+  const m0 = releasedMoment(support, span, loads, x);
+  const v0 = releasedShear(support, span, loads, x, side);
+  if (support === 'cantilever') return { moment: m0, shear: v0 };
+  return { moment: m0 + ends.left * (1 - x / span) + (ends.right * x) / span, shear: v0 + (ends.right - ends.left) / span };
+}

@@ -9,6 +9,18 @@ import { tensionSteel } from '../section/moment-curvature.ts';
 import type { HingeSectionData, ZoneResponse } from './beam-model.ts';
 import { plainConcreteResponse, sectionResponse, type SectionResponse } from './section-response.ts';
 
+/** Hinge data of a zone that never forms a hinge (elastic analyses). */
+const NO_HINGE: HingeSectionData = { effectiveDepth: 1, barDiameter: 0, yieldStress: 1, ultimateStress: 1 };
+
+/**
+ * A linear-elastic zone of flexural stiffness EI (N·mm²) in both directions, which never cracks or
+ * yields: the elastic analyses of the strength checks and of the control point.
+ */
+export function elasticZone(sectionId: string, from: number, to: number, stiffness: number): ZoneResponse {
+  const lin = plainConcreteResponse(stiffness, Number.MAX_VALUE);
+  return { sectionId, from, to, sagging: lin, hogging: lin, hingeData: { sagging: NO_HINGE, hogging: NO_HINGE } };
+}
+
 /** Effective depth, main bar diameter, fy and fu of the tension steel for a direction. */
 export function hingeSectionData(model: SectionModel, direction: BendingDirection): HingeSectionData {
   // Hinge lengths depend on the main bars (strain penetration, hardening): bonded plates added by a

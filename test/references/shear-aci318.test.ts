@@ -4,7 +4,7 @@
  *   two-leg 10 mm stirrups at 200 mm (Av = 157.08 mm²), fyt = 420 MPa, no axial force.
  */
 import { describe, expect, it } from 'vitest';
-import { ACI_SHEAR_PHI, aciConcreteShear, aciMinimumShearReinforcement, aciShearStrength, aciSizeEffectFactor, aciStirrupShear } from '../../core/assessment/shear.ts';
+import { ACI_SHEAR_PHI, aciConcreteShear, aciMinimumShearReinforcement, aciShearStrength, aciSizeEffectFactor, aciStirrupShear } from '../../core/assessment/shear-aci.ts';
 import { convertUnit } from '../../core/units/convert.ts';
 
 const bw = 350;

@@ -4,7 +4,7 @@
  *   two-leg 8 mm stirrups at 200 mm (Asw = 100.53 mm²), fywk = 500 MPa; γc = 1.5, γs = 1.15.
  */
 import { describe, expect, it } from 'vitest';
-import { enCompressionChordFactor, enConcreteShear, enMaximumShear, enMinimumShearStress, enOptimalStrutAngle, enShearSizeFactor, enShearStrength, enStirrupShear, enStrutReductionFactor } from '../../core/assessment/shear.ts';
+import { enCompressionChordFactor, enConcreteShear, enMaximumShear, enMinimumShearStress, enOptimalStrutAngle, enShearSizeFactor, enShearStrength, enStirrupShear, enStrutReductionFactor } from '../../core/assessment/shear-en.ts';
 
 const bw = 300;
 const d = 550;

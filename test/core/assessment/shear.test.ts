@@ -4,7 +4,10 @@
  */
 import { describe, expect, it } from 'vitest';
 import { analyzeProject, sectionCache } from '../../../core/analysis.ts';
-import { elasticSupportMoments, memberShear, releasedShear, type ShearZone } from '../../../core/assessment/shear.ts';
+import { elasticSupportMoments } from '../../../core/assessment/demand.ts';
+import { memberShear } from '../../../core/assessment/shear.ts';
+import type { ShearZone } from '../../../core/assessment/shear-section.ts';
+import { releasedShear } from '../../../core/member/statics.ts';
 import { materialLibrary } from '../../../core/materials/library.ts';
 import type { Project, MemberDefinition } from '../../../core/project/types.ts';
 import { member, smallProject } from '../../fixtures/projects.ts';

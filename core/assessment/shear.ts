@@ -32,7 +32,7 @@ import type { CodeBasis } from '../materials/specs.ts';
 import type { BeamDefinition, LoadFactors } from '../member/definition.ts';
 import { memberForcesAt, releasedMoment, totalLoad } from '../member/statics.ts';
 import type { BendingDirection, DiscreteElement } from '../section/model.ts';
-import { tensionSteel } from '../section/moment-curvature.ts';
+import { tensionSteel } from '../section/model.ts';
 import { SI_TEXT, type QuantityText } from '../units/text.ts';
 import { combinedLoads, memberLoadSets, scaleLoad } from './combinations.ts';
 import { elasticSupportMoments, type ElasticZone } from './demand.ts';

@@ -5,7 +5,7 @@
 import type { SectionModel, BendingDirection } from '../section/model.ts';
 import type { ElasticProperties } from '../section/elastic.ts';
 import type { MomentCurvatureResult } from '../section/results.ts';
-import { tensionSteel } from '../section/moment-curvature.ts';
+import { tensionSteel } from '../section/model.ts';
 import type { HingeSectionData, ZoneResponse } from './beam-model.ts';
 import { plainConcreteResponse, sectionResponse, type SectionResponse } from './section-response.ts';
 

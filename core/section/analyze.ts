@@ -18,7 +18,8 @@ import { buildSectionModel, type SectionAdditions } from './build.ts';
 import type { SectionDefinition } from './definition.ts';
 import { elasticProperties, type ElasticProperties } from './elastic.ts';
 import type { BendingDirection, SectionModel } from './model.ts';
-import { momentCurvature, tensionSteel, type MomentCurvatureOptions } from './moment-curvature.ts';
+import { momentCurvature, type MomentCurvatureOptions } from './moment-curvature.ts';
+import { tensionSteel } from './model.ts';
 import type { MomentCurvatureResult } from './results.ts';
 import { withMaterials } from './transform.ts';
 

@@ -83,3 +83,13 @@ export type BendingDirection = 'sagging' | 'hogging';
 export function directionSign(direction: BendingDirection): 1 | -1 {
   return direction === 'sagging' ? 1 : -1;
 }
+
+/** Steel elements (bars and plates, not FRP) with a yield point. */
+export function isSteel(e: DiscreteElement): boolean {
+  return (e.kind === 'bar' || e.kind === 'plate') && e.material.yieldStrain !== undefined;
+}
+
+/** Tension-side steel for a direction: below the centroid for sagging, above it for hogging. */
+export function tensionSteel(model: SectionModel, direction: BendingDirection): DiscreteElement[] {
+  return model.elements.filter((e) => isSteel(e) && (direction === 'sagging' ? e.depth > model.centroidDepth : e.depth < model.centroidDepth));
+}

@@ -3,6 +3,7 @@
  * back as usage errors with a message and the help topic to point to.
  */
 import { parseArgs } from 'node:util';
+import { RESULTS_CAUTION } from '../../core/assessment/results.ts';
 import type { UnitSystem } from '../../core/project/types.ts';
 
 /** Exit codes (docs/cli.md). */
@@ -50,7 +51,7 @@ Exit codes: 0 ok; 1 problems found (validation errors, failing checks); 2 usage 
 file that cannot be read or written; 3 feature not available in this installation;
 4 internal error (please report); 130 stopped with Ctrl+C.
 
-Results are for review by a qualified engineer and defer to local codes and licensed practice.`;
+${RESULTS_CAUTION}`;
 
 const HELP: Readonly<Record<(typeof COMMANDS)[number], string>> = {
   analyze: `Usage: hingeline analyze FILE [options]

@@ -9,13 +9,13 @@ import type { ProjectResults } from '../../core/analysis.ts';
 import { memberKeyResults, type MemberKeyResults } from '../../core/project/key-results.ts';
 import { formatDiagnostic } from '../../core/project/validate.ts';
 import type { Project, UnitSystem } from '../../core/project/types.ts';
-import { formatFixed, formatNumber, NOT_A_VALUE, toDisplay, unitLabel, type Quantity, type UnitId, type UnitSystem as DisplaySystem } from '../../core/units/index.ts';
+import { displaySystem, formatFixed, formatNumber, NOT_A_VALUE, toDisplay, unitLabel, type Quantity, type UnitId } from '../../core/units/index.ts';
 import { RESULTS_CAUTION } from '../shared/about.ts';
 import type { MemberResult } from '../../core/assessment/results.ts';
 
 export { RESULTS_CAUTION };
 
-const display = (system: UnitSystem): DisplaySystem => (system === 'us' ? 'US' : 'SI');
+const display = displaySystem;
 
 /** Words for a member status. */
 export const STATUS_WORDS: Readonly<Record<MemberResult['status'], string>> = {

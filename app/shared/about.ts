@@ -1,8 +1,9 @@
 /** Texts of the About box. Node-free. */
 
-/** The caution every result-bearing surface carries (see RULES.md). */
-export const RESULTS_CAUTION =
-  'Results are for review by a qualified engineer and defer to local codes and licensed practice.';
+import { RESULTS_CAUTION } from '../../core/assessment/results.ts';
+
+/** The caution every result-bearing surface carries (written once, in core). */
+export { RESULTS_CAUTION };
 
 export interface AboutVersions {
   readonly app: string;

@@ -13,6 +13,9 @@ import type { BendingDirection } from '../section/model.ts';
 import type { KeyPointName, UltimateCause } from '../section/results.ts';
 import type { ShearResult } from './shear.ts';
 
+/** The caution every surface that shows results carries: the app, the command line and the report. */
+export const RESULTS_CAUTION = 'Results are for review by a qualified engineer and defer to local codes and licensed practice.';
+
 export type MemberStatus = 'ok' | 'check-fails' | 'not-converged' | 'input-error';
 
 export interface StrengthCheck {

@@ -97,7 +97,7 @@ export interface MemberShearInput {
   /** Strength combination factors and their description. */
   readonly factors: LoadFactors;
   readonly combination: string;
-  /** Stations along the span (default 200). */
+  /** Equal segments along the span (the project setting `stations`; 200 when omitted). */
   readonly segments?: number;
   /** γo on the section peak moment for the mechanism (default 1.0). */
   readonly overstrengthFactor?: number;

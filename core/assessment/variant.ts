@@ -14,6 +14,7 @@ import type { AddedItem, Library } from '../retrofit/types.ts';
 import { analyzeSection, type SectionAnalysis } from '../section/analyze.ts';
 import type { SectionAdditions } from '../section/build.ts';
 import type { SectionDefinition } from '../section/definition.ts';
+import type { BilinearMethod } from '../section/results.ts';
 import { SI_TEXT, type QuantityText } from '../units/text.ts';
 import { strengthCombination } from './combinations.ts';
 import type { MemberResult } from './results.ts';
@@ -24,7 +25,7 @@ import { memberStrength } from './strength.ts';
 /** How the sections of a variant are analysed (the project's analysis settings). */
 export interface SectionSettings {
   readonly momentDropFraction: number;
-  readonly bilinearMethod: 'priestley-2007' | 'equal-energy';
+  readonly bilinearMethod: BilinearMethod;
 }
 
 /** What every variant of a member shares. */

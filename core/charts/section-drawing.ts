@@ -5,13 +5,13 @@
  * width and height in points (1 pt = 1/72 in), as in the report; the app may show it at any size.
  */
 import type { SectionDefinition } from '../section/definition.ts';
-import { layerArea, layerDiameter } from '../section/definition.ts';
-import { barPositions, hoopCentreline, shapeHeight, webExtent } from '../section/build.ts';
-import { shapeOutline, type Point } from '../section/shapes.ts';
+import { layerArea } from '../section/definition.ts';
+import type { Point } from '../section/shapes.ts';
 import { formatQuantity } from '../units/format.ts';
 import { PALETTE } from './palette.ts';
+import { sectionFigure, spreadLabels } from './section-geometry.ts';
 import type { UnitsInput } from './types.ts';
-import { finite, resolveUnits, unitFor } from './units.ts';
+import { resolveUnits, unitFor } from './units.ts';
 
 export interface SectionDrawingOptions {
   /** Largest width and height of the whole drawing (with dimensions and labels), points. Defaults 240 × 240. */
@@ -70,31 +70,22 @@ export function sectionDrawingSvg(definition: SectionDefinition, unitsInput: Uni
   const length = (mm: number) => formatQuantity('sectionLength', mm, units.system, { unit: lengthUnit, ...((lengthUnit ?? 'mm') === 'mm' && units.system === 'SI' && Math.abs(mm - Math.round(mm)) < 1e-6 ? { decimals: 0 } : {}) });
   const area = (mm2: number) => formatQuantity('area', mm2, units.system, { unit: unitFor('area', units) });
 
-  const { outline, voids } = shapeOutline(definition.shape);
-  const all = [...outline, ...voids.flat()];
-  const xs = all.map((p) => p.x);
-  const ys = all.map((p) => p.y);
-  const valid = all.length >= 3 && xs.every(finite) && ys.every(finite);
-  const xMin = valid ? Math.min(...xs) : 0;
-  const xMax = valid ? Math.max(...xs) : 0;
-  const height = valid ? shapeHeight(definition.shape) : 0;
-  const width = xMax - xMin;
-  if (!valid || !(width > 0) || !(height > 0)) {
+  const figure = sectionFigure(definition);
+  if (!figure) {
     const svg = `<svg xmlns="http://www.w3.org/2000/svg" width="${maxWidth}" height="40" viewBox="0 0 ${maxWidth} 40"><text x="4" y="20" font-family="${escapeXml(family)}" font-size="${font}" fill="${PALETTE.ink}">The section outline cannot be drawn (no area).</text></svg>`;
     return { svg, width: maxWidth, height: 40, scale: null, scaleText: 'not to scale' };
   }
 
+  const { outline, voids, xMin, xMax, width, height, web } = figure;
   // Layer labels and their widths decide the right margin.
-  const layers = (definition.bars ?? []).map((layer, i) => {
-    const diameter = layerDiameter(layer);
+  const layers = figure.layers.map(({ layer, index, diameter, positions }) => {
     const sized = layer.count !== undefined && layer.diameter !== undefined;
-    const text = `${layer.label ?? `layer ${i + 1}`}: ${sized ? `${layer.count} × ${length(layer.diameter!)}` : 'area'} (${area(layerArea(layer))})`;
-    return { layer, diameter, sized, text };
-  }).filter((l) => finite(l.layer.depth) && finite(l.diameter) && l.diameter > 0);
+    const text = `${layer.label ?? `layer ${index + 1}`}: ${sized ? `${layer.count} × ${length(layer.diameter!)}` : 'area'} (${area(layerArea(layer))})`;
+    return { layer, diameter, sized, text, positions };
+  });
   const showLabels = options.layerLabels ?? true;
   const labelWidth = showLabels && layers.length > 0 ? Math.max(...layers.map((l) => textWidth(l.text, font))) + 16 : 0;
 
-  const web = webExtent(definition.shape);
   const bottomChord = definition.shape.kind === 'tee' || definition.shape.kind === 'ell' ? web : undefined;
   const marginLeft = font * 2 + 10;
   const marginTop = font * 2 + 8;
@@ -115,25 +106,16 @@ export function sectionDrawingSvg(definition: SectionDefinition, unitsInput: Uni
   parts.push(`<path d="${path(outline)}${voids.map((v) => ` ${path(v)}`).join('')}" fill="#e6e9ed" fill-rule="evenodd" stroke="${PALETTE.ink}" stroke-width="0.9"/>`);
 
   // Hoop along the web, at its centreline.
-  const hoops = definition.hoops;
-  const centreline = hoops ? hoopCentreline(definition.shape, hoops) : undefined;
-  if (hoops && centreline) {
-    const { x0, x1, y0, y1 } = centreline;
-    const radius = Math.min(2 * hoops.diameter, (x1 - x0) / 2, (y1 - y0) / 2) * k;
-    parts.push(`<rect x="${n2(X(x0))}" y="${n2(Y(y0))}" width="${n2((x1 - x0) * k)}" height="${n2((y1 - y0) * k)}" rx="${n2(radius)}" fill="none" stroke="${PALETTE.grey}" stroke-width="${n2(Math.max(hoops.diameter * k, 0.6))}"/>`);
+  const hoop = figure.hoop;
+  if (hoop) {
+    const { x0, x1, y0, y1 } = hoop;
+    parts.push(`<rect x="${n2(X(x0))}" y="${n2(Y(y0))}" width="${n2((x1 - x0) * k)}" height="${n2((y1 - y0) * k)}" rx="${n2(hoop.radius * k)}" fill="none" stroke="${PALETTE.grey}" stroke-width="${n2(Math.max(hoop.diameter * k, 0.6))}"/>`);
   }
 
   // Bars.
-  for (const { layer, diameter, sized } of layers) {
+  for (const { layer, diameter, sized, positions } of layers) {
     const radius = Math.max((diameter / 2) * k, 1.2);
-    let positions: number[];
-    try {
-      positions = barPositions(definition, layer);
-    } catch {
-      positions = [];
-    }
     for (const x of positions) {
-      if (!finite(x)) continue;
       parts.push(sized
         ? `<circle cx="${n2(X(x))}" cy="${n2(Y(layer.depth))}" r="${n2(radius)}" fill="${PALETTE.ink}"/>`
         : `<circle cx="${n2(X(x))}" cy="${n2(Y(layer.depth))}" r="${n2(radius)}" fill="none" stroke="${PALETTE.ink}" stroke-width="0.8"/>`);
@@ -162,12 +144,7 @@ export function sectionDrawingSvg(definition: SectionDefinition, unitsInput: Uni
   // Layer labels at the right, spread so that they never overlap, each with a leader.
   if (showLabels && layers.length > 0) {
     const sorted = [...layers].sort((a, b) => a.layer.depth - b.layer.depth);
-    const gap = font + 2;
-    const placed: number[] = [];
-    for (const l of sorted) {
-      const wanted = Y(l.layer.depth) + font / 3;
-      placed.push(placed.length === 0 ? wanted : Math.max(wanted, placed[placed.length - 1]! + gap));
-    }
+    const placed = spreadLabels(sorted.map((l) => Y(l.layer.depth) + font / 3), font + 2);
     // Pull the stack back up if it ran past the bottom of the drawing.
     const overflow = placed[placed.length - 1]! - (svgHeight - 2);
     if (overflow > 0) for (let i = 0; i < placed.length; i++) placed[i] = placed[i]! - overflow;

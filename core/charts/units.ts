@@ -5,7 +5,7 @@
  */
 import { displayUnit, toDisplay } from '../units/convert.ts';
 import { formatNumber, NOT_A_VALUE } from '../units/format.ts';
-import type { Quantity, UnitSystem } from '../units/quantities.ts';
+import { displaySystem, type Quantity, type UnitSystem } from '../units/quantities.ts';
 import type { UnitId } from '../units/units.ts';
 import type { AxisSpec, DisplayUnits, UnitsInput } from './types.ts';
 
@@ -19,8 +19,7 @@ const STRAIN_UNIT: Record<NonNullable<DisplayUnits['strainStyle']>, UnitId> = {
 /** Normalises the units argument of a chart builder. 'si'/'us' (project file spelling) map to 'SI'/'US'. */
 export function resolveUnits(input: UnitsInput): DisplayUnits {
   if (typeof input === 'string') {
-    const system: UnitSystem = input === 'us' || input === 'US' ? 'US' : 'SI';
-    return { system, strainStyle: 'permille' };
+    return { system: displaySystem(input), strainStyle: 'permille' };
   }
   return { strainStyle: 'permille', ...input };
 }

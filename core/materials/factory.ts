@@ -6,11 +6,11 @@
  *  - validateConcreteSpec / validateSteelSpec / validateFrpSpec → Diagnostic[]
  * The builders throw InputError (core/diagnostics.ts) when a spec is invalid.
  */
+/** The option lists of the specs (written once, in specs.ts). */
+export { CODE_BASES, CONCRETE_COMPRESSION_MODELS, CONCRETE_TENSION_MODELS, STEEL_MODELS } from './specs.ts';
 export {
   buildConcrete,
   validateConcreteSpec,
-  CONCRETE_COMPRESSION_MODELS,
-  CONCRETE_TENSION_MODELS,
   CONFINEMENT_MODELS,
   CONCRETE_STRENGTH_RANGE,
   type ConcreteBuild,
@@ -18,8 +18,8 @@ export {
   type ConcreteValidationOptions,
 } from './build/concrete.ts';
 /** Code-basis defaults for concrete (f′c / fcm, Ec, tensile strength, crushing strain). */
-export { resolveConcrete, CODE_BASES, type ResolvedConcrete } from './build/concrete-defaults.ts';
+export { resolveConcrete, type ResolvedConcrete } from './build/concrete-defaults.ts';
 /** Steel: builder, validation and defaults (Es = 200 000 MPa, εsh = 0.008, εsu by model). */
-export { buildSteel, validateSteelSpec, STEEL_MODELS, DEFAULT_STEEL_MODULUS, DEFAULT_HARDENING_STRAIN, defaultRuptureStrain } from './build/steel.ts';
+export { buildSteel, validateSteelSpec, DEFAULT_STEEL_MODULUS, DEFAULT_HARDENING_STRAIN, defaultRuptureStrain } from './build/steel.ts';
 /** FRP: builder and validation (ACI 440.2R-17). */
 export { buildFrp, validateFrpSpec } from './build/frp.ts';

@@ -3,7 +3,7 @@
  * compression for every material. Units: MPa, strain dimensionless, mm.
  */
 export type * from './types.ts';
-export type * from './specs.ts';
+export * from './specs.ts';
 export * from './factory.ts';
 export * from './checks.ts';
 export * from './code/aci318.ts';

@@ -4,21 +4,24 @@
  * spec into a UniaxialMaterial.
  */
 
-/** Which design code supplies defaults (moduli, tensile strength, crushing strain). */
-export type CodeBasis = 'ACI 318-19' | 'EN 1992-1-1';
+/**
+ * Every option list of the material specs is written once, here, in menu order; the types, the
+ * file schema (core/project/schema.ts), the validators and the UI's lists derive from it.
+ */
+
+/** Every code basis: which design code supplies defaults (moduli, tensile strength, crushing strain). */
+export const CODE_BASES = ['ACI 318-19', 'EN 1992-1-1'] as const;
+export type CodeBasis = (typeof CODE_BASES)[number];
 
 /** Published concrete compression laws (core/materials/concrete/, one file each). */
-export type ConcreteCompressionModel =
-  | 'hognestad'
-  | 'modified-kent-park'
-  | 'mander'
-  | 'popovics'
-  | 'thorenfeldt-collins'
-  | 'en1992-nonlinear'
-  | 'en1992-parabola-rectangle';
+export const CONCRETE_COMPRESSION_MODELS = [
+  'hognestad', 'modified-kent-park', 'mander', 'popovics', 'thorenfeldt-collins', 'en1992-nonlinear', 'en1992-parabola-rectangle',
+] as const;
+export type ConcreteCompressionModel = (typeof CONCRETE_COMPRESSION_MODELS)[number];
 
 /** Concrete tension laws (core/materials/concrete/tension.ts). */
-export type ConcreteTensionModel = 'none' | 'linear-brittle' | 'tension-stiffening';
+export const CONCRETE_TENSION_MODELS = ['none', 'linear-brittle', 'tension-stiffening'] as const;
+export type ConcreteTensionModel = (typeof CONCRETE_TENSION_MODELS)[number];
 
 /** A concrete as the user enters it; `buildConcrete` (factory.ts) validates it and fills code-basis defaults. */
 export interface ConcreteSpec {
@@ -54,7 +57,8 @@ export interface ConcreteSpec {
 }
 
 /** Reinforcing-steel laws (core/materials/steel/, one file each). */
-export type SteelModel = 'elastic-plastic' | 'bilinear' | 'park-paulay' | 'mander-power';
+export const STEEL_MODELS = ['elastic-plastic', 'bilinear', 'park-paulay', 'mander-power'] as const;
+export type SteelModel = (typeof STEEL_MODELS)[number];
 
 /** A reinforcing steel as the user enters it; `buildSteel` (factory.ts) validates it. */
 export interface SteelSpec {

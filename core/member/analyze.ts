@@ -23,7 +23,7 @@ import { elasticZone, zoneResponse } from './zones.ts';
 
 export interface MemberContext {
   readonly code: CodeBasis;
-  /** Number of equal segments along the span (default 200). */
+  /** Number of equal segments along the span (the project setting `stations`, default 60). */
   readonly segments: number;
   /** Section analyses by section id (shared between members of a project). */
   section(id: string): SectionAnalysis | undefined;
@@ -157,11 +157,9 @@ export function analyzeBeam(member: BeamDefinition, context: MemberContext): Bea
     ? capacityCurve(beam, loading, member.capacity, controlAt, context.text)
     : null;
   if (!capacity) warnings.push('The load pattern for the load–deflection curve is empty (no live load for a live-only pattern): no capacity curve.');
-  const spanHinge = capacity?.hinges.find((h) => h.direction === 'sagging');
   if (capacity && capacity.hinges.some((h) => h.length < 5)) {
     warnings.push('A plastic hinge length is practically zero by the chosen expression (e.g. Priestley et al. inside the span with fu = fy): its rotation capacity is nil. Consider another hinge-length method.');
   }
-  void spanHinge;
 
   // --- ductility ----------------------------------------------------------------------------------
   let firstYieldDeflection: number | null = null;

@@ -66,7 +66,6 @@ export function buildBeamModel(support: SupportType, span: number, zones: readon
   }
   const x = Float64Array.from(xs);
   const segmentZone = new Int32Array(x.length - 1);
-  let doubledSeen = false;
   for (let k = 0; k < x.length - 1; k++) {
     const a = x[k]!;
     const b = x[k + 1]!;
@@ -74,12 +73,10 @@ export function buildBeamModel(support: SupportType, span: number, zones: readon
     if (b === a) {
       // Zero-length segment at a boundary: it belongs to the zone on the right.
       mid = a + 1e-9;
-      doubledSeen = true;
     }
     const z = zones.findIndex((zone) => mid >= zone.from && mid <= zone.to);
     segmentZone[k] = z < 0 ? zones.length - 1 : z;
   }
-  void doubledSeen;
   const stationZone = new Int32Array(x.length);
   for (let i = 0; i < x.length; i++) {
     const right = i < x.length - 1 && x[i + 1]! > x[i]! ? i : -1;

@@ -63,11 +63,6 @@ export function enDistributionCoefficient(moment: number, crackingMoment: number
   return 1 - beta * (crackingMoment / moment) ** 2;
 }
 
-/** Interpolated deformation parameter α = ζ·αII + (1 − ζ)·αI, EN 1992-1-1 Eq. (7.18). */
-export function enInterpolate(zeta: number, cracked: number, uncracked: number): number {
-  return zeta * cracked + (1 - zeta) * uncracked;
-}
-
 /** Effective modulus for creep Ec,eff = Ecm/(1 + φ(∞, t0)), EN 1992-1-1 Eq. (7.20). */
 export function enEffectiveModulus(ecm: number, creepCoefficient: number): number {
   return ecm / (1 + creepCoefficient);

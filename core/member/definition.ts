@@ -6,16 +6,24 @@
  * from the left support (the fixed end of a cantilever).
  */
 
+// Every option list of a beam is written once, here, in menu order; the types, the file schema
+// (core/project/schema.ts), the validators (validate.ts) and the UI's lists derive from it.
+
 /**
  * Support conditions of a single span. A cantilever is fixed at x = 0 and free at x = L; a
  * propped cantilever is fixed at x = 0 and pinned at x = L.
  * (Continuous beams will add a `spans` list; the statics already works on redundant support
  * moments, see core/member/statics.ts.)
  */
-export type SupportType = 'simply-supported' | 'cantilever' | 'fixed-fixed' | 'propped-cantilever';
+export const SUPPORT_TYPES = ['simply-supported', 'cantilever', 'fixed-fixed', 'propped-cantilever'] as const;
+export type SupportType = (typeof SUPPORT_TYPES)[number];
 
 /** Load cases. Self-weight is added to `dead` automatically unless switched off. */
-export type LoadCaseId = 'dead' | 'superimposed' | 'live';
+export const LOAD_CASES = ['dead', 'superimposed', 'live'] as const;
+export type LoadCaseId = (typeof LOAD_CASES)[number];
+
+/** Kinds of load. */
+export const LOAD_KINDS = ['uniform', 'point'] as const;
 
 export type MemberLoad =
   | {
@@ -53,24 +61,32 @@ export interface LoadFactors {
   readonly live: number;
 }
 
-/** Deflection limit cases. */
-export type DeflectionLimitCase =
+/** Deflection limit cases, in menu order. */
+export const DEFLECTION_LIMIT_CASES = [
   /** ACI 318-19 Table 24.2.2: flat roofs not supporting nonstructural elements likely to be damaged — immediate live (Lr, S, R) ℓ/180. */
-  | 'aci-roof-immediate'
+  'aci-roof-immediate',
   /** ACI 318-19 Table 24.2.2: floors not supporting such elements — immediate live ℓ/360. */
-  | 'aci-floor-immediate'
+  'aci-floor-immediate',
   /** ACI 318-19 Table 24.2.2: supporting elements likely to be damaged — deflection after attachment ℓ/480. */
-  | 'aci-sensitive-after-attachment'
+  'aci-sensitive-after-attachment',
   /** ACI 318-19 Table 24.2.2: supporting elements not likely to be damaged — deflection after attachment ℓ/240. */
-  | 'aci-insensitive-after-attachment'
+  'aci-insensitive-after-attachment',
   /** EN 1992-1-1 7.4.1(4): appearance, total deflection under quasi-permanent loads, span/250. */
-  | 'en-appearance'
+  'en-appearance',
   /** EN 1992-1-1 7.4.1(5): deflection after construction that may damage adjacent parts, span/500. */
-  | 'en-after-construction'
+  'en-after-construction',
   /** A user-given limit span/ratio on the total long-term deflection. */
-  | 'custom';
+  'custom',
+] as const;
+export type DeflectionLimitCase = (typeof DEFLECTION_LIMIT_CASES)[number];
 
-export type HingeLengthMethod = 'priestley-2007' | 'paulay-priestley-1992' | 'mattock-1967' | 'corley-1966' | 'user';
+/** Plastic hinge length expressions (core/member/hinge-length.ts), and a length the engineer gives. */
+export const HINGE_LENGTH_METHODS = ['priestley-2007', 'paulay-priestley-1992', 'mattock-1967', 'corley-1966', 'user'] as const;
+export type HingeLengthMethod = (typeof HINGE_LENGTH_METHODS)[number];
+
+/** Load patterns of the load–deflection curve: everything increased together, or the live load with the dead load held. */
+export const LOAD_PATTERNS = ['proportional', 'live-only'] as const;
+export type LoadPattern = (typeof LOAD_PATTERNS)[number];
 
 export interface ServiceSettings {
   /** Fraction ψ of the live load that is sustained (EN 1990 ψ2; ACI "sustained portion"), 0–1. */
@@ -87,7 +103,7 @@ export interface ServiceSettings {
 
 export interface CapacitySettings {
   /** Load pattern increased to failure: all loads proportionally, or live only with dead held. */
-  readonly pattern: 'proportional' | 'live-only';
+  readonly pattern: LoadPattern;
   readonly hingeLengthMethod: HingeLengthMethod;
   /** Plastic hinge length for `user`, mm. */
   readonly userHingeLength?: number;

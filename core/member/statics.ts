@@ -81,34 +81,6 @@ export function redundantField(end: 'left' | 'right', span: number, x: number): 
 }
 
 /**
- * Fixed-end moments of a fixed–fixed span (hogging negative), N·mm, for the linear-elastic
- * prismatic case — used as the starting guess of the nonlinear redundants and as the code-method
- * moment field. Closed forms per load (handbook: uniform over [a, b] by integration of the point
- * load case MA = −P·a·b²/L²).
- */
-export function fixedEndMoments(span: number, loads: readonly StaticLoad[]): { left: number; right: number } {
-  let left = 0;
-  let right = 0;
-  const pointCase = (p: number, a: number) => {
-    const b = span - a;
-    left -= (p * a * b * b) / (span * span);
-    right -= (p * a * a * b) / (span * span);
-  };
-  for (const l of loads) {
-    if (l.kind === 'point') pointCase(l.p, l.a);
-    else {
-      // Integrate the point-load formula over the loaded length with 8-point Gauss (exact: cubic integrand).
-      const nodes = [-0.9602898564975363, -0.7966664774136267, -0.5255324099163290, -0.1834346424956498, 0.1834346424956498, 0.5255324099163290, 0.7966664774136267, 0.9602898564975363];
-      const weights = [0.1012285362903763, 0.2223810344533745, 0.3137066458778873, 0.3626837833783620, 0.3626837833783620, 0.3137066458778873, 0.2223810344533745, 0.1012285362903763];
-      const half = (l.to - l.from) / 2;
-      const mid = (l.to + l.from) / 2;
-      nodes.forEach((t, i) => pointCase(l.w * half * weights[i]!, mid + half * t));
-    }
-  }
-  return { left, right };
-}
-
-/**
  * Shear of the released structure at x, N (V = dM/dx, sagging-positive moments): simple span
  * V = RA − loads left of x; cantilever (fixed at 0) V = loads right of x. `side` picks the value
  * just left or right of x where a point load sits there.

@@ -3,12 +3,12 @@
  * sections exist). Every problem is reported with its path, value and allowed range.
  */
 import { checkNumber, type Diagnostic } from '../diagnostics.ts';
-import type { BeamDefinition } from './definition.ts';
+import { DEFLECTION_LIMIT_CASES, HINGE_LENGTH_METHODS, LOAD_CASES, LOAD_PATTERNS, SUPPORT_TYPES, type BeamDefinition } from './definition.ts';
 
-const SUPPORTS = ['simply-supported', 'cantilever', 'fixed-fixed', 'propped-cantilever'];
-const LOAD_CASES = ['dead', 'superimposed', 'live'];
-const LIMITS = ['aci-roof-immediate', 'aci-floor-immediate', 'aci-sensitive-after-attachment', 'aci-insensitive-after-attachment', 'en-appearance', 'en-after-construction', 'custom'];
-const HINGES = ['priestley-2007', 'paulay-priestley-1992', 'mattock-1967', 'corley-1966', 'user'];
+/** True when `value` is one of `options` (a type guard over the option lists of definition.ts). */
+const isOneOf = <T extends string>(options: readonly T[], value: unknown): value is T => (options as readonly unknown[]).includes(value);
+/** `one of a, b, c` for messages. */
+const oneOf = (options: readonly string[]) => `one of ${options.join(', ')}`;
 
 /** Metres for messages (the engineer thinks in metres along a span). */
 const m = (mm: number) => `${(mm / 1000).toFixed(3).replace(/\.?0+$/, '')} m`;
@@ -20,7 +20,7 @@ const m = (mm: number) => `${(mm / 1000).toFixed(3).replace(/\.?0+$/, '')} m`;
 export function validateMember(member: BeamDefinition, path: string, sectionIds: ReadonlySet<string>): Diagnostic[] {
   const out: Diagnostic[] = [];
   const error = (code: Diagnostic['code'], at: string, message: string) => out.push({ code, path: `${path}.${at}`, severity: 'error', message });
-  if (!SUPPORTS.includes(member.supports)) error('unknown-option', 'supports', `must be one of ${SUPPORTS.join(', ')}, got ${JSON.stringify(member.supports)}`);
+  if (!isOneOf(SUPPORT_TYPES, member.supports)) error('unknown-option', 'supports', `must be ${oneOf(SUPPORT_TYPES)}, got ${JSON.stringify(member.supports)}`);
   const spanOk = checkNumber(out, `${path}.span`, member.span, { min: 0, exclusiveMin: true, max: 60000, unit: 'mm' });
   const span = spanOk ? member.span : NaN;
 
@@ -50,7 +50,7 @@ export function validateMember(member: BeamDefinition, path: string, sectionIds:
   // Loads lie on the span.
   (member.loads ?? []).forEach((load, i) => {
     const at = `loads[${i}]`;
-    if (!LOAD_CASES.includes(load.loadCase)) error('unknown-option', `${at}.loadCase`, `must be one of ${LOAD_CASES.join(', ')}, got ${JSON.stringify(load.loadCase)}`);
+    if (!isOneOf(LOAD_CASES, load.loadCase)) error('unknown-option', `${at}.loadCase`, `must be ${oneOf(LOAD_CASES)}, got ${JSON.stringify(load.loadCase)}`);
     if (load.kind === 'point') {
       checkNumber(out, `${path}.${at}.magnitude`, load.magnitude, { min: -1e9, max: 1e9, unit: 'N' });
       if (checkNumber(out, `${path}.${at}.position`, load.position, { min: 0, unit: 'mm' }) && spanOk && load.position > span) {
@@ -78,15 +78,15 @@ export function validateMember(member: BeamDefinition, path: string, sectionIds:
     checkNumber(out, `${path}.service.sustainedLiveFraction`, s.sustainedLiveFraction, { min: 0, max: 1 });
     checkNumber(out, `${path}.service.durationMonths`, s.durationMonths, { min: 0, max: 1200, unit: 'months' });
     (s.limitCases ?? []).forEach((c, i) => {
-      if (!LIMITS.includes(c)) error('unknown-option', `service.limitCases[${i}]`, `must be one of ${LIMITS.join(', ')}, got ${JSON.stringify(c)}`);
+      if (!isOneOf(DEFLECTION_LIMIT_CASES, c)) error('unknown-option', `service.limitCases[${i}]`, `must be ${oneOf(DEFLECTION_LIMIT_CASES)}, got ${JSON.stringify(c)}`);
     });
     if ((s.limitCases ?? []).includes('custom')) checkNumber(out, `${path}.service.customLimitRatio`, s.customLimitRatio, { min: 50, max: 5000 });
   }
   const c = member.capacity;
   if (!c) error('required', 'capacity', 'capacity settings are required');
   else {
-    if (!['proportional', 'live-only'].includes(c.pattern)) error('unknown-option', 'capacity.pattern', `must be "proportional" or "live-only", got ${JSON.stringify(c.pattern)}`);
-    if (!HINGES.includes(c.hingeLengthMethod)) error('unknown-option', 'capacity.hingeLengthMethod', `must be one of ${HINGES.join(', ')}, got ${JSON.stringify(c.hingeLengthMethod)}`);
+    if (!isOneOf(LOAD_PATTERNS, c.pattern)) error('unknown-option', 'capacity.pattern', `must be "proportional" or "live-only", got ${JSON.stringify(c.pattern)}`);
+    if (!isOneOf(HINGE_LENGTH_METHODS, c.hingeLengthMethod)) error('unknown-option', 'capacity.hingeLengthMethod', `must be ${oneOf(HINGE_LENGTH_METHODS)}, got ${JSON.stringify(c.hingeLengthMethod)}`);
     if (c.hingeLengthMethod === 'user') checkNumber(out, `${path}.capacity.userHingeLength`, c.userHingeLength, { min: 10, max: 5000, unit: 'mm' });
   }
   if (member.strengthFactors) {

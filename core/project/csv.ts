@@ -22,7 +22,7 @@ import type { CodeBasis } from '../materials/specs.ts';
 import type { CapacitySettings, MemberLoad, ServiceSettings, SupportType } from '../member/definition.ts';
 import type { LoadDeflectionPoint, SpanDistribution } from '../member/results.ts';
 import type { MomentCurvatureResult } from '../section/results.ts';
-import { formatNumber, fromDisplay, toDisplay, unitLabel, UNITS, type Quantity, type UnitId, type UnitSystem as DisplaySystem } from '../units/index.ts';
+import { displaySystem, formatNumber, fromDisplay, toDisplay, unitLabel, UNITS, type Quantity, type UnitId } from '../units/index.ts';
 import { memberKeyResults } from './key-results.ts';
 import type { Project, UnitSystem, MemberDefinition } from './types.ts';
 import type { MemberResult } from '../assessment/results.ts';
@@ -308,8 +308,6 @@ export function csvField(value: string | number | null | undefined, options: { t
 export function csvText(rows: readonly (readonly (string | number | null | undefined)[])[]): string {
   return `${Papa.unparse(rows.map((row) => row.map((v) => cellText(v))), { quotes: needsQuotes, newline: '\r\n', escapeFormulae: false })}\r\n`;
 }
-
-const displaySystem = (system: UnitSystem): DisplaySystem => (system === 'us' ? 'US' : 'SI');
 
 /** A header cell with its unit: `span [ft]`; dimensionless columns get `[-]`. */
 function head(label: string, quantity: Quantity | null, system: UnitSystem): string {

@@ -19,7 +19,7 @@
  * 1.128 in). Pure functions: each call returns a fresh object.
  */
 import type { MaterialSpec } from '../materials/specs.ts';
-import type { DeflectionLimitCase, HingeLengthMethod, MemberLoad, MemberZone, SupportType } from '../member/definition.ts';
+import type { DeflectionLimitCase, HingeLengthMethod, MemberLoad, MemberZone } from '../member/definition.ts';
 import type { BarLayer, HoopSet, SectionDefinition } from '../section/definition.ts';
 import { fromDisplay } from '../units/index.ts';
 import { astmBarDiameter } from '../section/bar-designations.ts';
@@ -59,13 +59,7 @@ function point(loadCase: MemberLoad['loadCase'], magnitude: number, position: nu
   return { kind: 'point', loadCase, magnitude, position, label };
 }
 
-interface MemberInput {
-  readonly id: string;
-  readonly name: string;
-  readonly supports: SupportType;
-  readonly span: number;
-  readonly zones: readonly MemberZone[];
-  readonly loads: readonly MemberLoad[];
+interface MemberInput extends Pick<MemberDefinition, 'id' | 'name' | 'supports' | 'span' | 'zones' | 'loads'> {
   readonly limitCases: readonly DeflectionLimitCase[];
   readonly hinge: HingeLengthMethod;
   readonly notes: string;

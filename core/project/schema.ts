@@ -12,8 +12,19 @@
  * Units: every number is in internal units (mm, N, MPa, N/mm); see docs/project-format.md.
  */
 import { z } from 'zod';
-import type { Project } from './types.ts';
-import { PROJECT_FORMAT, PROJECT_VERSION } from './types.ts';
+import { CODE_BASES, CONCRETE_COMPRESSION_MODELS, CONCRETE_TENSION_MODELS, STEEL_MODELS, type ConcreteSpec, type FrpSpec, type SteelSpec } from '../materials/specs.ts';
+import {
+  DEFLECTION_LIMIT_CASES, HINGE_LENGTH_METHODS, LOAD_CASES, LOAD_PATTERNS, SUPPORT_TYPES,
+  type CapacitySettings, type LoadFactors, type MemberLoad, type MemberZone, type ServiceSettings,
+} from '../member/definition.ts';
+import {
+  BONDED_FACES, COVER_LOSS_FACES, INSTALLATION_STRAIN_METHODS, LAYER_FACES, STEEL_TEST_SOURCES,
+  type AsFoundCondition, type CoreTestSet, type Defect, type InstallationLoad, type LayerBars, type SteelTestData, type StrengtheningScheme,
+} from '../retrofit/types.ts';
+import { BAR_SPREADS, type BarLayer, type HoopSet, type SectionDefinition } from '../section/definition.ts';
+import { BILINEAR_METHODS } from '../section/results.ts';
+import { FLANGE_SIDES, type Point, type SectionShape } from '../section/shapes.ts';
+import { PROJECT_FORMAT, PROJECT_VERSION, UNIT_SYSTEMS, type AnalysisSettings, type MemberDefinition, type Project, type ProjectInfo } from './types.ts';
 
 const number = z.number();
 const text = z.string();
@@ -21,23 +32,14 @@ const list = <T extends z.ZodType>(item: T) => z.array(item).readonly();
 
 // --- materials ----------------------------------------------------------------------------------
 
-/** Options of ConcreteSpec.compressionModel (core/materials/specs.ts). */
-export const CONCRETE_COMPRESSION_MODEL_NAMES = [
-  'hognestad', 'modified-kent-park', 'mander', 'popovics', 'thorenfeldt-collins', 'en1992-nonlinear', 'en1992-parabola-rectangle',
-] as const;
-/** Options of ConcreteSpec.tensionModel. */
-export const CONCRETE_TENSION_MODEL_NAMES = ['none', 'linear-brittle', 'tension-stiffening'] as const;
-/** Options of SteelSpec.model. */
-export const STEEL_MODEL_NAMES = ['elastic-plastic', 'bilinear', 'park-paulay', 'mander-power'] as const;
-
 /** ConcreteSpec: strengths and moduli in MPa, strains dimensionless, density kg/m³. */
 export const concreteSpecSchema = z.looseObject({
   kind: z.literal('concrete'),
   id: text,
   name: text,
   strength: number,
-  compressionModel: z.enum(CONCRETE_COMPRESSION_MODEL_NAMES),
-  tensionModel: z.enum(CONCRETE_TENSION_MODEL_NAMES),
+  compressionModel: z.enum(CONCRETE_COMPRESSION_MODELS),
+  tensionModel: z.enum(CONCRETE_TENSION_MODELS),
   elasticModulus: number.optional(),
   tensileStrength: number.optional(),
   crushingStrain: number.optional(),
@@ -55,7 +57,7 @@ export const steelSpecSchema = z.looseObject({
   kind: z.literal('steel'),
   id: text,
   name: text,
-  model: z.enum(STEEL_MODEL_NAMES),
+  model: z.enum(STEEL_MODELS),
   yieldStress: number,
   ultimateStress: number,
   elasticModulus: number.optional(),
@@ -82,19 +84,19 @@ const pointSchema = z.looseObject({ x: number, y: number });
 
 const flanged = <K extends string>(kind: K) => z.looseObject({ kind: z.literal(kind), height: number, webWidth: number, flangeWidth: number, flangeThickness: number });
 
+const rectangleSchema = z.looseObject({ kind: z.literal('rectangle'), width: number, height: number });
+const teeSchema = flanged('tee');
+const invertedTeeSchema = flanged('inverted-tee');
+const ellSchema = z.looseObject({ kind: z.literal('ell'), height: number, webWidth: number, flangeWidth: number, flangeThickness: number, flangeSide: z.enum(FLANGE_SIDES) });
+const iShapeSchema = z.looseObject({
+  kind: z.literal('i-shape'), height: number, webWidth: number,
+  topFlangeWidth: number, topFlangeThickness: number, bottomFlangeWidth: number, bottomFlangeThickness: number,
+});
+const boxSchema = z.looseObject({ kind: z.literal('box'), height: number, width: number, topThickness: number, bottomThickness: number, wallThickness: number });
+const polygonSchema = z.looseObject({ kind: z.literal('polygon'), outline: list(pointSchema), voids: list(list(pointSchema)).optional() });
+
 /** Every SectionShape kind (core/section/shapes.ts), dimensions in mm. */
-export const sectionShapeSchema = z.discriminatedUnion('kind', [
-  z.looseObject({ kind: z.literal('rectangle'), width: number, height: number }),
-  flanged('tee'),
-  flanged('inverted-tee'),
-  z.looseObject({ kind: z.literal('ell'), height: number, webWidth: number, flangeWidth: number, flangeThickness: number, flangeSide: z.enum(['left', 'right']) }),
-  z.looseObject({
-    kind: z.literal('i-shape'), height: number, webWidth: number,
-    topFlangeWidth: number, topFlangeThickness: number, bottomFlangeWidth: number, bottomFlangeThickness: number,
-  }),
-  z.looseObject({ kind: z.literal('box'), height: number, width: number, topThickness: number, bottomThickness: number, wallThickness: number }),
-  z.looseObject({ kind: z.literal('polygon'), outline: list(pointSchema), voids: list(list(pointSchema)).optional() }),
-]);
+export const sectionShapeSchema = z.discriminatedUnion('kind', [rectangleSchema, teeSchema, invertedTeeSchema, ellSchema, iShapeSchema, boxSchema, polygonSchema]);
 
 /** BarLayer: depth and diameter mm, area mm². */
 export const barLayerSchema = z.looseObject({
@@ -103,7 +105,7 @@ export const barLayerSchema = z.looseObject({
   count: number.optional(),
   diameter: number.optional(),
   area: number.optional(),
-  spread: z.enum(['web', 'chord']).optional(),
+  spread: z.enum(BAR_SPREADS).optional(),
   label: text.optional(),
 });
 
@@ -132,25 +134,13 @@ export const sectionDefinitionSchema = z.looseObject({
 
 // --- members ------------------------------------------------------------------------------------
 
-/** Options of MemberDefinition.supports. */
-export const SUPPORT_TYPES = ['simply-supported', 'cantilever', 'fixed-fixed', 'propped-cantilever'] as const;
-/** Options of MemberLoad.loadCase. */
-export const LOAD_CASES = ['dead', 'superimposed', 'live'] as const;
-/** Options of ServiceSettings.limitCases. */
-export const DEFLECTION_LIMIT_CASES = [
-  'aci-roof-immediate', 'aci-floor-immediate', 'aci-sensitive-after-attachment', 'aci-insensitive-after-attachment',
-  'en-appearance', 'en-after-construction', 'custom',
-] as const;
-/** Options of CapacitySettings.hingeLengthMethod. */
-export const HINGE_LENGTH_METHODS = ['priestley-2007', 'paulay-priestley-1992', 'mattock-1967', 'corley-1966', 'user'] as const;
-
 const loadCase = z.enum(LOAD_CASES);
 
+const uniformLoadSchema = z.looseObject({ kind: z.literal('uniform'), loadCase, magnitude: number, from: number.optional(), to: number.optional(), label: text.optional() });
+const pointLoadSchema = z.looseObject({ kind: z.literal('point'), loadCase, magnitude: number, position: number, label: text.optional() });
+
 /** MemberLoad: uniform N/mm over [from, to] mm, or point N at `position` mm. */
-export const memberLoadSchema = z.discriminatedUnion('kind', [
-  z.looseObject({ kind: z.literal('uniform'), loadCase, magnitude: number, from: number.optional(), to: number.optional(), label: text.optional() }),
-  z.looseObject({ kind: z.literal('point'), loadCase, magnitude: number, position: number, label: text.optional() }),
-]);
+export const memberLoadSchema = z.discriminatedUnion('kind', [uniformLoadSchema, pointLoadSchema]);
 
 /** MemberZone: from/to mm from the left support. */
 export const memberZoneSchema = z.looseObject({ from: number, to: number, sectionId: text });
@@ -166,7 +156,7 @@ export const serviceSettingsSchema = z.looseObject({
 });
 
 export const capacitySettingsSchema = z.looseObject({
-  pattern: z.enum(['proportional', 'live-only']),
+  pattern: z.enum(LOAD_PATTERNS),
   hingeLengthMethod: z.enum(HINGE_LENGTH_METHODS),
   userHingeLength: number.optional(),
 });
@@ -179,7 +169,7 @@ export const coreTestSetSchema = z.looseObject({ concreteId: text.optional(), me
 /** SteelTestData: stresses and modulus MPa. */
 export const steelTestDataSchema = z.looseObject({
   steelId: text,
-  source: z.enum(['coupons', 'era-default']),
+  source: z.enum(STEEL_TEST_SOURCES),
   yieldStress: number.optional(),
   ultimateStress: number.optional(),
   ruptureStrain: number.optional(),
@@ -188,13 +178,12 @@ export const steelTestDataSchema = z.looseObject({
 });
 
 /** Defect: section loss in percent of a bar layer (by index) or the hoops; cover loss depth, from, to mm. */
-export const defectSchema = z.discriminatedUnion('kind', [
-  z.looseObject({ kind: z.literal('section-loss'), sectionId: text.optional(), layer: z.union([number, z.literal('hoops')]), lossPercent: number, note: text.optional() }),
-  z.looseObject({
-    kind: z.literal('cover-loss'), sectionId: text.optional(), face: z.enum(['top', 'bottom', 'left', 'right']), depth: number,
-    from: number.optional(), to: number.optional(), note: text.optional(),
-  }),
-]);
+const sectionLossSchema = z.looseObject({ kind: z.literal('section-loss'), sectionId: text.optional(), layer: z.union([number, z.literal('hoops')]), lossPercent: number, note: text.optional() });
+const coverLossSchema = z.looseObject({
+  kind: z.literal('cover-loss'), sectionId: text.optional(), face: z.enum(COVER_LOSS_FACES), depth: number,
+  from: number.optional(), to: number.optional(), note: text.optional(),
+});
+export const defectSchema = z.discriminatedUnion('kind', [sectionLossSchema, coverLossSchema]);
 
 /** AsFoundCondition. */
 export const asFoundConditionSchema = z.looseObject({
@@ -208,23 +197,24 @@ export const asFoundConditionSchema = z.looseObject({
 export const installationLoadSchema = z.looseObject({ dead: number.optional(), superimposed: number.optional(), live: number.optional() });
 
 const schemeBase = { id: text, name: text, sectionIds: list(text).optional(), repairSpalls: z.boolean().optional(), note: text.optional() };
-const installationStrainMethod = z.enum(['cracked-elastic', 'moment-curvature']);
+const installationStrainMethod = z.enum(INSTALLATION_STRAIN_METHODS);
+
+const frpSchemeSchema = z.looseObject({
+  kind: z.literal('frp'), ...schemeBase, frpId: text, plyThickness: number, plies: number, width: number,
+  face: z.enum(BONDED_FACES).optional(), installation: installationLoadSchema.optional(), installationStrainMethod: installationStrainMethod.optional(),
+});
+const steelPlateSchemeSchema = z.looseObject({
+  kind: z.literal('steel-plate'), ...schemeBase, steelId: text, thickness: number, width: number,
+  face: z.enum(BONDED_FACES).optional(), installation: installationLoadSchema.optional(), installationStrainMethod: installationStrainMethod.optional(),
+});
+const layerBarsSchema = z.looseObject({ steelId: text, distanceFromFace: number, count: number.optional(), diameter: number.optional(), area: number.optional(), label: text.optional() });
+const concreteLayerSchemeSchema = z.looseObject({
+  kind: z.literal('concrete-layer'), ...schemeBase, face: z.enum(LAYER_FACES), thickness: number, width: number.optional(), concreteId: text,
+  bars: list(layerBarsSchema),
+});
 
 /** StrengtheningScheme: FRP (ply thickness, width mm), steel plate (thickness, width mm), concrete layer (thickness, width mm). */
-export const strengtheningSchemeSchema = z.discriminatedUnion('kind', [
-  z.looseObject({
-    kind: z.literal('frp'), ...schemeBase, frpId: text, plyThickness: number, plies: number, width: number,
-    face: z.enum(['bottom', 'top']).optional(), installation: installationLoadSchema.optional(), installationStrainMethod: installationStrainMethod.optional(),
-  }),
-  z.looseObject({
-    kind: z.literal('steel-plate'), ...schemeBase, steelId: text, thickness: number, width: number,
-    face: z.enum(['bottom', 'top']).optional(), installation: installationLoadSchema.optional(), installationStrainMethod: installationStrainMethod.optional(),
-  }),
-  z.looseObject({
-    kind: z.literal('concrete-layer'), ...schemeBase, face: z.enum(['top', 'bottom']), thickness: number, width: number.optional(), concreteId: text,
-    bars: list(z.looseObject({ steelId: text, distanceFromFace: number, count: number.optional(), diameter: number.optional(), area: number.optional(), label: text.optional() })),
-  }),
-]);
+export const strengtheningSchemeSchema = z.discriminatedUnion('kind', [frpSchemeSchema, steelPlateSchemeSchema, concreteLayerSchemeSchema]);
 
 /** MemberDefinition: span mm. */
 export const memberDefinitionSchema = z.looseObject({
@@ -245,11 +235,6 @@ export const memberDefinitionSchema = z.looseObject({
 
 // --- project ------------------------------------------------------------------------------------
 
-/** Options of ProjectInfo.codeBasis. */
-export const CODE_BASIS_NAMES = ['ACI 318-19', 'EN 1992-1-1'] as const;
-/** Options of ProjectInfo.unitSystem. */
-export const UNIT_SYSTEM_NAMES = ['si', 'us'] as const;
-
 export const projectInfoSchema = z.looseObject({
   name: text,
   number: text,
@@ -258,13 +243,13 @@ export const projectInfoSchema = z.looseObject({
   checker: text,
   revision: text,
   date: text,
-  codeBasis: z.enum(CODE_BASIS_NAMES),
-  unitSystem: z.enum(UNIT_SYSTEM_NAMES),
+  codeBasis: z.enum(CODE_BASES),
+  unitSystem: z.enum(UNIT_SYSTEMS),
 });
 
 export const analysisSettingsSchema = z.looseObject({
   momentDropFraction: number,
-  bilinearMethod: z.enum(['priestley-2007', 'equal-energy']),
+  bilinearMethod: z.enum(BILINEAR_METHODS),
   stations: number,
 });
 
@@ -282,9 +267,61 @@ export const projectSchema = z.looseObject({
 /** What the schema produces, with unknown fields riding along. */
 export type ProjectFileData = z.output<typeof projectSchema>;
 
-// The schema's output is a Project: a field added to the types without the schema fails to compile here.
+// The schema's output is a Project (every field the schema has, the types have, with their types).
 const _schemaOutputIsAProject = (data: ProjectFileData): Project => data;
 void _schemaOutputIsAProject;
+
+// --- the schema knows every field of the types ----------------------------------------------------
+
+/**
+ * `true` when an object schema has exactly the fields of type T — a field added to a type and not to
+ * its schema (or the other way round) makes the type a description of what is missing, and the
+ * assignment below fails to compile (test/core/project/schema-types.test.ts proves it).
+ */
+export type SchemaHasFieldsOf<T, S extends { readonly shape: object }> =
+  [Exclude<keyof T, keyof S['shape']>, Exclude<keyof S['shape'], keyof T>] extends [never, never]
+    ? true
+    : { readonly fieldsMissingFromTheSchema: Exclude<keyof T, keyof S['shape']>; readonly fieldsUnknownToTheType: Exclude<keyof S['shape'], keyof T> };
+
+type Kind<U, K> = Extract<U, { readonly kind: K }>;
+
+const _everyFieldHasASchema: [
+  SchemaHasFieldsOf<ConcreteSpec, typeof concreteSpecSchema>,
+  SchemaHasFieldsOf<SteelSpec, typeof steelSpecSchema>,
+  SchemaHasFieldsOf<FrpSpec, typeof frpSpecSchema>,
+  SchemaHasFieldsOf<Point, typeof pointSchema>,
+  SchemaHasFieldsOf<Kind<SectionShape, 'rectangle'>, typeof rectangleSchema>,
+  SchemaHasFieldsOf<Kind<SectionShape, 'tee'>, typeof teeSchema>,
+  SchemaHasFieldsOf<Kind<SectionShape, 'inverted-tee'>, typeof invertedTeeSchema>,
+  SchemaHasFieldsOf<Kind<SectionShape, 'ell'>, typeof ellSchema>,
+  SchemaHasFieldsOf<Kind<SectionShape, 'i-shape'>, typeof iShapeSchema>,
+  SchemaHasFieldsOf<Kind<SectionShape, 'box'>, typeof boxSchema>,
+  SchemaHasFieldsOf<Kind<SectionShape, 'polygon'>, typeof polygonSchema>,
+  SchemaHasFieldsOf<BarLayer, typeof barLayerSchema>,
+  SchemaHasFieldsOf<HoopSet, typeof hoopSetSchema>,
+  SchemaHasFieldsOf<SectionDefinition, typeof sectionDefinitionSchema>,
+  SchemaHasFieldsOf<Kind<MemberLoad, 'uniform'>, typeof uniformLoadSchema>,
+  SchemaHasFieldsOf<Kind<MemberLoad, 'point'>, typeof pointLoadSchema>,
+  SchemaHasFieldsOf<MemberZone, typeof memberZoneSchema>,
+  SchemaHasFieldsOf<LoadFactors, typeof loadFactorsSchema>,
+  SchemaHasFieldsOf<ServiceSettings, typeof serviceSettingsSchema>,
+  SchemaHasFieldsOf<CapacitySettings, typeof capacitySettingsSchema>,
+  SchemaHasFieldsOf<CoreTestSet, typeof coreTestSetSchema>,
+  SchemaHasFieldsOf<SteelTestData, typeof steelTestDataSchema>,
+  SchemaHasFieldsOf<Kind<Defect, 'section-loss'>, typeof sectionLossSchema>,
+  SchemaHasFieldsOf<Kind<Defect, 'cover-loss'>, typeof coverLossSchema>,
+  SchemaHasFieldsOf<AsFoundCondition, typeof asFoundConditionSchema>,
+  SchemaHasFieldsOf<InstallationLoad, typeof installationLoadSchema>,
+  SchemaHasFieldsOf<Kind<StrengtheningScheme, 'frp'>, typeof frpSchemeSchema>,
+  SchemaHasFieldsOf<Kind<StrengtheningScheme, 'steel-plate'>, typeof steelPlateSchemeSchema>,
+  SchemaHasFieldsOf<Kind<StrengtheningScheme, 'concrete-layer'>, typeof concreteLayerSchemeSchema>,
+  SchemaHasFieldsOf<LayerBars, typeof layerBarsSchema>,
+  SchemaHasFieldsOf<MemberDefinition, typeof memberDefinitionSchema>,
+  SchemaHasFieldsOf<ProjectInfo, typeof projectInfoSchema>,
+  SchemaHasFieldsOf<AnalysisSettings, typeof analysisSettingsSchema>,
+  SchemaHasFieldsOf<Project, typeof projectSchema>,
+] = [true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true];
+void _everyFieldHasASchema;
 
 // --- walking data along the schema ---------------------------------------------------------------
 

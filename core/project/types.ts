@@ -5,13 +5,16 @@
  */
 import type { CodeBasis, MaterialSpec } from '../materials/specs.ts';
 import type { SectionDefinition } from '../section/definition.ts';
+import type { BilinearMethod } from '../section/results.ts';
 import type { BeamDefinition } from '../member/definition.ts';
 import type { AsFoundCondition, StrengtheningScheme } from '../retrofit/types.ts';
 
 export const PROJECT_FORMAT = 'hingeline-project';
 export const PROJECT_VERSION = 2;
 
-export type UnitSystem = 'si' | 'us';
+/** Display unit systems of a project file, in menu order (the file's spelling; core/units writes 'SI' and 'US'). */
+export const UNIT_SYSTEMS = ['si', 'us'] as const;
+export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
 
 /** A member as the project file stores it: the beam, and what is known of it as it stands. */
 export interface MemberDefinition extends BeamDefinition {
@@ -38,8 +41,8 @@ export interface ProjectInfo {
 export interface AnalysisSettings {
   /** Fraction of the post-yield peak moment below which a section's curve ends (default 0.8). */
   readonly momentDropFraction: number;
-  readonly bilinearMethod: 'priestley-2007' | 'equal-energy';
-  /** Number of integration segments along a span (default 200; refined automatically near hinges). */
+  readonly bilinearMethod: BilinearMethod;
+  /** Number of equal integration segments along a span (default 60); zone boundaries, load positions and the control point are added as stations, and service deflections refine the count until it no longer matters (core/member/service.ts). */
   readonly stations: number;
 }
 

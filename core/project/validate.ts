@@ -23,7 +23,7 @@ import { validateConcreteSpec, validateFrpSpec, validateSteelSpec } from '../mat
 import type { CodeBasis, ConcreteSpec, FrpSpec, MaterialSpec, SteelSpec } from '../materials/specs.ts';
 import { validateMember } from '../member/validate.ts';
 import { validateAsFound, validateSchemes } from '../retrofit/validate.ts';
-import { buildSectionModel, validateShape } from '../section/build.ts';
+import { buildSectionModel, checkBarNumbers, validateShape } from '../section/build.ts';
 import type { SectionDefinition } from '../section/definition.ts';
 import { InputError } from '../diagnostics.ts';
 import { formatNumber, toDisplay, unitLabel, type Quantity, type UnitSystem as DisplaySystem } from '../units/index.ts';
@@ -245,29 +245,12 @@ function materialReference(out: Diagnostic[], path: string, id: string, kind: Ma
 }
 
 /**
- * The numbers of each bar layer against the section builder's own ranges (core/section/build.ts:
- * count a whole number 1–100, diameter 3–60 mm, or an area above 0 and up to 10⁶ mm²).
+ * The numbers of each bar layer against the section builder's own ranges (core/section/build.ts
+ * checkBarNumbers).
  * @returns true when every layer can be handed to the builder safely
  */
 function barLayerPrecheck(out: Diagnostic[], section: SectionDefinition, path: string): boolean {
-  let ok = true;
-  section.bars.forEach((layer, i) => {
-    const at = `${path}.bars[${i}]`;
-    if (layer.count !== undefined || layer.diameter !== undefined) {
-      if (checkNumber(out, `${at}.count`, layer.count, { min: 1, max: 100 })) {
-        if (!Number.isInteger(layer.count)) {
-          out.push({ code: 'must-be-integer', path: `${at}.count`, severity: 'error', message: `must be a whole number of bars, got ${layer.count}` });
-          ok = false;
-        }
-      } else {
-        ok = false;
-      }
-      ok = checkNumber(out, `${at}.diameter`, layer.diameter, { min: 3, max: 60, unit: 'mm' }) && ok;
-    } else {
-      ok = checkNumber(out, `${at}.area`, layer.area, { min: 0, max: 1e6, exclusiveMin: true, unit: 'mm²' }) && ok;
-    }
-  });
-  return ok;
+  return section.bars.map((layer, i) => checkBarNumbers(out, layer, `${path}.bars[${i}]`)).every(Boolean);
 }
 
 /** Path of a member's own id (`members[3] "B-12".id`): a duplicate there makes results ambiguous. */

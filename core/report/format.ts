@@ -5,13 +5,9 @@
  */
 import { toDisplay } from '../units/convert.ts';
 import { formatFixed, formatNumber, formatQuantity, formatStrain, NOT_A_VALUE } from '../units/format.ts';
-import type { Quantity, UnitSystem } from '../units/quantities.ts';
-import type { UnitSystem as ProjectUnitSystem } from '../project/types.ts';
+import { displaySystem, type Quantity, type UnitSystem } from '../units/quantities.ts';
 
-/** Display system of a project unit setting ('si' → 'SI', 'us' → 'US'). */
-export function displaySystem(system: ProjectUnitSystem | UnitSystem): UnitSystem {
-  return system === 'us' || system === 'US' ? 'US' : 'SI';
-}
+export { displaySystem };
 
 type Maybe = number | null | undefined;
 
@@ -56,7 +52,7 @@ export interface ReportFormatter {
 }
 
 /** A formatter for the project's unit system. */
-export function reportFormatter(system: ProjectUnitSystem | UnitSystem): ReportFormatter {
+export function reportFormatter(system: UnitSystem | 'si' | 'us'): ReportFormatter {
   const s = displaySystem(system);
   // Numerical noise (e.g. 6e-8 N·mm where the moment is zero) prints as 0.
   const q = (quantity: Quantity, value: Maybe, options: Parameters<typeof formatQuantity>[3] = {}) => {

@@ -103,26 +103,19 @@ export function inPlaceStrength(code: CodeBasis, cores: CoreStatistics): InPlace
   const { meanStrength: mean, count, coefficientOfVariation: v } = cores;
   if (!(mean > 0) || !(v >= 0 && v < 1) || !Number.isFinite(mean)) throw new BugError(`inPlaceStrength needs mean > 0 and 0 ≤ V < 1, got ${mean}, ${v}`);
   const s = v * mean;
-  if (code === 'ACI 318-19') {
-    const k = aciCoreToleranceFactor(count);
-    const value = mean * (1 - k * v);
-    return {
-      code,
-      strength: value,
-      factor: k,
-      standardDeviation: s,
-      method: 'ACI 214.4R-10 tolerance-factor approach: lower tolerance limit of the 10 % fractile at 75 % confidence (equivalent specified strength f′c,eq)',
-      formula: `f′c,eq = f̄c − K·s = ${mean.toFixed(1)} − ${k.toFixed(3)} × ${s.toFixed(2)} = ${value.toFixed(1)} MPa (n = ${count}, V = ${(v * 100).toFixed(1)} %)`,
-    };
-  }
-  const k = en1990CharacteristicFactor(count);
+  const aci = code === 'ACI 318-19';
+  const k = aci ? aciCoreToleranceFactor(count) : en1990CharacteristicFactor(count);
   const value = mean * (1 - k * v);
   return {
     code,
     strength: value,
     factor: k,
     standardDeviation: s,
-    method: 'EN 1990 Annex D, D7.2: 5 % characteristic value from n tests with VX unknown (Eq. D.1, Table D1)',
-    formula: `fck,is = f̄c·(1 − kn·V) = ${mean.toFixed(1)} × (1 − ${k.toFixed(2)} × ${v.toFixed(3)}) = ${value.toFixed(1)} MPa (n = ${count})`,
+    method: aci
+      ? 'ACI 214.4R-10 tolerance-factor approach: lower tolerance limit of the 10 % fractile at 75 % confidence (equivalent specified strength f′c,eq)'
+      : 'EN 1990 Annex D, D7.2: 5 % characteristic value from n tests with VX unknown (Eq. D.1, Table D1)',
+    formula: aci
+      ? `f′c,eq = f̄c − K·s = ${mean.toFixed(1)} − ${k.toFixed(3)} × ${s.toFixed(2)} = ${value.toFixed(1)} MPa (n = ${count}, V = ${(v * 100).toFixed(1)} %)`
+      : `fck,is = f̄c·(1 − kn·V) = ${mean.toFixed(1)} × (1 − ${k.toFixed(2)} × ${v.toFixed(3)}) = ${value.toFixed(1)} MPa (n = ${count})`,
   };
 }

@@ -19,6 +19,26 @@ export interface Library {
 }
 
 // =====================================================================================================
+// Option lists (written once; the types, the file schema, the validators and the UI derive from them)
+// =====================================================================================================
+
+/** Where tested steel properties come from. */
+export const STEEL_TEST_SOURCES = ['coupons', 'era-default'] as const;
+/** Kinds of recorded defect. */
+export const DEFECT_KINDS = ['section-loss', 'cover-loss'] as const;
+/** Faces concrete can be lost from. */
+export const COVER_LOSS_FACES = ['top', 'bottom', 'left', 'right'] as const;
+/** Kinds of strengthening scheme. */
+export const SCHEME_KINDS = ['frp', 'steel-plate', 'concrete-layer'] as const;
+/** Faces a bonded item (FRP, plate) can be bonded to, the default first. */
+export const BONDED_FACES = ['bottom', 'top'] as const;
+/** Faces a new concrete layer can be cast on. */
+export const LAYER_FACES = ['top', 'bottom'] as const;
+/** How the substrate strain at installation is found (ACI 440.2R-17 10.2.3, or the section's own curve). */
+export const INSTALLATION_STRAIN_METHODS = ['cracked-elastic', 'moment-curvature'] as const;
+export type InstallationStrainMethod = (typeof INSTALLATION_STRAIN_METHODS)[number];
+
+// =====================================================================================================
 // Input: as-found condition
 // =====================================================================================================
 
@@ -46,7 +66,7 @@ export interface CoreTestSet {
 export interface SteelTestData {
   /** Steel material (library id) the data replace. */
   readonly steelId: string;
-  readonly source: 'coupons' | 'era-default';
+  readonly source: (typeof STEEL_TEST_SOURCES)[number];
   /** Yield stress fy, MPa (200–1000). */
   readonly yieldStress?: number;
   /** Ultimate stress fu, MPa (≥ fy). */
@@ -75,7 +95,7 @@ export interface CoverLossDefect {
   readonly kind: 'cover-loss';
   readonly sectionId?: string;
   /** The face the concrete is lost from. */
-  readonly face: 'top' | 'bottom' | 'left' | 'right';
+  readonly face: (typeof COVER_LOSS_FACES)[number];
   /** Thickness of concrete lost, measured in from that face, mm. */
   readonly depth: number;
   /**
@@ -89,6 +109,10 @@ export interface CoverLossDefect {
 
 /** A recorded defect of the as-found beam. */
 export type Defect = SectionLossDefect | CoverLossDefect;
+
+// The kind lists name the same kinds as the unions: a kind added to one and not the other fails to compile.
+const _kindsComplete: [[Defect['kind'], StrengtheningScheme['kind']], [(typeof DEFECT_KINDS)[number], (typeof SCHEME_KINDS)[number]]] extends [[(typeof DEFECT_KINDS)[number], (typeof SCHEME_KINDS)[number]], [Defect['kind'], StrengtheningScheme['kind']]] ? true : never = true;
+void _kindsComplete;
 
 /** The member as found: material strengths from testing and deterioration. */
 export interface AsFoundCondition {
@@ -135,10 +159,10 @@ export interface FrpScheme extends SchemeBase {
   /** Width of the laminate bf, mm. */
   readonly width: number;
   /** Face the FRP is bonded to (default 'bottom', for sagging). */
-  readonly face?: 'bottom' | 'top';
+  readonly face?: (typeof BONDED_FACES)[number];
   readonly installation?: InstallationLoad;
   /** Substrate strain at installation: cracked elastic section (ACI 440.2R-17 10.2.3, default) or the moment–curvature curve. */
-  readonly installationStrainMethod?: 'cracked-elastic' | 'moment-curvature';
+  readonly installationStrainMethod?: InstallationStrainMethod;
 }
 
 /** A steel plate bonded (and anchored) to a face. */
@@ -148,9 +172,9 @@ export interface SteelPlateScheme extends SchemeBase {
   /** Plate thickness and width, mm. */
   readonly thickness: number;
   readonly width: number;
-  readonly face?: 'bottom' | 'top';
+  readonly face?: (typeof BONDED_FACES)[number];
   readonly installation?: InstallationLoad;
-  readonly installationStrainMethod?: 'cracked-elastic' | 'moment-curvature';
+  readonly installationStrainMethod?: InstallationStrainMethod;
 }
 
 /** Bars of a new concrete layer. */
@@ -168,7 +192,7 @@ export interface LayerBars {
 /** A new concrete layer with its own concrete and bars: an overlay on top or a jacket under the soffit. */
 export interface ConcreteLayerScheme extends SchemeBase {
   readonly kind: 'concrete-layer';
-  readonly face: 'top' | 'bottom';
+  readonly face: (typeof LAYER_FACES)[number];
   /** Layer thickness, mm. */
   readonly thickness: number;
   /** Layer width, mm; omitted → the width of the section at that face. Centred on that face. */
@@ -219,7 +243,7 @@ export interface AsFoundSummary {
   readonly steel: readonly {
     readonly steelId: string;
     readonly derivedId: string;
-    readonly source: 'coupons' | 'era-default';
+    readonly source: (typeof STEEL_TEST_SOURCES)[number];
     readonly yieldStress: number;
     readonly ultimateStress: number;
     readonly ruptureStrain: number | null;
@@ -273,7 +297,7 @@ export interface InstallationStrain {
   /** Unstrengthened capacity (peak moment) and first-yield moment in that direction, N·mm. */
   readonly capacity: number | null;
   readonly firstYieldMoment: number | null;
-  readonly method: 'cracked-elastic' | 'moment-curvature';
+  readonly method: InstallationStrainMethod;
   /** Cracked elastic data: neutral axis depth kd (mm, from the compression face), Icr (mm⁴), Ec (MPa). */
   readonly neutralAxisDepth: number | null;
   readonly crackedInertia: number | null;

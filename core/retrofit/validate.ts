@@ -7,11 +7,8 @@ import { checkNumber, type Diagnostic } from '../diagnostics.ts';
 import type { BeamDefinition } from '../member/definition.ts';
 import type { SectionDefinition } from '../section/definition.ts';
 import { MINIMUM_CORE_COUNT } from './in-place-strength.ts';
-import type { AsFoundCondition, InstallationLoad, Library, StrengtheningScheme } from './types.ts';
+import { COVER_LOSS_FACES, DEFECT_KINDS, SCHEME_KINDS, type AsFoundCondition, type InstallationLoad, type Library, type StrengtheningScheme } from './types.ts';
 
-const DEFECT_KINDS = ['section-loss', 'cover-loss'];
-const FACES = ['top', 'bottom', 'left', 'right'];
-const SCHEME_KINDS = ['frp', 'steel-plate', 'concrete-layer'];
 
 function error(out: Diagnostic[], code: Diagnostic['code'], path: string, message: string): void {
   out.push({ code, path, severity: 'error', message });
@@ -97,7 +94,7 @@ export function validateAsFound(condition: AsFoundCondition, member: BeamDefinit
         }
       }
     } else {
-      if (!FACES.includes(d.face)) error(out, 'unknown-option', `${at}.face`, `must be one of ${FACES.map((f) => `"${f}"`).join(', ')}, got ${JSON.stringify(d.face)}`);
+      if (!COVER_LOSS_FACES.includes(d.face)) error(out, 'unknown-option', `${at}.face`, `must be one of ${COVER_LOSS_FACES.map((f) => `"${f}"`).join(', ')}, got ${JSON.stringify(d.face)}`);
       checkNumber(out, `${at}.depth`, d.depth, { min: 0, exclusiveMin: true, max: 1000, unit: 'mm' });
       if (d.face === 'top' || d.face === 'bottom') {
         if (d.from !== undefined || d.to !== undefined) error(out, 'inconsistent', `${at}.from`, 'a depth range (from, to) applies to the left and right faces only');

@@ -20,7 +20,7 @@ import { elasticProperties, type ElasticProperties } from './elastic.ts';
 import type { BendingDirection, SectionModel } from './model.ts';
 import { momentCurvature, type MomentCurvatureOptions } from './moment-curvature.ts';
 import { tensionSteel } from './model.ts';
-import type { MomentCurvatureResult } from './results.ts';
+import type { BilinearMethod, MomentCurvatureResult } from './results.ts';
 import { withMaterials } from './transform.ts';
 
 /** Gravity, m/s² (standard acceleration, CGPM 1901). */
@@ -55,7 +55,7 @@ export interface SectionAnalysis {
 export interface SectionAnalysisOptions {
   readonly code: CodeBasis;
   readonly momentDropFraction: number;
-  readonly bilinearMethod: 'priestley-2007' | 'equal-energy';
+  readonly bilinearMethod: BilinearMethod;
   /** Extra parts from a strengthening scheme or an as-found condition. */
   readonly additions?: SectionAdditions;
 }

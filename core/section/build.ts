@@ -125,6 +125,21 @@ export function validateShape(shape: SectionShape, path: string): Diagnostic[] {
   return out;
 }
 
+/**
+ * The numbers of a bar layer: a whole count of 1–100 bars with a diameter of 3–60 mm, or a total
+ * area above 0 and up to 10⁶ mm². Appends a diagnostic per problem; true when all are in range.
+ * @param at path of the layer, e.g. `sections[2] "S-3".bars[0]`
+ */
+export function checkBarNumbers(out: Diagnostic[], layer: BarLayer, at: string): boolean {
+  if (layer.count === undefined && layer.diameter === undefined) return checkNumber(out, `${at}.area`, layer.area, { min: 0, max: 1e6, exclusiveMin: true, unit: 'mm²' });
+  let ok = checkNumber(out, `${at}.count`, layer.count, { min: 1, max: 100 });
+  if (ok && !Number.isInteger(layer.count)) {
+    out.push({ code: 'must-be-integer', path: `${at}.count`, severity: 'error', message: `must be a whole number of bars, got ${layer.count}` });
+    ok = false;
+  }
+  return checkNumber(out, `${at}.diameter`, layer.diameter, { min: 3, max: 60, unit: 'mm' }) && ok;
+}
+
 function rectangleProfile(x0: number, x1: number, y0: number, y1: number): Strip[] {
   return [{ top: y0, bottom: y1, widthTop: x1 - x0, widthBottom: x1 - x0 }];
 }
@@ -223,14 +238,7 @@ export function buildSectionModel(definition: SectionDefinition, materials: Mate
     const at = `${path}.bars[${i}]`;
     const before = problems.length;
     checkNumber(problems, `${at}.depth`, layer.depth, { min: 0, max: height, exclusiveMin: true, exclusiveMax: true, unit: 'mm' });
-    if (layer.count !== undefined || layer.diameter !== undefined) {
-      if (checkNumber(problems, `${at}.count`, layer.count, { min: 1, max: 100 }) && !Number.isInteger(layer.count)) {
-        problems.push({ code: 'must-be-integer', path: `${at}.count`, severity: 'error', message: `must be a whole number of bars, got ${layer.count}` });
-      }
-      checkNumber(problems, `${at}.diameter`, layer.diameter, { min: 3, max: 60, unit: 'mm' });
-    } else {
-      checkNumber(problems, `${at}.area`, layer.area, { min: 0, max: 1e6, exclusiveMin: true, unit: 'mm²' });
-    }
+    checkBarNumbers(problems, layer, at);
     const steel = materials.steel(layer.steelId);
     if (!steel) problems.push({ code: 'unknown-reference', path: `${at}.steelId`, severity: 'error', message: `no steel material with id "${layer.steelId}" in the library` });
     if (problems.length > before || !steel || !concrete) return;

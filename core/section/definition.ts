@@ -4,6 +4,10 @@
  */
 import type { SectionShape } from './shapes.ts';
 
+/** Where the bars of a layer are spread across (BarLayer.spread), in menu order. */
+export const BAR_SPREADS = ['web', 'chord'] as const;
+export type BarSpread = (typeof BAR_SPREADS)[number];
+
 export interface BarLayer {
   /** Id of a steel material in the library. */
   readonly steelId: string;
@@ -18,7 +22,7 @@ export interface BarLayer {
    * Where the bars are spread across for drawing and containment: inside the web's hoops ('web',
    * default) or across the full width of the concrete at that depth ('chord', e.g. slab bars).
    */
-  readonly spread?: 'web' | 'chord';
+  readonly spread?: BarSpread;
   /** Free label, e.g. "bottom bars". */
   readonly label?: string;
 }

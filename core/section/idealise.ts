@@ -3,7 +3,7 @@
  * point and the ultimate point), by the method the project chooses.
  * Units: curvature 1/mm, moment N·mm.
  */
-import type { BilinearIdealisation, CurvePoint, KeyPoint, KeyPointName } from './results.ts';
+import type { BilinearIdealisation, BilinearMethod, CurvePoint, KeyPoint, KeyPointName } from './results.ts';
 
 /** Area under the curve from 0 to φu by the trapezoid rule, N·mm/mm. */
 function areaUnder(points: readonly CurvePoint[], upTo: number): number {
@@ -27,7 +27,7 @@ function areaUnder(points: readonly CurvePoint[], upTo: number): number {
  * - 'equal-energy': same elastic slope, yield point chosen so that the bilinear curve encloses the
  *   same area as the computed curve up to φu (common practice, no source).
  */
-export function idealise(points: readonly CurvePoint[], keyPoints: Partial<Record<KeyPointName, KeyPoint>>, method: 'priestley-2007' | 'equal-energy'): BilinearIdealisation | undefined {
+export function idealise(points: readonly CurvePoint[], keyPoints: Partial<Record<KeyPointName, KeyPoint>>, method: BilinearMethod): BilinearIdealisation | undefined {
   const fy = keyPoints.firstYield;
   const u = keyPoints.ultimate;
   if (!fy || !u || !(fy.curvature > 0) || !(fy.moment > 0)) return undefined;

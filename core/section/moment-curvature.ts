@@ -22,7 +22,7 @@ import { CurveSolver, type Snapshot } from './curve-solver.ts';
 import type { EquilibriumState } from './equilibrium.ts';
 import { idealise } from './idealise.ts';
 import { directionSign, tensionSteel, type BendingDirection, type ConcretePart, type SectionModel } from './model.ts';
-import type { CurvePoint, CurveStatus, KeyPoint, KeyPointName, MomentCurvatureResult, UltimateCause } from './results.ts';
+import type { BilinearMethod, CurvePoint, CurveStatus, KeyPoint, KeyPointName, MomentCurvatureResult, UltimateCause } from './results.ts';
 import { curvePointOf, sectionState } from './state.ts';
 
 export interface MomentCurvatureOptions {
@@ -34,7 +34,7 @@ export interface MomentCurvatureOptions {
   /** Fraction of the post-yield peak below which the curve ends (default 0.8). */
   readonly momentDropFraction?: number;
   /** Bilinear idealisation method (default 'priestley-2007'). */
-  readonly bilinearMethod?: 'priestley-2007' | 'equal-energy';
+  readonly bilinearMethod?: BilinearMethod;
   /** Safety cap on the number of curvature steps (default 600). */
   readonly maxSteps?: number;
   /** Post-yield step as a fraction of the current curvature (default 0.08). */
@@ -222,7 +222,7 @@ function curveResult(
     keyAt: Partial<Record<KeyPointName, Snapshot>>;
     governing: readonly ConcretePart[];
     warnings: string[];
-    bilinearMethod: 'priestley-2007' | 'equal-energy';
+    bilinearMethod: BilinearMethod;
     solves: number;
   },
 ): MomentCurvatureResult {

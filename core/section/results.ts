@@ -6,6 +6,10 @@
  */
 import type { BendingDirection, ElementKind } from './model.ts';
 
+/** Bilinear idealisations of a moment–curvature curve (core/section/idealise.ts), in menu order. */
+export const BILINEAR_METHODS = ['priestley-2007', 'equal-energy'] as const;
+export type BilinearMethod = (typeof BILINEAR_METHODS)[number];
+
 export interface CurvePoint {
   /** Curvature magnitude, 1/mm. */
   readonly curvature: number;
@@ -86,7 +90,7 @@ export type CurveStatus =
   | { readonly kind: 'not-converged'; readonly atCurvature: number; readonly message: string };
 
 export interface BilinearIdealisation {
-  readonly method: 'priestley-2007' | 'equal-energy';
+  readonly method: BilinearMethod;
   /** Idealised (nominal) yield curvature φy, 1/mm, and moment My (= Mn for the Priestley method), N·mm. */
   readonly yieldCurvature: number;
   readonly yieldMoment: number;

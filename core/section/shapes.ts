@@ -9,6 +9,13 @@ export interface Point {
   readonly y: number;
 }
 
+/** Every shape kind, in menu order. */
+export const SHAPE_KINDS = ['rectangle', 'tee', 'inverted-tee', 'ell', 'i-shape', 'box', 'polygon'] as const;
+
+/** The side of an ell's flange. */
+export const FLANGE_SIDES = ['left', 'right'] as const;
+export type FlangeSide = (typeof FLANGE_SIDES)[number];
+
 export type SectionShape =
   | { readonly kind: 'rectangle'; readonly width: number; readonly height: number }
   /** Flange at the top (slab acting with a beam in sagging). */
@@ -16,7 +23,7 @@ export type SectionShape =
   /** Flange at the bottom. */
   | { readonly kind: 'inverted-tee'; readonly height: number; readonly webWidth: number; readonly flangeWidth: number; readonly flangeThickness: number }
   /** Flange at the top on one side of the web only (edge or spandrel beam). */
-  | { readonly kind: 'ell'; readonly height: number; readonly webWidth: number; readonly flangeWidth: number; readonly flangeThickness: number; readonly flangeSide: 'left' | 'right' }
+  | { readonly kind: 'ell'; readonly height: number; readonly webWidth: number; readonly flangeWidth: number; readonly flangeThickness: number; readonly flangeSide: FlangeSide }
   | {
       readonly kind: 'i-shape';
       readonly height: number;
@@ -31,6 +38,10 @@ export type SectionShape =
   | { readonly kind: 'polygon'; readonly outline: readonly Point[]; readonly voids?: readonly (readonly Point[])[] };
 
 export type ShapeKind = SectionShape['kind'];
+
+// The list and the union name the same kinds: a kind added to one and not the other fails to compile.
+const _shapeKindsComplete: [ShapeKind, (typeof SHAPE_KINDS)[number]] extends [(typeof SHAPE_KINDS)[number], ShapeKind] ? true : never = true;
+void _shapeKindsComplete;
 
 export interface ShapeOutline {
   readonly outline: readonly Point[];

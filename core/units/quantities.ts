@@ -6,6 +6,14 @@ export type UnitSystem = 'SI' | 'US';
 /** Every display system, in the order a settings menu lists them. */
 export const UNIT_SYSTEMS: readonly UnitSystem[] = ['SI', 'US'];
 
+/**
+ * The display system of a unit setting as the project file spells it ('si', 'us') or as core/units
+ * does ('SI', 'US'): the one place the two spellings meet.
+ */
+export function displaySystem(system: UnitSystem | 'si' | 'us'): UnitSystem {
+  return system === 'us' || system === 'US' ? 'US' : 'SI';
+}
+
 /** A kind of engineering value shown to the user; each has its own display unit per system. */
 export type Quantity =
   | 'force'

@@ -4,7 +4,7 @@
  * project reads kip and ft and an SI project kN and m. The numeric result fields stay internal SI.
  */
 import { formatQuantity } from './format.ts';
-import type { UnitSystem } from './quantities.ts';
+import { displaySystem, type UnitSystem } from './quantities.ts';
 
 export interface QuantityText {
   readonly system: UnitSystem;
@@ -24,7 +24,7 @@ export interface QuantityText {
 
 /** A sentence formatter for 'SI' / 'US' (or the project file's 'si' / 'us'). */
 export function quantityText(system: UnitSystem | 'si' | 'us'): QuantityText {
-  const s: UnitSystem = system === 'us' || system === 'US' ? 'US' : 'SI';
+  const s = displaySystem(system);
   return {
     system: s,
     force: (v) => formatQuantity('force', v, s),

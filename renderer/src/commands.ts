@@ -3,6 +3,7 @@
  * the interface). The renderer owns these decisions; the host only carries files and dialogs.
  */
 import type { Diagnostic } from '../../core/diagnostics.ts';
+import { projectFileStem } from '../../core/project/file.ts';
 
 import { revertFocusedField } from './composables/field-history.ts';
 import { getHost, RESULTS_CAUTION, type MenuCommand, type OpenedFile } from './host/index.ts';
@@ -20,9 +21,7 @@ function describeDiagnostic(d: Diagnostic): string {
   return `${d.severity === 'warning' ? 'warning: ' : ''}${path}: ${d.message}`;
 }
 
-function baseName(name: string): string {
-  return name.replace(/\.(hingeline|json)$/i, '').replace(/[\\/:*?"<>|]+/g, ' ').trim() || 'project';
-}
+const baseName = projectFileStem;
 
 export function useCommands() {
   const host = getHost();

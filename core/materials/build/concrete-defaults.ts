@@ -2,9 +2,6 @@ import type { CodeBasis, ConcreteSpec } from '../specs.ts';
 import { ACI_CRUSHING_STRAIN, aciElasticModulus, aciModulusOfRupture } from '../code/aci318.ts';
 import { en1992ElasticModulus, en1992MeanStrength, en1992MeanTensileStrength, en1992PeakStrain, en1992UltimateStrainNonlinear } from '../code/en1992.ts';
 
-/** Every code basis, in menu order. */
-export const CODE_BASES: readonly CodeBasis[] = ['ACI 318-19', 'EN 1992-1-1'];
-
 /**
  * The numbers a concrete law is built from once the code basis has filled in what the spec leaves
  * undefined (MPa, strains dimensionless):

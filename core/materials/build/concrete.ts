@@ -1,5 +1,5 @@
 import { InputError, type Diagnostic } from '../../diagnostics.ts';
-import type { CodeBasis, ConcreteCompressionModel, ConcreteSpec, ConcreteTensionModel, ConfinementInput } from '../specs.ts';
+import { CODE_BASES, CONCRETE_COMPRESSION_MODELS, CONCRETE_TENSION_MODELS, type CodeBasis, type ConcreteCompressionModel, type ConcreteSpec, type ConfinementInput } from '../specs.ts';
 import type { CompressionLaw, ConcreteMaterial, TensionLaw } from '../types.ts';
 import { checkField, fieldPath } from '../checks.ts';
 import { combineConcrete } from '../concrete/combine.ts';
@@ -14,14 +14,7 @@ import { linearBrittleTension, noTension, tensionStiffening } from '../concrete/
 import { thorenfeldtCollinsCompression, thorenfeldtCollinsConstants } from '../concrete/thorenfeldt-collins.ts';
 import { en1992PeakStrain, en1992UltimateStrainNonlinear } from '../code/en1992.ts';
 import { checkIdentity, checkOption, collectLawDiagnostics, pathMapper } from './common.ts';
-import { CODE_BASES, resolveConcrete, type ResolvedConcrete } from './concrete-defaults.ts';
-
-/** Every concrete compression model, in menu order. */
-export const CONCRETE_COMPRESSION_MODELS: readonly ConcreteCompressionModel[] = [
-  'hognestad', 'modified-kent-park', 'mander', 'popovics', 'thorenfeldt-collins', 'en1992-nonlinear', 'en1992-parabola-rectangle',
-];
-/** Every concrete tension model, in menu order. */
-export const CONCRETE_TENSION_MODELS: readonly ConcreteTensionModel[] = ['none', 'linear-brittle', 'tension-stiffening'];
+import { resolveConcrete, type ResolvedConcrete } from './concrete-defaults.ts';
 /** Compression models with a confined-core form. */
 export const CONFINEMENT_MODELS: readonly ConcreteCompressionModel[] = ['mander', 'modified-kent-park'];
 

@@ -1,5 +1,5 @@
 import { InputError, type Diagnostic } from '../../diagnostics.ts';
-import type { SteelModel, SteelSpec } from '../specs.ts';
+import { STEEL_MODELS, type SteelModel, type SteelSpec } from '../specs.ts';
 import type { SteelMaterial } from '../types.ts';
 import { checkField, fieldPath } from '../checks.ts';
 import { bilinearSteel } from '../steel/bilinear.ts';
@@ -7,9 +7,6 @@ import { elasticPlasticSteel } from '../steel/elastic-plastic.ts';
 import { manderPowerSteel } from '../steel/mander-power.ts';
 import { parkPaulaySteel } from '../steel/park-paulay.ts';
 import { checkIdentity, checkOption, collectLawDiagnostics, pathMapper } from './common.ts';
-
-/** Every steel model, in menu order. */
-export const STEEL_MODELS: readonly SteelModel[] = ['elastic-plastic', 'bilinear', 'park-paulay', 'mander-power'];
 
 /** Default Es = 200 000 MPa. @see ACI 318-19 20.2.2.2; EN 1992-1-1 3.2.7(4) */
 export const DEFAULT_STEEL_MODULUS = 200_000;

@@ -3,20 +3,11 @@ import type { CompressionLaw } from '../types.ts';
 import { assertStrainIsNumber, sortedBreakpoints } from '../checks.ts';
 
 /** What a published compression model supplies; `compressionLaw` adds the guards every law shares. */
-export interface CompressionCurve {
-  readonly model: string;
-  readonly label: string;
-  readonly references: readonly string[];
+export interface CompressionCurve extends Omit<CompressionLaw, 'stress'> {
   /** σ(ε) in MPa for 0 < ε ≤ endStrain (compressive magnitudes). */
   readonly curve: (strain: number) => number;
   /** Last strain of the curve; the stress is 0 beyond it (crushed, spalled). */
   readonly endStrain: number;
-  readonly breakpoints: readonly number[];
-  readonly initialModulus: number;
-  readonly peakStress: number;
-  readonly peakStrain: number;
-  readonly crushingStrain: number;
-  readonly confined: boolean;
 }
 
 /**

@@ -1,18 +1,14 @@
 import { throwIfErrors, type Diagnostic } from '../../diagnostics.ts';
 import type { SteelMaterial } from '../types.ts';
 import { checkField, fieldPath, reportInconsistent, show } from '../checks.ts';
-import { symmetricSteel, validateSteelParameters, type SteelParameters } from './symmetric-steel.ts';
+import { hardeningFrame, symmetricSteel, validateSteelParameters, type HardeningSteelParameters } from './symmetric-steel.ts';
 
 /** Citation for the report's reference list (from memory). */
 export const MANDER_STEEL_REFERENCE =
   'Mander, J. B. (1983). Seismic design of bridge piers. PhD thesis, University of Canterbury, Christchurch; Research Report 84-2 (1984).';
 
 /** Inputs of manderPowerSteel (MPa, strains dimensionless). */
-export interface ManderPowerSteelParameters extends SteelParameters {
-  /** fsu, MPa, ≥ fy. */
-  readonly ultimateStress: number;
-  /** εsh, εy ≤ εsh < εsu. */
-  readonly hardeningStrain: number;
+export interface ManderPowerSteelParameters extends HardeningSteelParameters {
   /** Esh, tangent at the onset of hardening, MPa; default 2(fsu − fy)/(εsu − εsh), i.e. P = 2. */
   readonly hardeningModulus?: number;
 }
@@ -64,11 +60,7 @@ export function manderPowerSteel(p: ManderPowerSteelParameters): SteelMaterial {
     model: 'mander-power',
     label: 'Mander (1983) steel with power-law strain hardening',
     references: [MANDER_STEEL_REFERENCE],
-    elasticModulus: p.elasticModulus,
-    yieldStress: p.yieldStress,
-    ultimateStress: p.ultimateStress,
-    hardeningStrain: p.hardeningStrain,
-    ruptureStrain: p.ruptureStrain,
+    ...hardeningFrame(p),
     postYield: (strain) => {
       if (!hardening || strain <= p.hardeningStrain) return p.yieldStress;
       return p.ultimateStress + (p.yieldStress - p.ultimateStress) * ((p.ruptureStrain - strain) / span) ** P;

@@ -1,17 +1,12 @@
 import { throwIfErrors, type Diagnostic } from '../../diagnostics.ts';
 import type { SteelMaterial } from '../types.ts';
-import { symmetricSteel, validateSteelParameters, type SteelParameters } from './symmetric-steel.ts';
+import { hardeningFrame, symmetricSteel, validateSteelParameters, type HardeningSteelParameters } from './symmetric-steel.ts';
 
 /** Citation for the report's reference list. */
 export const PARK_PAULAY_REFERENCE = 'Park, R. & Paulay, T. (1975). Reinforced Concrete Structures. Wiley, New York. Section 2.2.';
 
 /** Inputs of parkPaulaySteel (MPa, strains dimensionless). */
-export interface ParkPaulaySteelParameters extends SteelParameters {
-  /** fsu, MPa, ≥ fy. */
-  readonly ultimateStress: number;
-  /** εsh, onset of hardening, εy ≤ εsh < εsu. */
-  readonly hardeningStrain: number;
-}
+export type ParkPaulaySteelParameters = HardeningSteelParameters;
 
 /** r = εsu − εsh and m = ((fsu/fy)(30r + 1)² − 60r − 1)/(15r²). @see Park & Paulay (1975), Eq. (2.6) — equation number from memory */
 export function parkPaulayConstants(p: ParkPaulaySteelParameters): { r: number; m: number } {
@@ -41,11 +36,7 @@ export function parkPaulaySteel(p: ParkPaulaySteelParameters): SteelMaterial {
     model: 'park-paulay-1975',
     label: 'Park & Paulay (1975) steel with strain hardening',
     references: [PARK_PAULAY_REFERENCE],
-    elasticModulus: p.elasticModulus,
-    yieldStress: p.yieldStress,
-    ultimateStress: p.ultimateStress,
-    hardeningStrain: p.hardeningStrain,
-    ruptureStrain: p.ruptureStrain,
+    ...hardeningFrame(p),
     postYield: (strain) => {
       if (strain <= p.hardeningStrain) return p.yieldStress;
       const u = strain - p.hardeningStrain;

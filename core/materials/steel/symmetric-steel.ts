@@ -12,6 +12,19 @@ export interface SteelParameters {
   readonly ruptureStrain: number;
 }
 
+/** Inputs of a steel law with strain hardening (MPa, strains dimensionless, magnitudes). */
+export interface HardeningSteelParameters extends SteelParameters {
+  /** fsu, MPa, ≥ fy. */
+  readonly ultimateStress: number;
+  /** εsh, onset of hardening, εy ≤ εsh < εsu. */
+  readonly hardeningStrain: number;
+}
+
+/** The frame of a hardening law's curve: Es, fy, fsu, εsh, εsu. */
+export function hardeningFrame(p: HardeningSteelParameters): Pick<SteelCurve, 'elasticModulus' | 'yieldStress' | 'ultimateStress' | 'hardeningStrain' | 'ruptureStrain'> {
+  return { elasticModulus: p.elasticModulus, yieldStress: p.yieldStress, ultimateStress: p.ultimateStress, hardeningStrain: p.hardeningStrain, ruptureStrain: p.ruptureStrain };
+}
+
 /** What each model adds to the symmetric frame. */
 export interface SteelCurve {
   readonly model: string;

@@ -1,13 +1,13 @@
 /**
- * What the section drawing of the editor shows, as plain primitives in SVG pixels: the concrete
- * outline (core/section/shapes.ts `shapeOutline`), the hoop at its centreline, the cover line and
- * the confined core, every bar at its position (core/section/build.ts `barPositions`) drawn with
- * its diameter, dimension lines and a scale bar. Drawn to scale: one factor for x and y.
+ * What the section drawing of the editor shows, as plain primitives in SVG pixels: the figure of
+ * core/charts/section-geometry.ts (outline, hoop at its centreline, cover line, confined core, every
+ * bar at its position) scaled to the space, with dimension lines, layer labels and a scale bar.
+ * Drawn to scale: one factor for x and y.
  * Units: the definition in mm; labels in the display units of the project (core/units).
  */
-import { layerDiameter, type SectionDefinition } from '../../../core/section/definition.ts';
-import { barPositions, hoopCentreline, shapeHeight, webExtent } from '../../../core/section/build.ts';
-import { shapeOutline, type Point } from '../../../core/section/shapes.ts';
+import type { SectionDefinition } from '../../../core/section/definition.ts';
+import type { Point } from '../../../core/section/shapes.ts';
+import { sectionFigure, spreadLabels } from '../../../core/charts/section-geometry.ts';
 import { formatQuantity, toDisplay, unitLabel, fromDisplay } from '../../../core/units/index.ts';
 import type { UnitSystem } from '../../../core/project/types.ts';
 import { displaySystem } from '../project/units.ts';
@@ -70,20 +70,9 @@ export function roundLength(span: number): number {
 export function sectionGeometry(section: SectionDefinition, system: UnitSystem, options: SectionGeometryOptions = {}): SectionGeometry | null {
   const display = displaySystem(system);
   const length = (mm: number) => formatQuantity('sectionLength', mm, display);
-  let outline: readonly Point[];
-  let voids: readonly (readonly Point[])[];
-  try {
-    ({ outline, voids } = shapeOutline(section.shape));
-  } catch {
-    return null;
-  }
-  const all = [...outline, ...voids.flat()];
-  if (all.length < 3 || !all.every((p) => finite(p.x) && finite(p.y))) return null;
-  const xMin = Math.min(...all.map((p) => p.x));
-  const xMax = Math.max(...all.map((p) => p.x));
-  const depth = shapeHeight(section.shape);
-  const widthMm = xMax - xMin;
-  if (!(widthMm > 0) || !(depth > 0)) return null;
+  const figure = sectionFigure(section);
+  if (!figure) return null;
+  const { outline, voids, xMin, xMax, width: widthMm, height: depth, web } = figure;
 
   const maxWidth = options.maxWidth ?? 380;
   const maxHeight = options.maxHeight ?? 300;
@@ -98,50 +87,23 @@ export function sectionGeometry(section: SectionDefinition, system: UnitSystem, 
   const X = (x: number) => r2(left + (x - xMin) * k);
   const Y = (y: number) => r2(top + y * k);
   const path = (points: readonly Point[]) => `M${points.map((p) => `${X(p.x)} ${Y(p.y)}`).join(' L')} Z`;
-  const problems: string[] = [];
-
-  const web = webExtent(section.shape);
-  const hoops = section.hoops;
-  let hoop: SectionGeometry['hoop'] = null;
-  let cover: Rect | null = null;
-  let core: Rect | null = null;
-  const centreline = hoops && hoops.diameter > 0 ? hoopCentreline(section.shape, hoops) : undefined;
-  if (hoops && web && finite(hoops.clearCover) && finite(hoops.diameter) && hoops.diameter > 0) {
-    if (centreline) {
-      const { x0, x1, y0, y1 } = centreline;
-      hoop = { x: X(x0), y: Y(y0), w: r2((x1 - x0) * k), h: r2((y1 - y0) * k), rx: r2(Math.min(2 * hoops.diameter, (x1 - x0) / 2) * k), stroke: r2(Math.max(hoops.diameter * k, 1)) };
-      const c = hoops.clearCover;
-      cover = { x: X(web.x0 + c), y: Y(c), w: r2((web.x1 - web.x0 - 2 * c) * k), h: r2((depth - 2 * c) * k) };
-      if (hoops.confineCore) core = { x: hoop.x, y: hoop.y, w: hoop.w, h: hoop.h };
-    } else problems.push('The hoops leave no core inside the cover.');
-  }
+  const r2k = (mm: number) => r2(mm * k);
+  const rect = (r: { x0: number; x1: number; y0: number; y1: number }): Rect => ({ x: X(r.x0), y: Y(r.y0), w: r2k(r.x1 - r.x0), h: r2k(r.y1 - r.y0) });
+  const hoop: SectionGeometry['hoop'] = figure.hoop && web ? { ...rect(figure.hoop), rx: r2k(figure.hoop.radius), stroke: r2(Math.max(figure.hoop.diameter * k, 1)) } : null;
+  const cover: Rect | null = hoop && figure.cover ? rect(figure.cover) : null;
+  const core: Rect | null = hoop && figure.confinedCore ? { x: hoop.x, y: hoop.y, w: hoop.w, h: hoop.h } : null;
 
   const bars: DrawnBar[] = [];
   const labels: LayerLabel[] = [];
-  section.bars.forEach((layer, index) => {
-    const diameter = layerDiameter(layer);
-    if (!finite(layer.depth) || !finite(diameter) || diameter <= 0) {
-      problems.push(`Layer ${index + 1} cannot be drawn (its depth or bar size is missing).`);
-      return;
-    }
-    let positions: number[] = [];
-    try {
-      positions = barPositions(section, layer).filter(finite);
-    } catch {
-      positions = [];
-    }
+  for (const { layer, index, diameter, positions } of figure.layers) {
     const r = Math.max((diameter / 2) * k, 1.5);
     for (const x of positions) bars.push({ cx: X(x), cy: Y(layer.depth), r: r2(r), layer: index });
     labels.push({ layer: index, text: labelTexts[index]!, x: X(xMax) + 16, y: Y(layer.depth), fromX: positions.length > 0 ? X(Math.max(...positions)) + r : X(xMax), fromY: Y(layer.depth) });
-  });
+  }
   // Spread the labels so that they never overlap.
   const sorted = [...labels].sort((a, b) => a.y - b.y);
-  const gap = 14;
-  const placed: LayerLabel[] = [];
-  for (const label of sorted) {
-    const y = placed.length === 0 ? label.y : Math.max(label.y, placed[placed.length - 1]!.y + gap);
-    placed.push({ ...label, y });
-  }
+  const spread = spreadLabels(sorted.map((l) => l.y), 14);
+  const placed: LayerLabel[] = sorted.map((label, i) => ({ ...label, y: spread[i]! }));
   const heightPx = Math.ceil(Math.max(Y(depth) + bottom, (placed[placed.length - 1]?.y ?? 0) + 12));
 
   const dimensions: Dimension[] = [];
@@ -176,6 +138,6 @@ export function sectionGeometry(section: SectionDefinition, system: UnitSystem, 
     labels: placed,
     scaleBar,
     scale: k,
-    problems,
+    problems: figure.problems,
   };
 }

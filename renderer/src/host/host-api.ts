@@ -120,6 +120,5 @@ export const EXPORT_EXTENSIONS: Readonly<Record<string, string>> = {
 /** Extension of saved projects (JSON inside). */
 export const PROJECT_EXTENSION = '.hingeline';
 
-/** The caution every result-bearing surface carries. */
-export const RESULTS_CAUTION =
-  'Results are for review by a qualified engineer and defer to local codes and licensed practice.';
+/** The caution every result-bearing surface carries (written once, in core). */
+export { RESULTS_CAUTION } from '../../../core/assessment/results.ts';

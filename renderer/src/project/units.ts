@@ -5,13 +5,11 @@
  * field showing inches, or `24'` for feet: it is converted, never misread.
  * Conversion factors all come from core/units; nothing here knows a factor of its own.
  */
-import { QUANTITIES, UNITS, displayUnit, fromDisplay, toDisplay, type Quantity, type UnitId, type UnitSystem as DisplaySystem } from '../../../core/units/index.ts';
+import { QUANTITIES, UNITS, displaySystem, displayUnit, fromDisplay, toDisplay, type Quantity, type UnitId } from '../../../core/units/index.ts';
 import type { UnitSystem } from '../../../core/project/types.ts';
 
 /** core/units' name of the project's unit system. */
-export function displaySystem(system: UnitSystem): DisplaySystem {
-  return system === 'us' ? 'US' : 'SI';
-}
+export { displaySystem };
 
 /** Label of the unit a field of `quantity` shows in `system`, e.g. `ft`, `kip·ft`, `MPa`. */
 export function fieldUnit(quantity: Quantity, system: UnitSystem): string {

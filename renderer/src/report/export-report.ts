@@ -2,6 +2,7 @@
  * "Export report": the PDF of the member on screen or of the whole project, made in a report
  * worker (report-worker.ts) and handed to the host to save (and open with the system viewer).
  */
+import { projectFileStem } from '../../../core/project/file.ts';
 import type { Project } from '../../../core/project/types.ts';
 import { toRaw } from 'vue';
 import packageJson from '../../../package.json';
@@ -60,9 +61,7 @@ export function makeReportPdf(request: Omit<ReportRequest, 'id' | 'type'>, onPro
   });
 }
 
-function fileBase(name: string): string {
-  return name.replace(/\.(hingeline|json)$/i, '').replace(/[\\/:*?"<>|]+/g, ' ').trim() || 'project';
-}
+const fileBase = projectFileStem;
 
 /**
  * Makes and exports the report. `member`: the member on screen; `project`: every member. Progress

@@ -10,6 +10,7 @@ import { defineStore } from 'pinia';
 import { computed, ref, shallowRef, toRaw, watch } from 'vue';
 import type { Diagnostic } from '../../../core/diagnostics.ts';
 import { demoProject, demoProjectSI } from '../../../core/project/demo.ts';
+import { projectFileStem } from '../../../core/project/file.ts';
 import type { Project } from '../../../core/project/types.ts';
 import { historyRevision } from '../composables/field-history.ts';
 import { getHost, type OpenedFile } from '../host/index.ts';
@@ -159,8 +160,7 @@ export const useDocumentStore = defineStore('document', () => {
   }
 
   function suggestedName(): string {
-    const base = (fileName.value ?? project.value?.info.name ?? 'project').replace(/\.(hingeline|json)$/i, '').replace(/[\\/:*?"<>|]+/g, ' ').trim();
-    return `${base || 'project'}${PROJECT_EXTENSION}`;
+    return `${projectFileStem(fileName.value ?? project.value?.info.name ?? 'project')}${PROJECT_EXTENSION}`;
   }
 
   /** The project as file text (written in the worker). */

@@ -24,7 +24,7 @@ function everyMaterial(): [string, UniaxialMaterial][] {
       }
     }
   }
-  for (const model of STEEL_MODELS as SteelModel[]) {
+  for (const model of STEEL_MODELS) {
     out.push([`steel ${model}`, buildSteel({ kind: 'steel', id: 's', name: 'S', model, yieldStress: 500, ultimateStress: model === 'elastic-plastic' ? 500 : 600 })]);
   }
   out.push(['frp', buildFrp({ kind: 'frp', id: 'f', name: 'F', tensileModulus: 230_000, ruptureStrain: 0.017, environmentalFactor: 0.95 })]);

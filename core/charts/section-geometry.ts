@@ -1,0 +1,123 @@
+/**
+ * What a drawing of a cross-section shows, in the section's own millimetres: the concrete outline
+ * and voids (core/section/shapes.ts), the hoop at its centreline (core/section/build.ts
+ * `hoopCentreline`), the clear-cover line and the confined core, every bar at its position
+ * (`barPositions`), and where layer labels go without overlapping. The report's SVG drawing
+ * (section-drawing.ts) and the section editor's drawing (renderer/src/charts/section-geometry.ts)
+ * both scale this to their own units; neither works the geometry out again.
+ * Units: mm, x to the right from the left edge of the outline's bounding box, y down from the top.
+ */
+import type { SectionDefinition } from '../section/definition.ts';
+import { layerDiameter } from '../section/definition.ts';
+import { barPositions, hoopCentreline, shapeHeight, webExtent } from '../section/build.ts';
+import { shapeOutline, type Point } from '../section/shapes.ts';
+
+export interface Rectangle {
+  readonly x0: number;
+  readonly x1: number;
+  readonly y0: number;
+  readonly y1: number;
+}
+
+export interface FigureLayer {
+  /** Index of the layer in the definition's `bars`. */
+  readonly index: number;
+  readonly layer: SectionDefinition['bars'][number];
+  readonly diameter: number;
+  /** Horizontal positions of the bars, mm (finite values only). */
+  readonly positions: readonly number[];
+}
+
+export interface SectionFigure {
+  readonly outline: readonly Point[];
+  readonly voids: readonly (readonly Point[])[];
+  /** Bounding box: left and right edge, overall width and height, mm. */
+  readonly xMin: number;
+  readonly xMax: number;
+  readonly width: number;
+  readonly height: number;
+  /** Horizontal extent of the web (the part the hoops enclose), when the shape has one. */
+  readonly web: { readonly x0: number; readonly x1: number } | undefined;
+  /** The hoop along its centreline, with its corner radius and bar diameter (mm), when it can be drawn. */
+  readonly hoop: (Rectangle & { readonly radius: number; readonly diameter: number }) | null;
+  /** Inner edge of the clear cover (outer face of the hoop), when there is a hoop around a web. */
+  readonly cover: Rectangle | null;
+  /** True when the core inside the hoop is analysed as confined. */
+  readonly confinedCore: boolean;
+  /** Layers that can be drawn (finite depth and bar size), in definition order. */
+  readonly layers: readonly FigureLayer[];
+  /** Why something could not be drawn (empty when everything is drawn). */
+  readonly problems: readonly string[];
+}
+
+const finite = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v);
+
+/** The figure of a section, or null when its outline has no area or is not made of finite numbers. */
+export function sectionFigure(section: SectionDefinition): SectionFigure | null {
+  let outline: readonly Point[];
+  let voids: readonly (readonly Point[])[];
+  try {
+    ({ outline, voids } = shapeOutline(section.shape));
+  } catch {
+    return null;
+  }
+  const all = [...outline, ...voids.flat()];
+  if (all.length < 3 || !all.every((p) => finite(p.x) && finite(p.y))) return null;
+  const xMin = Math.min(...all.map((p) => p.x));
+  const xMax = Math.max(...all.map((p) => p.x));
+  const height = shapeHeight(section.shape);
+  const width = xMax - xMin;
+  if (!(width > 0) || !(height > 0)) return null;
+  const problems: string[] = [];
+
+  const web = webExtent(section.shape);
+  const hoops = section.hoops;
+  let hoop: SectionFigure['hoop'] = null;
+  let cover: Rectangle | null = null;
+  if (hoops && finite(hoops.clearCover) && finite(hoops.diameter) && hoops.diameter > 0) {
+    const centreline = hoopCentreline(section.shape, hoops);
+    if (centreline) {
+      const { x0, x1, y0, y1 } = centreline;
+      hoop = { x0, x1, y0, y1, radius: Math.min(2 * hoops.diameter, (x1 - x0) / 2, (y1 - y0) / 2), diameter: hoops.diameter };
+      if (web) {
+        const c = hoops.clearCover;
+        cover = { x0: web.x0 + c, x1: web.x1 - c, y0: c, y1: height - c };
+      }
+    } else if (web) {
+      problems.push('The hoops leave no core inside the cover.');
+    }
+  }
+
+  const layers: FigureLayer[] = [];
+  (section.bars ?? []).forEach((layer, index) => {
+    const diameter = layerDiameter(layer);
+    if (!finite(layer.depth) || !finite(diameter) || diameter <= 0) {
+      problems.push(`Layer ${index + 1} cannot be drawn (its depth or bar size is missing).`);
+      return;
+    }
+    let positions: number[];
+    try {
+      positions = barPositions(section, layer).filter(finite);
+    } catch {
+      positions = [];
+    }
+    layers.push({ index, layer, diameter, positions });
+  });
+  return { outline, voids, xMin, xMax, width, height, web, hoop, cover, confinedCore: hoop !== null && (hoops?.confineCore ?? false), layers, problems };
+}
+
+/**
+ * Label positions that never overlap: each label as near its wanted position as the one above it
+ * allows (`gap` apart, in the caller's units), in ascending order of the wanted positions.
+ * @returns the placed positions, in the order of `wanted`
+ */
+export function spreadLabels(wanted: readonly number[], gap: number): number[] {
+  const order = wanted.map((y, i) => ({ y, i })).sort((a, b) => a.y - b.y);
+  const placed = new Array<number>(wanted.length);
+  let last = -Infinity;
+  for (const { y, i } of order) {
+    last = Math.max(y, last + gap);
+    placed[i] = last;
+  }
+  return placed;
+}

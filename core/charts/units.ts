@@ -5,7 +5,7 @@
  */
 import { displayUnit, toDisplay } from '../units/convert.ts';
 import { formatNumber, NOT_A_VALUE } from '../units/format.ts';
-import { displaySystem, type Quantity, type UnitSystem } from '../units/quantities.ts';
+import { displaySystem, type Quantity } from '../units/quantities.ts';
 import type { UnitId } from '../units/units.ts';
 import type { AxisSpec, DisplayUnits, UnitsInput } from './types.ts';
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { BugError } from '../../../core/diagnostics.ts';
 import type { UniaxialMaterial } from '../../../core/materials/types.ts';
-import type { ConfinementInput, ConcreteSpec, SteelModel } from '../../../core/materials/specs.ts';
+import type { ConfinementInput, ConcreteSpec } from '../../../core/materials/specs.ts';
 import { buildConcrete, buildFrp, buildSteel, CODE_BASES, CONCRETE_COMPRESSION_MODELS, CONCRETE_TENSION_MODELS, STEEL_MODELS } from '../../../core/materials/factory.ts';
 import { PROBE_STRAINS } from './support.ts';
 

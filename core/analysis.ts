@@ -9,7 +9,7 @@ import { notAnalysed } from './assessment/variant.ts';
 import { materialLibrary } from './materials/library.ts';
 import type { Project, MemberDefinition } from './project/types.ts';
 import { analyzeSection, type SectionAnalysis } from './section/analyze.ts';
-import { quantityText } from './units/text.ts';
+import type { Text } from './units/phrase.ts';
 
 export interface ProjectSummary {
   readonly memberCount: number;
@@ -17,8 +17,8 @@ export interface ProjectSummary {
   readonly checkFails: number;
   readonly notConverged: number;
   readonly inputErrors: number;
-  /** One line per member: id, name, status and governing mode. */
-  readonly lines: readonly { readonly memberId: string; readonly memberName: string; readonly status: MemberResult['status']; readonly governingMode: string }[];
+  /** One line per member: id, name, status and governing mode (say(governingMode, units) for words). */
+  readonly lines: readonly { readonly memberId: string; readonly memberName: string; readonly status: MemberResult['status']; readonly governingMode: Text }[];
 }
 
 export interface ProjectResults {
@@ -64,10 +64,9 @@ export function analyzeMembers(project: Project, memberIds?: readonly string[], 
   // Members that differ only in id, name and notes (typical bays repeat many times) give the same
   // numbers: analyse each distinct definition once.
   const byContent = new Map<string, MemberResult>();
-  const text = quantityText(project.info.unitSystem);
   members.forEach(({ m, index }, k) => {
     const context: AssessmentContext = {
-      code: project.info.codeBasis, segments: project.settings.stations, section, sectionIds, path: `members[${index}] "${m.name}"`, text,
+      code: project.info.codeBasis, segments: project.settings.stations, section, sectionIds, path: `members[${index}] "${m.name}"`,
       library: project, sectionSettings: project.settings,
     };
     let result: MemberResult;

@@ -9,7 +9,7 @@ import type { ProjectResults } from '../../core/analysis.ts';
 import { memberKeyResults, type MemberKeyResults } from '../../core/project/key-results.ts';
 import { formatDiagnostic } from '../../core/project/validate.ts';
 import type { Project, UnitSystem } from '../../core/project/types.ts';
-import { displaySystem, formatFixed, formatNumber, NOT_A_VALUE, toDisplay, unitLabel, type Quantity, type UnitId } from '../../core/units/index.ts';
+import { displaySystem, formatFixed, formatNumber, NOT_A_VALUE, say, toDisplay, unitLabel, type Quantity, type Text, type UnitId } from '../../core/units/index.ts';
 import { RESULTS_CAUTION } from '../shared/about.ts';
 import type { MemberResult } from '../../core/assessment/results.ts';
 
@@ -196,9 +196,10 @@ export function tableReport(project: Project, results: ProjectResults, options: 
   const indent = ' '.repeat(label + 2);
   const modes = keys.map((k, i) => {
     const head = pad(k.memberId, label, 'left');
-    const problems = k.errors.map((e) => `\n${indent}${red(style, 'error:')} ${wrap(`${e.path}: ${e.message}`, width, label + 9)}`).join('');
-    const warnings = results.members[i]!.warnings.map((w) => `\n${indent}${yellow(style, 'warning:')} ${wrap(w, width, label + 11)}`).join('');
-    return `${bold(style, head)}  ${wrap(k.governingMode, width, label + 2)}${problems}${warnings}`;
+    const words = (text: Text) => say(text, options.system);
+    const problems = k.errors.map((e) => `\n${indent}${red(style, 'error:')} ${wrap(`${e.path}: ${words(e.message)}`, width, label + 9)}`).join('');
+    const warnings = results.members[i]!.warnings.map((w) => `\n${indent}${yellow(style, 'warning:')} ${wrap(words(w), width, label + 11)}`).join('');
+    return `${bold(style, head)}  ${wrap(words(k.governingMode), width, label + 2)}${problems}${warnings}`;
   });
   const s = results.summary;
   const summary = `${s.memberCount} member${s.memberCount === 1 ? '' : 's'}: ${s.ok} ok, ${s.checkFails} with a failing check, ${s.notConverged} not converged, ${s.inputErrors} with input errors.`;
@@ -303,9 +304,9 @@ export function analysisJson(project: Project, results: ProjectResults, system: 
           pass: c.pass,
         })),
         strength: k.strengthUtilisation !== null ? { utilisation: pure(k.strengthUtilisation), pass: k.strengthPass } : null,
-        governingMode: k.governingMode,
-        warnings: r.warnings,
-        errors: k.errors,
+        governingMode: say(k.governingMode, system),
+        warnings: r.warnings.map((w) => say(w, system)),
+        errors: k.errors.map((e) => ({ path: e.path, message: say(e.message, system) })),
       };
     }),
   };

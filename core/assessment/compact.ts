@@ -5,7 +5,6 @@
  * FRP), and the one-sentence governing modes.
  * Units: N, mm, N·mm, 1/mm, rad.
  */
-import { SI_TEXT, type QuantityText } from '../units/text.ts';
 import type { CodeBasis } from '../materials/specs.ts';
 import type { BeamDefinition, LoadFactors } from '../member/definition.ts';
 import type { PlasticHinge } from '../member/results.ts';
@@ -20,12 +19,13 @@ import { memberForcesAt } from '../member/statics.ts';
 import type { ShearResult } from './shear.ts';
 import { strengthCombination } from './combinations.ts';
 import type { Setup, VariantRun } from './variant.ts';
+import { capitalised, joinTexts, lowerFirst, phrase, q, withoutFinalStop, type Text } from '../units/phrase.ts';
 
 const finite = (x: number | null | undefined): number | null => (x !== null && x !== undefined && Number.isFinite(x) ? x : null);
 
 /** A compact curve with its design resistance. */
-export function curveSummary(code: CodeBasis, analysis: SectionAnalysis, curve: MomentCurvatureResult, text: QuantityText = SI_TEXT): CurveSummary {
-  const resistance = flexuralDesignResistance(code, analysis, curve.direction, text);
+export function curveSummary(code: CodeBasis, analysis: SectionAnalysis, curve: MomentCurvatureResult): CurveSummary {
+  const resistance = flexuralDesignResistance(code, analysis, curve.direction);
   const kp = curve.keyPoints;
   return {
     direction: curve.direction,
@@ -46,14 +46,14 @@ export function curveSummary(code: CodeBasis, analysis: SectionAnalysis, curve: 
  * as the engine's strength check) against the design resistance of the zone and direction there
  * (flexuralDesignResistance: ψf on FRP). Null when the member has no zones to check.
  */
-export function flexuralCheck(code: CodeBasis, member: BeamDefinition, zones: readonly { from: number; to: number; analysis: SectionAnalysis }[], factors: LoadFactors, combination: string, segments: number, text: QuantityText = SI_TEXT): FlexuralCheck | null {
+export function flexuralCheck(code: CodeBasis, member: BeamDefinition, zones: readonly { from: number; to: number; analysis: SectionAnalysis }[], factors: LoadFactors, combination: string, segments: number): FlexuralCheck | null {
   if (zones.length === 0 || zones.some((z) => !z.analysis.model || !z.analysis.elastic)) return null;
   const span = member.span;
   const sets = memberLoadSets(member, zones.map((z) => z.analysis.selfWeight));
   const loads = combinedLoads(sets, factors);
   const elasticZones: ElasticZone[] = zones.map((z) => ({ from: z.from, to: z.to, sectionId: z.analysis.sectionId, stiffness: z.analysis.codeModulus * z.analysis.elastic!.grossInertia }));
   const ends = elasticSupportMoments(member, elasticZones, loads, segments);
-  const resist = zones.map((z) => ({ sagging: flexuralDesignResistance(code, z.analysis, 'sagging', text), hogging: flexuralDesignResistance(code, z.analysis, 'hogging', text) }));
+  const resist = zones.map((z) => ({ sagging: flexuralDesignResistance(code, z.analysis, 'sagging'), hogging: flexuralDesignResistance(code, z.analysis, 'hogging') }));
   const xs = new Set<number>();
   for (let i = 0; i <= segments; i++) xs.add((span * i) / segments);
   for (const z of zones) xs.add(z.from);
@@ -80,7 +80,7 @@ export function flexuralCheck(code: CodeBasis, member: BeamDefinition, zones: re
           direction,
           demand,
           resistance: r.value,
-          notes: `${zones[index]!.analysis.sectionName}, ${direction}: ${r.note}`,
+          notes: phrase`${zones[index]!.analysis.sectionName}, ${direction}: ${r.note}`,
         };
       }
     }
@@ -89,20 +89,17 @@ export function flexuralCheck(code: CodeBasis, member: BeamDefinition, zones: re
 }
 
 /** Joins the engine's flexural sentence and the shear sentence into one governing-mode sentence. */
-export function composeGoverningMode(flexure: string, shear: ShearResult | null, prefix = ''): string {
-  const body = flexure.replace(/\.\s*$/, '');
-  if (!shear) return `${prefix}${body}.`;
-  if (shear.governs === 'shear') {
-    const s = shear.sentence;
-    return `${prefix}${s.charAt(0).toUpperCase()}${s.slice(1)}; flexure (not reached first): ${body.charAt(0).toLowerCase()}${body.slice(1)}.`;
-  }
-  return `${prefix}${body}; ${shear.sentence}.`;
+export function composeGoverningMode(flexure: Text, shear: ShearResult | null, prefix = ''): Text {
+  const body = withoutFinalStop(flexure);
+  if (!shear) return phrase`${prefix}${body}.`;
+  if (shear.governs === 'shear') return phrase`${prefix}${capitalised(shear.sentence)}; flexure (not reached first): ${lowerFirst(body)}.`;
+  return phrase`${prefix}${body}; ${shear.sentence}.`;
 }
 
 /** The flexural sentence of a variant with the station-by-station strength check (ψf on FRP). */
-export function variantFlexureSentence(result: MemberResult, strength: FlexuralCheck | null, pattern: 'proportional' | 'live-only', text: QuantityText = SI_TEXT): string {
+export function variantFlexureSentence(result: MemberResult, strength: FlexuralCheck | null, pattern: 'proportional' | 'live-only'): Text {
   if (result.status === 'input-error') return result.governingMode;
-  const parts: string[] = [];
+  const parts: Text[] = [];
   const ultimate = result.loadDeflection.events.find((e) => e.kind === 'ultimate');
   const mu = result.ductility.displacementDuctility;
   if (ultimate && result.ductility.failureCause) {
@@ -110,14 +107,14 @@ export function variantFlexureSentence(result: MemberResult, strength: FlexuralC
   } else {
     parts.push(`Flexure: ${result.loadDeflection.status}`);
   }
-  if (strength) parts.push(`strength check ${strength.pass ? 'passes' : 'fails'} (utilisation ${strength.utilisation.toFixed(2)} at ${text.span(strength.position)} under ${strength.combination})`);
+  if (strength) parts.push(phrase`strength check ${strength.pass ? 'passes' : 'fails'} (utilisation ${strength.utilisation.toFixed(2)} at ${q('spanLength', strength.position)} under ${strength.combination})`);
   const checks = result.service?.checks ?? [];
   const fails = checks.filter((c) => !c.pass);
   if (fails.length > 0) {
     const w = fails.reduce((a, b) => (b.utilisation > a.utilisation ? b : a));
     parts.push(`deflection check fails: ${w.utilisation.toFixed(2)} × ℓ/${w.ratio} (${w.quantity})`);
   } else if (checks.length > 0) parts.push('deflection checks pass');
-  return `${parts.join('; ')}.`;
+  return phrase`${joinTexts(parts, '; ')}.`;
 }
 
 /** Status of a variant from its own checks (strength with ψf, deflections, factored shear). */
@@ -130,7 +127,7 @@ export function variantStatus(result: MemberResult, strength: FlexuralCheck | nu
 }
 
 /** Compact result of a variant. */
-export function compactVariant(code: CodeBasis, run: VariantRun, strength: FlexuralCheck | null, governingMode: string): VariantResult {
+export function compactVariant(code: CodeBasis, run: VariantRun, strength: FlexuralCheck | null, governingMode: Text): VariantResult {
   const r = run.result;
   const sectionIds = [...new Set(run.member.zones.map((z) => z.sectionId))];
   const sections = sectionIds.flatMap((id) => {
@@ -184,7 +181,7 @@ function criticalHinge(hinges: readonly PlasticHinge[], direction: BendingDirect
 }
 
 /** How a strengthened variant compares with its reference (see SchemeComparison). */
-export function compareVariants(reference: VariantResult, scheme: VariantResult, schemeLabel: string, text: QuantityText = SI_TEXT): SchemeComparison {
+export function compareVariants(reference: VariantResult, scheme: VariantResult, schemeLabel: string): SchemeComparison {
   const refStrength = reference.strength;
   const criticalDirection: BendingDirection = refStrength?.direction ?? 'sagging';
   const criticalPosition = refStrength?.position ?? 0;
@@ -221,10 +218,10 @@ export function compareVariants(reference: VariantResult, scheme: VariantResult,
   const capacity = { reference: reference.capacity.peakTotalLoad, scheme: scheme.capacity.peakTotalLoad };
   const critical = moments.find((x) => x.baseSectionId === criticalBase && x.direction === criticalDirection);
 
-  const words: string[] = [];
+  const words: Text[] = [];
   const signed = (x: number) => `${x >= 0 ? '+' : '−'}${Math.abs(x).toFixed(0)} %`;
   if (critical?.designGainPercent !== null && critical?.designGainPercent !== undefined) {
-    words.push(`${schemeLabel}: design moment ${signed(critical.designGainPercent)} at section "${criticalBase}" ${criticalDirection} (${text.moment(critical.referenceDesign!)} → ${text.moment(critical.schemeDesign!)})`);
+    words.push(phrase`${schemeLabel}: design moment ${signed(critical.designGainPercent)} at section "${criticalBase}" ${criticalDirection} (${q('moment', critical.referenceDesign!)} → ${q('moment', critical.schemeDesign!)})`);
   } else {
     words.push(`${schemeLabel}:`);
   }
@@ -238,20 +235,20 @@ export function compareVariants(reference: VariantResult, scheme: VariantResult,
   };
   const ductWords = [duct('displacement ductility', mu.reference, mu.scheme), duct('curvature ductility', phi.reference, phi.scheme)].filter((w): w is string => w !== null);
   const lowers = [change(mu.reference, mu.scheme), change(phi.reference, phi.scheme)].some((c) => c !== null && c <= -2);
-  let statement = `${words.join(', ')}`;
+  let statement: Text = joinTexts(words, ', ');
   const loses = [critical?.designGainPercent ?? null, capChange].some((c) => c !== null && c < 0);
   if (loses) {
     const cause = schCurve?.ultimateCause;
     const frp = cause === 'frp-debonding' || cause === 'frp-rupture';
-    statement += frp
+    statement = phrase`${statement}${frp
       ? `; at ultimate the scheme adds no strength: the FRP reaches its ${cause === 'frp-debonding' ? 'debonding' : 'rupture'} limit before the unstrengthened section develops its strain-hardened capacity, and past that the beam carries no more than unstrengthened`
-      : '; at ultimate the scheme adds no strength';
+      : '; at ultimate the scheme adds no strength'}`;
     const yieldGain = critical?.firstYieldGainPercent ?? null;
-    if (yieldGain !== null && yieldGain > 0) statement += ` (it raises the first-yield moment by ${signed(yieldGain)})`;
+    if (yieldGain !== null && yieldGain > 0) statement = phrase`${statement} (it raises the first-yield moment by ${signed(yieldGain)})`;
   }
-  if (ductWords.length > 0) statement += `; ${ductWords.join(' and ')}`;
-  if (lowers) statement += ': the strengthening lowers the ductility';
-  if (!scheme.ductility.available) statement += '; shear governs the strengthened beam, so its ductility is not available';
+  if (ductWords.length > 0) statement = phrase`${statement}; ${ductWords.join(' and ')}`;
+  if (lowers) statement = phrase`${statement}: the strengthening lowers the ductility`;
+  if (!scheme.ductility.available) statement = phrase`${statement}; shear governs the strengthened beam, so its ductility is not available`;
   return {
     referenceKey: reference.key,
     critical: { baseSectionId: criticalBase, direction: criticalDirection },
@@ -261,7 +258,7 @@ export function compareVariants(reference: VariantResult, scheme: VariantResult,
     displacementDuctility: { reference: mu.reference, scheme: mu.scheme, changePercent: change(mu.reference, mu.scheme) },
     hingeRotation: { reference: theta.reference, scheme: theta.scheme, changePercent: change(theta.reference, theta.scheme) },
     governingMode: { reference: reference.governingMode, scheme: scheme.governingMode },
-    statement: `${statement}.`,
+    statement: phrase`${statement}.`,
   };
 }
 
@@ -269,12 +266,12 @@ export function compareVariants(reference: VariantResult, scheme: VariantResult,
 export function strengthOf(setup: Setup, run: VariantRun) {
   if (run.result.status === 'input-error') return null;
   const { factors, text } = strengthCombination(run.member, setup.code);
-  return flexuralCheck(setup.code, run.member, run.zones, factors, text, setup.segments, setup.text);
+  return flexuralCheck(setup.code, run.member, run.zones, factors, text, setup.segments);
 }
 
 /** Compact result of a run, with its sentence. */
 export function compactOf(setup: Setup, run: VariantRun, prefix: string): VariantResult {
   const strength = strengthOf(setup, run);
-  const sentence = composeGoverningMode(variantFlexureSentence(run.result, strength, run.member.capacity.pattern, setup.text), run.shear, prefix);
+  const sentence = composeGoverningMode(variantFlexureSentence(run.result, strength, run.member.capacity.pattern), run.shear, prefix);
   return compactVariant(setup.code, run, strength, sentence);
 }

@@ -27,7 +27,7 @@ import { validateAsFound, validateSchemes } from '../retrofit/validate.ts';
 import type { SectionAnalysis } from '../section/analyze.ts';
 import type { SectionAdditions } from '../section/build.ts';
 import type { SectionDefinition } from '../section/definition.ts';
-import type { QuantityText } from '../units/text.ts';
+import { phrase, type Text } from '../units/phrase.ts';
 import { compactOf, composeGoverningMode } from './compact.ts';
 import { RETROFIT_CAUTION, type MemberResult, type RetrofitResult, type SchemeResult } from './results.ts';
 import { buildScheme, describeScheme } from './scheme.ts';
@@ -47,8 +47,6 @@ export interface AssessmentContext extends MemberContext {
   /** The project's materials and sections (variants derive from them). */
   readonly library: Library;
   readonly sectionSettings: SectionSettings;
-  /** Quantities in sentences, in the project's display units. */
-  readonly text: QuantityText;
 }
 
 /** A member zone list pointing at other section ids. */
@@ -96,7 +94,7 @@ export function assessMember(member: AssessedMember, context: AssessmentContext)
 
 function extend(member: AssessedMember, context: AssessmentContext, design: MemberResult): MemberResult {
   const library = context.library;
-  const setup: Setup = { library, code: context.code, path: context.path, segments: context.segments, sectionSettings: context.sectionSettings, text: context.text };
+  const setup: Setup = { library, code: context.code, path: context.path, segments: context.segments, sectionSettings: context.sectionSettings };
   const hasRetrofit = member.asFound !== undefined || (member.schemes !== undefined && member.schemes.length > 0);
   if (design.status === 'input-error') {
     if (!hasRetrofit) return design;
@@ -119,7 +117,7 @@ function extend(member: AssessedMember, context: AssessmentContext, design: Memb
   });
   if (!hasRetrofit) return finishMain(design, designRun, null);
 
-  const warnings: string[] = [];
+  const warnings: Text[] = [];
   const errors: Problem[] = [];
 
   // --- as found ------------------------------------------------------------------------------------
@@ -135,7 +133,7 @@ function extend(member: AssessedMember, context: AssessmentContext, design: Memb
         found = asFoundRun(setup, member, derivation, 'as-found', 'As found');
         if (found.run.result.status === 'input-error') {
           // The engine refused a derived section: report why and keep the design beam as the result.
-          errors.push(...found.run.result.errors.map((e) => ({ path: e.path, message: `as-found beam: ${e.message}` })));
+          errors.push(...found.run.result.errors.map((e) => ({ path: e.path, message: phrase`as-found beam: ${e.message}` })));
           found = null;
         }
       }
@@ -213,7 +211,7 @@ function extend(member: AssessedMember, context: AssessmentContext, design: Memb
   const result = finishMain(main, mainRun, retrofit, found ? 'As found: ' : '');
   return {
     ...result,
-    warnings: [...result.warnings, ...warnings, ...schemeResults.flatMap((s) => s.warnings.map((w) => `Scheme "${s.name}": ${w}`))],
+    warnings: [...result.warnings, ...warnings, ...schemeResults.flatMap((s) => s.warnings.map((w) => phrase`Scheme "${s.name}": ${w}`))],
     errors: [...result.errors, ...errors, ...schemeErrors],
   };
 }
@@ -222,7 +220,7 @@ function extend(member: AssessedMember, context: AssessmentContext, design: Memb
 function finishMain(result: MemberResult, run: VariantRun, retrofit: RetrofitResult | null, prefix = ''): MemberResult {
   const shear = run.shear;
   const status = result.status === 'ok' && shear?.factored && !shear.factored.pass ? 'check-fails' : result.status;
-  const extra: string[] = [...(shear?.warnings ?? [])];
+  const extra: Text[] = [...(shear?.warnings ?? [])];
   if (shear && !shear.flexuralDuctilityAvailable) extra.push('Shear governs before the flexural mechanism: the displacement ductility and plastic hinge rotations are not available (kept for reference only).');
   return {
     ...result,

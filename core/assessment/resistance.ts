@@ -15,7 +15,7 @@ import type { SectionAnalysis } from '../section/analyze.ts';
 import { sectionResultants } from '../section/forces.ts';
 import { directionSign, type BendingDirection } from '../section/model.ts';
 import type { MomentCurvatureResult } from '../section/results.ts';
-import { SI_TEXT, type QuantityText } from '../units/text.ts';
+import { phrase, q, type Text } from '../units/phrase.ts';
 
 /** Strength reduction factor φ for flexure, ACI 318-19 Table 21.2.2 (other transverse reinforcement). */
 export function aciFlexureReductionFactor(netTensileStrain: number, yieldStrain: number): number {
@@ -25,16 +25,16 @@ export function aciFlexureReductionFactor(netTensileStrain: number, yieldStrain:
 }
 
 /** Design resistance of one direction from its curve (ACI: φMn; EN: curve of design laws → M_Rd). */
-export function designResistance(code: CodeBasis, curve: MomentCurvatureResult | undefined, yieldStrain: number, text: QuantityText = SI_TEXT): { value: number | null; note: string } {
+export function designResistance(code: CodeBasis, curve: MomentCurvatureResult | undefined, yieldStrain: number): { value: number | null; note: Text } {
   if (!curve || curve.points.length < 2) return { value: null, note: 'no tension reinforcement' };
   const kp = curve.keyPoints;
   const at = kp.codeCrushing && (!kp.ultimate || kp.codeCrushing.curvature <= kp.ultimate.curvature) ? kp.codeCrushing : kp.peak;
   if (!at) return { value: null, note: 'the section curve has no point to take a resistance from' };
   if (code === 'ACI 318-19') {
     const phi = aciFlexureReductionFactor(at.maxSteelTensileStrain, yieldStrain);
-    return { value: phi * at.moment, note: `φMn = ${phi.toFixed(3)} × ${text.moment(at.moment)} (εt = ${(at.maxSteelTensileStrain * 1000).toFixed(2)} ‰${at === kp.peak ? ', at the peak: the curve ends before εc = 0.003' : ''})` };
+    return { value: phi * at.moment, note: phrase`φMn = ${phi.toFixed(3)} × ${q('moment', at.moment)} (εt = ${(at.maxSteelTensileStrain * 1000).toFixed(2)} ‰${at === kp.peak ? ', at the peak: the curve ends before εc = 0.003' : ''})` };
   }
-  return { value: at.moment, note: `M_Rd = ${text.moment(at.moment)} from design laws${at === kp.peak ? ' (at the peak: the curve ends before εcu2)' : ''}` };
+  return { value: at.moment, note: phrase`M_Rd = ${q('moment', at.moment)} from design laws${at === kp.peak ? ' (at the peak: the curve ends before εcu2)' : ''}` };
 }
 
 /** A design flexural resistance (N·mm) with the nominal moment and the FRP part it was reduced from, and how it was found. */
@@ -44,7 +44,7 @@ export interface FlexuralResistance {
   /** Nominal moment Mn of the point used, and the FRP's part Mnf, N·mm. */
   readonly nominal: number | null;
   readonly frpMoment: number;
-  readonly note: string;
+  readonly note: Text;
 }
 
 /**
@@ -56,7 +56,7 @@ export interface FlexuralResistance {
  * it is exactly the engine's resistance (core/assessment/resistance.ts designResistance).
  * @see ACI 440.2R-17 10.2.10; ACI 318-19 Table 21.2.2
  */
-export function flexuralDesignResistance(code: CodeBasis, analysis: SectionAnalysis, direction: BendingDirection, text: QuantityText = SI_TEXT): FlexuralResistance {
+export function flexuralDesignResistance(code: CodeBasis, analysis: SectionAnalysis, direction: BendingDirection): FlexuralResistance {
   const curve = code === 'EN 1992-1-1' && analysis.designCurves ? analysis.designCurves[direction] : analysis.curves[direction];
   const model = analysis.model;
   const hasFrp = model?.elements.some((e) => e.kind === 'frp') ?? false;
@@ -81,7 +81,7 @@ export function flexuralDesignResistance(code: CodeBasis, analysis: SectionAnaly
   }
   const mnf = tf * Math.abs(df - yc);
   const reduced = at.moment - (1 - FRP_FLEXURE_REDUCTION) * mnf;
-  const kNm = (x: number) => text.moment(x);
+  const kNm = (x: number) => q('moment', x);
   const where = at === kp.peak ? 'where the curve ends (FRP limit before εc = 0.003)' : 'at εc = 0.003';
   if (code === 'ACI 318-19') {
     const phi = aciFlexureReductionFactor(at.maxSteelTensileStrain, analysis.yieldStrain[direction]);
@@ -89,13 +89,13 @@ export function flexuralDesignResistance(code: CodeBasis, analysis: SectionAnaly
       value: phi * reduced,
       nominal: at.moment,
       frpMoment: mnf,
-      note: `φ(Mns + ψf·Mnf) = ${phi.toFixed(3)} × (${kNm(at.moment - mnf)} + 0.85 × ${kNm(mnf)}) = ${kNm(phi * reduced)} (${where}, εt = ${(at.maxSteelTensileStrain * 1000).toFixed(2)} ‰; ACI 440.2R-17 10.2.10)`,
+      note: phrase`φ(Mns + ψf·Mnf) = ${phi.toFixed(3)} × (${kNm(at.moment - mnf)} + 0.85 × ${kNm(mnf)}) = ${kNm(phi * reduced)} (${where}, εt = ${(at.maxSteelTensileStrain * 1000).toFixed(2)} ‰; ACI 440.2R-17 10.2.10)`,
     };
   }
   return {
     value: reduced,
     nominal: at.moment,
     frpMoment: mnf,
-    note: `M_Rd = Mns + ψf·Mnf = ${kNm(at.moment - mnf)} + 0.85 × ${kNm(mnf)} = ${kNm(reduced)} from design laws (${where}; ψf of ACI 440.2R-17 10.2.10)`,
+    note: phrase`M_Rd = Mns + ψf·Mnf = ${kNm(at.moment - mnf)} + 0.85 × ${kNm(mnf)} = ${kNm(reduced)} from design laws (${where}; ψf of ACI 440.2R-17 10.2.10)`,
   };
 }

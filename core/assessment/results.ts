@@ -5,7 +5,9 @@
  * Plain, serialisable data; every number the UI, CLI and report show comes from here and none of
  * them recomputes. Internal units: mm, N, N·mm, rad, 1/mm.
  */
+import type { Problem } from '../diagnostics.ts';
 import type { MaterialSpec } from '../materials/specs.ts';
+import type { Text } from '../units/phrase.ts';
 import type { BeamResult, DeflectionCheck, MemberEvent, PlasticHinge } from '../member/results.ts';
 import type { AddedItem, AsFoundSummary, FrpDesign, InstallationStrain, StrengtheningScheme } from '../retrofit/types.ts';
 import type { SectionDefinition } from '../section/definition.ts';
@@ -30,14 +32,14 @@ export interface StrengthCheck {
   readonly hoggingResistance: number | null;
   readonly utilisation: number;
   readonly pass: boolean;
-  readonly notes: string;
+  readonly notes: Text;
 }
 
 /** Everything reported for one member. */
 export interface MemberResult extends BeamResult {
   readonly status: MemberStatus;
-  /** One sentence: what governs the member. */
-  readonly governingMode: string;
+  /** One sentence: what governs the member (quantities as data: say(governingMode, units)). */
+  readonly governingMode: Text;
   readonly strength: StrengthCheck | null;
   /** Shear capacity and demand, flexure- or shear-governed (core/assessment/shear.ts). */
   readonly shear?: ShearResult;
@@ -56,13 +58,13 @@ export interface CurveSummary {
   readonly points: readonly { readonly curvature: number; readonly moment: number }[];
   readonly keyPoints: readonly { readonly name: KeyPointName; readonly curvature: number; readonly moment: number; readonly description: string }[];
   readonly ultimateCause: UltimateCause | null;
-  readonly status: string;
+  readonly status: Text;
   readonly peakMoment: number | null;
   readonly firstYieldMoment: number | null;
   readonly curvatureDuctility: number | null;
   /** Design resistance (ACI φ(Mns + ψf·Mnf), EN M_Rd with ψf on the FRP), N·mm, and how it was found. */
   readonly designResistance: number | null;
-  readonly designResistanceNote: string;
+  readonly designResistanceNote: Text;
 }
 
 /** One section of a variant, compact: definition, added items and curves (mm, N·mm, 1/mm). */
@@ -89,7 +91,7 @@ export interface FlexuralCheck {
   readonly direction: BendingDirection;
   readonly demand: number;
   readonly resistance: number | null;
-  readonly notes: string;
+  readonly notes: Text;
 }
 
 /** Key results of one beam variant (original design, as found, or strengthened), compact. */
@@ -98,7 +100,7 @@ export interface VariantResult {
   readonly key: string;
   readonly label: string;
   readonly status: MemberStatus;
-  readonly governingMode: string;
+  readonly governingMode: Text;
   readonly sections: readonly VariantSection[];
   readonly loadDeflection: {
     readonly pattern: string;
@@ -126,8 +128,8 @@ export interface VariantResult {
   readonly strength: FlexuralCheck | null;
   readonly deflectionChecks: readonly DeflectionCheck[];
   readonly shear: ShearResult | null;
-  readonly warnings: readonly string[];
-  readonly errors: readonly { readonly path: string; readonly message: string }[];
+  readonly warnings: readonly Text[];
+  readonly errors: readonly Problem[];
 }
 
 /** The ACI 440.2R-17 9.2 check: the unstrengthened member under (1.1 SD + 0.75 LL) if the strengthening is lost. */
@@ -160,9 +162,9 @@ export interface SchemeComparison {
   readonly displacementDuctility: { readonly reference: number | null; readonly scheme: number | null; readonly changePercent: number | null };
   /** Rotation capacity θp,u of the critical hinge, rad. */
   readonly hingeRotation: { readonly reference: number | null; readonly scheme: number | null; readonly changePercent: number | null };
-  readonly governingMode: { readonly reference: string; readonly scheme: string };
+  readonly governingMode: { readonly reference: Text; readonly scheme: Text };
   /** Plain words: the gain in strength and the change in ductility. */
-  readonly statement: string;
+  readonly statement: Text;
 }
 
 /** Everything reported for one strengthening scheme. */
@@ -171,15 +173,15 @@ export interface SchemeResult {
   readonly name: string;
   readonly kind: StrengtheningScheme['kind'];
   /** One line: what the scheme adds. */
-  readonly description: string;
+  readonly description: Text;
   readonly variant: VariantResult | null;
   readonly frp: FrpDesign | null;
   readonly installation: readonly InstallationStrain[];
   readonly comparison: SchemeComparison | null;
   /** ACI 440.2R-17 9.2 (bonded schemes only; null for a cast concrete layer). */
   readonly lossOfStrengthening: LossOfStrengtheningCheck | null;
-  readonly warnings: readonly string[];
-  readonly errors: readonly { readonly path: string; readonly message: string }[];
+  readonly warnings: readonly Text[];
+  readonly errors: readonly Problem[];
 }
 
 /** Design, as-found and strengthened variants of a member, compact, with comparisons (MemberResult.retrofit). */
@@ -196,8 +198,8 @@ export interface RetrofitResult {
   /** Material specs derived for the analysis (as-found concrete and steel), for the report. */
   readonly derivedMaterials: readonly MaterialSpec[];
   readonly caution: string;
-  readonly warnings: readonly string[];
-  readonly errors: readonly { readonly path: string; readonly message: string }[];
+  readonly warnings: readonly Text[];
+  readonly errors: readonly Problem[];
 }
 
 /** The caution every retrofit result carries. */

@@ -20,6 +20,7 @@ import { elasticProperties, type CrackedProperties } from '../section/elastic.ts
 import type { BendingDirection, DiscreteElement } from '../section/model.ts';
 import { compactOf, compareVariants, flexuralCheck } from './compact.ts';
 import type { SchemeResult, VariantResult } from './results.ts';
+import { joinTexts, phrase, q, type Text } from '../units/phrase.ts';
 import { combinedLoads, memberLoadSets } from './combinations.ts';
 import { elasticSupportMoments, type ElasticZone } from './demand.ts';
 import { memberForcesAt } from '../member/statics.ts';
@@ -48,17 +49,17 @@ export interface SchemeInput {
   readonly derivedSpecs: readonly MaterialSpec[];
 }
 
-export function describeScheme(s: StrengtheningScheme): string {
+export function describeScheme(s: StrengtheningScheme): Text {
+  const len = (mm: number) => q('sectionLength', mm, { compact: true });
   switch (s.kind) {
     case 'frp':
-      return `externally bonded FRP on the ${s.face ?? 'bottom'} face: ${s.plies} × ${s.plyThickness} mm × ${s.width} mm (${s.frpId})`;
+      return phrase`externally bonded FRP on the ${s.face ?? 'bottom'} face: ${s.plies} × ${len(s.plyThickness)} × ${len(s.width)} (${s.frpId})`;
     case 'steel-plate':
-      return `bonded steel plate on the ${s.face ?? 'bottom'} face: ${s.thickness} × ${s.width} mm (${s.steelId})`;
+      return phrase`bonded steel plate on the ${s.face ?? 'bottom'} face: ${len(s.thickness)} × ${len(s.width)} (${s.steelId})`;
     case 'concrete-layer':
-      return `new concrete ${s.face === 'top' ? 'overlay' : 'layer under the soffit'} ${s.thickness} mm (${s.concreteId}) with ${s.bars.length} bar layer${s.bars.length === 1 ? '' : 's'}`;
+      return phrase`new concrete ${s.face === 'top' ? 'overlay' : 'layer under the soffit'} ${len(s.thickness)} (${s.concreteId}) with ${s.bars.length} bar layer${s.bars.length === 1 ? '' : 's'}`;
   }
 }
-
 
 /** Reference section of a library section for a scheme: the reference variant's derived section, or the library one. */
 function referenceSection(baseId: string, ref: VariantRun, derivation: AsFoundDerivation | null): ReferenceSection {
@@ -98,7 +99,7 @@ export function buildScheme(setup: Setup, input: SchemeInput): SchemeResult {
   const { run: comparisonRun, compact: comparisonCompact } = input.comparison;
   const code = setup.code;
   const errors: Problem[] = [...base.errors];
-  const warnings: string[] = [...base.warnings];
+  const warnings: Text[] = [...base.warnings];
   const designSections = librarySections(member, setup.library);
   const targets = new Set(scheme.sectionIds ?? [...designSections.keys()]);
   const materials = materialLibrary([...setup.library.materials, ...derivedSpecs], code);
@@ -122,7 +123,7 @@ export function buildScheme(setup: Setup, input: SchemeInput): SchemeResult {
     const face = scheme.face ?? 'bottom';
     const faceData = faceOf(refSection.definition, face);
     if (scheme.width > faceData.width + 1e-6) {
-      errors.push({ path: `${at}.width`, message: `must be at most the ${faceData.width.toFixed(0)} mm width of the ${face} face of section "${baseId}", got ${scheme.width} mm` });
+      errors.push({ path: `${at}.width`, message: phrase`must be at most the ${q('sectionLength', faceData.width, { compact: true })} width of the ${face} face of section "${baseId}", got ${q('sectionLength', scheme.width, { compact: true })}` });
       continue;
     }
     const direction: BendingDirection = face === 'bottom' ? 'sagging' : 'hogging';
@@ -137,11 +138,11 @@ export function buildScheme(setup: Setup, input: SchemeInput): SchemeResult {
     const capacity = curve?.keyPoints.peak?.moment ?? null;
     const firstYield = curve?.keyPoints.firstYield?.moment ?? null;
     if (capacity !== null && inst.moment > capacity) {
-      errors.push({ path: `${at}.installation`, message: `the moment when the strengthening is bonded, ${setup.text.moment(inst.moment)} at ${setup.text.span(inst.position)}, exceeds the capacity of the unstrengthened section "${refAnalysis.sectionName}" (${setup.text.moment(capacity)}): the beam could not carry the installation load — reduce it (prop or unload the beam) before strengthening` });
+      errors.push({ path: `${at}.installation`, message: phrase`the moment when the strengthening is bonded, ${q('moment', inst.moment)} at ${q('spanLength', inst.position)}, exceeds the capacity of the unstrengthened section "${refAnalysis.sectionName}" (${q('moment', capacity)}): the beam could not carry the installation load — reduce it (prop or unload the beam) before strengthening` });
       continue;
     }
     if (firstYield !== null && inst.moment > firstYield) {
-      warnings.push(`the installation moment ${setup.text.moment(inst.moment)} in section "${baseId}" is above first yield (${setup.text.moment(firstYield)}): the cracked elastic substrate strain does not hold beyond yield; consider propping during installation`);
+      warnings.push(phrase`the installation moment ${q('moment', inst.moment)} in section "${baseId}" is above first yield (${q('moment', firstYield)}): the cracked elastic substrate strain does not hold beyond yield; consider propping during installation`);
     }
     const itemDepth = scheme.kind === 'frp' ? faceData.depth : face === 'bottom' ? faceData.depth + scheme.thickness / 2 : -scheme.thickness / 2;
     const model = refAnalysis.model;
@@ -181,15 +182,15 @@ export function buildScheme(setup: Setup, input: SchemeInput): SchemeResult {
       strain,
       otherMethodStrain: other,
       formula: kd !== null && icr !== null
-        ? `εbi = M·(df − kd)/(Icr·Ec) = ${setup.text.moment(inst.moment)} × (${setup.text.section(df)} − ${setup.text.section(kd)}) / (${setup.text.secondMoment(icr)} × ${setup.text.stress(ec)}) = ${(-(elasticStrain ?? 0)).toExponential(3)} (ACI 440.2R-17 10.2.3)${method === 'moment-curvature' ? `; used: ${(-strain).toExponential(3)} from the moment–curvature curve` : ''}`
+        ? phrase`εbi = M·(df − kd)/(Icr·Ec) = ${q('moment', inst.moment)} × (${q('sectionLength', df)} − ${q('sectionLength', kd)}) / (${q('secondMoment', icr)} × ${q('stress', ec)}) = ${(-(elasticStrain ?? 0)).toExponential(3)} (ACI 440.2R-17 10.2.3)${method === 'moment-curvature' ? `; used: ${(-strain).toExponential(3)} from the moment–curvature curve` : ''}`
         : `εbi = ${(-strain).toExponential(3)} from the moment–curvature curve`,
     });
     if (scheme.kind === 'frp') {
       const spec = materials.frpSpec(scheme.frpId) as FrpSpec | undefined;
       const material = materials.frp(scheme.frpId);
       if (!spec || !material) {
-        const cause = materials.problems.filter((p) => p.severity === 'error').map((p) => `${p.path}: ${p.message}`).join('; ');
-        errors.push({ path: `${at}.frpId`, message: `the FRP material "${scheme.frpId}" could not be built${cause ? ` (${cause})` : ''}` });
+        const causes = errorsOf(materials.problems).map((p) => phrase`${p.path}: ${p.message}`);
+        errors.push({ path: `${at}.frpId`, message: phrase`the FRP material "${scheme.frpId}" could not be built${causes.length > 0 ? phrase` (${joinTexts(causes, '; ')})` : ''}` });
         continue;
       }
       const concreteStrength = refMaterials.concreteSpec(refSection.definition.concreteId)?.strength ?? 0;
@@ -243,19 +244,25 @@ export function buildScheme(setup: Setup, input: SchemeInput): SchemeResult {
   const unchanged = new Map([...ref.analyses].filter(([id]) => !sections.has(ref.baseOf.get(id) ?? id)));
   const run = runVariant(setup, { key: scheme.id, label: scheme.name, member: variantMember, definitions, baseOf, additions, added, materials, analyses: unchanged });
   const variant = compactOf(setup, run, `${scheme.name}: `);
-  const comparison = run.result.status === 'input-error' ? null : compareVariants(comparisonCompact, variant, scheme.name, setup.text);
+  const comparison = run.result.status === 'input-error' ? null : compareVariants(comparisonCompact, variant, scheme.name);
   // ACI 440.2R-17 9.2: the unstrengthened member under 1.1 SD + 0.75 LL (bonded schemes only).
   let lossOfStrengthening: SchemeResult['lossOfStrengthening'] = null;
   if (scheme.kind !== 'concrete-layer') {
     const combination = `1.1 SD + 0.75 LL (ACI 440.2R-17 Eq. 9.2, strengthening lost)`;
-    const check = flexuralCheck(code, comparisonRun.member, comparisonRun.zones, { dead: 1.1, superimposed: 1.1, live: 0.75 }, combination, setup.segments, setup.text);
+    const check = flexuralCheck(code, comparisonRun.member, comparisonRun.zones, { dead: 1.1, superimposed: 1.1, live: 0.75 }, combination, setup.segments);
     if (check) {
       lossOfStrengthening = { combination, check, source: 'ACI 440.2R-17 9.2, Eq. (9.2) (from memory): (φRn)existing ≥ (1.1 SDL + 0.75 SLL)new, with the design resistance of the beam before strengthening' };
-      if (!check.pass) warnings.push(`ACI 440.2R-17 9.2 limit not met: without the strengthening the beam could not carry 1.1 SD + 0.75 LL (utilisation ${check.utilisation.toFixed(2)} at ${setup.text.span(check.position)}): the strengthening exceeds what the existing beam allows`);
+      if (!check.pass) warnings.push(phrase`ACI 440.2R-17 9.2 limit not met: without the strengthening the beam could not carry 1.1 SD + 0.75 LL (utilisation ${check.utilisation.toFixed(2)} at ${q('spanLength', check.position)}): the strengthening exceeds what the existing beam allows`);
     }
   }
   if (!variant.ductility.available) warnings.push('shear governs the strengthened beam before its flexural mechanism: its ductility and hinge rotations are not available');
-  return { ...base, variant, frp, installation, comparison, lossOfStrengthening, warnings: [...warnings, ...run.result.warnings.filter((w) => !comparisonRun.result.warnings.includes(w))], errors: [...errors, ...run.result.errors] };
+  return { ...base, variant, frp, installation, comparison, lossOfStrengthening, warnings: [...warnings, ...newWarnings(run.result.warnings, comparisonRun.result.warnings)], errors: [...errors, ...run.result.errors] };
+}
+
+/** Warnings of a variant that the beam it is compared with does not have (texts compared by content). */
+function newWarnings(own: readonly Text[], reference: readonly Text[]): Text[] {
+  const known = new Set(reference.map((w) => JSON.stringify(w)));
+  return own.filter((w) => !known.has(JSON.stringify(w)));
 }
 
 /** Cracked transformed properties of an analysed section at the concrete modulus Ec (MPa); null without tension steel. */

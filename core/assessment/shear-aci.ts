@@ -4,6 +4,9 @@
  * 22.5.1.2, φ = 0.75 (Table 21.2.1(b)). One published expression per function.
  * Units: N, mm, MPa.
  */
+import { convertUnit } from '../units/convert.ts';
+import { bySystem, phrase, q, type SystemPart, type Text } from '../units/phrase.ts';
+
 /** Strength reduction factor for shear, φ = 0.75. @see ACI 318-19 Table 21.2.1(b) */
 export const ACI_SHEAR_PHI = 0.75;
 /** Largest √f′c used for shear, 8.3 MPa (f′c ≤ 69 MPa). @see ACI 318-19 22.5.3.1 */
@@ -130,7 +133,12 @@ export interface AciShearStrength {
   readonly meetsMinimum: boolean;
   /** fyt used (≤ 420 MPa), MPa. */
   readonly stirrupYield: number;
-  readonly notes: readonly string[];
+  readonly notes: readonly Text[];
+}
+
+/** An area per length of member (stirrups, mm²/mm) as printed: mm²/mm, or in²/in. */
+function areaPerLength(mm2PerMm: number): SystemPart {
+  return bySystem(`${mm2PerMm.toFixed(3)} mm²/mm`, `${convertUnit(mm2PerMm, 'mm', 'in').toFixed(4)} in²/in`);
 }
 
 /**
@@ -138,10 +146,10 @@ export interface AciShearStrength {
  * @see ACI 318-19 22.5.1.1, 22.5.1.2, Table 22.5.5.1, Eq. 22.5.8.5.3, Table 21.2.1(b), 9.7.6.2.2 (spacing)
  */
 export function aciShearStrength(input: Omit<AciConcreteShearInput, 'meetsMinimum'> & { readonly stirrups: StirrupInput | null }): AciShearStrength {
-  const notes: string[] = [];
+  const notes: Text[] = [];
   const st = input.stirrups;
   const fyt = st ? Math.min(st.yieldStress, ACI_STIRRUP_YIELD_LIMIT) : 0;
-  if (st && st.yieldStress > ACI_STIRRUP_YIELD_LIMIT) notes.push(`fyt limited to ${ACI_STIRRUP_YIELD_LIMIT} MPa for shear (ACI 318-19 Table 20.2.2.4(a)).`);
+  if (st && st.yieldStress > ACI_STIRRUP_YIELD_LIMIT) notes.push(phrase`fyt limited to ${q('stress', ACI_STIRRUP_YIELD_LIMIT, { compact: true })} for shear (ACI 318-19 Table 20.2.2.4(a)).`);
   const minimumPerLength = fyt > 0 ? aciMinimumShearReinforcement(input.fc, input.bw, fyt) : 0;
   const meetsMinimum = st !== null && st.area / st.spacing >= minimumPerLength;
   const concrete = aciConcreteShear({ ...input, meetsMinimum });
@@ -155,12 +163,12 @@ export function aciShearStrength(input: Omit<AciConcreteShearInput, 'meetsMinimu
     const high = steelUnlimited > 0.33 * sqrtFc * input.bw * input.d;
     const maxSpacing = high ? Math.min(input.d / 4, 300) : Math.min(input.d / 2, 600);
     if (st.spacing > maxSpacing) {
-      notes.push(`Stirrup spacing ${st.spacing.toFixed(0)} mm exceeds the ACI 318-19 9.7.6.2.2 limit (${maxSpacing.toFixed(0)} mm): some inclined cracks may cross no stirrup.`);
+      notes.push(phrase`Stirrup spacing ${q('sectionLength', st.spacing, { compact: true })} exceeds the ACI 318-19 9.7.6.2.2 limit (${q('sectionLength', maxSpacing, { compact: true })}): some inclined cracks may cross no stirrup.`);
     }
   } else {
     notes.push('No stirrups: Vc by Table 22.5.5.1(c) with the size effect λs.');
   }
-  if (!meetsMinimum && st) notes.push(`Av/s = ${(st.area / st.spacing).toFixed(3)} mm²/mm is below Av,min/s = ${minimumPerLength.toFixed(3)} mm²/mm: Vc by Table 22.5.5.1(c) with the size effect λs.`);
+  if (!meetsMinimum && st) notes.push(phrase`Av/s = ${areaPerLength(st.area / st.spacing)} is below Av,min/s = ${areaPerLength(minimumPerLength)}: Vc by Table 22.5.5.1(c) with the size effect λs.`);
   if (concrete.capped) notes.push('Vc limited to 0.42λ√f′c·bw·d (ACI 318-19 22.5.5.1.1).');
   const nominal = concrete.value + steel;
   return { concrete, steel, steelUnlimited, steelLimit, nominal, design: ACI_SHEAR_PHI * nominal, phi: ACI_SHEAR_PHI, minimumPerLength, meetsMinimum, stirrupYield: fyt, notes };

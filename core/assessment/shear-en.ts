@@ -4,6 +4,7 @@
  * give the largest resistance. One published expression per function.
  * Units: N, mm, MPa.
  */
+import { phrase, q, type Text } from '../units/phrase.ts';
 import type { StirrupInput } from './shear-aci.ts';
 
 /** k = 1 + √(200/d) ≤ 2.0 (d in mm). @see EN 1992-1-1 6.2.2(1) */
@@ -121,7 +122,7 @@ export interface EnShearStrength {
   readonly supportLimit: number;
   readonly minimumRatio: number;
   readonly meetsMinimum: boolean;
-  readonly notes: readonly string[];
+  readonly notes: readonly Text[];
 }
 
 /**
@@ -135,7 +136,7 @@ export function enShearStrength(
   input: Omit<EnConcreteShearInput, 'gammaC'> & { readonly stirrups: StirrupInput | null },
   factors: { readonly gammaC: number; readonly gammaS: number },
 ): EnShearStrength {
-  const notes: string[] = [];
+  const notes: Text[] = [];
   const concrete = enConcreteShear({ ...input, gammaC: factors.gammaC });
   const fcd = input.fck / factors.gammaC;
   const nu1 = enStrutReductionFactor(input.fck);
@@ -154,8 +155,8 @@ export function enShearStrength(
   if (!st) notes.push('No stirrups: VRd,c of a member without shear reinforcement (6.2.2).');
   else {
     if (!meetsMinimum) notes.push(`ρw = ${(areaPerLength / input.bw).toExponential(2)} is below ρw,min = 0.08√fck/fyk = ${minimumRatio.toExponential(2)} (EN 1992-1-1 Eq. 9.5N).`);
-    if (st.spacing > 0.75 * input.d) notes.push(`Stirrup spacing ${st.spacing.toFixed(0)} mm exceeds sl,max = 0.75d = ${(0.75 * input.d).toFixed(0)} mm (EN 1992-1-1 Eq. 9.6N).`);
-    if (steel > maximum) notes.push(`The compression struts govern: VRd,max = ${(maximum / 1000).toFixed(0)} kN at cot θ = ${cotTheta.toFixed(2)}.`);
+    if (st.spacing > 0.75 * input.d) notes.push(phrase`Stirrup spacing ${q('sectionLength', st.spacing, { compact: true })} exceeds sl,max = 0.75d = ${q('sectionLength', 0.75 * input.d, { compact: true })} (EN 1992-1-1 Eq. 9.6N).`);
+    if (steel > maximum) notes.push(phrase`The compression struts govern: VRd,max = ${q('force', maximum)} at cot θ = ${cotTheta.toFixed(2)}.`);
   }
   return {
     concrete, steel, maximum, cotTheta, z, nu1, alphaCw, fcd, fywd, value,

@@ -13,6 +13,8 @@ import { faces } from '../section/state.ts';
 import { stripWidthAt } from '../section/width-profile.ts';
 import { aciShearStrength, type StirrupInput } from './shear-aci.ts';
 import { enShearStrength } from './shear-en.ts';
+import { convertUnit } from '../units/convert.ts';
+import { bySystem, type Text } from '../units/phrase.ts';
 
 export interface ShearGeometry {
   /** Depth of the compression face below the top fibre, mm. */
@@ -101,11 +103,15 @@ export interface ShearCapacity {
   /** EN only: design and nominal limits at the support face (Eq. 6.5), N. */
   readonly supportLimit: { readonly design: number; readonly nominal: number } | null;
   /** The governing expression with the numbers, for the report. */
-  readonly formula: string;
-  readonly notes: readonly string[];
+  readonly formula: Text;
+  readonly notes: readonly Text[];
 }
 
 const kN = (n: number) => `${(n / 1000).toFixed(1)} kN`;
+const kip = (n: number) => `${convertUnit(n, 'N', 'kip').toFixed(1)} kip`;
+const inch = (mm: number) => convertUnit(mm, 'mm', 'in').toFixed(1);
+/** √ of a stress in MPa, as √psi. */
+const sqrtPsi = (sqrtMpa: number) => Math.sqrt(convertUnit(sqrtMpa * sqrtMpa, 'MPa', 'psi'));
 
 /**
  * Shear capacity of a zone's section in one bending direction (the side in tension sets d and ρ).
@@ -123,7 +129,7 @@ export function sectionShearCapacity(code: CodeBasis, zone: ShearZone, direction
     : null;
   const fc = zone.concrete.strength;
   const rho = geometry.tensionBarArea / (bw * d);
-  const notes: string[] = [];
+  const notes: Text[] = [];
   if (!geometry.hasTensionBars) notes.push(`No ${direction === 'sagging' ? 'bottom' : 'top'} tension bars: d taken as 0.8 of the depth and ρ = 0.`);
   if (hoops && !stirrups) notes.push('The stirrup steel could not be resolved: stirrups ignored.');
   const common = { bw, d, axialForce: model.axialForce };
@@ -135,6 +141,10 @@ export function sectionShearCapacity(code: CodeBasis, zone: ShearZone, direction
     const vcText = c.expression === '(a)'
       ? `Vc = (0.17λ√f′c + Nu/6Ag)·bw·d = (0.17 × ${lambda} × ${c.sqrtFc.toFixed(2)} + ${c.axialStress.toFixed(2)}) × ${bw.toFixed(0)} × ${d.toFixed(0)} = ${kN(c.value)}`
       : `Vc = (0.66${c.expression === '(c)' ? `·λs` : ''}·λ·ρw^(1/3)·√f′c + Nu/6Ag)·bw·d${c.expression === '(c)' ? ` with λs = ${c.lambdaS.toFixed(3)}` : ''}, ρw = ${rho.toFixed(4)}: ${kN(c.value)}`;
+    // The in.-lb. form of the same expressions: 2λ√f′c and 8λ·ρw^(1/3)·√f′c with f′c in psi (ACI 318-19 Table 22.5.5.1, from memory).
+    const vcTextUS = c.expression === '(a)'
+      ? `Vc = (2λ√f′c + Nu/6Ag)·bw·d = (2 × ${lambda} × ${sqrtPsi(c.sqrtFc).toFixed(1)} + ${convertUnit(c.axialStress, 'MPa', 'psi').toFixed(0)}) × ${inch(bw)} × ${inch(d)} = ${kip(c.value)}`
+      : `Vc = (8${c.expression === '(c)' ? `·λs` : ''}·λ·ρw^(1/3)·√f′c + Nu/6Ag)·bw·d${c.expression === '(c)' ? ` with λs = ${c.lambdaS.toFixed(3)}` : ''}, ρw = ${rho.toFixed(4)}: ${kip(c.value)}`;
     return {
       ...identity,
       stirrups: hoops && stirrups ? { legs: hoops.verticalLegs, diameter: hoops.diameter, spacing: hoops.spacing, area: stirrups.area, yieldStress: r.stirrupYield, meetsMinimum: r.meetsMinimum } : null,
@@ -144,7 +154,10 @@ export function sectionShearCapacity(code: CodeBasis, zone: ShearZone, direction
       nominal: r.nominal,
       design: r.design,
       supportLimit: null,
-      formula: `(SI form of the code equations: mm, MPa, kN) ${vcText} (ACI 318-19 Table 22.5.5.1${c.expression}); Vs = Av·fyt·d/s = ${kN(r.steel)} (Eq. 22.5.8.5.3); φVn = 0.75 × ${kN(r.nominal)} = ${kN(r.design)}`,
+      formula: [bySystem(
+        `(SI form of the code equations: mm, MPa, kN) ${vcText} (ACI 318-19 Table 22.5.5.1${c.expression}); Vs = Av·fyt·d/s = ${kN(r.steel)} (Eq. 22.5.8.5.3); φVn = 0.75 × ${kN(r.nominal)} = ${kN(r.design)}`,
+        `(in.-lb. form of the code equations: in, psi, kip) ${vcTextUS} (ACI 318-19 Table 22.5.5.1${c.expression}); Vs = Av·fyt·d/s = ${kip(r.steel)} (Eq. 22.5.8.5.3); φVn = 0.75 × ${kip(r.nominal)} = ${kip(r.design)}`,
+      )],
       notes: [...notes, ...r.notes],
     };
   }
@@ -161,6 +174,7 @@ export function sectionShearCapacity(code: CodeBasis, zone: ShearZone, direction
     nominal: nominal.value,
     design: design.value,
     supportLimit: { design: design.supportLimit, nominal: nominal.supportLimit },
+    // EN 1992-1-1 has SI equations only: shown in that form in either unit system.
     formula: `(SI form of the code equations: mm, MPa, kN) VRd,c = [${c.cRdc.toFixed(3)} × ${c.k.toFixed(3)} × (100 × ${c.rhoL.toFixed(4)} × ${fc})^(1/3) + 0.15 × ${c.sigmaCp.toFixed(2)}]·bw·d ≥ (vmin + 0.15σcp)·bw·d = ${kN(c.value)} (Eq. ${c.governedBy}); VRd,s = (Asw/s)·z·fywd·cot θ = ${kN(design.steel)} (Eq. 6.8), VRd,max = ${kN(design.maximum)} (Eq. 6.9) at cot θ = ${design.cotTheta.toFixed(2)}; VRd = ${kN(design.value)}`,
     notes: [...notes, ...design.notes],
   };

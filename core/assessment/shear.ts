@@ -33,7 +33,7 @@ import type { BeamDefinition, LoadFactors } from '../member/definition.ts';
 import { memberForcesAt, releasedMoment, totalLoad } from '../member/statics.ts';
 import type { BendingDirection, DiscreteElement } from '../section/model.ts';
 import { tensionSteel } from '../section/model.ts';
-import { SI_TEXT, type QuantityText } from '../units/text.ts';
+import { joinTexts, phrase, q, type Text } from '../units/phrase.ts';
 import { combinedLoads, memberLoadSets, scaleLoad } from './combinations.ts';
 import { elasticSupportMoments, type ElasticZone } from './demand.ts';
 import { sectionShearCapacity, type ShearCapacity, type ShearZone } from './shear-section.ts';
@@ -82,10 +82,10 @@ export interface ShearResult {
   /** False when shear governs: the flexural ductility and hinge rotations are then not available. */
   readonly flexuralDuctilityAvailable: boolean;
   /** The shear part of the governing-mode sentence. */
-  readonly sentence: string;
+  readonly sentence: Text;
   /** Which sections near the supports were skipped, and why. */
-  readonly criticalSectionRule: string;
-  readonly warnings: readonly string[];
+  readonly criticalSectionRule: Text;
+  readonly warnings: readonly Text[];
 }
 
 /** Inputs of memberShear. */
@@ -101,8 +101,6 @@ export interface MemberShearInput {
   readonly segments?: number;
   /** γo on the section peak moment for the mechanism (default 1.0). */
   readonly overstrengthFactor?: number;
-  /** Formats forces and positions in the sentences (the project's display units; default SI). */
-  readonly text?: QuantityText;
 }
 
 
@@ -125,12 +123,11 @@ function hingeMoments(zone: ShearZone, gamma: number): { sagging: number; hoggin
  * @see module comment for the clauses
  */
 export function memberShear(input: MemberShearInput): ShearResult {
-  const text = input.text ?? SI_TEXT;
   const { code, member, zones } = input;
   const span = member.span;
   const segments = input.segments ?? 200;
   const gamma = input.overstrengthFactor ?? 1;
-  const warnings: string[] = [];
+  const warnings: Text[] = [];
 
   // --- capacities per zone and direction ----------------------------------------------------------
   const caps = zones.map((z) => ({ sagging: sectionShearCapacity(code, z, 'sagging'), hogging: sectionShearCapacity(code, z, 'hogging') }));
@@ -179,7 +176,7 @@ export function memberShear(input: MemberShearInput): ShearResult {
   const pointPositions = member.loads.filter((l) => l.kind === 'point').map((l) => (l as { position: number }).position);
   const supportsAt = member.supports === 'cantilever' ? [0] : [0, span];
   const skip: { readonly side: 'left' | 'right'; readonly limit: number }[] = [];
-  const ruleParts: string[] = [];
+  const ruleParts: Text[] = [];
   for (const xs of supportsAt) {
     const zi = zoneIndexAt(xs, xs === 0 ? 'right' : 'left');
     const c = caps[zi]!;
@@ -188,13 +185,13 @@ export function memberShear(input: MemberShearInput): ShearResult {
     const d = Math.min(depths.length > 0 ? Math.min(...depths) : Math.max(c.sagging?.effectiveDepth ?? 0, c.hogging?.effectiveDepth ?? 0), span);
     const left = xs === 0;
     const loaded = pointPositions.some((p) => (left ? p > 0 && p <= d : p >= span - d && p < span));
-    if (loaded) ruleParts.push(`a point load lies within d = ${text.section(d)} of the support at ${text.span(xs)}: checked up to the support face`);
+    if (loaded) ruleParts.push(phrase`a point load lies within d = ${q('sectionLength', d)} of the support at ${q('spanLength', xs)}: checked up to the support face`);
     else {
       skip.push({ side: left ? 'left' : 'right', limit: left ? d : span - d });
-      ruleParts.push(`sections within d = ${text.section(d)} of the support at ${text.span(xs)} take the shear at d`);
+      ruleParts.push(phrase`sections within d = ${q('sectionLength', d)} of the support at ${q('spanLength', xs)} take the shear at d`);
     }
   }
-  const criticalSectionRule = `${ruleParts.join('; ')} (${code === 'ACI 318-19' ? 'ACI 318-19 9.4.3.2' : 'EN 1992-1-1 6.2.1(8); the support face is checked against Eq. 6.5'}).`;
+  const criticalSectionRule = phrase`${joinTexts(ruleParts, '; ')} (${code === 'ACI 318-19' ? 'ACI 318-19 9.4.3.2' : 'EN 1992-1-1 6.2.1(8); the support face is checked against Eq. 6.5'}).`;
   const stationSet = new Set<number>();
   for (let i = 0; i <= segments; i++) stationSet.add((span * i) / segments);
   for (const z of zones) {
@@ -311,7 +308,7 @@ export function memberShear(input: MemberShearInput): ShearResult {
       for (const x of stations) {
         const mx = forces(x, 'right').moment;
         if (mx < 0 && -mx > hingeAt(x, 'right').hogging * 1.001 && x > 0 && x < span) {
-          warnings.push(`At the assumed mechanism the hogging moment at ${text.span(x)} exceeds that section's capacity: the true mechanism differs and its shear may be higher.`);
+          warnings.push(phrase`At the assumed mechanism the hogging moment at ${q('spanLength', x)} exceeds that section's capacity: the true mechanism differs and its shear may be higher.`);
           break;
         }
       }
@@ -353,20 +350,20 @@ export function memberShear(input: MemberShearInput): ShearResult {
   }
 
   // --- sentence ---------------------------------------------------------------------------------------------
-  const factoredText = `factored shear check ${factored.pass ? 'passes' : 'fails'} (utilisation ${factored.utilisation.toFixed(2)} at ${text.span(factored.governing.position)} under ${input.combination})`;
+  const factoredText = phrase`factored shear check ${factored.pass ? 'passes' : 'fails'} (utilisation ${factored.utilisation.toFixed(2)} at ${q('spanLength', factored.governing.position)} under ${input.combination})`;
   const capName = code === 'ACI 318-19' ? 'Vn' : 'VRk (γ = 1)';
   const designName = code === 'ACI 318-19' ? 'φVn' : 'VRd';
-  let sentence: string;
+  let sentence: Text;
   if (mechanism && governs === 'shear') {
     const g = mechanism.governing;
     const at = shearFailureLoadFactor !== null ? `, reached at about ${(shearFailureLoadFactor / mechanism.loadFactor).toFixed(2)} × the flexural collapse load` : '';
-    sentence = `shear governs (brittle): at the flexural mechanism the shear would reach ${text.force(g.shear)} at ${text.span(g.position)}, above ${capName} = ${text.force(g.nominal)} (ratio ${mechanism.nominalRatio.toFixed(2)})${at}, so the ductility and plastic hinge rotations are not available; ${factoredText}`;
+    sentence = phrase`shear governs (brittle): at the flexural mechanism the shear would reach ${q('force', g.shear)} at ${q('spanLength', g.position)}, above ${capName} = ${q('force', g.nominal)} (ratio ${mechanism.nominalRatio.toFixed(2)})${at}, so the ductility and plastic hinge rotations are not available; ${factoredText}`;
   } else if (mechanism) {
     const g = mechanism.governing;
-    const margin = mechanism.designRatio > 1 ? `, though above ${designName} = ${text.force(g.design)} (capacity-design ratio ${mechanism.designRatio.toFixed(2)})` : '';
-    sentence = `shear: flexure governs — at the flexural mechanism the shear reaches ${text.force(g.shear)} at ${text.span(g.position)} against ${capName} = ${text.force(g.nominal)} (ratio ${mechanism.nominalRatio.toFixed(2)})${margin}; ${factoredText}`;
+    const margin = mechanism.designRatio > 1 ? phrase`, though above ${designName} = ${q('force', g.design)} (capacity-design ratio ${mechanism.designRatio.toFixed(2)})` : '';
+    sentence = phrase`shear: flexure governs — at the flexural mechanism the shear reaches ${q('force', g.shear)} at ${q('spanLength', g.position)} against ${capName} = ${q('force', g.nominal)} (ratio ${mechanism.nominalRatio.toFixed(2)})${margin}; ${factoredText}`;
   } else {
-    sentence = `shear: ${factoredText}; failure mode not determined (${mechanismNote})`;
+    sentence = phrase`shear: ${factoredText}; failure mode not determined (${mechanismNote})`;
   }
   return {
     code,

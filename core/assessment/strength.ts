@@ -11,7 +11,7 @@ import { solveStatic } from '../member/static.ts';
 import { releasedMoment, toStaticLoad, type StaticLoad } from '../member/statics.ts';
 import { elasticZone } from '../member/zones.ts';
 import type { SectionAnalysis } from '../section/analyze.ts';
-import type { QuantityText } from '../units/text.ts';
+import { joinTexts, phrase, uniqueTexts, type Text } from '../units/phrase.ts';
 import { strengthCombination } from './combinations.ts';
 import { designResistance } from './resistance.ts';
 import type { StrengthCheck } from './results.ts';
@@ -22,7 +22,7 @@ export interface ZoneResistance {
   /** Design resistance per direction, N·mm (null: no tension steel on that side). */
   readonly sagging: number | null;
   readonly hogging: number | null;
-  readonly notes: string[];
+  readonly notes: Text[];
 }
 
 export function strengthCheck(
@@ -38,7 +38,7 @@ export function strengthCheck(
   const uH = ratio(demand.hogging, hogZone.hogging);
   const utilisation = Math.max(uS, uH);
   const finite = Number.isFinite(utilisation);
-  const notes = [...new Set([...sagZone.notes, ...hogZone.notes])];
+  const notes = uniqueTexts([...sagZone.notes, ...hogZone.notes]);
   if (!finite) notes.push(`${uS > uH ? 'Sagging' : 'Hogging'} moment demand where the section has no tension reinforcement on that side.`);
   return {
     combination,
@@ -51,7 +51,7 @@ export function strengthCheck(
     // A missing resistance under a real demand is reported as a utilisation of 99.99 (never Infinity).
     utilisation: finite ? utilisation : 99.99,
     pass: finite && utilisation <= 1,
-    notes: notes.join(' '),
+    notes: joinTexts(notes, ' '),
   };
 }
 
@@ -61,7 +61,7 @@ export function strengthCheck(
  * analysis (gross sections, code modulus) against the design resistance of the zone where each occurs.
  * @param analyses the section analysis of each zone, in zone order
  */
-export function memberStrength(member: BeamDefinition, analyses: readonly SectionAnalysis[], code: CodeBasis, segments: number, text: QuantityText): StrengthCheck {
+export function memberStrength(member: BeamDefinition, analyses: readonly SectionAnalysis[], code: CodeBasis, segments: number): StrengthCheck {
   const span = member.span;
   const includeSelfWeight = member.includeSelfWeight ?? true;
   const selfWeight: StaticLoad[] = includeSelfWeight ? member.zones.map((z, i) => ({ kind: 'uniform', w: analyses[i]!.selfWeight, from: z.from, to: z.to })) : [];
@@ -94,10 +94,10 @@ export function memberStrength(member: BeamDefinition, analyses: readonly Sectio
   const resistances: ZoneResistance[] = member.zones.map((z, i) => {
     const s = analyses[i]!;
     const curves = code === 'EN 1992-1-1' && s.designCurves ? s.designCurves : s.curves;
-    const r = (dir: 'sagging' | 'hogging') => designResistance(code, curves[dir], s.yieldStrain[dir], text);
+    const r = (dir: 'sagging' | 'hogging') => designResistance(code, curves[dir], s.yieldStrain[dir]);
     const rs = r('sagging');
     const rh = r('hogging');
-    return { from: z.from, to: z.to, sagging: rs.value, hogging: rh.value, notes: [`${s.sectionName}: sagging ${rs.note}; hogging ${rh.note}.`] };
+    return { from: z.from, to: z.to, sagging: rs.value, hogging: rh.value, notes: [phrase`${s.sectionName}: sagging ${rs.note}; hogging ${rh.note}.`] };
   });
   return strengthCheck(combination, { sagging: sag, saggingPosition: sagAt, hogging: hog, hoggingPosition: hogAt }, resistances);
 }

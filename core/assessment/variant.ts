@@ -15,7 +15,6 @@ import { analyzeSection, type SectionAnalysis } from '../section/analyze.ts';
 import type { SectionAdditions } from '../section/build.ts';
 import type { SectionDefinition } from '../section/definition.ts';
 import type { BilinearMethod } from '../section/results.ts';
-import { SI_TEXT, type QuantityText } from '../units/text.ts';
 import { strengthCombination } from './combinations.ts';
 import type { MemberResult } from './results.ts';
 import { memberShear, type ShearResult } from './shear.ts';
@@ -37,8 +36,6 @@ export interface Setup {
   readonly path: string;
   readonly segments: number;
   readonly sectionSettings: SectionSettings;
-  /** Quantities in sentences, in the project's display units. */
-  readonly text: QuantityText;
 }
 
 /** One analysed beam variant. */
@@ -100,9 +97,8 @@ export function assessBeam(member: BeamDefinition, context: MemberContext): Memb
     const count = beam.inputErrors.length;
     return { ...beam.result, status: 'input-error', governingMode: `Not analysed: ${count} input problem${count === 1 ? '' : 's'} to fix first.`, strength: null };
   }
-  const text = context.text ?? SI_TEXT;
   const analyses = member.zones.map((z) => context.section(z.sectionId)!);
-  const strength = memberStrength(member, analyses, context.code, context.segments, text);
+  const strength = memberStrength(member, analyses, context.code, context.segments);
   const { text: combination } = strengthCombination(member, context.code);
   const result = beam.result;
   const checks = result.service?.checks ?? [];
@@ -156,7 +152,7 @@ export function runVariant(setup: Setup, input: VariantInput): VariantRun {
       ...(additions ? { additions } : {}),
     }));
   }
-  const context: MemberContext = { code, segments: setup.segments, section: (id) => analyses.get(id), sectionIds: new Set(analyses.keys()), path: setup.path, text: setup.text };
+  const context: MemberContext = { code, segments: setup.segments, section: (id) => analyses.get(id), sectionIds: new Set(analyses.keys()), path: setup.path };
   const result = input.result ?? safeAssessBeam(input.member, context);
   const zones: ShearZone[] = input.member.zones.map((z) => {
     const analysis = analyses.get(z.sectionId)!;
@@ -168,7 +164,7 @@ export function runVariant(setup: Setup, input: VariantInput): VariantRun {
   let shear: ShearResult | null = null;
   if (result.status !== 'input-error' && zones.every((z) => z.analysis.model && z.concrete)) {
     const { factors, text } = strengthCombination(input.member, code);
-    shear = memberShear({ code, member: input.member, zones, factors, combination: text, segments: setup.segments, text: setup.text });
+    shear = memberShear({ code, member: input.member, zones, factors, combination: text, segments: setup.segments });
   }
   return { key: input.key, label: input.label, member: input.member, analyses, definitions: input.definitions, baseOf: input.baseOf, added: input.added ?? new Map(), result, shear, zones };
 }

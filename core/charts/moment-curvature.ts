@@ -6,6 +6,7 @@
 import type { SectionResult } from '../member/results.ts';
 import type { KeyPointName, MomentCurvatureResult } from '../section/results.ts';
 import type { BendingDirection } from '../section/model.ts';
+import { say } from '../units/phrase.ts';
 import { SERIES_COLOURS } from './palette.ts';
 import type { ChartPoint, ChartSpec, MarkerShape, MarkerSpec, SeriesSpec, UnitsInput } from './types.ts';
 import { axisFor, axisScale, display, finite, resolveUnits, unitText } from './units.ts';
@@ -135,7 +136,7 @@ export function momentCurvatureChart(result: MomentCurvatureResult | readonly Cu
       const text = curves.length > 1 && !panels ? `${KEY_POINT_LABELS[key]} (${name})` : KEY_POINT_LABELS[key];
       markers.push({ x: p.x, y: p.y, label: text, shape: KEY_POINT_SHAPES[key], colour, ...onAxis });
     }
-    if (curve.status.kind === 'not-converged') notes.push(`${name}: ${curve.status.message}`);
+    if (curve.status.kind === 'not-converged') notes.push(`${name}: ${say(curve.status.message, units.system)}`);
   });
 
   const curvatureUnit = unitText('curvature', units);

@@ -1,4 +1,4 @@
-import { BugError, checkNumber, type AllowedRange, type Diagnostic } from '../diagnostics.ts';
+import { BugError, checkNumber, reworded, type AllowedRange, type Diagnostic } from '../diagnostics.ts';
 
 /**
  * Checks one number with `checkNumber` and prefixes the message with the field's name in words, so the
@@ -14,7 +14,7 @@ export function checkField(
 ): value is number {
   const local: Diagnostic[] = [];
   const ok = checkNumber(local, path, value, range, severity);
-  for (const diagnostic of local) out.push({ ...diagnostic, message: `${label} ${diagnostic.message}` });
+  for (const diagnostic of local) out.push(reworded(diagnostic, `${label} `));
   return ok;
 }
 

@@ -6,8 +6,8 @@
  */
 import type { Diagnostic } from '../diagnostics.ts';
 import { BugError } from '../diagnostics.ts';
+import { phrase, uniqueTexts, type Text } from '../units/phrase.ts';
 import type { CodeBasis } from '../materials/specs.ts';
-import type { QuantityText } from '../units/text.ts';
 import type { SectionAnalysis } from '../section/analyze.ts';
 import { buildBeamModel, type BeamModel, type ZoneResponse } from './beam-model.ts';
 import type { BeamDefinition, MemberLoad } from './definition.ts';
@@ -30,8 +30,6 @@ export interface MemberContext {
   readonly sectionIds: ReadonlySet<string>;
   /** Path of the member in the project file, e.g. `members[3] "B-12"`. */
   readonly path: string;
-  /** Formats quantities inside sentences in the project's display units (default SI). */
-  readonly text?: QuantityText;
 }
 
 /** What the assessment needs from the beam's analysis besides its plain result. */
@@ -121,7 +119,7 @@ export function analyzeBeam(member: BeamDefinition, context: MemberContext): Bea
   const sections = uniqueSections.map(sectionResult).filter((s): s is SectionResult => s !== null);
   if (sectionErrors.length > 0) return invalid(member, sectionErrors, sections);
   const analyses = zoneSections as SectionAnalysis[];
-  const warnings: string[] = [...new Set(uniqueSections.flatMap((s) => s.warnings.map((w) => `Section "${s.sectionName}": ${w}`)))];
+  const warnings: Text[] = uniqueTexts(uniqueSections.flatMap((s) => s.warnings.map((w) => phrase`Section "${s.sectionName}": ${w}`)));
 
   // --- loads ------------------------------------------------------------------------------------
   const includeSelfWeight = member.includeSelfWeight ?? true;
@@ -154,7 +152,7 @@ export function analyzeBeam(member: BeamDefinition, context: MemberContext): Bea
     patternTotal: totalLoad(patternLoads),
   };
   const capacity = totalLoad(patternLoads) > 0
-    ? capacityCurve(beam, loading, member.capacity, controlAt, context.text)
+    ? capacityCurve(beam, loading, member.capacity, controlAt)
     : null;
   if (!capacity) warnings.push('The load pattern for the load–deflection curve is empty (no live load for a live-only pattern): no capacity curve.');
   if (capacity && capacity.hinges.some((h) => h.length < 5)) {

@@ -21,7 +21,6 @@
  * this file holds the stages. Internal units: mm, N·mm, 1/mm, rad.
  */
 import { regulaFalsiEvent } from '../numeric/roots.ts';
-import type { QuantityText } from '../units/text.ts';
 import type { BeamModel } from './beam-model.ts';
 import { CapacityState, type Snapshot } from './capacity-state.ts';
 import type { CapacitySettings } from './definition.ts';
@@ -71,8 +70,8 @@ interface RotationEvent {
  * @param capacity hinge length method etc.
  * @param controlAt station (mm) whose deflection the curve follows, when the caller chose one
  */
-export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: CapacitySettings, controlAt?: number, text?: QuantityText): CapacityCurve {
-  return new CapacityAnalysis(beam, loads, capacity, text).run(controlAt);
+export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: CapacitySettings, controlAt?: number): CapacityCurve {
+  return new CapacityAnalysis(beam, loads, capacity).run(controlAt);
 }
 
 class CapacityAnalysis extends CapacityState {
@@ -85,7 +84,7 @@ class CapacityAnalysis extends CapacityState {
   private finished = false;
   private state: Snapshot;
 
-  constructor(beam: BeamModel, loads: LoadingFields, private readonly capacity: CapacitySettings, private readonly text?: QuantityText) {
+  constructor(beam: BeamModel, loads: LoadingFields, private readonly capacity: CapacitySettings) {
     super(beam, loads);
     this.sites = hingeSites(beam.support);
     this.state = { lambda: 0, redundants: new Array(this.r).fill(0), rotations: new Map() };
@@ -385,7 +384,7 @@ class CapacityAnalysis extends CapacityState {
   /** A plastic hinge becomes active at a site that reached first yield. */
   private activate(site: HingeSite, s: Snapshot): void {
     const { station, sign } = this.yieldRatio(site, s);
-    const hinge = newHinge(this.beam, this.restore(s), { site, station, sign, activatedAt: s.lambda }, this.capacity, this.text);
+    const hinge = newHinge(this.beam, this.restore(s), { site, station, sign, activatedAt: s.lambda }, this.capacity);
     this.hingeVersion++;
     this.hinges.push(hinge);
     const x = this.beam.x[station]!;

@@ -7,6 +7,7 @@
  * Internal units: mm, N·mm, 1/mm, rad.
  */
 import { solveLinear } from '../numeric/linear.ts';
+import type { Text } from '../units/phrase.ts';
 import type { BeamModel, ZoneResponse } from './beam-model.ts';
 import { segmentIntegralsFromEnds, zoneCurvature, type SegmentIntegrals } from './beam-model.ts';
 import { interpolateWithSlope, type SectionResponse, type ValueAndSlope } from './section-response.ts';
@@ -27,7 +28,7 @@ export interface HingeState {
   /** Hinge length, mm, and where the lumped rotation acts (mm from the left support). */
   readonly length: number;
   rotationPosition: number;
-  readonly lengthFormula: string;
+  readonly lengthFormula: Text;
   readonly shearSpan: number;
   /** 'hardening': θ follows the moment; 'softening': past the peak, θ is an unknown. */
   phase: 'hardening' | 'softening';

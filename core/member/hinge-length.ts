@@ -7,8 +7,9 @@
  * sides (z1 + z2), keeps the depth-dependent part once, and drops the strain-penetration term,
  * since no bars are anchored there (common practice, no source).
  */
+import { convertUnit } from '../units/convert.ts';
+import { bySystem, type Text } from '../units/phrase.ts';
 import type { HingeLengthMethod } from './definition.ts';
-import type { QuantityText } from '../units/text.ts';
 
 export interface HingeLengthInput {
   readonly method: HingeLengthMethod;
@@ -24,17 +25,17 @@ export interface HingeLengthInput {
   readonly atSupport: boolean;
   /** User value for `method: 'user'`, mm. */
   readonly userLength?: number;
-  /** Formats the result in the project's display units after the formula (which keeps its published mm/MPa form). */
-  readonly text?: QuantityText;
 }
 
 export interface HingeLength {
   readonly length: number;
-  /** The expression with the numbers substituted, for the report. */
-  readonly formula: string;
+  /**
+   * The expression with the numbers substituted, for the report and the app: the published SI form
+   * (mm, MPa) in SI, the in.-lb. form (in, ksi) in US customary units.
+   */
+  readonly formula: Text;
 }
 
-const round = (x: number) => x.toFixed(0);
 
 /**
  * Priestley, Calvi & Kowalsky (2007), Eq. (4.31) (equation number from memory):
@@ -63,50 +64,61 @@ export function corley1966(dMm: number, zMm: number): number {
   return (0.5 * d + (0.2 * z) / Math.sqrt(d)) * 25.4;
 }
 
-/** Hinge length for a member hinge, with the substituted formula. */
-export function hingeLength(input: HingeLengthInput): HingeLength {
-  const result = hingeLengthSI(input);
-  // The expressions are published in mm and MPa; a US project also gets the result in its units.
-  if (input.text && input.text.system === 'US') return { ...result, formula: `${result.formula}; Lp = ${input.text.section(result.length)}` };
-  return result;
+/** The numbers of a formula in one system: lengths (from mm) and stresses (from MPa) as printed. */
+interface Printer {
+  length(mm: number): string;
+  stress(mpa: number): string;
+  /** Unit of the result. */
+  readonly unit: string;
 }
 
-function hingeLengthSI(input: HingeLengthInput): HingeLength {
+const SI: Printer = { length: (mm) => mm.toFixed(0), stress: (mpa) => mpa.toFixed(0), unit: 'mm' };
+const US: Printer = { length: (mm) => convertUnit(mm, 'mm', 'in').toFixed(1), stress: (mpa) => convertUnit(mpa, 'MPa', 'ksi').toFixed(1), unit: 'in' };
+
+/**
+ * Hinge length for a member hinge, with the substituted formula in both forms. The strain
+ * penetration term 0.022·fy·db (MPa, mm) is 0.15·fy·db in ksi and inches (Priestley, Calvi &
+ * Kowalsky 2007; Paulay & Priestley 1992 — from memory); the other expressions are dimensionally
+ * consistent, so only their numbers change.
+ */
+export function hingeLength(input: HingeLengthInput): HingeLength {
   const { method, effectiveDepth: d, shearSpans, barDiameter: db, yieldStress: fy, ultimateStress: fu, atSupport } = input;
   const zSum = shearSpans.reduce((s, z) => s + Math.max(z, 0), 0);
-  const zText = shearSpans.map(round).join(' + ');
+  let length: number;
+  let formula: (p: Printer) => string;
+  const zText = (p: Printer) => shearSpans.map(p.length).join(' + ');
+  const zGroup = (p: Printer) => (shearSpans.length > 1 ? `(${zText(p)})` : zText(p));
+  const penetration = (p: Printer) => (p === SI ? '0.022' : '0.15');
   switch (method) {
     case 'priestley-2007': {
       const k = Math.min(0.2 * (fu / fy - 1), 0.08);
-      const length = atSupport ? priestleyCalviKowalsky2007(zSum, fy, fu, db, true) : priestleyCalviKowalsky2007(zSum, fy, fu, db, false);
+      length = priestleyCalviKowalsky2007(zSum, fy, fu, db, atSupport);
       const lsp = 0.022 * fy * db;
-      return {
-        length,
-        formula: atSupport
-          ? `Lp = k·Lc + Lsp ≥ 2Lsp = ${k.toFixed(3)} × ${zText} + ${round(lsp)} = ${round(length)} mm (k = 0.2(fu/fy − 1) ≤ 0.08, Lsp = 0.022·fy·db; Priestley, Calvi & Kowalsky 2007)`
-          : `Lp = k·(z1 + z2) = ${k.toFixed(3)} × (${zText}) = ${round(length)} mm (no strain penetration inside the span; Priestley, Calvi & Kowalsky 2007)`,
-      };
+      formula = (p) => atSupport
+        ? `Lp = k·Lc + Lsp ≥ 2Lsp = ${k.toFixed(3)} × ${zText(p)} + ${p.length(lsp)} = ${p.length(length)} ${p.unit} (k = 0.2(fu/fy − 1) ≤ 0.08, Lsp = ${penetration(p)}·fy·db; Priestley, Calvi & Kowalsky 2007)`
+        : `Lp = k·(z1 + z2) = ${k.toFixed(3)} × (${zText(p)}) = ${p.length(length)} ${p.unit} (no strain penetration inside the span; Priestley, Calvi & Kowalsky 2007)`;
+      break;
     }
-    case 'paulay-priestley-1992': {
-      const length = paulayPriestley1992(zSum, fy, db, atSupport);
-      return {
-        length,
-        formula: atSupport
-          ? `Lp = 0.08·z + 0.022·db·fy = 0.08 × ${zText} + 0.022 × ${db} × ${round(fy)} = ${round(length)} mm (Paulay & Priestley 1992)`
-          : `Lp = 0.08·(z1 + z2) = 0.08 × (${zText}) = ${round(length)} mm (Paulay & Priestley 1992, no strain penetration inside the span)`,
-      };
-    }
-    case 'mattock-1967': {
-      const length = mattock1967(d, zSum);
-      return { length, formula: `Lp = 0.5·d + 0.05·z = 0.5 × ${round(d)} + 0.05 × ${shearSpans.length > 1 ? `(${zText})` : zText} = ${round(length)} mm (Mattock 1967)` };
-    }
-    case 'corley-1966': {
-      const length = corley1966(d, zSum);
-      return { length, formula: `Lp = 0.5·d + 0.2·z/√d (inches) = ${round(length)} mm with d = ${round(d)} mm, z = ${shearSpans.length > 1 ? `(${zText})` : zText} mm (Corley 1966)` };
-    }
-    case 'user': {
-      const length = input.userLength ?? 0;
-      return { length, formula: `Lp = ${round(length)} mm (value given by the engineer)` };
-    }
+    case 'paulay-priestley-1992':
+      length = paulayPriestley1992(zSum, fy, db, atSupport);
+      formula = (p) => atSupport
+        ? `Lp = 0.08·z + ${penetration(p)}·db·fy = 0.08 × ${zText(p)} + ${penetration(p)} × ${p === SI ? db : p.length(db)} × ${p.stress(fy)} = ${p.length(length)} ${p.unit} (Paulay & Priestley 1992)`
+        : `Lp = 0.08·(z1 + z2) = 0.08 × (${zText(p)}) = ${p.length(length)} ${p.unit} (Paulay & Priestley 1992, no strain penetration inside the span)`;
+      break;
+    case 'mattock-1967':
+      length = mattock1967(d, zSum);
+      formula = (p) => `Lp = 0.5·d + 0.05·z = 0.5 × ${p.length(d)} + 0.05 × ${zGroup(p)} = ${p.length(length)} ${p.unit} (Mattock 1967)`;
+      break;
+    case 'corley-1966':
+      length = corley1966(d, zSum);
+      formula = (p) => (p === SI
+        ? `Lp = 0.5·d + 0.2·z/√d (inches) = ${p.length(length)} mm with d = ${p.length(d)} mm, z = ${zGroup(p)} mm (Corley 1966)`
+        : `Lp = 0.5·d + 0.2·z/√d = 0.5 × ${p.length(d)} + 0.2 × ${zGroup(p)}/√${p.length(d)} = ${p.length(length)} in (Corley 1966)`);
+      break;
+    case 'user':
+      length = input.userLength ?? 0;
+      formula = (p) => `Lp = ${p.length(length)} ${p.unit} (value given by the engineer)`;
+      break;
   }
+  return { length, formula: [bySystem(formula(SI), formula(US))] };
 }

@@ -5,7 +5,6 @@
  * positions are reported.
  * Internal units: mm, N·mm, 1/mm, rad.
  */
-import type { QuantityText } from '../units/text.ts';
 import type { BeamModel } from './beam-model.ts';
 import type { StationRatio } from './capacity-state.ts';
 import type { CapacitySettings, HingeLengthMethod } from './definition.ts';
@@ -48,7 +47,7 @@ export interface HingeOrigin {
  * A hardening plastic hinge at a critical section that has just reached first yield.
  * @param moment moments at the stations when the hinge forms, N·mm (they give the shear spans)
  */
-export function newHinge(beam: BeamModel, moment: Float64Array, origin: HingeOrigin, capacity: CapacitySettings, text?: QuantityText): HingeState {
+export function newHinge(beam: BeamModel, moment: Float64Array, origin: HingeOrigin, capacity: CapacitySettings): HingeState {
   const { site, station, sign } = origin;
   const n = beam.x.length;
   const span = beam.span;
@@ -79,7 +78,6 @@ export function newHinge(beam: BeamModel, moment: Float64Array, origin: HingeOri
     ultimateStress: data.ultimateStress,
     atSupport: site !== 'span',
     ...(capacity.userHingeLength !== undefined ? { userLength: capacity.userHingeLength } : {}),
-    ...(text ? { text } : {}),
   };
   const hl = hingeLength(input);
   const length = Math.max(hl.length, 1);

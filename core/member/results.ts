@@ -3,7 +3,9 @@
  * 1/mm): sections, the load–deflection curve to ultimate, hinges and ductility, and the service
  * deflections. The checks and verdicts built on them are core/assessment/results.ts.
  */
+import type { Problem } from '../diagnostics.ts';
 import type { ElasticProperties } from '../section/elastic.ts';
+import type { Text } from '../units/phrase.ts';
 import type { MomentCurvatureResult } from '../section/results.ts';
 import type { DeflectionLimitCase, HingeLengthMethod, SupportType } from './definition.ts';
 
@@ -16,7 +18,7 @@ export interface SectionResult {
   readonly hogging?: MomentCurvatureResult;
   /** Self-weight of the section, N/mm. */
   readonly selfWeight: number;
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Text[];
 }
 
 export type MemberEventKind = 'cracking' | 'first-yield' | 'hinge' | 'peak' | 'mechanism' | 'ultimate';
@@ -65,7 +67,8 @@ export interface PlasticHinge {
   /** Plastic hinge length Lp, mm, and how it was obtained. */
   readonly length: number;
   readonly lengthMethod: HingeLengthMethod;
-  readonly lengthFormula: string;
+  /** Lp's expression with its numbers, in the display units (the published SI form, or the in.-lb. form). */
+  readonly lengthFormula: Text;
   /** Distance from the critical section to the point of contraflexure used in Lp, mm. */
   readonly shearSpan: number;
   /** Plastic rotation capacity θp = (φu − φy)·Lp, rad. */
@@ -150,6 +153,6 @@ export interface BeamResult {
   };
   readonly distributions: readonly SpanDistribution[];
   readonly service: ServiceDeflections | null;
-  readonly warnings: readonly string[];
-  readonly errors: readonly { readonly path: string; readonly message: string }[];
+  readonly warnings: readonly Text[];
+  readonly errors: readonly Problem[];
 }

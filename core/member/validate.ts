@@ -2,7 +2,8 @@
  * Checks of a member definition that need its meaning (zones tile the span, loads lie on it,
  * sections exist). Every problem is reported with its path, value and allowed range.
  */
-import { checkNumber, type Diagnostic } from '../diagnostics.ts';
+import { checkNumber, diagnostic, type Diagnostic } from '../diagnostics.ts';
+import { phrase, q, type Text } from '../units/phrase.ts';
 import { DEFLECTION_LIMIT_CASES, HINGE_LENGTH_METHODS, LOAD_CASES, LOAD_PATTERNS, SUPPORT_TYPES, type BeamDefinition } from './definition.ts';
 
 /** True when `value` is one of `options` (a type guard over the option lists of definition.ts). */
@@ -10,8 +11,8 @@ const isOneOf = <T extends string>(options: readonly T[], value: unknown): value
 /** `one of a, b, c` for messages. */
 const oneOf = (options: readonly string[]) => `one of ${options.join(', ')}`;
 
-/** Metres for messages (the engineer thinks in metres along a span). */
-const m = (mm: number) => `${(mm / 1000).toFixed(3).replace(/\.?0+$/, '')} m`;
+/** A position along the span in a message (mm, shown in the display unit of spans: m or ft). */
+const m = (mm: number) => q('spanLength', mm, { compact: true });
 
 /**
  * @param path e.g. `members[3] "B-12"`
@@ -19,9 +20,9 @@ const m = (mm: number) => `${(mm / 1000).toFixed(3).replace(/\.?0+$/, '')} m`;
  */
 export function validateMember(member: BeamDefinition, path: string, sectionIds: ReadonlySet<string>): Diagnostic[] {
   const out: Diagnostic[] = [];
-  const error = (code: Diagnostic['code'], at: string, message: string) => out.push({ code, path: `${path}.${at}`, severity: 'error', message });
+  const error = (code: Diagnostic['code'], at: string, message: Text) => out.push(diagnostic(code, `${path}.${at}`, 'error', message));
   if (!isOneOf(SUPPORT_TYPES, member.supports)) error('unknown-option', 'supports', `must be ${oneOf(SUPPORT_TYPES)}, got ${JSON.stringify(member.supports)}`);
-  const spanOk = checkNumber(out, `${path}.span`, member.span, { min: 0, exclusiveMin: true, max: 60000, unit: 'mm' });
+  const spanOk = checkNumber(out, `${path}.span`, member.span, { min: 0, exclusiveMin: true, max: 60000, quantity: 'spanLength' });
   const span = spanOk ? member.span : NaN;
 
   // Zones must tile [0, span].
@@ -30,20 +31,20 @@ export function validateMember(member: BeamDefinition, path: string, sectionIds:
   } else {
     const zones = [...member.zones].map((z, i) => ({ z, i })).sort((a, b) => a.z.from - b.z.from);
     member.zones.forEach((z, i) => {
-      checkNumber(out, `${path}.zones[${i}].from`, z.from, { min: 0, unit: 'mm' });
-      checkNumber(out, `${path}.zones[${i}].to`, z.to, { min: 0, unit: 'mm' });
+      checkNumber(out, `${path}.zones[${i}].from`, z.from, { min: 0, quantity: 'spanLength' });
+      checkNumber(out, `${path}.zones[${i}].to`, z.to, { min: 0, quantity: 'spanLength' });
       if (!sectionIds.has(z.sectionId)) error('unknown-reference', `zones[${i}].sectionId`, `no section with id "${z.sectionId}" in the project`);
-      if (Number.isFinite(z.from) && Number.isFinite(z.to) && !(z.to > z.from)) error('geometry', `zones[${i}]`, `must end after it starts, got from ${m(z.from)} to ${m(z.to)}`);
+      if (Number.isFinite(z.from) && Number.isFinite(z.to) && !(z.to > z.from)) error('geometry', `zones[${i}]`, phrase`must end after it starts, got from ${m(z.from)} to ${m(z.to)}`);
     });
     if (spanOk && out.length === 0) {
       let cursor = 0;
       for (const { z, i } of zones) {
         if (Math.abs(z.from - cursor) > 1e-6) {
-          error('geometry', `zones[${i}].from`, z.from > cursor ? `leaves a gap from ${m(cursor)} to ${m(z.from)}: zones must cover the span without gaps` : `overlaps the previous zone (starts at ${m(z.from)}, previous ends at ${m(cursor)})`);
+          error('geometry', `zones[${i}].from`, z.from > cursor ? phrase`leaves a gap from ${m(cursor)} to ${m(z.from)}: zones must cover the span without gaps` : phrase`overlaps the previous zone (starts at ${m(z.from)}, previous ends at ${m(cursor)})`);
         }
         cursor = z.to;
       }
-      if (Math.abs(cursor - span) > 1e-6) error('geometry', 'zones', `must end at the span, ${m(span)}; the last zone ends at ${m(cursor)}`);
+      if (Math.abs(cursor - span) > 1e-6) error('geometry', 'zones', phrase`must end at the span, ${m(span)}; the last zone ends at ${m(cursor)}`);
     }
   }
 
@@ -52,19 +53,19 @@ export function validateMember(member: BeamDefinition, path: string, sectionIds:
     const at = `loads[${i}]`;
     if (!isOneOf(LOAD_CASES, load.loadCase)) error('unknown-option', `${at}.loadCase`, `must be ${oneOf(LOAD_CASES)}, got ${JSON.stringify(load.loadCase)}`);
     if (load.kind === 'point') {
-      checkNumber(out, `${path}.${at}.magnitude`, load.magnitude, { min: -1e9, max: 1e9, unit: 'N' });
-      if (checkNumber(out, `${path}.${at}.position`, load.position, { min: 0, unit: 'mm' }) && spanOk && load.position > span) {
-        error('out-of-range', `${at}.position`, `must lie on the span (0 to ${m(span)}), got ${m(load.position)}`);
+      checkNumber(out, `${path}.${at}.magnitude`, load.magnitude, { min: -1e9, max: 1e9, quantity: 'force' });
+      if (checkNumber(out, `${path}.${at}.position`, load.position, { min: 0, quantity: 'spanLength' }) && spanOk && load.position > span) {
+        error('out-of-range', `${at}.position`, phrase`must lie on the span (0 to ${m(span)}), got ${m(load.position)}`);
       }
     } else if (load.kind === 'uniform') {
-      checkNumber(out, `${path}.${at}.magnitude`, load.magnitude, { min: -1e4, max: 1e4, unit: 'N/mm' });
+      checkNumber(out, `${path}.${at}.magnitude`, load.magnitude, { min: -1e4, max: 1e4, quantity: 'lineLoad' });
       const from = load.from ?? 0;
       const to = load.to ?? (spanOk ? span : 0);
-      if (load.from !== undefined) checkNumber(out, `${path}.${at}.from`, load.from, { min: 0, unit: 'mm' });
-      if (load.to !== undefined) checkNumber(out, `${path}.${at}.to`, load.to, { min: 0, unit: 'mm' });
+      if (load.from !== undefined) checkNumber(out, `${path}.${at}.from`, load.from, { min: 0, quantity: 'spanLength' });
+      if (load.to !== undefined) checkNumber(out, `${path}.${at}.to`, load.to, { min: 0, quantity: 'spanLength' });
       if (spanOk && Number.isFinite(from) && Number.isFinite(to)) {
-        if (!(to > from)) error('geometry', at, `must end after it starts, got from ${m(from)} to ${m(to)}`);
-        else if (to > span + 1e-6) error('out-of-range', `${at}.to`, `must lie on the span (0 to ${m(span)}), got ${m(to)}`);
+        if (!(to > from)) error('geometry', at, phrase`must end after it starts, got from ${m(from)} to ${m(to)}`);
+        else if (to > span + 1e-6) error('out-of-range', `${at}.to`, phrase`must lie on the span (0 to ${m(span)}), got ${m(to)}`);
       }
     } else {
       error('unknown-option', `${at}.kind`, `must be "uniform" or "point", got ${JSON.stringify((load as { kind: unknown }).kind)}`);
@@ -87,7 +88,7 @@ export function validateMember(member: BeamDefinition, path: string, sectionIds:
   else {
     if (!isOneOf(LOAD_PATTERNS, c.pattern)) error('unknown-option', 'capacity.pattern', `must be "proportional" or "live-only", got ${JSON.stringify(c.pattern)}`);
     if (!isOneOf(HINGE_LENGTH_METHODS, c.hingeLengthMethod)) error('unknown-option', 'capacity.hingeLengthMethod', `must be ${oneOf(HINGE_LENGTH_METHODS)}, got ${JSON.stringify(c.hingeLengthMethod)}`);
-    if (c.hingeLengthMethod === 'user') checkNumber(out, `${path}.capacity.userHingeLength`, c.userHingeLength, { min: 10, max: 5000, unit: 'mm' });
+    if (c.hingeLengthMethod === 'user') checkNumber(out, `${path}.capacity.userHingeLength`, c.userHingeLength, { min: 10, max: 5000, quantity: 'sectionLength' });
   }
   if (member.strengthFactors) {
     for (const k of ['dead', 'superimposed', 'live'] as const) checkNumber(out, `${path}.strengthFactors.${k}`, member.strengthFactors[k], { min: 0, max: 5 });

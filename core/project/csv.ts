@@ -22,7 +22,7 @@ import type { CodeBasis } from '../materials/specs.ts';
 import type { CapacitySettings, MemberLoad, ServiceSettings, SupportType } from '../member/definition.ts';
 import type { LoadDeflectionPoint, SpanDistribution } from '../member/results.ts';
 import type { MomentCurvatureResult } from '../section/results.ts';
-import { displaySystem, formatNumber, fromDisplay, toDisplay, unitLabel, UNITS, type Quantity, type UnitId } from '../units/index.ts';
+import { displaySystem, formatNumber, fromDisplay, say, toDisplay, unitLabel, UNITS, type Quantity, type UnitId } from '../units/index.ts';
 import { memberKeyResults } from './key-results.ts';
 import type { Project, UnitSystem, MemberDefinition } from './types.ts';
 import type { MemberResult } from '../assessment/results.ts';
@@ -338,7 +338,7 @@ export function resultsSummaryCsv(members: readonly MemberResult[], system: Unit
       shown('moment', k.yieldMoment, system), shown('moment', k.ultimateMoment, system), k.curvatureDuctility, k.displacementDuctility,
       shown('rotation', k.plasticRotationCapacity, system), k.ultimateLoadFactor,
       shown('deflection', k.deflection?.deflection, system), shown('deflection', k.deflection?.limit, system), k.deflection?.limitCase ?? null,
-      k.deflection?.utilisation ?? null, k.strengthUtilisation, k.warnings, k.governingMode,
+      k.deflection?.utilisation ?? null, k.strengthUtilisation, k.warnings, say(k.governingMode, system),
     ]);
   }
   return csvText(rows);

@@ -5,7 +5,7 @@
 export * from './types.ts';
 export { parseProject, serializeProject, MAX_PROJECT_TEXT_LENGTH, type ParsedProject } from './file.ts';
 export { migrateProject, migrateV1ToV2, OLDEST_READABLE_VERSION, type MigrationResult } from './migrate.ts';
-export { validateProjectData, validateProject, hasErrors, analysisBlockers, formatDiagnostic, displayMessage, sortDiagnostics, itemPath, pathText } from './validate.ts';
+export { validateProjectData, validateProject, hasErrors, analysisBlockers, formatDiagnostic, sortDiagnostics, itemPath, pathText } from './validate.ts';
 export { projectSchema, unknownFields, canonicalOrder, MAX_NESTING } from './schema.ts';
 export { demoProject, demoProjectSI } from './demo.ts';
 export { importMembersCsv, resultsSummaryCsv, momentCurvatureCsv, loadDeflectionCsv, spanDistributionCsv, parseCsv, csvField, csvText, defaultImportService, type MemberCsvOptions } from './csv.ts';

@@ -12,6 +12,8 @@
 import type { PlasticHinge, DeflectionCheck } from '../member/results.ts';
 import type { MomentCurvatureResult } from '../section/results.ts';
 import type { MemberDefinition } from './types.ts';
+import type { Problem } from '../diagnostics.ts';
+import type { Text } from '../units/phrase.ts';
 import type { MemberResult } from '../assessment/results.ts';
 
 export interface CriticalSection {
@@ -29,7 +31,8 @@ export interface MemberKeyResults {
   /** Span, mm. */
   readonly span: number;
   readonly status: MemberResult['status'];
-  readonly governingMode: string;
+  /** The governing-mode sentence (quantities as data: say(governingMode, units)). */
+  readonly governingMode: Text;
   readonly critical: CriticalSection | null;
   /** Idealised (nominal) yield moment My of the critical section, N·mm (bilinear idealisation). */
   readonly yieldMoment: number | null;
@@ -62,7 +65,7 @@ export interface MemberKeyResults {
   readonly strengthUtilisation: number | null;
   readonly strengthPass: boolean | null;
   readonly warnings: number;
-  readonly errors: readonly { readonly path: string; readonly message: string }[];
+  readonly errors: readonly Problem[];
 }
 
 const finiteOrNull = (v: number | null | undefined): number | null => (typeof v === 'number' && Number.isFinite(v) ? v : null);

@@ -13,20 +13,20 @@
  * An item whose structure is wrong is not passed to layer 2 (its semantic checks would only repeat
  * the structural problem); the other items are.
  *
- * Values in messages: the engine writes internal units (mm, N, MPa); `displayMessage` converts the
- * numbers that carry a unit into the project's display units (core/units), choosing the quantity
- * from the field path (a span in m or ft, a bar depth in mm or in, a concrete stress in MPa or psi).
+ * Values in messages: every check writes its quantities as data (Diagnostic.detail, core/units
+ * phrases, each with its quantity: a span, a bar depth, a concrete stress…); the diagnostics come
+ * back with their words in the project's display units (`inUnits`), and `diagnosticText` gives them
+ * in any other.
  */
 import { z } from 'zod';
-import { checkNumber, type Diagnostic } from '../diagnostics.ts';
+import { checkNumber, diagnostic, inUnits, InputError, reworded, type Diagnostic } from '../diagnostics.ts';
 import { validateConcreteSpec, validateFrpSpec, validateSteelSpec } from '../materials/factory.ts';
 import type { CodeBasis, ConcreteSpec, FrpSpec, MaterialSpec, SteelSpec } from '../materials/specs.ts';
 import { validateMember } from '../member/validate.ts';
 import { validateAsFound, validateSchemes } from '../retrofit/validate.ts';
 import { buildSectionModel, checkBarNumbers, validateShape } from '../section/build.ts';
 import type { SectionDefinition } from '../section/definition.ts';
-import { InputError } from '../diagnostics.ts';
-import { formatNumber, toDisplay, unitLabel, type Quantity, type UnitSystem as DisplaySystem } from '../units/index.ts';
+import { phrase, q } from '../units/phrase.ts';
 import { materialLibrary } from '../materials/library.ts';
 import {
   analysisSettingsSchema, materialSpecSchema, memberDefinitionSchema, projectInfoSchema, projectSchema, sectionDefinitionSchema,
@@ -140,71 +140,6 @@ function structuralIssues(schema: z.ZodType, value: unknown, root: unknown, base
   return { ok: false, diagnostics: result.error.issues.map((issue) => issueDiagnostic(issue, root, base)) };
 }
 
-// --- display units ------------------------------------------------------------------------------------
-
-const NUMBER = String.raw`-?\d+(?:\.\d+)?(?:e[+-]?\d+)?`;
-const UNITS = ['mm²', 'N/mm', 'kg/m³', 'MPa', 'mm', 'm', 'N'] as const;
-type InternalUnit = (typeof UNITS)[number];
-const QUANTITY_RUN = new RegExp(String.raw`(${NUMBER}(?:\s(?:to|\+)\s${NUMBER})*)\s(${UNITS.map((u) => u.replace('/', '\\/')).join('|')})(?![A-Za-z0-9²³⁴/·])`, 'g');
-
-/** Which quantity a value with internal unit `unit` is, judged from the field path. */
-function quantityOf(unit: InternalUnit, path: string, materialKinds: ReadonlyMap<string, string>): Quantity | null {
-  switch (unit) {
-    case 'mm²':
-      return 'area';
-    case 'N/mm':
-      return 'lineLoad';
-    case 'N':
-      return 'force';
-    case 'kg/m³':
-      return 'density';
-    case 'MPa': {
-      if (/(elasticModulus|hardeningModulus|tensileModulus)\b/.test(path)) return 'modulus';
-      const material = /^materials\[(\d+)\]/.exec(path);
-      if (material) return materialKinds.get(material[1]!) === 'concrete' ? 'concreteStress' : 'stress';
-      if (/\.asFound\.cores\b/.test(path)) return 'concreteStress';
-      return 'stress';
-    }
-    case 'mm':
-    case 'm':
-      // Along the span: spans, zone ends, load positions. Across a section: everything else.
-      if (/^members\[/.test(path) && !/userHingeLength|\.asFound\b|\.schemes\b/.test(path)) return 'spanLength';
-      return 'sectionLength';
-  }
-}
-
-const INTERNAL_PER: Readonly<Record<InternalUnit, number>> = { 'mm²': 1, 'N/mm': 1, N: 1, 'kg/m³': 1, MPa: 1, mm: 1, m: 1000 };
-
-/** Four significant figures without trailing zeros: 6.706 m, 22 ft, 0.5 in. */
-function compact(value: number): string {
-  const text = formatNumber(value, 4);
-  return text.includes('.') && !text.includes('e') ? text.replace(/\.?0+$/, '') : text;
-}
-
-/**
- * Rewrites the values with units in an engine message into the display units of `system`, e.g.
- * `got -2000 mm` on a member span → `got -2 m` (SI) or `got -6.562 ft` (US). Text without recognised
- * units is returned unchanged. Units: the message's numbers are internal (mm, m, N, N/mm, MPa, mm², kg/m³).
- * @param path the diagnostic's path, which tells a span (m, ft) from a section dimension (mm, in)
- */
-export function displayMessage(message: string, path: string, system: UnitSystem, materialKinds: ReadonlyMap<string, string> = new Map()): string {
-  const display: DisplaySystem = system === 'us' ? 'US' : 'SI';
-  return message.replace(QUANTITY_RUN, (whole, numbers: string, unit: InternalUnit) => {
-    const quantity = quantityOf(unit, path, materialKinds);
-    if (!quantity) return whole;
-    const label = unitLabel(quantity, display);
-    if (label === unit) return whole;
-    const converted = numbers.replace(new RegExp(NUMBER, 'g'), (n) => compact(toDisplay(quantity, Number(n) * INTERNAL_PER[unit], display)));
-    return `${converted} ${label}`;
-  });
-}
-
-/** A length in the display unit of spans, for messages written here. */
-function spanText(mm: number, system: UnitSystem): string {
-  const display: DisplaySystem = system === 'us' ? 'US' : 'SI';
-  return `${compact(toDisplay('spanLength', mm, display))} ${unitLabel('spanLength', display)}`;
-}
-
 // --- semantic checks ----------------------------------------------------------------------------------
 
 function isIsoDate(text: string): boolean {
@@ -285,7 +220,7 @@ function sectionBuildDiagnostics(section: SectionDefinition, path: string, mater
     if (p.path.startsWith('confinement')) {
       const field = p.path.replace(/^confinement\.?/, '').replace(/\[\d+\]$/, '');
       const hoopField = CONFINEMENT_TO_HOOPS[field];
-      out.push({ ...p, path: hoopField ? `${path}.hoops.${hoopField}` : `${path}.hoops`, message: `confinement of the core${hoopField ? '' : ` (${field || 'input'})`}: ${p.message}` });
+      out.push({ ...reworded(p, `confinement of the core${hoopField ? '' : ` (${field || 'input'})`}: `), path: hoopField ? `${path}.hoops.${hoopField}` : `${path}.hoops` });
     } else if (!p.path.startsWith('materials[')) {
       out.push(p);
     }
@@ -380,7 +315,6 @@ export function validateProjectData(data: unknown): { project: Project | null; d
   const materialSpecs = materials.map((m) => m.value);
   const materialById = new Map<string, MaterialSpec>();
   for (const m of materialSpecs) if (!materialById.has(m.id)) materialById.set(m.id, m);
-  const materialKinds = new Map<string, string>(materials.map((m) => [String(m.index), m.value.kind]));
   for (const { value: spec, index } of materials) {
     const path = itemPath('materials', index, spec);
     if (spec.kind === 'concrete') semantic.push(...guarded(path, () => validateConcreteSpec(spec as ConcreteSpec, path, code ? { code } : {})));
@@ -428,13 +362,13 @@ export function validateProjectData(data: unknown): { project: Project | null; d
       member.loads.forEach((load, i) => {
         const atSupport = load.kind === 'point' && (load.position === 0 || (load.position === member.span && member.supports !== 'cantilever'));
         if (load.kind === 'point' && atSupport) {
-          semantic.push({ code: 'inconsistent', path: `${path}.loads[${i}].position`, severity: 'warning', message: `a point load at a support (${spanText(load.position, system)}) goes straight into the support and does not bend the beam` });
+          semantic.push(diagnostic('inconsistent', `${path}.loads[${i}].position`, 'warning', phrase`a point load at a support (${q('spanLength', load.position, { compact: true })}) goes straight into the support and does not bend the beam`));
         }
       });
     }
   }
 
-  for (const d of semantic) out.push({ ...d, message: displayMessage(d.message, d.path, system, materialKinds) });
+  out.push(...inUnits(semantic, system));
   const diagnostics = sortDiagnostics(dedupe(out));
   return { project: whole.success ? (whole.data as unknown as Project) : null, diagnostics };
 }

@@ -84,7 +84,7 @@ function summary(plan: ReportPlan, f: ReportFormatter): Content[] {
       statusCell(result?.status ?? null),
       {
         stack: [
-          { text: result?.governingMode ?? 'No analysis result was supplied for this member.', fontSize: 7 },
+          { text: result ? f.say(result.governingMode) : 'No analysis result was supplied for this member.', fontSize: 7 },
           ...(warningCount > 0 ? [{ text: `${warningCount} warning${warningCount === 1 ? '' : 's'} or error${warningCount === 1 ? '' : 's'}: see the member's chapter.`, fontSize: 6.8, color: COLOURS.warn }] : []),
         ],
       },

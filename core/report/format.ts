@@ -6,6 +6,7 @@
 import { toDisplay } from '../units/convert.ts';
 import { formatFixed, formatNumber, formatQuantity, formatStrain, NOT_A_VALUE } from '../units/format.ts';
 import { displaySystem, type Quantity, type UnitSystem } from '../units/quantities.ts';
+import { say, type Text } from '../units/phrase.ts';
 
 export { displaySystem };
 
@@ -18,6 +19,8 @@ const ok = (v: Maybe): v is number => typeof v === 'number' && Number.isFinite(v
 
 export interface ReportFormatter {
   readonly system: UnitSystem;
+  /** A sentence of the results (words and quantities as data) in the report's units. */
+  say(text: Text): string;
   /** Any quantity, engineering significant figures (3, or 4 with a leading 1). */
   quantity(quantity: Quantity, value: Maybe): string;
   /** Section dimensions, covers, depths, bar sizes: mm (whole millimetres without decimals) / in. */
@@ -64,6 +67,7 @@ export function reportFormatter(system: UnitSystem | 'si' | 'us'): ReportFormatt
   const length = (v: Maybe) => (ok(v) && s === 'SI' && Math.abs(v - Math.round(v)) < 1e-6 ? q('sectionLength', v, { decimals: 0 }) : q('sectionLength', v));
   return {
     system: s,
+    say: (text) => say(text, s),
     quantity: (quantity, value) => q(quantity, value),
     length,
     span: (v) => q('spanLength', v, { decimals: 2 }),

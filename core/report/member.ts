@@ -156,7 +156,7 @@ function hingesAndDuctility(ctx: WriteContext, member: MemberPlan, result: Membe
     out.push(keepTogether([h3('Hinge length, with the numbers used'), bullets(d.hinges.map((h) => {
       const reference = hingeLengthReference(h.lengthMethod);
       const marker = reference ? ` ${citationMarker([refs.cite(reference, `member ${member.definition.name}`, 'plastic hinge length')])}` : '';
-      return { text: `x = ${f.span(h.position)} (${h.direction}, shear span ${f.length(h.shearSpan)}): ${h.lengthFormula}${marker}` };
+      return { text: `x = ${f.span(h.position)} (${h.direction}, shear span ${f.length(h.shearSpan)}): ${f.say(h.lengthFormula)}${marker}` };
     }))]));
   } else {
     out.push(keepTogether([h2('Plastic hinges and ductility'), { text: 'No plastic hinge formed before the analysis ended.', ...STYLES.body }]));
@@ -234,7 +234,7 @@ function strength(ctx: WriteContext, result: MemberResult): Content[] {
     [`Hogging: resistance ${resistance}`, s.hoggingResistance === null ? 'no tension reinforcement on that side' : f.moment(s.hoggingResistance)],
     ['Utilisation (largest demand / resistance)', f.fixed(s.utilisation, 2)],
     ['Result', verdict(s.pass)],
-    ['Notes', s.notes || '—'],
+    ['Notes', f.say(s.notes) || '—'],
   ], 170)])];
 }
 
@@ -258,20 +258,20 @@ function shear(ctx: WriteContext, result: MemberResult): Content[] {
     );
   }
   if (v.shearFailureLoadFactor !== null) facts.push(['Load factor at nominal shear strength', f.loadFactor(v.shearFailureLoadFactor)]);
-  facts.push(['In words', v.sentence], ['Sections near the supports', v.criticalSectionRule]);
-  return [keepTogether([h2('Shear'), factsTable(facts, 170)]), ...(v.warnings.length > 0 ? [bullets(v.warnings.map((w) => ({ text: [{ text: 'Warning ', bold: true, color: COLOURS.warn }, w] })))] : [])];
+  facts.push(['In words', f.say(v.sentence)], ['Sections near the supports', f.say(v.criticalSectionRule)]);
+  return [keepTogether([h2('Shear'), factsTable(facts, 170)]), ...(v.warnings.length > 0 ? [bullets(v.warnings.map((w) => ({ text: [{ text: 'Warning ', bold: true, color: COLOURS.warn }, f.say(w)] })))] : [])];
 }
 
-function warnings(result: MemberResult | null): Content[] {
+function warnings({ f }: WriteContext, result: MemberResult | null): Content[] {
   const items: Content[] = [];
   if (result) {
-    for (const e of result.errors) items.push({ text: [{ text: 'Input error ', bold: true, color: COLOURS.fail }, `${e.path}: ${e.message}`] });
-    for (const w of result.warnings) items.push({ text: [{ text: 'Warning ', bold: true, color: COLOURS.warn }, w] });
+    for (const e of result.errors) items.push({ text: [{ text: 'Input error ', bold: true, color: COLOURS.fail }, `${e.path}: ${f.say(e.message)}`] });
+    for (const w of result.warnings) items.push({ text: [{ text: 'Warning ', bold: true, color: COLOURS.warn }, f.say(w)] });
     if (result.retrofit) {
       const r = result.retrofit;
       items.push({ text: [{ text: 'Condition ', bold: true, color: COLOURS.warn }, `the results above describe the ${r.basis === 'as-found' ? 'as-found' : 'design'} beam. ${r.caution}`] });
-      for (const w of r.warnings) items.push({ text: [{ text: 'Warning ', bold: true, color: COLOURS.warn }, w] });
-      for (const e of r.errors) items.push({ text: [{ text: 'Input error ', bold: true, color: COLOURS.fail }, `${e.path}: ${e.message}`] });
+      for (const w of r.warnings) items.push({ text: [{ text: 'Warning ', bold: true, color: COLOURS.warn }, f.say(w)] });
+      for (const e of r.errors) items.push({ text: [{ text: 'Input error ', bold: true, color: COLOURS.fail }, `${e.path}: ${f.say(e.message)}`] });
     }
   } else {
     items.push({ text: 'No analysis results were supplied for this member.', color: COLOURS.fail });
@@ -298,7 +298,7 @@ export function memberChapter(ctx: WriteContext, member: MemberPlan): Content[] 
     { text: `${SUPPORT_WORDS[d.supports]}, span ${f.span(d.span)}`, color: COLOURS.muted, margin: [0, -4, 0, 6] },
     factsTable([
       ['Status', statusCell(result?.status ?? null)],
-      ['Governing mode', result?.governingMode ?? 'No analysis result was supplied for this member.'],
+      ['Governing mode', result ? f.say(result.governingMode) : 'No analysis result was supplied for this member.'],
     ], 90, [0, 0, 0, 6]),
     ...inputs(ctx, member),
     ...sectionsUsed(ctx, member),
@@ -307,6 +307,6 @@ export function memberChapter(ctx: WriteContext, member: MemberPlan): Content[] 
   if (result && result.status !== 'input-error') {
     out.push(...response(ctx, member, result), ...hingesAndDuctility(ctx, member, result), ...service(ctx, result), ...strength(ctx, result), ...shear(ctx, result));
   }
-  out.push(...warnings(result));
+  out.push(...warnings(ctx, result));
   return out;
 }

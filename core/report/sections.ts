@@ -71,7 +71,7 @@ function curveFacts(f: ReportFormatter, curve: MomentCurvatureResult): Content {
   rows.push(
     ['Curvature ductility μφ = φu/φy', f.number(curve.curvatureDuctility)],
     ['φu/φ′y (first yield)', f.number(curve.firstYieldCurvatureDuctility)],
-    ['End of the curve', curve.status.message],
+    ['End of the curve', f.say(curve.status.message)],
   );
   return factsTable(rows, 150);
 }
@@ -166,7 +166,7 @@ export function sectionChapter(ctx: WriteContext, plan: SectionPlan): Content[] 
       rows,
     })]));
   }
-  const warnings = [...sr.warnings, ...(sr.sagging?.warnings ?? []).map((w) => `sagging: ${w}`), ...(sr.hogging?.warnings ?? []).map((w) => `hogging: ${w}`)];
+  const warnings = [...sr.warnings.map((w) => f.say(w)), ...(sr.sagging?.warnings ?? []).map((w) => `sagging: ${w}`), ...(sr.hogging?.warnings ?? []).map((w) => `hogging: ${w}`)];
   if (warnings.length > 0) out.push(small(warnings.length, [h3('Warnings'), bullets(warnings)]));
   return out;
 }

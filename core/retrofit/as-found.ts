@@ -20,7 +20,8 @@
  *
  * Units: mm, MPa.
  */
-import { type Diagnostic } from '../diagnostics.ts';
+import { diagnostic, reworded, type Diagnostic } from '../diagnostics.ts';
+import { joinTexts, phrase, q, type Text } from '../units/phrase.ts';
 import { DEFAULT_HARDENING_STRAIN, defaultRuptureStrain, validateSteelSpec } from '../materials/build/steel.ts';
 import type { CodeBasis, ConcreteSpec, MaterialSpec, SteelSpec } from '../materials/specs.ts';
 import type { BeamDefinition } from '../member/definition.ts';
@@ -62,7 +63,7 @@ export interface DerivedSection {
   readonly exposedBars: readonly ExposedBars[];
   /** New depth = original depth − shift (top cover removed), mm. */
   readonly shift: number;
-  readonly changes: readonly string[];
+  readonly changes: readonly Text[];
 }
 
 /** Everything deriveAsFound produces: derived specs (MPa), derived sections, the summary for the report and the diagnostics. */
@@ -85,6 +86,10 @@ export interface AsFoundOptions {
   /** Variant name in derived ids (default 'as-found'). */
   readonly variant?: string;
 }
+
+/** Lengths and strengths in messages (mm, MPa; shown in the display units). */
+const len = (mm: number) => q('sectionLength', mm, { compact: true });
+const fc = (mpa: number) => q('concreteStress', mpa, { compact: true });
 
 const pct = (x: number) => `${(x * 100).toFixed(1).replace(/\.0$/, '')} %`;
 
@@ -140,8 +145,8 @@ export function deriveAsFound(member: BeamDefinition, condition: AsFoundConditio
   if (diagnostics.some((d) => d.severity === 'error')) return empty();
   const sections = memberSections(member, library);
   const specs: MaterialSpec[] = [];
-  const warn = (p: string, message: string) => diagnostics.push({ code: 'inconsistent', path: p, severity: 'warning', message });
-  const fail = (p: string, message: string) => diagnostics.push({ code: 'out-of-range', path: p, severity: 'error', message });
+  const warn = (p: string, message: Text) => diagnostics.push(diagnostic('inconsistent', p, 'warning', message));
+  const fail = (p: string, message: Text) => diagnostics.push(diagnostic('out-of-range', p, 'error', message));
 
   // --- concrete ----------------------------------------------------------------------------------------
   const concreteMap = new Map<string, string>();
@@ -154,14 +159,14 @@ export function deriveAsFound(member: BeamDefinition, condition: AsFoundConditio
       const spec = library.materials.find((m) => m.id === id && m.kind === 'concrete') as ConcreteSpec | undefined;
       if (!spec) continue;
       if (!(result.strength >= 10)) {
-        fail(`${at}.cores[${i}]`, `the in-place strength ${result.formula} is below 10 MPa, the least the concrete laws accept: the cores are too weak or too scattered for this analysis (check for outliers or test more cores)`);
+        fail(`${at}.cores[${i}]`, phrase`the in-place strength ${result.formula} is below ${fc(10)}, the least the concrete laws accept: the cores are too weak or too scattered for this analysis (check for outliers or test more cores)`);
         continue;
       }
       const derived = derivedId(id, member.id, variant);
       concreteMap.set(id, derived);
       specs.push({ ...spec, id: derived, name: `${spec.name} (in place)`, strength: result.strength });
       concreteSummary.push({ concreteId: id, derivedId: derived, specifiedStrength: spec.strength, inPlace: result, cores: { meanStrength: c.meanStrength, count: c.count, coefficientOfVariation: c.coefficientOfVariation }, note: c.note ?? '' });
-      if (result.strength < 0.75 * spec.strength) warn(`${at}.cores[${i}]`, `the in-place strength (${result.strength.toFixed(1)} MPa) is ${pct(1 - result.strength / spec.strength)} below the specified ${spec.strength} MPa`);
+      if (result.strength < 0.75 * spec.strength) warn(`${at}.cores[${i}]`, phrase`the in-place strength (${fc(result.strength)}) is ${pct(1 - result.strength / spec.strength)} below the specified ${fc(spec.strength)}`);
     }
   });
 
@@ -181,7 +186,7 @@ export function deriveAsFound(member: BeamDefinition, condition: AsFoundConditio
     };
     const problems = validateSteelSpec(derived, `${at}.steel[${i}]`).filter((d) => d.severity === 'error');
     if (problems.length > 0) {
-      diagnostics.push(...problems.map((d) => ({ ...d, message: `${d.message} (the library steel "${base.id}" with the entered test values)` })));
+      diagnostics.push(...problems.map((d) => reworded(d, '', ` (the library steel "${base.id}" with the entered test values)`)));
       return;
     }
     steelSpecs.set(s.steelId, derived);
@@ -194,10 +199,10 @@ export function deriveAsFound(member: BeamDefinition, condition: AsFoundConditio
   // --- sections ----------------------------------------------------------------------------------------
   const defects = condition.defects ?? [];
   const defectSummary: AsFoundSummary['defects'][number][] = defects.map((d, i) => ({ index: i, kind: d.kind, sectionIds: d.sectionId !== undefined ? [d.sectionId] : sections.map((s) => s.id), effect: '', note: d.note ?? '' }));
-  const effects: string[][] = defects.map(() => []);
+  const effects: Text[][] = defects.map(() => []);
   const derivedSections = new Map<string, DerivedSection>();
   for (const s of sections) {
-    const changes: string[] = [];
+    const changes: Text[] = [];
     const applies = (d: { sectionId?: string }) => d.sectionId === undefined || d.sectionId === s.id;
     // Section loss per layer (defects add up).
     const loss = new Map<number | 'hoops', { total: number; from: number[] }>();
@@ -241,9 +246,9 @@ export function deriveAsFound(member: BeamDefinition, condition: AsFoundConditio
         : { steelId: corroded.spec.id, depth: layer.depth, area: area0 * (1 - delta), ...(layer.spread ? { spread: layer.spread } : {}), label: `${name} (corroded ${pct(delta)})`, sourceIndex: i };
       bars.push(reduced);
       const original = steel.ruptureStrain ?? defaultRuptureStrain(steel.model);
-      const text = `${name}: area ${area0.toFixed(0)} → ${(area0 * (1 - delta)).toFixed(0)} mm²${residualDiameter !== undefined ? ` (bars ${layer.diameter} → ${residualDiameter.toFixed(1)} mm)` : ''}, rupture strain ${original.toFixed(3)} → ${corroded.ruptureStrain.toFixed(4)}`;
+      const text = phrase`${name}: area ${q('area', area0, { compact: true })} → ${q('area', area0 * (1 - delta), { compact: true })}${residualDiameter !== undefined ? phrase` (bars ${len(layer.diameter!)} → ${len(residualDiameter)})` : ''}, rupture strain ${original.toFixed(3)} → ${corroded.ruptureStrain.toFixed(4)}`;
       changes.push(text);
-      for (const k of entry.from) effects[k]!.push(`section "${s.id}" ${text}`);
+      for (const k of entry.from) effects[k]!.push(phrase`section "${s.id}" ${text}`);
     });
     let hoops = s.hoops ? { ...s.hoops, steelId: steelIdOf(s.hoops.steelId) } : undefined;
     const hoopLoss = loss.get('hoops');
@@ -261,9 +266,9 @@ export function deriveAsFound(member: BeamDefinition, condition: AsFoundConditio
           for (const w of corroded.warnings) warn(`${at}.defects[${hoopLoss.from[0]}]`, `section "${s.id}" stirrups: ${w}`);
           specs.push(corroded.spec);
           hoops = { ...hoops, diameter, steelId: corroded.spec.id };
-          const text = `stirrups ${s.hoops!.diameter} → ${diameter.toFixed(1)} mm (corroded ${pct(delta)}), rupture strain ${corroded.ruptureStrain.toFixed(4)}`;
+          const text = phrase`stirrups ${len(s.hoops!.diameter)} → ${len(diameter)} (corroded ${pct(delta)}), rupture strain ${corroded.ruptureStrain.toFixed(4)}`;
           changes.push(text);
-          for (const k of hoopLoss.from) effects[k]!.push(`section "${s.id}" ${text}`);
+          for (const k of hoopLoss.from) effects[k]!.push(phrase`section "${s.id}" ${text}`);
         }
       }
     }
@@ -288,7 +293,7 @@ export function deriveAsFound(member: BeamDefinition, condition: AsFoundConditio
       };
       const outcome = changeOutline(s.shape, change);
       if (!outcome.ok) {
-        fail(`${at}.defects[${covers[0]!.i}]`, `section "${s.id}": ${outcome.message}`);
+        fail(`${at}.defects[${covers[0]!.i}]`, phrase`section "${s.id}": ${outcome.message}`);
         continue;
       }
       shape = outcome.shape;
@@ -313,10 +318,10 @@ export function deriveAsFound(member: BeamDefinition, condition: AsFoundConditio
         hoops = { ...hoops, confineCore: false, clearCover: Math.max(0, hoops.clearCover - sideDepth) };
       }
       for (const c of covers) {
-        const text = `${c.d.depth} mm of concrete lost from the ${c.d.face} face${c.d.face === 'left' || c.d.face === 'right' ? ` between depths ${c.d.from ?? 0} and ${c.d.to ?? height0} mm` : ''}`;
-        effects[c.i]!.push(`section "${s.id}": ${text}`);
+        const text = phrase`${len(c.d.depth)} of concrete lost from the ${c.d.face} face${c.d.face === 'left' || c.d.face === 'right' ? phrase` between depths ${len(c.d.from ?? 0)} and ${len(c.d.to ?? height0)}` : ''}`;
+        effects[c.i]!.push(phrase`section "${s.id}": ${text}`);
       }
-      changes.push(`outline: ${covers.map((c) => `${c.d.depth} mm off the ${c.d.face}`).join(', ')} (depth ${(outcome.height).toFixed(0)} mm remains)`);
+      changes.push(phrase`outline: ${joinTexts(covers.map((c) => phrase`${len(c.d.depth)} off the ${c.d.face}`), ', ')} (depth ${len(outcome.height)} remains)`);
     }
     const concreteId = concreteMap.get(s.concreteId) ?? s.concreteId;
     if (concreteMap.has(s.concreteId)) changes.unshift(`concrete: in-place strength from cores (${concreteId})`);
@@ -345,7 +350,7 @@ export function deriveAsFound(member: BeamDefinition, condition: AsFoundConditio
     summary: {
       concrete: concreteSummary,
       steel: steelSummary,
-      defects: defectSummary.map((d, i) => ({ ...d, effect: effects[i]!.length > 0 ? effects[i]!.join('; ') : options.repairSpalls && defects[i]!.kind === 'cover-loss' ? 'repaired' : 'no effect' })),
+      defects: defectSummary.map((d, i) => ({ ...d, effect: effects[i]!.length > 0 ? joinTexts(effects[i]!, '; ') : options.repairSpalls && defects[i]!.kind === 'cover-loss' ? 'repaired' : 'no effect' })),
       sections: [...derivedSections.values()].map((d) => ({ baseSectionId: d.baseSectionId, sectionId: d.id, changes: d.changes })),
       notes: condition.notes ?? '',
     },

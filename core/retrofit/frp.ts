@@ -17,6 +17,8 @@
  * Units: MPa, mm, N, N·mm; strains dimensionless, compression positive.
  */
 import type { FrpMaterial } from '../materials/types.ts';
+import { convertUnit } from '../units/convert.ts';
+import { bySystem } from '../units/phrase.ts';
 import { directionSign, type DiscreteElement, type SectionModel } from '../section/model.ts';
 import type { MomentCurvatureResult } from '../section/results.ts';
 import { strainAtDepth } from '../section/state.ts';
@@ -61,6 +63,8 @@ export function frpDesign(p: { plyThickness: number; plies: number; width: numbe
   const designRuptureStrain = p.environmentalFactor * p.ruptureStrain;
   const debondingStrain = aciDebondingStrainSI(fc, p.plies, p.tensileModulus, p.plyThickness);
   const { limit, cause, cap } = frpStrainLimit(debondingStrain, designRuptureStrain);
+  // The debonding expression in its SI (MPa, mm) or in.-lb. (psi, in) form; the strains are the same.
+  const formula = (debonding: string) => `εfu = CE·ε*fu = ${p.environmentalFactor} × ${p.ruptureStrain} = ${designRuptureStrain.toFixed(5)}; εfd = ${debonding} = ${debondingStrain.toFixed(5)} ${cause === 'frp-debonding' ? '<' : '≥'} 0.9εfu = ${cap.toFixed(5)} → limit ${limit.toFixed(5)} (${cause === 'frp-debonding' ? 'debonding' : 'rupture'} governs; ACI 440.2R-17 Eq. 10.1.1)`;
   return {
     plyThickness: p.plyThickness,
     plies: p.plies,
@@ -76,7 +80,10 @@ export function frpDesign(p: { plyThickness: number; plies: number; width: numbe
     limitStrain: limit,
     limitCause: cause,
     reductionFactor: FRP_FLEXURE_REDUCTION,
-    formula: `εfu = CE·ε*fu = ${p.environmentalFactor} × ${p.ruptureStrain} = ${designRuptureStrain.toFixed(5)}; εfd = 0.41√(f′c/(n·Ef·tf)) = 0.41√(${fc.toFixed(1)}/(${p.plies} × ${p.tensileModulus} × ${p.plyThickness})) = ${debondingStrain.toFixed(5)} ${cause === 'frp-debonding' ? '<' : '≥'} 0.9εfu = ${cap.toFixed(5)} → limit ${limit.toFixed(5)} (${cause === 'frp-debonding' ? 'debonding' : 'rupture'} governs; ACI 440.2R-17 Eq. 10.1.1)`,
+    formula: [bySystem(
+      formula(`0.41√(f′c/(n·Ef·tf)) = 0.41√(${fc.toFixed(1)}/(${p.plies} × ${p.tensileModulus} × ${p.plyThickness}))`),
+      formula(`0.083√(f′c/(n·Ef·tf)) = 0.083√(${convertUnit(fc, 'MPa', 'psi').toFixed(0)}/(${p.plies} × ${convertUnit(p.tensileModulus, 'MPa', 'psi').toPrecision(4)} × ${convertUnit(p.plyThickness, 'mm', 'in').toFixed(4)}))`),
+    )],
   };
 }
 

@@ -24,6 +24,8 @@
 import { BugError } from '../diagnostics.ts';
 import type { CodeBasis } from '../materials/specs.ts';
 import { oneSidedToleranceFactor } from './statistics.ts';
+import { convertUnit } from '../units/convert.ts';
+import { bySystem, type Text } from '../units/phrase.ts';
 
 /** Fewest cores either method accepts. @see ACI 318-19 26.12.6.1 (three cores per low-strength test, from memory); EN 1990 Table D1 (no "VX unknown" value below n = 3) */
 export const MINIMUM_CORE_COUNT = 3;
@@ -91,7 +93,8 @@ export interface InPlaceStrength {
   readonly standardDeviation: number;
   readonly method: string;
   /** The expression with the numbers, for the report. */
-  readonly formula: string;
+  /** The substituted formula: in MPa in SI, in psi in US customary units. */
+  readonly formula: Text;
 }
 
 /**
@@ -106,6 +109,13 @@ export function inPlaceStrength(code: CodeBasis, cores: CoreStatistics): InPlace
   const aci = code === 'ACI 318-19';
   const k = aci ? aciCoreToleranceFactor(count) : en1990CharacteristicFactor(count);
   const value = mean * (1 - k * v);
+  /** The formula with stresses in one unit: `per` of that unit per MPa, printed to `decimals`. */
+  const formula = (per: number, decimals: number, unit: string) => {
+    const f = (mpa: number) => (mpa * per).toFixed(decimals);
+    return aci
+      ? `f′c,eq = f̄c − K·s = ${f(mean)} − ${k.toFixed(3)} × ${(s * per).toFixed(decimals + 1)} = ${f(value)} ${unit} (n = ${count}, V = ${(v * 100).toFixed(1)} %)`
+      : `fck,is = f̄c·(1 − kn·V) = ${f(mean)} × (1 − ${k.toFixed(2)} × ${v.toFixed(3)}) = ${f(value)} ${unit} (n = ${count})`;
+  };
   return {
     code,
     strength: value,
@@ -114,8 +124,6 @@ export function inPlaceStrength(code: CodeBasis, cores: CoreStatistics): InPlace
     method: aci
       ? 'ACI 214.4R-10 tolerance-factor approach: lower tolerance limit of the 10 % fractile at 75 % confidence (equivalent specified strength f′c,eq)'
       : 'EN 1990 Annex D, D7.2: 5 % characteristic value from n tests with VX unknown (Eq. D.1, Table D1)',
-    formula: aci
-      ? `f′c,eq = f̄c − K·s = ${mean.toFixed(1)} − ${k.toFixed(3)} × ${s.toFixed(2)} = ${value.toFixed(1)} MPa (n = ${count}, V = ${(v * 100).toFixed(1)} %)`
-      : `fck,is = f̄c·(1 − kn·V) = ${mean.toFixed(1)} × (1 − ${k.toFixed(2)} × ${v.toFixed(3)}) = ${value.toFixed(1)} MPa (n = ${count})`,
+    formula: [bySystem(formula(1, 1, 'MPa'), formula(convertUnit(1, 'MPa', 'psi'), 0, 'psi'))],
   };
 }

@@ -16,6 +16,10 @@
 import type { Point, SectionShape } from '../section/shapes.ts';
 import { shapeOutline } from '../section/shapes.ts';
 import { chordIntervals } from '../section/width-profile.ts';
+import { phrase, q, type Text } from '../units/phrase.ts';
+
+/** A section dimension in a message (mm, shown in the display unit of section lengths). */
+const len = (mm: number) => q('sectionLength', mm, { compact: true });
 
 /** Concrete lost from the side faces over a depth range (in the original section's depths), mm. */
 export interface SideCut {
@@ -55,7 +59,7 @@ export type OutlineOutcome =
       readonly topChord: readonly [number, number];
       readonly bottomChord: readonly [number, number];
     }
-  | { readonly ok: false; readonly message: string };
+  | { readonly ok: false; readonly message: Text };
 
 /** Height of an outline: deepest point minus highest, mm. */
 function outlineDepth(points: readonly Point[]): { top: number; bottom: number } {
@@ -75,7 +79,7 @@ export function changeOutline(shape: SectionShape, change: OutlineChange): Outli
   const h = y1 - y0;
   const cutTop = y0 + change.top;
   const cutBottom = y1 - change.bottom;
-  if (!(cutBottom - cutTop > 1e-6)) return { ok: false, message: `cover loss of ${change.top} mm at the top and ${change.bottom} mm at the bottom leaves nothing of the ${h} mm deep section` };
+  if (!(cutBottom - cutTop > 1e-6)) return { ok: false, message: phrase`cover loss of ${len(change.top)} at the top and ${len(change.bottom)} at the bottom leaves nothing of the ${len(h)} deep section` };
   const levels = new Set<number>([cutTop, cutBottom]);
   for (const p of outline.outline) if (p.y > cutTop && p.y < cutBottom) levels.add(p.y);
   for (const c of [...change.left, ...change.right]) {
@@ -91,7 +95,7 @@ export function changeOutline(shape: SectionShape, change: OutlineChange): Outli
     const c1 = chordIntervals(outline, ya + 0.25 * (yb - ya));
     const c2 = chordIntervals(outline, ya + 0.75 * (yb - ya));
     if (c1.length !== 1 || c2.length !== 1) {
-      return { ok: false, message: `the ${shape.kind} section is in ${Math.max(c1.length, c2.length)} pieces at depth ${((ya + yb) / 2).toFixed(0)} mm: cover loss and added layers are supported only where every horizontal cut is one piece` };
+      return { ok: false, message: phrase`the ${shape.kind} section is in ${Math.max(c1.length, c2.length)} pieces at depth ${len((ya + yb) / 2)}: cover loss and added layers are supported only where every horizontal cut is one piece` };
     }
     const [l1, r1] = c1[0]!;
     const [l2, r2] = c2[0]!;
@@ -107,7 +111,7 @@ export function changeOutline(shape: SectionShape, change: OutlineChange): Outli
     const ra = rAt(0) - sr;
     const rb = rAt(1) - sr;
     if (!(ra - la > 1e-6 && rb - lb > 1e-6)) {
-      return { ok: false, message: `side cover loss (${sl} mm left, ${sr} mm right) removes the whole width between depths ${ya.toFixed(0)} and ${yb.toFixed(0)} mm` };
+      return { ok: false, message: phrase`side cover loss (${len(sl)} left, ${len(sr)} right) removes the whole width between depths ${len(ya)} and ${len(yb)}` };
     }
     right.push({ x: ra, y: ya }, { x: rb, y: yb });
     left.push({ x: la, y: ya }, { x: lb, y: yb });

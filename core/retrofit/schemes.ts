@@ -15,7 +15,8 @@
  *
  * Units: mm, N/mm (added self-weight), MPa.
  */
-import type { Diagnostic } from '../diagnostics.ts';
+import { diagnostic, type Diagnostic } from '../diagnostics.ts';
+import { phrase, q } from '../units/phrase.ts';
 import type { MaterialLibrary } from '../materials/library.ts';
 import { STANDARD_GRAVITY } from '../section/analyze.ts';
 import { partOf, shapeHeight } from '../section/build.ts';
@@ -27,6 +28,9 @@ import { chordIntervals } from '../section/width-profile.ts';
 import type { ExposedBars } from './as-found.ts';
 import { changeOutline, NO_CHANGE } from './outline.ts';
 import type { AddedItem, ConcreteLayerScheme } from './types.ts';
+
+/** A section dimension in a message (mm, shown in the display unit of section lengths). */
+const len = (mm: number) => q('sectionLength', mm, { compact: true });
 
 /** Density of structural steel for the added self-weight of a plate, kg/m³. // common practice, no source */
 export const STEEL_DENSITY = 7850;
@@ -106,7 +110,7 @@ export function concreteLayerSection(ref: ReferenceSection, scheme: ConcreteLaye
   const warnings: string[] = [];
   const t = scheme.thickness;
   const outcome = changeOutline(ref.definition.shape, { ...NO_CHANGE, addTop: scheme.face === 'top' ? t : 0, addBottom: scheme.face === 'bottom' ? t : 0 });
-  if (!outcome.ok) return [{ code: 'geometry', path: `${at}.face`, severity: 'error', message: `section "${ref.baseSectionId}": ${outcome.message}` }];
+  if (!outcome.ok) return [diagnostic('geometry', `${at}.face`, 'error', phrase`section "${ref.baseSectionId}": ${outcome.message}`)];
   const shift = outcome.shift;
   const chord = scheme.face === 'top' ? outcome.topChord : outcome.bottomChord;
   const chordWidth = chord[1] - chord[0];
@@ -134,11 +138,11 @@ export function concreteLayerSection(ref: ReferenceSection, scheme: ConcreteLaye
     const area = b.count !== undefined && b.diameter !== undefined ? b.count * barArea(b.diameter) : b.area ?? 0;
     const r = diameter / 2;
     if (b.distanceFromFace - r < 0 || b.distanceFromFace + r > t) {
-      problems.push({ code: 'outside-section', path: `${bt}.distanceFromFace`, severity: 'error', message: `a ${diameter.toFixed(0)} mm bar ${b.distanceFromFace} mm from the face sticks out of the ${t} mm layer (allowed ${r.toFixed(1)} to ${(t - r).toFixed(1)} mm)` });
+      problems.push(diagnostic('outside-section', `${bt}.distanceFromFace`, 'error', phrase`a ${len(diameter)} bar ${len(b.distanceFromFace)} from the face sticks out of the ${len(t)} layer (allowed ${len(r)} to ${len(t - r)})`));
       return;
     }
     if ((b.count ?? 1) * diameter > width) {
-      problems.push({ code: 'outside-section', path: `${bt}.count`, severity: 'error', message: `${b.count ?? 1} bars of ${diameter.toFixed(0)} mm do not fit across the ${width.toFixed(0)} mm wide layer` });
+      problems.push(diagnostic('outside-section', `${bt}.count`, 'error', phrase`${b.count ?? 1} bars of ${len(diameter)} do not fit across the ${len(width)} wide layer`));
       return;
     }
     const depth = scheme.face === 'top' ? b.distanceFromFace : bottom - b.distanceFromFace;

@@ -10,6 +10,7 @@
 import type { MaterialSpec } from '../materials/specs.ts';
 import type { SectionDefinition } from '../section/definition.ts';
 import type { BendingDirection, ElementLimitCause } from '../section/model.ts';
+import type { Text } from '../units/phrase.ts';
 import type { InPlaceStrength } from './in-place-strength.ts';
 
 /** The library variants are derived from: the project's material specs and section definitions. */
@@ -254,11 +255,11 @@ export interface AsFoundSummary {
     readonly kind: Defect['kind'];
     readonly sectionIds: readonly string[];
     /** What the defect did, in words with the numbers. */
-    readonly effect: string;
+    readonly effect: Text;
     readonly note: string;
   }[];
   /** Derived section ids per library section of the member. */
-  readonly sections: readonly { readonly baseSectionId: string; readonly sectionId: string; readonly changes: readonly string[] }[];
+  readonly sections: readonly { readonly baseSectionId: string; readonly sectionId: string; readonly changes: readonly Text[] }[];
   readonly notes: string;
 }
 
@@ -283,7 +284,8 @@ export interface FrpDesign {
   readonly limitCause: 'frp-debonding' | 'frp-rupture';
   /** ψf = 0.85 on the FRP's contribution to flexure. */
   readonly reductionFactor: number;
-  readonly formula: string;
+  /** The substituted expressions: SI form (f′c in MPa) in SI, in.-lb. form (psi, in) in US customary units. */
+  readonly formula: Text;
 }
 
 /** Substrate strain when a bonded item (FRP, plate) is installed, per section. */
@@ -305,5 +307,5 @@ export interface InstallationStrain {
   /** Substrate strain at the item, compression positive (tension negative), by the chosen method and by the other one. */
   readonly strain: number;
   readonly otherMethodStrain: number | null;
-  readonly formula: string;
+  readonly formula: Text;
 }

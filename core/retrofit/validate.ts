@@ -3,15 +3,16 @@
  * ranges, references to the library, layer indices. Every problem is reported with its path, the
  * value and the allowed range (core/diagnostics.ts); nothing stops at the first.
  */
-import { checkNumber, type Diagnostic } from '../diagnostics.ts';
+import { checkNumber, diagnostic, type Diagnostic } from '../diagnostics.ts';
+import { phrase, q, type Text } from '../units/phrase.ts';
 import type { BeamDefinition } from '../member/definition.ts';
 import type { SectionDefinition } from '../section/definition.ts';
 import { MINIMUM_CORE_COUNT } from './in-place-strength.ts';
 import { COVER_LOSS_FACES, DEFECT_KINDS, SCHEME_KINDS, type AsFoundCondition, type InstallationLoad, type Library, type StrengtheningScheme } from './types.ts';
 
 
-function error(out: Diagnostic[], code: Diagnostic['code'], path: string, message: string): void {
-  out.push({ code, path, severity: 'error', message });
+function error(out: Diagnostic[], code: Diagnostic['code'], path: string, message: Text): void {
+  out.push(diagnostic(code, path, 'error', message));
 }
 
 /** Sections used by the member's zones, in zone order without repeats. */
@@ -40,7 +41,7 @@ export function validateAsFound(condition: AsFoundCondition, member: BeamDefinit
   const targeted = new Map<string, number>();
   (condition.cores ?? []).forEach((c, i) => {
     const at = `${path}.cores[${i}]`;
-    checkNumber(out, `${at}.meanStrength`, c.meanStrength, { min: 5, max: 150, unit: 'MPa' });
+    checkNumber(out, `${at}.meanStrength`, c.meanStrength, { min: 5, max: 150, quantity: 'concreteStress' });
     if (checkNumber(out, `${at}.count`, c.count, { min: 1, max: 1000 })) {
       if (!Number.isInteger(c.count)) error(out, 'must-be-integer', `${at}.count`, `must be a whole number of cores, got ${c.count}`);
       else if (c.count < MINIMUM_CORE_COUNT) {
@@ -95,13 +96,13 @@ export function validateAsFound(condition: AsFoundCondition, member: BeamDefinit
       }
     } else {
       if (!COVER_LOSS_FACES.includes(d.face)) error(out, 'unknown-option', `${at}.face`, `must be one of ${COVER_LOSS_FACES.map((f) => `"${f}"`).join(', ')}, got ${JSON.stringify(d.face)}`);
-      checkNumber(out, `${at}.depth`, d.depth, { min: 0, exclusiveMin: true, max: 1000, unit: 'mm' });
+      checkNumber(out, `${at}.depth`, d.depth, { min: 0, exclusiveMin: true, max: 1000, quantity: 'sectionLength' });
       if (d.face === 'top' || d.face === 'bottom') {
         if (d.from !== undefined || d.to !== undefined) error(out, 'inconsistent', `${at}.from`, 'a depth range (from, to) applies to the left and right faces only');
       } else {
-        const fromOk = d.from === undefined || checkNumber(out, `${at}.from`, d.from, { min: 0, max: 20000, unit: 'mm' });
-        const toOk = d.to === undefined || checkNumber(out, `${at}.to`, d.to, { min: 0, max: 20000, unit: 'mm' });
-        if (fromOk && toOk && d.from !== undefined && d.to !== undefined && !(d.to > d.from)) error(out, 'geometry', `${at}.to`, `must be deeper than from (${d.from} mm), got ${d.to} mm`);
+        const fromOk = d.from === undefined || checkNumber(out, `${at}.from`, d.from, { min: 0, max: 20000, quantity: 'sectionLength' });
+        const toOk = d.to === undefined || checkNumber(out, `${at}.to`, d.to, { min: 0, max: 20000, quantity: 'sectionLength' });
+        if (fromOk && toOk && d.from !== undefined && d.to !== undefined && !(d.to > d.from)) error(out, 'geometry', `${at}.to`, phrase`must be deeper than from (${q('sectionLength', d.from, { compact: true })}), got ${q('sectionLength', d.to, { compact: true })}`);
       }
     }
   });
@@ -161,35 +162,35 @@ export function validateScheme(s: StrengtheningScheme, library: Library, at: str
   switch (s.kind) {
     case 'frp':
       if (kindOf(library, s.frpId) !== 'frp') error(out, 'unknown-reference', `${at}.frpId`, `no FRP material with id ${JSON.stringify(s.frpId)} in the library`);
-      checkNumber(out, `${at}.plyThickness`, s.plyThickness, { min: 0, exclusiveMin: true, max: 10, unit: 'mm' });
+      checkNumber(out, `${at}.plyThickness`, s.plyThickness, { min: 0, exclusiveMin: true, max: 10, quantity: 'sectionLength' });
       if (checkNumber(out, `${at}.plies`, s.plies, { min: 1, max: 10 }) && !Number.isInteger(s.plies)) error(out, 'must-be-integer', `${at}.plies`, `must be a whole number of plies, got ${s.plies}`);
-      checkNumber(out, `${at}.width`, s.width, { min: 0, exclusiveMin: true, max: 5000, unit: 'mm' });
+      checkNumber(out, `${at}.width`, s.width, { min: 0, exclusiveMin: true, max: 5000, quantity: 'sectionLength' });
       face(s.face, ['bottom', 'top']);
       checkInstallation(out, at, s.installation, s.installationStrainMethod);
       break;
     case 'steel-plate':
       if (kindOf(library, s.steelId) !== 'steel') error(out, 'unknown-reference', `${at}.steelId`, `no steel material with id ${JSON.stringify(s.steelId)} in the library`);
-      checkNumber(out, `${at}.thickness`, s.thickness, { min: 0, exclusiveMin: true, max: 100, unit: 'mm' });
-      checkNumber(out, `${at}.width`, s.width, { min: 0, exclusiveMin: true, max: 5000, unit: 'mm' });
+      checkNumber(out, `${at}.thickness`, s.thickness, { min: 0, exclusiveMin: true, max: 100, quantity: 'sectionLength' });
+      checkNumber(out, `${at}.width`, s.width, { min: 0, exclusiveMin: true, max: 5000, quantity: 'sectionLength' });
       face(s.face, ['bottom', 'top']);
       checkInstallation(out, at, s.installation, s.installationStrainMethod);
       break;
     case 'concrete-layer':
       if (s.face !== 'top' && s.face !== 'bottom') error(out, 'unknown-option', `${at}.face`, `must be "top" or "bottom", got ${JSON.stringify(s.face)}`);
-      checkNumber(out, `${at}.thickness`, s.thickness, { min: 0, exclusiveMin: true, max: 1000, unit: 'mm' });
-      if (s.width !== undefined) checkNumber(out, `${at}.width`, s.width, { min: 0, exclusiveMin: true, max: 20000, unit: 'mm' });
+      checkNumber(out, `${at}.thickness`, s.thickness, { min: 0, exclusiveMin: true, max: 1000, quantity: 'sectionLength' });
+      if (s.width !== undefined) checkNumber(out, `${at}.width`, s.width, { min: 0, exclusiveMin: true, max: 20000, quantity: 'sectionLength' });
       if (kindOf(library, s.concreteId) !== 'concrete') error(out, 'unknown-reference', `${at}.concreteId`, `no concrete material with id ${JSON.stringify(s.concreteId)} in the library`);
       if (!Array.isArray(s.bars)) error(out, 'required', `${at}.bars`, 'a list of bar layers is required (it may be empty)');
       else {
         s.bars.forEach((b, j) => {
           const bt = `${at}.bars[${j}]`;
           if (kindOf(library, b.steelId) !== 'steel') error(out, 'unknown-reference', `${bt}.steelId`, `no steel material with id ${JSON.stringify(b.steelId)} in the library`);
-          checkNumber(out, `${bt}.distanceFromFace`, b.distanceFromFace, { min: 0, exclusiveMin: true, max: 1000, unit: 'mm' });
+          checkNumber(out, `${bt}.distanceFromFace`, b.distanceFromFace, { min: 0, exclusiveMin: true, max: 1000, quantity: 'sectionLength' });
           if (b.count !== undefined || b.diameter !== undefined) {
             if (checkNumber(out, `${bt}.count`, b.count, { min: 1, max: 100 }) && !Number.isInteger(b.count)) error(out, 'must-be-integer', `${bt}.count`, `must be a whole number of bars, got ${b.count}`);
-            checkNumber(out, `${bt}.diameter`, b.diameter, { min: 3, max: 60, unit: 'mm' });
+            checkNumber(out, `${bt}.diameter`, b.diameter, { min: 3, max: 60, quantity: 'sectionLength' });
           } else {
-            checkNumber(out, `${bt}.area`, b.area, { min: 0, exclusiveMin: true, max: 1e6, unit: 'mm²' });
+            checkNumber(out, `${bt}.area`, b.area, { min: 0, exclusiveMin: true, max: 1e6, quantity: 'area' });
           }
         });
       }

@@ -22,6 +22,7 @@ import { momentCurvature, type MomentCurvatureOptions } from './moment-curvature
 import { tensionSteel } from './model.ts';
 import type { BilinearMethod, MomentCurvatureResult } from './results.ts';
 import { withMaterials } from './transform.ts';
+import { phrase, type Text } from '../units/phrase.ts';
 
 /** Gravity, m/s² (standard acceleration, CGPM 1901). */
 export const STANDARD_GRAVITY = 9.80665;
@@ -48,7 +49,7 @@ export interface SectionAnalysis {
   readonly codeTensileStrength: number;
   readonly creepCoefficient: number;
   readonly shrinkageStrain: number;
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Text[];
   readonly errors: readonly Diagnostic[];
 }
 
@@ -60,12 +61,12 @@ export interface SectionAnalysisOptions {
   readonly additions?: SectionAdditions;
 }
 
-function curvesOf(model: SectionModel, options: MomentCurvatureOptions, warnings: string[], label: string): DirectionCurves {
+function curvesOf(model: SectionModel, options: MomentCurvatureOptions, warnings: Text[], label: string): DirectionCurves {
   const out: { sagging?: MomentCurvatureResult; hogging?: MomentCurvatureResult } = {};
   for (const dir of ['sagging', 'hogging'] as BendingDirection[]) {
     if (tensionSteel(model, dir).length === 0) continue;
     const curve = momentCurvature(model, dir, options);
-    if (curve.status.kind !== 'complete') warnings.push(`${label} ${dir} curve: ${curve.status.message}`);
+    if (curve.status.kind !== 'complete') warnings.push(phrase`${label} ${dir} curve: ${curve.status.message}`);
     out[dir] = curve;
   }
   return out;
@@ -73,7 +74,7 @@ function curvesOf(model: SectionModel, options: MomentCurvatureOptions, warnings
 
 /** Analyses a section of the project; never throws for bad input (errors are returned). */
 export function analyzeSection(definition: SectionDefinition, path: string, materials: MaterialLibrary, options: SectionAnalysisOptions): SectionAnalysis {
-  const warnings: string[] = [];
+  const warnings: Text[] = [];
   const empty = (errors: Diagnostic[]): SectionAnalysis => ({
     sectionId: definition.id,
     sectionName: definition.name,

@@ -3,7 +3,8 @@
  * outline → depth strips, hoops → confined core, layers → bar elements, materials resolved
  * from the library. All problems are collected and thrown together as one InputError.
  */
-import { checkNumber, InputError, type Diagnostic } from '../diagnostics.ts';
+import { checkNumber, diagnostic, InputError, type Diagnostic } from '../diagnostics.ts';
+import { phrase, q } from '../units/phrase.ts';
 import type { ConcreteMaterial, UniaxialMaterial } from '../materials/types.ts';
 import { combineConcrete } from '../materials/concrete/combine.ts';
 import type { MaterialResolver } from '../materials/library.ts';
@@ -16,6 +17,8 @@ import type { ConcretePart, DiscreteElement, SectionModel } from './model.ts';
 import { shapeOutline, type SectionShape } from './shapes.ts';
 import { chordIntervals, profileMoments, subtractProfile, widthProfile, type Strip } from './width-profile.ts';
 
+/** A section dimension in a message (mm, shown in the display unit of section lengths). */
+const len = (mm: number) => q('sectionLength', mm, { compact: true });
 
 /** Extra parts added to a section by a strengthening scheme or an as-found condition (see core/retrofit). */
 export interface SectionAdditions {
@@ -65,7 +68,7 @@ export function shapeHeight(shape: SectionShape): number {
 /** Checks the numbers of a shape; returns diagnostics (empty when valid). */
 export function validateShape(shape: SectionShape, path: string): Diagnostic[] {
   const out: Diagnostic[] = [];
-  const positive = (field: string, value: unknown, max = 20000) => checkNumber(out, `${path}.${field}`, value, { min: 0, exclusiveMin: true, max, unit: 'mm' });
+  const positive = (field: string, value: unknown, max = 20000) => checkNumber(out, `${path}.${field}`, value, { min: 0, exclusiveMin: true, max, quantity: 'sectionLength' });
   switch (shape.kind) {
     case 'rectangle':
       positive('width', shape.width);
@@ -79,8 +82,8 @@ export function validateShape(shape: SectionShape, path: string): Diagnostic[] {
       positive('flangeWidth', shape.flangeWidth);
       positive('flangeThickness', shape.flangeThickness);
       if (out.length === 0) {
-        if (shape.flangeWidth < shape.webWidth) out.push({ code: 'geometry', path: `${path}.flangeWidth`, severity: 'error', message: `must be at least the web width (${shape.webWidth} mm), got ${shape.flangeWidth} mm` });
-        if (shape.flangeThickness >= shape.height) out.push({ code: 'geometry', path: `${path}.flangeThickness`, severity: 'error', message: `must be less than the height (${shape.height} mm), got ${shape.flangeThickness} mm` });
+        if (shape.flangeWidth < shape.webWidth) out.push(diagnostic('geometry', `${path}.flangeWidth`, 'error', phrase`must be at least the web width (${len(shape.webWidth)}), got ${len(shape.flangeWidth)}`));
+        if (shape.flangeThickness >= shape.height) out.push(diagnostic('geometry', `${path}.flangeThickness`, 'error', phrase`must be less than the height (${len(shape.height)}), got ${len(shape.flangeThickness)}`));
       }
       break;
     case 'i-shape':
@@ -91,7 +94,7 @@ export function validateShape(shape: SectionShape, path: string): Diagnostic[] {
       positive('bottomFlangeWidth', shape.bottomFlangeWidth);
       positive('bottomFlangeThickness', shape.bottomFlangeThickness);
       if (out.length === 0 && shape.topFlangeThickness + shape.bottomFlangeThickness >= shape.height) {
-        out.push({ code: 'geometry', path: `${path}.topFlangeThickness`, severity: 'error', message: `top and bottom flange thicknesses (${shape.topFlangeThickness} + ${shape.bottomFlangeThickness} mm) must add up to less than the height (${shape.height} mm)` });
+        out.push(diagnostic('geometry', `${path}.topFlangeThickness`, 'error', phrase`top and bottom flange thicknesses (${len(shape.topFlangeThickness)} + ${len(shape.bottomFlangeThickness)}) must add up to less than the height (${len(shape.height)})`));
       }
       break;
     case 'box':
@@ -101,8 +104,8 @@ export function validateShape(shape: SectionShape, path: string): Diagnostic[] {
       positive('bottomThickness', shape.bottomThickness);
       positive('wallThickness', shape.wallThickness);
       if (out.length === 0) {
-        if (2 * shape.wallThickness >= shape.width) out.push({ code: 'geometry', path: `${path}.wallThickness`, severity: 'error', message: `two walls (2 × ${shape.wallThickness} mm) must be narrower than the width (${shape.width} mm)` });
-        if (shape.topThickness + shape.bottomThickness >= shape.height) out.push({ code: 'geometry', path: `${path}.topThickness`, severity: 'error', message: `top and bottom slabs (${shape.topThickness} + ${shape.bottomThickness} mm) must be thinner together than the height (${shape.height} mm)` });
+        if (2 * shape.wallThickness >= shape.width) out.push(diagnostic('geometry', `${path}.wallThickness`, 'error', phrase`two walls (2 × ${len(shape.wallThickness)}) must be narrower than the width (${len(shape.width)})`));
+        if (shape.topThickness + shape.bottomThickness >= shape.height) out.push(diagnostic('geometry', `${path}.topThickness`, 'error', phrase`top and bottom slabs (${len(shape.topThickness)} + ${len(shape.bottomThickness)}) must be thinner together than the height (${len(shape.height)})`));
       }
       break;
     case 'polygon': {
@@ -111,8 +114,8 @@ export function validateShape(shape: SectionShape, path: string): Diagnostic[] {
         break;
       }
       shape.outline.forEach((p, i) => {
-        checkNumber(out, `${path}.outline[${i}].x`, p.x, { min: -20000, max: 20000, unit: 'mm' });
-        checkNumber(out, `${path}.outline[${i}].y`, p.y, { min: 0, max: 20000, unit: 'mm' });
+        checkNumber(out, `${path}.outline[${i}].x`, p.x, { min: -20000, max: 20000, quantity: 'sectionLength' });
+        checkNumber(out, `${path}.outline[${i}].y`, p.y, { min: 0, max: 20000, quantity: 'sectionLength' });
       });
       if (out.length === 0) {
         if (Math.min(...shape.outline.map((p) => p.y)) !== 0) out.push({ code: 'geometry', path: `${path}.outline`, severity: 'error', message: 'the highest point must be at depth y = 0 (depths are measured down from the top fibre)' });
@@ -131,13 +134,13 @@ export function validateShape(shape: SectionShape, path: string): Diagnostic[] {
  * @param at path of the layer, e.g. `sections[2] "S-3".bars[0]`
  */
 export function checkBarNumbers(out: Diagnostic[], layer: BarLayer, at: string): boolean {
-  if (layer.count === undefined && layer.diameter === undefined) return checkNumber(out, `${at}.area`, layer.area, { min: 0, max: 1e6, exclusiveMin: true, unit: 'mm²' });
+  if (layer.count === undefined && layer.diameter === undefined) return checkNumber(out, `${at}.area`, layer.area, { min: 0, max: 1e6, exclusiveMin: true, quantity: 'area' });
   let ok = checkNumber(out, `${at}.count`, layer.count, { min: 1, max: 100 });
   if (ok && !Number.isInteger(layer.count)) {
     out.push({ code: 'must-be-integer', path: `${at}.count`, severity: 'error', message: `must be a whole number of bars, got ${layer.count}` });
     ok = false;
   }
-  return checkNumber(out, `${at}.diameter`, layer.diameter, { min: 3, max: 60, unit: 'mm' }) && ok;
+  return checkNumber(out, `${at}.diameter`, layer.diameter, { min: 3, max: 60, quantity: 'sectionLength' }) && ok;
 }
 
 function rectangleProfile(x0: number, x1: number, y0: number, y1: number): Strip[] {
@@ -185,9 +188,9 @@ export function buildSectionModel(definition: SectionDefinition, materials: Mate
   let core: SectionModel['core'];
   let confinement: ConfinementInput | undefined;
   if (hoops) {
-    checkNumber(problems, `${path}.hoops.diameter`, hoops.diameter, { min: 4, max: 32, unit: 'mm' });
-    checkNumber(problems, `${path}.hoops.spacing`, hoops.spacing, { min: 25, max: 1000, unit: 'mm' });
-    checkNumber(problems, `${path}.hoops.clearCover`, hoops.clearCover, { min: 0, max: 150, unit: 'mm' });
+    checkNumber(problems, `${path}.hoops.diameter`, hoops.diameter, { min: 4, max: 32, quantity: 'sectionLength' });
+    checkNumber(problems, `${path}.hoops.spacing`, hoops.spacing, { min: 25, max: 1000, quantity: 'sectionLength' });
+    checkNumber(problems, `${path}.hoops.clearCover`, hoops.clearCover, { min: 0, max: 150, quantity: 'sectionLength' });
     checkNumber(problems, `${path}.hoops.verticalLegs`, hoops.verticalLegs, { min: 2, max: 12 });
     if (hoops.horizontalLegs !== undefined) checkNumber(problems, `${path}.hoops.horizontalLegs`, hoops.horizontalLegs, { min: 2, max: 12 });
     const hoopSteel = materials.steel(hoops.steelId);
@@ -200,7 +203,7 @@ export function buildSectionModel(definition: SectionDefinition, materials: Mate
         const rect = hoopCentreline(definition.shape, hoops);
         const { x0, x1, y0, y1 } = rect ?? { x0: 0, x1: 0, y0: 0, y1: 0 };
         if (!rect || !(x1 - x0 > hoops.diameter && y1 - y0 > hoops.diameter)) {
-          problems.push({ code: 'geometry', path: `${path}.hoops.clearCover`, severity: 'error', message: `cover ${hoops.clearCover} mm leaves no core inside the hoops of a ${web.x1 - web.x0} mm wide, ${height} mm deep web` });
+          problems.push(diagnostic('geometry', `${path}.hoops.clearCover`, 'error', phrase`cover ${len(hoops.clearCover)} leaves no core inside the hoops of a ${len(web.x1 - web.x0)} wide, ${len(height)} deep web`));
         } else {
           core = { x0, x1, y0, y1 };
           const coreArea = (x1 - x0) * (y1 - y0);
@@ -237,7 +240,7 @@ export function buildSectionModel(definition: SectionDefinition, materials: Mate
   (definition.bars ?? []).forEach((layer, i) => {
     const at = `${path}.bars[${i}]`;
     const before = problems.length;
-    checkNumber(problems, `${at}.depth`, layer.depth, { min: 0, max: height, exclusiveMin: true, exclusiveMax: true, unit: 'mm' });
+    checkNumber(problems, `${at}.depth`, layer.depth, { min: 0, max: height, exclusiveMin: true, exclusiveMax: true, quantity: 'sectionLength' });
     checkBarNumbers(problems, layer, at);
     const steel = materials.steel(layer.steelId);
     if (!steel) problems.push({ code: 'unknown-reference', path: `${at}.steelId`, severity: 'error', message: `no steel material with id "${layer.steelId}" in the library` });
@@ -246,14 +249,14 @@ export function buildSectionModel(definition: SectionDefinition, materials: Mate
     const diameter = layerDiameter(layer);
     const radius = diameter / 2;
     if (layer.depth - radius < 0 || layer.depth + radius > height) {
-      problems.push({ code: 'outside-section', path: `${at}.depth`, severity: 'error', message: `a ${diameter.toFixed(0)} mm bar at depth ${layer.depth} mm sticks out of the ${height} mm deep section (allowed ${radius.toFixed(1)} to ${(height - radius).toFixed(1)} mm)` });
+      problems.push(diagnostic('outside-section', `${at}.depth`, 'error', phrase`a ${len(diameter)} bar at depth ${len(layer.depth)} sticks out of the ${len(height)} deep section (allowed ${len(radius)} to ${len(height - radius)})`));
       return;
     }
     const chords = [layer.depth - radius, layer.depth, layer.depth + radius].map((y) => chordIntervals(outline, Math.min(Math.max(y, 1e-9), height - 1e-9)));
     const positions = barPositions(definition, layer);
     const outside = positions.some((x) => !chords.every((cs) => cs.some(([a, b]) => x - radius >= a - 1e-6 && x + radius <= b + 1e-6)));
     if (outside || positions.some((x, k) => k > 0 && x - positions[k - 1]! < diameter - 1e-6)) {
-      problems.push({ code: 'outside-section', path: `${at}`, severity: 'error', message: `${layer.count ?? 1} bars of ${diameter.toFixed(0)} mm at depth ${layer.depth} mm do not fit inside the concrete${layer.spread === 'chord' ? '' : ' within the hoops of the web'} (reduce the count, or spread them across the width at that depth)` });
+      problems.push(diagnostic('outside-section', `${at}`, 'error', phrase`${layer.count ?? 1} bars of ${len(diameter)} at depth ${len(layer.depth)} do not fit inside the concrete${layer.spread === 'chord' ? '' : ' within the hoops of the web'} (reduce the count, or spread them across the width at that depth)`));
       return;
     }
     const inCore = core !== undefined && layer.depth > core.y0 && layer.depth < core.y1 && concrete.core !== undefined;
@@ -272,7 +275,7 @@ export function buildSectionModel(definition: SectionDefinition, materials: Mate
     });
   });
   if (definition.axialForce !== undefined) {
-    checkNumber(problems, `${path}.axialForce`, definition.axialForce, { min: -1e9, max: 1e9, unit: 'N' });
+    checkNumber(problems, `${path}.axialForce`, definition.axialForce, { min: -1e9, max: 1e9, quantity: 'force' });
   }
   if (problems.length > 0) throw new InputError(problems);
 

@@ -24,6 +24,7 @@ import { idealise } from './idealise.ts';
 import { directionSign, tensionSteel, type BendingDirection, type ConcretePart, type SectionModel } from './model.ts';
 import type { BilinearMethod, CurvePoint, CurveStatus, KeyPoint, KeyPointName, MomentCurvatureResult, UltimateCause } from './results.ts';
 import { curvePointOf, sectionState } from './state.ts';
+import { phrase, q } from '../units/phrase.ts';
 
 export interface MomentCurvatureOptions {
   /**
@@ -125,7 +126,7 @@ export function momentCurvature(model: SectionModel, direction: BendingDirection
       }
       const atLimit = best ? ULTIMATE_EVENTS.find((n) => enabled[n] && n !== 'momentDrop' && g[n](best!) > -1e-6) : undefined;
       if (!best || !atLimit) {
-        status = { kind: 'not-converged', atCurvature: hi, message: `Analysis stopped at φ = ${hi.toExponential(3)} 1/mm: ${reason}. The curve ends at the last converged point.` };
+        status = { kind: 'not-converged', atCurvature: hi, message: phrase`Analysis stopped at φ = ${q('curvature', hi)}: ${reason}. The curve ends at the last converged point.` };
         break;
       }
       // Reaching the limit exactly: let the event logic below record it at this state.
@@ -142,7 +143,7 @@ export function momentCurvature(model: SectionModel, direction: BendingDirection
       if (!enabled[n] || !(previousG[n] < 0 && currentG[n] >= 0)) continue;
       const located = locate(n, previous, current);
       if (typeof located === 'string') {
-        status = { kind: 'not-converged', atCurvature: kappa, message: `Could not locate the limit state between φ = ${previous.kappa.toExponential(3)} and ${kappa.toExponential(3)} 1/mm: ${located}` };
+        status = { kind: 'not-converged', atCurvature: kappa, message: phrase`Could not locate the limit state between φ = ${q('curvature', previous.kappa)} and ${q('curvature', kappa)}: ${located}` };
         break;
       }
       // Earliest wins; when a physical limit and the moment-drop rule coincide (a bar ruptures and the
@@ -202,7 +203,7 @@ export function momentCurvature(model: SectionModel, direction: BendingDirection
     solver.lastGuess = eq.referenceStrain;
   }
   if (!status) {
-    status = { kind: 'not-converged', atCurvature: previous.kappa, message: `No limit state was reached within ${maxSteps} curvature steps (φ = ${previous.kappa.toExponential(3)} 1/mm).` };
+    status = { kind: 'not-converged', atCurvature: previous.kappa, message: phrase`No limit state was reached within ${maxSteps} curvature steps (φ = ${q('curvature', previous.kappa)}).` };
   }
 
   snapshots.sort((p, q) => p.kappa - q.kappa);

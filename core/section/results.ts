@@ -4,6 +4,7 @@
  * depth mm, strain dimensionless (compression positive), stress MPa, force N.
  * Curvatures and moments are MAGNITUDES in the stated bending direction.
  */
+import type { Text } from '../units/phrase.ts';
 import type { BendingDirection, ElementKind } from './model.ts';
 
 /** Bilinear idealisations of a moment–curvature curve (core/section/idealise.ts), in menu order. */
@@ -87,7 +88,7 @@ export type UltimateCause =
 
 export type CurveStatus =
   | { readonly kind: 'complete'; readonly ultimateCause: UltimateCause; readonly message: string }
-  | { readonly kind: 'not-converged'; readonly atCurvature: number; readonly message: string };
+  | { readonly kind: 'not-converged'; readonly atCurvature: number; readonly message: Text };
 
 export interface BilinearIdealisation {
   readonly method: BilinearMethod;

@@ -1,4 +1,4 @@
-import { BugError } from '../diagnostics.ts';
+import { BugError } from '../errors.ts';
 import { QUANTITIES, type Quantity, type QuantityDefinition, type UnitSystem } from './quantities.ts';
 import { UNITS, type UnitDefinition, type UnitId } from './units.ts';
 

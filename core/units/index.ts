@@ -4,4 +4,4 @@ export * from './units.ts';
 export * from './quantities.ts';
 export * from './convert.ts';
 export * from './format.ts';
-export * from './text.ts';
+export * from './phrase.ts';

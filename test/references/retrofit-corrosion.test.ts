@@ -4,6 +4,7 @@
  *   εsu(δs)/εsu0 = 1 for δs ≤ 0.016, 0.1521·δs^(−0.4583) for 0.016 < δs ≤ 1.
  */
 import { describe, expect, it } from 'vitest';
+import { say } from '../../core/units/phrase.ts';
 import { CORROSION_THRESHOLD, corrodedRuptureStrainFactor, residualAreaFactor } from '../../core/retrofit/corrosion.ts';
 import { corrodedSteelSpec } from '../../core/retrofit/as-found.ts';
 import { validateSteelSpec } from '../../core/materials/build/steel.ts';
@@ -66,7 +67,7 @@ describe('a corroded steel spec', () => {
     expect(r.ruptureStrain).toBeLessThan(0.04);
     expect(r.spec.model).toBe('bilinear');
     expect(r.spec.hardeningStrain).toBeUndefined();
-    expect(r.warnings.join(' ')).toMatch(/bilinear/);
+    expect(r.warnings.map((w) => say(w, 'si')).join(' ')).toMatch(/bilinear/);
     expect(validateSteelSpec(r.spec).filter((d) => d.severity === 'error')).toEqual([]);
   });
 

@@ -4,6 +4,7 @@
  *   two-leg 10 mm stirrups at 200 mm (Av = 157.08 mm²), fyt = 420 MPa, no axial force.
  */
 import { describe, expect, it } from 'vitest';
+import { say } from '../../core/units/phrase.ts';
 import { ACI_SHEAR_PHI, aciConcreteShear, aciMinimumShearReinforcement, aciShearStrength, aciSizeEffectFactor, aciStirrupShear } from '../../core/assessment/shear-aci.ts';
 import { convertUnit } from '../../core/units/convert.ts';
 
@@ -59,7 +60,7 @@ describe('ACI 318-19 shear limits', () => {
     const r = aciShearStrength({ ...beam, stirrups: { area: av, spacing: 200, yieldStress: 520 } });
     expect(r.stirrupYield).toBe(420);
     expect(r.steel).toBeCloseTo(194_621.7, 0);
-    expect(r.notes.join(' ')).toMatch(/420 MPa/);
+    expect(r.notes.map((w) => say(w, 'si')).join(' ')).toMatch(/420 MPa/);
   });
 
   it('Vs counts up to 0.66√f′c·bw·d (22.5.1.2): 4 legs of 16 mm at 50 mm would give 1868 kN, limited to 771.0 kN', () => {

@@ -25,6 +25,7 @@ import { DEFAULT_SETTINGS, type Project, type UnitSystem, type MemberDefinition 
 import { validateProject } from '../../core/project/validate.ts';
 import type { AsFoundCondition, StrengtheningScheme } from '../../core/retrofit/types.ts';
 import type { BarLayer, SectionDefinition } from '../../core/section/definition.ts';
+import { isQuantityOrChoice, say, type Phrase } from '../../core/units/phrase.ts';
 import type { SectionShape } from '../../core/section/shapes.ts';
 
 // --- generated projects ---------------------------------------------------------------------------
@@ -268,16 +269,45 @@ export function snapshotProjects(): [string, Project][] {
 interface SnapshotRecord {
   readonly key: string;
   readonly value: unknown;
+  /** Display units of the project the record comes from. */
+  readonly units?: 'si' | 'us';
+}
+
+/**
+ * The record as text a person reads: every phrase (words with quantities as data) said in the
+ * project's units, diagnostics' phrase copies left out — so a change from finished text to data
+ * compares equal when the words are the same.
+ */
+function asWords(value: unknown, units: 'si' | 'us'): unknown {
+  if (Array.isArray(value)) {
+    if (value.some(isQuantityOrChoice) && value.every((v) => typeof v === 'string' || isQuantityOrChoice(v))) return say(value as Phrase, units);
+    return value.map((v) => asWords(v, units));
+  }
+  if (value && typeof value === 'object') {
+    const out: Record<string, unknown> = {};
+    for (const [k, v] of Object.entries(value)) if (k !== 'detail') out[k] = asWords(v, units);
+    return out;
+  }
+  return value;
+}
+
+/** Strings that show a sentence was built by plain interpolation of data (a defect). */
+function garbled(value: unknown, path: string, out: string[]): void {
+  if (typeof value === 'string') {
+    if (value.includes('[object Object]')) out.push(`${path}: ${value.slice(0, 160)}`);
+  } else if (Array.isArray(value)) value.forEach((v, i) => garbled(v, `${path}[${i}]`, out));
+  else if (value && typeof value === 'object') for (const [k, v] of Object.entries(value)) garbled(v, `${path}.${k}`, out);
 }
 
 function* records(): Generator<SnapshotRecord> {
   for (const [name, project] of snapshotProjects()) {
-    yield { key: `${name}/validation`, value: validateProject(project) };
+    const units = project.info.unitSystem;
+    yield { key: `${name}/validation`, value: validateProject(project), units };
     const results = analyzeProject(project);
-    yield { key: `${name}/summary`, value: { ...results, members: undefined } };
-    for (const m of results.members) yield { key: `${name}/member/${m.memberId}`, value: m };
+    yield { key: `${name}/summary`, value: { ...results, members: undefined }, units };
+    for (const m of results.members) yield { key: `${name}/member/${m.memberId}`, value: m, units };
   }
-  for (const [name, project] of brokenProjects()) yield { key: `${name}/validation`, value: validateProject(project) };
+  for (const [name, project] of brokenProjects()) yield { key: `${name}/validation`, value: validateProject(project), units: project.info.unitSystem };
 }
 
 /** JSON paths where a and b differ (at most `limit`). */
@@ -307,7 +337,7 @@ function main(args: string[]): number {
   const started = performance.now();
   if (mode === 'write') {
     const lines: string[] = [];
-    for (const r of records()) lines.push(JSON.stringify(r));
+    for (const r of records()) lines.push(JSON.stringify({ key: r.key, value: r.value, units: r.units }));
     writeFileSync(file, `${lines.join('\n')}\n`);
     process.stdout.write(`${lines.length} records written to ${file} in ${((performance.now() - started) / 1000).toFixed(0)} s\n`);
     return 0;
@@ -323,14 +353,21 @@ function main(args: string[]): number {
   const seen = new Set<string>();
   for (const r of records()) {
     seen.add(r.key);
-    const now = JSON.parse(JSON.stringify(r.value)) as unknown;
+    const units = r.units ?? 'si';
+    const now = asWords(JSON.parse(JSON.stringify(r.value)), units);
+    const bad: string[] = [];
+    garbled(now, '', bad);
+    if (bad.length > 0) {
+      process.stdout.write(`GARBLED ${r.key}\n${bad.slice(0, limit).map((d) => `   ${d}`).join('\n')}\n`);
+      changed++;
+    }
     if (!before.has(r.key)) {
       process.stdout.write(`NEW ${r.key}\n`);
       changed++;
       continue;
     }
     const diff: string[] = [];
-    differences(before.get(r.key), now, '', diff, limit);
+    differences(asWords(before.get(r.key), units), now, '', diff, limit);
     if (diff.length === 0) same++;
     else {
       changed++;

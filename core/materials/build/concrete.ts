@@ -1,4 +1,5 @@
-import { InputError, type Diagnostic } from '../../diagnostics.ts';
+import { diagnostic, InputError, type AllowedRange, type Diagnostic } from '../../diagnostics.ts';
+import { phrase, q } from '../../units/phrase.ts';
 import { CODE_BASES, CONCRETE_COMPRESSION_MODELS, CONCRETE_TENSION_MODELS, type CodeBasis, type ConcreteCompressionModel, type ConcreteSpec, type ConfinementInput } from '../specs.ts';
 import type { CompressionLaw, ConcreteMaterial, TensionLaw } from '../types.ts';
 import { checkField, fieldPath } from '../checks.ts';
@@ -19,7 +20,7 @@ import { resolveConcrete, type ResolvedConcrete } from './concrete-defaults.ts';
 export const CONFINEMENT_MODELS: readonly ConcreteCompressionModel[] = ['mander', 'modified-kent-park'];
 
 /** Allowed range of the compressive strength of any spec, MPa (as-found strengths included). */
-export const CONCRETE_STRENGTH_RANGE = { min: 10, max: 120, unit: 'MPa' } as const;
+export const CONCRETE_STRENGTH_RANGE = { min: 10, max: 120, quantity: 'concreteStress' } as const;
 
 /** Where the spec and its confinement sit in the project, for diagnostic paths. */
 export interface ConcreteBuildOptions {
@@ -108,15 +109,15 @@ function checkFields(out: Diagnostic[], spec: ConcreteSpec, path: string): boole
   checkField(out, at('strength'), 'concrete compressive strength', spec.strength, CONCRETE_STRENGTH_RANGE);
   checkOption(out, at('compressionModel'), 'concrete compression model', spec.compressionModel, CONCRETE_COMPRESSION_MODELS);
   checkOption(out, at('tensionModel'), 'concrete tension model', spec.tensionModel, CONCRETE_TENSION_MODELS);
-  const optional: [keyof ConcreteSpec, string, { min: number; max: number; unit?: string; exclusiveMin?: boolean }][] = [
-    ['elasticModulus', 'concrete elastic modulus Ec', { min: 5_000, max: 70_000, unit: 'MPa' }],
-    ['tensileStrength', 'concrete tensile strength', { min: 0, exclusiveMin: true, max: 15, unit: 'MPa' }],
+  const optional: [keyof ConcreteSpec, string, AllowedRange][] = [
+    ['elasticModulus', 'concrete elastic modulus Ec', { min: 5_000, max: 70_000, quantity: 'modulus' }],
+    ['tensileStrength', 'concrete tensile strength', { min: 0, exclusiveMin: true, max: 15, quantity: 'concreteStress' }],
     ['crushingStrain', 'crushing strain εcu of unconfined concrete', { min: 0.002, max: 0.01 }],
     ['peakFactor', 'Hognestad peak factor k', { min: 0.5, max: 1 }],
     ['spallingStrain', 'spalling strain εsp of the cover', { min: 0.003, max: 0.02 }],
     ['lightweightFactor', 'lightweight-concrete factor λ (ACI 318-19 19.2.4)', { min: 0.75, max: 1 }],
     ['tensionStiffeningCoefficient', 'tension-stiffening coefficient c', { min: 50, max: 1000 }],
-    ['density', 'concrete density', { min: 1200, max: 2800, unit: 'kg/m³' }],
+    ['density', 'concrete density', { min: 1200, max: 2800, quantity: 'density' }],
     ['creepCoefficient', 'creep coefficient φ', { min: 0, max: 6 }],
     ['shrinkageStrain', 'free shrinkage strain εcs', { min: 0, max: 0.002 }],
   ];
@@ -126,18 +127,20 @@ function checkFields(out: Diagnostic[], spec: ConcreteSpec, path: string): boole
   return out.slice(before).every((d) => d.severity !== 'error');
 }
 
+/** A concrete strength in a message (MPa, shown in the display unit of concrete stresses). */
+const fc = (mpa: number) => q('concreteStress', mpa, { compact: true });
+
 function checkTableRange(out: Diagnostic[], spec: ConcreteSpec, code: CodeBasis, path: string): boolean {
   const usesTable = code === 'EN 1992-1-1' || spec.compressionModel.startsWith('en1992');
   if (!usesTable) return true;
   const at = fieldPath(path, 'strength');
   if (spec.strength > 90) {
-    out.push({ code: 'out-of-range', path: at, severity: 'error',
-      message: `concrete strength ${spec.strength} MPa is above 90 MPa, the end of EN 1992-1-1 Table 3.1, from which this model takes its constants; use a strength of at most 90 MPa or the ACI 318-19 basis with a non-EN model` });
+    out.push(diagnostic('out-of-range', at, 'error',
+      phrase`concrete strength ${fc(spec.strength)} is above ${fc(90)}, the end of EN 1992-1-1 Table 3.1, from which this model takes its constants; use a strength of at most ${fc(90)} or the ACI 318-19 basis with a non-EN model`));
     return false;
   }
   if (spec.strength < 12) {
-    out.push({ code: 'out-of-range', path: at, severity: 'warning',
-      message: `concrete strength ${spec.strength} MPa is below 12 MPa, the start of EN 1992-1-1 Table 3.1; its constants are extrapolated` });
+    out.push(diagnostic('out-of-range', at, 'warning', phrase`concrete strength ${fc(spec.strength)} is below ${fc(12)}, the start of EN 1992-1-1 Table 3.1; its constants are extrapolated`));
   }
   return true;
 }

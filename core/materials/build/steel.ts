@@ -1,4 +1,5 @@
-import { InputError, type Diagnostic } from '../../diagnostics.ts';
+import { diagnostic, InputError, type AllowedRange, type Diagnostic } from '../../diagnostics.ts';
+import { phrase, q } from '../../units/phrase.ts';
 import { STEEL_MODELS, type SteelModel, type SteelSpec } from '../specs.ts';
 import type { SteelMaterial } from '../types.ts';
 import { checkField, fieldPath } from '../checks.ts';
@@ -42,22 +43,22 @@ export function validateSteelSpec(spec: SteelSpec, path = 'material'): Diagnosti
   const at = (field: string): string => fieldPath(path, field);
   checkIdentity(out, spec, 'steel', path);
   let ok = checkOption(out, at('model'), 'steel model', spec.model, STEEL_MODELS);
-  ok = checkField(out, at('yieldStress'), 'steel yield stress fy', spec.yieldStress, { min: 200, max: 1000, unit: 'MPa' }) && ok;
+  ok = checkField(out, at('yieldStress'), 'steel yield stress fy', spec.yieldStress, { min: 200, max: 1000, quantity: 'stress' }) && ok;
   ok = checkField(out, at('ultimateStress'), 'steel ultimate stress fu (at least fy)',
-    spec.ultimateStress, { min: Number.isFinite(spec.yieldStress) ? spec.yieldStress : 200, max: 2000, unit: 'MPa' }) && ok;
-  const optional: [keyof SteelSpec, string, { min: number; max: number; unit?: string }][] = [
-    ['elasticModulus', 'steel elastic modulus Es', { min: 100_000, max: 250_000, unit: 'MPa' }],
+    spec.ultimateStress, { min: Number.isFinite(spec.yieldStress) ? spec.yieldStress : 200, max: 2000, quantity: 'stress' }) && ok;
+  const optional: [keyof SteelSpec, string, AllowedRange][] = [
+    ['elasticModulus', 'steel elastic modulus Es', { min: 100_000, max: 250_000, quantity: 'modulus' }],
     ['hardeningStrain', 'strain at the onset of hardening εsh', { min: 0, max: 0.1 }],
     ['ruptureStrain', 'rupture strain εsu', { min: 0.01, max: 0.3 }],
-    ['hardeningModulus', 'hardening modulus Esh', { min: 0, max: 250_000, unit: 'MPa' }],
+    ['hardeningModulus', 'hardening modulus Esh', { min: 0, max: 250_000, quantity: 'modulus' }],
   ];
   for (const [field, label, range] of optional) {
     if (spec[field] !== undefined) ok = checkField(out, at(field), label, spec[field], range) && ok;
   }
   if (!ok) return out;
   if (spec.model === 'elastic-plastic' && spec.ultimateStress > spec.yieldStress) {
-    out.push({ code: 'inconsistent', path: at('ultimateStress'), severity: 'warning',
-      message: `the elastic–perfectly plastic model ignores the ultimate stress fu = ${spec.ultimateStress} MPa (stress stays at fy = ${spec.yieldStress} MPa); choose a hardening model to use it` });
+    out.push(diagnostic('inconsistent', at('ultimateStress'), 'warning',
+      phrase`the elastic–perfectly plastic model ignores the ultimate stress fu = ${q('stress', spec.ultimateStress, { compact: true })} (stress stays at fy = ${q('stress', spec.yieldStress, { compact: true })}); choose a hardening model to use it`));
   }
   const table = {
     elasticModulus: at('elasticModulus'), yieldStress: at('yieldStress'), ultimateStress: at('ultimateStress'),

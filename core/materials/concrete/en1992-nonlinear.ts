@@ -27,8 +27,8 @@ export function en1992NonlinearK(p: Pick<En1992NonlinearParameters, 'meanStrengt
 export function validateEn1992NonlinearParameters(p: En1992NonlinearParameters, path = ''): Diagnostic[] {
   const out: Diagnostic[] = [];
   const ok = [
-    checkField(out, fieldPath(path, 'meanStrength'), 'EN 1992-1-1 Eq. (3.14): mean strength fcm', p.meanStrength, { min: 0, exclusiveMin: true, unit: 'MPa' }),
-    checkField(out, fieldPath(path, 'elasticModulus'), 'EN 1992-1-1 Eq. (3.14): elastic modulus Ecm', p.elasticModulus, { min: 0, exclusiveMin: true, unit: 'MPa' }),
+    checkField(out, fieldPath(path, 'meanStrength'), 'EN 1992-1-1 Eq. (3.14): mean strength fcm', p.meanStrength, { min: 0, exclusiveMin: true, quantity: 'concreteStress' }),
+    checkField(out, fieldPath(path, 'elasticModulus'), 'EN 1992-1-1 Eq. (3.14): elastic modulus Ecm', p.elasticModulus, { min: 0, exclusiveMin: true, quantity: 'modulus' }),
     checkField(out, fieldPath(path, 'peakStrain'), 'EN 1992-1-1 Eq. (3.14): strain at peak εc1', p.peakStrain, { min: 0.001, max: 0.005 }),
     checkField(out, fieldPath(path, 'crushingStrain'), 'EN 1992-1-1 Eq. (3.14): ultimate strain εcu1', p.crushingStrain, { min: 0, exclusiveMin: true, max: 0.01 }),
   ].every(Boolean);

@@ -44,8 +44,8 @@ export function en1992ParabolaRectangleConstants(p: En1992ParabolaRectangleParam
 /** Checks the parameters (fck up to 90 MPa, εcu2 ≥ εc2); paths are `path.<parameter name>`. */
 export function validateEn1992ParabolaRectangleParameters(p: En1992ParabolaRectangleParameters, path = ''): Diagnostic[] {
   const out: Diagnostic[] = [];
-  let ok = checkField(out, fieldPath(path, 'strength'), 'EN 1992-1-1 parabola–rectangle: plateau stress', p.strength, { min: 0, exclusiveMin: true, unit: 'MPa' });
-  ok = checkField(out, fieldPath(path, 'characteristicStrength'), 'EN 1992-1-1 parabola–rectangle: fck for Table 3.1', p.characteristicStrength ?? p.strength, { min: 0, exclusiveMin: true, max: 90, unit: 'MPa' }) && ok;
+  let ok = checkField(out, fieldPath(path, 'strength'), 'EN 1992-1-1 parabola–rectangle: plateau stress', p.strength, { min: 0, exclusiveMin: true, quantity: 'concreteStress' });
+  ok = checkField(out, fieldPath(path, 'characteristicStrength'), 'EN 1992-1-1 parabola–rectangle: fck for Table 3.1', p.characteristicStrength ?? p.strength, { min: 0, exclusiveMin: true, max: 90, quantity: 'concreteStress' }) && ok;
   if (p.crushingStrain !== undefined) {
     ok = checkField(out, fieldPath(path, 'crushingStrain'), 'EN 1992-1-1 parabola–rectangle: ultimate strain εcu2', p.crushingStrain, { min: 0, exclusiveMin: true, max: 0.01 }) && ok;
   }

@@ -38,8 +38,8 @@ export function hognestadConstants(parameters: HognestadParameters): { peakStres
 export function validateHognestadParameters(parameters: HognestadParameters, path = ''): Diagnostic[] {
   const out: Diagnostic[] = [];
   const ok = [
-    checkField(out, fieldPath(path, 'compressiveStrength'), 'Hognestad: compressive strength', parameters.compressiveStrength, { min: 0, exclusiveMin: true, unit: 'MPa' }),
-    checkField(out, fieldPath(path, 'elasticModulus'), 'Hognestad: elastic modulus Ec', parameters.elasticModulus, { min: 0, exclusiveMin: true, unit: 'MPa' }),
+    checkField(out, fieldPath(path, 'compressiveStrength'), 'Hognestad: compressive strength', parameters.compressiveStrength, { min: 0, exclusiveMin: true, quantity: 'concreteStress' }),
+    checkField(out, fieldPath(path, 'elasticModulus'), 'Hognestad: elastic modulus Ec', parameters.elasticModulus, { min: 0, exclusiveMin: true, quantity: 'modulus' }),
     checkField(out, fieldPath(path, 'peakFactor'), 'Hognestad: peak factor k', parameters.peakFactor ?? HOGNESTAD_DEFAULT_PEAK_FACTOR, { min: 0, max: 1, exclusiveMin: true }),
     checkField(out, fieldPath(path, 'crushingStrain'), 'Hognestad: crushing strain εcu', parameters.crushingStrain ?? HOGNESTAD_ULTIMATE_STRAIN, { min: 0, max: 0.05, exclusiveMin: true }),
   ].every(Boolean);

@@ -111,11 +111,11 @@ export function manderConfinement(confinement: ConfinementInput, unconfinedStren
  */
 export function validateConfinementInput(c: ConfinementInput, path = 'confinement', requireClearSpacings = true): Diagnostic[] {
   const out: Diagnostic[] = [];
-  let ok = checkField(out, fieldPath(path, 'hoopYieldStress'), 'hoop yield stress fyh', c.hoopYieldStress, { min: 200, max: 1000, unit: 'MPa' });
-  ok = checkField(out, fieldPath(path, 'hoopDiameter'), 'hoop bar diameter', c.hoopDiameter, { min: 4, max: 40, unit: 'mm' }) && ok;
-  ok = checkField(out, fieldPath(path, 'spacing'), 'hoop spacing s', c.spacing, { min: 0, exclusiveMin: true, max: 1000, unit: 'mm' }) && ok;
-  ok = checkField(out, fieldPath(path, 'coreWidth'), 'core width bc (to hoop centrelines)', c.coreWidth, { min: 0, exclusiveMin: true, max: 5000, unit: 'mm' }) && ok;
-  ok = checkField(out, fieldPath(path, 'coreDepth'), 'core depth dc (to hoop centrelines)', c.coreDepth, { min: 0, exclusiveMin: true, max: 5000, unit: 'mm' }) && ok;
+  let ok = checkField(out, fieldPath(path, 'hoopYieldStress'), 'hoop yield stress fyh', c.hoopYieldStress, { min: 200, max: 1000, quantity: 'stress' });
+  ok = checkField(out, fieldPath(path, 'hoopDiameter'), 'hoop bar diameter', c.hoopDiameter, { min: 4, max: 40, quantity: 'sectionLength' }) && ok;
+  ok = checkField(out, fieldPath(path, 'spacing'), 'hoop spacing s', c.spacing, { min: 0, exclusiveMin: true, max: 1000, quantity: 'sectionLength' }) && ok;
+  ok = checkField(out, fieldPath(path, 'coreWidth'), 'core width bc (to hoop centrelines)', c.coreWidth, { min: 0, exclusiveMin: true, max: 5000, quantity: 'sectionLength' }) && ok;
+  ok = checkField(out, fieldPath(path, 'coreDepth'), 'core depth dc (to hoop centrelines)', c.coreDepth, { min: 0, exclusiveMin: true, max: 5000, quantity: 'sectionLength' }) && ok;
   for (const legs of ['legsX', 'legsY'] as const) {
     const value = c[legs];
     if (checkField(out, fieldPath(path, legs), `number of hoop legs ${legs}`, value, { min: 2, max: 20 }) && !Number.isInteger(value)) {
@@ -139,7 +139,7 @@ export function validateConfinementInput(c: ConfinementInput, path = 'confinemen
     ok = false;
   }
   c.clearSpacings.forEach((w, i) => {
-    ok = checkField(out, `${fieldPath(path, 'clearSpacings')}[${i}]`, 'clear spacing w′ between restrained bars', w, { min: 0, max: 5000, unit: 'mm' }) && ok;
+    ok = checkField(out, `${fieldPath(path, 'clearSpacings')}[${i}]`, 'clear spacing w′ between restrained bars', w, { min: 0, max: 5000, quantity: 'sectionLength' }) && ok;
   });
   if (!ok) return out;
   if (c.spacing <= c.hoopDiameter) {

@@ -65,8 +65,8 @@ function manderCurve(peakStress: number, peakStrain: number, r: number): (strain
 }
 
 function checkCommon(out: Diagnostic[], p: { compressiveStrength: number; elasticModulus?: number; peakStrain?: number }, path: string): boolean {
-  let ok = checkField(out, fieldPath(path, 'compressiveStrength'), 'Mander: unconfined strength f′co', p.compressiveStrength, { min: 0, exclusiveMin: true, unit: 'MPa' });
-  if (p.elasticModulus !== undefined) ok = checkField(out, fieldPath(path, 'elasticModulus'), 'Mander: elastic modulus Ec', p.elasticModulus, { min: 0, exclusiveMin: true, unit: 'MPa' }) && ok;
+  let ok = checkField(out, fieldPath(path, 'compressiveStrength'), 'Mander: unconfined strength f′co', p.compressiveStrength, { min: 0, exclusiveMin: true, quantity: 'concreteStress' });
+  if (p.elasticModulus !== undefined) ok = checkField(out, fieldPath(path, 'elasticModulus'), 'Mander: elastic modulus Ec', p.elasticModulus, { min: 0, exclusiveMin: true, quantity: 'modulus' }) && ok;
   if (p.peakStrain !== undefined) ok = checkField(out, fieldPath(path, 'peakStrain'), 'Mander: strain at peak εco', p.peakStrain, { min: 0.001, max: 0.005 }) && ok;
   if (!ok) return false;
   const Ec = p.elasticModulus ?? manderElasticModulus(p.compressiveStrength);
@@ -103,7 +103,7 @@ export function validateManderUnconfinedParameters(p: ManderUnconfinedParameters
 export function validateManderConfinedParameters(p: ManderConfinedParameters, path = ''): Diagnostic[] {
   const out: Diagnostic[] = [];
   let ok = checkCommon(out, p, path);
-  ok = checkField(out, fieldPath(path, 'confinedStrength'), 'Mander: confined strength f′cc', p.confinedStrength, { min: p.compressiveStrength, unit: 'MPa' }) && ok;
+  ok = checkField(out, fieldPath(path, 'confinedStrength'), 'Mander: confined strength f′cc', p.confinedStrength, { min: p.compressiveStrength, quantity: 'concreteStress' }) && ok;
   ok = checkField(out, fieldPath(path, 'crushingStrain'), 'Mander: ultimate strain of the core εcu', p.crushingStrain, { min: 0, exclusiveMin: true, max: 0.1 }) && ok;
   if (!ok) return out;
   const epsCc = manderConfinedPeakStrain(p);

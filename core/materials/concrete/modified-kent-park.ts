@@ -85,13 +85,13 @@ export function validateModifiedKentParkParameters(p: ModifiedKentParkParameters
   const out: Diagnostic[] = [];
   const label = 'Modified Kent–Park:';
   let ok = checkField(out, fieldPath(path, 'compressiveStrength'), `${label} compressive strength (ε50u = (3 + 0.29 f′c)/(145 f′c − 1000) needs 145 f′c > 1000)`,
-    p.compressiveStrength, { min: 1000 / 145, exclusiveMin: true, unit: 'MPa' });
+    p.compressiveStrength, { min: 1000 / 145, exclusiveMin: true, quantity: 'concreteStress' });
   const rho = p.volumetricRatio ?? 0;
   ok = checkField(out, fieldPath(path, 'volumetricRatio'), `${label} volumetric hoop ratio ρs`, rho, { min: 0, max: 0.1 }) && ok;
   if (rho > 0) {
-    ok = checkField(out, fieldPath(path, 'hoopYieldStress'), `${label} hoop yield stress fyh`, p.hoopYieldStress, { min: 0, exclusiveMin: true, unit: 'MPa' }) && ok;
-    ok = checkField(out, fieldPath(path, 'coreWidth'), `${label} core width to the outside of the hoops h″`, p.coreWidth, { min: 0, exclusiveMin: true, unit: 'mm' }) && ok;
-    ok = checkField(out, fieldPath(path, 'hoopSpacing'), `${label} hoop spacing sh`, p.hoopSpacing, { min: 0, exclusiveMin: true, unit: 'mm' }) && ok;
+    ok = checkField(out, fieldPath(path, 'hoopYieldStress'), `${label} hoop yield stress fyh`, p.hoopYieldStress, { min: 0, exclusiveMin: true, quantity: 'stress' }) && ok;
+    ok = checkField(out, fieldPath(path, 'coreWidth'), `${label} core width to the outside of the hoops h″`, p.coreWidth, { min: 0, exclusiveMin: true, quantity: 'sectionLength' }) && ok;
+    ok = checkField(out, fieldPath(path, 'hoopSpacing'), `${label} hoop spacing sh`, p.hoopSpacing, { min: 0, exclusiveMin: true, quantity: 'sectionLength' }) && ok;
   }
   if (p.crushingStrain !== undefined) {
     ok = checkField(out, fieldPath(path, 'crushingStrain'), `${label} crushing strain εcu`, p.crushingStrain, { min: 0, max: 0.1, exclusiveMin: true }) && ok;

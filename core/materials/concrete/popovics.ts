@@ -28,8 +28,8 @@ export function popovicsExponent(p: Pick<PopovicsParameters, 'compressiveStrengt
 export function validatePopovicsParameters(p: PopovicsParameters, path = ''): Diagnostic[] {
   const out: Diagnostic[] = [];
   const ok = [
-    checkField(out, fieldPath(path, 'compressiveStrength'), 'Popovics: compressive strength', p.compressiveStrength, { min: 0, exclusiveMin: true, unit: 'MPa' }),
-    checkField(out, fieldPath(path, 'elasticModulus'), 'Popovics: elastic modulus Ec', p.elasticModulus, { min: 0, exclusiveMin: true, unit: 'MPa' }),
+    checkField(out, fieldPath(path, 'compressiveStrength'), 'Popovics: compressive strength', p.compressiveStrength, { min: 0, exclusiveMin: true, quantity: 'concreteStress' }),
+    checkField(out, fieldPath(path, 'elasticModulus'), 'Popovics: elastic modulus Ec', p.elasticModulus, { min: 0, exclusiveMin: true, quantity: 'modulus' }),
     checkField(out, fieldPath(path, 'peakStrain'), 'Popovics: strain at peak εc', p.peakStrain, { min: 0.001, max: 0.005 }),
     checkField(out, fieldPath(path, 'crushingStrain'), 'Popovics: crushing strain εcu', p.crushingStrain, { min: 0, exclusiveMin: true, max: 0.02 }),
   ].every(Boolean);

@@ -69,8 +69,8 @@ export interface TensionStiffeningParameters extends LinearTensionParameters {
 /** Checks the tension-law parameters (0 < ft ≤ 15 MPa, Ec > 0, c, end strain beyond cracking); paths are `path.<parameter name>`. */
 export function validateTensionParameters(p: TensionStiffeningParameters, path = ''): Diagnostic[] {
   const out: Diagnostic[] = [];
-  let ok = checkField(out, fieldPath(path, 'tensileStrength'), 'concrete tension: tensile strength', p.tensileStrength, { min: 0, exclusiveMin: true, max: 15, unit: 'MPa' });
-  ok = checkField(out, fieldPath(path, 'elasticModulus'), 'concrete tension: elastic modulus Ec', p.elasticModulus, { min: 0, exclusiveMin: true, unit: 'MPa' }) && ok;
+  let ok = checkField(out, fieldPath(path, 'tensileStrength'), 'concrete tension: tensile strength', p.tensileStrength, { min: 0, exclusiveMin: true, max: 15, quantity: 'concreteStress' });
+  ok = checkField(out, fieldPath(path, 'elasticModulus'), 'concrete tension: elastic modulus Ec', p.elasticModulus, { min: 0, exclusiveMin: true, quantity: 'modulus' }) && ok;
   if (p.coefficient !== undefined) {
     ok = checkField(out, fieldPath(path, 'coefficient'), 'tension-stiffening coefficient c', p.coefficient, { min: 0, exclusiveMin: true, max: 2000 }) && ok;
   }

@@ -40,8 +40,8 @@ export function thorenfeldtCollinsConstants(fc: number, elasticModulus: number):
 export function validateThorenfeldtCollinsParameters(p: ThorenfeldtCollinsParameters, path = ''): Diagnostic[] {
   const out: Diagnostic[] = [];
   const ok = [
-    checkField(out, fieldPath(path, 'compressiveStrength'), 'Thorenfeldt–Collins: compressive strength (n = 0.8 + f′c/17 must exceed 1)', p.compressiveStrength, { min: 3.4, exclusiveMin: true, unit: 'MPa' }),
-    checkField(out, fieldPath(path, 'elasticModulus'), 'Thorenfeldt–Collins: elastic modulus Ec', p.elasticModulus, { min: 0, exclusiveMin: true, unit: 'MPa' }),
+    checkField(out, fieldPath(path, 'compressiveStrength'), 'Thorenfeldt–Collins: compressive strength (n = 0.8 + f′c/17 must exceed 1)', p.compressiveStrength, { min: 3.4, exclusiveMin: true, quantity: 'concreteStress' }),
+    checkField(out, fieldPath(path, 'elasticModulus'), 'Thorenfeldt–Collins: elastic modulus Ec', p.elasticModulus, { min: 0, exclusiveMin: true, quantity: 'modulus' }),
     checkField(out, fieldPath(path, 'crushingStrain'), 'Thorenfeldt–Collins: crushing strain εcu', p.crushingStrain, { min: 0, exclusiveMin: true, max: 0.02 }),
   ].every(Boolean);
   if (!ok) return out;

@@ -27,7 +27,7 @@ export function frpDesignRuptureStrain(p: LinearFrpParameters): number {
 /** Checks Ef (10–700 GPa), ε*fu (0.002–0.05) and CE (0 < CE ≤ 1); paths are `path.<parameter name>`. */
 export function validateLinearFrpParameters(p: LinearFrpParameters, path = ''): Diagnostic[] {
   const out: Diagnostic[] = [];
-  checkField(out, fieldPath(path, 'tensileModulus'), 'FRP tensile modulus Ef', p.tensileModulus, { min: 10_000, max: 700_000, unit: 'MPa' });
+  checkField(out, fieldPath(path, 'tensileModulus'), 'FRP tensile modulus Ef', p.tensileModulus, { min: 10_000, max: 700_000, quantity: 'modulus' });
   checkField(out, fieldPath(path, 'ruptureStrain'), 'FRP rupture strain ε*fu', p.ruptureStrain, { min: 0.002, max: 0.05 });
   checkField(out, fieldPath(path, 'environmentalFactor'), 'environmental reduction factor CE', p.environmentalFactor, { min: 0, exclusiveMin: true, max: 1 });
   return out;

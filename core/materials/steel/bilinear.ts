@@ -1,6 +1,7 @@
-import { throwIfErrors, type Diagnostic } from '../../diagnostics.ts';
+import { diagnostic, throwIfErrors, type Diagnostic } from '../../diagnostics.ts';
+import { phrase, q } from '../../units/phrase.ts';
 import type { SteelMaterial } from '../types.ts';
-import { checkField, fieldPath, show } from '../checks.ts';
+import { checkField, fieldPath } from '../checks.ts';
 import { symmetricSteel, validateSteelParameters, type SteelParameters } from './symmetric-steel.ts';
 
 /** Inputs of bilinearSteel (MPa, strains dimensionless). */
@@ -27,13 +28,14 @@ function resolve(p: BilinearSteelParameters): { hardeningStrain: number; hardeni
 export function validateBilinearSteelParameters(p: BilinearSteelParameters, path = ''): Diagnostic[] {
   const out = validateSteelParameters(p, 'bilinear steel', path);
   if (p.hardeningModulus !== undefined) {
-    if (!checkField(out, fieldPath(path, 'hardeningModulus'), 'bilinear steel: hardening modulus Esh', p.hardeningModulus, { min: 0, max: p.elasticModulus, unit: 'MPa' })) return out;
+    if (!checkField(out, fieldPath(path, 'hardeningModulus'), 'bilinear steel: hardening modulus Esh', p.hardeningModulus, { min: 0, max: p.elasticModulus, quantity: 'modulus' })) return out;
   }
   if (out.length > 0) return out;
   const r = resolve(p);
   if (r.ultimateStress < p.ultimateStress - 1e-9) {
-    out.push({ code: 'inconsistent', path: fieldPath(path, 'hardeningModulus'), severity: 'warning',
-      message: `bilinear steel: with Esh = ${show(r.hardeningModulus)} MPa the stress at rupture is ${show(r.ultimateStress)} MPa, below fu = ${show(p.ultimateStress)} MPa; the curve ends there` });
+    const stress = (v: number) => q('stress', v, { compact: true });
+    out.push(diagnostic('inconsistent', fieldPath(path, 'hardeningModulus'), 'warning',
+      phrase`bilinear steel: with Esh = ${q('modulus', r.hardeningModulus, { compact: true })} the stress at rupture is ${stress(r.ultimateStress)}, below fu = ${stress(p.ultimateStress)}; the curve ends there`));
   }
   return out;
 }

@@ -32,7 +32,7 @@ export function manderPowerExponent(p: ManderPowerSteelParameters): number {
 export function validateManderPowerSteelParameters(p: ManderPowerSteelParameters, path = ''): Diagnostic[] {
   const out = validateSteelParameters(p, 'Mander power-law steel', path);
   if (p.hardeningModulus !== undefined) {
-    checkField(out, fieldPath(path, 'hardeningModulus'), 'Mander power-law steel: hardening modulus Esh', p.hardeningModulus, { min: 0, exclusiveMin: true, max: p.elasticModulus, unit: 'MPa' });
+    checkField(out, fieldPath(path, 'hardeningModulus'), 'Mander power-law steel: hardening modulus Esh', p.hardeningModulus, { min: 0, exclusiveMin: true, max: p.elasticModulus, quantity: 'modulus' });
   }
   if (out.length > 0 || p.ultimateStress === p.yieldStress) return out;
   const P = manderPowerExponent(p);

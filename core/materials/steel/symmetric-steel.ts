@@ -83,11 +83,11 @@ export function validateSteelParameters(
   path = '',
 ): Diagnostic[] {
   const out: Diagnostic[] = [];
-  let ok = checkField(out, fieldPath(path, 'elasticModulus'), `${model}: elastic modulus Es`, p.elasticModulus, { min: 0, exclusiveMin: true, unit: 'MPa' });
-  ok = checkField(out, fieldPath(path, 'yieldStress'), `${model}: yield stress fy`, p.yieldStress, { min: 0, exclusiveMin: true, unit: 'MPa' }) && ok;
+  let ok = checkField(out, fieldPath(path, 'elasticModulus'), `${model}: elastic modulus Es`, p.elasticModulus, { min: 0, exclusiveMin: true, quantity: 'modulus' });
+  ok = checkField(out, fieldPath(path, 'yieldStress'), `${model}: yield stress fy`, p.yieldStress, { min: 0, exclusiveMin: true, quantity: 'stress' }) && ok;
   ok = checkField(out, fieldPath(path, 'ruptureStrain'), `${model}: rupture strain εsu`, p.ruptureStrain, { min: 0, exclusiveMin: true, max: 1 }) && ok;
   if (p.ultimateStress !== undefined) {
-    ok = checkField(out, fieldPath(path, 'ultimateStress'), `${model}: ultimate stress fu`, p.ultimateStress, { min: 0, exclusiveMin: true, unit: 'MPa' }) && ok;
+    ok = checkField(out, fieldPath(path, 'ultimateStress'), `${model}: ultimate stress fu`, p.ultimateStress, { min: 0, exclusiveMin: true, quantity: 'stress' }) && ok;
   }
   if (p.hardeningStrain !== undefined) {
     ok = checkField(out, fieldPath(path, 'hardeningStrain'), `${model}: strain at the onset of hardening εsh`, p.hardeningStrain, { min: 0, max: 1 }) && ok;

@@ -3,7 +3,7 @@
  * (core/units `formatQuantity`), and pure numbers. Never shows NaN or Infinity (an em dash instead).
  */
 import { engineeringText } from '../../../core/charts/units.ts';
-import { displayUnit, formatNumber, formatQuantity, NOT_A_VALUE, toDisplay, type Quantity, type QuantityFormatOptions } from '../../../core/units/index.ts';
+import { displayUnit, formatNumber, formatQuantity, NOT_A_VALUE, say, toDisplay, type Quantity, type QuantityFormatOptions, type Text } from '../../../core/units/index.ts';
 import type { UnitSystem } from '../../../core/project/types.ts';
 import { displaySystem } from './units.ts';
 
@@ -20,6 +20,14 @@ export function quantityText(quantity: Quantity, value: number | null | undefine
     return engineeringText(shown, options.withUnit === false ? '' : displayUnit(quantity, unitSystem, options.unit).label);
   }
   return formatQuantity(quantity, value, unitSystem, options);
+}
+
+/**
+ * A sentence of the results (words, and quantities kept as data) in the project's unit system of
+ * the moment: switching units changes it without analysing again.
+ */
+export function sayText(text: Text, system: UnitSystem): string {
+  return say(text, system);
 }
 
 /** A pure number to engineering precision (3–4 significant figures); em dash when missing. */

@@ -4,7 +4,8 @@
  */
 import type { MemberKeyResults } from '../../../core/project/key-results.ts';
 import type { OverviewColumn, StatusFilter } from '../stores/workspace.ts';
-import type { MemberDefinition } from '../../../core/project/types.ts';
+import type { MemberDefinition, UnitSystem } from '../../../core/project/types.ts';
+import { say } from '../../../core/units/phrase.ts';
 
 export type RowStatus = MemberKeyResults['status'] | 'pending' | 'outdated';
 
@@ -19,7 +20,7 @@ export const STATUS_ORDER: Readonly<Record<RowStatus, number>> = { 'input-error'
 
 const collator = new Intl.Collator('en', { numeric: true, sensitivity: 'base' });
 
-export function sortValue(row: OverviewRow, column: OverviewColumn): number | string | null {
+export function sortValue(row: OverviewRow, column: OverviewColumn, units: UnitSystem = 'si'): number | string | null {
   const k = row.key;
   switch (column) {
     case 'name': return row.member.name;
@@ -33,7 +34,7 @@ export function sortValue(row: OverviewRow, column: OverviewColumn): number | st
     case 'deflection': return k?.deflection?.deflection ?? null;
     case 'utilisation': return k?.deflection?.utilisation ?? null;
     case 'strength': return k?.strengthUtilisation ?? null;
-    case 'governing': return k?.governingMode ?? null;
+    case 'governing': return k ? say(k.governingMode, units) : null;
     case 'status': return STATUS_ORDER[row.status];
   }
 }
@@ -42,9 +43,9 @@ export function sortValue(row: OverviewRow, column: OverviewColumn): number | st
  * Rows sorted by a column: text in natural order (B-2 before B-10), numbers by value; rows
  * without a value always last, whatever the direction; ties keep the project order.
  */
-export function sortRows(list: readonly OverviewRow[], column: OverviewColumn, descending: boolean): OverviewRow[] {
+export function sortRows(list: readonly OverviewRow[], column: OverviewColumn, descending: boolean, units: UnitSystem = 'si'): OverviewRow[] {
   return list
-    .map((row, index) => ({ row, index, value: sortValue(row, column) }))
+    .map((row, index) => ({ row, index, value: sortValue(row, column, units) }))
     .sort((a, b) => {
       if (a.value === null || b.value === null) return a.value === b.value ? a.index - b.index : a.value === null ? 1 : -1;
       const order = typeof a.value === 'string' ? collator.compare(a.value, String(b.value)) : a.value - (b.value as number);
@@ -54,13 +55,13 @@ export function sortRows(list: readonly OverviewRow[], column: OverviewColumn, d
 }
 
 /** Rows whose status matches and whose mark, governing mode or notes contain the text (any case). */
-export function filterRows(list: readonly OverviewRow[], text: string, status: StatusFilter): OverviewRow[] {
+export function filterRows(list: readonly OverviewRow[], text: string, status: StatusFilter, units: UnitSystem = 'si'): OverviewRow[] {
   const needle = text.trim().toLowerCase();
   return list.filter((row) => {
     if (status !== 'all' && !(status === 'pending' ? row.status === 'pending' || row.status === 'outdated' : row.status === status)) return false;
     if (needle === '') return true;
     return row.member.name.toLowerCase().includes(needle)
-      || (row.key?.governingMode.toLowerCase().includes(needle) ?? false)
+      || (row.key ? say(row.key.governingMode, units).toLowerCase().includes(needle) : false)
       || (row.member.notes?.toLowerCase().includes(needle) ?? false);
   });
 }

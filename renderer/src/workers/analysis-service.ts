@@ -13,8 +13,8 @@ import type { SectionResult } from '../../../core/member/results.ts';
 import type { Diagnostic } from '../../../core/diagnostics.ts';
 import { InputError } from '../../../core/diagnostics.ts';
 import { memberKeyResults } from '../../../core/project/key-results.ts';
-import { displayMessage, parseProject, resultsSummaryCsv, serializeProject, validateProjectData } from '../../../core/project/index.ts';
-import type { UnitSystem } from '../../../core/project/types.ts';
+import { parseProject, resultsSummaryCsv, serializeProject, validateProjectData } from '../../../core/project/index.ts';
+import { mapWords, type Text } from '../../../core/units/phrase.ts';
 import { materialLibrary } from '../../../core/materials/library.ts';
 import type { Project } from '../../../core/project/types.ts';
 import { buildSectionModel } from '../../../core/section/build.ts';
@@ -38,18 +38,18 @@ function messageOf(error: unknown): string {
 }
 
 /**
- * The member result with every item path written for the whole project, and the values in its
- * input errors in the project's display units (core's `displayMessage`, as validation does).
+ * The member result with every item path written for the whole project. Its sentences keep their
+ * quantities as data: the views say them in the units of the moment (core/units/phrase.ts).
  */
-function remapResult(result: MemberResult, map: IndexMap | null, system: UnitSystem): MemberResult {
-  const errors = result.errors.map((e) => ({ path: remapPaths(e.path, map), message: remapPaths(displayMessage(e.message, e.path, system), map) }));
-  if (!map) return { ...result, errors };
+function remapResult(result: MemberResult, map: IndexMap | null): MemberResult {
+  if (!map) return result;
+  const words = (text: Text) => mapWords(text, (w) => remapPaths(w, map));
   return {
     ...result,
-    governingMode: remapPaths(result.governingMode, map),
-    warnings: result.warnings.map((w) => remapPaths(w, map)),
-    errors,
-    sections: result.sections.map((s) => ({ ...s, warnings: s.warnings.map((w) => remapPaths(w, map)) })),
+    governingMode: words(result.governingMode),
+    warnings: result.warnings.map(words),
+    errors: result.errors.map((e) => ({ path: remapPaths(e.path, map), message: words(e.message) })),
+    sections: result.sections.map((s) => ({ ...s, warnings: s.warnings.map(words) })),
     loadDeflection: { ...result.loadDeflection, status: remapPaths(result.loadDeflection.status, map) },
   };
 }
@@ -116,7 +116,7 @@ export function createAnalysisService(post: (reply: WorkerReply) => void): Analy
       const part = ids.slice(start, start + size);
       const results = analyzeMembers(project, part, undefined, sections);
       for (const raw of results) {
-        const result = remapResult(raw, indexMap, project.info.unitSystem);
+        const result = remapResult(raw, indexMap);
         const definition = project.members.find((m) => m.id === result.memberId);
         const key = memberKeyResults(result, definition);
         if (!details.has(result.memberId)) post({ type: 'member', id: request.id, memberId: result.memberId, key, detail: null });

@@ -7,6 +7,7 @@ import { analyzeProject } from '../../../core/analysis.ts';
 import { demoProjectSI } from '../../../core/project/demo.ts';
 import { serializeProject } from '../../../core/project/file.ts';
 import { reportFormatter } from '../../../core/report/format.ts';
+import { say } from '../../../core/units/phrase.ts';
 import { CAUTION_TEXT } from '../../../core/report/layout.ts';
 import { projectHash, renderReportBuffer, writeReport } from '../../../app/report/write-report.ts';
 import { reportTestProject } from '../../core/report/fixtures.ts';
@@ -38,7 +39,7 @@ describe('PDF report (pdfmake in Node)', () => {
   it('prints the key numbers of the analysis as the results hold them', () => {
     const f = reportFormatter('si');
     for (const m of results.members.filter((r) => r.status !== 'input-error')) {
-      expect(text.all).toContain(words(m.governingMode));
+      expect(text.all).toContain(words(say(m.governingMode, 'si')));
       expect(text.all).toContain(`Member ${m.memberName}`);
       expect(text.all).toContain(f.deflection(m.ductility.ultimateDeflection));
       expect(text.all).toContain(f.moment(m.strength!.saggingDemand));
@@ -79,7 +80,7 @@ describe('PDF report (pdfmake in Node)', () => {
     const t = await pdfText(png);
     expect(t.pages.length).toBe(text.pages.length);
     expect(png.toString('latin1')).toMatch(/\/Subtype \/Image/);
-    expect(t.all).toContain(words(results.members[0]!.governingMode));
+    expect(t.all).toContain(words(say(results.members[0]!.governingMode, 'si')));
   }, 60_000);
 
   it('refuses a report date that is not a date', async () => {

@@ -3,6 +3,7 @@
  * and the flexure- or shear-governed verdict. Statics are checked against handbook beam formulas.
  */
 import { describe, expect, it } from 'vitest';
+import { say } from '../../../core/units/phrase.ts';
 import { analyzeProject, sectionCache } from '../../../core/analysis.ts';
 import { elasticSupportMoments } from '../../../core/assessment/demand.ts';
 import { memberShear } from '../../../core/assessment/shear.ts';
@@ -74,7 +75,7 @@ describe('shear at the flexural mechanism', () => {
     expect(r.mechanism!.governing.shear / (lambda * w * (L / 2 - 540))).toBeCloseTo(1, 4);
     expect(r.governs).toBe('flexure');
     expect(r.flexuralDuctilityAvailable).toBe(true);
-    expect(r.criticalSectionRule).toMatch(/9\.4\.3\.2/);
+    expect(say(r.criticalSectionRule, 'si')).toMatch(/9\.4\.3\.2/);
   });
 
   it('fixed–fixed: λ·wL²/8 = Mo+ + Mo−, equal end moments leave V = λ·w·(L/2 − x)', () => {
@@ -118,15 +119,15 @@ describe('shear at the flexural mechanism', () => {
   it('a point load within d of a support: the support face is checked', () => {
     const m = member('S', 'simply-supported', L, 'r1', { loads: [{ kind: 'point', loadCase: 'live', magnitude: 80_000, position: 300 }, { kind: 'uniform', loadCase: 'superimposed', magnitude: 8 }] });
     const r = memberShear({ code: 'ACI 318-19', member: m, zones: zonesOf(project, m), ...aci });
-    expect(r.criticalSectionRule).toMatch(/point load lies within d/);
+    expect(say(r.criticalSectionRule, 'si')).toMatch(/point load lies within d/);
     expect(r.factored!.governing.position).toBeLessThan(540);
   });
 
   it('warns when the main tension steel has no strain hardening (the mechanism shear then has no overstrength margin)', () => {
     const m = member('S', 'simply-supported', L, 'r1');
-    expect(memberShear({ code: 'ACI 318-19', member: m, zones: zonesOf(project, m), ...aci }).warnings.join(' ')).not.toMatch(/no strain hardening/);
+    expect(memberShear({ code: 'ACI 318-19', member: m, zones: zonesOf(project, m), ...aci }).warnings.map((w) => say(w, 'si')).join(' ')).not.toMatch(/no strain hardening/);
     const flat = { ...project, materials: project.materials.map((x) => (x.id === 'b500' ? { ...x, model: 'elastic-plastic' as const, ultimateStress: 500 } : x)) };
-    expect(memberShear({ code: 'ACI 318-19', member: m, zones: zonesOf(flat, m), ...aci }).warnings.join(' ')).toMatch(/no strain hardening/);
+    expect(memberShear({ code: 'ACI 318-19', member: m, zones: zonesOf(flat, m), ...aci }).warnings.map((w) => say(w, 'si')).join(' ')).toMatch(/no strain hardening/);
   });
 
   it('no live load under a live-only pattern: the failure mode is not determined, and says why', () => {
@@ -134,7 +135,7 @@ describe('shear at the flexural mechanism', () => {
     const r = memberShear({ code: 'ACI 318-19', member: m, zones: zonesOf(project, m), ...aci });
     expect(r.governs).toBe('undetermined');
     expect(r.mechanism).toBeNull();
-    expect(r.sentence).toMatch(/no load pattern to scale/);
+    expect(say(r.sentence, 'si')).toMatch(/no load pattern to scale/);
   });
 });
 
@@ -158,13 +159,13 @@ describe('flexure-governed or shear-governed, in the member result', () => {
     expect(sg.shear!.flexuralDuctilityAvailable).toBe(false);
     expect(sg.shear!.mechanism!.nominalRatio).toBeGreaterThan(1);
     expect(sg.shear!.shearFailureLoadFactor!).toBeLessThan(sg.shear!.mechanism!.loadFactor);
-    expect(sg.governingMode).toMatch(/^Shear governs \(brittle\)/);
-    expect(sg.governingMode).toMatch(/not available/);
-    expect(sg.warnings.join(' ')).toMatch(/not available/);
+    expect(say(sg.governingMode, 'si')).toMatch(/^Shear governs \(brittle\)/);
+    expect(say(sg.governingMode, 'si')).toMatch(/not available/);
+    expect(sg.warnings.map((w) => say(w, 'si')).join(' ')).toMatch(/not available/);
     expect(sg.ductility.hinges.length).toBeGreaterThan(0); // kept for reference
     const fg = results.members[1]!;
     expect(fg.shear!.governs).toBe('flexure');
-    expect(fg.governingMode).toMatch(/shear: flexure governs/);
+    expect(say(fg.governingMode, 'si')).toMatch(/shear: flexure governs/);
   });
 
   it('every number of the shear result is finite (no NaN or Infinity reaches a user)', () => {
@@ -181,6 +182,6 @@ describe('flexure-governed or shear-governed, in the member result', () => {
     const results = analyzeProject(heavyProject('EN 1992-1-1'));
     const cap = results.members[1]!.shear!.capacities[0]!;
     expect(cap.supportLimit!.design).toBeCloseTo(0.5 * cap.webWidth * cap.effectiveDepth * 0.6 * (1 - 30 / 250) * 20, 6);
-    expect(results.members[1]!.shear!.criticalSectionRule).toMatch(/Eq\. 6\.5/);
+    expect(say(results.members[1]!.shear!.criticalSectionRule, 'si')).toMatch(/Eq\. 6\.5/);
   });
 });

@@ -2,6 +2,7 @@
  * Member analysis end to end: bad input, independence of members, refinement, finite numbers.
  */
 import { describe, expect, it } from 'vitest';
+import { say } from '../../../core/units/phrase.ts';
 import { analyzeProject } from '../../../core/analysis.ts';
 import { validateMember } from '../../../core/member/validate.ts';
 import { member, smallProject } from '../../fixtures/projects.ts';
@@ -23,18 +24,18 @@ describe('bad member input', () => {
   it('a span of zero or less names the member, the field and the value', () => {
     const d = messages({ span: -2000 });
     expect(d[0]!.path).toBe('members[3] "B-12".span');
-    expect(d[0]!.message).toMatch(/greater than 0.*got -2000 mm/);
+    expect(say(d[0]!.message, 'si')).toMatch(/greater than 0 m.*got -2 m/);
   });
   it('zones that leave a gap, overlap, or stop short of the span', () => {
-    expect(messages({ zones: [{ from: 0, to: 2000, sectionId: 'r1' }, { from: 2500, to: 6000, sectionId: 'r1' }] })[0]!.message).toMatch(/gap from 2 m to 2\.5 m/);
-    expect(messages({ zones: [{ from: 0, to: 3000, sectionId: 'r1' }, { from: 2500, to: 6000, sectionId: 'r1' }] })[0]!.message).toMatch(/overlaps/);
-    expect(messages({ zones: [{ from: 0, to: 5000, sectionId: 'r1' }] })[0]!.message).toMatch(/must end at the span, 6 m/);
+    expect(say(messages({ zones: [{ from: 0, to: 2000, sectionId: 'r1' }, { from: 2500, to: 6000, sectionId: 'r1' }] })[0]!.message, 'si')).toMatch(/gap from 2 m to 2\.5 m/);
+    expect(say(messages({ zones: [{ from: 0, to: 3000, sectionId: 'r1' }, { from: 2500, to: 6000, sectionId: 'r1' }] })[0]!.message, 'si')).toMatch(/overlaps/);
+    expect(say(messages({ zones: [{ from: 0, to: 5000, sectionId: 'r1' }] })[0]!.message, 'si')).toMatch(/must end at the span, 6 m/);
     expect(messages({ zones: [{ from: 0, to: 6000, sectionId: 'nope' }] })[0]!.code).toBe('unknown-reference');
   });
   it('loads with NaN or outside the span', () => {
     const d = messages({ loads: [{ kind: 'uniform', loadCase: 'live', magnitude: Number.NaN }, { kind: 'point', loadCase: 'dead', magnitude: 1000, position: 6500 }] });
     expect(d.map((x) => x.path)).toEqual(['members[3] "B-12".loads[0].magnitude', 'members[3] "B-12".loads[1].position']);
-    expect(d[1]!.message).toMatch(/must lie on the span \(0 to 6 m\), got 6\.5 m/);
+    expect(say(d[1]!.message, 'si')).toMatch(/must lie on the span \(0 to 6 m\), got 6\.5 m/);
   });
   it('an invalid member is reported as an input error with no numbers, and the other members are still analysed', () => {
     const project = smallProject('ACI 318-19', [member('BAD', 'simply-supported', 0, 'r1'), member('GOOD', 'simply-supported', 6000, 'r1')]);
@@ -66,7 +67,7 @@ describe('results are complete and finite for every support type and both code b
     it(`${code}: no NaN or Infinity anywhere, a governing sentence and an ultimate for each member`, () => {
       for (const r of results) {
         expect(allFinite(r)).toEqual([]);
-        expect(r.governingMode.length).toBeGreaterThan(20);
+        expect(say(r.governingMode, 'si').length).toBeGreaterThan(20);
         expect(r.loadDeflection.events.some((e) => e.kind === 'ultimate')).toBe(true);
         expect(r.status === 'ok' || r.status === 'check-fails').toBe(true);
       }

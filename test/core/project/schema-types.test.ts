@@ -8,8 +8,7 @@
 import { describe, expect, it } from 'vitest';
 import type { ConcreteSpec } from '../../../core/materials/specs.ts';
 import type { BeamDefinition, ServiceSettings } from '../../../core/member/definition.ts';
-import type { concreteSpecSchema, serviceSettingsSchema} from '../../../core/project/schema.ts';
-import { memberDefinitionSchema, type SchemaHasFieldsOf } from '../../../core/project/schema.ts';
+import { memberDefinitionSchema, type concreteSpecSchema, type SchemaHasFieldsOf, type serviceSettingsSchema } from '../../../core/project/schema.ts';
 import type { MemberDefinition } from '../../../core/project/types.ts';
 
 // A member type with one field more than the schema has must not pass the check.

@@ -1,7 +1,8 @@
 /* eslint-disable @typescript-eslint/no-explicit-any -- the tests edit project JSON freely to build malformed files */
 import { describe, expect, it } from 'vitest';
 import type { Diagnostic } from '../../../core/diagnostics.ts';
-import { analysisBlockers, displayMessage, formatDiagnostic, hasErrors, sortDiagnostics, validateProject, validateProjectData } from '../../../core/project/validate.ts';
+import { analysisBlockers, formatDiagnostic, hasErrors, sortDiagnostics, validateProject, validateProjectData } from '../../../core/project/validate.ts';
+import { checkNumber, diagnosticText, type AllowedRange } from '../../../core/diagnostics.ts';
 import { demoProject, demoProjectSI } from '../../../core/project/demo.ts';
 import type { Project } from '../../../core/project/types.ts';
 import { member, smallProject } from '../../fixtures/projects.ts';
@@ -235,31 +236,45 @@ describe('project-level checks', () => {
   });
 });
 
-describe('displayMessage', () => {
-  it('converts a range of spans and leaves counts alone', () => {
-    expect(displayMessage('must be at most 60000 mm, got 70000 mm', 'members[0] "A".span', 'us')).toBe('must be at most 196.9 ft, got 229.7 ft');
-    expect(displayMessage('2 × 300 mm', 'sections[0] "S".shape.width', 'us')).toBe('2 × 11.81 in');
+describe('diagnostics carry their quantities as data and are said in the display units', () => {
+  const said = (range: AllowedRange, value: number, units: 'si' | 'us') => {
+    const out: Diagnostic[] = [];
+    checkNumber(out, 'x', value, range);
+    return diagnosticText(out[0]!, units);
+  };
+
+  it('says a span in m or ft and a section dimension in mm or in (1 ft = 304.8 mm exactly, NIST SP 811)', () => {
+    expect(said({ min: 0, max: 60000, quantity: 'spanLength' }, 70000, 'us')).toBe('must be at least 0 ft and at most 196.9 ft, got 229.7 ft');
+    expect(said({ min: 0, max: 60000, quantity: 'spanLength' }, 70000, 'si')).toBe('must be at least 0 m and at most 60 m, got 70 m');
+    expect(said({ min: 12.5, max: 587.5, quantity: 'sectionLength' }, 600, 'us')).toBe('must be at least 0.4921 in and at most 23.13 in, got 23.62 in');
   });
 
-  it('converts "A to B unit" and "(A + B mm)" groups', () => {
-    expect(displayMessage('allowed 12.5 to 587.5 mm', 'sections[0].bars[0].depth', 'us')).toBe('allowed 0.4921 to 23.13 in');
-    expect(displayMessage('thicknesses (100 + 150 mm)', 'sections[0].shape.topThickness', 'us')).toBe('thicknesses (3.937 + 5.906 in)');
-  });
-
-  it('gives steel stresses in ksi and moduli in ksi, concrete stresses in psi (1 ksi = 6.894 757 MPa)', () => {
-    const kinds = new Map([['0', 'concrete'], ['1', 'steel']]);
-    expect(displayMessage('got 500 MPa', 'materials[1] "s".yieldStress', 'us', kinds)).toBe('got 72.52 ksi');
-    expect(displayMessage('got 200000 MPa', 'materials[1] "s".elasticModulus', 'us', kinds)).toBe('got 29010 ksi');
-    expect(displayMessage('got 30 MPa', 'materials[0] "c".strength', 'us', kinds)).toBe('got 4351 psi');
+  it('gives steel stresses and moduli in ksi, concrete stresses in psi (1 ksi = 6.894 757 MPa)', () => {
+    expect(said({ min: 200, max: 1000, quantity: 'stress' }, 1100, 'us')).toBe('must be at least 29.01 ksi and at most 145 ksi, got 159.5 ksi');
+    expect(said({ min: 100_000, max: 250_000, quantity: 'modulus' }, 300_000, 'us')).toBe('must be at least 14500 ksi and at most 36260 ksi, got 43510 ksi');
+    expect(said({ min: 10, max: 120, quantity: 'concreteStress' }, 150, 'us')).toBe('must be at least 1450 psi and at most 17400 psi, got 21760 psi');
   });
 
   it('gives line loads in kip/ft and forces in kip (1 kip/ft = 14.593 903 N/mm; 1 kip = 4448.222 N)', () => {
-    expect(displayMessage('got 14.593903 N/mm', 'members[0].loads[0].magnitude', 'us')).toBe('got 1 kip/ft');
-    expect(displayMessage('at most 1000000000 N', 'members[0].loads[0].magnitude', 'us')).toBe('at most 224800 kip');
+    expect(said({ min: -1e4, max: 1e4, quantity: 'lineLoad' }, 2e4, 'us')).toBe('must be at least -685.2 kip/ft and at most 685.2 kip/ft, got 1370 kip/ft');
+    expect(said({ min: -1e9, max: 1e9, quantity: 'force' }, 2e9, 'us')).toBe('must be at least -224800 kip and at most 224800 kip, got 449600 kip');
   });
 
-  it('leaves text without units unchanged', () => {
-    expect(displayMessage('must be one of a, b; got 3', 'members[0].x', 'us')).toBe('must be one of a, b; got 3');
+  it('leaves counts and units that are the same in both systems alone', () => {
+    expect(said({ min: 1, max: 100 }, 101, 'us')).toBe('must be at least 1 and at most 100, got 101');
+    expect(said({ min: 0, max: 1200, unit: 'months' }, 1300, 'us')).toBe('must be at least 0 months and at most 1200 months, got 1300 months');
+  });
+
+  it('validates a US project with its messages in US units, and the same project in SI with SI units', () => {
+    const us = editable('us');
+    us.members[0].span = 70000;
+    us.materials[2].yieldStress = 1100;
+    const m = (p: unknown, path: string) => validateProjectData(p).diagnostics.find((d) => d.path === path)!.message;
+    expect(m(us, 'members[0] "A".span')).toBe('must be greater than 0 ft and at most 196.9 ft, got 229.7 ft');
+    expect(m(us, 'materials[2] "b500".yieldStress')).toBe('steel yield stress fy must be at least 29.01 ksi and at most 145 ksi, got 159.5 ksi');
+    const si = { ...us, info: { ...us.info, unitSystem: 'si' } };
+    expect(m(si, 'members[0] "A".span')).toBe('must be greater than 0 m and at most 60 m, got 70 m');
+    expect(m(si, 'materials[2] "b500".yieldStress')).toBe('steel yield stress fy must be at least 200 MPa and at most 1000 MPa, got 1100 MPa');
   });
 });
 

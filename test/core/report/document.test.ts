@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { say } from '../../../core/units/phrase.ts';
 import { analyzeProject } from '../../../core/analysis.ts';
 import { buildReportDocument } from '../../../core/report/document.ts';
 import { planReport, reportCharts } from '../../../core/report/figures.ts';
@@ -42,14 +43,14 @@ describe('report document', () => {
   it('prints key results of each member as the results hold them, formatted in the project units', () => {
     const f = reportFormatter('si');
     for (const m of results.members.filter((r) => r.status !== 'input-error')) {
-      expect(joined).toContain(m.governingMode);
+      expect(joined).toContain(say(m.governingMode, 'si'));
       expect(all).toContain(f.fixed(m.strength!.utilisation, 2));
       for (const c of m.service!.checks) {
         expect(all).toContain(f.deflection(c.byIntegration));
         expect(all).toContain(f.deflection(c.byCode));
       }
       expect(all).toContain(f.deflection(m.ductility.ultimateDeflection));
-      for (const h of m.ductility.hinges) expect(joined).toContain(h.lengthFormula);
+      for (const h of m.ductility.hinges) expect(joined).toContain(say(h.lengthFormula, 'si'));
     }
     const section = results.members[0]!.sections[0]!;
     expect(all).toContain(f.moment(section.sagging!.keyPoints.firstYield!.moment));
@@ -62,7 +63,7 @@ describe('report document', () => {
     expect(checked.length).toBeGreaterThan(0);
     for (const m of checked) {
       expect(all).toContain(f.fixed(m.shear!.factored!.utilisation, 2));
-      expect(all).toContain(m.shear!.sentence);
+      expect(all).toContain(say(m.shear!.sentence, 'si'));
     }
     expect(joined).toContain('Flexure and shear only: torsion');
     expect(joined).not.toContain('Flexure only: shear');
@@ -72,7 +73,7 @@ describe('report document', () => {
     const x = results.members.find((m) => m.memberId === 'X-1')!;
     expect(x.status).toBe('input-error');
     expect(all).toContain('INPUT ERROR');
-    for (const e of x.errors) expect(joined).toContain(`${e.path}: ${e.message}`);
+    for (const e of x.errors) expect(joined).toContain(`${e.path}: ${say(e.message, 'si')}`);
   });
 
   it('lists every cited source once, numbered, with every marker pointing at an entry', () => {

@@ -2,6 +2,7 @@
  * The member analysis with shear, the as-found condition and strengthening schemes, through the
  * project entry point (core/analysis.ts).
  */
+import { say } from '../../../core/units/phrase.ts';
 import { describe, expect, it } from 'vitest';
 import { analyzeProject } from '../../../core/analysis.ts';
 import { shapeHeight } from '../../../core/section/build.ts';
@@ -15,8 +16,8 @@ describe('a member without retrofit data', () => {
     const r = analyse();
     expect(r.shear!.capacities.length).toBeGreaterThan(0);
     expect(r.retrofit).toBeUndefined();
-    expect(r.governingMode).toMatch(/; shear: flexure governs/);
-    expect(r.governingMode.match(/\./g)!.length).toBeGreaterThan(0);
+    expect(say(r.governingMode, 'si')).toMatch(/; shear: flexure governs/);
+    expect(say(r.governingMode, 'si').match(/\./g)!.length).toBeGreaterThan(0);
   });
 });
 
@@ -27,7 +28,7 @@ describe('as found, with three schemes', () => {
   it('the main result is the as-found beam (derived section ids), with the design beam beside it', () => {
     expect(rf.basis).toBe('as-found');
     expect(r.sections.map((s) => s.sectionId)).toEqual(['r1~B1~as-found']);
-    expect(r.governingMode).toMatch(/^As found: /);
+    expect(say(r.governingMode, 'si')).toMatch(/^As found: /);
     expect(rf.original!.key).toBe('original');
     expect(rf.original!.sections[0]!.sectionId).toBe('r1');
     expect(rf.asFound!.variant!.key).toBe('as-found');
@@ -48,7 +49,7 @@ describe('as found, with three schemes', () => {
     for (const v of [rf.original!, rf.asFound!.variant!, ...rf.schemes.map((s) => s.variant!)]) {
       expect(v.sections[0]!.curves[0]!.points.length).toBeGreaterThan(10);
       expect(v.loadDeflection.points.length).toBeGreaterThan(10);
-      expect(v.governingMode.length).toBeGreaterThan(20);
+      expect(say(v.governingMode, 'si').length).toBeGreaterThan(20);
     }
   });
 
@@ -74,13 +75,13 @@ describe('as found, with three schemes', () => {
     expect(critical.designGainPercent!).toBeGreaterThan(5);
     expect(c.memberCapacity.gainPercent!).toBeGreaterThan(5);
     expect(c.curvatureDuctility.changePercent!).toBeLessThan(-2);
-    expect(c.statement).toMatch(/lowers the ductility/);
+    expect(say(c.statement, 'si')).toMatch(/lowers the ductility/);
     expect(c.hingeRotation.scheme!).toBeLessThan(c.hingeRotation.reference!);
   });
 
   it('the design resistance of the FRP section takes ψf = 0.85 off the FRP\'s part', () => {
     const curve = rf.schemes[0]!.variant!.sections[0]!.curves.find((k) => k.direction === 'sagging')!;
-    expect(curve.designResistanceNote).toMatch(/ψf/);
+    expect(say(curve.designResistanceNote, 'si')).toMatch(/ψf/);
   });
 
   it('the ACI 440.2R-17 9.2 check uses the as-found member under 1.1 SD + 0.75 LL, for bonded schemes only', () => {
@@ -153,7 +154,7 @@ describe('options', () => {
     const r = analyse('EN 1992-1-1', { asFound: { cores: [{ meanStrength: 35, count: 6, coefficientOfVariation: 0.1 }] }, schemes: [FRP_SCHEME] });
     expect(r.retrofit!.asFound!.concrete[0]!.inPlace.strength).toBeCloseTo(27.37, 10);
     expect(r.retrofit!.asFound!.concrete[0]!.inPlace.method).toMatch(/EN 1990/);
-    expect(r.retrofit!.schemes[0]!.variant!.sections[0]!.curves[0]!.designResistanceNote).toMatch(/M_Rd/);
+    expect(say(r.retrofit!.schemes[0]!.variant!.sections[0]!.curves[0]!.designResistanceNote, 'si')).toMatch(/M_Rd/);
     expect(plainAndFinite(r.retrofit)).toEqual([]);
   });
 });

@@ -3,6 +3,7 @@
  * section definitions the engine then analyses unchanged.
  */
 import { describe, expect, it } from 'vitest';
+import { say } from '../../../core/units/phrase.ts';
 import { deriveAsFound } from '../../../core/retrofit/as-found.ts';
 import { corrodedRuptureStrainFactor } from '../../../core/retrofit/corrosion.ts';
 import { aciCoreToleranceFactor } from '../../../core/retrofit/in-place-strength.ts';
@@ -26,7 +27,7 @@ describe('tested strengths', () => {
     const section = d.sections.get('r1')!;
     expect(section.id).toBe('r1~B1~as-found');
     expect(section.definition.concreteId).toBe('c30~B1~as-found');
-    expect(d.summary.concrete[0]!.inPlace.formula).toMatch(/f′c,eq/);
+    expect(say(d.summary.concrete[0]!.inPlace.formula, 'si')).toMatch(/f′c,eq/);
     // 27 → 20.1 MPa: more than 25 % below the specified 30 MPa, which is said
     expect(d.diagnostics.some((x) => x.severity === 'warning' && /below the specified/.test(x.message))).toBe(true);
   });
@@ -60,7 +61,7 @@ describe('corrosion section loss', () => {
     const steel = d.materials.find((m) => m.id === layer.steelId) as SteelSpec;
     expect(steel.ruptureStrain).toBeCloseTo(0.1 * corrodedRuptureStrainFactor(0.15), 12);
     expect(d.sections.get('r1')!.definition.bars[1]!.diameter).toBe(16); // other layers untouched
-    expect(d.summary.defects[0]!.effect).toMatch(/942 → 801 mm²/);
+    expect(say(d.summary.defects[0]!.effect, 'si')).toMatch(/942\.5 mm² → 801\.1 mm²/);
   });
 
   it('two defects on one layer add up (10 % + 5 % = 15 %)', () => {
@@ -119,7 +120,7 @@ describe('spalled cover', () => {
     const s = d.sections.get('r1')!;
     expect(s.definition.shape.kind).toBe('rectangle');
     expect(s.id).toBe('r1~B1~repaired');
-    expect(d.summary.defects[0]!.effect).toBe('repaired');
+    expect(say(d.summary.defects[0]!.effect, 'si')).toBe('repaired');
   });
 });
 

@@ -3,6 +3,7 @@
  * value and the allowed range, all at once, and nothing else of the member lost.
  */
 import { describe, expect, it } from 'vitest';
+import { say } from '../../../core/units/phrase.ts';
 import { analyzeProject } from '../../../core/analysis.ts';
 import type { AsFoundCondition, StrengtheningScheme } from '../../../core/retrofit/types.ts';
 import { validateAsFound, validateSchemes } from '../../../core/retrofit/validate.ts';
@@ -27,7 +28,7 @@ describe('the four cases of the issue', () => {
     const { plyThickness: _t, ...noThickness } = FRP_SCHEME;
     const r = run({ schemes: [noThickness as StrengtheningScheme] });
     const e = errorAt(r, `${P}.schemes[0].plyThickness`)!;
-    expect(e.message).toBe("must be a finite number (greater than 0 mm and at most 10 mm), got nothing");
+    expect(say(e.message, 'si')).toBe("must be a finite number (greater than 0 mm and at most 10 mm), got nothing");
     expect(r.retrofit!.schemes[0]!.variant).toBeNull();
     expect(r.retrofit!.schemes[0]!.errors[0]!.path).toBe(`${P}.schemes[0].plyThickness`);
     nothingLost(r);
@@ -35,13 +36,13 @@ describe('the four cases of the issue', () => {
 
   it('an FRP thickness of zero is refused the same way', () => {
     const r = run({ schemes: [{ ...FRP_SCHEME, plyThickness: 0 }] });
-    expect(errorAt(r, `${P}.schemes[0].plyThickness`)!.message).toMatch(/greater than 0 mm/);
+    expect(say(errorAt(r, `${P}.schemes[0].plyThickness`)!.message, 'si')).toMatch(/greater than 0 mm/);
   });
 
   it('section loss over 100 %: the error names defects[0].lossPercent, the value and 0–100 %', () => {
     const r = run({ asFound: { defects: [{ kind: 'section-loss', layer: 0, lossPercent: 120 }] } });
     const e = errorAt(r, `${P}.asFound.defects[0].lossPercent`)!;
-    expect(e.message).toBe('must be at least 0 % and at most 100 %, got 120 %');
+    expect(say(e.message, 'si')).toBe('must be at least 0 % and at most 100 %, got 120 %');
     expect(r.retrofit!.basis).toBe('design'); // the as-found beam could not be built: the design beam stands
     expect(r.retrofit!.asFound!.variant).toBeNull();
     nothingLost(r);
@@ -50,14 +51,14 @@ describe('the four cases of the issue', () => {
   it('losses on one layer adding up to more than 100 % are refused, naming both defects', () => {
     const r = run({ asFound: { defects: [{ kind: 'section-loss', layer: 0, lossPercent: 60 }, { kind: 'section-loss', layer: 0, lossPercent: 50 }] } });
     const e = errorAt(r, `${P}.asFound.defects[1].lossPercent`)!;
-    expect(e.message).toMatch(/defects\[0\] and defects\[1\] add up to 110\.0 %/);
+    expect(say(e.message, 'si')).toMatch(/defects\[0\] and defects\[1\] add up to 110\.0 %/);
   });
 
   it('a core set with one sample: at least 3 cores, with the reason', () => {
     const r = run({ asFound: { cores: [{ meanStrength: 28, count: 1, coefficientOfVariation: 0.1 }] } });
     const e = errorAt(r, `${P}.asFound.cores[0].count`)!;
-    expect(e.message).toMatch(/must be at least 3 cores, got 1/);
-    expect(e.message).toMatch(/standard deviation/);
+    expect(say(e.message, 'si')).toMatch(/must be at least 3 cores, got 1/);
+    expect(say(e.message, 'si')).toMatch(/standard deviation/);
     nothingLost(r);
   });
 
@@ -65,8 +66,8 @@ describe('the four cases of the issue', () => {
     const heavy = { loads: [{ kind: 'uniform' as const, loadCase: 'superimposed' as const, magnitude: 8 }, { kind: 'uniform' as const, loadCase: 'live' as const, magnitude: 40 }] };
     const r = run({ ...heavy, schemes: [{ ...FRP_SCHEME, installation: { dead: 2, superimposed: 2, live: 2 } }, OVERLAY_SCHEME] });
     const e = errorAt(r, `${P}.schemes[0].installation`)!;
-    expect(e.message).toMatch(/exceeds the capacity of the unstrengthened section/);
-    expect(e.message).toMatch(/prop or unload/);
+    expect(say(e.message, 'si')).toMatch(/exceeds the capacity of the unstrengthened section/);
+    expect(say(e.message, 'si')).toMatch(/prop or unload/);
     expect(r.retrofit!.schemes[0]!.variant).toBeNull();
     expect(r.retrofit!.schemes[1]!.variant).not.toBeNull();
     nothingLost(r);
@@ -103,15 +104,15 @@ describe('validation of each field', () => {
   it('NaN and Infinity are refused with the allowed range', () => {
     const d = found({ cores: [{ meanStrength: Number.NaN, count: 4, coefficientOfVariation: Infinity }], defects: [{ kind: 'cover-loss', face: 'left', depth: -Infinity }] });
     expect(d.map((x) => x.path)).toEqual(['a.cores[0].meanStrength', 'a.cores[0].coefficientOfVariation', 'a.defects[0].depth']);
-    expect(d[0]!.message).toMatch(/finite number \(at least 5 MPa and at most 150 MPa\), got NaN/);
-    expect(d[1]!.message).toMatch(/got Infinity/);
+    expect(say(d[0]!.message, 'si')).toMatch(/finite number \(at least 5 MPa and at most 150 MPa\), got NaN/);
+    expect(say(d[1]!.message, 'si')).toMatch(/got Infinity/);
   });
 
   it('a bar layer index outside the section, stirrups on a section without them, a side range upside down', () => {
     const noHoops = { ...project, sections: project.sections.map((s) => (s.id === 'r1' ? { ...s, hoops: undefined } : s)) };
     const d = validateAsFound({ defects: [{ kind: 'section-loss', layer: 5, lossPercent: 10 }, { kind: 'section-loss', layer: 'hoops', lossPercent: 10 }, { kind: 'cover-loss', face: 'right', depth: 20, from: 500, to: 300 }] }, member, noHoops, 'a');
     expect(d.map((x) => x.path)).toEqual(['a.defects[0].layer', 'a.defects[1].layer', 'a.defects[2].to']);
-    expect(d[0]!.message).toMatch(/0 to 1\), got 5/);
+    expect(say(d[0]!.message, 'si')).toMatch(/0 to 1\), got 5/);
   });
 
   it('core count must be whole; two core sets for one concrete are refused; unknown steel', () => {
@@ -131,12 +132,12 @@ describe('validation of each field', () => {
 
   it('a bar deeper than its layer is found when the layer is built, and named', () => {
     const r = run({ schemes: [{ ...OVERLAY_SCHEME, bars: [{ steelId: 'b500', distanceFromFace: 70, count: 2, diameter: 16 }] }] });
-    expect(errorAt(r, `${P}.schemes[0].bars[0].distanceFromFace`)!.message).toMatch(/sticks out of the 75 mm layer \(allowed 8\.0 to 67\.0 mm\)/);
+    expect(say(errorAt(r, `${P}.schemes[0].bars[0].distanceFromFace`)!.message, 'si')).toMatch(/sticks out of the 75 mm layer \(allowed 8 mm to 67 mm\)/);
   });
 
   it('an FRP wider than the soffit is named with the width of the face', () => {
     const r = run({ schemes: [{ ...FRP_SCHEME, width: 400 }] });
-    expect(errorAt(r, `${P}.schemes[0].width`)!.message).toBe('must be at most the 300 mm width of the bottom face of section "r1", got 400 mm');
+    expect(say(errorAt(r, `${P}.schemes[0].width`)!.message, 'si')).toBe('must be at most the 300 mm width of the bottom face of section "r1", got 400 mm');
   });
 
   it('a valid condition and valid schemes give no diagnostics', () => {

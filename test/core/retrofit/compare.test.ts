@@ -4,6 +4,7 @@
  * ultimate.
  */
 import { describe, expect, it } from 'vitest';
+import { say } from '../../../core/units/phrase.ts';
 import { compareVariants } from '../../../core/assessment/compact.ts';
 import type { UltimateCause } from '../../../core/section/results.ts';
 import type { CurveSummary, VariantResult } from '../../../core/assessment/results.ts';
@@ -41,21 +42,21 @@ describe('comparison with the reference beam', () => {
     expect(c.displacementDuctility.changePercent).toBeCloseTo(-50, 10);
     expect(c.hingeRotation.changePercent).toBeCloseTo(-75, 10);
     expect(c.critical).toEqual({ baseSectionId: 's', direction: 'sagging' });
-    expect(c.statement).toBe('CFRP: design moment +25 % at section "s" sagging (200 kN·m → 250 kN·m), member load capacity +20 %; displacement ductility falls from 4.0 to 2.0 (−50 %) and curvature ductility falls from 8.0 to 3.0 (−63 %): the strengthening lowers the ductility.');
+    expect(say(c.statement, 'si')).toBe('CFRP: design moment +25 % at section "s" sagging (200 kN·m → 250 kN·m), member load capacity +20 %; displacement ductility falls from 4.0 to 2.0 (−50 %) and curvature ductility falls from 8.0 to 3.0 (−63 %): the strengthening lowers the ductility.');
   });
 
   it('an FRP that debonds before the unstrengthened beam\'s hardened capacity: "adds no strength at ultimate", with the first-yield gain', () => {
     const scheme = variant('frp', { peak: 230e6, design: 190e6, firstYield: 200e6, cause: 'frp-debonding', phiDuctility: 2, mu: 1.5, load: 290e3, theta: 0.004 });
     const c = compareVariants(reference, scheme, 'CFRP');
-    expect(c.statement).toMatch(/design moment −5 %/);
-    expect(c.statement).toMatch(/at ultimate the scheme adds no strength: the FRP reaches its debonding limit before the unstrengthened section develops its strain-hardened capacity/);
-    expect(c.statement).toMatch(/raises the first-yield moment by \+11 %/);
+    expect(say(c.statement, 'si')).toMatch(/design moment −5 %/);
+    expect(say(c.statement, 'si')).toMatch(/at ultimate the scheme adds no strength: the FRP reaches its debonding limit before the unstrengthened section develops its strain-hardened capacity/);
+    expect(say(c.statement, 'si')).toMatch(/raises the first-yield moment by \+11 %/);
   });
 
   it('ductility within ±2 % is "practically unchanged" and not called a loss', () => {
     const scheme = variant('overlay', { peak: 300e6, design: 260e6, firstYield: 230e6, cause: 'concrete-crushing', phiDuctility: 7.9, mu: 3.95, load: 380e3, theta: 0.02 });
     const c = compareVariants(reference, scheme, 'Overlay');
-    expect(c.statement).toMatch(/displacement ductility practically unchanged \(4\.0 → 4\.0\)/);
-    expect(c.statement).not.toMatch(/lowers the ductility/);
+    expect(say(c.statement, 'si')).toMatch(/displacement ductility practically unchanged \(4\.0 → 4\.0\)/);
+    expect(say(c.statement, 'si')).not.toMatch(/lowers the ductility/);
   });
 });

@@ -2,6 +2,7 @@
  * Outlines of spalled sections and of sections deepened by a new layer: areas and depths worked by
  * hand from the shapes' dimensions (common practice, no source).
  */
+import { say } from '../../../core/units/phrase.ts';
 import { describe, expect, it } from 'vitest';
 import { changeOutline, NO_CHANGE } from '../../../core/retrofit/outline.ts';
 import { shapeOutline, type SectionShape } from '../../../core/section/shapes.ts';
@@ -13,7 +14,7 @@ const rect: SectionShape = { kind: 'rectangle', width: 300, height: 600 };
 const tee: SectionShape = { kind: 'tee', height: 600, webWidth: 300, flangeWidth: 1000, flangeThickness: 120 };
 
 function ok(outcome: ReturnType<typeof changeOutline>) {
-  if (!outcome.ok) throw new Error(outcome.message);
+  if (!outcome.ok) throw new Error(say(outcome.message, 'si'));
   expect(validateShape(outcome.shape, 'shape')).toEqual([]);
   return outcome;
 }
@@ -43,11 +44,11 @@ describe('cover removed from a section', () => {
   it('refuses a box (two pieces at the walls) and a cut that leaves no concrete, with the reason', () => {
     const box = changeOutline({ kind: 'box', height: 800, width: 600, topThickness: 150, bottomThickness: 150, wallThickness: 120 }, { ...NO_CHANGE, bottom: 20 });
     expect(box.ok).toBe(false);
-    expect(!box.ok && box.message).toMatch(/voids|one piece/);
+    expect(!box.ok && say(box.message, 'si')).toMatch(/voids|one piece/);
     const gone = changeOutline(rect, { ...NO_CHANGE, left: [{ depth: 160, from: 0, to: 600 }], right: [{ depth: 160, from: 0, to: 600 }] });
-    expect(!gone.ok && gone.message).toMatch(/whole width/);
+    expect(!gone.ok && say(gone.message, 'si')).toMatch(/whole width/);
     const flat = changeOutline(rect, { ...NO_CHANGE, top: 300, bottom: 300 });
-    expect(!flat.ok && flat.message).toMatch(/leaves nothing/);
+    expect(!flat.ok && say(flat.message, 'si')).toMatch(/leaves nothing/);
   });
 });
 

@@ -3,6 +3,7 @@
  * flexural results (the defect is simulated by making the shear assessment throw).
  */
 import { describe, expect, it, vi } from 'vitest';
+import { say } from '../../../core/units/phrase.ts';
 import { analyzeProject } from '../../../core/analysis.ts';
 import { CORES_AND_DEFECTS, FRP_SCHEME, retrofitProject } from './retrofit-project.ts';
 import type * as Shear from '../../../core/assessment/shear.ts';
@@ -20,7 +21,7 @@ describe('a defect in the shear or retrofit analysis', () => {
     expect(r.status).not.toBe('input-error');
     expect(r.loadDeflection.points.length).toBeGreaterThan(10);
     expect(r.sections[0]!.sectionId).toBe('r1');
-    expect(r.errors.at(-1)!.message).toMatch(/^internal error in the shear or retrofit analysis \(please report\): simulated defect/);
+    expect(say(r.errors.at(-1)!.message, 'si')).toMatch(/^internal error in the shear or retrofit analysis \(please report\): simulated defect/);
     expect(r.retrofit).toBeUndefined();
   });
 });

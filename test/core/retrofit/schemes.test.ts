@@ -2,6 +2,7 @@
  * Scheme building blocks: the FRP helpers on a section analysis, and the steel plate scheme.
  */
 import { describe, expect, it } from 'vitest';
+import { say } from '../../../core/units/phrase.ts';
 import { analyzeProject, sectionCache } from '../../../core/analysis.ts';
 import { designResistance } from '../../../core/assessment/resistance.ts';
 import { substrateStrainFromCurve } from '../../../core/retrofit/frp.ts';
@@ -50,7 +51,7 @@ describe('bonded steel plate', () => {
     expect(plate.area).toBe(1200);
     expect(plate.initialStrain).toBe(s.installation[0]!.strain);
     expect(plate.limitCause).toBe('steel-rupture');
-    expect(s.description).toBe('bonded steel plate on the bottom face: 6 × 200 mm (s355)');
+    expect(say(s.description, 'si')).toBe('bonded steel plate on the bottom face: 6 mm × 200 mm (s355)');
   });
 
   it('adds its weight, 7850 kg/m³ × g × 1200 mm², to the dead load: the factored midspan moment grows by 1.2 × w·L²/8', () => {

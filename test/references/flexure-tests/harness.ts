@@ -21,6 +21,7 @@ import { readFileSync } from 'node:fs';
 import { analyzeProject } from '../../../core/analysis.ts';
 import { analysisBlockers, parseProject } from '../../../core/project/index.ts';
 import type { MemberResult } from '../../../core/assessment/results.ts';
+import { say } from '../../../core/units/phrase.ts';
 
 // ---------------------------------------------------------------------------------------------------
 // Record shape (see the header block of specimens.json for the field-by-field description)
@@ -390,8 +391,8 @@ export function runSpecimen(s: SpecimenRecord, hinge: HingeMethod = 'priestley-2
   }
   const member: MemberResult | undefined = analyzeProject(parsed.project).members[0];
   if (!member) return { specimen: s, failure: 'the analysis returned no member', prediction: null };
-  if (member.status === 'input-error') return { specimen: s, failure: `input error: ${member.errors.map((e) => e.message).join('; ')}`, prediction: null };
-  return { specimen: s, failure: member.status === 'not-converged' ? member.governingMode : null, prediction: predictionOf(member, s) };
+  if (member.status === 'input-error') return { specimen: s, failure: `input error: ${member.errors.map((e) => say(e.message, 'si')).join('; ')}`, prediction: null };
+  return { specimen: s, failure: member.status === 'not-converged' ? say(member.governingMode, 'si') : null, prediction: predictionOf(member, s) };
 }
 
 /** Picks the compared quantities out of a member result (kN, kN·m, mm). */

@@ -64,7 +64,7 @@ function previewSections(project: Project, memberId: string, map: IndexMap | nul
   if (!member || member.asFound || (member.schemes?.length ?? 0) > 0) return null;
   const sections = [...new Set(member.zones.map((z) => z.sectionId))].map((id) => analysis(id)).map((s) => (s ? sectionResult(s) : null));
   if (sections.length === 0 || sections.some((s) => s === null)) return null;
-  return (sections as SectionResult[]).map((s) => (map ? { ...s, warnings: s.warnings.map((w) => remapPaths(w, map)) } : s));
+  return (sections as SectionResult[]).map((s) => (map ? { ...s, warnings: s.warnings.map((w) => mapWords(w, (words) => remapPaths(words, map))) } : s));
 }
 
 const sameSectionIds = (a: readonly SectionResult[], b: readonly SectionResult[]) => a.length === b.length && a.every((s, i) => s.sectionId === b[i]!.sectionId);

@@ -189,10 +189,18 @@ function axisOptions(axis: AxisSpec, id: 'x' | 'y' | 'x2' | 'y2', font: (size: n
     title: {
       display: true,
       // Scriptable: measured against the axis length once chart.js has laid the axis out.
-      text: (context: { chart?: { ctx?: ChartContext2D; width?: number; height?: number }; scale?: ScaleLike }) => {
-        const ctx = context.chart?.ctx;
+      text: (context: { chart?: { ctx?: ChartContext2D; width?: number; height?: number; chartArea?: ChartInstanceLike['chartArea'] }; scale?: ScaleLike }) => {
+        const chart = context.chart;
+        const ctx = chart?.ctx;
         if (!ctx || typeof ctx.measureText !== 'function') return axis.label;
-        const length = (horizontal ? context.scale?.width : context.scale?.height) || ((horizontal ? context.chart?.width : context.chart?.height) ?? 0) - 40;
+        // The plot's extent from the last layout (the axis is laid out within it), else the chart's
+        // size less room for the other axis, the legend and the title; a stacked axis gets its share.
+        const area = chart?.chartArea;
+        const plot = horizontal
+          ? (area && area.right > area.left ? area.right - area.left : (chart?.width ?? 0) - 60)
+          : (area && area.bottom > area.top ? area.bottom - area.top : (chart?.height ?? 0) - 70);
+        const own = horizontal ? context.scale?.width : context.scale?.height;
+        const length = own && own > 0 ? Math.min(own, plot) : plot;
         ctx.save();
         ctx.font = `${titleFont.size as number}px ${family}`;
         const fitted = fitAxisTitle(axis.label, length - 4, (text) => ctx.measureText(text).width);

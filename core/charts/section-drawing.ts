@@ -4,6 +4,7 @@
  * and a label per reinforcement layer. The drawing is to a true scale 1:n when shown at its stated
  * width and height in points (1 pt = 1/72 in), as in the report; the app may show it at any size.
  */
+import { barDesignation } from '../section/bar-designations.ts';
 import type { SectionDefinition } from '../section/definition.ts';
 import { layerArea } from '../section/definition.ts';
 import type { Point } from '../section/shapes.ts';
@@ -80,7 +81,10 @@ export function sectionDrawingSvg(definition: SectionDefinition, unitsInput: Uni
   // Layer labels and their widths decide the right margin.
   const layers = figure.layers.map(({ layer, index, diameter, positions }) => {
     const sized = layer.count !== undefined && layer.diameter !== undefined;
-    const text = `${layer.label ?? `layer ${index + 1}`}: ${sized ? `${layer.count} × ${length(layer.diameter!)}` : 'area'} (${area(layerArea(layer))})`;
+    // Bars as drawings write them (3 #8, 4 Ø20) when the diameter is a tabulated size.
+    const designation = sized ? barDesignation(layer.diameter, units.system) : null;
+    const bars = sized ? (designation ? `${layer.count} ${designation}` : `${layer.count} × ${length(layer.diameter!)}`) : 'area';
+    const text = `${layer.label ?? `layer ${index + 1}`}: ${bars} (${area(layerArea(layer))})`;
     return { layer, diameter, sized, text, positions };
   });
   const showLabels = options.layerLabels ?? true;

@@ -8,6 +8,7 @@
 import type { SectionDefinition } from '../../../core/section/definition.ts';
 import type { Point } from '../../../core/section/shapes.ts';
 import { sectionFigure, spreadLabels } from '../../../core/charts/section-geometry.ts';
+import { barDesignation } from '../../../core/section/bar-designations.ts';
 import { formatQuantity, toDisplay, unitLabel, fromDisplay } from '../../../core/units/index.ts';
 import type { UnitSystem } from '../../../core/project/types.ts';
 import { displaySystem } from '../project/units.ts';
@@ -48,10 +49,11 @@ const finite = (v: unknown): v is number => typeof v === 'number' && Number.isFi
 /** Estimated advance of one character of the 11 px label font, pixels. */
 const LABEL_CHAR_WIDTH = 6.2;
 
-/** `bottom bars: 3 × 20.0 mm at 545 mm` (or the area when the layer gives one). */
+/** `bottom bars: 3 #8 at 21.5 in`, `3 × 23.7 mm at 545 mm` for a size without designation, or the area when the layer gives one. */
 function layerText(layer: SectionDefinition['bars'][number], length: (mm: number) => string, display: 'SI' | 'US'): string {
+  const designation = barDesignation(layer.diameter, display);
   const what = layer.count !== undefined && layer.diameter !== undefined
-    ? `${layer.count} × ${length(layer.diameter)}`
+    ? designation ? `${layer.count} ${designation}` : `${layer.count} × ${length(layer.diameter)}`
     : formatQuantity('area', layer.area ?? 0, display);
   return `${layer.label ? `${layer.label}: ` : ''}${what} at ${finite(layer.depth) ? length(layer.depth) : '—'}`;
 }

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { demoProject } from '../../../core/project/demo.ts';
 import { sectionDrawingSvg } from '../../../core/charts/section-drawing.ts';
 import type { SectionDefinition } from '../../../core/section/definition.ts';
 import { reportTestProject } from '../report/fixtures.ts';
@@ -11,8 +12,8 @@ describe('scaled section drawing', () => {
     expect(svg.startsWith('<svg xmlns="http://www.w3.org/2000/svg"')).toBe(true);
     expect(svg.match(/<circle /g)).toHaveLength(3 + 2);
     expect(svg.match(/<rect /g)).toHaveLength(1);
-    expect(svg).toContain('>bottom bars: 3 × 20 mm (942 mm²)</text>');
-    expect(svg).toContain('>top bars: 2 × 16 mm (402 mm²)</text>');
+    expect(svg).toContain('>bottom bars: 3 Ø20 (942 mm²)</text>');
+    expect(svg).toContain('>top bars: 2 Ø16 (402 mm²)</text>');
     expect(svg).toContain('>300 mm</text>');
     expect(svg).toContain('>550 mm</text>');
   });
@@ -47,5 +48,15 @@ describe('scaled section drawing', () => {
 
   it('is the same text for the same section', () => {
     expect(sectionDrawingSvg(r1(), 'si').svg).toBe(sectionDrawingSvg(r1(), 'si').svg);
+  });
+
+  it('writes bars as drawings do (3 #8) and falls back to count × diameter for other sizes', () => {
+    const section = demoProject().sections.find((x) => x.id === 'T24')!;
+    const us = sectionDrawingSvg(section, 'us').svg;
+    // B-201's T-beam: 3 #8 at the bottom, 2 #5 at the top (ASTM A615 bar numbers)
+    expect(us).toContain('3 #8');
+    expect(us).toContain('2 #5');
+    const odd = { ...section, bars: [{ ...section.bars[0]!, diameter: 23.7 }] };
+    expect(sectionDrawingSvg(odd, 'si').svg).toMatch(/3 × 23\.7 mm/);
   });
 });

@@ -39,7 +39,7 @@ describe('sectionGeometry', () => {
 
   it('labels the layers in the display units and dimensions the section', () => {
     // Top to bottom; 16.00 mm to four figures (core/units: four significant figures when the leading digit is 1).
-    expect(g.labels.map((l) => l.text)).toEqual(['2 × 16.00 mm at 50.0 mm', 'bottom: 3 × 20.0 mm at 545 mm']);
+    expect(g.labels.map((l) => l.text)).toEqual(['2 Ø16 at 50.0 mm', 'bottom: 3 Ø20 at 545 mm']);
     expect(g.dimensions.map((d) => d.text)).toEqual(['300 mm', '600 mm']);
     const us = sectionGeometry(section, 'us')!;
     // 300 mm = 11.8 in (1 in = 25.4 mm, NIST SP 811 B.8)

@@ -8,7 +8,8 @@ import type { MemberResult } from './assessment/results.ts';
 import { notAnalysed } from './assessment/variant.ts';
 import { materialLibrary } from './materials/library.ts';
 import type { Project, MemberDefinition } from './project/types.ts';
-import { analyzeSection, type SectionAnalysis } from './section/analyze.ts';
+import { analyzeSectionShortTerm, completeSectionAnalysis, type SectionAnalysis, type ShortTermSection } from './section/analyze.ts';
+import type { SectionDefinition } from './section/definition.ts';
 import type { Text } from './units/phrase.ts';
 
 export interface ProjectSummary {
@@ -30,24 +31,48 @@ export interface ProjectResults {
 
 export type ProgressListener = (done: number, total: number, memberId: string) => void;
 
+/** Section analyses of a project on demand, each computed once. */
+export interface SectionCache {
+  (id: string): SectionAnalysis | undefined;
+  /**
+   * The short-term stage alone (model, elastic properties, short-term curves: what a
+   * moment–curvature chart shows), for showing before the rest; a later full analysis of the
+   * section completes this stage instead of starting again.
+   */
+  shortTerm(id: string): SectionAnalysis | undefined;
+}
+
 /** Section analyses on demand, computed once per section of the project. */
-export function sectionCache(project: Project): (id: string) => SectionAnalysis | undefined {
+export function sectionCache(project: Project): SectionCache {
   const materials = materialLibrary(project.materials, project.info.codeBasis);
-  const cache = new Map<string, SectionAnalysis>();
-  return (id) => {
-    const cached = cache.get(id);
-    if (cached) return cached;
+  const options = {
+    code: project.info.codeBasis,
+    momentDropFraction: project.settings.momentDropFraction,
+    bilinearMethod: project.settings.bilinearMethod,
+  };
+  const stages = new Map<string, { definition: SectionDefinition; shortTerm: ShortTermSection }>();
+  const full = new Map<string, SectionAnalysis>();
+  const stageOf = (id: string) => {
+    const known = stages.get(id);
+    if (known) return known;
     const index = project.sections.findIndex((s) => s.id === id);
     if (index < 0) return undefined;
-    const def = project.sections[index]!;
-    const analysis = analyzeSection(def, `sections[${index}] "${def.name}"`, materials, {
-      code: project.info.codeBasis,
-      momentDropFraction: project.settings.momentDropFraction,
-      bilinearMethod: project.settings.bilinearMethod,
-    });
-    cache.set(id, analysis);
-    return analysis;
+    const definition = project.sections[index]!;
+    const stage = { definition, shortTerm: analyzeSectionShortTerm(definition, `sections[${index}] "${definition.name}"`, materials, options) };
+    stages.set(id, stage);
+    return stage;
   };
+  const cache = ((id: string) => {
+    const cached = full.get(id);
+    if (cached) return cached;
+    const stage = stageOf(id);
+    if (!stage) return undefined;
+    const analysis = completeSectionAnalysis(stage.shortTerm, stage.definition, materials, options);
+    full.set(id, analysis);
+    return analysis;
+  }) as SectionCache;
+  cache.shortTerm = (id) => full.get(id) ?? stageOf(id)?.shortTerm.analysis;
+  return cache;
 }
 
 /**

@@ -72,8 +72,18 @@ function curvesOf(model: SectionModel, options: MomentCurvatureOptions, warnings
   return out;
 }
 
-/** Analyses a section of the project; never throws for bad input (errors are returned). */
-export function analyzeSection(definition: SectionDefinition, path: string, materials: MaterialLibrary, options: SectionAnalysisOptions): SectionAnalysis {
+/**
+ * The first stage of a section analysis: the model, its elastic properties and the short-term
+ * moment–curvature curves — all a moment–curvature chart shows (with `sectionResult`). Never
+ * throws for bad input (errors are returned). `completeSectionAnalysis` adds the rest.
+ */
+export interface ShortTermSection {
+  readonly analysis: SectionAnalysis;
+  /** The context the completion needs (null when the model could not be built). */
+  readonly stage: { readonly model: SectionModel; readonly mcOptions: MomentCurvatureOptions; readonly crushing: number; readonly warnings: Text[] } | null;
+}
+
+export function analyzeSectionShortTerm(definition: SectionDefinition, path: string, materials: MaterialLibrary, options: SectionAnalysisOptions): ShortTermSection {
   const warnings: Text[] = [];
   const empty = (errors: Diagnostic[]): SectionAnalysis => ({
     sectionId: definition.id,
@@ -101,7 +111,7 @@ export function analyzeSection(definition: SectionDefinition, path: string, mate
     if (error instanceof InputError) {
       // A material that failed to build shows up as an unknown reference: report the real cause.
       const materialProblems = materials.problems.filter((p) => p.severity === 'error');
-      return empty([...materialProblems, ...error.diagnostics.filter((d) => !(d.code === 'unknown-reference' && materialProblems.length > 0))]);
+      return { analysis: empty([...materialProblems, ...error.diagnostics.filter((d) => !(d.code === 'unknown-reference' && materialProblems.length > 0))]), stage: null };
     }
     throw error;
   }
@@ -110,6 +120,39 @@ export function analyzeSection(definition: SectionDefinition, path: string, mate
   const crushing = code === 'ACI 318-19' ? 0.003 : en1992ParabolaUltimateStrain(spec.strength);
   const mcOptions: MomentCurvatureOptions = { codeCrushingStrain: crushing, momentDropFraction: options.momentDropFraction, bilinearMethod: options.bilinearMethod };
   const curves = curvesOf(model, mcOptions, warnings, 'Short-term');
+  const density = spec.density ?? 2400;
+  return {
+    analysis: {
+      ...empty([]),
+      model,
+      elastic: elasticProperties(model),
+      curves,
+      // ρ (kg/m³) · g (m/s²) · A (mm²) · 1e-9 (m³ per mm²·m → per mm) = N/mm
+      selfWeight: density * STANDARD_GRAVITY * model.grossArea * 1e-9,
+      warnings: [...warnings],
+    },
+    stage: { model, mcOptions, crushing, warnings },
+  };
+}
+
+/** Analyses a section of the project; never throws for bad input (errors are returned). */
+export function analyzeSection(definition: SectionDefinition, path: string, materials: MaterialLibrary, options: SectionAnalysisOptions): SectionAnalysis {
+  return completeSectionAnalysis(analyzeSectionShortTerm(definition, path, materials, options), definition, materials, options);
+}
+
+/**
+ * The rest of a section analysis after its short-term stage (the same curves, not computed
+ * again): curves under sustained load, design-law curves (EN 1992-1-1), yield strains and the
+ * code values of the concrete.
+ */
+export function completeSectionAnalysis(shortTerm: ShortTermSection, definition: SectionDefinition, materials: MaterialLibrary, options: SectionAnalysisOptions): SectionAnalysis {
+  const { stage } = shortTerm;
+  if (!stage) return shortTerm.analysis;
+  const { model, mcOptions, crushing } = stage;
+  const warnings = [...stage.warnings];
+  const curves = shortTerm.analysis.curves;
+  const spec = materials.concreteSpec(definition.concreteId)!;
+  const code = options.code;
   const creep = spec.creepCoefficient ?? 2.0;
   const shrinkage = spec.shrinkageStrain ?? 0.0004;
   const longModel = withMaterials(model, (m) => sustainedConcrete(m, creep, shrinkage));
@@ -136,24 +179,17 @@ export function analyzeSection(definition: SectionDefinition, path: string, mate
   }
   // ACI Ec = 4700√f′c and fr = 0.62λ√f′c, or EN Ecm and fctm, unless the spec overrides them.
   const codeValues = resolveConcrete(spec, code);
-  const elastic = elasticProperties(model);
   const yieldOf = (dir: BendingDirection) => {
     const steel = tensionSteel(model, dir);
     const main = steel.reduce<(typeof steel)[number] | undefined>((a, b) => (!a || b.area > a.area ? b : a), undefined);
     return main?.material.yieldStrain ?? 0.002;
   };
-  const density = spec.density ?? 2400;
   return {
-    sectionId: definition.id,
-    sectionName: definition.name,
-    model,
-    elastic,
+    ...shortTerm.analysis,
     curves,
     longTermCurves,
     designCurves,
     yieldStrain: { sagging: yieldOf('sagging'), hogging: yieldOf('hogging') },
-    // ρ (kg/m³) · g (m/s²) · A (mm²) · 1e-9 (m³ per mm²·m → per mm) = N/mm
-    selfWeight: density * STANDARD_GRAVITY * model.grossArea * 1e-9,
     codeModulus: codeValues.elasticModulus,
     codeTensileStrength: codeValues.tensileStrength,
     creepCoefficient: creep,

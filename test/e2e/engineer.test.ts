@@ -210,7 +210,8 @@ describe('an engineer at work (1440 × 900)', () => {
     await page.getByTestId('bar-depth-0').click();
     await expect.poll(() => page.getByTestId('bar-count-0').inputValue()).toBe('4');
     expect(await size.inputValue()).toBe('#9');
-    await expect.poll(() => page.getByTestId('section-drawing').locator('svg').getAttribute('aria-label')).toContain('4 #9');
+    // The drawing labels the layer as drawings do.
+    await expect.poll(() => page.getByTestId('section-drawing').textContent()).toContain('4 #9 at 21.5 in');
     await size.fill('#12');
     await expect.poll(() => size.getAttribute('aria-invalid')).toBe('true');
     expect(await page.getByTestId('bar-layer-0').textContent()).toContain('#12 is not an ASTM A615 bar size');

@@ -17,6 +17,8 @@ export function fieldPath(path: readonly PathKey[]): string {
   return path.reduce<string>((text, key) => (typeof key === 'number' ? `${text}[${key}]` : text === '' ? key : `${text}.${key}`), '');
 }
 
+const NO_MESSAGES: readonly FieldMessage[] = Object.freeze([]);
+
 export function useEditing() {
   const documentStore = useDocumentStore();
   const analysis = useAnalysisStore();
@@ -35,10 +37,14 @@ export function useEditing() {
     documentStore.edit(label, (p) => setIn(p, ['settings', key], value), { coalesceKey: `settings:${key}` });
   }
 
-  /** Diagnostics of one field (or, with `prefix`, of the fields under it). */
-  function messages(list: ItemList | 'project', id: string, path: readonly PathKey[] | string, prefix = false): FieldMessage[] {
+  /**
+   * Diagnostics of one field (or, with `prefix`, of the fields under it). A field without any gets
+   * the same empty list every time, so that its props stay equal and it is not re-rendered.
+   */
+  function messages(list: ItemList | 'project', id: string, path: readonly PathKey[] | string, prefix = false): readonly FieldMessage[] {
     const field = typeof path === 'string' ? path : fieldPath(path);
-    return analysis.diagnosticsOf(list, id, field, prefix).map((d) => ({ message: d.message, severity: d.severity }));
+    const found = analysis.diagnosticsOf(list, id, field, prefix);
+    return found.length === 0 ? NO_MESSAGES : found.map((d) => ({ message: d.message, severity: d.severity }));
   }
 
   return { system, project, setField, setInfo, setSetting, messages, done: () => documentStore.endCoalescing(), edit: documentStore.edit };

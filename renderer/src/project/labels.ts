@@ -95,7 +95,18 @@ export const CODE_BASIS_LABELS: Readonly<Record<CodeBasis, string>> = {
   'EN 1992-1-1': 'EN 1992-1-1',
 };
 
-/** Options for a SelectField from a label table. */
-export function optionsOf<T extends string>(labels: Readonly<Record<T, string>>, only?: readonly T[]): { value: T; label: string }[] {
-  return (only ?? (Object.keys(labels) as T[])).map((value) => ({ value, label: labels[value] }));
+const wholeTables = new WeakMap<object, readonly { value: string; label: string }[]>();
+
+/**
+ * Options for a SelectField from a label table. A whole table gives the same array every time,
+ * so that a field re-renders only when something it shows changed.
+ */
+export function optionsOf<T extends string>(labels: Readonly<Record<T, string>>, only?: readonly T[]): readonly { value: T; label: string }[] {
+  if (only) return only.map((value) => ({ value, label: labels[value] }));
+  let options = wholeTables.get(labels);
+  if (!options) {
+    options = Object.freeze((Object.keys(labels) as T[]).map((value) => Object.freeze({ value, label: labels[value] })));
+    wholeTables.set(labels, options);
+  }
+  return options as readonly { value: T; label: string }[];
 }

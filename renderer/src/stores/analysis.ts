@@ -67,7 +67,7 @@ const itemKey = (list: ItemList | 'project', id: string) => `${list}:${id}`;
 /** The same section results (ids, and the same curves end to end): the engine is deterministic, so equal inputs give equal curves. */
 function sameSections(a: readonly SectionResult[], b: readonly SectionResult[]): boolean {
   const curveEnd = (c: SectionResult['sagging']) => (c ? `${c.points.length}:${c.points[c.points.length - 1]?.moment}:${c.points[c.points.length - 1]?.curvature}` : '');
-  return a.length === b.length && a.every((s, i) => s.sectionId === b[i]!.sectionId && curveEnd(s.sagging) === curveEnd(b[i]!.sagging) && curveEnd(s.hogging) === curveEnd(b[i]!.hogging));
+  return a.length === b.length && a.every((s, i) => s.sectionId === b[i]!.sectionId && curveEnd(s.sagging) === curveEnd(b[i]!.sagging) && curveEnd(s.hogging) === curveEnd(b[i]!.hogging) && JSON.stringify(s.warnings) === JSON.stringify(b[i]!.warnings));
 }
 
 export const useAnalysisStore = defineStore('analysis', () => {

@@ -7,7 +7,7 @@
  * Long jobs run in chunks of members; between chunks the service yields to the event loop, so a
  * `cancel` message can stop a job early (the members not yet analysed are returned to the caller).
  */
-import { analyzeMembers, sectionCache } from '../../../core/analysis.ts';
+import { analyzeMembers, sectionCache, type SectionCache } from '../../../core/analysis.ts';
 import { sectionResult } from '../../../core/member/analyze.ts';
 import type { SectionResult } from '../../../core/member/results.ts';
 import type { Diagnostic } from '../../../core/diagnostics.ts';
@@ -59,15 +59,21 @@ function remapResult(result: MemberResult, map: IndexMap | null): MemberResult {
  * sections are the library's own (no as-found condition or scheme deriving others); null when
  * the member has none of its own or derives them.
  */
-function previewSections(project: Project, memberId: string, map: IndexMap | null, analysis: ReturnType<typeof sectionCache>): SectionResult[] | null {
+function previewSections(project: Project, memberId: string, map: IndexMap | null, analysis: SectionCache): SectionResult[] | null {
   const member = project.members.find((m) => m.id === memberId);
   if (!member || member.asFound || (member.schemes?.length ?? 0) > 0) return null;
-  const sections = [...new Set(member.zones.map((z) => z.sectionId))].map((id) => analysis(id)).map((s) => (s ? sectionResult(s) : null));
+  // The short-term stage only (what the chart shows); the member analysis completes it.
+  const sections = [...new Set(member.zones.map((z) => z.sectionId))].map((id) => analysis.shortTerm(id)).map((s) => (s ? sectionResult(s) : null));
   if (sections.length === 0 || sections.some((s) => s === null)) return null;
   return (sections as SectionResult[]).map((s) => (map ? { ...s, warnings: s.warnings.map((w) => mapWords(w, (words) => remapPaths(words, map))) } : s));
 }
 
-const sameSectionIds = (a: readonly SectionResult[], b: readonly SectionResult[]) => a.length === b.length && a.every((s, i) => s.sectionId === b[i]!.sectionId);
+/**
+ * The member result's sections are those sent ahead: the same ids, the same curve objects (one
+ * cache for the job) and the same warnings (the rest of the analysis may add design-law warnings).
+ */
+const sameAsSentAhead = (ahead: readonly SectionResult[], result: readonly SectionResult[]) => ahead.length === result.length
+  && ahead.every((s, i) => s.sectionId === result[i]!.sectionId && s.sagging === result[i]!.sagging && s.hogging === result[i]!.hogging && JSON.stringify(s.warnings) === JSON.stringify(result[i]!.warnings));
 
 function coveredItems(project: Project, whole: boolean): CoveredItems {
   return {
@@ -121,7 +127,7 @@ export function createAnalysisService(post: (reply: WorkerReply) => void): Analy
         const key = memberKeyResults(result, definition);
         if (!details.has(result.memberId)) post({ type: 'member', id: request.id, memberId: result.memberId, key, detail: null });
         // The sections sent ahead are the same analyses (one cache for the job): not sent twice.
-        else if (sentAhead && sameSectionIds(sentAhead, result.sections)) post({ type: 'member', id: request.id, memberId: result.memberId, key, detail: { ...result, sections: [] }, sectionsSent: true });
+        else if (sentAhead && sameAsSentAhead(sentAhead, result.sections)) post({ type: 'member', id: request.id, memberId: result.memberId, key, detail: { ...result, sections: [] }, sectionsSent: true });
         else post({ type: 'member', id: request.id, memberId: result.memberId, key, detail: result });
         done += 1;
         post({ type: 'progress', id: request.id, done, total: ids.length, memberId: result.memberId });

@@ -44,7 +44,7 @@ export interface SectionCache {
 
 /** Section analyses on demand, computed once per section of the project. */
 export function sectionCache(project: Project): SectionCache {
-  const materials = materialLibrary(project.materials, project.info.codeBasis);
+  const materials = materialLibrary(project.materials, project.info.codeBasis, project.settings);
   const options = {
     code: project.info.codeBasis,
     momentDropFraction: project.settings.momentDropFraction,

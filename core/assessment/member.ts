@@ -56,7 +56,7 @@ function withZones(member: BeamDefinition, idOf: (libraryId: string) => string, 
 
 /** Analysis of an as-found derivation as a variant. */
 function asFoundRun(setup: Setup, member: BeamDefinition, derivation: AsFoundDerivation, key: string, label: string): { run: VariantRun; materials: MaterialLibrary } {
-  const materials = materialLibrary([...setup.library.materials, ...derivation.materials], setup.code);
+  const materials = materialLibrary([...setup.library.materials, ...derivation.materials], setup.code, setup.sectionSettings);
   const definitions = new Map<string, SectionDefinition>();
   const baseOf = new Map<string, string>();
   const additions = new Map<string, SectionAdditions>();
@@ -104,7 +104,7 @@ function extend(member: AssessedMember, context: AssessmentContext, design: Memb
     ];
     return { ...design, errors: [...design.errors, ...errorsOf(problems)] };
   }
-  const libraryMaterials = materialLibrary(library.materials, setup.code);
+  const libraryMaterials = materialLibrary(library.materials, setup.code, setup.sectionSettings);
   const designSections = librarySections(member, library);
   const designAnalyses = new Map<string, SectionAnalysis>();
   for (const id of designSections.keys()) {

@@ -102,7 +102,7 @@ export function buildScheme(setup: Setup, input: SchemeInput): SchemeResult {
   const warnings: Text[] = [...base.warnings];
   const designSections = librarySections(member, setup.library);
   const targets = new Set(scheme.sectionIds ?? [...designSections.keys()]);
-  const materials = materialLibrary([...setup.library.materials, ...derivedSpecs], code);
+  const materials = materialLibrary([...setup.library.materials, ...derivedSpecs], code, setup.sectionSettings);
   const sections = new Map<string, SchemeSection>();
   const installation: InstallationStrain[] = [];
   let frp: FrpDesign | null = null;

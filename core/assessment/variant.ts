@@ -7,7 +7,7 @@
  */
 import { BugError, InputError } from '../diagnostics.ts';
 import type { MaterialLibrary } from '../materials/library.ts';
-import type { CodeBasis } from '../materials/specs.ts';
+import type { CodeBasis, UltimateStrainChoice } from '../materials/specs.ts';
 import { analyzeBeam, unanalysedBeam, type MemberContext } from '../member/analyze.ts';
 import type { BeamDefinition } from '../member/definition.ts';
 import type { AddedItem, Library } from '../retrofit/types.ts';
@@ -25,6 +25,8 @@ import { memberStrength } from './strength.ts';
 export interface SectionSettings {
   readonly momentDropFraction: number;
   readonly bilinearMethod: BilinearMethod;
+  /** Where εcu of unconfined concrete comes from when a concrete says nothing (the project's setting). */
+  readonly concreteUltimateStrain?: UltimateStrainChoice;
 }
 
 /** What every variant of a member shares. */

@@ -18,7 +18,7 @@ export {
   type ConcreteValidationOptions,
 } from './build/concrete.ts';
 /** Code-basis defaults for concrete (f′c / fcm, Ec, tensile strength, crushing strain). */
-export { resolveConcrete, type ResolvedConcrete } from './build/concrete-defaults.ts';
+export { resolveConcrete, lawUltimateStrain, ultimateStrainWords, type ResolvedConcrete } from './build/concrete-defaults.ts';
 /** Steel: builder, validation and defaults (Es = 200 000 MPa, εsh = 0.008, εsu by model). */
 export { buildSteel, validateSteelSpec, DEFAULT_STEEL_MODULUS, DEFAULT_HARDENING_STRAIN, defaultRuptureStrain } from './build/steel.ts';
 /** FRP: builder and validation (ACI 440.2R-17). */

@@ -6,7 +6,7 @@
 import type { Diagnostic } from '../diagnostics.ts';
 import { InputError } from '../diagnostics.ts';
 import { buildConcrete, buildSteel, buildFrp } from './factory.ts';
-import type { CodeBasis, ConcreteSpec, ConfinementInput, FrpSpec, MaterialSpec, SteelSpec } from './specs.ts';
+import type { CodeBasis, ConcreteSpec, ConfinementInput, FrpSpec, MaterialSpec, SteelSpec, UltimateStrainChoice } from './specs.ts';
 import type { ConcreteMaterial, FrpMaterial, SteelMaterial } from './types.ts';
 
 /** Looks up materials by id (what the section builder needs). */
@@ -30,8 +30,14 @@ function materialPath(specs: readonly MaterialSpec[], id: string): string {
   return `materials[${i}] "${id}"`;
 }
 
+/** Project settings the materials are built with. */
+export interface MaterialSettings {
+  /** Where εcu of unconfined concrete comes from when a concrete spec says nothing (default: the code's value). */
+  readonly concreteUltimateStrain?: UltimateStrainChoice;
+}
+
 /** A caching resolver over a list of material specs. */
-export function materialLibrary(specs: readonly MaterialSpec[], code: CodeBasis): MaterialLibrary {
+export function materialLibrary(specs: readonly MaterialSpec[], code: CodeBasis, settings: MaterialSettings = {}): MaterialLibrary {
   const problems: Diagnostic[] = [];
   const reported = new Set<string>();
   const concreteCache = new Map<string, { cover: ConcreteMaterial; core?: ConcreteMaterial; warnings: string[] } | undefined>();
@@ -56,7 +62,7 @@ export function materialLibrary(specs: readonly MaterialSpec[], code: CodeBasis)
       let built: { cover: ConcreteMaterial; core?: ConcreteMaterial; warnings: string[] } | undefined;
       if (spec) {
         try {
-          const b = buildConcrete(spec, code, confinement, { path: materialPath(specs, id) });
+          const b = buildConcrete(spec, code, confinement, { path: materialPath(specs, id), ...(settings.concreteUltimateStrain ? { ultimateStrain: settings.concreteUltimateStrain } : {}) });
           built = { cover: b.cover, ...(b.core ? { core: b.core } : {}), warnings: b.diagnostics.filter((d) => d.severity === 'warning').map((d) => d.message) };
         } catch (error) {
           record(id, error);

@@ -28,6 +28,7 @@ export function sustainedConcrete(base: ConcreteMaterial, creepCoefficient: numb
     breakpoints: base.breakpoints.map(map),
     initialModulus: base.initialModulus / k,
     crushingStrain: map(base.crushingStrain),
+    ...(base.ultimateStrain ? { ultimateStrain: { ...base.ultimateStrain, value: map(base.ultimateStrain.value) } } : {}),
     peakStrain: map(base.peakStrain),
     crackingStrain: base.crackingStrain * k - shift > 0 ? base.crackingStrain * k - shift : base.crackingStrain * k,
   };

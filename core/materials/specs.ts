@@ -23,6 +23,23 @@ export type ConcreteCompressionModel = (typeof CONCRETE_COMPRESSION_MODELS)[numb
 export const CONCRETE_TENSION_MODELS = ['none', 'linear-brittle', 'tension-stiffening'] as const;
 export type ConcreteTensionModel = (typeof CONCRETE_TENSION_MODELS)[number];
 
+/**
+ * Where the ultimate (crushing) strain εcu of unconfined concrete comes from, the strain at which the
+ * best-estimate section curves end when the unconfined concrete governs:
+ *  - `code`: the code basis's value — ACI 318-19 22.2.2.1 εcu = 0.003; EN 1992-1-1 Table 3.1 εcu1 for
+ *    the nonlinear laws (3.1.5) and εcu2 for the parabola–rectangle (3.1.7);
+ *  - `law`: the value published with the chosen stress–strain law (Hognestad 0.0038, Modified Kent–Park
+ *    and Mander 0.004, EN εcu1/εcu2); laws that publish none (Popovics, Thorenfeldt–Collins) use the
+ *    code value and say so.
+ * A value the engineer enters (`ConcreteSpec.crushingStrain`) overrides both. The code crushing point
+ * that code checks read (ACI 0.003, EN εcu2) is always marked on the curves as a key point of its own.
+ */
+export const ULTIMATE_STRAIN_CHOICES = ['code', 'law'] as const;
+export type UltimateStrainChoice = (typeof ULTIMATE_STRAIN_CHOICES)[number];
+
+/** The project default of the choice: the code's εcu (common practice, no source; see ULTIMATE_STRAIN_CHOICES). */
+export const DEFAULT_ULTIMATE_STRAIN_CHOICE: UltimateStrainChoice = 'code';
+
 /** A concrete as the user enters it; `buildConcrete` (factory.ts) validates it and fills code-basis defaults. */
 export interface ConcreteSpec {
   readonly kind: 'concrete';
@@ -39,7 +56,13 @@ export interface ConcreteSpec {
   /** Optional overrides; undefined → the code basis default. */
   readonly elasticModulus?: number; // MPa
   readonly tensileStrength?: number; // MPa (modulus of rupture or fctm)
-  readonly crushingStrain?: number; // εcu for unconfined concrete
+  /**
+   * Ultimate strain εcu of unconfined concrete entered by the engineer (dimensionless, 0.002–0.01);
+   * overrides `ultimateStrain`. Undefined → `ultimateStrain` decides.
+   */
+  readonly crushingStrain?: number;
+  /** Where εcu of unconfined concrete comes from when no value is entered; undefined → the project's setting. */
+  readonly ultimateStrain?: UltimateStrainChoice;
   /** Hognestad peak factor k in f″c = k·f′c (default 0.85). */
   readonly peakFactor?: number;
   /** Spalling strain of unconfined cover (Mander), default 0.005. */

@@ -77,6 +77,19 @@ export interface TensionLaw {
   readonly crackingStrain: number;
 }
 
+/**
+ * The ultimate (crushing) strain of a concrete and where it comes from (core/materials/build/
+ * concrete-defaults.ts): the code basis's value, the value published with the law, a value the engineer
+ * entered, or the confined core's hoop-fracture strain.
+ */
+export interface UltimateStrainSource {
+  /** Compressive strain, dimensionless (positive). */
+  readonly value: number;
+  readonly basis: 'code' | 'law' | 'user' | 'confinement';
+  /** The source in words, e.g. `ACI 318-19 22.2.2.1`, `Hognestad (1951)`, `entered by the engineer`. */
+  readonly source: string;
+}
+
 /** A complete concrete law (compression and tension) in the sign convention above. */
 export interface ConcreteMaterial extends UniaxialMaterial {
   readonly compression: CompressionLaw;
@@ -88,6 +101,8 @@ export interface ConcreteMaterial extends UniaxialMaterial {
   readonly tensileStrength: number;
   readonly crackingStrain: number;
   readonly confined: boolean;
+  /** Where `crushingStrain` comes from (set by the builder; absent for laws assembled by hand). */
+  readonly ultimateStrain?: UltimateStrainSource;
 }
 
 /** A reinforcing or plate steel law, symmetric in tension and compression. */

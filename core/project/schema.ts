@@ -12,7 +12,7 @@
  * Units: every number is in internal units (mm, N, MPa, N/mm); see docs/project-format.md.
  */
 import { z } from 'zod';
-import { CODE_BASES, CONCRETE_COMPRESSION_MODELS, CONCRETE_TENSION_MODELS, STEEL_MODELS, type ConcreteSpec, type FrpSpec, type SteelSpec } from '../materials/specs.ts';
+import { CODE_BASES, CONCRETE_COMPRESSION_MODELS, CONCRETE_TENSION_MODELS, STEEL_MODELS, ULTIMATE_STRAIN_CHOICES, type ConcreteSpec, type FrpSpec, type SteelSpec } from '../materials/specs.ts';
 import {
   DEFLECTION_LIMIT_CASES, HINGE_LENGTH_METHODS, LOAD_CASES, LOAD_PATTERNS, SUPPORT_TYPES,
   type CapacitySettings, type LoadFactors, type MemberLoad, type MemberZone, type ServiceSettings,
@@ -43,6 +43,7 @@ export const concreteSpecSchema = z.looseObject({
   elasticModulus: number.optional(),
   tensileStrength: number.optional(),
   crushingStrain: number.optional(),
+  ultimateStrain: z.enum(ULTIMATE_STRAIN_CHOICES).optional(),
   peakFactor: number.optional(),
   spallingStrain: number.optional(),
   lightweightFactor: number.optional(),
@@ -251,6 +252,7 @@ export const analysisSettingsSchema = z.looseObject({
   momentDropFraction: number,
   bilinearMethod: z.enum(BILINEAR_METHODS),
   stations: number,
+  concreteUltimateStrain: z.enum(ULTIMATE_STRAIN_CHOICES).optional(),
 });
 
 /** A whole version-2 project file. */

@@ -3,7 +3,7 @@
  * Plain data in internal units (mm, N, MPa); the display unit system only changes what is shown.
  * The file format is documented in docs/project-format.md.
  */
-import type { CodeBasis, MaterialSpec } from '../materials/specs.ts';
+import { DEFAULT_ULTIMATE_STRAIN_CHOICE, type CodeBasis, type MaterialSpec, type UltimateStrainChoice } from '../materials/specs.ts';
 import type { SectionDefinition } from '../section/definition.ts';
 import type { BilinearMethod } from '../section/results.ts';
 import type { BeamDefinition } from '../member/definition.ts';
@@ -44,6 +44,12 @@ export interface AnalysisSettings {
   readonly bilinearMethod: BilinearMethod;
   /** Number of equal integration segments along a span (default 60); zone boundaries, load positions and the control point are added as stations, and service deflections refine the count until it no longer matters (core/member/service.ts). */
   readonly stations: number;
+  /**
+   * Where the ultimate strain εcu of unconfined concrete comes from for every concrete that does not
+   * say (ConcreteSpec.ultimateStrain, crushingStrain): the code basis's value or the law's own
+   * (core/materials/specs.ts ULTIMATE_STRAIN_CHOICES). Absent: `code`.
+   */
+  readonly concreteUltimateStrain?: UltimateStrainChoice;
 }
 
 export interface Project {
@@ -60,4 +66,5 @@ export const DEFAULT_SETTINGS: AnalysisSettings = {
   momentDropFraction: 0.8,
   bilinearMethod: 'priestley-2007',
   stations: 60,
+  concreteUltimateStrain: DEFAULT_ULTIMATE_STRAIN_CHOICE,
 };

@@ -27,7 +27,7 @@ import { validateAsFound, validateSchemes } from '../retrofit/validate.ts';
 import { buildSectionModel, checkBarNumbers, validateShape } from '../section/build.ts';
 import type { SectionDefinition } from '../section/definition.ts';
 import { phrase, q } from '../units/phrase.ts';
-import { materialLibrary } from '../materials/library.ts';
+import { materialLibrary, type MaterialSettings } from '../materials/library.ts';
 import {
   analysisSettingsSchema, materialSpecSchema, memberDefinitionSchema, projectInfoSchema, projectSchema, sectionDefinitionSchema,
   unknownFields, MAX_NESTING,
@@ -205,8 +205,8 @@ export function analysisBlockers(diagnostics: readonly Diagnostic[]): Diagnostic
 const CONFINEMENT_TO_HOOPS: Readonly<Record<string, string>> = { legsX: 'verticalLegs', legsY: 'horizontalLegs', hoopDiameter: 'diameter', spacing: 'spacing' };
 
 /** Section checks of the section builder, with confinement problems placed on the section's hoops. */
-function sectionBuildDiagnostics(section: SectionDefinition, path: string, materials: readonly MaterialSpec[], code: CodeBasis): Diagnostic[] {
-  const resolver = materialLibrary(materials, code);
+function sectionBuildDiagnostics(section: SectionDefinition, path: string, materials: readonly MaterialSpec[], code: CodeBasis, settings: MaterialSettings): Diagnostic[] {
+  const resolver = materialLibrary(materials, code, settings);
   const out: Diagnostic[] = [];
   try {
     const { warnings } = buildSectionModel(section, resolver, path);
@@ -292,6 +292,7 @@ export function validateProjectData(data: unknown): { project: Project | null; d
   const system: UnitSystem = infoData?.unitSystem ?? 'si';
   const code = infoData?.codeBasis;
   const semantic: Diagnostic[] = [];
+  const ultimateStrain = settings.ok ? (data.settings as Project['settings']).concreteUltimateStrain : undefined;
 
   // Project information and settings.
   if (infoData) {
@@ -317,7 +318,7 @@ export function validateProjectData(data: unknown): { project: Project | null; d
   for (const m of materialSpecs) if (!materialById.has(m.id)) materialById.set(m.id, m);
   for (const { value: spec, index } of materials) {
     const path = itemPath('materials', index, spec);
-    if (spec.kind === 'concrete') semantic.push(...guarded(path, () => validateConcreteSpec(spec as ConcreteSpec, path, code ? { code } : {})));
+    if (spec.kind === 'concrete') semantic.push(...guarded(path, () => validateConcreteSpec(spec as ConcreteSpec, path, code ? { code, ...(ultimateStrain ? { ultimateStrain } : {}) } : {})));
     else if (spec.kind === 'steel') semantic.push(...guarded(path, () => validateSteelSpec(spec as SteelSpec, path)));
     else semantic.push(...guarded(path, () => validateFrpSpec(spec as FrpSpec, path)));
   }
@@ -338,7 +339,7 @@ export function validateProjectData(data: unknown): { project: Project | null; d
     // a count of 1e9 would exhaust memory, so the bars' numbers are checked here first.
     const barsOk = barLayerPrecheck(semantic, section, path);
     const referencesOk = semantic.length === before;
-    if (code && referencesOk && barsOk) semantic.push(...guarded(path, () => sectionBuildDiagnostics(section, path, materialSpecs, code)));
+    if (code && referencesOk && barsOk) semantic.push(...guarded(path, () => sectionBuildDiagnostics(section, path, materialSpecs, code, { ...(ultimateStrain ? { concreteUltimateStrain: ultimateStrain } : {}) })));
     else semantic.push(...guarded(path, () => validateShape(section.shape, `${path}.shape`))); // the shape is still checked
   }
 

@@ -4,7 +4,7 @@
  * in) and its published sources (`references`). Nothing is computed here beyond resolving the
  * inputs exactly as the analysis did (core/materials/library.ts, core/section/build.ts).
  */
-import { resolveConcrete } from '../materials/build/concrete-defaults.ts';
+import { resolveConcrete, ultimateStrainWords } from '../materials/build/concrete-defaults.ts';
 import type { CodeBasis, ConcreteSpec, SteelSpec } from '../materials/specs.ts';
 import type { ConcreteMaterial, SteelMaterial } from '../materials/types.ts';
 import { materialLibrary } from '../materials/library.ts';
@@ -27,7 +27,7 @@ export interface MaterialLine {
 
 /** Resolved section models by section id (null when the section cannot be built). */
 export function sectionModels(project: Project): (id: string) => SectionModel | null {
-  const materials = materialLibrary(project.materials, project.info.codeBasis);
+  const materials = materialLibrary(project.materials, project.info.codeBasis, project.settings);
   const cache = new Map<string, SectionModel | null>();
   return (id) => {
     if (cache.has(id)) return cache.get(id)!;
@@ -45,15 +45,15 @@ export function sectionModels(project: Project): (id: string) => SectionModel | 
   };
 }
 
-function concreteParameters(spec: ConcreteSpec, law: ConcreteMaterial, code: CodeBasis, f: ReportFormatter): string[] {
-  const r = resolveConcrete(spec, code);
+function concreteParameters(spec: ConcreteSpec, law: ConcreteMaterial, code: CodeBasis, f: ReportFormatter, settings: Project['settings']): string[] {
+  const r = resolveConcrete(spec, code, settings.concreteUltimateStrain);
   const out: string[] = [];
   if (code === 'EN 1992-1-1') out.push(`fck = ${f.concreteStress(spec.strength)} (fcm = ${f.concreteStress(r.modelStrength)})`);
   else out.push(`f′c = ${f.concreteStress(spec.strength)}`);
   out.push(`peak stress of the law ${f.concreteStress(law.peakStress)} at ε = ${f.strain(law.peakStrain)}`);
   out.push(`Ec = ${f.modulus(r.elasticModulus)}${spec.elasticModulus === undefined ? ' (code value)' : ' (given)'}`);
   out.push(`tensile strength ${f.concreteStress(r.tensileStrength)}${spec.tensileStrength === undefined ? (code === 'ACI 318-19' ? ' (fr, code value)' : ' (fctm, code value)') : ' (given)'}`);
-  out.push(`crushing strain εcu = ${f.strain(law.crushingStrain)}`);
+  out.push(`ultimate strain of unconfined concrete εcu = ${f.strain(law.crushingStrain)}${law.ultimateStrain ? ` (${ultimateStrainWords(law.ultimateStrain)})` : ''}`);
   out.push(`density ${f.density(spec.density ?? 2400)}`);
   out.push(`creep coefficient φ = ${f.number(spec.creepCoefficient ?? 2.0)}, free shrinkage εcs = ${f.strain(spec.shrinkageStrain ?? 0.0004)}`);
   return out;
@@ -73,7 +73,7 @@ function steelParameters(spec: SteelSpec, law: SteelMaterial, f: ReportFormatter
  */
 export function materialLines(project: Project, sections: readonly SectionDefinition[], f: ReportFormatter): MaterialLine[] {
   const code = project.info.codeBasis;
-  const materials = materialLibrary(project.materials, code);
+  const materials = materialLibrary(project.materials, code, project.settings);
   const models = sectionModels(project);
   const lines: MaterialLine[] = [];
   const seen = new Set<string>();
@@ -82,7 +82,7 @@ export function materialLines(project: Project, sections: readonly SectionDefini
     const cover = spec ? materials.concrete(section.concreteId)?.cover : undefined;
     if (spec && cover && !seen.has(`concrete:${spec.id}`)) {
       seen.add(`concrete:${spec.id}`);
-      lines.push({ name: `${spec.name} (concrete)`, law: cover.label, parameters: concreteParameters(spec, cover, code, f), references: cover.references });
+      lines.push({ name: `${spec.name} (concrete)`, law: cover.label, parameters: concreteParameters(spec, cover, code, f, project.settings), references: cover.references });
     }
   }
   const steelIds = [...new Set(sections.flatMap((s) => [...s.bars.map((b) => b.steelId), ...(s.hoops ? [s.hoops.steelId] : [])]))];
@@ -101,7 +101,7 @@ export function materialLines(project: Project, sections: readonly SectionDefini
     lines.push({
       name: `${materials.concreteSpec(section.concreteId)?.name ?? section.concreteId}, confined core of section ${section.name}`,
       law: m.label,
-      parameters: [`f′cc = ${f.concreteStress(m.peakStress)} at εcc = ${f.strain(m.peakStrain)}`, `core crushing strain εcu = ${f.strain(m.crushingStrain)}`],
+      parameters: [`f′cc = ${f.concreteStress(m.peakStress)} at εcc = ${f.strain(m.peakStrain)}`, `core crushing strain εcu = ${f.strain(m.crushingStrain)}${m.ultimateStrain ? ` (${m.ultimateStrain.source})` : ''}`],
       references: m.references,
     });
   }

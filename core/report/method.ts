@@ -10,6 +10,7 @@ import { pageOf } from './context.ts';
 import type { MemberPlan } from './figures.ts';
 import { CAUTION_TEXT, bullets, cautionBox, h2, heading, keepTogether, STYLES } from './layout.ts';
 import { materialLines, usesTensionStiffening } from './materials.ts';
+import { materialMethodParagraphs } from './method-materials.ts';
 import { citationMarker, hingeLengthReference, METHOD_REFERENCES } from './references.ts';
 import type { Content } from './types.ts';
 
@@ -53,6 +54,7 @@ export function methodChapter(ctx: WriteContext): Content[] {
       title: 'Sections',
       text: `Each cross-section is analysed once for its moment–curvature relation under increasing curvature, in each bending direction that has tension reinforcement, assuming that plane sections remain plane and that the reinforcement is perfectly bonded to the concrete. The concrete is divided into depth strips that follow the outline; stresses from the stress–strain laws of the materials (listed with their sources in each section's chapter) are integrated over the depth, with the integration split wherever a law changes branch. At each curvature the depth of the neutral axis follows from equilibrium with the axial force. Cracking, first yield of the reinforcement, the code crushing strain of the concrete (${aci ? `0.003 ${cite('ACI 318-19 22.2.2.1', 'crushing strain 0.003')}` : `εcu2 ${cite('EN 1992-1-1 Table 3.1', 'strain limits εcu2, εc1, εcu1')}`}), the nominal point (εc = 0.004 or εs = 0.015, whichever comes first), the peak moment and ultimate are located exactly between curvature steps. Ultimate is the first of: crushing of the concrete that governs (the confined core where the hoops confine it, the cover spalling), rupture of the reinforcement, or the moment falling below ${f.fixed(project.settings.momentDropFraction * 100, 0)} % of its post-yield peak.`,
     },
+    ...materialMethodParagraphs(project, cite),
     {
       title: 'Idealisation',
       text: project.settings.bilinearMethod === 'priestley-2007'

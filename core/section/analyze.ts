@@ -6,6 +6,7 @@
 import { InputError, type Diagnostic } from '../diagnostics.ts';
 import type { CodeBasis } from '../materials/specs.ts';
 import { en1992ParabolaUltimateStrain } from '../materials/code/en1992.ts';
+import { ACI_CRUSHING_STRAIN } from '../materials/code/aci318.ts';
 import { combineConcrete } from '../materials/concrete/combine.ts';
 import { en1992ParabolaRectangleCompression } from '../materials/concrete/en1992-parabola-rectangle.ts';
 import { noTension } from '../materials/concrete/tension.ts';
@@ -117,8 +118,10 @@ export function analyzeSectionShortTerm(definition: SectionDefinition, path: str
   }
   const spec = materials.concreteSpec(definition.concreteId)!;
   const code = options.code;
-  const crushing = code === 'ACI 318-19' ? 0.003 : en1992ParabolaUltimateStrain(spec.strength);
-  const mcOptions: MomentCurvatureOptions = { codeCrushingStrain: crushing, momentDropFraction: options.momentDropFraction, bilinearMethod: options.bilinearMethod };
+  // The code crushing point that code checks read: ACI 318-19 22.2.2.1, EN 1992-1-1 Table 3.1 εcu2 (3.1.7).
+  const crushing = code === 'ACI 318-19' ? ACI_CRUSHING_STRAIN : en1992ParabolaUltimateStrain(spec.strength);
+  const codeCrushingSource = code === 'ACI 318-19' ? 'ACI 318-19 22.2.2.1' : 'EN 1992-1-1 Table 3.1 εcu2';
+  const mcOptions: MomentCurvatureOptions = { codeCrushingStrain: crushing, codeCrushingSource, momentDropFraction: options.momentDropFraction, bilinearMethod: options.bilinearMethod };
   const curves = curvesOf(model, mcOptions, warnings, 'Short-term');
   const density = spec.density ?? 2400;
   return {

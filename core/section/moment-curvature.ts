@@ -22,7 +22,8 @@ import { CurveSolver, type Snapshot } from './curve-solver.ts';
 import type { EquilibriumState } from './equilibrium.ts';
 import { idealise } from './idealise.ts';
 import { directionSign, tensionSteel, type BendingDirection, type ConcretePart, type SectionModel } from './model.ts';
-import type { BilinearMethod, CurvePoint, CurveStatus, KeyPoint, KeyPointName, MomentCurvatureResult, UltimateCause } from './results.ts';
+import type { BilinearMethod, ConcreteStrainLimits, CurvePoint, CurveStatus, KeyPoint, KeyPointName, MomentCurvatureResult, UltimateCause } from './results.ts';
+import { ultimateStrainWords } from '../materials/build/concrete-defaults.ts';
 import { curvePointOf, sectionState } from './state.ts';
 import { phrase, q } from '../units/phrase.ts';
 
@@ -32,6 +33,8 @@ export interface MomentCurvatureOptions {
    * 0.0035 (EN 1992-1-1 Table 3.1, εcu2 for fck ≤ 50 MPa).
    */
   readonly codeCrushingStrain: number;
+  /** Clause of the code crushing strain, for the key point's description (e.g. `ACI 318-19 22.2.2.1`). */
+  readonly codeCrushingSource?: string;
   /** Fraction of the post-yield peak below which the curve ends (default 0.8). */
   readonly momentDropFraction?: number;
   /** Bilinear idealisation method (default 'priestley-2007'). */
@@ -63,6 +66,7 @@ export function momentCurvature(model: SectionModel, direction: BendingDirection
   const growth = options.postYieldGrowth ?? 0.08;
   const maxSteps = options.maxSteps ?? 600;
   const warnings: string[] = [];
+  const limits = concreteLimits(model, direction, options);
   const solver = new CurveSolver(model, sign);
   const drop: DropState = { yielded: false, dropReference: 0 };
   const events = curveEvents(model, direction, { codeCrushingStrain: options.codeCrushingStrain, dropFraction: options.momentDropFraction ?? 0.8 }, drop);
@@ -81,13 +85,13 @@ export function momentCurvature(model: SectionModel, direction: BendingDirection
 
   const start = solver.solve(0);
   if (typeof start === 'string') {
-    return emptyResult(direction, start, solver.solves);
+    return emptyResult(direction, start, solver.solves, limits);
   }
   snapshots.push({ kappa: 0, eq: start });
   let previous = snapshots[0]!;
   let previousG = evaluateAll(previous.eq);
   if (ULTIMATE_EVENTS.some((n) => enabled[n] && previousG[n] >= 0)) {
-    return emptyResult(direction, 'the section is already at a limit state under the axial force alone', solver.solves);
+    return emptyResult(direction, 'the section is already at a limit state under the axial force alone', solver.solves, limits);
   }
 
   const referenceStrain = Math.max(0.002, ...steelInTension.map((e) => e.material.yieldStrain!));
@@ -209,7 +213,7 @@ export function momentCurvature(model: SectionModel, direction: BendingDirection
   snapshots.sort((p, q) => p.kappa - q.kappa);
   const sampled = refineByChord(snapshots, solver);
   keyAt.peak = peakSnapshot(sampled, sign, solver);
-  return curveResult(model, direction, { status, ultimateCause, points: sampled, keyAt, governing: events.governing, warnings, bilinearMethod: options.bilinearMethod ?? 'priestley-2007', solves: solver.solves });
+  return curveResult(model, direction, { status, ultimateCause, limits, points: sampled, keyAt, governing: events.governing, warnings, bilinearMethod: options.bilinearMethod ?? 'priestley-2007', solves: solver.solves });
 }
 
 /** The curve's result from its sampled states and key points, with the warnings an engineer must see. */
@@ -219,6 +223,7 @@ function curveResult(
   c: {
     status: CurveStatus;
     ultimateCause: UltimateCause | undefined;
+    limits: ConcreteStrainLimits;
     points: readonly Snapshot[];
     keyAt: Partial<Record<KeyPointName, Snapshot>>;
     governing: readonly ConcretePart[];
@@ -227,12 +232,12 @@ function curveResult(
     solves: number;
   },
 ): MomentCurvatureResult {
-  const { status, ultimateCause, keyAt, warnings } = c;
+  const { status, ultimateCause, keyAt, warnings, limits } = c;
   const points: CurvePoint[] = c.points.map((s) => curvePointOf(model, direction, s.eq.curvature, s.eq.referenceStrain, s.eq.moment, s.eq.residual));
   const keyPoints: Partial<Record<KeyPointName, KeyPoint>> = {};
   for (const [name, snap] of Object.entries(keyAt) as [KeyPointName, Snapshot][]) {
     const state = sectionState(model, direction, snap.eq.curvature, snap.eq.referenceStrain, snap.eq.moment, snap.eq.residual);
-    keyPoints[name] = { ...state.point, name, description: describeKeyPoint(name, ultimateCause), state };
+    keyPoints[name] = { ...state.point, name, description: describeKeyPoint(name, ultimateCause, limits), state };
   }
 
   const fy = keyPoints.firstYield;
@@ -259,6 +264,7 @@ function curveResult(
   return {
     direction,
     status,
+    concreteLimits: limits,
     points,
     keyPoints,
     ...(bilinear ? { bilinear } : {}),
@@ -280,20 +286,46 @@ function ultimateMessage(cause: UltimateCause): string {
   }
 }
 
-function describeKeyPoint(name: KeyPointName, cause: UltimateCause | undefined): string {
+/** A strain in per mille for descriptions: 0.003 → "3.00 ‰". */
+function permille(strain: number): string {
+  return `${(strain * 1000).toFixed(2)} ‰`;
+}
+
+function describeKeyPoint(name: KeyPointName, cause: UltimateCause | undefined, limits: ConcreteStrainLimits): string {
+  const code = `${permille(limits.codeCrushingStrain)}${limits.codeCrushingSource ? `, ${limits.codeCrushingSource}` : ''}`;
+  const u = limits.ultimateStrain;
+  const ultimate = u ? `εcu = ${permille(u.value)} (${ultimateStrainWords(u)})` : undefined;
   switch (name) {
     case 'cracking': return 'extreme tension fibre reaches the tensile strength of the concrete';
     case 'firstYield': return 'outermost tension steel reaches its yield strain';
-    case 'codeCrushing': return 'extreme compression fibre reaches the code crushing strain';
+    case 'codeCrushing': return `extreme compression fibre reaches the code crushing strain (${code})`;
     case 'nominal': return `nominal point: εc = ${NOMINAL_CONCRETE_STRAIN} or εs = ${NOMINAL_STEEL_STRAIN}, whichever first`;
     case 'peak': return 'largest moment on the curve';
-    case 'ultimate': return cause ? ultimateMessage(cause).replace('Ultimate: ', '') : 'end of the curve';
+    case 'ultimate': {
+      if (!cause) return 'end of the curve';
+      if ((cause === 'concrete-crushing' || cause === 'core-crushing') && ultimate) {
+        return cause === 'core-crushing' ? `the confined core reaches its ultimate strain ${ultimate}` : `the extreme concrete fibre reaches its ultimate strain ${ultimate}`;
+      }
+      const words = ultimateMessage(cause).replace('Ultimate: ', '').replace(/\.$/, '');
+      return ultimate ? `${words} before the concrete reaches ${ultimate}` : words;
+    }
   }
 }
 
-function emptyResult(direction: BendingDirection, reason: string, solves: number): MomentCurvatureResult {
+/** The strain limits of a curve: the code crushing point, and the ultimate strain of the concrete that governs crushing. */
+function concreteLimits(model: SectionModel, direction: BendingDirection, options: MomentCurvatureOptions): ConcreteStrainLimits {
+  const governing = model.concreteParts.filter((p) => p.governsCrushing);
+  // The governing part nearest the compression face decides (a topping or jacket over the substrate).
+  const nearest = governing.reduce<ConcretePart | undefined>((best, p) => (!best || (direction === 'sagging' ? p.top < best.top : p.bottom > best.bottom) ? p : best), undefined);
+  const material = nearest?.material;
+  const ultimateStrain = material ? (material.ultimateStrain ?? { value: material.crushingStrain, basis: 'law' as const, source: material.label }) : null;
+  return { codeCrushingStrain: options.codeCrushingStrain, codeCrushingSource: options.codeCrushingSource ?? '', ultimateStrain };
+}
+
+function emptyResult(direction: BendingDirection, reason: string, solves: number, concreteLimits: ConcreteStrainLimits): MomentCurvatureResult {
   return {
     direction,
+    concreteLimits,
     status: { kind: 'not-converged', atCurvature: 0, message: `No equilibrium at zero curvature: ${reason}.` },
     points: [],
     keyPoints: {},

@@ -5,6 +5,7 @@
  * Curvatures and moments are MAGNITUDES in the stated bending direction.
  */
 import type { Text } from '../units/phrase.ts';
+import type { UltimateStrainSource } from '../materials/types.ts';
 import type { BendingDirection, ElementKind } from './model.ts';
 
 /** Bilinear idealisations of a moment–curvature curve (core/section/idealise.ts), in menu order. */
@@ -102,9 +103,23 @@ export interface BilinearIdealisation {
   readonly description: string;
 }
 
+/** The concrete strain limits a curve was computed with (strains dimensionless, compression positive). */
+export interface ConcreteStrainLimits {
+  /** Strain of the code crushing key point that code checks read (ACI 318-19 0.003, EN 1992-1-1 εcu2), and its clause. */
+  readonly codeCrushingStrain: number;
+  readonly codeCrushingSource: string;
+  /**
+   * Ultimate strain of the concrete whose crushing ends the curve (the confined core when there is
+   * one) and how it was chosen; null when no concrete part governs crushing or its law says nothing.
+   */
+  readonly ultimateStrain: UltimateStrainSource | null;
+}
+
 export interface MomentCurvatureResult {
   readonly direction: BendingDirection;
   readonly status: CurveStatus;
+  /** The concrete strain limits of this curve: the code crushing point and the best-estimate ultimate. */
+  readonly concreteLimits: ConcreteStrainLimits;
   readonly points: readonly CurvePoint[];
   readonly keyPoints: Partial<Record<KeyPointName, KeyPoint>>;
   readonly bilinear?: BilinearIdealisation;

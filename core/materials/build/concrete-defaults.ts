@@ -1,6 +1,9 @@
-import type { CodeBasis, ConcreteSpec } from '../specs.ts';
+import { DEFAULT_ULTIMATE_STRAIN_CHOICE, type CodeBasis, type ConcreteCompressionModel, type ConcreteSpec, type UltimateStrainChoice } from '../specs.ts';
+import type { UltimateStrainSource } from '../types.ts';
 import { ACI_CRUSHING_STRAIN, aciElasticModulus, aciModulusOfRupture } from '../code/aci318.ts';
-import { en1992ElasticModulus, en1992MeanStrength, en1992MeanTensileStrength, en1992PeakStrain, en1992UltimateStrainNonlinear } from '../code/en1992.ts';
+import { en1992ElasticModulus, en1992MeanStrength, en1992MeanTensileStrength, en1992ParabolaUltimateStrain, en1992PeakStrain, en1992UltimateStrainNonlinear } from '../code/en1992.ts';
+import { HOGNESTAD_ULTIMATE_STRAIN } from '../concrete/hognestad.ts';
+import { UNCONFINED_ULTIMATE_STRAIN } from '../concrete/mander-confinement.ts';
 
 /**
  * The numbers a concrete law is built from once the code basis has filled in what the spec leaves
@@ -23,14 +26,66 @@ export interface ResolvedConcrete {
   readonly strainsFck: number;
   /** Strain at peak of the code basis for models that need one: EN εc1; undefined under ACI (model default). */
   readonly codePeakStrain: number | undefined;
+  /** The ultimate strain of the unconfined law and where it comes from (see ULTIMATE_STRAIN_CHOICES). */
+  readonly ultimateStrain: UltimateStrainSource;
+  /** True when `law` was asked for and the law publishes no ultimate strain (the code value is used). */
+  readonly lawHasNoUltimateStrain: boolean;
+}
+
+/** The code basis's εcu for a compression model (dimensionless) and its clause. */
+function codeUltimateStrain(model: ConcreteCompressionModel, code: CodeBasis, fck: number): UltimateStrainSource {
+  if (code === 'ACI 318-19') return { value: ACI_CRUSHING_STRAIN, basis: 'code', source: 'ACI 318-19 22.2.2.1' };
+  if (model === 'en1992-parabola-rectangle') return { value: en1992ParabolaUltimateStrain(fck), basis: 'code', source: 'EN 1992-1-1 Table 3.1 εcu2' };
+  return { value: en1992UltimateStrainNonlinear(fck), basis: 'code', source: 'EN 1992-1-1 Table 3.1 εcu1' };
+}
+
+/**
+ * The ultimate strain published with a law for unconfined concrete, or undefined when the law has none.
+ *  - Hognestad (1951): 0.0038, the end of the linear descent.
+ *  - Modified Kent–Park (Scott, Park & Priestley 1982): εcu = 0.004 + 0.9 ρs fyh/300, 0.004 without hoops.
+ *  - Mander et al. (1988): the unconfined curve is measured to 2εco and assumed straight beyond; the
+ *    ultimate strain of Priestley, Seible & Calvi (1996) εcu = 0.004 + 1.4 ρs fyh εsu/f′cc gives 0.004
+ *    without hoops (from memory).
+ *  - EN 1992-1-1 Eq. (3.14): εcu1; parabola–rectangle: εcu2 (Table 3.1).
+ *  - Popovics (1973) and Thorenfeldt et al. (1987): curves without an end strain.
+ */
+export function lawUltimateStrain(model: ConcreteCompressionModel, fck: number): UltimateStrainSource | undefined {
+  switch (model) {
+    case 'hognestad': return { value: HOGNESTAD_ULTIMATE_STRAIN, basis: 'law', source: 'Hognestad (1951)' };
+    case 'modified-kent-park': return { value: UNCONFINED_ULTIMATE_STRAIN, basis: 'law', source: 'Scott, Park & Priestley (1982), without hoops' };
+    case 'mander': return { value: UNCONFINED_ULTIMATE_STRAIN, basis: 'law', source: 'Mander et al. (1988) with Priestley, Seible & Calvi (1996), without hoops' };
+    case 'en1992-nonlinear': return { value: en1992UltimateStrainNonlinear(fck), basis: 'law', source: 'EN 1992-1-1 Table 3.1 εcu1' };
+    case 'en1992-parabola-rectangle': return { value: en1992ParabolaUltimateStrain(fck), basis: 'law', source: 'EN 1992-1-1 Table 3.1 εcu2' };
+    case 'popovics':
+    case 'thorenfeldt-collins':
+      return undefined;
+  }
+}
+
+/** How an ultimate strain was chosen, in words: `code value, ACI 318-19 22.2.2.1`. */
+export function ultimateStrainWords(u: UltimateStrainSource): string {
+  switch (u.basis) {
+    case 'code': return `code value, ${u.source}`;
+    case 'law': return `value of the law, ${u.source}`;
+    case 'user': return 'entered by the engineer';
+    case 'confinement': return u.source;
+  }
 }
 
 /**
  * Fills the code-basis defaults into a concrete spec. Assumes the spec's numbers were validated.
+ * @param defaultChoice where εcu comes from when the spec says nothing (the project's setting)
  * @see ACI 318-19 19.2.2.1, 19.2.3.1, 22.2.2.1; EN 1992-1-1 Table 3.1
  */
-export function resolveConcrete(spec: ConcreteSpec, code: CodeBasis): ResolvedConcrete {
+export function resolveConcrete(spec: ConcreteSpec, code: CodeBasis, defaultChoice: UltimateStrainChoice = DEFAULT_ULTIMATE_STRAIN_CHOICE): ResolvedConcrete {
   const fc = spec.strength;
+  const choice = spec.ultimateStrain ?? defaultChoice;
+  const codeValue = codeUltimateStrain(spec.compressionModel, code, fc);
+  const lawValue = lawUltimateStrain(spec.compressionModel, fc);
+  const ultimateStrain: UltimateStrainSource = spec.crushingStrain !== undefined
+    ? { value: spec.crushingStrain, basis: 'user', source: 'entered by the engineer' }
+    : choice === 'law' && lawValue ? lawValue : codeValue;
+  const lawHasNoUltimateStrain = spec.crushingStrain === undefined && choice === 'law' && lawValue === undefined;
   if (code === 'EN 1992-1-1') {
     return {
       code,
@@ -40,6 +95,8 @@ export function resolveConcrete(spec: ConcreteSpec, code: CodeBasis): ResolvedCo
       codeCrushingStrain: en1992UltimateStrainNonlinear(fc),
       strainsFck: fc,
       codePeakStrain: en1992PeakStrain(fc),
+      ultimateStrain,
+      lawHasNoUltimateStrain,
     };
   }
   return {
@@ -50,5 +107,7 @@ export function resolveConcrete(spec: ConcreteSpec, code: CodeBasis): ResolvedCo
     codeCrushingStrain: ACI_CRUSHING_STRAIN,
     strainsFck: fc,
     codePeakStrain: undefined,
+    ultimateStrain,
+    lawHasNoUltimateStrain,
   };
 }

@@ -1,7 +1,7 @@
 import { diagnostic, InputError, type AllowedRange, type Diagnostic } from '../../diagnostics.ts';
 import { phrase, q } from '../../units/phrase.ts';
-import { CODE_BASES, CONCRETE_COMPRESSION_MODELS, CONCRETE_TENSION_MODELS, type CodeBasis, type ConcreteCompressionModel, type ConcreteSpec, type ConfinementInput } from '../specs.ts';
-import type { CompressionLaw, ConcreteMaterial, TensionLaw } from '../types.ts';
+import { CODE_BASES, CONCRETE_COMPRESSION_MODELS, CONCRETE_TENSION_MODELS, ULTIMATE_STRAIN_CHOICES, type CodeBasis, type ConcreteCompressionModel, type ConcreteSpec, type ConfinementInput, type UltimateStrainChoice } from '../specs.ts';
+import type { CompressionLaw, ConcreteMaterial, TensionLaw, UltimateStrainSource } from '../types.ts';
 import { checkField, fieldPath } from '../checks.ts';
 import { combineConcrete } from '../concrete/combine.ts';
 import { en1992NonlinearCompression } from '../concrete/en1992-nonlinear.ts';
@@ -13,7 +13,7 @@ import { modifiedKentParkCompression } from '../concrete/modified-kent-park.ts';
 import { popovicsCompression } from '../concrete/popovics.ts';
 import { linearBrittleTension, noTension, tensionStiffening } from '../concrete/tension.ts';
 import { thorenfeldtCollinsCompression, thorenfeldtCollinsConstants } from '../concrete/thorenfeldt-collins.ts';
-import { en1992PeakStrain, en1992UltimateStrainNonlinear } from '../code/en1992.ts';
+import { en1992PeakStrain } from '../code/en1992.ts';
 import { checkIdentity, checkOption, collectLawDiagnostics, pathMapper } from './common.ts';
 import { resolveConcrete, type ResolvedConcrete } from './concrete-defaults.ts';
 /** Compression models with a confined-core form. */
@@ -28,6 +28,8 @@ export interface ConcreteBuildOptions {
   readonly path?: string;
   /** Path of the confinement input, for diagnostics. Default `confinement`. */
   readonly confinementPath?: string;
+  /** Where εcu of unconfined concrete comes from when the spec says nothing (the project's setting). */
+  readonly ultimateStrain?: UltimateStrainChoice;
 }
 
 /** Options of validateConcreteSpec. */
@@ -41,15 +43,16 @@ export interface ConcreteValidationOptions extends ConcreteBuildOptions {
 function coverCompression(spec: ConcreteSpec, r: ResolvedConcrete): CompressionLaw {
   const fc = r.modelStrength;
   const Ec = r.elasticModulus;
+  const crushingStrain = r.ultimateStrain.value;
   switch (spec.compressionModel) {
     case 'hognestad':
-      return hognestadCompression({ compressiveStrength: fc, elasticModulus: Ec, peakFactor: spec.peakFactor, crushingStrain: spec.crushingStrain });
+      return hognestadCompression({ compressiveStrength: fc, elasticModulus: Ec, peakFactor: spec.peakFactor, crushingStrain });
     case 'modified-kent-park':
-      return modifiedKentParkCompression({ compressiveStrength: fc, crushingStrain: spec.crushingStrain });
+      return modifiedKentParkCompression({ compressiveStrength: fc, crushingStrain });
     case 'mander':
       return manderUnconfinedCompression({
         compressiveStrength: fc, elasticModulus: Ec, peakStrain: r.codePeakStrain ?? MANDER_DEFAULT_PEAK_STRAIN,
-        spallingStrain: spec.spallingStrain, crushingStrain: spec.crushingStrain ?? r.codeCrushingStrain,
+        spallingStrain: spec.spallingStrain, crushingStrain,
       });
     case 'popovics':
       // Under ACI the strain at peak follows the n/(n − 1) relation of Collins & Mitchell (1991), which
@@ -57,18 +60,24 @@ function coverCompression(spec: ConcreteSpec, r: ResolvedConcrete): CompressionL
       return popovicsCompression({
         compressiveStrength: fc, elasticModulus: Ec,
         peakStrain: r.codePeakStrain ?? thorenfeldtCollinsConstants(fc, Ec).peakStrain,
-        crushingStrain: spec.crushingStrain ?? r.codeCrushingStrain,
+        crushingStrain,
       });
     case 'thorenfeldt-collins':
-      return thorenfeldtCollinsCompression({ compressiveStrength: fc, elasticModulus: Ec, crushingStrain: spec.crushingStrain ?? r.codeCrushingStrain });
+      return thorenfeldtCollinsCompression({ compressiveStrength: fc, elasticModulus: Ec, crushingStrain });
     case 'en1992-nonlinear':
-      return en1992NonlinearCompression({
-        meanStrength: fc, elasticModulus: Ec, peakStrain: en1992PeakStrain(r.strainsFck),
-        crushingStrain: spec.crushingStrain ?? en1992UltimateStrainNonlinear(r.strainsFck),
-      });
+      return en1992NonlinearCompression({ meanStrength: fc, elasticModulus: Ec, peakStrain: en1992PeakStrain(r.strainsFck), crushingStrain });
     case 'en1992-parabola-rectangle':
-      return en1992ParabolaRectangleCompression({ strength: spec.strength, characteristicStrength: r.strainsFck, crushingStrain: spec.crushingStrain });
+      return en1992ParabolaRectangleCompression({ strength: spec.strength, characteristicStrength: r.strainsFck, crushingStrain });
   }
+}
+
+/** Where the confined core's ultimate strain comes from (the hoop-fracture expression of its model). */
+function coreUltimateSource(spec: ConcreteSpec, law: CompressionLaw): UltimateStrainSource {
+  return {
+    value: law.crushingStrain,
+    basis: 'confinement',
+    source: spec.compressionModel === 'mander' ? 'first hoop fracture, Priestley, Seible & Calvi (1996)' : 'first hoop fracture, Scott, Park & Priestley (1982)',
+  };
 }
 
 /** Confined-core law for the models that have one; undefined for the others. */
@@ -109,6 +118,7 @@ function checkFields(out: Diagnostic[], spec: ConcreteSpec, path: string): boole
   checkField(out, at('strength'), 'concrete compressive strength', spec.strength, CONCRETE_STRENGTH_RANGE);
   checkOption(out, at('compressionModel'), 'concrete compression model', spec.compressionModel, CONCRETE_COMPRESSION_MODELS);
   checkOption(out, at('tensionModel'), 'concrete tension model', spec.tensionModel, CONCRETE_TENSION_MODELS);
+  if (spec.ultimateStrain !== undefined) checkOption(out, at('ultimateStrain'), 'source of the ultimate strain εcu', spec.ultimateStrain, ULTIMATE_STRAIN_CHOICES);
   const optional: [keyof ConcreteSpec, string, AllowedRange][] = [
     ['elasticModulus', 'concrete elastic modulus Ec', { min: 5_000, max: 70_000, quantity: 'modulus' }],
     ['tensileStrength', 'concrete tensile strength', { min: 0, exclusiveMin: true, max: 15, quantity: 'concreteStress' }],
@@ -162,8 +172,12 @@ export function validateConcreteSpec(spec: ConcreteSpec, path = 'material', opti
     out.push({ code: 'inconsistent', path: fieldPath(path, 'lightweightFactor'), severity: 'warning', message: 'the lightweight factor λ belongs to ACI 318-19 and is ignored under EN 1992-1-1' });
   }
   if (!checkTableRange(out, spec, code, path)) return out;
-  const r = resolveConcrete(spec, code);
+  const r = resolveConcrete(spec, code, options.ultimateStrain);
   const at = (field: string): string => fieldPath(path, field);
+  if (r.lawHasNoUltimateStrain) {
+    out.push({ code: 'inconsistent', path: at('ultimateStrain'), severity: 'warning',
+      message: `the ${spec.compressionModel} law publishes no ultimate strain of its own: εcu = ${r.ultimateStrain.value} of the code basis (${r.ultimateStrain.source}) is used; enter a value to use another` });
+  }
   const coverTable = {
     compressiveStrength: at('strength'), meanStrength: at('strength'), strength: at('strength'), characteristicStrength: at('strength'),
     elasticModulus: at('elasticModulus'), crushingStrain: at('crushingStrain'), peakFactor: at('peakFactor'), spallingStrain: at('spallingStrain'),
@@ -208,10 +222,10 @@ export interface ConcreteBuild {
 export function buildConcrete(spec: ConcreteSpec, code: CodeBasis, confinement?: ConfinementInput, options: ConcreteBuildOptions = {}): ConcreteBuild {
   const diagnostics = validateConcreteSpec(spec, options.path ?? 'material', { ...options, code, confinement });
   if (diagnostics.some((d) => d.severity === 'error')) throw new InputError(diagnostics);
-  const r = resolveConcrete(spec, code);
+  const r = resolveConcrete(spec, code, options.ultimateStrain);
   const tension = tensionLaw(spec, r);
-  const cover = combineConcrete(coverCompression(spec, r), tension);
+  const cover: ConcreteMaterial = { ...combineConcrete(coverCompression(spec, r), tension), ultimateStrain: r.ultimateStrain };
   if (confinement === undefined) return { cover, diagnostics };
   const coreLaw = coreCompression(spec, r, confinement);
-  return { cover, core: coreLaw ? combineConcrete(coreLaw, tension) : cover, diagnostics };
+  return { cover, core: coreLaw ? { ...combineConcrete(coreLaw, tension), ultimateStrain: coreUltimateSource(spec, coreLaw) } : cover, diagnostics };
 }

@@ -20,7 +20,11 @@ export interface HognestadParameters {
   readonly elasticModulus: number;
   /** k in f″c = k f′c, 0 < k ≤ 1; default 0.85. */
   readonly peakFactor?: number;
-  /** εcu, end of the descending branch (σ = 0.85 f″c there); default 0.0038. Must exceed ε0. */
+  /**
+   * εcu, where the curve ends (the fibre is crushed); default 0.0038, Hognestad's own. Must exceed ε0.
+   * The descent keeps its published slope (0.15 f″c between ε0 and 0.0038) whatever εcu is: a smaller
+   * εcu cuts the curve short, a larger one follows the same line further (never below zero stress).
+   */
   readonly crushingStrain?: number;
 }
 
@@ -45,7 +49,10 @@ export function validateHognestadParameters(parameters: HognestadParameters, pat
   ].every(Boolean);
   if (ok) {
     const c = hognestadConstants(parameters);
-    if (c.crushingStrain <= c.peakStrain) {
+    if (c.peakStrain >= HOGNESTAD_ULTIMATE_STRAIN) {
+      reportInconsistent(out, fieldPath(path, 'elasticModulus'),
+        `Hognestad: the strain at peak ε0 = 2f″c/Ec = ${show(c.peakStrain)} must be less than ${HOGNESTAD_ULTIMATE_STRAIN}, the end of the published descent; raise Ec or choose a model meant for this strength`);
+    } else if (c.crushingStrain <= c.peakStrain) {
       reportInconsistent(out, fieldPath(path, 'crushingStrain'),
         `Hognestad: the strain at peak ε0 = 2f″c/Ec = ${show(c.peakStrain)} must be less than the crushing strain εcu = ${show(c.crushingStrain)}; raise Ec or εcu, or choose a model meant for this strength`);
     }
@@ -56,8 +63,8 @@ export function validateHognestadParameters(parameters: HognestadParameters, pat
 /**
  * Hognestad (1951) curve for unconfined concrete, compressive magnitudes (strain ≥ 0, MPa):
  *   0 ≤ ε ≤ ε0:   σ = f″c [2ε/ε0 − (ε/ε0)²],          f″c = k f′c, ε0 = 2 f″c / Ec
- *   ε0 < ε ≤ εcu: σ = f″c [1 − 0.15 (ε − ε0)/(εcu − ε0)]  (linear to 0.85 f″c at εcu = 0.0038)
- *   ε > εcu:      σ = 0 (the curve ends; the fibre is crushed).
+ *   ε0 < ε ≤ εcu: σ = f″c [1 − 0.15 (ε − ε0)/(0.0038 − ε0)] ≥ 0  (linear to 0.85 f″c at 0.0038)
+ *   ε > εcu:      σ = 0 (the curve ends; the fibre is crushed). εcu defaults to 0.0038.
  * Initial tangent = Ec; peak f″c at ε0. Throws InputError for invalid parameters.
  * @see Hognestad (1951), Bulletin 399, Fig. 8 (as reproduced in Park & Paulay 1975, Fig. 2.2) — figure number from memory
  */
@@ -73,10 +80,11 @@ export function hognestadCompression(parameters: HognestadParameters): Compressi
         const x = strain / peakStrain;
         return peakStress * (2 * x - x * x);
       }
-      return peakStress * (1 - (0.15 * (strain - peakStrain)) / (crushingStrain - peakStrain));
+      return peakStress * (1 - (0.15 * (strain - peakStrain)) / (HOGNESTAD_ULTIMATE_STRAIN - peakStrain));
     },
     endStrain: crushingStrain,
-    breakpoints: [peakStrain, crushingStrain],
+    // The descent reaches zero stress at ε0 + (0.0038 − ε0)/0.15 (a kink when εcu lies beyond it).
+    breakpoints: [peakStrain, crushingStrain, peakStrain + (HOGNESTAD_ULTIMATE_STRAIN - peakStrain) / 0.15],
     initialModulus: (2 * peakStress) / peakStrain,
     peakStress,
     peakStrain,

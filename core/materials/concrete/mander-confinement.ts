@@ -2,6 +2,12 @@ import type { Diagnostic } from '../../diagnostics.ts';
 import type { ConfinementInput } from '../specs.ts';
 import { checkField, fieldPath, reportInconsistent, show } from '../checks.ts';
 
+/**
+ * Ultimate strain of unconfined concrete, 0.004: the first term of the hoop-fracture expressions of
+ * Scott, Park & Priestley (1982) and Priestley, Seible & Calvi (1996), i.e. their value without hoops.
+ */
+export const UNCONFINED_ULTIMATE_STRAIN = 0.004;
+
 /** Default rupture strain of hoop steel εsu when the input gives none. // common practice, no source */
 export const DEFAULT_HOOP_RUPTURE_STRAIN = 0.1;
 
@@ -44,7 +50,7 @@ export function manderEffectivenessRectangular(
  * @see Priestley, Seible & Calvi (1996), Seismic Design and Retrofit of Bridges, Eq. (5.14) — equation number from memory
  */
 export function priestleyUltimateStrain(volumetricRatio: number, hoopYieldStress: number, hoopRuptureStrain: number, confinedStrength: number): number {
-  return 0.004 + (1.4 * volumetricRatio * hoopYieldStress * hoopRuptureStrain) / confinedStrength;
+  return UNCONFINED_ULTIMATE_STRAIN + (1.4 * volumetricRatio * hoopYieldStress * hoopRuptureStrain) / confinedStrength;
 }
 
 /** Everything the Mander confined law needs, derived from the hoop layout (MPa, mm, strains dimensionless). */

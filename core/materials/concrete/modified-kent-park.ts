@@ -2,6 +2,7 @@ import { throwIfErrors, type Diagnostic } from '../../diagnostics.ts';
 import type { CompressionLaw } from '../types.ts';
 import { checkField, fieldPath, reportInconsistent, show } from '../checks.ts';
 import { compressionLaw } from './compression-law.ts';
+import { UNCONFINED_ULTIMATE_STRAIN } from './mander-confinement.ts';
 
 /** Citation for the report's reference list. */
 export const SCOTT_PARK_PRIESTLEY_REFERENCE =
@@ -57,7 +58,7 @@ export function modifiedKentParkEps50u(fc: number): number {
  * @see Scott, Park & Priestley (1982) — the first hoop fracture criterion
  */
 export function modifiedKentParkUltimateStrain(volumetricRatio: number, hoopYieldStress: number): number {
-  return 0.004 + 0.9 * volumetricRatio * (hoopYieldStress / 300);
+  return UNCONFINED_ULTIMATE_STRAIN + 0.9 * volumetricRatio * (hoopYieldStress / 300);
 }
 
 /** K, ε0, ε50u, ε50h, Zm, the start of the residual plateau and εcu for the given inputs. @see Scott, Park & Priestley (1982) */

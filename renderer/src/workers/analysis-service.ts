@@ -147,7 +147,7 @@ export function createAnalysisService(post: (reply: WorkerReply) => void): Analy
     const key = JSON.stringify([definition, project.materials, project.info.codeBasis]);
     let model = models.get(key);
     if (!model) {
-      model = buildSectionModel(definition, materialLibrary(project.materials, project.info.codeBasis), `sections[${index}] "${definition.name}"`).model;
+      model = buildSectionModel(definition, materialLibrary(project.materials, project.info.codeBasis, project.settings), `sections[${index}] "${definition.name}"`).model;
       if (models.size > 50) models.clear();
       models.set(key, model);
     }

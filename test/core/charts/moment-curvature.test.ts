@@ -13,7 +13,9 @@ describe('moment–curvature chart', () => {
     expect(series.points).toHaveLength(curve.points.length);
     const last = curve.points[curve.points.length - 1]!;
     // 1/mm → 1/m: × 1000; N·mm → kN·m: ÷ 10⁶ (SI prefixes)
-    expect(series.points[series.points.length - 1]).toEqual({ x: last.curvature * 1000, y: last.moment / 1e6 });
+    const end = series.points[series.points.length - 1]!;
+    expect(end.x).toBeCloseTo(last.curvature * 1000, 12);
+    expect(end.y).toBeCloseTo(last.moment / 1e6, 9);
     expect(spec.x.label).toBe('Curvature φ (1/m)');
     expect(spec.y.label).toBe('Moment M (kN·m)');
   });
@@ -30,7 +32,12 @@ describe('moment–curvature chart', () => {
     const b = curve.bilinear!;
     const bilinear = spec.series.find((s) => s.id === 'bilinear-0')!;
     expect(bilinear.style).toBe('dashed');
-    expect(bilinear.points).toEqual([{ x: 0, y: 0 }, { x: b.yieldCurvature * 1000, y: b.yieldMoment / 1e6 }, { x: b.ultimateCurvature * 1000, y: b.ultimateMoment / 1e6 }]);
+    const expected = [{ x: 0, y: 0 }, { x: b.yieldCurvature * 1000, y: b.yieldMoment / 1e6 }, { x: b.ultimateCurvature * 1000, y: b.ultimateMoment / 1e6 }];
+    expect(bilinear.points).toHaveLength(3);
+    bilinear.points.forEach((p, i) => {
+      expect(p.x).toBeCloseTo(expected[i]!.x, 12);
+      expect(p.y).toBeCloseTo(expected[i]!.y, 9);
+    });
   });
 
   it('shows both bending directions side by side, each in its own panel, with one curvature factor', () => {
@@ -82,6 +89,7 @@ describe('moment–curvature chart', () => {
     const empty: MomentCurvatureResult = {
       direction: 'sagging',
       status: { kind: 'not-converged', atCurvature: 0, message: 'No equilibrium at zero curvature: the axial force exceeds the squash load.' },
+      concreteLimits: { codeCrushingStrain: 0.003, codeCrushingSource: 'ACI 318-19 22.2.2.1', ultimateStrain: null },
       points: [],
       keyPoints: {},
       curvatureDuctility: null,

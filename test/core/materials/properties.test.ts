@@ -57,8 +57,9 @@ describe('concrete laws for random valid specs (property tests)', () => {
   it('every concrete spec from 10 to 90 MPa builds under both code bases (no model rejects its normal range)', () => {
     fc.assert(
       fc.property(concreteSpec, ({ code, ...fields }) => {
-        // Hognestad and Mander are limited at high strength by their own formulas (see their validity checks)
-        if ((fields.compressionModel === 'hognestad' || fields.compressionModel === 'mander') && fields.strength > 70) return true;
+        // Hognestad and Mander are limited at high strength by their own formulas (see their validity checks);
+        // Hognestad's ε0 = 2f″c/Ec passes the code's εcu near 68 MPa (ACI 0.003) and 62 MPa (EN εcu1).
+        if ((fields.compressionModel === 'mander' && fields.strength > 70) || (fields.compressionModel === 'hognestad' && fields.strength > 60)) return true;
         buildConcrete({ kind: 'concrete', id: 'p', name: 'P', ...fields }, code);
         return true;
       }),

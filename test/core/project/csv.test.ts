@@ -155,6 +155,7 @@ describe('csvField and csvText', () => {
 const curve: MomentCurvatureResult = {
   direction: 'sagging',
   status: { kind: 'complete', ultimateCause: 'concrete-crushing', message: '' },
+  concreteLimits: { codeCrushingStrain: 0.003, codeCrushingSource: 'ACI 318-19 22.2.2.1', ultimateStrain: null },
   points: [
     { curvature: 0, moment: 0, neutralAxisDepth: null, compressionFaceStrain: 0, tensionFaceStrain: 0, maxSteelTensileStrain: 0, referenceStrain: 0, residual: 0 },
     { curvature: 1 / 25.4e3, moment: 1.3558179483314004e6 * 100, neutralAxisDepth: 127, compressionFaceStrain: 0.001, tensionFaceStrain: -0.004, maxSteelTensileStrain: 0.0035, referenceStrain: 0, residual: 0 },

@@ -8,6 +8,7 @@ import type { MemberResult } from '../../../core/assessment/results.ts';
 function curve(yieldMoment: number, ultimateMoment: number, ductility: number | null): MomentCurvatureResult {
   return {
     direction: 'sagging', status: { kind: 'complete', ultimateCause: 'concrete-crushing', message: '' }, points: [], keyPoints: {},
+      concreteLimits: { codeCrushingStrain: 0.003, codeCrushingSource: 'ACI 318-19 22.2.2.1', ultimateStrain: null },
     bilinear: { method: 'priestley-2007', yieldCurvature: 1e-5, yieldMoment, ultimateCurvature: 1e-4, ultimateMoment, effectiveStiffness: 1, description: '' },
     curvatureDuctility: ductility, firstYieldCurvatureDuctility: null, warnings: [], solves: 0,
   };

@@ -48,6 +48,7 @@ function spec(title: string, moment: number, system: 'si' | 'us' = 'si'): ChartS
     ...momentCurvatureChart({
       direction: 'sagging',
       status: { kind: 'complete', ultimateCause: 'concrete-crushing', message: 'Ultimate: concrete crushing.' },
+      concreteLimits: { codeCrushingStrain: 0.003, codeCrushingSource: 'ACI 318-19 22.2.2.1', ultimateStrain: null },
       points: [point(0, 0), point(1e-6, moment * 0.8), point(5e-5, moment)],
       keyPoints: {},
       curvatureDuctility: null,

@@ -40,19 +40,54 @@ describe('code-basis defaults', () => {
     expect(en.peakStress).toBeCloseTo(0.85 * 38, 12);
   });
 
+  // ACI 318-19 22.2.2.1 (εcu = 0.003); EN 1992-1-1 Table 3.1 (εcu1 = εcu2 = 3.5 ‰ for fck < 50 MPa)
   it.each([
-    ['hognestad', 'ACI 318-19', 0.0038],
-    ['modified-kent-park', 'ACI 318-19', 0.004],
+    ['hognestad', 'ACI 318-19', 0.003],
+    ['modified-kent-park', 'ACI 318-19', 0.003],
     ['mander', 'ACI 318-19', 0.003],
     ['popovics', 'ACI 318-19', 0.003],
     ['thorenfeldt-collins', 'ACI 318-19', 0.003],
-    ['en1992-nonlinear', 'ACI 318-19', 0.0035],
-    ['en1992-parabola-rectangle', 'ACI 318-19', 0.0035],
+    ['en1992-nonlinear', 'ACI 318-19', 0.003],
+    ['en1992-parabola-rectangle', 'ACI 318-19', 0.003],
+    ['hognestad', 'EN 1992-1-1', 0.0035],
     ['mander', 'EN 1992-1-1', 0.0035],
     ['popovics', 'EN 1992-1-1', 0.0035],
-  ] as const)('%s under %s crushes at %d unless overridden', (compressionModel, code, crushing) => {
-    expect(buildConcrete({ ...base, compressionModel }, code).cover.crushingStrain).toBeCloseTo(crushing, 15);
-    expect(buildConcrete({ ...base, compressionModel, crushingStrain: 0.0042 }, code).cover.crushingStrain).toBeCloseTo(0.0042, 15);
+    ['en1992-parabola-rectangle', 'EN 1992-1-1', 0.0035],
+  ] as const)('%s under %s: the code’s εcu = %d by default, a value entered wins', (compressionModel, code, crushing) => {
+    const built = buildConcrete({ ...base, compressionModel }, code).cover;
+    expect(built.crushingStrain).toBeCloseTo(crushing, 15);
+    expect(built.ultimateStrain?.basis).toBe('code');
+    const entered = buildConcrete({ ...base, compressionModel, crushingStrain: 0.0036, ultimateStrain: 'law' }, code).cover;
+    expect(entered.crushingStrain).toBeCloseTo(0.0036, 15);
+    expect(entered.ultimateStrain?.basis).toBe('user');
+  });
+
+  it.each([
+    // Hognestad (1951): the linear descent ends at 0.0038
+    ['hognestad', 0.0038],
+    // Scott, Park & Priestley (1982): εcu = 0.004 + 0.9ρs·fyh/300, 0.004 without hoops
+    ['modified-kent-park', 0.004],
+    // Priestley, Seible & Calvi (1996) εcu = 0.004 + 1.4ρs·fyh·εsu/f′cc, 0.004 without hoops (from memory)
+    ['mander', 0.004],
+    // EN 1992-1-1 Table 3.1: εcu1 = 3.5 ‰ (nonlinear law), εcu2 = 3.5 ‰ (parabola–rectangle) below 50 MPa
+    ['en1992-nonlinear', 0.0035],
+    ['en1992-parabola-rectangle', 0.0035],
+  ] as const)('%s: the law’s own εcu = %d when asked for, in the spec or as the project default', (compressionModel, crushing) => {
+    const bySpec = buildConcrete({ ...base, compressionModel, ultimateStrain: 'law' }, 'ACI 318-19').cover;
+    expect(bySpec.crushingStrain).toBeCloseTo(crushing, 15);
+    expect(bySpec.ultimateStrain?.basis).toBe('law');
+    const byProject = buildConcrete({ ...base, compressionModel }, 'ACI 318-19', undefined, { ultimateStrain: 'law' }).cover;
+    expect(byProject.crushingStrain).toBeCloseTo(crushing, 15);
+    // The spec's own choice beats the project default.
+    expect(buildConcrete({ ...base, compressionModel, ultimateStrain: 'code' }, 'ACI 318-19', undefined, { ultimateStrain: 'law' }).cover.crushingStrain).toBe(0.003);
+  });
+
+  it('a law without an ultimate strain of its own falls back to the code value and says so', () => {
+    const built = buildConcrete({ ...base, compressionModel: 'popovics', ultimateStrain: 'law' }, 'EN 1992-1-1');
+    expect(built.cover.crushingStrain).toBeCloseTo(0.0035, 15);
+    expect(built.cover.ultimateStrain?.basis).toBe('code');
+    expect(built.diagnostics.map((d) => [d.path, d.severity])).toEqual([['material.ultimateStrain', 'warning']]);
+    expect(built.diagnostics[0]?.message).toMatch(/publishes no ultimate strain.*EN 1992-1-1 Table 3\.1 εcu1/);
   });
 
   it('the EN parabola–rectangle peaks at fck (no γc), the EN nonlinear curve at fcm', () => {
@@ -127,8 +162,11 @@ describe('validateConcreteSpec', () => {
   });
 
   it('checks the model’s own validity once defaults are known', () => {
-    // Hognestad at f′c = 120 MPa (ACI Ec): ε0 = 2·0.85·120/51 486 = 0.00396 > εcu = 0.0038
-    expect(validateConcreteSpec({ ...base, strength: 120 }, 'm', { code: 'ACI 318-19' }).map((d) => d.path)).toEqual(['m.crushingStrain']);
+    // Hognestad at f′c = 120 MPa (ACI Ec): ε0 = 2·0.85·120/51 486 = 0.00396, beyond the published end of the descent 0.0038
+    expect(validateConcreteSpec({ ...base, strength: 120 }, 'm', { code: 'ACI 318-19' }).map((d) => d.path)).toEqual(['m.elasticModulus']);
+    // At f′c = 80 MPa ε0 = 1.7·80/42 038 = 0.00324 lies beyond the code's εcu = 0.003: the law's own 0.0038 is valid
+    expect(validateConcreteSpec({ ...base, strength: 80 }, 'm', { code: 'ACI 318-19' }).map((d) => d.path)).toEqual(['m.crushingStrain']);
+    expect(validateConcreteSpec({ ...base, strength: 80 }, 'm', { code: 'ACI 318-19', ultimateStrain: 'law' })).toEqual([]);
     // Mander at f′c = 100 MPa (ACI Ec = 47 000 MPa) is below the secant 100/0.002 = 50 000 MPa
     const mander = validateConcreteSpec({ ...base, strength: 100, compressionModel: 'mander' }, 'm', { code: 'ACI 318-19' });
     expect(mander.map((d) => d.path)).toEqual(['m.elasticModulus']);

@@ -44,17 +44,25 @@ describe('Hognestad (1951) parabola with linear descent', () => {
     expect(law.breakpoints).toEqual([eps0, 0.0038]);
   });
 
-  it('takes the peak factor and crushing strain from the caller', () => {
+  it('takes the peak factor and crushing strain from the caller; the descent keeps its published slope', () => {
     const custom = hognestadCompression({ compressiveStrength: fc, elasticModulus: Ec, peakFactor: 1, crushingStrain: 0.004 });
+    const e0 = (2 * 30) / Ec;
     expect(custom.peakStress).toBe(30);
-    expect(custom.stress(0.004)).toBeCloseTo(0.85 * 30, 10);
+    // Hognestad (1951): σ = 0.85 f″c at ε = 0.0038, the line continued beyond it
+    expect(custom.stress(0.0038)).toBeCloseTo(0.85 * 30, 10);
+    expect(custom.stress(0.004)).toBeCloseTo(30 * (1 - (0.15 * (0.004 - e0)) / (0.0038 - e0)), 10);
+    expect(custom.stress(0.00401)).toBe(0);
+    // A shorter εcu cuts the same curve short.
+    const short = hognestadCompression({ compressiveStrength: fc, elasticModulus: Ec, peakFactor: 1, crushingStrain: 0.003 });
+    expect(short.stress(0.0029)).toBeCloseTo(custom.stress(0.0029), 12);
+    expect(short.stress(0.0031)).toBe(0);
   });
 
   it('rejects a peak strain beyond the crushing strain, naming the fields', () => {
     // f′c = 120 MPa: ε0 = 2·102/51 486 = 0.00396 > 0.0038
     const diagnostics = validateHognestadParameters({ compressiveStrength: 120, elasticModulus: 4700 * Math.sqrt(120) }, 'm');
-    expect(diagnostics.map((d) => d.path)).toEqual(['m.crushingStrain']);
-    expect(diagnostics[0]?.message).toMatch(/ε0 = 2f″c\/Ec = 0\.00396.*εcu = 0\.0038/);
+    expect(diagnostics.map((d) => d.path)).toEqual(['m.elasticModulus']);
+    expect(diagnostics[0]?.message).toMatch(/ε0 = 2f″c\/Ec = 0\.00396.*0\.0038, the end of the published descent/);
     expect(() => hognestadCompression({ compressiveStrength: 120, elasticModulus: 4700 * Math.sqrt(120) })).toThrow(InputError);
   });
 

@@ -1,0 +1,32 @@
+/**
+ * The assumptions of the best-estimate material and section model in the Method chapter (issue 11):
+ * the concrete strain limits, tension stiffening, confinement, as-found strengths and the load history
+ * of the service deflections — one paragraph each, with its sources. Kept apart from the member
+ * engine's paragraphs (method.ts) so that each part of the model states its own assumptions.
+ */
+import { PRIESTLEY_SEIBLE_CALVI_REFERENCE } from '../materials/concrete/mander.ts';
+import { SCOTT_PARK_PRIESTLEY_REFERENCE } from '../materials/concrete/modified-kent-park.ts';
+import type { Project } from '../project/types.ts';
+
+/** Cites a reference in the method chapter and returns its marker. */
+export type Cite = (reference: string, note?: string) => string;
+
+export interface MethodParagraph {
+  readonly title: string;
+  readonly text: string;
+}
+
+/** The material and section paragraphs of the Method chapter, in reading order. */
+export function materialMethodParagraphs(project: Project, cite: Cite): MethodParagraph[] {
+  const aci = project.info.codeBasis === 'ACI 318-19';
+  const choice = project.settings.concreteUltimateStrain ?? 'code';
+  const codeStrain = aci
+    ? `εcu = 0.003 ${cite('ACI 318-19 22.2.2.1', 'crushing strain 0.003')}`
+    : `εcu1 for the nonlinear laws and εcu2 for the parabola–rectangle ${cite('EN 1992-1-1 Table 3.1', 'strain limits εcu2, εc1, εcu1')}`;
+  return [
+    {
+      title: 'Concrete strain limits',
+      text: `Two strains of the concrete are kept apart. The code crushing point (${aci ? '0.003' : 'εcu2'}) is marked on every curve and is where every code check reads the section. The best-estimate curves end where the concrete that governs reaches its ultimate strain εcu, which this project takes ${choice === 'code' ? `from the code: ${codeStrain}` : `from each stress–strain law: Hognestad 0.0038, Modified Kent–Park and Mander 0.004 for unconfined concrete, EN 1992-1-1 εcu1 and εcu2; laws that publish none (Popovics, Thorenfeldt–Collins) use the code value, ${codeStrain}`}, unless a material says otherwise or gives a value; each section's ultimate states the value used and where it comes from. A confined core ends at the hoop-fracture strain of its model ${cite(SCOTT_PARK_PRIESTLEY_REFERENCE, 'ultimate strain of confined concrete')} ${cite(PRIESTLEY_SEIBLE_CALVI_REFERENCE, 'ultimate strain of confined concrete')}.`,
+    },
+  ];
+}

@@ -163,9 +163,10 @@ describe('an engineer at work (1440 × 900)', () => {
     expect(hit).not.toBeNull();
     await canvas.click({ position: hit! });
     await page.getByTestId('section-profile').waitFor();
-    // 1/in with the ×10⁻³ factor of the axis put back: "φ = 1.1×10⁻³ 1/in", never "φ = 1.1 1/in".
-    await expect.poll(() => page.locator('[data-testid=section-profile] h3').textContent()).toMatch(/sagging, φ = \d\.\d+×10⁻³ 1\/in/);
-    await expect.poll(() => page.getByTestId('chart-strain-profile').textContent()).toMatch(/φ = \d\.\d+×10⁻³ 1\/in/);
+    // 1/in with the power-of-ten factor of the axis put back: "φ = 1.1×10⁻³ 1/in" or "φ = 908×10⁻⁶ 1/in"
+    // (the factor follows the curve's extent), never "φ = 1.1 1/in".
+    await expect.poll(() => page.locator('[data-testid=section-profile] h3').textContent()).toMatch(/sagging, φ = \d+(\.\d+)?×10⁻[³⁶] 1\/in/);
+    await expect.poll(() => page.getByTestId('chart-strain-profile').textContent()).toMatch(/φ = \d+(\.\d+)?×10⁻[³⁶] 1\/in/);
     await page.getByTestId('section-profile').getByRole('button', { name: 'Close' }).click();
   });
 

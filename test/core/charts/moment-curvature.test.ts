@@ -35,8 +35,8 @@ describe('moment–curvature chart', () => {
     const expected = [{ x: 0, y: 0 }, { x: b.yieldCurvature * 1000, y: b.yieldMoment / 1e6 }, { x: b.ultimateCurvature * 1000, y: b.ultimateMoment / 1e6 }];
     expect(bilinear.points).toHaveLength(3);
     bilinear.points.forEach((p, i) => {
-      expect(p.x).toBeCloseTo(expected[i]!.x, 12);
-      expect(p.y).toBeCloseTo(expected[i]!.y, 9);
+      expect(p!.x).toBeCloseTo(expected[i]!.x, 12);
+      expect(p!.y).toBeCloseTo(expected[i]!.y, 9);
     });
   });
 

@@ -8,7 +8,7 @@
  * Units: mm, x to the right from the left edge of the outline's bounding box, y down from the top.
  */
 import type { SectionDefinition } from '../section/definition.ts';
-import { layerDiameter } from '../section/definition.ts';
+import { hoopsConfine, layerDiameter } from '../section/definition.ts';
 import { barPositions, hoopCentreline, shapeHeight, webExtent } from '../section/build.ts';
 import { shapeOutline, type Point } from '../section/shapes.ts';
 
@@ -103,7 +103,7 @@ export function sectionFigure(section: SectionDefinition): SectionFigure | null 
     }
     layers.push({ index, layer, diameter, positions });
   });
-  return { outline, voids, xMin, xMax, width, height, web, hoop, cover, confinedCore: hoop !== null && (hoops?.confineCore ?? false), layers, problems };
+  return { outline, voids, xMin, xMax, width, height, web, hoop, cover, confinedCore: hoop !== null && hoopsConfine(hoops), layers, problems };
 }
 
 /**

@@ -46,9 +46,12 @@ function bars(steelId: string, count: number, size: number, depthIn: number, lab
   return { steelId, depth: inch(depthIn), count, diameter: barSize(size), label, ...(spread ? { spread } : {}) };
 }
 
-/** Closed #`size` hoops at `spacingIn`, 1.5 in clear cover. */
-function hoopsUS(size: number, spacingIn: number, confineCore: boolean, steelId = 'g60'): HoopSet {
-  return { steelId, diameter: barSize(size), spacing: inch(spacingIn), verticalLegs: 2, horizontalLegs: 2, clearCover: inch(1.5), confineCore };
+/**
+ * #`size` hoops at `spacingIn`, 1.5 in clear cover. Hoops of the 1962 structure are not confirmed closed
+ * and anchored (no confined core); `confined` marks new work with closed hoops and 135° hooks.
+ */
+function hoopsUS(size: number, spacingIn: number, confined: boolean, steelId = 'g60'): HoopSet {
+  return { steelId, diameter: barSize(size), spacing: inch(spacingIn), verticalLegs: 2, horizontalLegs: 2, clearCover: inch(1.5), confineCore: confined, closedAndAnchored: confined };
 }
 
 function uniform(loadCase: MemberLoad['loadCase'], magnitude: number, label: string, from?: number, to?: number): MemberLoad {
@@ -329,7 +332,7 @@ const m = (v: number) => tidy(fromDisplay('spanLength', v, 'SI'));
  * four beams. Internal units (mm, N, MPa, N/mm; kN/m equals N/mm); `info.unitSystem` is 'si'.
  */
 export function demoProjectSI(): Project {
-  const hoops = (spacing: number, confineCore = false): HoopSet => ({ steelId: 'b500b', diameter: 8, spacing, verticalLegs: 2, horizontalLegs: 2, clearCover: 30, confineCore });
+  const hoops = (spacing: number): HoopSet => ({ steelId: 'b500b', diameter: 8, spacing, verticalLegs: 2, horizontalLegs: 2, clearCover: 30, confineCore: false, closedAndAnchored: false });
   return {
     format: PROJECT_FORMAT,
     version: PROJECT_VERSION,

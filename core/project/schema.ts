@@ -119,6 +119,7 @@ export const hoopSetSchema = z.looseObject({
   horizontalLegs: number.optional(),
   clearCover: number,
   confineCore: z.boolean(),
+  closedAndAnchored: z.boolean().optional(),
 });
 
 /** SectionDefinition: axial force N (compression positive). */

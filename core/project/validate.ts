@@ -330,6 +330,10 @@ export function validateProjectData(data: unknown): { project: Project | null; d
     materialReference(semantic, `${path}.concreteId`, section.concreteId, 'concrete', materialById, 'section concrete');
     section.bars.forEach((bar, i) => materialReference(semantic, `${path}.bars[${i}].steelId`, bar.steelId, 'steel', materialById, 'bar steel'));
     if (section.hoops) materialReference(semantic, `${path}.hoops.steelId`, section.hoops.steelId, 'steel', materialById, 'hoop steel');
+    if (section.hoops?.confineCore && section.hoops.closedAndAnchored !== true) {
+      semantic.push({ code: 'inconsistent', path: `${path}.hoops.closedAndAnchored`, severity: 'warning',
+        message: `the core is analysed unconfined: a confined core needs the hoops confirmed closed and anchored in the core (135° hooks or welded)${section.hoops.closedAndAnchored === undefined ? '; projects saved before this confirmation existed modelled the core confined on "confine core" alone' : ''}` });
+    }
     const points = polygonPoints(section);
     if (points > MAX_POLYGON_POINTS) {
       semantic.push({ code: 'geometry', path: `${path}.shape`, severity: 'error', message: `a polygon may have at most ${MAX_POLYGON_POINTS} points (outline and voids together), got ${points}` });

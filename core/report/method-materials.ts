@@ -4,7 +4,7 @@
  * of the service deflections — one paragraph each, with its sources. Kept apart from the member
  * engine's paragraphs (method.ts) so that each part of the model states its own assumptions.
  */
-import { PRIESTLEY_SEIBLE_CALVI_REFERENCE } from '../materials/concrete/mander.ts';
+import { MANDER_REFERENCE, PRIESTLEY_SEIBLE_CALVI_REFERENCE } from '../materials/concrete/mander.ts';
 import { SCOTT_PARK_PRIESTLEY_REFERENCE } from '../materials/concrete/modified-kent-park.ts';
 import type { Project } from '../project/types.ts';
 
@@ -27,6 +27,10 @@ export function materialMethodParagraphs(project: Project, cite: Cite): MethodPa
     {
       title: 'Concrete strain limits',
       text: `Two strains of the concrete are kept apart. The code crushing point (${aci ? '0.003' : 'εcu2'}) is marked on every curve and is where every code check reads the section. The best-estimate curves end where the concrete that governs reaches its ultimate strain εcu, which this project takes ${choice === 'code' ? `from the code: ${codeStrain}` : `from each stress–strain law: Hognestad 0.0038, Modified Kent–Park and Mander 0.004 for unconfined concrete, EN 1992-1-1 εcu1 and εcu2; laws that publish none (Popovics, Thorenfeldt–Collins) use the code value, ${codeStrain}`}, unless a material says otherwise or gives a value; each section's ultimate states the value used and where it comes from. A confined core ends at the hoop-fracture strain of its model ${cite(SCOTT_PARK_PRIESTLEY_REFERENCE, 'ultimate strain of confined concrete')} ${cite(PRIESTLEY_SEIBLE_CALVI_REFERENCE, 'ultimate strain of confined concrete')}.`,
+    },
+    {
+      title: 'Confinement',
+      text: `A core is modelled as confined ${cite(MANDER_REFERENCE, 'confined concrete')} only where the engineer asks for it and confirms the hoops closed and anchored in the core (135° hooks or welded): open stirrups and hoops with 90° hooks, usual in older buildings, are not taken to confine anything. The confinement effectiveness ke counts as laterally restrained only the bars at hoop corners and those held by a leg or cross-tie, with the clear spacings w′ between them (Mander et al. 1988, Eq. 23, from memory); the unrestrained bars between them do not shorten the arching.`,
     },
   ];
 }

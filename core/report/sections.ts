@@ -5,7 +5,7 @@
  * yield and at ultimate in each bending direction.
  */
 import { KEY_POINT_LABELS, KEY_POINT_ORDER } from '../charts/moment-curvature.ts';
-import { layerArea } from '../section/definition.ts';
+import { hoopsConfine, layerArea } from '../section/definition.ts';
 import type { SectionShape } from '../section/shapes.ts';
 import type { MomentCurvatureResult } from '../section/results.ts';
 import { drawingWithFacts, figureNode, type WriteContext } from './context.ts';
@@ -87,7 +87,7 @@ export function sectionChapter(ctx: WriteContext, plan: SectionPlan): Content[] 
   const facts: [string, Content][] = [
     ['Shape', shapeWords(section.shape, f)],
     ['Concrete', materialName(section.concreteId)],
-    ['Hoops', hoops ? `${f.length(hoops.diameter)} ${materialName(hoops.steelId)} at ${f.length(hoops.spacing)}, ${hoops.verticalLegs} vertical legs, clear cover ${f.length(hoops.clearCover)}; core ${hoops.confineCore ? 'modelled as confined' : 'not modelled as confined'}` : 'none given'],
+    ['Hoops', hoops ? `${f.length(hoops.diameter)} ${materialName(hoops.steelId)} at ${f.length(hoops.spacing)}, ${hoops.verticalLegs} vertical legs, clear cover ${f.length(hoops.clearCover)}; ${hoops.closedAndAnchored ? 'closed and anchored' : 'not confirmed closed and anchored'}; core ${hoopsConfine(hoops) ? 'modelled as confined' : 'not modelled as confined'}` : 'none given'],
     ['Axial force', section.axialForce ? `${f.force(section.axialForce)} (compression +)` : 'none'],
   ];
   if (sr) {

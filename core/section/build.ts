@@ -12,7 +12,7 @@ import { linearBrittleTension } from '../materials/concrete/tension.ts';
 import { clipProfile } from './elastic.ts';
 import type { ConfinementInput } from '../materials/specs.ts';
 import type { BarLayer, SectionDefinition } from './definition.ts';
-import { barArea, layerArea, layerDiameter } from './definition.ts';
+import { barArea, hoopsConfine, layerArea, layerDiameter } from './definition.ts';
 import type { ConcretePart, DiscreteElement, SectionModel } from './model.ts';
 import { shapeOutline, type SectionShape } from './shapes.ts';
 import { chordIntervals, profileMoments, subtractProfile, widthProfile, type Strip } from './width-profile.ts';
@@ -196,7 +196,7 @@ export function buildSectionModel(definition: SectionDefinition, materials: Mate
     const hoopSteel = materials.steel(hoops.steelId);
     if (!hoopSteel) problems.push({ code: 'unknown-reference', path: `${path}.hoops.steelId`, severity: 'error', message: `no steel material with id "${hoops.steelId}" in the library` });
     const web = webExtent(definition.shape);
-    if (hoops.confineCore && problems.length === 0 && hoopSteel) {
+    if (hoopsConfine(hoops) && problems.length === 0 && hoopSteel) {
       if (!web) {
         problems.push({ code: 'inconsistent', path: `${path}.hoops.confineCore`, severity: 'error', message: `a confined core is supported for rectangle, tee, inverted-tee, ell and I shapes, not for a ${definition.shape.kind}` });
       } else {
@@ -218,7 +218,7 @@ export function buildSectionModel(definition: SectionDefinition, materials: Mate
             // specs.ts: legsX = legs crossing a cut parallel to x (the vertical legs), legsY = the horizontal legs.
             legsX: hoops.verticalLegs,
             legsY: hoops.horizontalLegs ?? 2,
-            clearSpacings: clearSpacings(inside, x1 - x0, y1 - y0),
+            clearSpacings: clearSpacings(inside, x1 - x0, y1 - y0, hoops.verticalLegs, hoops.horizontalLegs ?? 2),
             longitudinalRatio: longitudinal / coreArea,
             hoopRuptureStrain: hoopSteel.ruptureStrain,
           };
@@ -360,12 +360,30 @@ export function partOf(role: ConcretePart['role'], label: string, strips: Strip[
 }
 
 /**
- * Clear spacings w′i between laterally restrained longitudinal bars around the core perimeter
- * (Mander et al. 1988): gaps along the top and bottom layers inside the core, and the vertical
- * gaps between consecutive layers along both sides. Bars are assumed at the hoop corners and
- * evenly spread between them.
+ * Indices of the restrained bars among `count` evenly spaced ones held by `legs` hoop legs or ties:
+ * the two end (corner) bars and one bar at each interior leg, the legs spread as evenly as the bars
+ * allow. Every bar is restrained when there are at least as many legs as bars.
  */
-function clearSpacings(layers: readonly BarLayer[], coreWidth: number, coreDepth: number): number[] {
+export function restrainedBars(count: number, legs: number): number[] {
+  if (count <= 2 || legs >= count) return Array.from({ length: Math.max(count, 1) }, (_, i) => i);
+  const held = Math.max(2, Math.floor(legs));
+  const out: number[] = [];
+  for (let k = 0; k < held; k++) {
+    const index = Math.round((k * (count - 1)) / (held - 1));
+    if (out[out.length - 1] !== index) out.push(index);
+  }
+  return out;
+}
+
+/**
+ * Clear spacings w′i between laterally restrained longitudinal bars around the core perimeter
+ * (Mander et al. 1988): only bars at a hoop corner or held by a leg or cross-tie are restrained.
+ * Along the top and bottom layers inside the core, bars are evenly spread between the corners and
+ * `verticalLegs` legs hold the corner bars and as many interior ones (restrainedBars); along the sides,
+ * the top and bottom layers are at the corners and an intermediate layer is restrained only where
+ * it is held by a horizontal tie (`horizontalLegs` beyond the hoop's own two, spread evenly over the layers).
+ */
+function clearSpacings(layers: readonly BarLayer[], coreWidth: number, coreDepth: number, verticalLegs: number, horizontalLegs: number): number[] {
   if (layers.length === 0) return [coreWidth, coreWidth, coreDepth, coreDepth];
   const sorted = [...layers].sort((a, b) => a.depth - b.depth);
   const diameterOf = layerDiameter;
@@ -374,14 +392,22 @@ function clearSpacings(layers: readonly BarLayer[], coreWidth: number, coreDepth
     // Counts are validated later; keep this estimate safe for any value (1 ≤ n ≤ 100).
     const n = Number.isFinite(layer.count) ? Math.min(Math.max(Math.floor(layer.count!), 2), 100) : 2;
     const d = diameterOf(layer);
-    const gap = Math.max((coreWidth - n * d) / (n - 1), 0);
-    for (let i = 0; i < n - 1; i++) gaps.push(gap);
+    // Bars at the core's edges and evenly between: centre-to-centre pitch (bc − d)/(n − 1).
+    const pitch = (coreWidth - d) / (n - 1);
+    const held = restrainedBars(n, verticalLegs);
+    for (let i = 1; i < held.length; i++) gaps.push(Math.max((held[i]! - held[i - 1]!) * pitch - d, 0));
   }
-  for (let i = 1; i < sorted.length; i++) {
-    const gap = Math.max(sorted[i]!.depth - sorted[i - 1]!.depth - (diameterOf(sorted[i]!) + diameterOf(sorted[i - 1]!)) / 2, 0);
+  if (sorted.length === 1) {
+    gaps.push(coreDepth, coreDepth);
+    return gaps;
+  }
+  const heldLayers = restrainedBars(sorted.length, horizontalLegs);
+  for (let i = 1; i < heldLayers.length; i++) {
+    const upper = sorted[heldLayers[i - 1]!]!;
+    const lower = sorted[heldLayers[i]!]!;
+    const gap = Math.max(lower.depth - upper.depth - (diameterOf(lower) + diameterOf(upper)) / 2, 0);
     gaps.push(gap, gap);
   }
-  if (sorted.length === 1) gaps.push(coreDepth, coreDepth);
   return gaps;
 }
 

@@ -39,8 +39,17 @@ export interface HoopSet {
   readonly horizontalLegs?: number;
   /** Clear cover to the outside of the hoop, mm. */
   readonly clearCover: number;
-  /** Model the concrete inside the hoops as confined (Mander or Modified Kent–Park only). */
+  /**
+   * Model the concrete inside the hoops as confined (Mander or Modified Kent–Park only). It takes
+   * effect only with `closedAndAnchored`: open stirrups or hoops with 90° hooks, common in older
+   * buildings, do not confine a core (hoopsConfine).
+   */
   readonly confineCore: boolean;
+  /**
+   * The engineer confirms that the hoops are closed and their ends anchored in the core (135° hooks or
+   * welded laps), so that they can confine it. Absent: not confirmed (files before this field).
+   */
+  readonly closedAndAnchored?: boolean;
 }
 
 export interface SectionDefinition {
@@ -54,6 +63,15 @@ export interface SectionDefinition {
   /** Axial force, N, compression positive, acting at the gross centroid (default 0). */
   readonly axialForce?: number;
   readonly notes?: string;
+}
+
+/**
+ * Whether the hoops confine the core in the analysis: the engineer asked for a confined core and
+ * confirmed the hoops closed and anchored. Without both the core is unconfined (a conservative
+ * default for members of older buildings).
+ */
+export function hoopsConfine(hoops: HoopSet | undefined): boolean {
+  return hoops !== undefined && hoops.confineCore && hoops.closedAndAnchored === true;
 }
 
 /** Area of one bar of diameter d (mm), mm². */

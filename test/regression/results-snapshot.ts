@@ -53,7 +53,7 @@ const STEELS = ['s-pp', 's-bl', 's-ep', 's-mp', 's-low'];
 
 const bar = (steelId: string, depth: number, count: number, diameter: number, label?: string, spread?: BarLayer['spread']): BarLayer =>
   ({ steelId, depth, count, diameter, ...(label ? { label } : {}), ...(spread ? { spread } : {}) });
-const hoops = (steelId: string, spacing: number, confineCore = false) => ({ steelId, diameter: 10, spacing, verticalLegs: 2, horizontalLegs: 2, clearCover: 30, confineCore });
+const hoops = (steelId: string, spacing: number, confineCore = false) => ({ steelId, diameter: 10, spacing, verticalLegs: 2, horizontalLegs: 2, clearCover: 30, confineCore, closedAndAnchored: confineCore });
 
 /** Sections of a generated project: every shape, light, normal and heavy reinforcement, support and cut-off variants. */
 function sections(k: number): SectionDefinition[] {

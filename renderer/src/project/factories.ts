@@ -59,7 +59,7 @@ function starterSection(system: UnitSystem): SectionDefinition {
       { steelId: 'steel-1', depth: tidy(height - mm(55, 2.2)), count: 3, diameter: mm(20, 0.75), label: 'bottom bars' },
       { steelId: 'steel-1', depth: mm(50, 2), count: 2, diameter: mm(16, 0.625), label: 'top bars' },
     ],
-    hoops: { steelId: 'steel-1', diameter: mm(10, 0.375), spacing: mm(200, 8), verticalLegs: 2, horizontalLegs: 2, clearCover: mm(30, 1.5), confineCore: false },
+    hoops: { steelId: 'steel-1', diameter: mm(10, 0.375), spacing: mm(200, 8), verticalLegs: 2, horizontalLegs: 2, clearCover: mm(30, 1.5), confineCore: false, closedAndAnchored: false },
   };
 }
 

@@ -1,6 +1,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { analyzeProject, type ProjectResults } from '../../../core/analysis.ts';
 import { layerArea } from '../../../core/section/definition.ts';
+import { hoopsConfine } from '../../../core/section/definition.ts';
 import { demoProject, demoProjectSI } from '../../../core/project/demo.ts';
 import { validateProject } from '../../../core/project/validate.ts';
 import type { Project } from '../../../core/project/types.ts';
@@ -75,7 +76,7 @@ describe('the US demo project (Wrenfield Mill, Building B)', () => {
     const sections = us.sections.filter((s) => used.has(s.id));
     const concreteOf = (id: string) => us.materials.find((m) => m.id === id) as ConcreteSpec;
     expect(sections.some((s) => concreteOf(s.concreteId).tensionModel === 'tension-stiffening')).toBe(true);
-    expect(sections.some((s) => concreteOf(s.concreteId).compressionModel === 'mander' && s.hoops?.confineCore === true)).toBe(true);
+    expect(sections.some((s) => concreteOf(s.concreteId).compressionModel === 'mander' && hoopsConfine(s.hoops))).toBe(true);
     expect(new Set(sections.map((s) => s.shape.kind))).toEqual(new Set(['tee', 'ell', 'rectangle']));
   });
 

@@ -154,7 +154,7 @@ describe('section checks through the section builder and the material resolver',
     p.sections.push({
       id: 'x', name: 'crowded', shape: { kind: 'rectangle', width: 300, height: 400 }, concreteId: 'c30m',
       bars: [{ steelId: 'b500', depth: 62, count: 4, diameter: 32 }, { steelId: 'b500', depth: 338, count: 4, diameter: 32 }],
-      hoops: { steelId: 'b500', diameter: 10, spacing: 100, verticalLegs: 2, clearCover: 30, confineCore: true },
+      hoops: { steelId: 'b500', diameter: 10, spacing: 100, verticalLegs: 2, clearCover: 30, confineCore: true, closedAndAnchored: true },
     });
     // ρcc = 8 × 804.2 mm² / (230 × 330 mm²) = 0.0848 > 0.08
     const d = find(validateProject(p), 'sections[2] "crowded".hoops');

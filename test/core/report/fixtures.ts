@@ -24,7 +24,7 @@ function rectangle(id: string, name: string, width: number, height: number, bott
       { steelId: 'b500', depth: height - 50, count: bottom[0], diameter: bottom[1], label: 'bottom bars' },
       { steelId: 'b500', depth: 50, count: top[0], diameter: top[1], label: 'top bars' },
     ],
-    hoops: { steelId: 'b500', diameter: 10, spacing: confine ? 100 : 150, verticalLegs: 2, clearCover: 30, confineCore: confine },
+    hoops: { steelId: 'b500', diameter: 10, spacing: confine ? 100 : 150, verticalLegs: 2, clearCover: 30, confineCore: confine, closedAndAnchored: confine },
   };
 }
 

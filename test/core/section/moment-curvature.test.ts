@@ -108,7 +108,7 @@ describe('ultimate causes and warnings', () => {
     const def: SectionDefinition = {
       id: 'r', name: 'r', shape: { kind: 'rectangle', width: 400, height: 600 }, concreteId: 'c',
       bars: [{ steelId: 's', depth: 540, count: 5, diameter: 28 }, { steelId: 's', depth: 60, count: 2, diameter: 16 }],
-      hoops: { steelId: 's', diameter: 10, spacing: 100, verticalLegs: 2, clearCover: 30, confineCore: true },
+      hoops: { steelId: 's', diameter: 10, spacing: 100, verticalLegs: 2, clearCover: 30, confineCore: true, closedAndAnchored: true },
     };
     const model = build(def, [concrete(30, 'mander'), { ...steel(420), ruptureStrain: 0.25 }]);
     const c = momentCurvature(model, 'sagging', { codeCrushingStrain: 0.003 });
@@ -118,7 +118,7 @@ describe('ultimate causes and warnings', () => {
   });
 
   it('heavy confinement moves the limit to the bars: they rupture exactly at their rupture strain', () => {
-    const def: SectionDefinition = { ...rect(400, 600, { n: 4, d: 25 }, { n: 4, d: 25 }), hoops: { steelId: 's', diameter: 12, spacing: 75, verticalLegs: 2, clearCover: 30, confineCore: true } };
+    const def: SectionDefinition = { ...rect(400, 600, { n: 4, d: 25 }, { n: 4, d: 25 }), hoops: { steelId: 's', diameter: 12, spacing: 75, verticalLegs: 2, clearCover: 30, confineCore: true, closedAndAnchored: true } };
     const model = build(def, [concrete(30, 'mander'), { ...steel(420), ruptureStrain: 0.25 }]);
     const c = momentCurvature(model, 'sagging', { codeCrushingStrain: 0.003 });
     expect(c.status).toMatchObject({ kind: 'complete', ultimateCause: 'steel-rupture' });
@@ -152,7 +152,7 @@ describe('bad input', () => {
     expect(say(wide[0]!.message, 'si')).toMatch(/do not fit/);
   });
   it('an absurd bar count is an input error, not a crash (with hoops that would confine a core)', () => {
-    const d = problems({ ...base, hoops: { steelId: 's', diameter: 10, spacing: 100, verticalLegs: 2, clearCover: 30, confineCore: true }, bars: [{ steelId: 's', depth: 450, count: 1e9, diameter: 20 }] });
+    const d = problems({ ...base, hoops: { steelId: 's', diameter: 10, spacing: 100, verticalLegs: 2, clearCover: 30, confineCore: true, closedAndAnchored: true }, bars: [{ steelId: 's', depth: 450, count: 1e9, diameter: 20 }] });
     expect(d.some((x) => x.path.endsWith('bars[0].count') && /at most 100/.test(x.message))).toBe(true);
   });
   it('every problem is reported at once', () => {

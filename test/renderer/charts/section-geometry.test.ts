@@ -10,7 +10,7 @@ import { roundLength, sectionGeometry } from '../../../renderer/src/charts/secti
 const section: SectionDefinition = {
   id: 's', name: '300 × 600', concreteId: 'c', shape: { kind: 'rectangle', width: 300, height: 600 },
   bars: [{ steelId: 'b', depth: 545, count: 3, diameter: 20, label: 'bottom' }, { steelId: 'b', depth: 50, count: 2, diameter: 16 }],
-  hoops: { steelId: 'b', diameter: 10, spacing: 150, verticalLegs: 2, clearCover: 30, confineCore: true },
+  hoops: { steelId: 'b', diameter: 10, spacing: 150, verticalLegs: 2, clearCover: 30, confineCore: true, closedAndAnchored: true },
 };
 
 describe('sectionGeometry', () => {

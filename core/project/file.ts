@@ -222,11 +222,4 @@ export function serializeProject(project: Project): string {
   return `${JSON.stringify(canonicalOrder(project), null, 2)}\n`;
 }
 
-/**
- * A file name's stem for files derived from a project (a report, an export, a save): the name
- * without a `.hingeline` or `.json` extension, characters no file system accepts replaced by
- * spaces; `project` when nothing is left.
- */
-export function projectFileStem(name: string): string {
-  return name.replace(/\.(hingeline|json)$/i, '').replace(/[\\/:*?"<>|]+/g, ' ').trim() || 'project';
-}
+export { projectFileStem } from './file-stem.ts';

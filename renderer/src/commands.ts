@@ -3,7 +3,7 @@
  * the interface). The renderer owns these decisions; the host only carries files and dialogs.
  */
 import type { Diagnostic } from '../../core/diagnostics.ts';
-import { projectFileStem } from '../../core/project/file.ts';
+import { projectFileStem } from '../../core/project/file-stem.ts';
 
 import { revertFocusedField } from './composables/field-history.ts';
 import { getHost, RESULTS_CAUTION, type MenuCommand, type OpenedFile } from './host/index.ts';

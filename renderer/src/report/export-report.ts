@@ -2,7 +2,7 @@
  * "Export report": the PDF of the member on screen or of the whole project, made in a report
  * worker (report-worker.ts) and handed to the host to save (and open with the system viewer).
  */
-import { projectFileStem } from '../../../core/project/file.ts';
+import { projectFileStem } from '../../../core/project/file-stem.ts';
 import type { Project } from '../../../core/project/types.ts';
 import { toRaw } from 'vue';
 import packageJson from '../../../package.json';

@@ -10,7 +10,7 @@ import { defineStore } from 'pinia';
 import { computed, ref, shallowRef, toRaw, watch } from 'vue';
 import type { Diagnostic } from '../../../core/diagnostics.ts';
 import { demoProject, demoProjectSI } from '../../../core/project/demo.ts';
-import { projectFileStem } from '../../../core/project/file.ts';
+import { projectFileStem } from '../../../core/project/file-stem.ts';
 import type { Project } from '../../../core/project/types.ts';
 import { historyRevision } from '../composables/field-history.ts';
 import { getHost, type OpenedFile } from '../host/index.ts';

@@ -10,7 +10,7 @@ import { layerArea } from '../section/definition.ts';
 import type { Point } from '../section/shapes.ts';
 import { formatQuantity } from '../units/format.ts';
 import { PALETTE } from './palette.ts';
-import { sectionFigure, spreadLabels } from './section-geometry.ts';
+import { labelNamesBars, sectionFigure, spreadLabels } from './section-geometry.ts';
 import type { UnitsInput } from './types.ts';
 import { resolveUnits, unitFor } from './units.ts';
 
@@ -84,7 +84,9 @@ export function sectionDrawingSvg(definition: SectionDefinition, unitsInput: Uni
     // Bars as drawings write them (3 #8, 4 Ø20) when the diameter is a tabulated size.
     const designation = sized ? barDesignation(layer.diameter, units.system) : null;
     const bars = sized ? (designation ? `${layer.count} ${designation}` : `${layer.count} × ${length(layer.diameter!)}`) : 'area';
-    const text = `${layer.label ?? `layer ${index + 1}`}: ${bars} (${area(layerArea(layer))})`;
+    // A label that already names the bars ("top 4 #8") is not followed by them again.
+    const named = layer.label !== undefined && sized && labelNamesBars(layer.label, bars);
+    const text = named ? `${layer.label} (${area(layerArea(layer))})` : `${layer.label ?? `layer ${index + 1}`}: ${bars} (${area(layerArea(layer))})`;
     return { layer, diameter, sized, text, positions };
   });
   const showLabels = options.layerLabels ?? true;

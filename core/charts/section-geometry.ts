@@ -121,3 +121,19 @@ export function spreadLabels(wanted: readonly number[], gap: number): number[] {
   }
   return placed;
 }
+
+/**
+ * Where `text` names the bars `bars` (as drawings write them, `3 #8`, `4 Ø20`): standing alone —
+ * not inside `13 #8` or `3 #80` — with any spacing and case. The section drawing uses it not to
+ * repeat bars a label already says; the editor, to keep a label naming the bars it names.
+ */
+export function barMentions(text: string, bars: string): { readonly index: number; readonly length: number }[] {
+  const escaped = bars.trim().replace(/[.*+?^${}()|[\]\\]/g, '\\$&').replace(/\s+/g, '\\s*');
+  if (escaped === '') return [];
+  return [...text.matchAll(new RegExp(`(?<![\\p{L}\\d.])${escaped}(?![\\p{L}\\d.])`, 'giu'))].map((m) => ({ index: m.index, length: m[0].length }));
+}
+
+/** True when a layer's `label` already says its `bars` (`top 4 #8` says `4 #8`): the drawing then does not repeat them. */
+export function labelNamesBars(label: string, bars: string): boolean {
+  return barMentions(label, bars).length > 0;
+}

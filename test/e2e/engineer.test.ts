@@ -74,6 +74,8 @@ for (const viewport of [{ width: 1440, height: 900 }, { width: 1280, height: 720
       expect(right).toBeLessThanOrEqual(viewport.width);
       // The utilisation ratio is never the part that gives way.
       expect(await overflowing(page, '[data-testid=overview-rows] .c-utilisation .u')).toEqual([]);
+      // Nor is the deflection against its limit ("0.0742 / 0.450 in" was cut to "0.450…").
+      expect(await overflowing(page, '[data-testid=overview-rows] .c-utilisation .defl')).toEqual([]);
       await frameHolds(page);
       await snap(page, `engineer-${viewport.width}-overview`);
     });

@@ -7,7 +7,7 @@
  */
 import type { SectionDefinition } from '../../../core/section/definition.ts';
 import type { Point } from '../../../core/section/shapes.ts';
-import { sectionFigure, spreadLabels } from '../../../core/charts/section-geometry.ts';
+import { labelNamesBars, sectionFigure, spreadLabels } from '../../../core/charts/section-geometry.ts';
 import { barDesignation } from '../../../core/section/bar-designations.ts';
 import { formatQuantity, toDisplay, unitLabel, fromDisplay } from '../../../core/units/index.ts';
 import type { UnitSystem } from '../../../core/project/types.ts';
@@ -55,7 +55,10 @@ function layerText(layer: SectionDefinition['bars'][number], length: (mm: number
   const what = layer.count !== undefined && layer.diameter !== undefined
     ? designation ? `${layer.count} ${designation}` : `${layer.count} × ${length(layer.diameter)}`
     : formatQuantity('area', layer.area ?? 0, display);
-  return `${layer.label ? `${layer.label}: ` : ''}${what} at ${finite(layer.depth) ? length(layer.depth) : '—'}`;
+  const at = `at ${finite(layer.depth) ? length(layer.depth) : '—'}`;
+  // A label that already names the bars ("top 4 #8") is not followed by them again.
+  if (layer.label && labelNamesBars(layer.label, what)) return `${layer.label} ${at}`;
+  return `${layer.label ? `${layer.label}: ` : ''}${what} ${at}`;
 }
 const r2 = (v: number) => Math.round(v * 100) / 100;
 

@@ -12,6 +12,7 @@
 import type { SectionShape, ShapeKind } from '../../../core/section/shapes.ts';
 import { toDisplay } from '../../../core/units/index.ts';
 import type { UnitSystem } from '../../../core/project/types.ts';
+import { barMentions } from '../../../core/charts/section-geometry.ts';
 import { displaySystem } from './units.ts';
 
 /** The dimension fields of each shape kind, in the order names and the editor list them: [field, label]. */
@@ -60,4 +61,17 @@ export function nameAfterDimensionChange(name: string, shape: SectionShape, fiel
   const match = matches.length === 1 ? matches[0]! : matches.length === sameValued.length ? matches[position] : undefined;
   if (!match || match.index === undefined) return name;
   return `${name.slice(0, match.index)}${String(after)}${name.slice(match.index + match[0].length)}`;
+}
+
+/**
+ * A label or name after a layer's bars change from `before` to `after` (both as drawings write
+ * them, `3 #8` → `4 #9`): the text that named the old bars names the new ones. Only when the old
+ * bars appear once, standing alone (not inside `13 #8` or `3 #80`); otherwise the text stays.
+ */
+export function textAfterBarsChange(text: string, before: string | null, after: string | null): string {
+  if (!before || !after || before === after) return text;
+  const found = barMentions(text, before);
+  if (found.length !== 1) return text;
+  const { index, length } = found[0]!;
+  return `${text.slice(0, index)}${after}${text.slice(index + length)}`;
 }

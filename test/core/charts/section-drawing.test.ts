@@ -53,9 +53,12 @@ describe('scaled section drawing', () => {
   it('writes bars as drawings do (3 #8) and falls back to count × diameter for other sizes', () => {
     const section = demoProject().sections.find((x) => x.id === 'T24')!;
     const us = sectionDrawingSvg(section, 'us').svg;
-    // B-201's T-beam: 3 #8 at the bottom, 2 #5 at the top (ASTM A615 bar numbers)
-    expect(us).toContain('3 #8');
-    expect(us).toContain('2 #5');
+    // B-201's T-beam: 3 #8 at the bottom, 2 #5 at the top (ASTM A615 bar numbers); its labels
+    // already say so ("bottom 3 #8"), and the drawing does not say it twice.
+    expect(us).toContain('>bottom 3 #8 (');
+    expect(us).not.toContain('3 #8: 3 #8');
+    const unlabelled = { ...section, bars: section.bars.map(({ label: _label, ...bar }) => bar) };
+    expect(sectionDrawingSvg(unlabelled, 'us').svg).toContain('>layer 1: 3 #8 (');
     const odd = { ...section, bars: [{ ...section.bars[0]!, diameter: 23.7 }] };
     expect(sectionDrawingSvg(odd, 'si').svg).toMatch(/3 × 23\.7 mm/);
   });

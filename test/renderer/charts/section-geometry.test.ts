@@ -46,6 +46,11 @@ describe('sectionGeometry', () => {
     expect(us.dimensions[0]!.text).toBe('11.81 in');
   });
 
+  it('does not repeat bars a label already names, and never takes 13 #8 for 3 #8', () => {
+    const named: SectionDefinition = { ...section, bars: [{ ...section.bars[0]!, label: 'bottom 3 Ø20' }, { ...section.bars[1]!, label: 'top 12 Ø16' }] };
+    expect(sectionGeometry(named, 'si')!.labels.map((l) => l.text)).toEqual(['top 12 Ø16: 2 Ø16 at 50.0 mm', 'bottom 3 Ø20 at 545 mm']);
+  });
+
   it('never lets two layer labels overlap', () => {
     const crowded: SectionDefinition = { ...section, bars: [40, 45, 50, 55].map((depth) => ({ steelId: 'b', depth, count: 2, diameter: 12 })) };
     const labels = sectionGeometry(crowded, 'si')!.labels;

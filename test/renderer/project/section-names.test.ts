@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { SectionShape } from '../../../core/section/shapes.ts';
-import { nameAfterDimensionChange } from '../../../renderer/src/project/section-names.ts';
+import { nameAfterDimensionChange, textAfterBarsChange } from '../../../renderer/src/project/section-names.ts';
 
 const inch = (v: number) => v * 25.4;
 const tee: SectionShape = { kind: 'tee', height: inch(24), webWidth: inch(12), flangeWidth: inch(54), flangeThickness: inch(5) };
@@ -46,5 +46,23 @@ describe('section names that follow their dimensions', () => {
     expect(nameAfterDimensionChange('Rectangle 300 × 400', rect, 'height', 400, 450, 'si')).toBe('Rectangle 300 × 450');
     // The same section shown in inches: "400" is not 15.748 in, the name stays.
     expect(nameAfterDimensionChange('Rectangle 300 × 400', rect, 'height', 400, 450, 'us')).toBe('Rectangle 300 × 400');
+  });
+});
+
+describe('labels and names that follow their bars', () => {
+  it('names the new bars where the old ones stood alone', () => {
+    expect(textAfterBarsChange('bottom 3 #8', '3 #8', '4 #8')).toBe('bottom 4 #8');
+    expect(textAfterBarsChange('Rectangle 14 × 24 in, support: top 4 #8, bottom 3 #7', '3 #7', '3 #9')).toBe('Rectangle 14 × 24 in, support: top 4 #8, bottom 3 #9');
+    // Written without the space, or in another case, it is still the same bars.
+    expect(textAfterBarsChange('top 2Ø12', '2 Ø12', '3 Ø12')).toBe('top 3 Ø12');
+  });
+
+  it('leaves text alone that names other bars, names them twice, or only contains the digits', () => {
+    expect(textAfterBarsChange('bottom 13 #8', '3 #8', '4 #8')).toBe('bottom 13 #8');
+    expect(textAfterBarsChange('bottom 3 #80', '3 #8', '4 #8')).toBe('bottom 3 #80');
+    expect(textAfterBarsChange('3 #8 top, 3 #8 bottom', '3 #8', '4 #8')).toBe('3 #8 top, 3 #8 bottom');
+    expect(textAfterBarsChange('main bars', '3 #8', '4 #8')).toBe('main bars');
+    // A size without a designation has no text to follow.
+    expect(textAfterBarsChange('bottom 3 #8', '3 #8', null)).toBe('bottom 3 #8');
   });
 });

@@ -111,4 +111,21 @@ describe('SectionEditor', () => {
     expect(wrapper.find('[data-testid=bars-left-behind]').exists()).toBe(false);
     wrapper.unmount();
   });
+  it('keeps a layer label and the section name naming the bars, in one undo step', async () => {
+    const { wrapper, section, documentStore } = setup(demoProject(), 'F-205');
+    // F-205's support section: "Rectangle 14 × 24 in, support: top 4 #8, bottom 3 #7", bottom layer labelled "bottom 3 #7"
+    expect(section().bars[1]!.label).toBe('bottom 3 #7');
+    await wrapper.get('[data-testid=bar-count-1]').setValue('4');
+    expect(section().bars[1]).toMatchObject({ count: 4, label: 'bottom 4 #7' });
+    expect(section().name).toBe('Rectangle 14 × 24 in, support: top 4 #8, bottom 4 #7');
+    await wrapper.get('[data-testid=bar-size-1]').setValue('#9');
+    expect(section().bars[1]!.label).toBe('bottom 4 #9');
+    expect(section().name).toBe('Rectangle 14 × 24 in, support: top 4 #8, bottom 4 #9');
+    documentStore.undo();
+    expect(section().bars[1]!.label).toBe('bottom 4 #7');
+    documentStore.undo();
+    expect(section().bars[1]).toMatchObject({ count: 3, label: 'bottom 3 #7' });
+    expect(section().name).toBe('Rectangle 14 × 24 in, support: top 4 #8, bottom 3 #7');
+    wrapper.unmount();
+  });
 });

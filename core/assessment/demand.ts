@@ -5,10 +5,13 @@
  * Units: N, mm, N·mm.
  */
 import { buildBeamModel, type ZoneResponse } from '../member/beam-model.ts';
-import type { BeamDefinition } from '../member/definition.ts';
+import type { BeamDefinition, LoadFactors } from '../member/definition.ts';
 import { solveStatic } from '../member/static.ts';
-import { releasedMoment, type StaticLoad } from '../member/statics.ts';
+import { memberForcesAt, releasedMoment, type StaticLoad } from '../member/statics.ts';
 import { elasticZone } from '../member/zones.ts';
+import type { SectionAnalysis } from '../section/analyze.ts';
+import type { BendingDirection } from '../section/model.ts';
+import { combinedLoads, memberLoadSets } from './combinations.ts';
 
 /** A zone of the member with its elastic flexural stiffness, for support moments (mm, N·mm²). */
 export interface ElasticZone {
@@ -32,4 +35,31 @@ export function elasticSupportMoments(member: BeamDefinition, zones: readonly El
   const field = Float64Array.from(beam.x, (x) => releasedMoment(beam.support, member.span, loads, x));
   const state = solveStatic(beam, field);
   return { left: state.moment[0]!, right: state.moment[state.moment.length - 1]! };
+}
+
+/**
+ * The largest moment of one sense (N·mm magnitude) within some zones of a member under a load
+ * combination, and where (mm): elastic analysis on gross sections at the code modulus, each zone
+ * sampled at no fewer than 8 stations and in proportion to `segments` over the span.
+ * @param zones the member's zones with their section analyses (self-weight, stiffness)
+ * @param zoneIndices which of the member's zones to search
+ */
+export function largestZoneMoment(member: BeamDefinition, zones: readonly { readonly from: number; readonly to: number; readonly analysis: SectionAnalysis }[], factors: LoadFactors, zoneIndices: readonly number[], direction: BendingDirection, segments: number): { moment: number; position: number } {
+  const loads = combinedLoads(memberLoadSets(member, zones.map((z) => z.analysis.selfWeight)), factors);
+  const elastic: ElasticZone[] = zones.map((z) => ({ from: z.from, to: z.to, sectionId: z.analysis.sectionId, stiffness: z.analysis.codeModulus * (z.analysis.elastic?.grossInertia ?? 0) }));
+  const ends = elasticSupportMoments(member, elastic, loads, segments);
+  let best = { moment: 0, position: 0 };
+  const sign = direction === 'sagging' ? 1 : -1;
+  for (const i of zoneIndices) {
+    const z = member.zones[i]!;
+    const n = Math.max(8, Math.ceil((segments * (z.to - z.from)) / member.span));
+    for (let k = 0; k <= n; k++) {
+      const x = z.from + ((z.to - z.from) * k) / n;
+      for (const side of ['left', 'right'] as const) {
+        const mx = sign * memberForcesAt(member.supports, member.span, loads, ends, x, side).moment;
+        if (mx > best.moment) best = { moment: mx, position: x };
+      }
+    }
+  }
+  return best;
 }

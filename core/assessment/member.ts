@@ -167,7 +167,7 @@ function extend(member: AssessedMember, context: AssessmentContext, design: Memb
       const description = describeScheme(scheme);
       const base: SchemeResult = {
         schemeId: String(scheme.id), name: String(scheme.name), kind: scheme.kind, description,
-        variant: null, frp: null, installation: [], comparison: null, lossOfStrengthening: null,
+        variant: null, frp: null, installation: [], comparison: null, lossOfStrengthening: null, checks: [],
         warnings: warningsOf(own), errors: errorsOf(own),
       };
       if (asFoundBroken) {

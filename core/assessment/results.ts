@@ -167,6 +167,23 @@ export interface SchemeComparison {
   readonly statement: Text;
 }
 
+/** One code check of a strengthening method (assessment/strengthening-checks.ts). */
+export interface StrengtheningCheck {
+  readonly id: 'strengthening-limit' | 'frp-debonding' | 'steel-service-stress' | 'plate-service-stress' | 'concrete-service-stress' | 'frp-creep-rupture';
+  /** What is checked, in words, and the clause. */
+  readonly name: string;
+  readonly clause: string;
+  /** What `value` and `limit` are: a utilisation (dimensionless), a stress (MPa) or a strain (tension positive). */
+  readonly quantity: 'ratio' | 'stress' | 'strain';
+  readonly value: number;
+  readonly limit: number;
+  /** value / limit (99.99 when the demand cannot be carried at all). */
+  readonly ratio: number;
+  readonly pass: boolean;
+  /** Where, under which loads, and the numbers. */
+  readonly note: Text;
+}
+
 /** Everything reported for one strengthening scheme. */
 export interface SchemeResult {
   readonly schemeId: string;
@@ -180,6 +197,8 @@ export interface SchemeResult {
   readonly comparison: SchemeComparison | null;
   /** ACI 440.2R-17 9.2 (bonded schemes only; null for a cast concrete layer). */
   readonly lossOfStrengthening: LossOfStrengtheningCheck | null;
+  /** The strengthening method's code checks (strengthening limit, debonding strain, service stresses, creep rupture). */
+  readonly checks: readonly StrengtheningCheck[];
   readonly warnings: readonly Text[];
   readonly errors: readonly Problem[];
 }
@@ -200,6 +219,15 @@ export interface RetrofitResult {
   readonly caution: string;
   readonly warnings: readonly Text[];
   readonly errors: readonly Problem[];
+}
+
+/**
+ * Whether a member as it stands (the as-found beam when a condition is given, else the design
+ * beam) needs strengthening: a strength, shear or deflection check fails, or it fails without
+ * warning (any status but OK, not converged or input error).
+ */
+export function needsStrengthening(result: Pick<MemberResult, 'status'>): boolean {
+  return result.status !== 'ok' && result.status !== 'not-converged' && result.status !== 'input-error';
 }
 
 /** The caution every retrofit result carries. */

@@ -21,9 +21,8 @@ import type { BendingDirection, DiscreteElement } from '../section/model.ts';
 import { compactOf, compareVariants, flexuralCheck } from './compact.ts';
 import type { SchemeResult, VariantResult } from './results.ts';
 import { joinTexts, phrase, q, type Text } from '../units/phrase.ts';
-import { combinedLoads, memberLoadSets } from './combinations.ts';
-import { elasticSupportMoments, type ElasticZone } from './demand.ts';
-import { memberForcesAt } from '../member/statics.ts';
+import { largestZoneMoment } from './demand.ts';
+import { strengtheningChecks } from './strengthening-checks.ts';
 import { librarySections, runVariant, type Setup, type VariantRun } from './variant.ts';
 
 /** The beam a scheme strengthens: its run, materials and (for an as-found beam) its derivation. */
@@ -71,25 +70,8 @@ function referenceSection(baseId: string, ref: VariantRun, derivation: AsFoundDe
 
 /** Largest moment of one sense (N·mm magnitude) within a set of zones under installation loads, and where. */
 function installationMoment(setup: Setup, ref: VariantRun, scheme: FrpScheme | SteelPlateScheme, zoneIndices: readonly number[], direction: BendingDirection): { moment: number; position: number } {
-  const member = ref.member;
   const f = scheme.installation ?? {};
-  const loads = combinedLoads(memberLoadSets(member, ref.zones.map((z) => z.analysis.selfWeight)), { dead: f.dead ?? 1, superimposed: f.superimposed ?? 1, live: f.live ?? 0 });
-  const elastic: ElasticZone[] = ref.zones.map((z) => ({ from: z.from, to: z.to, sectionId: z.analysis.sectionId, stiffness: z.analysis.codeModulus * (z.analysis.elastic?.grossInertia ?? 0) }));
-  const ends = elasticSupportMoments(member, elastic, loads, setup.segments);
-  let best = { moment: 0, position: 0 };
-  const sign = direction === 'sagging' ? 1 : -1;
-  for (const i of zoneIndices) {
-    const z = member.zones[i]!;
-    const n = Math.max(8, Math.ceil((setup.segments * (z.to - z.from)) / member.span));
-    for (let k = 0; k <= n; k++) {
-      const x = z.from + ((z.to - z.from) * k) / n;
-      for (const side of ['left', 'right'] as const) {
-        const mx = sign * memberForcesAt(member.supports, member.span, loads, ends, x, side).moment;
-        if (mx > best.moment) best = { moment: mx, position: x };
-      }
-    }
-  }
-  return best;
+  return largestZoneMoment(ref.member, ref.zones, { dead: f.dead ?? 1, superimposed: f.superimposed ?? 1, live: f.live ?? 0 }, zoneIndices, direction, setup.segments);
 }
 
 /** Builds, analyses and compares one scheme. */
@@ -256,7 +238,12 @@ export function buildScheme(setup: Setup, input: SchemeInput): SchemeResult {
     }
   }
   if (!variant.ductility.available) warnings.push('shear governs the strengthened beam before its flexural mechanism: its ductility and hinge rotations are not available');
-  return { ...base, variant, frp, installation, comparison, lossOfStrengthening, warnings: [...warnings, ...newWarnings(run.result.warnings, comparisonRun.result.warnings)], errors: [...errors, ...run.result.errors] };
+  const checks = strengtheningChecks({
+    setup, scheme, run, materials, frp, lossOfStrengthening,
+    sections: new Map([...sections.values()].map((s) => [s.baseSectionId, s.id])),
+    sustainedLiveFraction: member.service.sustainedLiveFraction,
+  });
+  return { ...base, variant, frp, installation, comparison, lossOfStrengthening, checks, warnings: [...warnings, ...newWarnings(run.result.warnings, comparisonRun.result.warnings)], errors: [...errors, ...run.result.errors] };
 }
 
 /** Warnings of a variant that the beam it is compared with does not have (texts compared by content). */

@@ -85,8 +85,30 @@ export interface ShearResult {
   readonly sentence: Text;
   /** Which sections near the supports were skipped, and why. */
   readonly criticalSectionRule: Text;
+  /** Demand and capacity along the span, for the shear diagram. */
+  readonly diagram: ShearDiagram;
   readonly warnings: readonly Text[];
 }
+
+/**
+ * Shear along the span as the check sees it, one entry per station and side (a station where the
+ * shear jumps — a point load, a zone boundary — appears twice: left of it, then right of it).
+ * Units: x mm from the left support, shears N (magnitudes).
+ */
+export interface ShearDiagram {
+  readonly x: readonly number[];
+  /** |V| under the factored combination, and at the flexural mechanism (null when no mechanism was formed). */
+  readonly factored: readonly number[];
+  readonly mechanism: readonly number[] | null;
+  /** Capacities of the section there in the bending direction of the factored moment: nominal (Vn; EN with γ = 1) and design (φVn; VRd). */
+  readonly nominal: readonly number[];
+  readonly design: readonly number[];
+  /** False within d of a support face where no point load lies between: not checked, the shear at d governs. */
+  readonly checked: readonly boolean[];
+  readonly sectionIds: readonly string[];
+}
+
+const EMPTY_DIAGRAM: ShearDiagram = { x: [], factored: [], mechanism: null, nominal: [], design: [], checked: [], sectionIds: [] };
 
 /** Inputs of memberShear. */
 export interface MemberShearInput {
@@ -145,7 +167,7 @@ export function memberShear(input: MemberShearInput): ShearResult {
   });
   const empty = (sentence: string): ShearResult => ({
     code, capacities, factored: null, mechanism: null, governs: 'undetermined', shearFailureLoadFactor: null,
-    flexuralDuctilityAvailable: true, sentence, criticalSectionRule: '', warnings,
+    flexuralDuctilityAvailable: true, sentence, criticalSectionRule: '', diagram: EMPTY_DIAGRAM, warnings,
   });
   if (caps.some((c) => !c.sagging && !c.hogging)) return empty('shear not assessed: a section of the member has no valid model');
 
@@ -206,8 +228,9 @@ export function memberShear(input: MemberShearInput): ShearResult {
   const checked = stations.some((x) => !skipped(x)) ? (x: number) => !skipped(x) : () => true;
 
   type Best = ShearDemandPoint & { ratio: number };
-  /** Largest demand/capacity over the stations for a force state, on nominal and on design strengths (one pass). */
-  const scan = (forces: (x: number, side: 'left' | 'right') => { moment: number; shear: number }): { nominal: Best; design: Best } => {
+  /** Largest demand/capacity over the stations for a force state, on nominal and on design strengths (one pass); `record` sees every station and side. */
+  type Recorder = (x: number, shear: number, cap: ShearCapacity, checked: boolean) => void;
+  const scan = (forces: (x: number, side: 'left' | 'right') => { moment: number; shear: number }, record?: Recorder): { nominal: Best; design: Best } => {
     let nominal: Best | undefined;
     let design: Best | undefined;
     const ratioOf = (v: number, capacity: number) => (capacity > 0 ? v / capacity : v > 0 ? 99.99 : 0);
@@ -223,6 +246,7 @@ export function memberShear(input: MemberShearInput): ShearResult {
         const f = forces(x, side);
         const { cap } = capacityAt(x, side, f.moment);
         const shear = Math.abs(f.shear);
+        record?.(x, shear, cap, checked(x));
         if (checked(x)) consider({ position: x, shear, sectionId: cap.sectionId, direction: cap.direction, nominal: cap.nominal, design: cap.design, supportFace: false });
         if (cap.supportLimit && supportsAt.includes(x)) consider({ position: x, shear, sectionId: cap.sectionId, direction: cap.direction, nominal: cap.supportLimit.nominal, design: cap.supportLimit.design, supportFace: true });
       }
@@ -234,7 +258,16 @@ export function memberShear(input: MemberShearInput): ShearResult {
   const factoredLoads = combinedLoads(sets, input.factors);
   const elasticZones: ElasticZone[] = zones.map((z) => ({ from: z.from, to: z.to, sectionId: z.definition.id, stiffness: z.analysis.codeModulus * (z.analysis.elastic?.grossInertia ?? 0) }));
   const factoredEnds = elasticSupportMoments(member, elasticZones, factoredLoads, segments);
-  const f = scan((x, side) => memberForcesAt(member.supports, span, factoredLoads, factoredEnds, x, side)).design;
+  const trace = { x: [] as number[], factored: [] as number[], nominal: [] as number[], design: [] as number[], checked: [] as boolean[], sectionIds: [] as string[] };
+  const f = scan((x, side) => memberForcesAt(member.supports, span, factoredLoads, factoredEnds, x, side), (x, shear, cap, isChecked) => {
+    trace.x.push(x);
+    trace.factored.push(shear);
+    trace.nominal.push(cap.nominal);
+    trace.design.push(cap.design);
+    trace.checked.push(isChecked);
+    trace.sectionIds.push(cap.sectionId);
+  }).design;
+  let mechanismTrace: number[] | null = null;
   const factored = { combination: input.combination, governing: stripRatio(f), utilisation: Math.min(f.ratio, 99.99), pass: f.ratio <= 1 };
 
   // --- mechanism ------------------------------------------------------------------------------------------
@@ -303,7 +336,9 @@ export function memberShear(input: MemberShearInput): ShearResult {
     } else {
       const loads = [...constant, ...pattern.map((l) => scaleLoad(l, lambda))];
       const forces = (x: number, side: 'left' | 'right') => memberForcesAt(member.supports, span, loads, ends, x, side);
-      const { nominal, design } = scan(forces);
+      const shears: number[] = [];
+      const { nominal, design } = scan(forces, (_x, shear) => shears.push(shear));
+      mechanismTrace = shears;
       // Hogging moments beyond the hinge capacity elsewhere mean another mechanism would form first.
       for (const x of stations) {
         const mx = forces(x, 'right').moment;
@@ -375,6 +410,7 @@ export function memberShear(input: MemberShearInput): ShearResult {
     flexuralDuctilityAvailable: governs !== 'shear',
     sentence,
     criticalSectionRule,
+    diagram: { ...trace, mechanism: mechanismTrace },
     warnings,
   };
 }

@@ -210,10 +210,22 @@ function axisOptions(axis: AxisSpec, id: 'x' | 'y' | 'x2' | 'y2', font: (size: n
       color: TEXT_COLOUR,
       font: titleFont,
     },
-    ticks: { color: TEXT_COLOUR, font: font(base - 0.5), maxTicksLimit: horizontal ? (axis.stack !== undefined ? 6 : 9) : 8, padding: 3, ...(panel ? { includeBounds: false } : {}) },
+    ...(axis.categories ? { min: -0.5, max: axis.categories.length - 0.5 } : {}),
+    ticks: axis.categories
+      ? { color: TEXT_COLOUR, font: font(base - 0.5), padding: 3, stepSize: 1, autoSkip: false, includeBounds: false, maxRotation: 0, callback: categoryTick(axis.categories) }
+      : { color: TEXT_COLOUR, font: font(base - 0.5), maxTicksLimit: horizontal ? (axis.stack !== undefined ? 6 : 9) : 8, padding: 3, ...(panel ? { includeBounds: false } : {}) },
     grid: { color: GRID_COLOUR, drawTicks: false, drawOnChartArea: id === 'x' || id === 'y' || axis.stack !== undefined },
     border: { color: PALETTE.grey },
     ...(axis.stack !== undefined ? { stack: axis.stack, stackWeight: axis.stackWeight ?? 1, offset: true } : {}),
+  };
+}
+
+/** Tick labels of a category axis: the name at each whole value, nothing between. */
+function categoryTick(categories: readonly (string | readonly string[])[]): (value: number | string) => string | string[] {
+  return (value) => {
+    const v = typeof value === 'number' ? value : Number(value);
+    const name = Number.isInteger(v) ? categories[v] : undefined;
+    return name === undefined ? '' : typeof name === 'string' ? name : [...name];
   };
 }
 
@@ -336,8 +348,13 @@ function overlayPlugin(spec: ChartSpec, fontFamily: string, fontSize: number, ba
         const scale = chart.scales[band.axis];
         if (!scale || band.label === '' || band.axis !== 'x') continue;
         const x = Math.min(scale.getPixelForValue(band.from), scale.getPixelForValue(band.to));
-        const r = { x: Math.max(x + 2, area.left + 2), y: area.top + 2, w: ctx.measureText(band.label).width, h: height };
-        if (r.x + r.w > area.right) r.x = area.right - r.w - 2;
+        // At the top of the band, or a row lower where an earlier band's label is.
+        const rows = [0, 1, 2, 3].map((k) => {
+          const r = { x: Math.max(x + 2, area.left + 2), y: area.top + 2 + k * height, w: ctx.measureText(band.label).width, h: height };
+          if (r.x + r.w > area.right) r.x = area.right - r.w - 2;
+          return r;
+        });
+        const r = rows.find((c) => !placed.some((q) => overlaps(c, q))) ?? rows[0]!;
         label(ctx, band.label, r);
         placed.push(r);
       }

@@ -11,3 +11,6 @@ export * from './span-distribution.ts';
 export * from './section-profile.ts';
 export * from './section-drawing.ts';
 export * from './chartjs-config.ts';
+export * from './retrofit.ts';
+export * from './shear.ts';
+export * from './service.ts';

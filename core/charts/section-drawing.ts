@@ -10,7 +10,8 @@ import { layerArea } from '../section/definition.ts';
 import type { Point } from '../section/shapes.ts';
 import { formatQuantity } from '../units/format.ts';
 import { PALETTE } from './palette.ts';
-import { labelNamesBars, sectionFigure, spreadLabels } from './section-geometry.ts';
+import { addedFigure, labelNamesBars, sectionFigure, spreadLabels } from './section-geometry.ts';
+import type { AddedItem } from '../retrofit/types.ts';
 import type { UnitsInput } from './types.ts';
 import { resolveUnits, unitFor } from './units.ts';
 
@@ -24,6 +25,15 @@ export interface SectionDrawingOptions {
   readonly fontFamily?: string;
   /** Label the reinforcement layers at the right (default true). */
   readonly layerLabels?: boolean;
+  /**
+   * What a strengthening scheme or an as-found condition adds (overlay, FRP, plate, new or exposed
+   * bars; core/retrofit AddedItem), drawn in colour with a label each, and the outline the section
+   * had before concrete was lost (`ghost`, mm in this definition's coordinates), dashed.
+   */
+  readonly additions?: {
+    readonly items: readonly AddedItem[];
+    readonly ghost?: { readonly outline: readonly Point[]; readonly label: string };
+  };
 }
 
 export interface SectionDrawing {
@@ -77,8 +87,31 @@ export function sectionDrawingSvg(definition: SectionDefinition, unitsInput: Uni
     return { svg, width: maxWidth, height: 40, scale: null, scaleText: 'not to scale' };
   }
 
-  const { outline, voids, xMin, xMax, width, height, web } = figure;
+  const { outline, voids, web } = figure;
+  const added = options.additions ? addedFigure(definition, options.additions.items) : { rects: [], bars: [] };
+  const ghost = options.additions?.ghost;
+  // The drawing's extent: the outline, and anything added outside it (a plate, FRP, the lost concrete).
+  const xs = [figure.xMin, figure.xMax, ...added.rects.flatMap((r) => [r.x0, r.x1]), ...added.bars.map((b) => b.x), ...(ghost?.outline.map((p) => p.x) ?? [])].filter(Number.isFinite);
+  const ys = [0, figure.height, ...added.rects.flatMap((r) => [r.y0, r.y1]), ...(ghost?.outline.map((p) => p.y) ?? [])].filter(Number.isFinite);
+  const xMin = Math.min(...xs);
+  const xMax = Math.max(...xs);
+  const yMin = Math.min(...ys);
+  const width = xMax - xMin;
+  const height = Math.max(...ys) - yMin;
   // Layer labels and their widths decide the right margin.
+  // Added items are named from their data in the display units (the engine's own labels are in mm).
+  const barsText = (count: number, diameter: number) => {
+    const designation = barDesignation(diameter, units.system);
+    return designation ? `${count} ${designation}` : `${count} × ${length(diameter)}`;
+  };
+  const rectText = (r: (typeof added.rects)[number]) => r.kind === 'overlay'
+    ? `new concrete layer ${length(r.y1 - r.y0)}`
+    : `${r.kind === 'frp' ? 'FRP' : 'steel plate'} ${length(r.y1 - r.y0)} × ${length(r.x1 - r.x0)}`;
+  const addedLabels = [
+    ...added.rects.map((r) => ({ depth: (r.y0 + r.y1) / 2, text: rectText(r), colour: r.kind === 'overlay' ? PALETTE.teal : r.kind === 'frp' ? PALETTE.purple : PALETTE.blue })),
+    ...added.bars.filter((b) => b.first).map((b) => ({ depth: b.y, text: `${barsText(b.count, b.diameter)} ${b.exposed ? 'exposed by spalling' : 'in the new layer'}`, colour: b.exposed ? PALETTE.red : PALETTE.teal })),
+    ...(ghost ? [{ depth: Math.max(...ghost.outline.map((p) => p.y)), text: ghost.label, colour: PALETTE.red }] : []),
+  ];
   const layers = figure.layers.map(({ layer, index, diameter, positions }) => {
     const sized = layer.count !== undefined && layer.diameter !== undefined;
     // Bars as drawings write them (3 #8, 4 Ø20) when the diameter is a tabulated size.
@@ -90,7 +123,8 @@ export function sectionDrawingSvg(definition: SectionDefinition, unitsInput: Uni
     return { layer, diameter, sized, text, positions };
   });
   const showLabels = options.layerLabels ?? true;
-  const labelWidth = showLabels && layers.length > 0 ? Math.max(...layers.map((l) => textWidth(l.text, font))) + 16 : 0;
+  const labelTexts = [...layers.map((l) => l.text), ...addedLabels.map((l) => l.text)];
+  const labelWidth = showLabels && labelTexts.length > 0 ? Math.max(...labelTexts.map((t) => textWidth(t, font))) + 16 : 0;
 
   const bottomChord = definition.shape.kind === 'tee' || definition.shape.kind === 'ell' ? web : undefined;
   const marginLeft = font * 2 + 10;
@@ -105,7 +139,7 @@ export function sectionDrawingSvg(definition: SectionDefinition, unitsInput: Uni
   const svgWidth = Math.ceil(marginLeft + width * k + marginRight);
   const svgHeight = Math.ceil(marginTop + height * k + marginBottom);
   const X = (x: number) => marginLeft + (x - xMin) * k;
-  const Y = (y: number) => marginTop + y * k;
+  const Y = (y: number) => marginTop + (y - yMin) * k;
   const path = (points: readonly Point[]) => `M${points.map((p) => `${n2(X(p.x))} ${n2(Y(p.y))}`).join(' L')} Z`;
 
   const parts: string[] = [];
@@ -118,6 +152,25 @@ export function sectionDrawingSvg(definition: SectionDefinition, unitsInput: Uni
     parts.push(`<rect x="${n2(X(x0))}" y="${n2(Y(y0))}" width="${n2((x1 - x0) * k)}" height="${n2((y1 - y0) * k)}" rx="${n2(hoop.radius * k)}" fill="none" stroke="${PALETTE.grey}" stroke-width="${n2(Math.max(hoop.diameter * k, 0.6))}"/>`);
   }
 
+  // What a scheme adds, and the outline before concrete was lost.
+  for (const r of added.rects) {
+    const fill = r.kind === 'overlay' ? '#d5ece9' : r.kind === 'frp' ? PALETTE.purple : '#9fb3c8';
+    const stroke = r.kind === 'overlay' ? PALETTE.teal : r.kind === 'frp' ? PALETTE.purple : PALETTE.blue;
+    // A laminate a fraction of a millimetre thick is drawn at least 1.5 pt thick, outward from the face.
+    const h = Math.max((r.y1 - r.y0) * k, r.kind === 'overlay' ? 0 : 1.5);
+    const y = r.kind === 'frp' && r.y0 < 0 ? Y(r.y1) - h : Y(r.y0);
+    parts.push(`<rect x="${n2(X(r.x0))}" y="${n2(y)}" width="${n2((r.x1 - r.x0) * k)}" height="${n2(h)}" fill="${fill}" fill-opacity="${r.kind === 'overlay' ? 0.85 : 1}" stroke="${stroke}" stroke-width="0.7"/>`);
+  }
+  if (ghost && ghost.outline.length >= 3) {
+    parts.push(`<path d="${path(ghost.outline)}" fill="none" stroke="${PALETTE.red}" stroke-width="0.8" stroke-dasharray="3 2"/>`);
+  }
+  for (const b of added.bars) {
+    const radius = Math.max((b.diameter / 2) * k, 1.2);
+    parts.push(b.exposed
+      ? `<circle cx="${n2(X(b.x))}" cy="${n2(Y(b.y))}" r="${n2(radius)}" fill="none" stroke="${PALETTE.red}" stroke-width="1"/>`
+      : `<circle cx="${n2(X(b.x))}" cy="${n2(Y(b.y))}" r="${n2(radius)}" fill="${PALETTE.teal}"/>`);
+  }
+
   // Bars.
   for (const { layer, diameter, sized, positions } of layers) {
     const radius = Math.max((diameter / 2) * k, 1.2);
@@ -128,37 +181,41 @@ export function sectionDrawingSvg(definition: SectionDefinition, unitsInput: Uni
     }
   }
 
-  const text = (x: number, y: number, content: string, anchor: 'start' | 'middle' | 'end', rotate = false) =>
-    `<text x="${n2(x)}" y="${n2(y)}" font-family="${escapeXml(family)}" font-size="${font}" fill="${PALETTE.ink}" text-anchor="${anchor}"${rotate ? ` transform="rotate(-90 ${n2(x)} ${n2(y)})"` : ''}>${escapeXml(content)}</text>`;
+  const text = (x: number, y: number, content: string, anchor: 'start' | 'middle' | 'end', rotate = false, colour: string = PALETTE.ink) =>
+    `<text x="${n2(x)}" y="${n2(y)}" font-family="${escapeXml(family)}" font-size="${font}" fill="${colour}" text-anchor="${anchor}"${rotate ? ` transform="rotate(-90 ${n2(x)} ${n2(y)})"` : ''}>${escapeXml(content)}</text>`;
   const line = (x1: number, y1: number, x2: number, y2: number, w = 0.5) => `<path d="M${n2(x1)} ${n2(y1)} L${n2(x2)} ${n2(y2)}" stroke="${PALETTE.ink}" stroke-width="${w}" fill="none"/>`;
   const tick = (x: number, y: number) => line(x - 2.2, y + 2.2, x + 2.2, y - 2.2, 0.7);
 
   // Overall width above, height at the left, web width below (flanged shapes).
   const yDim = marginTop - 6;
-  parts.push(line(X(xMin), yDim, X(xMax), yDim), tick(X(xMin), yDim), tick(X(xMax), yDim));
-  parts.push(line(X(xMin), yDim - 3, X(xMin), Y(0) - 1.5, 0.3), line(X(xMax), yDim - 3, X(xMax), Y(0) - 1.5, 0.3));
-  parts.push(text((X(xMin) + X(xMax)) / 2, yDim - 3, length(width), 'middle'));
+  const cx0 = figure.xMin;
+  const cx1 = figure.xMax;
+  const ch = figure.height;
+  parts.push(line(X(cx0), yDim, X(cx1), yDim), tick(X(cx0), yDim), tick(X(cx1), yDim));
+  parts.push(line(X(cx0), yDim - 3, X(cx0), Y(0) - 1.5, 0.3), line(X(cx1), yDim - 3, X(cx1), Y(0) - 1.5, 0.3));
+  parts.push(text((X(cx0) + X(cx1)) / 2, yDim - 3, length(cx1 - cx0), 'middle'));
   const xDim = marginLeft - 6;
-  parts.push(line(xDim, Y(0), xDim, Y(height)), tick(xDim, Y(0)), tick(xDim, Y(height)));
-  parts.push(text(xDim - 3, (Y(0) + Y(height)) / 2, length(height), 'middle', true));
+  parts.push(line(xDim, Y(0), xDim, Y(ch)), tick(xDim, Y(0)), tick(xDim, Y(ch)));
+  parts.push(text(xDim - 3, (Y(0) + Y(ch)) / 2, length(ch), 'middle', true));
   if (bottomChord) {
-    const yb = Y(height) + 6;
+    const yb = Y(yMin + height) + 6;
     parts.push(line(X(bottomChord.x0), yb, X(bottomChord.x1), yb), tick(X(bottomChord.x0), yb), tick(X(bottomChord.x1), yb));
     parts.push(text((X(bottomChord.x0) + X(bottomChord.x1)) / 2, yb + font + 2, length(bottomChord.x1 - bottomChord.x0), 'middle'));
   }
 
   // Layer labels at the right, spread so that they never overlap, each with a leader.
-  if (showLabels && layers.length > 0) {
-    const sorted = [...layers].sort((a, b) => a.layer.depth - b.layer.depth);
-    const placed = spreadLabels(sorted.map((l) => Y(l.layer.depth) + font / 3), font + 2);
+  const all = [...layers.map((l) => ({ depth: l.layer.depth, text: l.text, colour: PALETTE.ink })), ...addedLabels];
+  if (showLabels && all.length > 0) {
+    const sorted = [...all].sort((a, b) => a.depth - b.depth);
+    const placed = spreadLabels(sorted.map((l) => Y(l.depth) + font / 3), font + 2);
     // Pull the stack back up if it ran past the bottom of the drawing.
     const overflow = placed[placed.length - 1]! - (svgHeight - 2);
     if (overflow > 0) for (let i = 0; i < placed.length; i++) placed[i] = placed[i]! - overflow;
     const xLabel = X(xMax) + 14;
     sorted.forEach((l, i) => {
       const y = placed[i]!;
-      parts.push(line(X(xMax) + 2, Y(l.layer.depth), xLabel - 2, y - font / 3, 0.3));
-      parts.push(text(xLabel, y, l.text, 'start'));
+      parts.push(line(X(xMax) + 2, Y(l.depth), xLabel - 2, y - font / 3, 0.3));
+      parts.push(text(xLabel, y, l.text, 'start', false, l.colour));
     });
   }
 

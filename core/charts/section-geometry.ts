@@ -10,7 +10,9 @@
 import type { SectionDefinition } from '../section/definition.ts';
 import { hoopsConfine, layerDiameter } from '../section/definition.ts';
 import { barPositions, hoopCentreline, shapeHeight, webExtent } from '../section/build.ts';
-import { shapeOutline, type Point } from '../section/shapes.ts';
+import { shapeOutline, type Point, type ShapeOutline } from '../section/shapes.ts';
+import { chordIntervals } from '../section/width-profile.ts';
+import type { AddedItem } from '../retrofit/types.ts';
 
 export interface Rectangle {
   readonly x0: number;
@@ -136,4 +138,68 @@ export function barMentions(text: string, bars: string): { readonly index: numbe
 /** True when a layer's `label` already says its `bars` (`top 4 #8` says `4 #8`): the drawing then does not repeat them. */
 export function labelNamesBars(label: string, bars: string): boolean {
   return barMentions(label, bars).length > 0;
+}
+
+/** What a strengthening scheme or an as-found condition adds to a drawing, mm (x as the section's, y down from its top fibre). */
+export interface AddedFigure {
+  /** Overlays, FRP laminates and plates as rectangles. */
+  readonly rects: readonly (Rectangle & { readonly kind: 'overlay' | 'frp' | 'plate'; readonly label: string })[];
+  /** Bars of a new layer, and bars left outside the concrete by spalling (`exposed`). */
+  readonly bars: readonly { readonly x: number; readonly y: number; readonly diameter: number; readonly exposed: boolean; readonly label: string; readonly first: boolean; readonly count: number }[];
+}
+
+/**
+ * Where the items a variant adds (core/retrofit AddedItem: overlay, FRP, plate, bars) go in the
+ * drawing of its section. An item is centred on the face it is bonded to or cast on; FRP is drawn
+ * with its true thickness outside the face, a plate about its centroid. Bars of a new layer are
+ * spread evenly over the layer's width (their horizontal positions are not an input); exposed bars
+ * keep their positions in the section.
+ */
+export function addedFigure(section: SectionDefinition, items: readonly AddedItem[]): AddedFigure {
+  let outline: ShapeOutline;
+  try {
+    outline = shapeOutline(section.shape);
+  } catch {
+    return { rects: [], bars: [] };
+  }
+  const height = shapeHeight(section.shape);
+  /** Centre of the concrete at depth y (the middle of its outermost chords), mm. */
+  const centreAt = (y: number) => {
+    const chords = chordIntervals(outline, Math.min(Math.max(y, 1e-6 * height), height * (1 - 1e-6)));
+    return chords.length > 0 ? (chords[0]![0] + chords[chords.length - 1]![1]) / 2 : 0;
+  };
+  const rects: (Rectangle & { kind: 'overlay' | 'frp' | 'plate'; label: string })[] = [];
+  const bars: { x: number; y: number; diameter: number; exposed: boolean; label: string; first: boolean; count: number }[] = [];
+  let overlay: Rectangle | null = null;
+  for (const item of items) {
+    if (!finite(item.depth)) continue;
+    if (item.kind === 'overlay' && finite(item.top) && finite(item.bottom) && finite(item.width)) {
+      // Centred on the face the layer is cast on (the outline reaches the new face by a zero-width edge).
+      const eps = 1e-3 * height;
+      const c = centreAt(item.top <= eps ? item.bottom + eps : item.top - eps);
+      overlay = { x0: c - item.width / 2, x1: c + item.width / 2, y0: item.top, y1: item.bottom };
+      rects.push({ ...overlay, kind: 'overlay', label: item.label });
+    } else if ((item.kind === 'frp' || item.kind === 'plate') && finite(item.width) && item.width > 0) {
+      const t = item.area / item.width;
+      const bottomFace = item.depth >= height / 2;
+      const c = centreAt(bottomFace ? height : 0);
+      const [y0, y1] = item.kind === 'frp' ? (bottomFace ? [height, height + t] : [-t, 0]) : [item.depth - t / 2, item.depth + t / 2];
+      rects.push({ x0: c - item.width / 2, x1: c + item.width / 2, y0, y1, kind: item.kind, label: item.label });
+    } else if (item.kind === 'bar') {
+      const diameter = finite(item.diameter) && item.diameter > 0 ? item.diameter : Math.sqrt((4 * item.area) / Math.PI / Math.max(item.count ?? 1, 1));
+      let xs = item.positions?.filter(finite) ?? [];
+      if (xs.length === 0) {
+        const count = Math.max(1, item.count ?? 1);
+        const span = overlay ?? (() => {
+          const chords = chordIntervals(outline, Math.min(Math.max(item.depth, 1e-6 * height), height * (1 - 1e-6)));
+          return chords.length > 0 ? { x0: chords[0]![0], x1: chords[chords.length - 1]![1] } : { x0: 0, x1: 0 };
+        })();
+        const cover = Math.min(2 * diameter, (span.x1 - span.x0) / 4);
+        const usable = span.x1 - span.x0 - 2 * cover;
+        xs = Array.from({ length: count }, (_, i) => (count === 1 ? (span.x0 + span.x1) / 2 : span.x0 + cover + (usable * i) / (count - 1)));
+      }
+      xs.forEach((x, i) => bars.push({ x, y: item.depth, diameter, exposed: item.exposed === true, label: item.label, first: i === 0, count: xs.length }));
+    }
+  }
+  return { rects, bars };
 }

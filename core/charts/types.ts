@@ -52,6 +52,11 @@ export interface AxisSpec {
    * at round values.
    */
   readonly panelMargin?: number;
+  /**
+   * Named steps instead of numbers: the axis runs over 0 … n − 1 (with half a step beyond each
+   * end) and each whole value is labelled by its name (lines of one label as an array).
+   */
+  readonly categories?: readonly (string | readonly string[])[];
 }
 
 export interface SeriesSpec {
@@ -101,7 +106,7 @@ export interface ReferenceLineSpec {
   readonly style: LineStyle;
 }
 
-export type ChartKind = 'moment-curvature' | 'load-deflection' | 'span-distribution' | 'span-panels' | 'strain-profile' | 'stress-profile';
+export type ChartKind = 'moment-curvature' | 'load-deflection' | 'span-distribution' | 'span-panels' | 'strain-profile' | 'stress-profile' | 'shear-diagram' | 'service-deflection';
 
 export interface ChartSpec {
   readonly kind: ChartKind;

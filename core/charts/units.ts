@@ -121,6 +121,10 @@ export function engineeringText(value: number, unit: string): string {
  * A plotted value of `axis` (divided by the axis factor) as text with its unit and the factor
  * put back: 1.442 on a `×10⁻³ 1/in` axis reads `1.442×10⁻³ 1/in`.
  */
-export function axisValueText(plotted: number, axis: Pick<AxisSpec, 'unit' | 'scale'>): string {
+export function axisValueText(plotted: number, axis: Pick<AxisSpec, 'unit' | 'scale' | 'categories'>): string {
+  if (axis.categories) {
+    const name = Number.isInteger(plotted) ? axis.categories[plotted] : undefined;
+    if (name !== undefined) return typeof name === 'string' ? name : name.join(' ');
+  }
   return engineeringText(plotted * axis.scale, axis.unit);
 }

@@ -14,7 +14,7 @@ import type { MomentCurvatureResult } from '../section/results.ts';
 import type { MemberDefinition } from './types.ts';
 import type { Problem } from '../diagnostics.ts';
 import type { Text } from '../units/phrase.ts';
-import type { MemberResult } from '../assessment/results.ts';
+import { needsStrengthening, type MemberResult } from '../assessment/results.ts';
 
 export interface CriticalSection {
   readonly sectionId: string;
@@ -34,9 +34,16 @@ export interface MemberKeyResults {
   /** The governing-mode sentence (quantities as data: say(governingMode, units)). */
   readonly governingMode: Text;
   readonly critical: CriticalSection | null;
-  /** Idealised (nominal) yield moment My of the critical section, N·mm (bilinear idealisation). */
+  /**
+   * Moments of the critical section's moment–curvature curve, N·mm, by the names used everywhere
+   * (core/charts/moment-names.ts): first yield M′y (the tension steel first reaches fy), the nominal
+   * yield moment My of the bilinear idealisation (null when the curve has none — never first yield
+   * in its place), the peak Mmax, and the moment at the ultimate curvature. The code resistance
+   * (φMn, M_Rd) is the strength check's, in `strengthUtilisation`.
+   */
+  readonly firstYieldMoment: number | null;
   readonly yieldMoment: number | null;
-  /** Ultimate moment Mu of the critical section at its ultimate curvature, N·mm. */
+  readonly peakMoment: number | null;
   readonly ultimateMoment: number | null;
   /** Curvature ductility φu/φy of the critical section. */
   readonly curvatureDuctility: number | null;
@@ -66,6 +73,12 @@ export interface MemberKeyResults {
   readonly strengthPass: boolean | null;
   readonly warnings: number;
   readonly errors: readonly Problem[];
+  /** Existing beams: whether the beam as it stands needs strengthening, and the scheme the engineer prefers with its status. */
+  readonly strengthening: {
+    readonly needed: boolean;
+    readonly schemes: number;
+    readonly preferred: { readonly schemeId: string; readonly name: string; readonly status: MemberResult['status'] | null } | null;
+  } | null;
 }
 
 const finiteOrNull = (v: number | null | undefined): number | null => (typeof v === 'number' && Number.isFinite(v) ? v : null);
@@ -130,7 +143,9 @@ export function memberKeyResults(result: MemberResult, definition?: MemberDefini
     status: result.status,
     governingMode: result.governingMode,
     critical: picked?.critical ?? null,
-    yieldMoment: finiteOrNull(curve?.bilinear?.yieldMoment ?? curve?.keyPoints.firstYield?.moment),
+    firstYieldMoment: finiteOrNull(curve?.keyPoints.firstYield?.moment),
+    yieldMoment: finiteOrNull(curve?.bilinear?.yieldMoment),
+    peakMoment: finiteOrNull(curve?.keyPoints.peak?.moment),
     ultimateMoment: finiteOrNull(curve?.bilinear?.ultimateMoment ?? curve?.keyPoints.ultimate?.moment),
     curvatureDuctility: finiteOrNull(curve?.curvatureDuctility),
     displacementDuctility: finiteOrNull(result.ductility.displacementDuctility),
@@ -145,5 +160,21 @@ export function memberKeyResults(result: MemberResult, definition?: MemberDefini
     strengthPass: result.strength ? result.strength.pass : null,
     warnings: result.warnings.length,
     errors: result.errors,
+    strengthening: strengtheningOf(result, definition),
+  };
+}
+
+/** Existing beams (a condition or schemes given): whether strengthening is needed and the preferred scheme's status. */
+function strengtheningOf(result: MemberResult, definition?: MemberDefinition): MemberKeyResults['strengthening'] {
+  const retrofit = result.retrofit;
+  const schemes = definition?.schemes ?? [];
+  if (!retrofit && schemes.length === 0 && !definition?.asFound) return null;
+  const preferredId = definition?.preferredSchemeId;
+  const scheme = preferredId !== undefined ? schemes.find((s) => s.id === preferredId) : undefined;
+  const analysed = preferredId !== undefined ? retrofit?.schemes.find((s) => s.schemeId === preferredId) : undefined;
+  return {
+    needed: needsStrengthening(result),
+    schemes: schemes.length,
+    preferred: scheme ? { schemeId: scheme.id, name: scheme.name, status: analysed?.variant?.status ?? null } : null,
   };
 }

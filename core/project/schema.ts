@@ -233,6 +233,7 @@ export const memberDefinitionSchema = z.looseObject({
   notes: text.optional(),
   asFound: asFoundConditionSchema.optional(),
   schemes: list(strengtheningSchemeSchema).optional(),
+  preferredSchemeId: text.optional(),
 });
 
 // --- project ------------------------------------------------------------------------------------

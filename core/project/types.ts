@@ -22,6 +22,8 @@ export interface MemberDefinition extends BeamDefinition {
   readonly asFound?: AsFoundCondition;
   /** Strengthening schemes to compare (core/retrofit). */
   readonly schemes?: readonly StrengtheningScheme[];
+  /** Id of the scheme the engineer prefers (one of `schemes`); the report's summary lists it. */
+  readonly preferredSchemeId?: string;
 }
 
 export interface ProjectInfo {

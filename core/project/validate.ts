@@ -357,6 +357,10 @@ export function validateProjectData(data: unknown): { project: Project | null; d
     semantic.push(...guarded(path, () => validateMember(member, path, sectionIds)));
     if (member.asFound) semantic.push(...guarded(`${path}.asFound`, () => validateAsFound(member.asFound!, member, soundProject, `${path}.asFound`)));
     if (member.schemes) semantic.push(...guarded(`${path}.schemes`, () => validateSchemes(member.schemes!, member, soundProject, `${path}.schemes`)));
+    if (member.preferredSchemeId !== undefined && !(member.schemes ?? []).some((s) => s.id === member.preferredSchemeId)) {
+      const ids = (member.schemes ?? []).map((s) => `"${s.id}"`);
+      semantic.push({ code: 'unknown-reference', path: `${path}.preferredSchemeId`, severity: 'error', message: `must be the id of one of the member's schemes (${ids.length > 0 ? ids.join(', ') : 'it has none'}), got ${JSON.stringify(member.preferredSchemeId)}` });
+    }
     if (code) {
       const foreign = member.service.limitCases.filter((c) => (code === 'ACI 318-19' ? EN_LIMITS : ACI_LIMITS).includes(c));
       for (const c of foreign) {

@@ -53,6 +53,9 @@ export interface ExposedBars {
   readonly diameter: number;
   readonly label: string;
   readonly sourceIndex: number;
+  /** Number of bars and their horizontal positions in the section, mm (as drawn; the engine needs only the area). */
+  readonly count?: number;
+  readonly positions: readonly number[];
 }
 
 /** A library section as found: its derived definition (depths in mm of the derived section) and the bars spalling left outside the concrete. */
@@ -165,7 +168,7 @@ export function deriveAsFound(member: BeamDefinition, condition: AsFoundConditio
       const derived = derivedId(id, member.id, variant);
       concreteMap.set(id, derived);
       specs.push({ ...spec, id: derived, name: `${spec.name} (in place)`, strength: result.strength });
-      concreteSummary.push({ concreteId: id, derivedId: derived, specifiedStrength: spec.strength, inPlace: result, cores: { meanStrength: c.meanStrength, count: c.count, coefficientOfVariation: c.coefficientOfVariation }, note: c.note ?? '' });
+      concreteSummary.push({ coreSet: i, concreteId: id, derivedId: derived, specifiedStrength: spec.strength, inPlace: result, cores: { meanStrength: c.meanStrength, count: c.count, coefficientOfVariation: c.coefficientOfVariation }, note: c.note ?? '' });
       if (result.strength < 0.75 * spec.strength) warn(`${at}.cores[${i}]`, phrase`the in-place strength (${fc(result.strength)}) is ${pct(1 - result.strength / spec.strength)} below the specified ${fc(spec.strength)}`);
     }
   });
@@ -308,7 +311,7 @@ export function deriveAsFound(member: BeamDefinition, condition: AsFoundConditio
         if (layerInside(outline1, outcome.height, xs, depth, diameter)) kept.push({ ...layer, depth });
         else {
           const label = `${layer.label ?? `layer ${layer.sourceIndex + 1}`} (exposed by spalling)`;
-          exposed.push({ steelId: layer.steelId, depth, area: layerArea(layer), diameter, label, sourceIndex: layer.sourceIndex });
+          exposed.push({ steelId: layer.steelId, depth, area: layerArea(layer), diameter, label, sourceIndex: layer.sourceIndex, ...(layer.count !== undefined ? { count: layer.count } : {}), positions: xs });
           changes.push(`${label}: no longer embedded; kept as a bar outside the concrete (no bond along the spall, anchorage assumed beyond it)`);
         }
       }
@@ -351,7 +354,7 @@ export function deriveAsFound(member: BeamDefinition, condition: AsFoundConditio
       concrete: concreteSummary,
       steel: steelSummary,
       defects: defectSummary.map((d, i) => ({ ...d, effect: effects[i]!.length > 0 ? joinTexts(effects[i]!, '; ') : options.repairSpalls && defects[i]!.kind === 'cover-loss' ? 'repaired' : 'no effect' })),
-      sections: [...derivedSections.values()].map((d) => ({ baseSectionId: d.baseSectionId, sectionId: d.id, changes: d.changes })),
+      sections: [...derivedSections.values()].map((d) => ({ baseSectionId: d.baseSectionId, sectionId: d.id, shift: d.shift, changes: d.changes })),
       notes: condition.notes ?? '',
     },
   };

@@ -76,7 +76,7 @@ export function exposedElements(exposed: readonly ExposedBars[], materials: Mate
     if (!steel) continue;
     const depth = b.depth - shift;
     elements.push({ kind: 'bar', label: b.label, sourceIndex: b.sourceIndex, area: b.area, diameter: b.diameter, depth, material: steel, initialStrain: 0, limitStrain: steel.ruptureStrain, limitCause: 'steel-rupture', displacedConcrete: null });
-    added.push({ kind: 'bar', label: b.label, depth, area: b.area, initialStrain: 0, limitStrain: steel.ruptureStrain, limitCause: 'steel-rupture', materialId: b.steelId, exposed: true });
+    added.push({ kind: 'bar', label: b.label, depth, area: b.area, initialStrain: 0, limitStrain: steel.ruptureStrain, limitCause: 'steel-rupture', materialId: b.steelId, exposed: true, diameter: b.diameter, ...(b.count !== undefined ? { count: b.count } : {}), positions: b.positions });
   }
   return { elements, added };
 }
@@ -148,7 +148,7 @@ export function concreteLayerSection(ref: ReferenceSection, scheme: ConcreteLaye
     const depth = scheme.face === 'top' ? b.distanceFromFace : bottom - b.distanceFromFace;
     const label = b.label ?? `${scheme.name} bars ${j + 1}: ${b.count !== undefined && b.diameter !== undefined ? `${b.count} × ${b.diameter} mm` : `${area.toFixed(0)} mm²`}`;
     elements.push({ kind: 'bar', label, sourceIndex: j, area, diameter, depth, material: steel, initialStrain: 0, limitStrain: steel.ruptureStrain, limitCause: 'steel-rupture', displacedConcrete: concrete.cover });
-    added.push({ kind: 'bar', label, depth, area, initialStrain: 0, limitStrain: steel.ruptureStrain, limitCause: 'steel-rupture', materialId: b.steelId });
+    added.push({ kind: 'bar', label, depth, area, initialStrain: 0, limitStrain: steel.ruptureStrain, limitCause: 'steel-rupture', materialId: b.steelId, diameter, ...(b.count !== undefined ? { count: b.count } : {}) });
   });
   if (problems.length > 0) return problems;
   const exposed = exposedElements(ref.exposedBars, materials, shift);

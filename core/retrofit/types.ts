@@ -228,11 +228,17 @@ export interface AddedItem {
   readonly materialId: string;
   /** True for bars left outside the concrete by spalling (no bond along the spall, no displaced concrete). */
   readonly exposed?: boolean;
+  /** Bars: their diameter (mm) and number, for drawings; exposed bars also their horizontal positions (mm, as in the section). */
+  readonly diameter?: number;
+  readonly count?: number;
+  readonly positions?: readonly number[];
 }
 
 /** What the as-found condition changed. */
 export interface AsFoundSummary {
   readonly concrete: readonly {
+    /** Index of the core set (AsFoundCondition.cores) the strength comes from. */
+    readonly coreSet: number;
     readonly concreteId: string;
     readonly derivedId: string;
     /** Strength of the library material (specified), MPa. */
@@ -258,8 +264,11 @@ export interface AsFoundSummary {
     readonly effect: Text;
     readonly note: string;
   }[];
-  /** Derived section ids per library section of the member. */
-  readonly sections: readonly { readonly baseSectionId: string; readonly sectionId: string; readonly changes: readonly Text[] }[];
+  /**
+   * Derived section ids per library section of the member; `shift` (mm) is how far the top fibre
+   * moved down (top cover lost): a depth in the derived section is the original depth − shift.
+   */
+  readonly sections: readonly { readonly baseSectionId: string; readonly sectionId: string; readonly shift: number; readonly changes: readonly Text[] }[];
   readonly notes: string;
 }
 

@@ -185,3 +185,43 @@ describe('flexure-governed or shear-governed, in the member result', () => {
     expect(say(results.members[1]!.shear!.criticalSectionRule, 'si')).toMatch(/Eq\. 6\.5/);
   });
 });
+
+describe('the shear diagram along the span', () => {
+  const project = smallProject('ACI 318-19');
+  const selfWeight = 2400 * 9.80665 * 300 * 600 * 1e-9;
+  const L = 6000;
+  const m = member('D', 'simply-supported', L, 'r1');
+  const r = memberShear({ code: 'ACI 318-19', member: m, zones: zonesOf(project, m), ...aci });
+  const d = r.diagram;
+
+  it('holds the factored shear of statics at every station: |V| = wu·|L/2 − x|', () => {
+    const wu = 1.2 * (selfWeight + 8) + 1.6 * 12;
+    expect(d.x.length).toBeGreaterThan(100);
+    d.x.forEach((x, i) => {
+      // Handbook, simple span under uniform load: V(x) = w(L/2 − x)
+      expect(d.factored[i]).toBeCloseTo(wu * Math.abs(L / 2 - x), 3);
+    });
+  });
+
+  it('draws the capacity of the section and leaves the stretch within d of the supports unchecked', () => {
+    const cap = r.capacities.find((c) => c.direction === 'sagging')!;
+    d.x.forEach((x, i) => {
+      // At the supports the moment is zero within round-off and may read as either sense.
+      if (x > 0 && x < L) {
+        expect(d.design[i]).toBe(cap.design);
+        expect(d.nominal[i]).toBe(cap.nominal);
+      }
+      // ACI 318-19 9.4.3.2: sections closer than d to the support take the shear at d
+      expect(d.checked[i]).toBe(x >= 540 - 1e-9 && x <= L - 540 + 1e-9);
+    });
+  });
+
+  it('passes through the governing points of the check and of the mechanism', () => {
+    const at = (x: number) => d.x.findIndex((xi) => Math.abs(xi - x) < 1e-9);
+    const f = r.factored!.governing;
+    expect(d.factored[at(f.position)]).toBeCloseTo(f.shear, 6);
+    const g = r.mechanism!.governing;
+    expect(d.mechanism![at(g.position)]).toBeCloseTo(g.shear, 6);
+    expect(Math.max(...d.mechanism!.filter((_, i) => d.checked[i]))).toBeCloseTo(g.shear, 6);
+  });
+});

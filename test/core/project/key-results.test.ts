@@ -78,4 +78,34 @@ describe('memberKeyResults', () => {
     expect([k.yieldMoment, k.ultimateMoment, k.displacementDuctility, k.strengthUtilisation, k.deflection]).toEqual([null, null, null, null, null]);
     expect(k.strengthPass).toBe(false);
   });
+
+  it('names each moment for what it is: first yield, the idealisation\'s yield (never first yield in its place), the peak', () => {
+    const withPoints = (c: MomentCurvatureResult, firstYield: number, peak: number): MomentCurvatureResult => ({
+      ...c,
+      keyPoints: {
+        firstYield: { name: 'firstYield', curvature: 1e-6, moment: firstYield } as NonNullable<MomentCurvatureResult['keyPoints']['firstYield']>,
+        peak: { name: 'peak', curvature: 1e-4, moment: peak } as NonNullable<MomentCurvatureResult['keyPoints']['peak']>,
+      },
+    });
+    const hinged = { firstYieldDeflection: 10, yieldDeflection: 12, ultimateDeflection: 60, displacementDuctility: 5, failureCause: '', hinges: [hinge(4000, 'sagging', 'mid', 0.03)] };
+    // First yield above the idealised yield (a curve that dips after first yield): both are shown, each by its name.
+    const mid = withPoints(curve(200e6, 230e6, 12), 215e6, 236e6);
+    const k = memberKeyResults(result({ sections: [section('mid', mid, curve(90e6, 95e6, 9))], ductility: hinged }));
+    expect([k.firstYieldMoment, k.yieldMoment, k.peakMoment]).toEqual([215e6, 200e6, 236e6]);
+    // A curve without an idealisation has no My: first yield never stands in for it.
+    const { bilinear: _b, ...bare } = mid;
+    const k2 = memberKeyResults(result({ sections: [section('mid', bare, curve(90e6, 95e6, 9))], ductility: hinged }));
+    expect([k2.firstYieldMoment, k2.yieldMoment]).toEqual([215e6, null]);
+  });
+
+  it('says for an existing beam whether it needs strengthening and how the preferred scheme fares', () => {
+    const definition = { zones: [], asFound: {}, schemes: [{ kind: 'frp', id: 'f1', name: 'CFRP' }], preferredSchemeId: 'f1' } as unknown as MemberDefinition;
+    const scheme = { schemeId: 'f1', name: 'CFRP', variant: { status: 'ok' } } as unknown as NonNullable<MemberResult['retrofit']>['schemes'][number];
+    const retrofit = { schemes: [scheme] } as unknown as MemberResult['retrofit'];
+    const k = memberKeyResults(result({ status: 'check-fails', retrofit }), definition);
+    expect(k.strengthening).toEqual({ needed: true, schemes: 1, preferred: { schemeId: 'f1', name: 'CFRP', status: 'ok' } });
+    expect(memberKeyResults(result({ status: 'ok', retrofit }), { ...definition, preferredSchemeId: undefined } as MemberDefinition).strengthening).toEqual({ needed: false, schemes: 1, preferred: null });
+    // A member without any as-found data or schemes is not an existing-beam case.
+    expect(memberKeyResults(result({}), { zones: [] } as unknown as MemberDefinition).strengthening).toBeNull();
+  });
 });

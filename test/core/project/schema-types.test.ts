@@ -41,7 +41,7 @@ describe('the file schema and the project types', () => {
       strengthFactors: { dead: 1.2, superimposed: 1.2, live: 1.6 },
       service: { sustainedLiveFraction: 0.3, durationMonths: 60, limitCases: [] },
       capacity: { pattern: 'proportional', hingeLengthMethod: 'priestley-2007' },
-      notes: '', asFound: {}, schemes: [],
+      notes: '', asFound: {}, schemes: [], preferredSchemeId: '',
     };
     expect(Object.keys(memberDefinitionSchema.shape).sort()).toEqual(Object.keys(member).sort());
   });

@@ -285,3 +285,13 @@ describe('sortDiagnostics', () => {
     expect(sorted.map((x) => x.path)).toEqual(['(file)', 'info.name', 'sections[0]', 'members[2].b', 'members[2].a', 'members[10].a']);
   });
 });
+
+describe('the preferred strengthening scheme', () => {
+  it('must name one of the member\'s schemes', () => {
+    const base = demoProject();
+    const withPreferred = (id: string) => ({ ...base, members: base.members.map((m) => (m.id === 'B-204' ? { ...m, preferredSchemeId: id } : m)) });
+    expect(validateProjectData(JSON.parse(JSON.stringify(withPreferred('cfrp-2')))).diagnostics.filter((d) => d.path.includes('preferredSchemeId'))).toEqual([]);
+    const wrong = validateProjectData(JSON.parse(JSON.stringify(withPreferred('frp-9')))).diagnostics.filter((d) => d.path.includes('preferredSchemeId'));
+    expect(wrong).toEqual([{ code: 'unknown-reference', path: 'members[1] "B-204".preferredSchemeId', severity: 'error', message: 'must be the id of one of the member\'s schemes ("cfrp-2", "overlay-3"), got "frp-9"' }]);
+  });
+});

@@ -24,6 +24,12 @@ export const CONCRETE_TENSION_MODELS = ['none', 'linear-brittle', 'tension-stiff
 export type ConcreteTensionModel = (typeof CONCRETE_TENSION_MODELS)[number];
 
 /**
+ * Where tension stiffening acts in a section: the effective tension area around each face's bars
+ * (EN 1992-1-1 7.3.2(3), the default) or the whole tension zone (types.ts TensionStiffeningZone).
+ */
+export const TENSION_STIFFENING_ZONES = ['effective-area', 'tension-zone'] as const;
+
+/**
  * Where the ultimate (crushing) strain εcu of unconfined concrete comes from, the strain at which the
  * best-estimate section curves end when the unconfined concrete governs:
  *  - `code`: the code basis's value — ACI 318-19 22.2.2.1 εcu = 0.003; EN 1992-1-1 Table 3.1 εcu1 for
@@ -55,7 +61,13 @@ export interface ConcreteSpec {
   readonly tensionModel: ConcreteTensionModel;
   /** Optional overrides; undefined → the code basis default. */
   readonly elasticModulus?: number; // MPa
-  readonly tensileStrength?: number; // MPa (modulus of rupture or fctm)
+  /**
+   * Tensile strength of the concrete law, MPa, overriding the value the law was calibrated on: ACI
+   * basis — 0.62 λ √f′c (modulus of rupture, Eq. 19.2.3.1) for the linear-brittle law, 0.33 λ √f′c
+   * (the direct cracking stress of Vecchio & Collins 1986) for tension stiffening; EN basis — fctm
+   * (Table 3.1). A value entered here is also the code deflection method's fr / fctm.
+   */
+  readonly tensileStrength?: number;
   /**
    * Ultimate strain εcu of unconfined concrete entered by the engineer (dimensionless, 0.002–0.01);
    * overrides `ultimateStrain`. Undefined → `ultimateStrain` decides.
@@ -71,6 +83,8 @@ export interface ConcreteSpec {
   readonly lightweightFactor?: number;
   /** Tension-stiffening coefficient c in ft = fcr / (1 + √(c·εt)); default 200 (Vecchio & Collins 1986). */
   readonly tensionStiffeningCoefficient?: number;
+  /** Where tension stiffening acts in a section; default the effective tension area (TENSION_STIFFENING_ZONES). */
+  readonly tensionStiffeningZone?: (typeof TENSION_STIFFENING_ZONES)[number];
   /** Density in kg/m³ for self-weight (default 2400). */
   readonly density?: number;
   /** Creep coefficient φ(∞, t0) for long-term deflection (EN 1992-1-1 3.1.4), default 2.0. */

@@ -62,6 +62,13 @@ export interface CompressionLaw {
   readonly confined: boolean;
 }
 
+/**
+ * Where a tension-stiffening law acts in a section (core/section/build.ts): the effective tension area
+ * around each face's bars, hc,ef = min(2.5 (h − d), h/2) (EN 1992-1-1 7.3.2(3)), or the whole tension
+ * zone (each face's bars stiffen the concrete up to mid-depth). Elsewhere the concrete cracks brittly.
+ */
+export type TensionStiffeningZone = 'effective-area' | 'tension-zone';
+
 /** Concrete tension branch: strain and stress are tensile magnitudes (≥ 0). */
 export interface TensionLaw {
   readonly model: string;
@@ -75,6 +82,8 @@ export interface TensionLaw {
   readonly tensileStrength: number;
   /** Tensile strain magnitude at cracking (0 when tension is ignored). */
   readonly crackingStrain: number;
+  /** Tension stiffening only: where it acts in a section. */
+  readonly stiffeningZone?: TensionStiffeningZone;
 }
 
 /**

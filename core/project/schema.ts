@@ -12,7 +12,7 @@
  * Units: every number is in internal units (mm, N, MPa, N/mm); see docs/project-format.md.
  */
 import { z } from 'zod';
-import { CODE_BASES, CONCRETE_COMPRESSION_MODELS, CONCRETE_TENSION_MODELS, STEEL_MODELS, ULTIMATE_STRAIN_CHOICES, type ConcreteSpec, type FrpSpec, type SteelSpec } from '../materials/specs.ts';
+import { CODE_BASES, CONCRETE_COMPRESSION_MODELS, CONCRETE_TENSION_MODELS, STEEL_MODELS, TENSION_STIFFENING_ZONES, ULTIMATE_STRAIN_CHOICES, type ConcreteSpec, type FrpSpec, type SteelSpec } from '../materials/specs.ts';
 import {
   DEFLECTION_LIMIT_CASES, HINGE_LENGTH_METHODS, LOAD_CASES, LOAD_PATTERNS, SUPPORT_TYPES,
   type CapacitySettings, type LoadFactors, type MemberLoad, type MemberZone, type ServiceSettings,
@@ -48,6 +48,7 @@ export const concreteSpecSchema = z.looseObject({
   spallingStrain: number.optional(),
   lightweightFactor: number.optional(),
   tensionStiffeningCoefficient: number.optional(),
+  tensionStiffeningZone: z.enum(TENSION_STIFFENING_ZONES).optional(),
   density: number.optional(),
   creepCoefficient: number.optional(),
   shrinkageStrain: number.optional(),

@@ -7,6 +7,7 @@
 import { resolveConcrete, ultimateStrainWords } from '../materials/build/concrete-defaults.ts';
 import type { CodeBasis, ConcreteSpec, SteelSpec } from '../materials/specs.ts';
 import type { ConcreteMaterial, SteelMaterial } from '../materials/types.ts';
+import { DEFAULT_TENSION_STIFFENING_END_STRAIN } from '../materials/concrete/tension.ts';
 import { materialLibrary } from '../materials/library.ts';
 import type { Project } from '../project/types.ts';
 import { buildSectionModel } from '../section/build.ts';
@@ -52,7 +53,12 @@ function concreteParameters(spec: ConcreteSpec, law: ConcreteMaterial, code: Cod
   else out.push(`f′c = ${f.concreteStress(spec.strength)}`);
   out.push(`peak stress of the law ${f.concreteStress(law.peakStress)} at ε = ${f.strain(law.peakStrain)}`);
   out.push(`Ec = ${f.modulus(r.elasticModulus)}${spec.elasticModulus === undefined ? ' (code value)' : ' (given)'}`);
-  out.push(`tensile strength ${f.concreteStress(r.tensileStrength)}${spec.tensileStrength === undefined ? (code === 'ACI 318-19' ? ' (fr, code value)' : ' (fctm, code value)') : ' (given)'}`);
+  const lawStrength = spec.tensileStrength !== undefined ? ' (given)'
+    : code === 'EN 1992-1-1' ? ' (fctm, EN 1992-1-1 Table 3.1)'
+    : spec.tensionModel === 'tension-stiffening' ? ' (direct cracking stress 0.33λ√f′c the law was calibrated on, Vecchio & Collins 1986)' : ' (modulus of rupture fr, ACI 318-19 19.2.3.1)';
+  out.push(`tensile strength of the law ${f.concreteStress(r.tensileStrength)}${lawStrength}`);
+  if (r.codeTensileStrength !== r.tensileStrength) out.push(`code deflection method: fr = ${f.concreteStress(r.codeTensileStrength)} (ACI 318-19 19.2.3.1)`);
+  if (spec.tensionModel === 'tension-stiffening') out.push(`tension stiffening acts in ${spec.tensionStiffeningZone === 'tension-zone' ? 'the whole tension zone' : 'the effective tension area around the bars (EN 1992-1-1 7.3.2(3))'}, no more than the bars can still take at a crack, so it ends when they yield (the law's own end: εt = ${f.strain(DEFAULT_TENSION_STIFFENING_END_STRAIN)})`);
   out.push(`ultimate strain of unconfined concrete εcu = ${f.strain(law.crushingStrain)}${law.ultimateStrain ? ` (${ultimateStrainWords(law.ultimateStrain)})` : ''}`);
   out.push(`density ${f.density(spec.density ?? 2400)}`);
   out.push(`creep coefficient φ = ${f.number(spec.creepCoefficient ?? 2.0)}, free shrinkage εcs = ${f.strain(spec.shrinkageStrain ?? 0.0004)}`);
@@ -108,7 +114,13 @@ export function materialLines(project: Project, sections: readonly SectionDefini
   return lines;
 }
 
-/** True when any concrete law of these sections uses the tension-stiffening model. */
-export function usesTensionStiffening(project: Project, sections: readonly SectionDefinition[]): boolean {
-  return sections.some((s) => project.materials.some((m) => m.kind === 'concrete' && m.id === s.concreteId && m.tensionModel === 'tension-stiffening'));
+/** Where the tension-stiffening concrete of these sections acts (empty when none uses the law). */
+export function tensionStiffeningZones(project: Project, sections: readonly SectionDefinition[]): Set<'effective-area' | 'tension-zone'> {
+  const zones = new Set<'effective-area' | 'tension-zone'>();
+  for (const s of sections) {
+    for (const m of project.materials) {
+      if (m.kind === 'concrete' && m.id === s.concreteId && m.tensionModel === 'tension-stiffening') zones.add(m.tensionStiffeningZone ?? 'effective-area');
+    }
+  }
+  return zones;
 }

@@ -6,6 +6,7 @@
  */
 import { MANDER_REFERENCE, PRIESTLEY_SEIBLE_CALVI_REFERENCE } from '../materials/concrete/mander.ts';
 import { SCOTT_PARK_PRIESTLEY_REFERENCE } from '../materials/concrete/modified-kent-park.ts';
+import { VECCHIO_COLLINS_REFERENCE } from '../materials/concrete/tension.ts';
 import type { Project } from '../project/types.ts';
 
 /** Cites a reference in the method chapter and returns its marker. */
@@ -27,6 +28,10 @@ export function materialMethodParagraphs(project: Project, cite: Cite): MethodPa
     {
       title: 'Concrete strain limits',
       text: `Two strains of the concrete are kept apart. The code crushing point (${aci ? '0.003' : 'εcu2'}) is marked on every curve and is where every code check reads the section. The best-estimate curves end where the concrete that governs reaches its ultimate strain εcu, which this project takes ${choice === 'code' ? `from the code: ${codeStrain}` : `from each stress–strain law: Hognestad 0.0038, Modified Kent–Park and Mander 0.004 for unconfined concrete, EN 1992-1-1 εcu1 and εcu2; laws that publish none (Popovics, Thorenfeldt–Collins) use the code value, ${codeStrain}`}, unless a material says otherwise or gives a value; each section's ultimate states the value used and where it comes from. A confined core ends at the hoop-fracture strain of its model ${cite(SCOTT_PARK_PRIESTLEY_REFERENCE, 'ultimate strain of confined concrete')} ${cite(PRIESTLEY_SEIBLE_CALVI_REFERENCE, 'ultimate strain of confined concrete')}.`,
+    },
+    {
+      title: 'Concrete in tension',
+      text: `Concrete cracks at its tensile strength. The linear–brittle law takes the code value (${aci ? `the modulus of rupture fr = 0.62λ√f′c ${cite('ACI 318-19 19.2.3.1', 'modulus of rupture fr')}` : `fctm ${cite('EN 1992-1-1 Table 3.1', 'mean tensile strength fctm')}`}). The tension-stiffening law fcr/(1 + √(c·εt)) ${cite(VECCHIO_COLLINS_REFERENCE, 'average tensile stress after cracking')} is fed the direct cracking stress it was calibrated on, ${aci ? 'fcr = 0.33λ√f′c (from memory), about half the modulus of rupture' : 'fctm'}, unless a material gives its own value. It acts, as chosen per material, in the effective tension area around each face's bars, of depth hc,ef = min(2.5(h − d), h/2) ${cite('EN 1992-1-1 7.3.2(3)', 'effective tension area hc,ef')}, with the rest of the tension zone cracking brittly, or in the whole tension zone. Between cracks the concrete carries no more tension than the bars can still pick up at a crack, As·(fy − σs) (the crack check of the same reference), so its share falls as the bars approach yield and is nil once they yield: the moment does not fall after first yield through stiffening lost. The law itself ends at εt = 0.005, tapered from 0.004 (common practice, no source), beyond the yield strain of bars up to 800 MPa. The code deflection method keeps the code's ${aci ? 'fr' : 'fctm'}.`,
     },
     {
       title: 'Confinement',

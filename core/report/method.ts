@@ -9,7 +9,7 @@ import type { WriteContext } from './context.ts';
 import { pageOf } from './context.ts';
 import type { MemberPlan } from './figures.ts';
 import { CAUTION_TEXT, bullets, cautionBox, h2, heading, keepTogether, STYLES } from './layout.ts';
-import { materialLines, usesTensionStiffening } from './materials.ts';
+import { materialLines, tensionStiffeningZones } from './materials.ts';
 import { materialMethodParagraphs } from './method-materials.ts';
 import { citationMarker, hingeLengthReference, METHOD_REFERENCES } from './references.ts';
 import type { Content } from './types.ts';
@@ -102,7 +102,10 @@ export function memberMethod(ctx: WriteContext, member: MemberPlan, project: Pro
     : [refs.cite('EN 1992-1-1 7.4.3', used)];
   const strengthRefs = aci ? [refs.cite('ACI 318-19 Table 21.2.2', used), refs.cite('ACI 318-19 5.3.1', used)] : [refs.cite('EN 1992-1-1 3.1.7 and 3.2.7', used), refs.cite('EN 1990 Eq. (6.10)', used)];
   const idealisation = project.settings.bilinearMethod === 'priestley-2007' ? ` ${citationMarker([refs.cite(METHOD_REFERENCES.priestley2007, used)])}` : ' (equal-energy rule)';
-  const tension = usesTensionStiffening(project, sections) ? ` Tension stiffening acts within the effective tension area around the bars ${citationMarker([refs.cite('EN 1992-1-1 7.3.2(3)', used, 'effective tension area hc,ef')])}.` : '';
+  const zones = tensionStiffeningZones(project, sections);
+  const area = zones.has('effective-area') ? `within the effective tension area around the bars ${citationMarker([refs.cite('EN 1992-1-1 7.3.2(3)', used, 'effective tension area hc,ef')])}` : '';
+  const where = [area, zones.has('tension-zone') ? 'over the whole tension zone' : ''].filter((w) => w !== '').join(' or ');
+  const tension = zones.size > 0 ? ` Tension stiffening acts ${where} and ends when the bars yield.` : '';
   const text: Content[] = [
     `The sections of this member use these laws: ${laws.join('; ')}.${tension} Their curves are idealised as bilinear${idealisation}. `,
     `The load–deflection curve increases ${d.capacity.pattern === 'proportional' ? 'all service loads together' : 'the live load with the dead load held'}; plastic hinges take the hinge length of ${HINGE_WORDS[d.capacity.hingeLengthMethod]}${hingeRef ? ` ${citationMarker([refs.cite(hingeRef, used, 'plastic hinge length')])}` : ''}, and the nominal yield deflection follows ${citationMarker([refs.cite(METHOD_REFERENCES.park1988, used)])}. `,

@@ -194,7 +194,7 @@ export function completeSectionAnalysis(shortTerm: ShortTermSection, definition:
     designCurves,
     yieldStrain: { sagging: yieldOf('sagging'), hogging: yieldOf('hogging') },
     codeModulus: codeValues.elasticModulus,
-    codeTensileStrength: codeValues.tensileStrength,
+    codeTensileStrength: codeValues.codeTensileStrength,
     creepCoefficient: creep,
     shrinkageStrain: shrinkage,
     warnings,

@@ -287,8 +287,11 @@ export function buildSectionModel(definition: SectionDefinition, materials: Mate
   } else {
     parts.push(partOf('cover', 'concrete', profile, concrete!.cover, true));
   }
-  if (concrete!.cover.tension.model === 'tension-stiffening') parts = tensionStiffeningBands(parts, elements, height);
-  for (const extra of additions.parts ?? []) parts.push(extra);
+  const stiffening = concrete!.cover.tension.model === 'tension-stiffening' ? tensionStiffeningBands(parts, elements, height) : undefined;
+  if (stiffening) parts = stiffening.parts;
+  // Tension stiffening acts only in concrete anchored by the section's own bars: an added layer
+  // (overlay, soffit layer) cracks brittly.
+  for (const extra of additions.parts ?? []) parts.push(extra.material.tension.model === 'tension-stiffening' && extra.stiffeningGroup === undefined ? { ...extra, material: brittleConcrete(extra.material) } : extra);
   for (const extra of additions.elements ?? []) elements.push(extra);
   return {
     model: {
@@ -296,6 +299,7 @@ export function buildSectionModel(definition: SectionDefinition, materials: Mate
       centroidDepth,
       concreteParts: parts,
       elements,
+      ...(stiffening && stiffening.groups.length > 0 ? { stiffeningGroups: stiffening.groups } : {}),
       axialForce: definition.axialForce ?? 0,
       outline,
       ...(core && concrete!.core ? { core } : {}),
@@ -307,44 +311,65 @@ export function buildSectionModel(definition: SectionDefinition, materials: Mate
 }
 
 /**
- * Tension stiffening acts in the concrete around the bars, not over the whole tension zone:
- * it is limited to the effective tension area of each face that has bars, of depth
- * hc,ef = min(2.5·(h − d), h/2) (EN 1992-1-1 7.3.2(3), without the (h − x)/3 term, which depends on
- * the neutral axis). Elsewhere the same concrete cracks brittly (linear to its tensile strength,
- * then zero). Applying the average-stress law to the whole tension zone would overstate the
- * cracked stiffness and strength of deep sections (common practice, no source).
+ * Where tension stiffening acts (the law's `stiffeningZone`):
+ *  - 'effective-area' (default): the effective tension area of each face that has bars, of depth
+ *    hc,ef = min(2.5·(h − d), h/2) (EN 1992-1-1 7.3.2(3), without the (h − x)/3 term, which depends on
+ *    the neutral axis), anchored by that face's bars; elsewhere the same concrete cracks brittly
+ *    (linear to its tensile strength, then zero). Applying the average-stress law to the whole tension
+ *    zone overstates the cracked stiffness and strength of deep sections (common practice, no source).
+ *  - 'tension-zone': all the concrete, anchored by every bar (bars in compression add nothing once the
+ *    others yield: see forces.ts barReserve).
+ * Each group's cracked concrete carries no more tension than its bars can still take below yield
+ * (core/section/forces.ts), so stiffening ends when they yield whatever the band.
  */
-function tensionStiffeningBands(parts: ConcretePart[], elements: readonly DiscreteElement[], height: number): ConcretePart[] {
-  const bars = elements.filter((e) => e.kind === 'bar');
-  const bottom = bars.filter((e) => e.depth > height / 2);
-  const top = bars.filter((e) => e.depth <= height / 2);
-  const centroid = (list: DiscreteElement[]) => list.reduce((s, e) => s + e.area * e.depth, 0) / list.reduce((s, e) => s + e.area, 0);
-  const topBand = top.length > 0 ? Math.min(2.5 * centroid(top), height / 2) : 0;
-  const bottomBand = bottom.length > 0 ? Math.min(2.5 * (height - centroid(bottom)), height / 2) : 0;
-  const brittle = new Map<ConcreteMaterial, ConcreteMaterial>();
-  const brittleOf = (m: ConcreteMaterial) => {
-    let b = brittle.get(m);
-    if (!b) {
-      b = combineConcrete(m.compression, linearBrittleTension({ tensileStrength: m.tension.tensileStrength, elasticModulus: m.tension.tensileStrength / m.tension.crackingStrain }));
-      brittle.set(m, b);
-    }
-    return b;
-  };
+function tensionStiffeningBands(parts: ConcretePart[], elements: readonly DiscreteElement[], height: number): { parts: ConcretePart[]; groups: number[][] } {
+  const bars = elements.map((e, index) => ({ e, index })).filter(({ e }) => e.kind === 'bar');
+  if (bars.length === 0) return { parts: parts.map((p) => ({ ...p, material: brittleConcrete(p.material) })), groups: [] };
+  if (parts[0]?.material.tension.stiffeningZone === 'tension-zone') {
+    return { parts: parts.map((p) => ({ ...p, label: `${p.label} (tension stiffening)`, stiffeningGroup: 0 })), groups: [bars.map((b) => b.index)] };
+  }
+  const bottom = bars.filter(({ e }) => e.depth > height / 2);
+  const top = bars.filter(({ e }) => e.depth <= height / 2);
+  const centroid = (list: typeof bars) => list.reduce((s, { e }) => s + e.area * e.depth, 0) / list.reduce((s, { e }) => s + e.area, 0);
+  const groups: number[][] = [];
+  const pieces: [number, number, number | undefined][] = [];
+  let upper = 0;
+  let lower = height;
+  if (top.length > 0) {
+    groups.push(top.map((b) => b.index));
+    upper = Math.min(2.5 * centroid(top), height / 2);
+    pieces.push([0, upper, groups.length - 1]);
+  }
+  if (bottom.length > 0) {
+    groups.push(bottom.map((b) => b.index));
+    lower = height - Math.min(2.5 * (height - centroid(bottom)), height / 2);
+    pieces.push([lower, height, groups.length - 1]);
+  }
+  pieces.push([upper, lower, undefined]);
   const out: ConcretePart[] = [];
   for (const part of parts) {
-    const bands: [number, number, boolean][] = [
-      [0, topBand, true],
-      [topBand, height - bottomBand, false],
-      [height - bottomBand, height, true],
-    ];
-    for (const [y0, y1, stiffening] of bands) {
+    for (const [y0, y1, group] of pieces) {
       if (!(y1 > y0)) continue;
       const strips = clipProfile(part.strips, y0, y1);
       if (strips.length === 0) continue;
-      out.push(partOf(part.role, stiffening ? `${part.label} (tension-stiffening band)` : part.label, strips, stiffening ? part.material : brittleOf(part.material), part.governsCrushing));
+      if (group !== undefined) out.push({ ...partOf(part.role, `${part.label} (tension-stiffening band)`, strips, part.material, part.governsCrushing), stiffeningGroup: group });
+      else out.push(partOf(part.role, part.label, strips, brittleConcrete(part.material), part.governsCrushing));
     }
   }
-  return out;
+  return { parts: out, groups };
+}
+
+const brittleLaws = new WeakMap<ConcreteMaterial, ConcreteMaterial>();
+
+/** The same concrete cracking brittly at its tensile strength (linear, then zero), one law per material. */
+function brittleConcrete(m: ConcreteMaterial): ConcreteMaterial {
+  let b = brittleLaws.get(m);
+  if (!b) {
+    const law = combineConcrete(m.compression, linearBrittleTension({ tensileStrength: m.tension.tensileStrength, elasticModulus: m.tension.tensileStrength / m.tension.crackingStrain }));
+    b = m.ultimateStrain ? { ...law, ultimateStrain: m.ultimateStrain } : law;
+    brittleLaws.set(m, b);
+  }
+  return b;
 }
 
 export function partOf(role: ConcretePart['role'], label: string, strips: Strip[], material: ConcreteMaterial, governsCrushing: boolean): ConcretePart {

@@ -12,7 +12,7 @@
  * centroid (sagging positive).
  */
 import { GAUSS_3_NODES, GAUSS_3_WEIGHTS } from '../numeric/quadrature.ts';
-import type { SectionModel } from './model.ts';
+import type { ConcretePart, SectionModel } from './model.ts';
 
 export interface SectionForces {
   /** Axial force, N, compression positive. */
@@ -116,11 +116,17 @@ export function sectionResultants(model: SectionModel, eps0: number, phi: number
   return { compression: c, tension: t, compressionDepth: c > 0 ? cy / c : 0, tensionDepth: t > 0 ? ty / t : 0 };
 }
 
-/** Calls `visit(force, depth)` for every Gauss point of the concrete (force in N, depth in mm). */
+/**
+ * Calls `visit(force, depth)` for every Gauss point of the concrete (force in N, depth in mm), the
+ * cracked concrete of a tension-stiffening band already limited by its bars (stiffeningFactors).
+ */
 function forEachConcretePoint(model: SectionModel, eps0: number, phi: number, visit: (force: number, y: number) => void): void {
   const yg = model.centroidDepth;
+  const factors = stiffeningFactors(model, eps0, phi);
   for (const part of model.concreteParts) {
+    const k = part.stiffeningGroup !== undefined ? factors[part.stiffeningGroup]! : 1;
     const material = part.material;
+    const cracked = -material.crackingStrain;
     const breakpoints = splitStrains(material);
     for (const strip of part.strips) {
       const depths: number[] = [strip.top];
@@ -143,7 +149,9 @@ function forEachConcretePoint(model: SectionModel, eps0: number, phi: number, vi
         for (let g = 0; g < 3; g++) {
           const y = mid + half * NODES[g]!;
           const width = strip.widthTop + slope * (y - strip.top);
-          visit(material.stress(eps0 + phi * (yg - y)) * width * half * WEIGHTS[g]!, y);
+          const eps = eps0 + phi * (yg - y);
+          const force = material.stress(eps) * width * half * WEIGHTS[g]!;
+          visit(eps < cracked ? k * force : force, y);
         }
       }
     }
@@ -166,63 +174,171 @@ export function elementStress(element: SectionModel['elements'][number], eps: nu
   return stress;
 }
 
+/**
+ * Running sums of the concrete (N, N·mm): all forces, and per tension-stiffening group the forces of
+ * its cracked concrete (strain beyond the cracking strain), which the group's bars may limit.
+ */
+interface ConcreteSums {
+  axial: number;
+  moment: number;
+  magnitude: number;
+  readonly crackedAxial: Float64Array;
+  readonly crackedMoment: Float64Array;
+}
+
+/** Adds the stress resultants of one concrete part to `acc` (piecewise Gauss over the depth). */
+function integratePart(model: SectionModel, part: ConcretePart, eps0: number, phi: number, acc: ConcreteSums): void {
+  const yg = model.centroidDepth;
+  const material = part.material;
+  const breakpoints = splitStrains(material);
+  const zero = zeroRangeOf(material);
+  const group = part.stiffeningGroup ?? -1;
+  const cracked = -material.crackingStrain;
+  for (const strip of part.strips) {
+    const yTop = strip.top;
+    const yBottom = strip.bottom;
+    const thickness = yBottom - yTop;
+    const slope = (strip.widthBottom - strip.widthTop) / thickness;
+    // Depths where the strain crosses a breakpoint, inside the strip.
+    let count = 0;
+    splitDepths[count++] = yTop;
+    if (phi !== 0) {
+      const epsTop = eps0 + phi * (yg - yTop);
+      const epsBottom = eps0 + phi * (yg - yBottom);
+      const lo = Math.min(epsTop, epsBottom);
+      const hi = Math.max(epsTop, epsBottom);
+      if (phi > 0) {
+        // Strain decreases with depth: visit breakpoints from high to low.
+        for (let k = breakpoints.length - 1; k >= 0; k--) {
+          const e = breakpoints[k]!;
+          if (e > lo && e < hi && count < 63) splitDepths[count++] = yg + (eps0 - e) / phi;
+        }
+      } else {
+        for (let k = 0; k < breakpoints.length; k++) {
+          const e = breakpoints[k]!;
+          if (e > lo && e < hi && count < 63) splitDepths[count++] = yg + (eps0 - e) / phi;
+        }
+      }
+    }
+    splitDepths[count++] = yBottom;
+    for (let p = 0; p + 1 < count; p++) {
+      const a = splitDepths[p]!;
+      const b = splitDepths[p + 1]!;
+      const half = 0.5 * (b - a);
+      if (!(half > 1e-12)) continue;
+      const mid = 0.5 * (a + b);
+      if (phi !== 0) {
+        // Skip pieces where the material carries nothing (strain is linear over the piece).
+        const ea = eps0 + phi * (yg - a);
+        const eb = eps0 + phi * (yg - b);
+        if (Math.max(ea, eb) <= zero.tensionBelow || Math.min(ea, eb) >= zero.compressionAbove) continue;
+      }
+      for (let g = 0; g < 3; g++) {
+        const y = mid + half * NODES[g]!;
+        const width = strip.widthTop + slope * (y - yTop);
+        const eps = eps0 + phi * (yg - y);
+        const force = material.stress(eps) * width * half * WEIGHTS[g]!;
+        acc.axial += force;
+        acc.moment += force * (yg - y);
+        acc.magnitude += force < 0 ? -force : force;
+        if (group >= 0 && eps < cracked) {
+          acc.crackedAxial[group] = acc.crackedAxial[group]! + force;
+          acc.crackedMoment[group] = acc.crackedMoment[group]! + force * (yg - y);
+        }
+      }
+    }
+  }
+}
+
+const yieldStresses = new WeakMap<object, number>();
+
+/** Yield stress fy of a bar's law, MPa (the stress at its yield strain; 0 for a law without one). */
+function yieldStressOf(material: SectionModel['elements'][number]['material']): number {
+  let fy = yieldStresses.get(material);
+  if (fy === undefined) {
+    fy = material.yieldStrain !== undefined ? Math.abs(material.stress(-material.yieldStrain)) : 0;
+    yieldStresses.set(material, fy);
+  }
+  return fy;
+}
+
+/**
+ * What a group's bars can still pick up at a crack, N: Σ As·(fy − σs) over its bars, σs the tensile
+ * stress of each bar (a bar in compression counts with fy, a yielded bar with nothing).
+ */
+function barReserve(model: SectionModel, bars: readonly number[], eps0: number, phi: number): number {
+  const yg = model.centroidDepth;
+  let reserve = 0;
+  for (const index of bars) {
+    const bar = model.elements[index]!;
+    const fy = yieldStressOf(bar.material);
+    const tensile = Math.max(0, -bar.material.stress(eps0 + phi * (yg - bar.depth) - bar.initialStrain));
+    if (fy > tensile) reserve += bar.area * (fy - tensile);
+  }
+  return reserve;
+}
+
+/**
+ * Factor (0–1) on the cracked-concrete forces of group `g`, whose cracked concrete carries
+ * `crackedAxial` (N, ≤ 0): 1 unless that tension exceeds the bars' reserve (barReserve).
+ */
+function groupFactor(model: SectionModel, g: number, crackedAxial: number, eps0: number, phi: number): number {
+  if (!(crackedAxial < 0)) return 1;
+  const reserve = barReserve(model, model.stiffeningGroups![g]!, eps0, phi);
+  return -crackedAxial > reserve ? reserve / -crackedAxial : 1;
+}
+
+function newSums(groups: number): ConcreteSums {
+  return { axial: 0, moment: 0, magnitude: 0, crackedAxial: new Float64Array(groups), crackedMoment: new Float64Array(groups) };
+}
+
+/** Scratch sums for up to 8 groups (a section has two: top and bottom bars, or one). */
+const scratch = newSums(8);
+
+/** Integrates every concrete part into the reset `scratch` sums. */
+function integrateConcrete(model: SectionModel, eps0: number, phi: number): ConcreteSums {
+  const acc = model.stiffeningGroups && model.stiffeningGroups.length > scratch.crackedAxial.length ? newSums(model.stiffeningGroups.length) : scratch;
+  acc.axial = acc.moment = acc.magnitude = 0;
+  acc.crackedAxial.fill(0);
+  acc.crackedMoment.fill(0);
+  for (const part of model.concreteParts) integratePart(model, part, eps0, phi, acc);
+  return acc;
+}
+
+/**
+ * The factor (0–1) on the cracked concrete of each tension-stiffening group at (ε0, φ)
+ * (SectionModel.stiffeningGroups; empty without tension stiffening).
+ */
+export function stiffeningFactors(model: SectionModel, eps0: number, phi: number): number[] {
+  const groups = model.stiffeningGroups;
+  if (!groups || groups.length === 0) return [];
+  const acc = integrateConcrete(model, eps0, phi);
+  return groups.map((_, g) => groupFactor(model, g, acc.crackedAxial[g]!, eps0, phi));
+}
+
+/**
+ * Axial force and moment of the section at (ε0, φ) (see the file comment for units). Between cracks
+ * a tension-stiffening band's concrete carries no more tension than its bars can still pick up at a
+ * crack, Σ As·(fy − σs) (the crack check of Vecchio & Collins 1986, applied to the band; from
+ * memory): as the bars approach yield the concrete's share falls, and it is zero once they yield,
+ * so the moment does not drop after first yield because of stiffening lost.
+ */
 export function sectionForces(model: SectionModel, eps0: number, phi: number, out: SectionForces = { axial: 0, moment: 0, magnitude: 0 }): SectionForces {
   const yg = model.centroidDepth;
-  let axial = 0;
-  let moment = 0;
-  let magnitude = 0;
-  for (const part of model.concreteParts) {
-    const material = part.material;
-    const breakpoints = splitStrains(material);
-    const zero = zeroRangeOf(material);
-    for (const strip of part.strips) {
-      const yTop = strip.top;
-      const yBottom = strip.bottom;
-      const thickness = yBottom - yTop;
-      const slope = (strip.widthBottom - strip.widthTop) / thickness;
-      // Depths where the strain crosses a breakpoint, inside the strip.
-      let count = 0;
-      splitDepths[count++] = yTop;
-      if (phi !== 0) {
-        const epsTop = eps0 + phi * (yg - yTop);
-        const epsBottom = eps0 + phi * (yg - yBottom);
-        const lo = Math.min(epsTop, epsBottom);
-        const hi = Math.max(epsTop, epsBottom);
-        if (phi > 0) {
-          // Strain decreases with depth: visit breakpoints from high to low.
-          for (let k = breakpoints.length - 1; k >= 0; k--) {
-            const e = breakpoints[k]!;
-            if (e > lo && e < hi && count < 63) splitDepths[count++] = yg + (eps0 - e) / phi;
-          }
-        } else {
-          for (let k = 0; k < breakpoints.length; k++) {
-            const e = breakpoints[k]!;
-            if (e > lo && e < hi && count < 63) splitDepths[count++] = yg + (eps0 - e) / phi;
-          }
-        }
-      }
-      splitDepths[count++] = yBottom;
-      for (let p = 0; p + 1 < count; p++) {
-        const a = splitDepths[p]!;
-        const b = splitDepths[p + 1]!;
-        const half = 0.5 * (b - a);
-        if (!(half > 1e-12)) continue;
-        const mid = 0.5 * (a + b);
-        if (phi !== 0) {
-          // Skip pieces where the material carries nothing (strain is linear over the piece).
-          const ea = eps0 + phi * (yg - a);
-          const eb = eps0 + phi * (yg - b);
-          if (Math.max(ea, eb) <= zero.tensionBelow || Math.min(ea, eb) >= zero.compressionAbove) continue;
-        }
-        for (let g = 0; g < 3; g++) {
-          const y = mid + half * NODES[g]!;
-          const width = strip.widthTop + slope * (y - yTop);
-          const force = material.stress(eps0 + phi * (yg - y)) * width * half * WEIGHTS[g]!;
-          axial += force;
-          magnitude += force < 0 ? -force : force;
-          moment += force * (yg - y);
-        }
-      }
+  const acc = integrateConcrete(model, eps0, phi);
+  let axial = acc.axial;
+  let moment = acc.moment;
+  let magnitude = acc.magnitude;
+  const groups = model.stiffeningGroups;
+  if (groups) {
+    for (let g = 0; g < groups.length; g++) {
+      const cracked = acc.crackedAxial[g]!;
+      const k = groupFactor(model, g, cracked, eps0, phi);
+      if (k === 1) continue;
+      // Scale the cracked concrete's tension only: take (1 − k) of what was added in full.
+      axial -= (1 - k) * cracked;
+      moment -= (1 - k) * acc.crackedMoment[g]!;
+      magnitude += (1 - k) * cracked;
     }
   }
   for (const element of model.elements) {

@@ -22,6 +22,13 @@ export interface ConcretePart {
    * section with a confined core does not count: it spalls and the core carries on.
    */
   readonly governsCrushing: boolean;
+  /**
+   * Tension-stiffening bands only: the group of bars that anchors the band (index into
+   * SectionModel.stiffeningGroups). The group's cracked concrete carries no more tension than its
+   * bars can still pick up at a crack, Σ As·(fy − σs) ≥ 0, so it adds nothing once they yield
+   * (core/section/forces.ts).
+   */
+  readonly stiffeningGroup?: number;
   /** Depth of the part's top and bottom fibres, mm. */
   readonly top: number;
   readonly bottom: number;
@@ -65,6 +72,11 @@ export interface SectionModel {
   readonly centroidDepth: number;
   readonly concreteParts: readonly ConcretePart[];
   readonly elements: readonly DiscreteElement[];
+  /**
+   * Bars (indices into `elements`) anchoring each group of tension-stiffening concrete
+   * (ConcretePart.stiffeningGroup); absent when no concrete stiffens in tension.
+   */
+  readonly stiffeningGroups?: readonly (readonly number[])[];
   /** Axial force, N, compression positive, acting at the gross centroid. */
   readonly axialForce: number;
   /** Outline for drawings and containment checks. */

@@ -5,7 +5,7 @@
 import type { SectionModel, BendingDirection } from './model.ts';
 import type { CurvePoint, SectionState, ElementState, ConcreteProfileSample } from './results.ts';
 import { stripWidthAt } from './width-profile.ts';
-import { sectionResultants } from './forces.ts';
+import { sectionResultants, stiffeningFactors } from './forces.ts';
 
 /** Faces of the section for a bending direction: depths (mm) of the extreme compression and tension fibres. */
 export function faces(model: SectionModel, direction: BendingDirection): { compression: number; tension: number } {
@@ -67,6 +67,7 @@ export function sectionState(model: SectionModel, direction: BendingDirection, p
     }
   }
   const sorted = [...depths].sort((a, b) => a - b);
+  const factors = stiffeningFactors(model, eps0, phi);
   const concrete: ConcreteProfileSample[] = sorted.map((y) => {
     const strain = strainAtDepth(model, eps0, phi, y);
     return {
@@ -74,7 +75,9 @@ export function sectionState(model: SectionModel, direction: BendingDirection, p
       strain,
       stress: model.concreteParts.map((part) => {
         const inside = part.strips.some((s) => y >= s.top && y <= s.bottom && Math.max(stripWidthAt(s, Math.min(Math.max(y, s.top), s.bottom)), 0) > 0);
-        return inside ? part.material.stress(strain) : null;
+        if (!inside) return null;
+        const stress = part.material.stress(strain);
+        return part.stiffeningGroup !== undefined && strain < -part.material.crackingStrain ? factors[part.stiffeningGroup]! * stress : stress;
       }),
     };
   });

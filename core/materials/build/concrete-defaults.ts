@@ -4,12 +4,14 @@ import { ACI_CRUSHING_STRAIN, aciElasticModulus, aciModulusOfRupture } from '../
 import { en1992ElasticModulus, en1992MeanStrength, en1992MeanTensileStrength, en1992ParabolaUltimateStrain, en1992PeakStrain, en1992UltimateStrainNonlinear } from '../code/en1992.ts';
 import { HOGNESTAD_ULTIMATE_STRAIN } from '../concrete/hognestad.ts';
 import { UNCONFINED_ULTIMATE_STRAIN } from '../concrete/mander-confinement.ts';
+import { vecchioCollinsCrackingStress } from '../concrete/tension.ts';
 
 /**
  * The numbers a concrete law is built from once the code basis has filled in what the spec leaves
  * undefined (MPa, strains dimensionless):
  *  - ACI 318-19: peak strength f′c; Ec = 4700 √f′c (Eq. 19.2.2.1.b); tensile strength fr = 0.62 λ √f′c
- *    (Eq. 19.2.3.1); crushing strain 0.003 (22.2.2.1).
+ *    (Eq. 19.2.3.1) for the brittle law and the code deflection method, fcr = 0.33 λ √f′c for tension
+ *    stiffening (the strength it was calibrated on, Vecchio & Collins 1986); crushing strain 0.003 (22.2.2.1).
  *  - EN 1992-1-1: the nonlinear models use fcm = fck + 8 and Ecm (Table 3.1); tensile strength fctm
  *    (Table 3.1; the flexural fctm,fl of Eq. 3.23 depends on the member depth and is for the caller to
  *    pass as an override); crushing strain εcu1 (Table 3.1).
@@ -20,7 +22,10 @@ export interface ResolvedConcrete {
   /** Strength the nonlinear laws peak at: f′c (ACI) or fcm (EN), MPa. */
   readonly modelStrength: number;
   readonly elasticModulus: number;
+  /** Tensile strength of the spec's tension law: the value it was calibrated on, or the override (MPa). */
   readonly tensileStrength: number;
+  /** Tensile strength of the code deflection method (ACI fr, EN fctm), or the override (MPa). */
+  readonly codeTensileStrength: number;
   /** The code's crushing strain for models without one of their own (ACI 0.003, EN εcu1). */
   readonly codeCrushingStrain: number;
   readonly strainsFck: number;
@@ -92,6 +97,7 @@ export function resolveConcrete(spec: ConcreteSpec, code: CodeBasis, defaultChoi
       modelStrength: en1992MeanStrength(fc),
       elasticModulus: spec.elasticModulus ?? en1992ElasticModulus(fc),
       tensileStrength: spec.tensileStrength ?? en1992MeanTensileStrength(fc),
+      codeTensileStrength: spec.tensileStrength ?? en1992MeanTensileStrength(fc),
       codeCrushingStrain: en1992UltimateStrainNonlinear(fc),
       strainsFck: fc,
       codePeakStrain: en1992PeakStrain(fc),
@@ -103,7 +109,12 @@ export function resolveConcrete(spec: ConcreteSpec, code: CodeBasis, defaultChoi
     code,
     modelStrength: fc,
     elasticModulus: spec.elasticModulus ?? aciElasticModulus(fc),
-    tensileStrength: spec.tensileStrength ?? aciModulusOfRupture(fc, spec.lightweightFactor ?? 1),
+    // Each law is fed the strength it was calibrated on: the brittle law reproduces the code's cracking
+    // moment with fr; tension stiffening expects the direct cracking stress (tension.ts).
+    tensileStrength: spec.tensileStrength ?? (spec.tensionModel === 'tension-stiffening'
+      ? vecchioCollinsCrackingStress(fc, spec.lightweightFactor ?? 1)
+      : aciModulusOfRupture(fc, spec.lightweightFactor ?? 1)),
+    codeTensileStrength: spec.tensileStrength ?? aciModulusOfRupture(fc, spec.lightweightFactor ?? 1),
     codeCrushingStrain: ACI_CRUSHING_STRAIN,
     strainsFck: fc,
     codePeakStrain: undefined,

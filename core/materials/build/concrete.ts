@@ -1,6 +1,6 @@
 import { diagnostic, InputError, type AllowedRange, type Diagnostic } from '../../diagnostics.ts';
 import { phrase, q } from '../../units/phrase.ts';
-import { CODE_BASES, CONCRETE_COMPRESSION_MODELS, CONCRETE_TENSION_MODELS, ULTIMATE_STRAIN_CHOICES, type CodeBasis, type ConcreteCompressionModel, type ConcreteSpec, type ConfinementInput, type UltimateStrainChoice } from '../specs.ts';
+import { CODE_BASES, CONCRETE_COMPRESSION_MODELS, CONCRETE_TENSION_MODELS, TENSION_STIFFENING_ZONES, ULTIMATE_STRAIN_CHOICES, type CodeBasis, type ConcreteCompressionModel, type ConcreteSpec, type ConfinementInput, type UltimateStrainChoice } from '../specs.ts';
 import type { CompressionLaw, ConcreteMaterial, TensionLaw, UltimateStrainSource } from '../types.ts';
 import { checkField, fieldPath } from '../checks.ts';
 import { combineConcrete } from '../concrete/combine.ts';
@@ -107,7 +107,7 @@ function tensionLaw(spec: ConcreteSpec, r: ResolvedConcrete): TensionLaw {
     case 'linear-brittle':
       return linearBrittleTension({ tensileStrength: r.tensileStrength, elasticModulus: r.elasticModulus });
     case 'tension-stiffening':
-      return tensionStiffening({ tensileStrength: r.tensileStrength, elasticModulus: r.elasticModulus, coefficient: spec.tensionStiffeningCoefficient });
+      return tensionStiffening({ tensileStrength: r.tensileStrength, elasticModulus: r.elasticModulus, coefficient: spec.tensionStiffeningCoefficient, zone: spec.tensionStiffeningZone });
   }
 }
 
@@ -118,6 +118,7 @@ function checkFields(out: Diagnostic[], spec: ConcreteSpec, path: string): boole
   checkField(out, at('strength'), 'concrete compressive strength', spec.strength, CONCRETE_STRENGTH_RANGE);
   checkOption(out, at('compressionModel'), 'concrete compression model', spec.compressionModel, CONCRETE_COMPRESSION_MODELS);
   checkOption(out, at('tensionModel'), 'concrete tension model', spec.tensionModel, CONCRETE_TENSION_MODELS);
+  if (spec.tensionStiffeningZone !== undefined) checkOption(out, at('tensionStiffeningZone'), 'zone of tension stiffening', spec.tensionStiffeningZone, TENSION_STIFFENING_ZONES);
   if (spec.ultimateStrain !== undefined) checkOption(out, at('ultimateStrain'), 'source of the ultimate strain εcu', spec.ultimateStrain, ULTIMATE_STRAIN_CHOICES);
   const optional: [keyof ConcreteSpec, string, AllowedRange][] = [
     ['elasticModulus', 'concrete elastic modulus Ec', { min: 5_000, max: 70_000, quantity: 'modulus' }],

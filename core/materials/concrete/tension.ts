@@ -1,5 +1,5 @@
 import { BugError, throwIfErrors, type Diagnostic } from '../../diagnostics.ts';
-import type { TensionLaw } from '../types.ts';
+import type { TensionLaw, TensionStiffeningZone } from '../types.ts';
 import { assertStrainIsNumber, checkField, fieldPath, reportInconsistent, show } from '../checks.ts';
 
 /** Citation for the report's reference list. */
@@ -10,11 +10,24 @@ export const VECCHIO_COLLINS_REFERENCE =
 export const VECCHIO_COLLINS_COEFFICIENT = 200;
 
 /**
- * Default tensile strain at which the tension-stiffening stress is dropped to zero: 0.002, about the
- * yield strain of 400–420 MPa bars. Past yield at the crack, bond can no longer carry tension into the
- * concrete between cracks, so stiffening is lost. // common practice, no source
+ * Default tensile strain at which the tension-stiffening stress reaches zero: 0.005, tapered from
+ * 0.004, which is the yield strain of 800 MPa bars (Es = 200 GPa). Inside a section the bars end the
+ * stiffening when they yield (the crack check: their reserve below yield limits what the concrete
+ * carries, core/section/forces.ts), so for bars up to that grade this end is never reached there; it
+ * ends the law where it stands alone (material charts) and, for stronger bars, before their yield.
+ * // common practice, no source
  */
-export const DEFAULT_TENSION_STIFFENING_END_STRAIN = 0.002;
+export const DEFAULT_TENSION_STIFFENING_END_STRAIN = 0.005;
+
+/**
+ * Cracking (direct tensile) stress the tension-stiffening law of Vecchio & Collins (1986) was
+ * calibrated on, fcr = 0.33 √f′c in MPa (from memory), times ACI's λ for lightweight concrete. It is
+ * about half the modulus of rupture 0.62 λ √f′c, a flexural property that the law does not expect.
+ * @param fc f′c, MPa (> 0)
+ */
+export function vecchioCollinsCrackingStress(fc: number, lightweightFactor = 1): number {
+  return 0.33 * lightweightFactor * Math.sqrt(fc);
+}
 
 function tensionLaw(
   model: string,
@@ -62,8 +75,15 @@ export interface LinearTensionParameters {
 export interface TensionStiffeningParameters extends LinearTensionParameters {
   /** c in fcr/(1 + √(c εt)); default 200 (Vecchio & Collins 1986). */
   readonly coefficient?: number;
-  /** Tensile strain where the stiffening stress drops to zero; default 0.002. Must exceed the cracking strain. */
+  /**
+   * Tensile strain where the stiffening stress is tapered to zero; default 0.005
+   * (DEFAULT_TENSION_STIFFENING_END_STRAIN). Inside a section the reinforcement ends the stiffening
+   * first: the band's concrete carries no more than the bars' reserve below yield
+   * (core/section/forces.ts), so it vanishes when the bars yield. Must exceed the cracking strain.
+   */
   readonly endStrain?: number;
+  /** Where the law acts in a section (core/section/build.ts); default the effective tension area. */
+  readonly zone?: TensionStiffeningZone;
 }
 
 /** Checks the tension-law parameters (0 < ft ≤ 15 MPa, Ec > 0, c, end strain beyond cracking); paths are `path.<parameter name>`. */
@@ -103,12 +123,16 @@ export function linearBrittleTension(p: LinearTensionParameters): TensionLaw {
  * Tension stiffening after cracking, tensile magnitudes (MPa):
  *   εt ≤ εcr = fcr/Ec:    σt = Ec εt
  *   εcr < εt ≤ 0.8 εend:  σt = fcr / (1 + √(c εt))   (εt is the total tensile strain; there is a small drop at cracking)
- *   0.8 εend < εt ≤ εend: the same curve times a linear taper from 1 to 0, so the stress reaches
- *                         zero continuously (a jump to zero over a whole tension band would put a
- *                         discontinuity into the section's equilibrium; common practice, no source)
- *   εt > εend:            σt = 0
- * c = 200 (Vecchio & Collins 1986); c = 500 in Collins & Mitchell (1991) — from memory, hence a parameter.
- * εend defaults to 0.002 (see DEFAULT_TENSION_STIFFENING_END_STRAIN).
+ *   0.8 εend < εt ≤ εend: the same curve times a linear taper from 1 to 0 (a jump to zero over a whole
+ *                         tension band would put a discontinuity into the section's equilibrium;
+ *                         common practice, no source)
+ *   εt > εend:            σt = 0;  εend = 0.005 by default (DEFAULT_TENSION_STIFFENING_END_STRAIN).
+ * fcr is the cracking (direct tensile) stress the law was calibrated on — 0.33 √f′c (Vecchio & Collins
+ * 1986, from memory) or EN 1992-1-1 fctm — not the modulus of rupture. c = 200 (Vecchio & Collins
+ * 1986); c = 500 in Collins & Mitchell (1991) — from memory, hence a parameter. In a section the law
+ * acts only in the effective tension area around the bars (or the whole tension zone, `zone`), and
+ * the bars' reserve below yield limits what it carries (core/section/build.ts, forces.ts): the
+ * crack check of Vecchio & Collins (1986), so the stiffening ends when the reinforcement yields.
  * @see Vecchio & Collins (1986), ACI Journal 83(2) — average tensile stress after cracking
  */
 export function tensionStiffening(p: TensionStiffeningParameters): TensionLaw {
@@ -116,12 +140,13 @@ export function tensionStiffening(p: TensionStiffeningParameters): TensionLaw {
   const c = p.coefficient ?? VECCHIO_COLLINS_COEFFICIENT;
   const crackingStrain = p.tensileStrength / p.elasticModulus;
   const endStrain = p.endStrain ?? DEFAULT_TENSION_STIFFENING_END_STRAIN;
-  return tensionLaw('tension-stiffening', `Tension stiffening fcr/(1 + √(${c} εt)) (Vecchio & Collins 1986)`, [VECCHIO_COLLINS_REFERENCE],
-    p.tensileStrength, crackingStrain, [crackingStrain, Math.max(0.8 * endStrain, crackingStrain), endStrain], (strain) => {
+  const taperStart = Math.max(0.8 * endStrain, crackingStrain);
+  const law = tensionLaw('tension-stiffening', `Tension stiffening fcr/(1 + √(${c} εt)) (Vecchio & Collins 1986)`, [VECCHIO_COLLINS_REFERENCE],
+    p.tensileStrength, crackingStrain, [crackingStrain, taperStart, endStrain], (strain) => {
       if (strain <= crackingStrain) return p.elasticModulus * strain;
       if (strain > endStrain) return 0;
       const curve = p.tensileStrength / (1 + Math.sqrt(c * strain));
-      const taperStart = Math.max(0.8 * endStrain, crackingStrain);
       return strain <= taperStart ? curve : (curve * (endStrain - strain)) / (endStrain - taperStart);
     });
+  return { ...law, stiffeningZone: p.zone ?? 'effective-area' };
 }

@@ -113,8 +113,14 @@ describe('the US demo project (Wrenfield Mill, Building B)', () => {
     expect(area / (width * d)).toBeGreaterThan(rhoB);
     const r = resultOf(usResults, 'H-103');
     expect(r.ductility.displacementDuctility!).toBeLessThan(2);
-    const lightlyReinforced = resultOf(usResults, 'B-201').ductility.displacementDuctility!;
-    expect(lightlyReinforced).toBeGreaterThan(3 * r.ductility.displacementDuctility!);
+    // Δu/Δ′y with Δ′y at first yield of the tension steel: the comparison does not depend on how the
+    // nominal yield deflection is idealised (B-201's Grade 40 bars first yield at about 70 % of its
+    // peak load, below the 75 % of Park's secant)
+    const firstYieldDuctility = (id: string) => {
+      const d = resultOf(usResults, id).ductility;
+      return d.ultimateDeflection! / d.firstYieldDeflection!;
+    };
+    expect(firstYieldDuctility('B-201')).toBeGreaterThan(3 * firstYieldDuctility('H-103'));
   });
 
   it('L-102 is below the ACI 318-19 minimum steel and cracks within 30 % above its service load', () => {

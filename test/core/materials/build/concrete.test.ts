@@ -98,8 +98,17 @@ describe('code-basis defaults', () => {
   it('selects the tension law', () => {
     expect(buildConcrete({ ...base, tensionModel: 'none' }, 'ACI 318-19').cover.stress(-1e-5)).toBe(0);
     const stiff = buildConcrete({ ...base, tensionModel: 'tension-stiffening', tensionStiffeningCoefficient: 500 }, 'ACI 318-19').cover;
-    const fr = 0.62 * Math.sqrt(30);
-    expect(stiff.stress(-0.001)).toBeCloseTo(-fr / (1 + Math.sqrt(0.5)), 12);
+    // Vecchio & Collins (1986): the law is calibrated on the direct cracking stress fcr = 0.33 √f′c (from memory)
+    const fcr = 0.33 * Math.sqrt(30);
+    expect(stiff.stress(-0.001)).toBeCloseTo(-fcr / (1 + Math.sqrt(0.5)), 12);
+    expect(stiff.tensileStrength).toBeCloseTo(fcr, 12);
+    // the brittle law keeps the modulus of rupture, ACI 318-19 Eq. (19.2.3.1): fr = 0.62 λ √f′c
+    expect(buildConcrete({ ...base, tensionModel: 'linear-brittle' }, 'ACI 318-19').cover.tensileStrength).toBeCloseTo(0.62 * Math.sqrt(30), 12);
+    // EN 1992-1-1 Table 3.1: fctm = 0.30 fck^(2/3) for both laws (C30/37: 2.9 MPa)
+    expect(buildConcrete({ ...base, tensionModel: 'tension-stiffening' }, 'EN 1992-1-1').cover.tensileStrength).toBeCloseTo(0.3 * 30 ** (2 / 3), 9);
+    // where it acts in a section is the engineer's choice: the effective tension area unless the whole tension zone is asked for
+    expect(stiff.tension.stiffeningZone).toBe('effective-area');
+    expect(buildConcrete({ ...base, tensionModel: 'tension-stiffening', tensionStiffeningZone: 'tension-zone' }, 'ACI 318-19').cover.tension.stiffeningZone).toBe('tension-zone');
   });
 });
 
@@ -171,8 +180,8 @@ describe('validateConcreteSpec', () => {
     const mander = validateConcreteSpec({ ...base, strength: 100, compressionModel: 'mander' }, 'm', { code: 'ACI 318-19' });
     expect(mander.map((d) => d.path)).toEqual(['m.elasticModulus']);
     expect(mander[0]?.message).toMatch(/secant modulus/);
-    // Tension stiffening needs its end strain beyond cracking: fr/Ec with a tiny Ec
-    expect(validateConcreteSpec({ ...base, compressionModel: 'en1992-parabola-rectangle', tensionModel: 'tension-stiffening', elasticModulus: 5000, tensileStrength: 12 }, 'm', { code: 'ACI 318-19' }).map((d) => d.path)).toEqual(['m.tensionModel']);
+    // The zone of tension stiffening is one of the listed choices
+    expect(validateConcreteSpec({ ...base, tensionModel: 'tension-stiffening', tensionStiffeningZone: 'everywhere' as never }, 'm', { code: 'ACI 318-19' }).map((d) => d.path)).toEqual(['m.tensionStiffeningZone']);
   });
 
   it('keeps EN 1992-1-1 within Table 3.1: error above 90 MPa, warning below 12 MPa', () => {

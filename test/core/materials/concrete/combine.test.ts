@@ -17,7 +17,7 @@ describe('combineConcrete', () => {
   });
 
   it('merges breakpoints: tension ones negated, zero, then compression ones, ascending', () => {
-    expect(concrete.breakpoints).toEqual([-0.002, -0.0016, -3 / Ec, 0, compression.peakStrain, 0.0038]);
+    expect(concrete.breakpoints).toEqual([-0.005, -0.004, -3 / Ec, 0, compression.peakStrain, 0.0038]);
   });
 
   it('carries crushing strain, peak and tensile strength from its parts', () => {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { BugError } from '../../../../core/diagnostics.ts';
-import { linearBrittleTension, noTension, tensionStiffening, validateTensionParameters } from '../../../../core/materials/concrete/tension.ts';
+import { linearBrittleTension, noTension, tensionStiffening, validateTensionParameters, vecchioCollinsCrackingStress } from '../../../../core/materials/concrete/tension.ts';
 
 const fr = 0.62 * Math.sqrt(30); // ACI 318-19 Eq. 19.2.3.1
 const Ec = 4700 * Math.sqrt(30); // ACI 318-19 Eq. 19.2.2.1.b
@@ -44,13 +44,22 @@ describe('tension stiffening (Vecchio & Collins 1986)', () => {
     expect(law.stress(0.001) / fr).toBeCloseTo(0.691, 3);
   });
 
-  it('is linear to fcr before cracking, and tapers linearly to zero between 0.8 and 1.0 of the end strain 0.002', () => {
+  it('is linear to fcr before cracking, and tapers linearly to zero between 0.8 and 1.0 of the end strain 0.005', () => {
     // the taper keeps the law continuous (common practice, no source)
     expect(law.stress(epsCr)).toBeCloseTo(fr, 12);
-    expect(law.stress(0.0018)).toBeCloseTo((fr / (1 + Math.sqrt(200 * 0.0018))) * 0.5, 12);
-    expect(law.stress(0.002)).toBe(0);
-    expect(law.stress(0.00201)).toBe(0);
-    expect(law.breakpoints).toEqual([epsCr, 0.0016, 0.002]);
+    expect(law.stress(0.0045)).toBeCloseTo((fr / (1 + Math.sqrt(200 * 0.0045))) * 0.5, 12);
+    expect(law.stress(0.005)).toBe(0);
+    expect(law.stress(0.00501)).toBe(0);
+    expect(law.breakpoints).toEqual([epsCr, 0.004, 0.005]);
+    // the taper starts beyond the yield strain of bars up to fy = 800 MPa (Es = 200 GPa): in a section their yield ends the stiffening first
+    expect(law.breakpoints[1]!).toBeGreaterThanOrEqual(800 / 200_000);
+  });
+
+  it('is fed the direct cracking stress it was calibrated on, about half the modulus of rupture', () => {
+    // Vecchio & Collins (1986): fcr = 0.33 √f′c, MPa (from memory); ACI 318-19 Eq. (19.2.3.1): fr = 0.62 λ √f′c
+    expect(vecchioCollinsCrackingStress(30)).toBeCloseTo(0.33 * Math.sqrt(30), 12);
+    expect(vecchioCollinsCrackingStress(30, 0.75)).toBeCloseTo(0.75 * 0.33 * Math.sqrt(30), 12);
+    expect(vecchioCollinsCrackingStress(30) / (0.62 * Math.sqrt(30))).toBeCloseTo(0.532, 3);
   });
 
   it('takes c = 500 (Collins & Mitchell 1991, from memory) and another end strain from the caller', () => {

@@ -13,6 +13,15 @@ import { releasedMoment } from '../../../core/member/statics.ts';
 import { elasticZone } from '../../../core/member/zones.ts';
 import type { ContinuousLoad, ContinuousSupport } from '../../../core/continuous/definition.ts';
 import { continuousBeam, fixed, pinned } from '../../fixtures/continuous.ts';
+import { capacityAnalysis } from '../../../core/continuous/capacity.ts';
+import { directionLaw, hingeBars } from '../../../core/continuous/laws.ts';
+import { capacityCurve } from '../../../core/member/capacity.ts';
+import { buildSectionModel } from '../../../core/section/build.ts';
+import type { SectionDefinition } from '../../../core/section/definition.ts';
+import { momentCurvature } from '../../../core/section/moment-curvature.ts';
+import { beamOf, fieldOf } from '../../fixtures/beams.ts';
+import { fixedResolver } from '../../fixtures/sections.ts';
+import { testConcrete, testSteel } from '../../fixtures/simple-materials.ts';
 
 const L = 7200;
 const EI = 3e13;
@@ -57,4 +66,34 @@ describe('one span of the continuous engine equals the member engine (elastic)',
       }
     });
   }
+});
+
+describe('one span of the continuous engine equals the member engine (to failure)', () => {
+  // A real section (parabolic concrete, elastic–plastic steel) with top and bottom bars; fixed–pinned
+  // span under uniform load: the member engine's propped cantilever.
+  const concrete = testConcrete({ fc: 30, eps0: 0.002, epsCu: 0.0038, shape: 'parabola' });
+  const steel = testSteel(500, 200000, 0.1);
+  const resolver = fixedResolver(concrete, steel);
+  const section: SectionDefinition = {
+    id: 'r', name: 'r', shape: { kind: 'rectangle', width: 300, height: 600 }, concreteId: 'c',
+    bars: [{ steelId: 's', depth: 545, count: 4, diameter: 20 }, { steelId: 's', depth: 55, count: 4, diameter: 20 }],
+  };
+  it('propped cantilever: the same peak load (< 1 %) and the same hinge sequence', () => {
+    const span = 6000;
+    const lp = 400;
+    const beam = beamOf('propped-cantilever', span, [{ from: 0, to: span, section }], resolver, 120);
+    const pattern = fieldOf(beam, [{ kind: 'uniform', w: 1, from: 0, to: span }]);
+    const member = capacityCurve(beam, { constant: new Float64Array(beam.x.length), pattern, constantTotal: 0, patternTotal: span }, { pattern: 'proportional', hingeLengthMethod: 'user', userHingeLength: lp });
+    const memberPeak = Math.max(...member.points.map((p) => p.loadFactor));
+
+    const { model } = buildSectionModel(section, resolver);
+    const law = (dir: 'sagging' | 'hogging') => directionLaw(momentCurvature(model, dir, { codeCrushingStrain: 0.003 }), hingeBars(model, dir))!;
+    const def = continuousBeam([span], [{ kind: 'uniform', loadCase: 'dead', span: 1, magnitude: 1 }], { supports: [fixed, pinned] });
+    const layout = layoutOf(def);
+    const result = capacityAnalysis({ definition: def, zones: [{ sectionId: 'r', sagging: law('sagging'), hogging: law('hogging') }], held: [[]], pattern: caseLoads(def, layout, 'dead'), hingeLengthMethod: 'user', userHingeLength: lp });
+    expect(result.converged).toBe(true);
+    expect(Math.abs(result.peakLoadFactor / memberPeak - 1)).toBeLessThan(0.01);
+    expect(result.hinges.map((h) => h.direction)).toEqual(member.hinges.map((h) => h.direction));
+    expect(Math.abs(result.hinges[0]!.position - member.hinges[0]!.position)).toBeLessThan(1);
+  });
 });

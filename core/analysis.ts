@@ -92,7 +92,7 @@ export function analyzeMembers(project: Project, memberIds?: readonly string[], 
   members.forEach(({ m, index }, k) => {
     const context: AssessmentContext = {
       code: project.info.codeBasis, segments: project.settings.stations, section, sectionIds, path: `members[${index}] "${m.name}"`,
-      library: project, sectionSettings: project.settings,
+      library: project, sectionSettings: project.settings, unitSystem: project.info.unitSystem,
     };
     let result: MemberResult;
     // Members with an as-found condition or schemes carry derived ids of their own: never shared.

@@ -47,6 +47,8 @@ export interface AssessmentContext extends MemberContext {
   /** The project's materials and sections (variants derive from them). */
   readonly library: Library;
   readonly sectionSettings: SectionSettings;
+  /** The project's unit system (the form of ACI's unit-dependent expressions). */
+  readonly unitSystem?: Setup['unitSystem'];
 }
 
 /** A member zone list pointing at other section ids. */
@@ -94,7 +96,7 @@ export function assessMember(member: AssessedMember, context: AssessmentContext)
 
 function extend(member: AssessedMember, context: AssessmentContext, design: MemberResult): MemberResult {
   const library = context.library;
-  const setup: Setup = { library, code: context.code, path: context.path, segments: context.segments, sectionSettings: context.sectionSettings };
+  const setup: Setup = { library, code: context.code, path: context.path, segments: context.segments, sectionSettings: context.sectionSettings, ...(context.unitSystem ? { unitSystem: context.unitSystem } : {}) };
   const hasRetrofit = member.asFound !== undefined || (member.schemes !== undefined && member.schemes.length > 0);
   if (design.status === 'input-error') {
     if (!hasRetrofit) return design;

@@ -15,13 +15,21 @@ export const ACI_SQRT_FC_LIMIT = 8.3;
 export const ACI_STIRRUP_YIELD_LIMIT = 420;
 
 /**
- * Size-effect modification factor λs = √(2/(1 + d/254)) ≤ 1 (d in mm; the in.-lb. form is
- * √(2/(1 + d/10)) with d in inches, the SI edition writes 1 + 0.004d — within 1.6 % of this).
- * @param d effective depth, mm (> 0)
- * @see ACI 318-19 Eq. 22.5.5.1.3
+ * Which form of ACI 318-19's unit-dependent expressions a project uses: the inch-pound edition's or
+ * the SI edition's (the project's unit system, `info.unitSystem`).
  */
-export function aciSizeEffectFactor(d: number): number {
-  return Math.min(1, Math.sqrt(2 / (1 + d / 254)));
+export type AciEdition = 'us' | 'si';
+
+/**
+ * Size-effect modification factor λs ≤ 1, d in mm:
+ *  - inch-pound form √(2/(1 + d/10)) with d in inches, i.e. √(2/(1 + d/254)) with d in mm;
+ *  - SI form √(2/(1 + 0.004d)) = √(2/(1 + d/250)) with d in mm (up to 1.6 % apart in 1 + d/…).
+ * @param d effective depth, mm (> 0)
+ * @param edition the form the project uses (default the inch-pound one)
+ * @see ACI 318-19 Eq. 22.5.5.1.3 (in.-lb. and SI editions)
+ */
+export function aciSizeEffectFactor(d: number, edition: AciEdition = 'us'): number {
+  return Math.min(1, Math.sqrt(2 / (1 + d / (edition === 'si' ? 250 : 254))));
 }
 
 /**
@@ -50,6 +58,8 @@ export interface AciConcreteShearInput {
   readonly grossArea: number;
   /** Av ≥ Av,min. */
   readonly meetsMinimum: boolean;
+  /** Form of λs (Eq. 22.5.5.1.3): the project's unit system; default the inch-pound form. */
+  readonly edition?: AciEdition;
 }
 
 /** Vc of ACI 318-19 Table 22.5.5.1 with the row and factors used (N, MPa). */
@@ -77,7 +87,7 @@ export interface AciConcreteShear {
 export function aciConcreteShear(i: AciConcreteShearInput): AciConcreteShear {
   const sqrtFc = Math.min(Math.sqrt(i.fc), ACI_SQRT_FC_LIMIT);
   const axialStress = Math.min(i.axialForce / (6 * i.grossArea), 0.05 * i.fc);
-  const lambdaS = aciSizeEffectFactor(i.d);
+  const lambdaS = aciSizeEffectFactor(i.d, i.edition);
   const cube = Math.cbrt(Math.max(i.rhoW, 0));
   const bd = i.bw * i.d;
   let value: number;

@@ -11,7 +11,7 @@ import { barArea } from '../section/definition.ts';
 import type { BendingDirection, SectionModel } from '../section/model.ts';
 import { faces } from '../section/state.ts';
 import { stripWidthAt } from '../section/width-profile.ts';
-import { aciShearStrength, type StirrupInput } from './shear-aci.ts';
+import { aciShearStrength, type AciEdition, type StirrupInput } from './shear-aci.ts';
 import { enShearStrength } from './shear-en.ts';
 import { convertUnit } from '../units/convert.ts';
 import { bySystem, type Text } from '../units/phrase.ts';
@@ -117,7 +117,7 @@ const sqrtPsi = (sqrtMpa: number) => Math.sqrt(convertUnit(sqrtMpa * sqrtMpa, 'M
  * Shear capacity of a zone's section in one bending direction (the side in tension sets d and ρ).
  * @see ACI 318-19 22.5; EN 1992-1-1 6.2 (via aciShearStrength / enShearStrength)
  */
-export function sectionShearCapacity(code: CodeBasis, zone: ShearZone, direction: BendingDirection): ShearCapacity | null {
+export function sectionShearCapacity(code: CodeBasis, zone: ShearZone, direction: BendingDirection, edition: AciEdition = 'us'): ShearCapacity | null {
   const model = zone.analysis.model;
   if (!model) return null;
   const geometry = shearSectionGeometry(model, direction);
@@ -136,7 +136,7 @@ export function sectionShearCapacity(code: CodeBasis, zone: ShearZone, direction
   const identity = { sectionId: zone.definition.id, sectionName: zone.definition.name, direction, code, effectiveDepth: d, webWidth: bw, hasTensionBars: geometry.hasTensionBars, concreteStrength: fc };
   if (code === 'ACI 318-19') {
     const lambda = zone.concrete.lightweightFactor ?? 1;
-    const r = aciShearStrength({ ...common, fc, lambda, rhoW: rho, grossArea: geometry.concreteArea, stirrups });
+    const r = aciShearStrength({ ...common, fc, lambda, rhoW: rho, grossArea: geometry.concreteArea, stirrups, edition });
     const c = r.concrete;
     const vcText = c.expression === '(a)'
       ? `Vc = (0.17λ√f′c + Nu/6Ag)·bw·d = (0.17 × ${lambda} × ${c.sqrtFc.toFixed(2)} + ${c.axialStress.toFixed(2)}) × ${bw.toFixed(0)} × ${d.toFixed(0)} = ${kN(c.value)}`

@@ -37,6 +37,7 @@ import { joinTexts, phrase, q, type Text } from '../units/phrase.ts';
 import { combinedLoads, memberLoadSets, scaleLoad } from './combinations.ts';
 import { elasticSupportMoments, type ElasticZone } from './demand.ts';
 import { sectionShearCapacity, type ShearCapacity, type ShearZone } from './shear-section.ts';
+import type { AciEdition } from './shear-aci.ts';
 
 export interface ShearDemandPoint {
   /** mm from the left support, and which side of a discontinuity. */
@@ -123,6 +124,8 @@ export interface MemberShearInput {
   readonly segments?: number;
   /** γo on the section peak moment for the mechanism (default 1.0). */
   readonly overstrengthFactor?: number;
+  /** ACI: the form of the unit-dependent expressions (λs), the project's unit system; default 'us'. */
+  readonly edition?: AciEdition;
 }
 
 
@@ -152,7 +155,7 @@ export function memberShear(input: MemberShearInput): ShearResult {
   const warnings: Text[] = [];
 
   // --- capacities per zone and direction ----------------------------------------------------------
-  const caps = zones.map((z) => ({ sagging: sectionShearCapacity(code, z, 'sagging'), hogging: sectionShearCapacity(code, z, 'hogging') }));
+  const caps = zones.map((z) => ({ sagging: sectionShearCapacity(code, z, 'sagging', input.edition), hogging: sectionShearCapacity(code, z, 'hogging', input.edition) }));
   const capacities: ShearCapacity[] = [];
   const seen = new Set<string>();
   caps.forEach((c) => {

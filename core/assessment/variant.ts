@@ -19,6 +19,7 @@ import { strengthCombination } from './combinations.ts';
 import type { MemberResult } from './results.ts';
 import { memberShear, type ShearResult } from './shear.ts';
 import type { ShearZone } from './shear-section.ts';
+import type { AciEdition } from './shear-aci.ts';
 import { memberStrength } from './strength.ts';
 
 /** How the sections of a variant are analysed (the project's analysis settings). */
@@ -38,6 +39,8 @@ export interface Setup {
   readonly path: string;
   readonly segments: number;
   readonly sectionSettings: SectionSettings;
+  /** The project's unit system: which form of ACI's unit-dependent expressions applies (λs). */
+  readonly unitSystem?: AciEdition;
 }
 
 /** One analysed beam variant. */
@@ -166,7 +169,7 @@ export function runVariant(setup: Setup, input: VariantInput): VariantRun {
   let shear: ShearResult | null = null;
   if (result.status !== 'input-error' && zones.every((z) => z.analysis.model && z.concrete)) {
     const { factors, text } = strengthCombination(input.member, code);
-    shear = memberShear({ code, member: input.member, zones, factors, combination: text, segments: setup.segments });
+    shear = memberShear({ code, member: input.member, zones, factors, combination: text, segments: setup.segments, ...(setup.unitSystem ? { edition: setup.unitSystem } : {}) });
   }
   return { key: input.key, label: input.label, member: input.member, analyses, definitions: input.definitions, baseOf: input.baseOf, added: input.added ?? new Map(), result, shear, zones };
 }

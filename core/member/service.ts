@@ -192,7 +192,7 @@ export function serviceDeflections(input: ServiceInput): ServiceOutcome {
     codeAdditional = multiplier * code.sustained;
     codeTotal = code.sustained + codeAdditional;
     codeName = 'ACI 318-19 24.2.3.5 effective moment of inertia; long-term multiplier 24.2.4.1';
-    notes = `Ie from Eq. (24.2.3.5a) with Mcr = fr·Ig/yt (Eq. 24.2.3.5b), ${aci.where}; Ec·Ie constant along the member. ξ = ${xi.toFixed(2)} for ${settings.durationMonths} months, ρ′ = ${aci.compressionRatio.toFixed(4)}, λΔ = ${multiplier.toFixed(3)}. The sustained deflection uses Ie at dead + live (the member has been cracked by the full service load).`;
+    notes = `Ie from Eq. (24.2.3.5a) with Mcr = fr·Ig/yt (Eq. 24.2.3.5b), ${aci.where}; Ie constant along the member, each zone with its own Ec. ξ = ${xi.toFixed(2)} for ${settings.durationMonths} months, ρ′ = ${aci.compressionRatio.toFixed(4)}, λΔ = ${multiplier.toFixed(3)}. The sustained deflection uses Ie at dead + live (the member has been cracked by the full service load).`;
   } else {
     const en = enMethod(input);
     code = en.immediate;
@@ -268,7 +268,7 @@ function checkQuantity(
   }
 }
 
-/** ACI 318-19: one Ie for the member from its critical section(s), elastic deflection with Ec·Ie. */
+/** ACI 318-19: one Ie for the member from its critical section(s), elastic deflection with each zone's Ec times that Ie. */
 function aciMethod(input: ServiceInput) {
   const psi = input.settings.sustainedLiveFraction;
   const props = input.zones.map((z) => elasticProperties(z.model, { concreteModulus: z.codeModulus, tensileStrength: z.codeTensileStrength }));
@@ -311,11 +311,13 @@ function aciMethod(input: ServiceInput) {
       }
     }
   };
+  // One Ie for the member, each zone with its own Ec (a zone of other concrete keeps its modulus).
   const deflectionWith = (ie: number, f: Float64Array) => {
-    const ec = input.zones[0]!.codeModulus;
-    const ei = ec * ie;
-    const lin = functionResponse((m) => m / ei, () => 1 / ei);
-    const b = buildBeamModel(input.support, input.span, input.zones.map((z) => codeZone(z, lin, lin)), input.extraPoints, input.segments);
+    const b = buildBeamModel(input.support, input.span, input.zones.map((z) => {
+      const ei = z.codeModulus * ie;
+      const lin = functionResponse((m) => m / ei, () => 1 / ei);
+      return codeZone(z, lin, lin);
+    }), input.extraPoints, input.segments);
     return maxDeflection(solveStatic(b, f));
   };
   const deadField = field(elasticBeam, input.dead);

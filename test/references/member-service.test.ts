@@ -140,3 +140,31 @@ describe('EN 1992-1-1 7.4.3, simply supported beam under uniform load', () => {
     expect(s.checks.find((c) => c.limitCase === 'en-after-construction')!.limit).toBeCloseTo(L / 500, 9);
   });
 });
+
+describe('ACI 318-19 effective moment of inertia with each zone’s own Ec (zones of different concrete)', () => {
+  // Ends of 20 MPa concrete, the middle half of 30 MPa, one cross-section; loads small enough that
+  // Ma ≤ (2/3)Mcr everywhere, so Ie = Ig (ACI 318-19 Eq. (24.2.3.5a)) and the deflection is elastic.
+  const base = project('ACI 318-19', ['aci-floor-immediate']);
+  const weak = { kind: 'concrete' as const, id: 'c20', name: 'C20', strength: 20, compressionModel: 'hognestad' as const, tensionModel: 'tension-stiffening' as const };
+  const ends = { ...base.sections[0]!, id: 'r20', name: 'rect, C20', concreteId: 'c20' };
+  const member = { ...base.members[0]!, loads: [{ kind: 'uniform' as const, loadCase: 'superimposed' as const, magnitude: 0.5 }, { kind: 'uniform' as const, loadCase: 'live' as const, magnitude: 1 }], zones: [{ from: 0, to: L / 4, sectionId: 'r20' }, { from: L / 4, to: (3 * L) / 4, sectionId: 'r' }, { from: (3 * L) / 4, to: L, sectionId: 'r20' }] };
+  const s = analyzeProject({ ...base, materials: [...base.materials, weak], sections: [...base.sections, ends], members: [member] }).members[0]!.service!;
+
+  it('dead-load deflection by virtual work with Ec of each zone and Ie = Ig', () => {
+    const ig = (b * h ** 3) / 12;
+    // ACI 318-19 Eq. (19.2.2.1.b): Ec = 4700 √f′c
+    const ecMid = 4700 * Math.sqrt(30);
+    const ecEnd = 4700 * Math.sqrt(20);
+    const w = selfWeight + 0.5;
+    // ACI 318-19 Eq. (24.2.3.5b) with fr of the critical (midspan) zone: Ma ≤ (2/3)Mcr, so Ie = Ig
+    expect((w + 1) * L * L / 8).toBeLessThan((2 / 3) * (0.62 * Math.sqrt(30) * ig) / (h / 2));
+    expect(rel(s.codeMethod.effectiveInertia!.dead, ig)).toBeLessThan(1e-9);
+    // virtual work, simply supported, uniform w, unit load at midspan: δ = 2 ∫0^{L/2} M·m/(Ec·I) dx,
+    // M = w·x(L − x)/2, m = x/2, so ∫ M·m dx = (w/4)[L·x³/3 − x⁴/4] (plain calculus)
+    const F = (a: number, c: number) => (w / 4) * ((L * c ** 3) / 3 - c ** 4 / 4 - ((L * a ** 3) / 3 - a ** 4 / 4));
+    const delta = (2 / ig) * (F(0, L / 4) / ecEnd + F(L / 4, L / 2) / ecMid);
+    expect(rel(s.immediate.code.dead, delta)).toBeLessThan(1e-3);
+    // with the midspan zone's Ec everywhere it would be 5wL⁴/(384·Ec·Ig) (AISC Manual Table 3-23 case 1), about 4 % less
+    expect(s.immediate.code.dead / ((5 * w * L ** 4) / (384 * ecMid * ig))).toBeGreaterThan(1.03);
+  });
+});

@@ -5,6 +5,8 @@
  */
 import { describe, expect, it } from 'vitest';
 import { say } from '../../core/units/phrase.ts';
+import { analyzeProject } from '../../core/analysis.ts';
+import { smallProject } from '../fixtures/projects.ts';
 import { ACI_SHEAR_PHI, aciConcreteShear, aciMinimumShearReinforcement, aciShearStrength, aciSizeEffectFactor, aciStirrupShear } from '../../core/assessment/shear-aci.ts';
 import { convertUnit } from '../../core/units/convert.ts';
 
@@ -111,3 +113,35 @@ describe('ACI 318-19 SI constants against the in.-lb. forms', () => {
     }
   });
 });
+
+describe('ACI 318-19 Eq. 22.5.5.1.3 in the SI form for SI projects', () => {
+  it('λs = √(2/(1 + 0.004d)) with d in mm: d = 500 mm gives √(2/3), d = 250 mm gives 1', () => {
+    // ACI 318-19 (SI edition) Eq. 22.5.5.1.3: λs = √(2/(1 + 0.004d)) ≤ 1, d in mm
+    expect(aciSizeEffectFactor(500, 'si')).toBeCloseTo(Math.sqrt(2 / 3), 12);
+    expect(aciSizeEffectFactor(250, 'si')).toBe(1);
+    // ACI 318-19 Eq. 22.5.5.1.3 (in.-lb.): λs = √(2/(1 + d/10)), d in inches
+    expect(aciSizeEffectFactor(500, 'us')).toBeCloseTo(Math.sqrt(2 / (1 + 500 / 25.4 / 10)), 12);
+  });
+
+  it('a member without stirrups takes Vc of Table 22.5.5.1(c) with the form of its project\'s unit system', () => {
+    const vcOf = (unitSystem: 'si' | 'us') => {
+      const project = smallProject('ACI 318-19', [{
+        id: 'B', name: 'B', supports: 'simply-supported', span: 6000, zones: [{ from: 0, to: 6000, sectionId: 'bare' }],
+        loads: [{ kind: 'uniform', loadCase: 'superimposed', magnitude: 8 }, { kind: 'uniform', loadCase: 'live', magnitude: 12 }],
+        service: { sustainedLiveFraction: 0.25, durationMonths: 60, limitCases: ['aci-floor-immediate'] },
+        capacity: { pattern: 'proportional', hingeLengthMethod: 'priestley-2007' },
+      }]);
+      const bare = { ...project.sections[0]!, id: 'bare', name: 'no stirrups' };
+      delete (bare as { hoops?: unknown }).hoops;
+      const p = { ...project, info: { ...project.info, unitSystem }, sections: [...project.sections, bare] };
+      const cap = analyzeProject(p).members[0]!.shear!.capacities.find((c) => c.direction === 'sagging')!;
+      return { vc: cap.concreteContribution, d: cap.effectiveDepth };
+    };
+    const si = vcOf('si');
+    const us = vcOf('us');
+    // d = 540 mm: λs = √(2/(1 + 0.004·540)) in SI, √(2/(1 + 540/254)) in in.-lb.; Vc of row (c) is proportional to λs (ACI 318-19 Table 22.5.5.1(c))
+    expect(si.d).toBeCloseTo(540, 9);
+    expect(si.vc / us.vc).toBeCloseTo(Math.sqrt((1 + 540 / 254) / (1 + 0.004 * 540)), 9);
+  });
+});
+

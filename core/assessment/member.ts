@@ -23,7 +23,7 @@ import type { BeamDefinition, MemberLoad } from '../member/definition.ts';
 import { deriveAsFound, type AsFoundDerivation } from '../retrofit/as-found.ts';
 import { exposedElements } from '../retrofit/schemes.ts';
 import type { AddedItem, AsFoundCondition, Library, StrengtheningScheme } from '../retrofit/types.ts';
-import { validateAsFound, validateSchemes } from '../retrofit/validate.ts';
+import { MAX_SCHEMES, validateAsFound, validateSchemes } from '../retrofit/validate.ts';
 import type { SectionAnalysis } from '../section/analyze.ts';
 import type { SectionAdditions } from '../section/build.ts';
 import type { SectionDefinition } from '../section/definition.ts';
@@ -148,7 +148,10 @@ function extend(member: AssessedMember, context: AssessmentContext, design: Memb
 
   // --- schemes --------------------------------------------------------------------------------------
   const schemeResults: SchemeResult[] = [];
-  const schemes = member.schemes ?? [];
+  // Too many schemes (core/retrofit/validate.ts MAX_SCHEMES): none is analysed, the error says why.
+  const tooManySchemes = (member.schemes?.length ?? 0) > MAX_SCHEMES;
+  const schemes = tooManySchemes ? [] : member.schemes ?? [];
+  if (tooManySchemes) errors.push(...errorsOf(validateSchemes(member.schemes ?? [], member, library, `${context.path}.schemes`)));
   if (schemes.length > 0) {
     const schemeProblems = validateSchemes(schemes, member, library, `${context.path}.schemes`);
     const asFoundBroken = member.asFound !== undefined && errors.length > 0;

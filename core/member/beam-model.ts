@@ -6,6 +6,7 @@
 import type { SupportType } from './definition.ts';
 import type { SectionResponse, ValueAndSlope } from './section-response.ts';
 import { redundantEnds, redundantField } from './statics.ts';
+import { zoneLookup } from './zone-lookup.ts';
 
 export interface ZoneResponse {
   readonly sectionId: string;
@@ -66,6 +67,7 @@ export function buildBeamModel(support: SupportType, span: number, zones: readon
   }
   const x = Float64Array.from(xs);
   const segmentZone = new Int32Array(x.length - 1);
+  const zoneAt = zoneLookup(zones);
   for (let k = 0; k < x.length - 1; k++) {
     const a = x[k]!;
     const b = x[k + 1]!;
@@ -74,7 +76,7 @@ export function buildBeamModel(support: SupportType, span: number, zones: readon
       // Zero-length segment at a boundary: it belongs to the zone on the right.
       mid = a + 1e-9;
     }
-    const z = zones.findIndex((zone) => mid >= zone.from && mid <= zone.to);
+    const z = zoneAt(mid);
     segmentZone[k] = z < 0 ? zones.length - 1 : z;
   }
   const stationZone = new Int32Array(x.length);

@@ -10,11 +10,10 @@
  * Units: mm, N, N/mm, N·mm.
  */
 import type { MemberLoad, SupportType } from './definition.ts';
+import { loadIndexOf, type StaticLoad } from './load-index.ts';
 
-/** A load reduced to what statics needs. Uniform loads act over [from, to]. */
-export type StaticLoad =
-  | { readonly kind: 'uniform'; readonly w: number; readonly from: number; readonly to: number }
-  | { readonly kind: 'point'; readonly p: number; readonly a: number };
+/** A load reduced to what statics needs (defined beside its index). Uniform loads act over [from, to]. */
+export type { StaticLoad };
 
 export function toStaticLoad(load: MemberLoad, span: number, factor = 1): StaticLoad {
   if (load.kind === 'point') return { kind: 'point', p: load.magnitude * factor, a: load.position };
@@ -31,6 +30,8 @@ export function totalLoad(loads: readonly StaticLoad[]): number {
  * simple: simply supported span of length L; cantilever: fixed at 0, free at L.
  */
 export function releasedMoment(support: SupportType, span: number, loads: readonly StaticLoad[], x: number): number {
+  const index = loadIndexOf(loads);
+  if (index) return support === 'cantilever' ? -index.momentOfLoadsRight(0, span, x) : (index.momentOfLoadsLeft(0, span, span) * x) / span - index.momentOfLoadsLeft(0, span, x);
   if (support === 'cantilever') {
     // Hogging from every load to the right of x.
     let m = 0;
@@ -86,6 +87,8 @@ export function redundantField(end: 'left' | 'right', span: number, x: number): 
  * just left or right of x where a point load sits there.
  */
 export function releasedShear(support: SupportType, span: number, loads: readonly StaticLoad[], x: number, side: 'left' | 'right'): number {
+  const index = loadIndexOf(loads);
+  if (index) return (support === 'cantilever' ? index.loadLeft(0, span, span, true) : index.momentOfLoadsLeft(0, span, span) / span) - index.loadLeft(0, span, x, side === 'right');
   if (support === 'cantilever') {
     let v = 0;
     for (const l of loads) {

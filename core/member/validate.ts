@@ -15,6 +15,12 @@ const oneOf = (options: readonly string[]) => `one of ${options.join(', ')}`;
 const m = (mm: number) => q('spanLength', mm, { compact: true });
 
 /**
+ * Most zones and loads a member may have. No real beam needs more (a zone per haunch step, a load
+ * per joist every 30 mm of a 60 m span); the analysis time grows with them (n log n for loads).
+ */
+export const MEMBER_LIMITS = { zones: 200, loads: 2000 } as const;
+
+/**
  * @param path e.g. `members[3] "B-12"`
  * @param sectionIds ids of the project's sections
  */
@@ -28,6 +34,8 @@ export function validateMember(member: BeamDefinition, path: string, sectionIds:
   // Zones must tile [0, span].
   if (!Array.isArray(member.zones) || member.zones.length === 0) {
     error('required', 'zones', 'at least one zone with a section is required');
+  } else if (member.zones.length > MEMBER_LIMITS.zones) {
+    error('out-of-range', 'zones', `a member may have at most ${MEMBER_LIMITS.zones} zones, got ${member.zones.length}`);
   } else {
     const zones = [...member.zones].map((z, i) => ({ z, i })).sort((a, b) => a.z.from - b.z.from);
     member.zones.forEach((z, i) => {
@@ -49,7 +57,9 @@ export function validateMember(member: BeamDefinition, path: string, sectionIds:
   }
 
   // Loads lie on the span.
-  (member.loads ?? []).forEach((load, i) => {
+  const tooManyLoads = (member.loads?.length ?? 0) > MEMBER_LIMITS.loads;
+  if (tooManyLoads) error('out-of-range', 'loads', `a member may have at most ${MEMBER_LIMITS.loads} loads, got ${member.loads.length}`);
+  (tooManyLoads ? [] : member.loads ?? []).forEach((load, i) => {
     const at = `loads[${i}]`;
     if (!isOneOf(LOAD_CASES, load.loadCase)) error('unknown-option', `${at}.loadCase`, `must be ${oneOf(LOAD_CASES)}, got ${JSON.stringify(load.loadCase)}`);
     if (load.kind === 'point') {

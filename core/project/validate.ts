@@ -25,6 +25,7 @@ import type { CodeBasis, ConcreteSpec, FrpSpec, MaterialSpec, SteelSpec } from '
 import { validateMember } from '../member/validate.ts';
 import { validateAsFound, validateSchemes } from '../retrofit/validate.ts';
 import { buildSectionModel, checkBarNumbers, validateShape } from '../section/build.ts';
+import { sectionGeometryDiagnostics } from './validate-geometry.ts';
 import type { SectionDefinition } from '../section/definition.ts';
 import { phrase, q } from '../units/phrase.ts';
 import { materialLibrary, type MaterialSettings } from '../materials/library.ts';
@@ -345,6 +346,7 @@ export function validateProjectData(data: unknown): { project: Project | null; d
     const referencesOk = semantic.length === before;
     if (code && referencesOk && barsOk) semantic.push(...guarded(path, () => sectionBuildDiagnostics(section, path, materialSpecs, code, { ...(ultimateStrain ? { concreteUltimateStrain: ultimateStrain } : {}) })));
     else semantic.push(...guarded(path, () => validateShape(section.shape, `${path}.shape`))); // the shape is still checked
+    semantic.push(...guarded(path, () => sectionGeometryDiagnostics(section, path, code, Boolean(code && referencesOk && barsOk))));
   }
 
   // Members: the engine's member checks, the as-found condition and strengthening schemes

@@ -10,6 +10,8 @@ import type { SectionDefinition } from '../section/definition.ts';
 import { MINIMUM_CORE_COUNT } from './in-place-strength.ts';
 import { COVER_LOSS_FACES, DEFECT_KINDS, SCHEME_KINDS, type AsFoundCondition, type InstallationLoad, type Library, type StrengtheningScheme } from './types.ts';
 
+/** Most strengthening schemes one member may have: alternatives compared side by side (no real comparison needs more). */
+export const MAX_SCHEMES = 20;
 
 function error(out: Diagnostic[], code: Diagnostic['code'], path: string, message: Text): void {
   out.push(diagnostic(code, path, 'error', message));
@@ -128,6 +130,10 @@ export function validateSchemes(schemes: readonly StrengtheningScheme[], member:
   const out: Diagnostic[] = [];
   if (!Array.isArray(schemes)) {
     error(out, 'schema', path, 'must be a list of strengthening schemes');
+    return out;
+  }
+  if (schemes.length > MAX_SCHEMES) {
+    error(out, 'out-of-range', path, `a member may have at most ${MAX_SCHEMES} strengthening schemes, got ${schemes.length}; each is a full analysis of the beam`);
     return out;
   }
   const sectionIds = new Set(memberSections(member, library).map((s) => s.id));

@@ -15,6 +15,7 @@ import type { BarLayer, SectionDefinition } from './definition.ts';
 import { barArea, hoopsConfine, layerArea, layerDiameter } from './definition.ts';
 import type { ConcretePart, DiscreteElement, SectionModel } from './model.ts';
 import { shapeOutline, type SectionShape } from './shapes.ts';
+import { barLayoutProblems, hoopLegProblems, polygonShapeProblems } from './geometry-checks.ts';
 import { chordIntervals, profileMoments, subtractProfile, widthProfile, type Strip } from './width-profile.ts';
 
 /** A section dimension in a message (mm, shown in the display unit of section lengths). */
@@ -119,8 +120,8 @@ export function validateShape(shape: SectionShape, path: string): Diagnostic[] {
       });
       if (out.length === 0) {
         if (Math.min(...shape.outline.map((p) => p.y)) !== 0) out.push({ code: 'geometry', path: `${path}.outline`, severity: 'error', message: 'the highest point must be at depth y = 0 (depths are measured down from the top fibre)' });
-        const { area } = profileMoments(widthProfile(shapeOutline(shape)));
-        if (!(area > 0)) out.push({ code: 'geometry', path: `${path}.outline`, severity: 'error', message: 'the outline encloses no area' });
+        out.push(...polygonShapeProblems(shape, path));
+        if (out.length === 0 && !(profileMoments(widthProfile(shapeOutline(shape))).area > 0)) out.push({ code: 'geometry', path: `${path}.outline`, severity: 'error', message: 'the outline encloses no area' });
       }
       break;
     }
@@ -193,6 +194,7 @@ export function buildSectionModel(definition: SectionDefinition, materials: Mate
     checkNumber(problems, `${path}.hoops.clearCover`, hoops.clearCover, { min: 0, max: 150, quantity: 'sectionLength' });
     checkNumber(problems, `${path}.hoops.verticalLegs`, hoops.verticalLegs, { min: 2, max: 12 });
     if (hoops.horizontalLegs !== undefined) checkNumber(problems, `${path}.hoops.horizontalLegs`, hoops.horizontalLegs, { min: 2, max: 12 });
+    problems.push(...hoopLegProblems(hoops, path));
     const hoopSteel = materials.steel(hoops.steelId);
     if (!hoopSteel) problems.push({ code: 'unknown-reference', path: `${path}.hoops.steelId`, severity: 'error', message: `no steel material with id "${hoops.steelId}" in the library` });
     const web = webExtent(definition.shape);
@@ -274,6 +276,9 @@ export function buildSectionModel(definition: SectionDefinition, materials: Mate
       displacedConcrete: inCore ? concrete.core! : concrete.cover,
     });
   });
+  // Bars of different layers on top of each other, bars in a void (geometry-checks.ts).
+  const placed = new Set(elements.map((e) => e.sourceIndex));
+  problems.push(...barLayoutProblems(definition, path, (layer) => barPositions(definition, layer), { containment: placed }).filter((d) => d.severity === 'error'));
   if (definition.axialForce !== undefined) {
     checkNumber(problems, `${path}.axialForce`, definition.axialForce, { min: -1e9, max: 1e9, quantity: 'force' });
   }

@@ -90,7 +90,7 @@ function coldStart(): void {
 function engine(): void {
   say('engine benchmarks (vitest bench)…');
   const json = join(OUT, 'engine.json');
-  const r = spawnSync(process.execPath, [join(ROOT, 'node_modules', 'vitest', 'vitest.mjs'), 'bench', '--run', '--project', 'core', 'test/bench/section.bench.ts', 'test/bench/member.bench.ts', '--outputJson', json], { cwd: ROOT, stdio: ['ignore', 'ignore', 'pipe'], encoding: 'utf8' });
+  const r = spawnSync(process.execPath, [join(ROOT, 'node_modules', 'vitest', 'vitest.mjs'), 'bench', '--run', '--project', 'core', 'test/bench/section.bench.ts', 'test/bench/member.bench.ts', 'test/bench/large-inputs.bench.ts', '--outputJson', json], { cwd: ROOT, stdio: ['ignore', 'ignore', 'pipe'], encoding: 'utf8' });
   if (r.status !== 0 || !existsSync(json)) {
     rows.push({ what: 'engine rows', now: 'not measured', baseline: (r.stderr ?? '').split('\n').find((l) => l.trim() !== '') ?? '', ratio: '', target: '' });
     return;
@@ -105,6 +105,15 @@ function engine(): void {
   const member = find('capacity curve');
   const yardstick = find('yardstick');
   if (member && yardstick) rows.push({ what: 'one member to ultimate (fixed–fixed, two sections)', now: seconds(member.mean), baseline: `yardstick: ${seconds(yardstick.mean)}`, ratio: `${(member.mean / yardstick.mean).toFixed(2)}× yardstick`, target: '≤ 8 ms' });
+  // Issue 17, large inputs (test/bench/large-inputs.bench.ts).
+  const pair = (what: string, now: string, base: string, label: string, target: string, faster = false) => {
+    const a = find(now);
+    const b = find(base);
+    if (a && b) rows.push({ what, now: seconds(a.mean), baseline: `${label}: ${seconds(b.mean)}`, ratio: faster ? `${(b.mean / a.mean).toFixed(0)}× faster` : `${(a.mean / b.mean).toFixed(2)}×`, target });
+  };
+  pair('statics field, 10,000 point loads at 10,000 stations', 'large: indexed', 'large baseline', 'direct loop (before)', 'n log n, ≥ 100× faster', true);
+  pair('member with 1,900 point loads', 'large: 1,900', 'large: 475', '475 loads', '≈ 4× (linear), never 16× (n²)');
+  pair('member with 200 zones', 'large: 200 zones', 'large: 50 zones', '50 zones', '≈ 4× (linear), never 16× (n²)');
 }
 
 // --- the command on 1,000 members -------------------------------------------------------------------

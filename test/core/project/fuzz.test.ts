@@ -10,6 +10,7 @@ import { analyzeProject } from '../../../core/analysis.ts';
 import { parseProject, serializeProject } from '../../../core/project/file.ts';
 import { analysisBlockers, hasErrors, validateProjectData } from '../../../core/project/validate.ts';
 import { member, smallProject } from '../../fixtures/projects.ts';
+import { BAD_KINDS, badProjects, type BadKind } from './bad-projects.ts';
 
 const base = JSON.parse(serializeProject(smallProject('ACI 318-19', [
   member('B-1', 'simply-supported', 6000, 'r1', { loads: [{ kind: 'uniform', loadCase: 'live', magnitude: 10, from: 0, to: 3000 }, { kind: 'point', loadCase: 'dead', magnitude: 20000, position: 2000 }] }),
@@ -168,4 +169,25 @@ describe('analysis of mutated projects that parse', () => {
     }), { numRuns: 100 });
     expect(analysed).toBeGreaterThan(50);
   }, 120_000);
+});
+
+describe('files with a planted defect of issue 17 (bad-projects.ts): caught by validation, never analysed as something else', () => {
+  // Runs per kind: enough to cover each generator's branches; huge counts are big files, so fewer.
+  const runs: Record<BadKind, number> = { 'overlap': 40, 'void': 40, 'self-intersection': 40, 'huge-count': 12, 'non-integer': 40 };
+  for (const kind of BAD_KINDS) {
+    it(`${kind}: an error names the planted field; the member gets no result of its own`, () => {
+      fc.assert(fc.property(badProjects(kind), (bad) => {
+        const { project, diagnostics } = validateProjectData(JSON.parse(JSON.stringify(bad.project)));
+        assertCleanMessages(diagnostics);
+        const errors = diagnostics.filter((d) => d.severity === 'error' && d.path.startsWith(bad.path));
+        expect(errors.length, `${bad.what}: ${JSON.stringify(diagnostics.slice(0, 3))}`).toBeGreaterThan(0);
+        // Section errors keep the project from being analysed; member errors make the member an input error.
+        if (analysisBlockers(diagnostics).length > 0 || !project) return;
+        const result = analyzeProject(project).members[0]!;
+        expect(result.errors.length, bad.what).toBeGreaterThan(0);
+        if (kind !== 'huge-count' || !bad.path.endsWith('.schemes')) expect(result.status).toBe('input-error');
+        else expect(result.retrofit?.schemes ?? []).toEqual([]);
+      }), { numRuns: runs[kind] });
+    }, 300_000);
+  }
 });

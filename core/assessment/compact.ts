@@ -176,7 +176,8 @@ export function compactVariant(code: CodeBasis, run: VariantRun, strength: Flexu
 
 const change = (a: number | null, b: number | null): number | null => (a !== null && b !== null && a > 0 ? ((b - a) / a) * 100 : null);
 
-function criticalHinge(hinges: readonly PlasticHinge[], direction: BendingDirection, position: number): PlasticHinge | undefined {
+/** The hinge of a variant nearest `position` (mm) in `direction`: where the compared beam's strength check governs. */
+export function criticalHinge(hinges: readonly PlasticHinge[], direction: BendingDirection, position: number): PlasticHinge | undefined {
   return hinges.filter((h) => h.direction === direction).reduce<PlasticHinge | undefined>((best, h) => (!best || Math.abs(h.position - position) < Math.abs(best.position - position) ? h : best), undefined);
 }
 

@@ -210,7 +210,8 @@ function axisOptions(axis: AxisSpec, id: 'x' | 'y' | 'x2' | 'y2', font: (size: n
       color: TEXT_COLOUR,
       font: titleFont,
     },
-    ...(axis.categories ? { min: -0.5, max: axis.categories.length - 0.5 } : {}),
+    // A category axis: ticks at the whole values only (the range runs half a step beyond each end).
+    ...(axis.categories ? { min: -0.5, max: axis.categories.length - 0.5, afterBuildTicks: (scale: { ticks: { value: number }[] }) => { scale.ticks = axis.categories!.map((_, i) => ({ value: i })); } } : {}),
     ticks: axis.categories
       ? { color: TEXT_COLOUR, font: font(base - 0.5), padding: 3, stepSize: 1, autoSkip: false, includeBounds: false, maxRotation: 0, callback: categoryTick(axis.categories) }
       : { color: TEXT_COLOUR, font: font(base - 0.5), maxTicksLimit: horizontal ? (axis.stack !== undefined ? 6 : 9) : 8, padding: 3, ...(panel ? { includeBounds: false } : {}) },

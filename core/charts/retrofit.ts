@@ -9,6 +9,7 @@
 import type { RetrofitResult, VariantResult, VariantSection } from '../assessment/results.ts';
 import type { SectionDefinition } from '../section/definition.ts';
 import type { BendingDirection } from '../section/model.ts';
+import type { UltimateCause } from '../section/results.ts';
 import { shapeOutline } from '../section/shapes.ts';
 import { sectionDrawingSvg, type SectionDrawing, type SectionDrawingOptions } from './section-drawing.ts';
 import type { ChartColour, ChartPoint, ChartSpec, LineStyle, MarkerSpec, SeriesSpec, UnitsInput } from './types.ts';
@@ -26,6 +27,16 @@ export interface ShownVariant {
 }
 
 const SCHEME_COLOURS: readonly ChartColour[] = ['orange', 'green', 'purple', 'teal', 'red', 'gold'];
+
+/** What ends a curve, in a few words (the chart's marker labels). */
+export const ULTIMATE_WORDS: Readonly<Record<UltimateCause, string>> = {
+  'concrete-crushing': 'concrete crushing',
+  'core-crushing': 'core crushing',
+  'steel-rupture': 'bar rupture',
+  'frp-rupture': 'FRP rupture',
+  'frp-debonding': 'FRP debonding',
+  'moment-drop': 'moment drop',
+};
 
 /**
  * The variants of an existing beam in the order every view lists them: the design beam (only when
@@ -76,7 +87,7 @@ export function variantMomentCurvatureChart(retrofit: RetrofitResult, baseSectio
     const p1 = fy ? point(fy.curvature, fy.moment) : null;
     const p2 = u ? point(u.curvature, u.moment) : null;
     if (p1) markers.push({ ...p1, label: '', shape: 'triangle', colour: v.colour });
-    if (p2) markers.push({ ...p2, label: v.role === 'scheme' ? `ultimate: ${u!.description}` : '', shape: 'cross', colour: v.colour });
+    if (p2) markers.push({ ...p2, label: v.role === 'scheme' && curve.ultimateCause ? ULTIMATE_WORDS[curve.ultimateCause] : '', shape: 'cross', colour: v.colour });
   }
   const spec: ChartSpec = {
     kind: 'moment-curvature',

@@ -46,6 +46,11 @@ export interface SectionDrawing {
   readonly scale: number | null;
   /** E.g. `scale 1:10 at the printed size`. */
   readonly scaleText: string;
+  /**
+   * The labels of the drawing (layers, what was added or lost), top to bottom, with the colour each
+   * is drawn in: the text alternative, and the legend where the labels are not drawn (`layerLabels: false`).
+   */
+  readonly labels: readonly { readonly text: string; readonly colour: string }[];
 }
 
 /** Drawing scales tried, 1:n (common drafting scales; // common practice, no source). */
@@ -84,7 +89,7 @@ export function sectionDrawingSvg(definition: SectionDefinition, unitsInput: Uni
   const figure = sectionFigure(definition);
   if (!figure) {
     const svg = `<svg xmlns="http://www.w3.org/2000/svg" width="${maxWidth}" height="40" viewBox="0 0 ${maxWidth} 40"><text x="4" y="20" font-family="${escapeXml(family)}" font-size="${font}" fill="${PALETTE.ink}">The section outline cannot be drawn (no area).</text></svg>`;
-    return { svg, width: maxWidth, height: 40, scale: null, scaleText: 'not to scale' };
+    return { svg, width: maxWidth, height: 40, scale: null, scaleText: 'not to scale', labels: [] };
   }
 
   const { outline, voids, web } = figure;
@@ -220,5 +225,6 @@ export function sectionDrawingSvg(definition: SectionDefinition, unitsInput: Uni
   }
 
   const svg = `<svg xmlns="http://www.w3.org/2000/svg" width="${svgWidth}" height="${svgHeight}" viewBox="0 0 ${svgWidth} ${svgHeight}">${parts.join('')}</svg>`;
-  return { svg, width: svgWidth, height: svgHeight, scale, scaleText: scale !== null ? `scale 1:${scale} at the printed size` : 'fitted to the space, not to a standard scale' };
+  const labels = [...all].sort((a, b) => a.depth - b.depth).map((l) => ({ text: l.text, colour: l.colour }));
+  return { svg, width: svgWidth, height: svgHeight, scale, scaleText: scale !== null ? `scale 1:${scale} at the printed size` : 'fitted to the space, not to a standard scale', labels };
 }

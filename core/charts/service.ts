@@ -84,7 +84,7 @@ export function serviceDeflectionChart(service: ServiceDeflections | null, units
   const base: ChartSpec = {
     kind: 'service-deflection',
     title: 'Service deflections by load step',
-    subtitle: 'deflection at the control point, downward positive',
+    subtitle: 'at the control point, downward positive; ψ = sustained part of the live load',
     x: { ...axisFor('Load step', '', 1), categories: stepNames(durationMonths) },
     y: axisFor('Deflection Δ', unitText('deflection', units), 1, { includeZero: true }),
     series: [],
@@ -131,6 +131,6 @@ export function serviceDeflectionChart(service: ServiceDeflections | null, units
     y: axisFor('Deflection Δ', unitText('deflection', units), yScale, { includeZero: true }),
     series,
     markers,
-    notes: [`ψ = sustained part of the live load; the larger of the two methods governs each check.`],
+    notes: [],
   };
 }

@@ -1,8 +1,8 @@
 /**
  * What a member's results depend on, by identity. Edits replace only the objects on their path
  * (immutable.ts), so a member must be re-analysed exactly when one of these objects is no longer
- * the same: the member itself, a section one of its zones uses, a material those sections use,
- * the code basis or the analysis settings. The display unit system is not among them: results are
+ * the same: the member itself, a section one of its zones uses, a material those sections use or
+ * the member's as-found data and schemes name, the code basis or the analysis settings. The display unit system is not among them: results are
  * held in internal units.
  */
 import type { MaterialSpec } from '../../../core/materials/specs.ts';
@@ -13,6 +13,26 @@ import type { SectionDefinition } from '../../../core/section/definition.ts';
 export function sectionMaterialIds(section: SectionDefinition): string[] {
   const ids = [section.concreteId, ...section.bars.map((bar) => bar.steelId)];
   if (section.hoops) ids.push(section.hoops.steelId);
+  return [...new Set(ids)];
+}
+
+/**
+ * Ids of the materials a member names itself, beyond its sections': the as-found condition's
+ * concretes and steels, and each strengthening scheme's FRP, plate steel, layer concrete and bar
+ * steels — without repeats.
+ */
+export function memberOwnMaterialIds(member: MemberDefinition): string[] {
+  const ids: string[] = [];
+  for (const c of member.asFound?.cores ?? []) if (c.concreteId) ids.push(c.concreteId);
+  for (const s of member.asFound?.steel ?? []) ids.push(s.steelId);
+  for (const scheme of member.schemes ?? []) {
+    if (scheme.kind === 'frp') ids.push(scheme.frpId);
+    else if (scheme.kind === 'steel-plate') ids.push(scheme.steelId);
+    else {
+      ids.push(scheme.concreteId);
+      for (const b of scheme.bars) ids.push(b.steelId);
+    }
+  }
   return [...new Set(ids)];
 }
 
@@ -36,8 +56,9 @@ export function memberInputs(project: Project, memberId: string): readonly unkno
   const member = project.members.find((m) => m.id === memberId);
   if (!member) return null;
   const sections = memberSections(project, member);
+  const own = memberOwnMaterialIds(member).map((id) => project.materials.find((m) => m.id === id)).filter((m) => m !== undefined);
   // Zone section ids are part of the member; a section id that later appears must count as a change.
-  return [member, project.info.codeBasis, project.settings, ...sections, ...sectionsMaterials(project, sections)];
+  return [member, project.info.codeBasis, project.settings, ...sections, ...sectionsMaterials(project, sections), ...own];
 }
 
 /** True when two input lists hold the same objects in the same order. */
@@ -59,14 +80,15 @@ export function sectionsUsingMaterial(project: Project, materialId: string): str
 /**
  * The smallest project that analyses the given members the same way as the whole project: the
  * same info and settings, those members (in project order), the sections they use and the
- * materials of those sections. Sent to the worker instead of the whole project.
+ * materials of those sections and of the members' as-found data and schemes. Sent to the worker
+ * instead of the whole project.
  */
 export function subproject(project: Project, memberIds: readonly string[]): Project {
   const wanted = new Set(memberIds);
   const members = project.members.filter((m) => wanted.has(m.id));
   const sectionIds = new Set(members.flatMap((m) => m.zones.map((z) => z.sectionId)));
   const sections = project.sections.filter((s) => sectionIds.has(s.id));
-  const materialIds = new Set(sections.flatMap(sectionMaterialIds));
+  const materialIds = new Set([...sections.flatMap(sectionMaterialIds), ...members.flatMap(memberOwnMaterialIds)]);
   const materials = project.materials.filter((m) => materialIds.has(m.id));
   return { ...project, members, sections, materials };
 }

@@ -17,7 +17,7 @@ import type { MemberKeyResults } from '../../../core/project/key-results.ts';
 import type { Project } from '../../../core/project/types.ts';
 import type { BendingDirection } from '../../../core/section/model.ts';
 import type { SectionState } from '../../../core/section/results.ts';
-import { memberInputs, sameInputs, sectionMaterialIds, subproject } from '../project/dependencies.ts';
+import { memberInputs, memberOwnMaterialIds, sameInputs, sectionMaterialIds, subproject } from '../project/dependencies.ts';
 import { CancelledError, engines, type RunningRequest } from '../workers/engine.ts';
 import { indexMapOf } from '../workers/paths.ts';
 import type { CoveredItems, ItemDiagnostic, ItemList, WorkerReply } from '../workers/protocol.ts';
@@ -262,7 +262,7 @@ export const useAnalysisStore = defineStore('analysis', () => {
     const members = project.members.filter((m) => changed('members', m));
     const sectionIds = new Set([...project.sections.filter((s) => changed('sections', s)).map((s) => s.id), ...members.flatMap((m) => m.zones.map((z) => z.sectionId))]);
     const sections = project.sections.filter((s) => sectionIds.has(s.id));
-    const materialIds = new Set([...project.materials.filter((m) => changed('materials', m)).map((m) => m.id), ...sections.flatMap(sectionMaterialIds)]);
+    const materialIds = new Set([...project.materials.filter((m) => changed('materials', m)).map((m) => m.id), ...sections.flatMap(sectionMaterialIds), ...members.flatMap(memberOwnMaterialIds)]);
     const materials = project.materials.filter((m) => materialIds.has(m.id));
     // Forget diagnostics of items that are gone.
     const present = new Set([...project.members.map((m) => itemKey('members', m.id)), ...project.sections.map((s) => itemKey('sections', s.id)), ...project.materials.map((m) => itemKey('materials', m.id)), itemKey('project', '')]);

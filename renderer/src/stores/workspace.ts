@@ -14,6 +14,11 @@ export type OverviewColumn =
 
 export type StatusFilter = 'all' | 'ok' | 'check-fails' | 'not-converged' | 'input-error' | 'pending';
 
+/** Input tabs of the member workspace: the beam, its section, materials, and for existing beams the condition and schemes. */
+export type InputTab = 'beam' | 'section' | 'materials' | 'as-found' | 'strengthening';
+/** Result tabs of the member workspace. */
+export type ResultTab = 'moment-curvature' | 'load-deflection' | 'span' | 'service' | 'ductility' | 'shear' | 'comparison';
+
 export interface DialogButton {
   readonly id: string;
   readonly label: string;
@@ -52,9 +57,9 @@ export const useWorkspaceStore = defineStore('workspace', () => {
   /** Text of the side bar's member search. */
   const memberFilter = ref('');
   /** Input tab of the member workspace. */
-  const inputTab = ref<'beam' | 'section' | 'materials'>('beam');
+  const inputTab = ref<InputTab>('beam');
   /** Result tab of the member workspace. */
-  const resultTab = ref<'moment-curvature' | 'load-deflection' | 'span' | 'service' | 'ductility'>('moment-curvature');
+  const resultTab = ref<ResultTab>('moment-curvature');
   /** The zone whose section the section tab edits (index into the member's zones). */
   const zoneIndex = ref(0);
   const dialog = shallowRef<OpenDialog | null>(null);

@@ -4,7 +4,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { demoProject } from '../../../core/project/demo.ts';
-import { memberInputs, membersUsingSection, sameInputs, sectionsUsingMaterial, subproject } from '../../../renderer/src/project/dependencies.ts';
+import { memberInputs, memberOwnMaterialIds, membersUsingSection, sameInputs, sectionsUsingMaterial, subproject } from '../../../renderer/src/project/dependencies.ts';
 import { setMaterialField, setMemberField, setSectionField } from '../../../renderer/src/project/edits.ts';
 import { setIn } from '../../../renderer/src/project/immutable.ts';
 
@@ -31,7 +31,9 @@ describe('memberInputs', () => {
     const sections = sectionsUsingMaterial(project, 'g60');
     expect(sections).toContain('R24-support');
     const changed = project.members.filter((m) => !sameInputs(memberInputs(project, m.id), memberInputs(next, m.id))).map((m) => m.id);
-    expect(changed).toEqual(project.members.filter((m) => m.zones.some((z) => sections.includes(z.sectionId))).map((m) => m.id));
+    // …and of every member that names it itself (B-204's overlay bars are g60).
+    expect(changed).toEqual(project.members.filter((m) => m.zones.some((z) => sections.includes(z.sectionId)) || memberOwnMaterialIds(m).includes('g60')).map((m) => m.id));
+    expect(changed).toContain('B-204');
   });
 
   it('change for all members with the code basis, and for none with the display units', () => {
@@ -56,5 +58,18 @@ describe('subproject', () => {
     expect(part.sections.map((s) => s.id).sort()).toEqual(['R24-mid', 'R24-support']);
     expect(part.materials.map((m) => m.id).sort()).toEqual(['c3000-brittle', 'g60']);
     expect(part.info).toBe(project.info);
+  });
+});
+
+describe('the materials an existing beam names itself', () => {
+  it('go with the member to the worker: B-204\'s CFRP, the overlay concrete and its bars\' steel', () => {
+    const part = subproject(project, ['B-204']);
+    expect(part.materials.map((m) => m.id).sort()).toEqual(['c3000-existing', 'c4000-kent-park', 'cfrp-sheet', 'g40', 'g60']);
+  });
+
+  it('make the member analysed again when one of them changes', () => {
+    const next = setMaterialField(project, 'cfrp-sheet', ['tensileModulus'], 200_000);
+    expect(sameInputs(memberInputs(project, 'B-204'), memberInputs(next, 'B-204'))).toBe(false);
+    expect(sameInputs(memberInputs(project, 'B-201'), memberInputs(next, 'B-201'))).toBe(true);
   });
 });

@@ -92,7 +92,7 @@ export function variantMomentCurvatureChart(retrofit: RetrofitResult, baseSectio
   const spec: ChartSpec = {
     kind: 'moment-curvature',
     title: `Moment–curvature, section ${baseSectionId}, ${direction}`,
-    subtitle: 'each variant: first yield ▲, ultimate ✕',
+    subtitle: 'each variant: first yield (triangle), ultimate (cross)',
     x: axisFor('Curvature φ', unitText('curvature', units), xScale, { includeZero: true }),
     y: axisFor('Moment M', unitText('moment', units), yScale, { includeZero: true }),
     series,
@@ -139,7 +139,7 @@ export function variantLoadDeflectionChart(retrofit: RetrofitResult, unitsInput:
   const spec: ChartSpec = {
     kind: 'load-deflection',
     title: 'Load–deflection of each variant',
-    subtitle: 'ultimate of each curve ✕',
+    subtitle: 'ultimate of each curve (cross)',
     x: axisFor('Deflection Δ', unitText('deflection', units), xScale, { includeZero: true }),
     y: axisFor(liveOnly ? 'Live load P (dead load held)' : 'Total load P', unitText('force', units), yScale, { includeZero: true }),
     series,

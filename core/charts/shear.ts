@@ -96,7 +96,8 @@ export function shearDiagramChart(shear: ShearResult | null | undefined, unitsIn
 
   return {
     ...base,
-    x: axisFor('Position x', unitText('spanLength', units), xScale, { includeZero: true }),
+    // The axis ends at the span (the diagram's last station), as the member charts do.
+    x: axisFor('Position x', unitText('spanLength', units), xScale, { min: 0, max: Math.max(...d.x.map((x) => X(x))) }),
     y: axisFor('Shear |V|', unitText('force', units), yScale, { includeZero: true }),
     series,
     markers,

@@ -106,7 +106,7 @@ export function variantComparisonTable(
   const rows: ComparisonRow[] = [
     { id: 'status', label: 'Status', hint: 'every check of the variant', group: 'results', cells: cells((v) => ({ text: STATUS_TEXT[v.variant.status], status: v.variant.status, verdict: v.variant.status === 'ok' ? 'pass' : 'fail' })) },
     {
-      id: 'strength', label: `Strength: Mu / ${resistance}`, hint: 'largest along the span', group: 'results',
+      id: 'strength', label: `Strength: factored M / ${resistance}`, hint: 'largest along the span', group: 'results',
       cells: cells((v) => (v.variant.strength ? { text: ratio(v.variant.strength.utilisation), verdict: v.variant.strength.pass ? 'pass' : 'fail' } : { text: NOT_A_VALUE })),
     },
     {

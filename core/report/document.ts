@@ -16,6 +16,7 @@ import { planReport, type ReportPlan } from './figures.ts';
 import { displaySystem, reportFormatter, type ReportFormatter } from './format.ts';
 import { CAUTION_TEXT, COLOURS, DEFAULT_STYLE, FOOTER_CAUTION, STYLES, cautionBox, dataTable, factsTable, h3, heading, pageGeometry, verdict, type PageGeometry } from './layout.ts';
 import { memberChapter, statusCell } from './member.ts';
+import { strengtheningSummary } from './existing.ts';
 import { methodChapter } from './method.ts';
 import { ReferenceList } from './references.ts';
 import { withFonts } from './scripts.ts';
@@ -102,6 +103,7 @@ function summary(plan: ReportPlan, f: ReportFormatter): Content[] {
       align: ['left', 'left', 'center', 'center', 'right', 'left', 'left'],
       rows,
     }),
+    ...strengtheningSummary(plan.members),
     h3('Conventions'),
     {
       ul: [

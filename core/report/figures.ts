@@ -22,6 +22,7 @@ import { REPORT_FONT_FAMILY } from './fonts.ts';
 import type { ReportFigure, ReportInput } from './types.ts';
 import type { MemberDefinition } from '../project/types.ts';
 import type { MemberResult } from '../assessment/results.ts';
+import { planExisting, type ExistingPlan } from './existing-plan.ts';
 
 /** States whose strain and stress profiles are shown. */
 export const PROFILE_STATES: readonly { readonly name: KeyPointName; readonly words: string }[] = [
@@ -55,6 +56,8 @@ export interface MemberPlan {
   readonly result: MemberResult | null;
   readonly loadDeflection: string | null;
   readonly span: string | null;
+  /** An existing beam's figures (as found, schemes, comparison, shear), or null. */
+  readonly existing: ExistingPlan | null;
 }
 
 export interface ReportPlan {
@@ -99,7 +102,7 @@ export function planReport(input: Pick<ReportInput, 'project' | 'results' | 'mem
   const members: MemberPlan[] = project.members
     .map((definition, index) => ({ definition, index, result: results.members.find((r) => r.memberId === definition.id) ?? null }))
     .filter((m) => !wanted || wanted.has(m.definition.id))
-    .map(({ definition, index, result }) => ({ definition, index, result, anchor: `member-${index}`, loadDeflection: null, span: null }));
+    .map(({ definition, index, result }) => ({ definition, index, result, anchor: `member-${index}`, loadDeflection: null, span: null, existing: null }));
 
   const sections: SectionPlan[] = [];
   project.sections.forEach((definition, index) => {
@@ -140,7 +143,7 @@ export function planReport(input: Pick<ReportInput, 'project' | 'results' | 'mem
     const r = m.result;
     const loadDeflection = r && r.loadDeflection.points.length > 0 ? add(`member-${m.index}/load-deflection`, { kind: 'chart', spec: loadDeflectionChart(r, system), ...full }) : null;
     const span = r && r.distributions.length > 0 ? add(`member-${m.index}/span`, { kind: 'chart', spec: spanPanelsChart(r, 'all', system), ...tall }) : null;
-    return { ...m, loadDeflection, span };
+    return { ...m, loadDeflection, span, existing: planExisting(m, project, system, page, add) };
   });
   return { sections, members: planned, figures };
 }

@@ -15,6 +15,7 @@ import { citationMarker, hingeLengthReference } from './references.ts';
 import type { Content, ContentNode } from './types.ts';
 import type { MemberResult } from '../assessment/results.ts';
 import { defaultStrengthFactors } from '../assessment/combinations.ts';
+import { existingChapter } from './existing.ts';
 
 const LOAD_CASE_WORDS: Readonly<Record<MemberLoad['loadCase'], string>> = { dead: 'dead', superimposed: 'superimposed dead', live: 'live' };
 
@@ -112,7 +113,7 @@ function sectionsUsed(ctx: WriteContext, member: MemberPlan): Content[] {
       const curve = sr?.[direction];
       if (!curve) continue;
       const b = curve.bilinear;
-      facts.push([`${direction === 'sagging' ? 'Sagging' : 'Hogging'}: My, Mu`, b ? `${f.moment(b.yieldMoment)}, ${f.moment(b.ultimateMoment)}` : '—']);
+      facts.push([`${direction === 'sagging' ? 'Sagging' : 'Hogging'}: My (idealisation), Mu`, b ? `${f.moment(b.yieldMoment)}, ${f.moment(b.ultimateMoment)}` : '—']);
       facts.push([`${direction === 'sagging' ? 'Sagging' : 'Hogging'}: φy, φu, μφ`, b ? `${f.curvature(b.yieldCurvature)}, ${f.curvature(b.ultimateCurvature)}, ${f.number(curve.curvatureDuctility)}` : '—']);
     }
     out.push(keepTogether([
@@ -305,7 +306,7 @@ export function memberChapter(ctx: WriteContext, member: MemberPlan): Content[] 
     ...memberMethod(ctx, member, ctx.project),
   ];
   if (result && result.status !== 'input-error') {
-    out.push(...response(ctx, member, result), ...hingesAndDuctility(ctx, member, result), ...service(ctx, result), ...strength(ctx, result), ...shear(ctx, result));
+    out.push(...response(ctx, member, result), ...hingesAndDuctility(ctx, member, result), ...service(ctx, result), ...strength(ctx, result), ...shear(ctx, result), ...existingChapter(ctx, member));
   }
   out.push(...warnings(ctx, result));
   return out;

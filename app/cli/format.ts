@@ -7,6 +7,7 @@
 import type { Diagnostic } from '../../core/diagnostics.ts';
 import type { ProjectResults } from '../../core/analysis.ts';
 import { memberKeyResults, type MemberKeyResults } from '../../core/project/key-results.ts';
+import { MOMENT_NAMES } from '../../core/charts/moment-names.ts';
 import { formatDiagnostic } from '../../core/project/validate.ts';
 import type { Project, UnitSystem } from '../../core/project/types.ts';
 import { displaySystem, formatFixed, formatNumber, NOT_A_VALUE, say, toDisplay, unitLabel, type Quantity, type Text, type UnitId } from '../../core/units/index.ts';
@@ -204,7 +205,7 @@ export function tableReport(project: Project, results: ProjectResults, options: 
   const s = results.summary;
   const summary = `${s.memberCount} member${s.memberCount === 1 ? '' : 's'}: ${s.ok} ok, ${s.checkFails} with a failing check, ${s.notConverged} not converged, ${s.inputErrors} with input errors.`;
   const notes: [string, string][] = [
-    ['My, Mu', 'nominal yield and ultimate moments of the critical section (bilinear idealisation)'],
+    ['My, Mu', `critical section: My ${MOMENT_NAMES.idealisedYield.meaning}; Mu ${MOMENT_NAMES.ultimate.meaning}`],
     ['φu/φy', 'curvature ductility of the critical section'],
     ['μΔ', 'displacement ductility of the member'],
     ['θp', 'plastic rotation capacity of the hinge that governs the ultimate state'],

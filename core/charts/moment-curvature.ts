@@ -7,6 +7,7 @@ import type { SectionResult } from '../member/results.ts';
 import type { KeyPointName, MomentCurvatureResult } from '../section/results.ts';
 import type { BendingDirection } from '../section/model.ts';
 import { say } from '../units/phrase.ts';
+import { KEY_POINT_LABELS } from './moment-names.ts';
 import { SERIES_COLOURS } from './palette.ts';
 import type { ChartPoint, ChartSpec, MarkerShape, MarkerSpec, SeriesSpec, UnitsInput } from './types.ts';
 import { axisFor, axisScale, display, finite, resolveUnits, unitText } from './units.ts';
@@ -14,15 +15,8 @@ import { axisFor, axisScale, display, finite, resolveUnits, unitText } from './u
 /** Order in which key points are listed and drawn. */
 export const KEY_POINT_ORDER: readonly KeyPointName[] = ['cracking', 'firstYield', 'codeCrushing', 'nominal', 'peak', 'ultimate'];
 
-/** Short marker label of each key point (plain words; the report's table gives the definitions). */
-export const KEY_POINT_LABELS: Readonly<Record<KeyPointName, string>> = {
-  cracking: 'cracking',
-  firstYield: 'first yield',
-  codeCrushing: 'code crushing strain',
-  nominal: 'nominal (Mn)',
-  peak: 'peak',
-  ultimate: 'ultimate',
-};
+/** Short marker label of each key point (one set of names: moment-names.ts). */
+export { KEY_POINT_LABELS } from './moment-names.ts';
 
 const KEY_POINT_SHAPES: Readonly<Record<KeyPointName, MarkerShape>> = {
   cracking: 'circle',

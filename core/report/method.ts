@@ -58,7 +58,7 @@ export function methodChapter(ctx: WriteContext): Content[] {
     {
       title: 'Idealisation',
       text: project.settings.bilinearMethod === 'priestley-2007'
-        ? `Each curve is idealised as bilinear: an elastic branch through first yield extended to the nominal moment Mn gives the nominal yield curvature φy ${cite(METHOD_REFERENCES.priestley2007, 'bilinear idealisation of moment–curvature')}. The curvature ductility is μφ = φu/φy.`
+        ? `Each curve is idealised as bilinear: an elastic branch through first yield M′y extended to the moment at the limit strains εc = 0.004 or εs = 0.015 gives the nominal yield point of the idealisation (φy, My; My is not the code's Mn, and not first yield) ${cite(METHOD_REFERENCES.priestley2007, 'bilinear idealisation of moment–curvature')}. The curvature ductility is μφ = φu/φy.`
         : 'Each curve is idealised as bilinear: an elastic branch through first yield, with the yield point chosen so that the bilinear curve encloses the same area as the computed curve up to ultimate (equal-energy rule, common practice). The curvature ductility is μφ = φu/φy.',
     },
     {

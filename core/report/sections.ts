@@ -62,7 +62,7 @@ function curveFacts(f: ReportFormatter, curve: MomentCurvatureResult): Content {
   const rows: [string, Content][] = [];
   if (b) {
     rows.push(
-      ['Nominal yield φy, My', `${f.curvature(b.yieldCurvature)}, ${f.moment(b.yieldMoment)}`],
+      ['Nominal yield of the idealisation φy, My (not first yield)', `${f.curvature(b.yieldCurvature)}, ${f.moment(b.yieldMoment)}`],
       ['Ultimate φu, Mu', `${f.curvature(b.ultimateCurvature)}, ${f.moment(b.ultimateMoment)}`],
       ['Effective stiffness EIeff = M′y/φ′y', f.rigidity(b.effectiveStiffness)],
       ['Idealisation', b.description],

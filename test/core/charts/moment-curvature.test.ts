@@ -24,9 +24,9 @@ describe('moment–curvature chart', () => {
     const curve = section().sagging!;
     const spec = momentCurvatureChart(curve, 'si');
     const present = KEY_POINT_ORDER.filter((k) => curve.keyPoints[k]);
-    expect(spec.markers.map((m) => m.label)).toEqual(present.map((k) => ({ cracking: 'cracking', firstYield: 'first yield', codeCrushing: 'code crushing strain', nominal: 'nominal (Mn)', peak: 'peak', ultimate: 'ultimate' })[k]));
+    expect(spec.markers.map((m) => m.label)).toEqual(present.map((k) => ({ cracking: 'cracking', firstYield: 'first yield M′y', codeCrushing: 'code crushing strain', nominal: 'limit strain εc 0.004 / εs 0.015', peak: 'peak Mmax', ultimate: 'ultimate' })[k]));
     const fy = curve.keyPoints.firstYield!;
-    const marker = spec.markers.find((m) => m.label === 'first yield')!;
+    const marker = spec.markers.find((m) => m.label === 'first yield M′y')!;
     expect(marker.x).toBeCloseTo(fy.curvature * 1000, 12);
     expect(marker.y).toBeCloseTo(fy.moment / 1e6, 12);
     const b = curve.bilinear!;
@@ -80,7 +80,7 @@ describe('moment–curvature chart', () => {
     expect(spec.x.label).toBe('Curvature φ (×10⁻³ 1/in)');
     expect(spec.y.unit).toBe('kip·ft');
     const fy = section().sagging!.keyPoints.firstYield!;
-    const marker = spec.markers.find((m) => m.label === 'first yield')!;
+    const marker = spec.markers.find((m) => m.label === 'first yield M′y')!;
     // 1/mm → 1/in: × 25.4 (NIST SP 811 B.8: 1 in = 25.4 mm), then ÷ 10⁻³ for the axis factor
     expect(marker.x).toBeCloseTo(fy.curvature * 25.4 * 1000, 9);
   });

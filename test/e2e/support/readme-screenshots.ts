@@ -4,8 +4,8 @@
  *   npx tsx test/e2e/support/readme-screenshots.ts
  *
  * The demo project, 1440 × 900 pixels: the project overview, a member workspace with its charts,
- * the strain and stress profile at a key point, both bending directions side by side, and a member
- * after the switch to SI units.
+ * the strain and stress profile at a key point, both bending directions side by side, an existing
+ * beam's schemes and their comparison, and a member after the switch to SI units.
  */
 import { join } from 'node:path';
 import { ROOT, openApp, startE2e } from './environment.ts';
@@ -47,6 +47,18 @@ try {
   await page.waitForTimeout(300);
   await page.screenshot({ path: join(OUT, 'moment-curvature-both.png') });
 
+  // An existing beam: its strengthening schemes beside the comparison of the beam as found with each.
+  await page.locator('[data-testid=member-list] [data-member="B-204"]').click();
+  await page.getByTestId('inputs-tab-strengthening').click();
+  await page.getByTestId('results-tab-comparison').click();
+  await page.getByTestId('comparison-table').waitFor();
+  await page.getByTestId('member-workspace').evaluate((element) => element.parentElement!.scrollTo(0, 0));
+  await page.waitForTimeout(600);
+  await page.screenshot({ path: join(OUT, 'existing-beam.png') });
+
+  await page.locator('[data-testid=member-list] [data-member="F-205"]').click();
+  await page.getByTestId('results-tab-moment-curvature').click();
+  await page.getByTestId('inputs-tab-section').click();
   await page.getByTestId('units-si').click();
   await page.getByTestId('member-workspace').evaluate((element) => element.parentElement!.scrollTo(0, 0));
   await page.getByTestId('direction-sagging').click();

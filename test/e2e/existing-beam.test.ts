@@ -111,6 +111,9 @@ describe.each([{ width: 1440, height: 900 }, { width: 1280, height: 720 }])('the
     await snap(view, `existing-${viewport.width}-shear`);
     await view.getByTestId('results-tab-comparison').click();
     await view.getByTestId('comparison-table').waitFor();
+    // The inputs panel keeps to its width beside the comparison (the scheme drawings scale down).
+    await expect.poll(() => view.locator('[data-testid=strengthening-editor] [data-testid^=scheme-drawing-] img').count()).toBe(2);
+    expect(await view.locator('.inputs').evaluate((el) => el.scrollWidth - el.clientWidth)).toBeLessThanOrEqual(1);
     await snap(view, `existing-${viewport.width}-comparison`);
   });
 });

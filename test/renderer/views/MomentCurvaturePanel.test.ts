@@ -66,7 +66,7 @@ describe('MomentCurvaturePanel', () => {
     const firstYield = rows.find((r) => r.text().startsWith('first yield'))!;
     await firstYield.trigger('click');
     const profile = wrapper.get('[data-testid=section-profile]');
-    expect(profile.text()).toContain(`first yield, ${key.critical!.direction}`);
+    expect(profile.text()).toContain(`first yield M′y, ${key.critical!.direction}`);
     const section = result.sections.find((s) => s.sectionId === key.critical!.sectionId)!;
     const state = section[key.critical!.direction]!.keyPoints.firstYield!.state;
     expect(profile.findAll('tbody tr').length).toBe(state.elements.length + 1);

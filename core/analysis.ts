@@ -4,6 +4,9 @@
  * Pure and deterministic. Members are independent: one member's failure never stops the others.
  */
 import { assessMember, type AssessmentContext } from './assessment/member.ts';
+import { defaultStrengthFactors } from './assessment/combinations.ts';
+import { analyzeContinuousBeam } from './continuous/analyze.ts';
+import { withVerdict, type ContinuousMemberResult } from './continuous/verdict.ts';
 import type { MemberResult } from './assessment/results.ts';
 import { notAnalysed } from './assessment/variant.ts';
 import { materialLibrary } from './materials/library.ts';
@@ -26,6 +29,8 @@ export interface ProjectResults {
   readonly projectName: string;
   readonly codeBasis: Project['info']['codeBasis'];
   readonly members: readonly MemberResult[];
+  /** Continuous members (project version 3), in file order; absent when the project has none. */
+  readonly continuous?: readonly ContinuousMemberResult[];
   readonly summary: ProjectSummary;
 }
 
@@ -135,8 +140,30 @@ export function summarize(members: readonly MemberResult[]): ProjectSummary {
   };
 }
 
+/**
+ * Analyses the continuous members of a project (all when `ids` is omitted), in file order. A defect
+ * inside one member's analysis is caught and reported on that member.
+ */
+export function analyzeContinuousMembers(project: Project, ids?: readonly string[], section: (id: string) => SectionAnalysis | undefined = sectionCache(project)): ContinuousMemberResult[] {
+  const sectionIds = new Set(project.sections.map((s) => s.id));
+  const code = project.info.codeBasis;
+  return (project.continuousMembers ?? []).flatMap((m, index) => {
+    if (ids && !ids.includes(m.id)) return [];
+    const path = `continuousMembers[${index}] "${m.name}"`;
+    const context = { code, segments: Math.min(project.settings.stations, 48), section, sectionIds, path, strengthFactors: defaultStrengthFactors(code), deadOnlyFactor: code === 'ACI 318-19' ? 1.4 : undefined };
+    try {
+      return [withVerdict(analyzeContinuousBeam(m, context))];
+    } catch (error) {
+      const message = `the analysis stopped on an internal error: ${error instanceof Error ? error.message : String(error)}`;
+      return [withVerdict({ memberId: m.id, memberName: m.name, supportX: [], parts: [], elastic: null, failureArrangement: '', failurePattern: '', capacity: null, strengthLevel: null, redistribution: [], service: null, warnings: [], errors: [{ path, message }] })];
+    }
+  });
+}
+
 /** Analyses the whole project. */
 export function analyzeProject(project: Project, onProgress?: ProgressListener): ProjectResults {
-  const members = analyzeMembers(project, undefined, onProgress);
-  return { projectName: project.info.name, codeBasis: project.info.codeBasis, members, summary: summarize(members) };
+  const section = sectionCache(project);
+  const members = analyzeMembers(project, undefined, onProgress, section);
+  const continuous = (project.continuousMembers?.length ?? 0) > 0 ? { continuous: analyzeContinuousMembers(project, undefined, section) } : {};
+  return { projectName: project.info.name, codeBasis: project.info.codeBasis, members, ...continuous, summary: summarize(members) };
 }

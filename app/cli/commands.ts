@@ -3,7 +3,8 @@
  * exit code (args.ts EXIT); the text it prints comes from format.ts.
  */
 import { fileURLToPath } from 'node:url';
-import { analyzeMembers, summarize, type ProjectResults } from '../../core/analysis.ts';
+import { analyzeContinuousMembers, analyzeMembers, summarize, type ProjectResults } from '../../core/analysis.ts';
+import { continuousJson, continuousTable } from './continuous.ts';
 import { resultsSummaryCsv } from '../../core/project/csv.ts';
 import { demoProject, demoProjectSI } from '../../core/project/demo.ts';
 import { parseProject, serializeProject } from '../../core/project/file.ts';
@@ -81,10 +82,10 @@ async function loadForAnalysis(io: Io, file: string): Promise<LoadedProject> {
 
 function selectedMembers(project: Project, ids: readonly string[]): string[] | undefined {
   if (ids.length === 0) return undefined;
-  const known = new Set(project.members.map((m) => m.id));
+  const list = [...project.members, ...(project.continuousMembers ?? [])].map((m) => m.id);
+  const known = new Set(list);
   const unknown = ids.filter((id) => !known.has(id));
   if (unknown.length > 0) {
-    const list = project.members.map((m) => m.id);
     throw new CliFailure(`no member with id ${unknown.map((u) => `"${u}"`).join(', ')} in the project (members: ${list.slice(0, 20).join(', ')}${list.length > 20 ? ', …' : ''})`, EXIT.usage);
   }
   return [...new Set(ids)];
@@ -117,7 +118,9 @@ export async function runAnalysis(io: Io, project: Project, memberIds: readonly 
   } finally {
     if (showProgress) io.stderr('\r\u001b[K');
   }
-  return { projectName: project.info.name, codeBasis: project.info.codeBasis, members, summary: summarize(members) };
+  // Continuous members (few per project) are analysed here, after the single-span members.
+  const continuous = analyzeContinuousMembers(project, memberIds);
+  return { projectName: project.info.name, codeBasis: project.info.codeBasis, members, ...(continuous.length > 0 ? { continuous } : {}), summary: summarize(members) };
 }
 
 async function analyze(io: Io, command: Extract<Command, { kind: 'analyze' }>): Promise<number> {
@@ -128,15 +131,18 @@ async function analyze(io: Io, command: Extract<Command, { kind: 'analyze' }>): 
   const results = await runAnalysis(io, project, ids, command.jobs);
   const system = project.info.unitSystem;
   if (command.format === 'json') {
-    io.stdout(`${JSON.stringify(analysisJson(project, results, system, command.file), null, 2)}\n`);
+    const json = analysisJson(project, results, system, command.file) as Record<string, unknown>;
+    io.stdout(`${JSON.stringify(results.continuous ? { ...json, continuousMembers: continuousJson(results.continuous, system) } : json, null, 2)}\n`);
   } else if (command.format === 'csv') {
     // A byte-order mark tells spreadsheet programs that the text is UTF-8 (else "kip·ft" shows garbled).
-    io.stdout(`${command.bom ? '\uFEFF' : ''}${resultsSummaryCsv(results.members, system, project)}`);
+    io.stdout(`${command.bom ? '\uFEFF' : ''}${resultsSummaryCsv(results.members, system, project, results.continuous)}`);
     io.stderr(`Caution: ${RESULTS_CAUTION}\n`);
   } else {
     io.stdout(tableReport(project, results, { system, width: io.stdoutIsTTY ? io.columns : 110, style: stdoutStyle(io) }));
+    if (results.continuous) io.stdout(continuousTable(results.continuous, system, io.stdoutIsTTY ? io.columns : 110, stdoutStyle(io)));
   }
-  return results.members.every((m) => m.status === 'ok') ? EXIT.ok : EXIT.problems;
+  // A continuous member is never a plain OK (strength at every station is still to be checked): it is reviewed.
+  return results.members.every((m) => m.status === 'ok') && (results.continuous ?? []).every((c) => c.verdict.status === 'review') ? EXIT.ok : EXIT.problems;
 }
 
 async function validate(io: Io, command: Extract<Command, { kind: 'validate' }>): Promise<number> {

@@ -17,6 +17,7 @@ import { brittleLaw, directionLaw, hingeBars, type ZoneLaws } from './laws.ts';
 import { layoutOf, partName, type LoadsByPart } from './layout.ts';
 import { caseLoads, combineLoads, onParts, selfWeightLoads, type Arrangement } from './loads.ts';
 import { permittedRedistribution, redistributionCheck, type RedistributionCheck } from './redistribution.ts';
+import { continuousService, type ContinuousService } from './service.ts';
 import { validateContinuousBeam } from './validate.ts';
 
 export interface ContinuousContext {
@@ -43,18 +44,26 @@ export interface ContinuousBeamResult {
   readonly failureArrangement: string;
   readonly failurePattern: string;
   readonly capacity: CapacityResult | null;
+  /**
+   * The largest load of the analysis to failure against the strength combination of the same
+   * arrangement (total loads, N): a check of the mechanism against the factored loads, not the
+   * code's check of each section.
+   */
+  readonly strengthLevel: { readonly factoredTotal: number; readonly collapseTotal: number; readonly ratio: number } | null;
   readonly redistribution: readonly RedistributionCheck[];
+  /** Service deflections per span and cantilever (integration and code method) against the limits. */
+  readonly service: ContinuousService | null;
   readonly warnings: readonly Text[];
   readonly errors: readonly Problem[];
 }
 
-/** Zone laws of a section from its short-term curves (a direction without tension steel is brittle). */
-export function zoneLaws(sectionId: string, analysis: SectionAnalysis): ZoneLaws | null {
+/** Zone laws of a section from its short-term (or sustained-load) curves (a direction without tension steel is brittle). */
+export function zoneLaws(sectionId: string, analysis: SectionAnalysis, longTerm = false): ZoneLaws | null {
   const { model, elastic } = analysis;
   if (!model || !elastic) return null;
   const law = (dir: 'sagging' | 'hogging') => {
     const bars = hingeBars(model, dir);
-    const curve = analysis.curves[dir];
+    const curve = (longTerm ? analysis.longTermCurves : analysis.curves)[dir];
     return (curve && directionLaw(curve, bars)) ?? brittleLaw(elastic.concreteModulus * elastic.uncrackedInertia, elastic.crackingMoment[dir].transformed, bars);
   };
   const cover = model.concreteParts.find((p) => p.role === 'cover') ?? model.concreteParts[0];
@@ -62,7 +71,7 @@ export function zoneLaws(sectionId: string, analysis: SectionAnalysis): ZoneLaws
 }
 
 function empty(def: ContinuousBeamDefinition, errors: readonly Problem[], warnings: readonly Text[] = []): ContinuousBeamResult {
-  return { memberId: def.id, memberName: def.name, supportX: [], parts: [], elastic: null, failureArrangement: '', failurePattern: '', capacity: null, redistribution: [], warnings, errors };
+  return { memberId: def.id, memberName: def.name, supportX: [], parts: [], elastic: null, failureArrangement: '', failurePattern: '', capacity: null, strengthLevel: null, redistribution: [], service: null, warnings, errors };
 }
 
 /** The loads of the analysis to failure: held and factored sets. */
@@ -166,6 +175,36 @@ export function analyzeContinuousBeam(def: ContinuousBeamDefinition, context: Co
       redistribution.push(redistributionCheck(j + 1, xs, capacity!.peakLoadFactor, best.elastic, best.nonlinear, permittedRedistribution(context.code, law.hogging, law.concreteStrength ?? 30)));
     });
   }
+  const totalOf = (set: LoadsByPart) => set.reduce((s, p) => s + p.reduce((t, l) => t + (l.kind === 'point' ? l.p : l.w * (l.to - l.from)), 0), 0);
+  const factors = def.strengthFactors ?? context.strengthFactors;
+  const liveOn = loads.arrangement ? onParts(live, loads.arrangement.loadedParts) : live;
+  const deadOnly = combineLoads([{ loads: caseLoads(def, layout, 'dead'), factor: 1 }, { loads: selfWeightLoads(def, layout, selfWeight), factor: 1 }], n);
+  const factoredTotal = factors.dead * totalOf(deadOnly) + factors.superimposed * totalOf(caseLoads(def, layout, 'superimposed')) + factors.live * totalOf(liveOn);
+  const collapseTotal = capacity && capacity.peakLoadFactor > 0 ? totalOf(loads.held) + capacity.peakLoadFactor * capacity.patternTotal : 0;
+  const strengthLevel = capacity && factoredTotal > 0 ? { factoredTotal, collapseTotal, ratio: collapseTotal / factoredTotal } : null;
+  let service: ContinuousService | null = null;
+  try {
+    service = continuousService({
+      definition: def,
+      code: context.code,
+      elastic,
+      dead,
+      live,
+      segmentsPerSpan: Math.min(context.segments ?? 40, 40),
+      zones: sections.map((s, i) => ({
+        model: s.model!,
+        shortTerm: laws[i]!,
+        longTerm: zoneLaws(def.zones[i]!.sectionId, s, true) ?? laws[i]!,
+        codeModulus: s.codeModulus,
+        codeTensileStrength: s.codeTensileStrength,
+        creepCoefficient: s.creepCoefficient,
+        shrinkageStrain: s.shrinkageStrain,
+      })),
+    });
+    warnings.push(...service.warnings);
+  } catch (error) {
+    warnings.push(`Service deflections could not be computed: ${error instanceof Error ? error.message : String(error)}`);
+  }
   return {
     memberId: def.id,
     memberName: def.name,
@@ -175,7 +214,9 @@ export function analyzeContinuousBeam(def: ContinuousBeamDefinition, context: Co
     failureArrangement: loads.words,
     failurePattern: def.capacity.pattern === 'proportional' ? 'all service loads (dead + live) increased together' : 'live load increased with the dead load held',
     capacity,
+    strengthLevel,
     redistribution,
+    service,
     warnings: uniqueTexts(warnings),
     errors: [],
   };

@@ -12,7 +12,6 @@
  */
 import { hingeLength } from '../member/hinge-length.ts';
 import type { HingeLengthMethod } from '../member/definition.ts';
-import { solveLinear } from '../numeric/linear.ts';
 import type { Text } from '../units/phrase.ts';
 import { supportStiffness, type ContinuousBeamDefinition } from './definition.ts';
 import { layoutOf, partName, type Layout, type LoadsByPart } from './layout.ts';
@@ -20,6 +19,7 @@ import { distributedLaw, hingeLaw, type DirectionLaw, type HingeLaw, type ZoneLa
 import { buildMesh, loadPoints, releasedField, releasedMomentAt, zoneAt, type BeamMesh } from './model.ts';
 import { deflections, evaluate, supportRows, type ActiveHinge, type DistributedLaw, type Evaluation, type StructureState, type SupportRow } from './structure.ts';
 import { linearLaw } from './elastic.ts';
+import { newton, type Scales } from './newton.ts';
 
 export type HingeSiteKind = 'support' | 'span' | 'section-change' | 'cantilever-root';
 
@@ -265,57 +265,30 @@ function solveFixed(mesh: BeamMesh, rows: readonly SupportRow[], law: Distribute
   return newton(mesh, rows, law, fields, total, hinges, state, undefined, scales).converged;
 }
 
-interface Scales {
-  readonly moment: number;
-  readonly rotation: number;
-  readonly deflection: number;
-  readonly lambda: number;
-  readonly curvature: number[];
-}
-
-function newton(
-  mesh: BeamMesh,
-  rows: readonly SupportRow[],
-  law: DistributedLaw,
-  fields: { held: Float64Array; pattern: Float64Array },
-  total: number,
-  hinges: readonly ActiveHinge[],
-  state: StructureState,
-  control: { target: number } | undefined,
-  scales: Scales,
-): { converged: boolean; iterations: number; worst: number } {
-  const nx = state.redundants.length;
-  const nh = hinges.length;
-  const rowScale = (r: number) => (r < nx ? (rows[r]!.kind === 'rotation' ? 1 / scales.rotation : 1 / scales.moment) : r < nx + nh ? 1 / scales.moment : 1 / scales.deflection);
-  const colScale = (c: number) => (c < nx ? scales.moment : c < nx + nh ? scales.curvature[c - nx]! : scales.lambda);
-  const norm = (res: Float64Array) => res.reduce((m, v, r) => Math.max(m, Math.abs(v * rowScale(r))), 0);
-  let worst = Infinity;
-  for (let iteration = 0; iteration < 60; iteration++) {
-    const { linearisation } = evaluate(mesh, rows, law, fields, total, hinges, state, control, true);
-    const { residual, jacobian } = linearisation!;
-    const size = residual.length;
-    worst = norm(residual);
-    if (worst < 1e-9) return { converged: true, iterations: iteration, worst };
-    const a = jacobian.map((row, r) => Array.from(row, (v, c) => v * rowScale(r) * colScale(c)));
-    const b = Array.from(residual, (v, r) => -v * rowScale(r));
-    const du = solveLinear(a, b);
-    if (!du) return { converged: worst < 1e-7, iterations: iteration, worst };
-    // Damped step: halve until the residual falls.
-    const base = { x: Float64Array.from(state.redundants), k: Float64Array.from(state.kappa), l: state.lambda };
-    let factor = 1;
-    for (let tries = 0; tries < 12; tries++) {
-      for (let c = 0; c < size; c++) {
-        const d = du[c]! * colScale(c) * factor;
-        if (c < nx) state.redundants[c] = base.x[c]! + d;
-        else if (c < nx + nh) state.kappa[c - nx] = Math.max(base.k[c - nx]! + d, 0);
-        else state.lambda = base.l + d;
-      }
-      const trial = evaluate(mesh, rows, law, fields, total, hinges, state, control, true).linearisation!.residual;
-      if (norm(trial) < worst || tries === 11) break;
-      factor /= 2;
+/**
+ * The spans (and cantilevers) that have become beam mechanisms: a hinge at its strength (≥ 95 % of
+ * the section's peak moment, or the given fraction) in the span, and at each end either a hogging hinge at its strength on
+ * that half of the span or no restraint (a pinned end support without a cantilever). A cantilever
+ * is a mechanism with a hinge at its strength at its root.
+ */
+function mechanismParts(def: ContinuousBeamDefinition, layout: Layout, mesh: BeamMesh, active: readonly Site[], state: StructureState, fraction = 0.95): number[] {
+  const strong = active.filter((a) => Math.abs(siteMoment(mesh, a, state)) >= fraction * (a.sign > 0 ? a.laws.sagging : a.laws.hogging).peakMoment);
+  const out: number[] = [];
+  layout.parts.forEach((part, pi) => {
+    const here = strong.filter((a) => a.part === pi);
+    if (part.kind !== 'span') {
+      if (here.some((a) => a.kind === 'cantilever-root' || (a.sign < 0 && (part.kind === 'left-cantilever' ? a.s > 0.9 * part.length : a.s < 0.1 * part.length)))) out.push(pi);
+      return;
     }
-  }
-  return { converged: worst < 1e-7, iterations: 60, worst };
+    const sagging = here.some((a) => a.sign > 0);
+    const supportFree = (j: number) => supportStiffness(def.supports[j]!) === 0 && (j === 0 ? layout.parts[0]!.kind !== 'left-cantilever' : j === layout.spanPart.length ? layout.parts[layout.parts.length - 1]!.kind !== 'right-cantilever' : false);
+    // A hinge at a pinned interior support sits on the left span's end and serves both spans.
+    const sharedLeft = strong.some((a) => a.sign < 0 && a.kind === 'support' && a.support === part.span && a.sides === 'both-parts');
+    const left = supportFree(part.span) || sharedLeft || here.some((a) => a.sign < 0 && a.s < part.length / 2);
+    const right = supportFree(part.span + 1) || here.some((a) => a.sign < 0 && a.s > part.length / 2);
+    if (sagging && left && right) out.push(pi);
+  });
+  return out;
 }
 
 /** Nominal yield deflection by the secant through 75 % of the largest load (Park 1988, from memory). */
@@ -408,7 +381,7 @@ export function capacityAnalysis(input: CapacityInput): CapacityResult {
   const active: Site[] = [];
   let hinges: ActiveHinge[] = [];
   let kappa: number[] = [];
-  const current = (): StructureState => ({ redundants: state.redundants, kappa: Float64Array.from(kappa), lambda: state.lambda });
+  const current = (): StructureState => ({ redundants: Float64Array.from(state.redundants), kappa: Float64Array.from(kappa), lambda: state.lambda });
   if (sites.length > 0 && fields.held.some((v) => v !== 0)) {
     const s0 = current();
     if (!solveFixed(mesh, rows, law, fields, total, [], s0, scales([]))) warnings.push('The held (dead) loads alone found no equilibrium; the analysis starts from zero.');
@@ -456,9 +429,23 @@ export function capacityAnalysis(input: CapacityInput): CapacityResult {
     const trial = current();
     const result = newton(mesh, rows, law, fields, total, hinges, trial, { target }, scales(active));
     if (!result.converged) {
+      state.redundants.set(previous.x);
+      kappa = [...previous.k];
+      state.lambda = previous.l;
       if (step > yieldWork * 1e-4) {
         step /= 2;
         continue;
+      }
+      // Past the peak load of a mechanism the load cannot rise and two mechanisms of equal strength
+      // (a symmetric beam) leave the tangent singular: the collapse load has been found.
+      // Hinges at 90 % of their strength or more: the load could rise a little further as they
+      // harden to their peak, so taking the largest load reached is on the safe side.
+      const collapsed = mechanismParts(def, layout, mesh, active, { redundants: previous.x, kappa: Float64Array.from(previous.k), lambda: previous.l }, 0.9);
+      if (collapsed.length > 0 && peakLambda > 0) {
+        failureCause = `collapse mechanism of ${collapsed.map((p) => partName(layout.parts[p]!)).join(' and ')} (hinges at 90 % of their strength or more; no equilibrium beyond load factor ${peakLambda.toFixed(3)}, taken as the collapse load)`;
+        ultimate = { loadFactor: previous.l, deflection: last.point.deflection };
+        events.push({ kind: 'ultimate', loadFactor: previous.l, deflection: last.point.deflection, position: controlX, description: failureCause });
+        break;
       }
       converged = false;
       const where = active.length > 0 ? ` after ${active.length} hinge${active.length > 1 ? 's' : ''} (the last at ${Math.round(mesh.layout.parts[active[active.length - 1]!.part]!.from + active[active.length - 1]!.s)} mm)` : '';
@@ -566,10 +553,12 @@ export function capacityAnalysis(input: CapacityInput): CapacityResult {
     out.push(rec.point);
     const slope = (rec.point.loadFactor - last.point.loadFactor) / Math.max(rec.point.meanDeflection - last.point.meanDeflection, 1e-12);
     if (iteration === 0 || initialSlope === 0) initialSlope = slope;
-    if (!mechanismSeen && active.length > 0 && slope < 0.01 * initialSlope) {
+    const collapsed = mechanismSeen ? [] : mechanismParts(def, layout, mesh, active, s);
+    if (!mechanismSeen && (collapsed.length > 0 || (active.length > 0 && slope < 0.01 * initialSlope))) {
       mechanismSeen = true;
-      const plastic = active.filter((a) => Math.abs(siteMoment(mesh, a, s)) >= 0.97 * (a.sign > 0 ? a.laws.sagging : a.laws.hogging).peakMoment);
-      events.push({ kind: 'mechanism', loadFactor: rec.point.loadFactor, deflection: rec.point.deflection, position: controlX, description: `the beam becomes a mechanism (hinges ${plastic.map((p) => p.order).join(', ') || active.map((p) => p.order).join(', ')} at their strength)` });
+      const plastic = active.filter((a) => Math.abs(siteMoment(mesh, a, s)) >= 0.95 * (a.sign > 0 ? a.laws.sagging : a.laws.hogging).peakMoment);
+      const which = collapsed.length > 0 ? ` of ${collapsed.map((p) => partName(layout.parts[p]!)).join(' and ')}` : '';
+      events.push({ kind: 'mechanism', loadFactor: rec.point.loadFactor, deflection: rec.point.deflection, position: controlX, description: `the beam becomes a mechanism${which} (hinges ${(plastic.length > 0 ? plastic : active).map((p) => p.order).join(', ')} at their strength)` });
     }
     if (state.lambda > peakLambda) {
       peakLambda = state.lambda;

@@ -245,7 +245,7 @@ export function serviceDeflections(input: ServiceInput): ServiceOutcome {
   };
 }
 
-function checkQuantity(
+export function checkQuantity(
   c: DeflectionLimitCase,
   ratio: number,
   v: { liveI: number; liveC: number; addI: number; addC: number; totalLongI: number; totalLongC: number; deadI: number; deadC: number; transientLiveI: number; transientLiveC: number },

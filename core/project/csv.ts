@@ -16,6 +16,8 @@
  * along the span), with the unit of every column in its header, in the chosen display system.
  * Empty fields stand for values that do not exist (never NaN).
  */
+import type { ContinuousMemberResult } from '../continuous/verdict.ts';
+import { continuousSummaryRows } from './continuous-csv.ts';
 import Papa from 'papaparse';
 import type { Diagnostic } from '../diagnostics.ts';
 import type { CodeBasis } from '../materials/specs.ts';
@@ -324,7 +326,7 @@ const shown = (quantity: Quantity, value: number | null | undefined, system: Uni
  * id, name, supports, span, status, My, Mu, φu/φy, μΔ, θp, ultimate load factor, governing
  * deflection and its limit, limit case, deflection and strength utilisations, warnings, governing mode.
  */
-export function resultsSummaryCsv(members: readonly MemberResult[], system: UnitSystem, project?: Project): string {
+export function resultsSummaryCsv(members: readonly MemberResult[], system: UnitSystem, project?: Project, continuous: readonly ContinuousMemberResult[] = []): string {
   const rows: (string | number | null)[][] = [[
     'member id', 'name', 'supports', head('span', 'spanLength', system), 'status',
     head('My', 'moment', system), head('Mu', 'moment', system), 'φu/φy [-]', 'μΔ [-]', head('θp', 'rotation', system),
@@ -341,6 +343,7 @@ export function resultsSummaryCsv(members: readonly MemberResult[], system: Unit
       k.deflection?.utilisation ?? null, k.strengthUtilisation, k.warnings, say(k.governingMode, system),
     ]);
   }
+  rows.push(...continuousSummaryRows(continuous, system));
   return csvText(rows);
 }
 

@@ -10,7 +10,9 @@
  *    methods and every ACI deflection limit case plus a custom one — with passing and failing
  *    deflection checks, so that results and reports show both outcomes — and one beam with an
  *    as-found condition (cores, steel of the period, corroded bars) and a CFRP strengthening scheme.
- *  - `demoProjectSI()` — a small EN 1992-1-1 variant in SI units (four beams of a mezzanine).
+ *  - `demoProjectSI()` — a small EN 1992-1-1 variant in SI units (four beams of a mezzanine) and two
+ *    continuous beams: a three-span floor beam on columns that passes, and a two-span beam with a
+ *    cantilever whose long end span fails its deflection limit.
  *
  * Values are chosen in the display units an engineer would use (ft, in, psi, ksi, kip/ft, kip; m, mm,
  * MPa, kN/m, kN) and stored in internal SI units (mm, N, MPa, N/mm) through core/units, rounded to
@@ -23,7 +25,7 @@ import type { DeflectionLimitCase, HingeLengthMethod, MemberLoad, MemberZone } f
 import type { BarLayer, HoopSet, SectionDefinition } from '../section/definition.ts';
 import { fromDisplay } from '../units/index.ts';
 import { astmBarDiameter } from '../section/bar-designations.ts';
-import { DEFAULT_SETTINGS, PROJECT_FORMAT, PROJECT_VERSION, type Project, type MemberDefinition } from './types.ts';
+import { DEFAULT_SETTINGS, PROJECT_FORMAT, PROJECT_VERSION, type ContinuousMemberDefinition, type Project, type MemberDefinition } from './types.ts';
 
 /** Nine significant figures: exact conversions without binary noise in the file (6705.6, not 6705.600000000001). */
 const tidy = (x: number): number => Number(x.toPrecision(9));
@@ -400,6 +402,54 @@ export function demoProjectSI(): Project {
         notes: 'Cantilevered walkway bracket; custom limit span/180 for the balustrade glazing.',
       }),
     ],
+    continuousMembers: siContinuousMembers(),
     settings: { ...DEFAULT_SETTINGS },
   };
+}
+
+/**
+ * The SI demo's continuous beams. CB-1: three spans on the mezzanine columns (300 × 300 mm, C30/37,
+ * EI = Ecm·b⁴/12 with Ecm 32.8 GPa, 3.6 m storeys) with support zones carrying top bars; CB-2: a
+ * long end span and a short one over a wall, with a loading-bay cantilever, whose end span is too
+ * slender for its storage load (it fails span/250).
+ */
+function siContinuousMembers(): ContinuousMemberDefinition[] {
+  const column = { stiffness: 3.3e4 * (300 ** 4 / 12), height: m(3.6), farEnd: 'fixed' as const };
+  const onColumn = { kind: 'column' as const, below: column };
+  const service = (limitCases: DeflectionLimitCase[], sustainedLiveFraction: number) => ({ sustainedLiveFraction, durationMonths: 60, limitCases });
+  return [
+    {
+      id: 'CB-1', name: 'CB-1', spans: [m(6), m(7), m(6)],
+      supports: [{ kind: 'pinned' }, onColumn, onColumn, { kind: 'pinned' }],
+      zones: [
+        { from: 0, to: m(4.8), sectionId: 'T500' },
+        { from: m(4.8), to: m(7.4), sectionId: 'T500-end' },
+        { from: m(7.4), to: m(11.6), sectionId: 'T500' },
+        { from: m(11.6), to: m(14.2), sectionId: 'T500-end' },
+        { from: m(14.2), to: m(19), sectionId: 'T500' },
+      ],
+      loads: [1, 2, 3].flatMap((span) => [
+        { kind: 'uniform' as const, loadCase: 'superimposed' as const, span, magnitude: 4.5, label: 'screed, services, ceiling' },
+        { kind: 'uniform' as const, loadCase: 'live' as const, span, magnitude: 7.2, label: 'offices 3 kN/m² over 2.4 m' },
+      ]),
+      service: service(['en-appearance'], 0.3),
+      capacity: { pattern: 'proportional', arrangement: { kind: 'all-spans' }, hingeLengthMethod: 'priestley-2007' },
+      notes: 'Office floor beam over two mezzanine columns; top bars over the columns.',
+    },
+    {
+      id: 'CB-2', name: 'CB-2', spans: [m(8.4), m(4.2)], rightCantilever: m(1.5),
+      supports: [{ kind: 'pinned' }, { kind: 'pinned' }, { kind: 'pinned' }],
+      zones: [
+        { from: 0, to: m(7.2), sectionId: 'T500' },
+        { from: m(7.2), to: m(14.1), sectionId: 'T500-end' },
+      ],
+      loads: [
+        ...[1, 2, 'right-cantilever' as const].map((span) => ({ kind: 'uniform' as const, loadCase: 'superimposed' as const, span, magnitude: 4, label: 'screed, services' })),
+        ...[1, 2, 'right-cantilever' as const].map((span) => ({ kind: 'uniform' as const, loadCase: 'live' as const, span, magnitude: 10, label: 'storage 5 kN/m² over 2 m' })),
+      ],
+      service: service(['en-appearance', 'en-after-construction'], 0.8),
+      capacity: { pattern: 'proportional', arrangement: { kind: 'governing-span', span: 1 }, hingeLengthMethod: 'mattock-1967' },
+      notes: 'Storage-area beam: a long span to the loading bay, a short one over the wall, and the bay canopy. The long span is too slender for the storage load.',
+    },
+  ];
 }

@@ -178,9 +178,18 @@ export function migrateV1ToV2(data: Data): Data {
   return { ...out, ...rest(data, ['format', 'version', 'project', 'materials', 'sections', 'beams', 'settings']) };
 }
 
+/**
+ * Version 2 → version 3: version 3 adds `continuousMembers` (beams of several spans). A version-2
+ * file has none; its members are read exactly as before, so their results do not change.
+ */
+function migrateV2ToV3(data: Data): Data {
+  return { ...data, version: 3 };
+}
+
 /** Steps from version n to n + 1, indexed by n. */
 const STEPS: Readonly<Record<number, (data: Data) => Data>> = {
   1: migrateV1ToV2,
+  2: migrateV2ToV3,
 };
 
 export interface MigrationResult {

@@ -1,5 +1,5 @@
 /**
- * The structure of a version-2 project file as zod schemas, mirroring core/project/types.ts and the
+ * The structure of a version-3 project file as zod schemas, mirroring core/project/types.ts and the
  * types it uses (MaterialSpec, SectionDefinition with every SectionShape, MemberDefinition) field for
  * field. The schema checks types and option names only; ranges and meaning (a span above zero,
  * zones that tile the span, bars inside the concrete…) are checked by core/project/validate.ts with
@@ -24,7 +24,8 @@ import {
 import { BAR_SPREADS, type BarLayer, type HoopSet, type SectionDefinition } from '../section/definition.ts';
 import { BILINEAR_METHODS } from '../section/results.ts';
 import { FLANGE_SIDES, type Point, type SectionShape } from '../section/shapes.ts';
-import { PROJECT_FORMAT, PROJECT_VERSION, UNIT_SYSTEMS, type AnalysisSettings, type MemberDefinition, type Project, type ProjectInfo } from './types.ts';
+import { PROJECT_FORMAT, PROJECT_VERSION, UNIT_SYSTEMS, type AnalysisSettings, type ContinuousMemberDefinition, type MemberDefinition, type Project, type ProjectInfo } from './types.ts';
+import { continuousMemberSchemaOf } from './continuous-schema.ts';
 
 const number = z.number();
 const text = z.string();
@@ -237,6 +238,9 @@ export const memberDefinitionSchema = z.looseObject({
   preferredSchemeId: text.optional(),
 });
 
+/** ContinuousMemberDefinition (version 3): spans and positions mm, column EI N·mm² (core/project/continuous-schema.ts). */
+export const continuousMemberSchema = continuousMemberSchemaOf({ zone: memberZoneSchema, factors: loadFactorsSchema, service: serviceSettingsSchema });
+
 // --- project ------------------------------------------------------------------------------------
 
 export const projectInfoSchema = z.looseObject({
@@ -258,7 +262,7 @@ export const analysisSettingsSchema = z.looseObject({
   concreteUltimateStrain: z.enum(ULTIMATE_STRAIN_CHOICES).optional(),
 });
 
-/** A whole version-2 project file. */
+/** A whole version-3 project file. */
 export const projectSchema = z.looseObject({
   format: z.literal(PROJECT_FORMAT),
   version: z.literal(PROJECT_VERSION),
@@ -266,6 +270,7 @@ export const projectSchema = z.looseObject({
   materials: list(materialSpecSchema),
   sections: list(sectionDefinitionSchema),
   members: list(memberDefinitionSchema),
+  continuousMembers: list(continuousMemberSchema).optional(),
   settings: analysisSettingsSchema,
 });
 
@@ -322,10 +327,11 @@ const _everyFieldHasASchema: [
   SchemaHasFieldsOf<Kind<StrengtheningScheme, 'concrete-layer'>, typeof concreteLayerSchemeSchema>,
   SchemaHasFieldsOf<LayerBars, typeof layerBarsSchema>,
   SchemaHasFieldsOf<MemberDefinition, typeof memberDefinitionSchema>,
+  SchemaHasFieldsOf<ContinuousMemberDefinition, typeof continuousMemberSchema>,
   SchemaHasFieldsOf<ProjectInfo, typeof projectInfoSchema>,
   SchemaHasFieldsOf<AnalysisSettings, typeof analysisSettingsSchema>,
   SchemaHasFieldsOf<Project, typeof projectSchema>,
-] = [true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true];
+] = [true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true, true];
 void _everyFieldHasASchema;
 
 // --- walking data along the schema ---------------------------------------------------------------

@@ -7,10 +7,11 @@ import { DEFAULT_ULTIMATE_STRAIN_CHOICE, type CodeBasis, type MaterialSpec, type
 import type { SectionDefinition } from '../section/definition.ts';
 import type { BilinearMethod } from '../section/results.ts';
 import type { BeamDefinition } from '../member/definition.ts';
+import type { ContinuousBeamDefinition } from '../continuous/definition.ts';
 import type { AsFoundCondition, StrengtheningScheme } from '../retrofit/types.ts';
 
 export const PROJECT_FORMAT = 'hingeline-project';
-export const PROJECT_VERSION = 2;
+export const PROJECT_VERSION = 3;
 
 /** Display unit systems of a project file, in menu order (the file's spelling; core/units writes 'SI' and 'US'). */
 export const UNIT_SYSTEMS = ['si', 'us'] as const;
@@ -25,6 +26,9 @@ export interface MemberDefinition extends BeamDefinition {
   /** Id of the scheme the engineer prefers (one of `schemes`); the report's summary lists it. */
   readonly preferredSchemeId?: string;
 }
+
+/** A continuous member: a beam of several spans with its supports (core/continuous/definition.ts). */
+export type ContinuousMemberDefinition = ContinuousBeamDefinition;
 
 export interface ProjectInfo {
   readonly name: string;
@@ -61,6 +65,8 @@ export interface Project {
   readonly materials: readonly MaterialSpec[];
   readonly sections: readonly SectionDefinition[];
   readonly members: readonly MemberDefinition[];
+  /** Continuous beams (version 3): spans, cantilevers, supports; absent or empty in older files. */
+  readonly continuousMembers?: readonly ContinuousMemberDefinition[];
   readonly settings: AnalysisSettings;
 }
 

@@ -23,6 +23,7 @@ import { checkNumber, diagnostic, inUnits, InputError, reworded, type Diagnostic
 import { validateConcreteSpec, validateFrpSpec, validateSteelSpec } from '../materials/factory.ts';
 import type { CodeBasis, ConcreteSpec, FrpSpec, MaterialSpec, SteelSpec } from '../materials/specs.ts';
 import { validateMember } from '../member/validate.ts';
+import { validateContinuousBeam } from '../continuous/validate.ts';
 import { validateAsFound, validateSchemes } from '../retrofit/validate.ts';
 import { buildSectionModel, checkBarNumbers, validateShape } from '../section/build.ts';
 import { sectionGeometryDiagnostics } from './validate-geometry.ts';
@@ -30,10 +31,10 @@ import type { SectionDefinition } from '../section/definition.ts';
 import { phrase, q } from '../units/phrase.ts';
 import { materialLibrary, type MaterialSettings } from '../materials/library.ts';
 import {
-  analysisSettingsSchema, materialSpecSchema, memberDefinitionSchema, projectInfoSchema, projectSchema, sectionDefinitionSchema,
+  analysisSettingsSchema, continuousMemberSchema, materialSpecSchema, memberDefinitionSchema, projectInfoSchema, projectSchema, sectionDefinitionSchema,
   unknownFields, MAX_NESTING,
 } from './schema.ts';
-import type { Project, UnitSystem, MemberDefinition } from './types.ts';
+import type { ContinuousMemberDefinition, Project, UnitSystem, MemberDefinition } from './types.ts';
 
 /** Most points a polygon section (outline and voids together) may have. */
 export const MAX_POLYGON_POINTS = 1000;
@@ -55,7 +56,7 @@ const isObject = (v: unknown): v is Data => typeof v === 'object' && v !== null 
  * Path of an item in the file as messages show it: `members[3] "B-12"`, `sections[0] "S-1"`,
  * `materials[2] "grade60"` (materials by id, like core/materials/library.ts).
  */
-export function itemPath(list: 'materials' | 'sections' | 'members', index: number, item: unknown): string {
+export function itemPath(list: ItemList, index: number, item: unknown): string {
   const label = isObject(item) ? (list === 'materials' ? item.id : item.name) : undefined;
   return typeof label === 'string' && label !== '' ? `${list}[${index}] ${JSON.stringify(label)}` : `${list}[${index}]`;
 }
@@ -66,7 +67,7 @@ export function pathText(path: readonly PathPart[], root: unknown): string {
   let text = '';
   let rest = path;
   const [head, index] = path;
-  if ((head === 'materials' || head === 'sections' || head === 'members') && typeof index === 'number' && isObject(root) && Array.isArray(root[head])) {
+  if ((head === 'materials' || head === 'sections' || head === 'members' || head === 'continuousMembers') && typeof index === 'number' && isObject(root) && Array.isArray(root[head])) {
     text = itemPath(head, index, (root[head] as unknown[])[index]);
     rest = path.slice(2);
   }
@@ -155,7 +156,7 @@ function isIsoDate(text: string): boolean {
   return day <= days;
 }
 
-function duplicateIds(out: Diagnostic[], list: 'materials' | 'sections' | 'members', items: readonly unknown[]): void {
+function duplicateIds(out: Diagnostic[], list: ItemList, items: readonly unknown[], taken = new Map<string, string>()): void {
   const first = new Map<string, number>();
   items.forEach((item, i) => {
     if (!isObject(item) || typeof item.id !== 'string') return;
@@ -164,7 +165,8 @@ function duplicateIds(out: Diagnostic[], list: 'materials' | 'sections' | 'membe
       return;
     }
     const earlier = first.get(item.id);
-    if (earlier === undefined) first.set(item.id, i);
+    if (earlier === undefined && taken.has(item.id)) out.push({ code: 'duplicate-id', path: `${itemPath(list, i, item)}.id`, severity: 'error', message: `"${item.id}" is already the id of ${taken.get(item.id)}; ids must be unique` });
+    else if (earlier === undefined) first.set(item.id, i);
     else out.push({ code: 'duplicate-id', path: `${itemPath(list, i, item)}.id`, severity: 'error', message: `"${item.id}" is already the id of ${itemPath(list, earlier, items[earlier])}; ids must be unique` });
   });
 }
@@ -263,7 +265,7 @@ export function validateProjectData(data: unknown): { project: Project | null; d
 
   // Top-level structure: the fixed fields and the lists themselves (items are checked one by one below).
   const { ok: _topOk, diagnostics: top } = structuralIssues(
-    projectSchema.extend({ materials: z.array(z.unknown()), sections: z.array(z.unknown()), members: z.array(z.unknown()), info: z.unknown().optional(), settings: z.unknown().optional() }),
+    projectSchema.extend({ materials: z.array(z.unknown()), sections: z.array(z.unknown()), members: z.array(z.unknown()), continuousMembers: z.array(z.unknown()).optional(), info: z.unknown().optional(), settings: z.unknown().optional() }),
     data, data, [],
   );
   out.push(...top);
@@ -272,7 +274,7 @@ export function validateProjectData(data: unknown): { project: Project | null; d
   out.push(...info.diagnostics, ...settings.diagnostics);
 
   const listOf = (key: string): unknown[] => (Array.isArray(data[key]) ? (data[key] as unknown[]) : []);
-  const checkItems = <T>(key: 'materials' | 'sections' | 'members', schema: z.ZodType): Checked<T>[] => {
+  const checkItems = <T>(key: ItemList, schema: z.ZodType): Checked<T>[] => {
     const good: Checked<T>[] = [];
     listOf(key).forEach((item, index) => {
       const r = structuralIssues(schema, item, data, [key, index]);
@@ -284,6 +286,7 @@ export function validateProjectData(data: unknown): { project: Project | null; d
   const materials = checkItems<MaterialSpec>('materials', materialSpecSchema);
   const sections = checkItems<SectionDefinition>('sections', sectionDefinitionSchema);
   const members = checkItems<MemberDefinition>('members', memberDefinitionSchema);
+  const continuousMembers = checkItems<ContinuousMemberDefinition>('continuousMembers', continuousMemberSchema);
 
   for (const { path, field } of unknownFields(data)) {
     out.push({ code: 'unknown-field', path: pathText([...path, field], data), severity: 'warning', message: 'is not a field this version of Hingeline knows; it is kept as it is when the project is saved, but it has no effect' });
@@ -312,6 +315,9 @@ export function validateProjectData(data: unknown): { project: Project | null; d
   duplicateIds(semantic, 'materials', listOf('materials'));
   duplicateIds(semantic, 'sections', listOf('sections'));
   duplicateIds(semantic, 'members', listOf('members'));
+  // Continuous members share the members' ids: results and reports name both by id.
+  const memberIds = new Map(listOf('members').flatMap((m, i) => (isObject(m) && typeof m.id === 'string' ? [[m.id, itemPath('members', i, m)] as [string, string]] : [])));
+  duplicateIds(semantic, 'continuousMembers', listOf('continuousMembers'), memberIds);
 
   // Materials: the engine's validators (code-dependent checks only when the code basis is known).
   const materialSpecs = materials.map((m) => m.value);
@@ -379,6 +385,11 @@ export function validateProjectData(data: unknown): { project: Project | null; d
     }
   }
 
+  for (const { value: member, index } of continuousMembers) {
+    const path = itemPath('continuousMembers', index, member);
+    semantic.push(...guarded(path, () => validateContinuousBeam(member, path, sectionIds)));
+  }
+
   out.push(...inUnits(semantic, system));
   const diagnostics = sortDiagnostics(dedupe(out));
   return { project: whole.success ? (whole.data as unknown as Project) : null, diagnostics };
@@ -404,7 +415,10 @@ function dedupe(list: readonly Diagnostic[]): Diagnostic[] {
   });
 }
 
-const GROUP_ORDER = ['(file)', 'format', 'version', 'info', 'settings', 'materials', 'sections', 'members'];
+const GROUP_ORDER = ['(file)', 'format', 'version', 'info', 'settings', 'materials', 'sections', 'members', 'continuousMembers'];
+
+/** The lists of items in a project file. */
+type ItemList = 'materials' | 'sections' | 'members' | 'continuousMembers';
 
 /** File order: file-level problems, info, settings, then materials, sections and members by index. */
 export function sortDiagnostics(list: readonly Diagnostic[]): Diagnostic[] {

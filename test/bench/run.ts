@@ -90,7 +90,7 @@ function coldStart(): void {
 function engine(): void {
   say('engine benchmarks (vitest bench)…');
   const json = join(OUT, 'engine.json');
-  const r = spawnSync(process.execPath, [join(ROOT, 'node_modules', 'vitest', 'vitest.mjs'), 'bench', '--run', '--project', 'core', 'test/bench/section.bench.ts', 'test/bench/member.bench.ts', 'test/bench/large-inputs.bench.ts', '--outputJson', json], { cwd: ROOT, stdio: ['ignore', 'ignore', 'pipe'], encoding: 'utf8' });
+  const r = spawnSync(process.execPath, [join(ROOT, 'node_modules', 'vitest', 'vitest.mjs'), 'bench', '--run', '--project', 'core', 'test/bench/section.bench.ts', 'test/bench/member.bench.ts', 'test/bench/large-inputs.bench.ts', 'test/bench/continuous.bench.ts', '--outputJson', json], { cwd: ROOT, stdio: ['ignore', 'ignore', 'pipe'], encoding: 'utf8' });
   if (r.status !== 0 || !existsSync(json)) {
     rows.push({ what: 'engine rows', now: 'not measured', baseline: (r.stderr ?? '').split('\n').find((l) => l.trim() !== '') ?? '', ratio: '', target: '' });
     return;
@@ -114,6 +114,8 @@ function engine(): void {
   pair('statics field, 10,000 point loads at 10,000 stations', 'large: indexed', 'large baseline', 'direct loop (before)', 'n log n, ≥ 100× faster', true);
   pair('member with 1,900 point loads', 'large: 1,900', 'large: 475', '475 loads', '≈ 4× (linear), never 16× (n²)');
   pair('member with 200 zones', 'large: 200 zones', 'large: 50 zones', '50 zones', '≈ 4× (linear), never 16× (n²)');
+  const continuous = find('continuous to failure');
+  if (continuous && member) rows.push({ what: 'continuous beam to failure (three spans, five zones)', now: seconds(continuous.mean), baseline: `fixed–fixed member: ${seconds(member.mean)}`, ratio: `${(continuous.mean / member.mean).toFixed(2)}× the member`, target: '≤ 3× the member' });
 }
 
 // --- the command on 1,000 members -------------------------------------------------------------------

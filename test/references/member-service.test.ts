@@ -19,7 +19,7 @@ const selfWeight = (2400 * 9.80665 * b * h) / 1e9; // N/mm (ρ·g·A)
 
 function project(code: CodeBasis, limitCases: MemberDefinition['service']['limitCases']): Project {
   return {
-    format: 'hingeline-project', version: 2,
+    format: 'hingeline-project', version: 3,
     info: { name: 'service check', number: 'R-1', description: '', engineer: '', checker: '', revision: '0', date: '2026-01-01', codeBasis: code, unitSystem: 'si' },
     materials: [
       { kind: 'concrete', id: 'c', name: 'C30', strength: 30, compressionModel: 'hognestad', tensionModel: 'tension-stiffening' },

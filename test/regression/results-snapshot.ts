@@ -218,7 +218,7 @@ function retrofitMembers(): MemberDefinition[] {
 function generated(code: CodeBasis, unitSystem: UnitSystem, k: number, members: MemberDefinition[]): Project {
   return {
     format: 'hingeline-project',
-    version: 2,
+    version: 3,
     info: { name: `Generated ${code} ${unitSystem} ${k}`, number: 'REG', description: 'regression snapshot', engineer: '', checker: '', revision: '0', date: '2026-01-01', codeBasis: code, unitSystem },
     materials: MATERIALS,
     sections: sections(k),

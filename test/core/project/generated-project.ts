@@ -65,7 +65,7 @@ export function generatedProject(count = 1000, seed = 20260302): Project {
   }
   return {
     format: 'hingeline-project',
-    version: 2,
+    version: 3,
     info: { name: `Generated project, ${count} members`, number: 'BENCH', description: 'Invented members for benchmarks.', engineer: '', checker: '', revision: '0', date: '2026-03-02', codeBasis: 'EN 1992-1-1', unitSystem: 'si' },
     materials: [
       { kind: 'concrete', id: 'c30', name: 'C30/37', strength: 30, compressionModel: 'en1992-nonlinear', tensionModel: 'linear-brittle' },

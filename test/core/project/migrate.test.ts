@@ -7,12 +7,12 @@ const v1Text = readFileSync(new URL('./fixtures/v1-project.json', import.meta.ur
 const v1 = () => JSON.parse(v1Text) as Record<string, unknown>;
 
 describe('migration of version-1 project files', () => {
-  it('reads the version-1 fixture as a valid version-2 project, with a warning that it was migrated', () => {
+  it('reads the version-1 fixture as a valid current (version-3) project, with a warning that it was migrated', () => {
     const { project, diagnostics } = parseProject(v1Text);
     expect(project).not.toBeNull();
     expect(diagnostics.filter((d) => d.severity === 'error')).toEqual([]);
     expect(diagnostics).toContainEqual(expect.objectContaining({ code: 'unsupported-version', path: 'version', severity: 'warning' }));
-    expect(project!.version).toBe(2);
+    expect(project!.version).toBe(3);
     expect(project!.members.map((m) => m.id)).toEqual(['DB-1', 'DB-2']);
   });
 
@@ -72,10 +72,10 @@ describe('migration of version-1 project files', () => {
     expect(member.version1Loads).toEqual({ windKNm: 1.5 });
   });
 
-  it('saves a migrated file as version 2, and that file reads back identically without the migration warning', () => {
+  it('saves a migrated file as version 3, and that file reads back identically without the migration warning', () => {
     const first = parseProject(v1Text);
     const text = serializeProject(first.project!);
-    expect(JSON.parse(text).version).toBe(2);
+    expect(JSON.parse(text).version).toBe(3);
     const second = parseProject(text);
     expect(second.project).toEqual(first.project);
     expect(second.diagnostics.some((d) => d.code === 'unsupported-version')).toBe(false);
@@ -117,10 +117,18 @@ describe('format and version checks', () => {
   });
 
   it('passes a current file through unchanged and without diagnostics', () => {
-    const data = { format: 'hingeline-project', version: 2, extra: 1 };
+    const data = { format: 'hingeline-project', version: 3, extra: 1 };
     const r = migrateProject(data);
     expect(r.data).toBe(data);
     expect(r.diagnostics).toEqual([]);
+    expect(r.fromVersion).toBe(3);
+  });
+
+  it('brings a version-2 file to version 3 by its number alone, every other field as it was', () => {
+    const data = { format: 'hingeline-project', version: 2, extra: 1, members: [{ id: 'B-1', span: 6000 }] };
+    const r = migrateProject(data);
+    expect(r.data).toEqual({ ...data, version: 3 });
     expect(r.fromVersion).toBe(2);
+    expect(r.diagnostics).toContainEqual(expect.objectContaining({ code: 'unsupported-version', severity: 'warning' }));
   });
 });

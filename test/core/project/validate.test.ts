@@ -108,7 +108,7 @@ describe('all problems at once', () => {
 
 describe('missing parts', () => {
   it('reports each missing top-level part once', () => {
-    const { project, diagnostics } = validateProjectData({ format: 'hingeline-project', version: 2 });
+    const { project, diagnostics } = validateProjectData({ format: 'hingeline-project', version: 3 });
     expect(project).toBeNull();
     expect(diagnostics.map((d) => [d.code, d.path])).toEqual([['required', 'info'], ['required', 'settings'], ['required', 'materials'], ['required', 'sections'], ['required', 'members']]);
   });

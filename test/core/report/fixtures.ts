@@ -55,7 +55,7 @@ export function reportTestProject(code: CodeBasis = 'ACI 318-19', unitSystem: Un
   const service = { sustainedLiveFraction: 0.3, durationMonths: 60, limitCases: [...limits] };
   return {
     format: 'hingeline-project',
-    version: 2,
+    version: 3,
     info: { name: 'Harbour shed annex', number: 'HS-204', description: 'Assessment of existing floor beams for a change of use (invented test project)', engineer: 'R. Okafor', checker: 'L. Brandt', revision: 'B', date: '2026-02-20', codeBasis: code, unitSystem },
     materials: MATERIALS,
     sections: [
@@ -96,7 +96,7 @@ export function generatedProject(count: number): Project {
   }
   return {
     format: 'hingeline-project',
-    version: 2,
+    version: 3,
     info: { name: 'Generated warehouse', number: 'GEN-100', description: 'Generated project for the report benchmark', engineer: 'Bench', checker: 'Bench', revision: '0', date: '2026-01-01', codeBasis: 'ACI 318-19', unitSystem: 'si' },
     materials: MATERIALS,
     sections,

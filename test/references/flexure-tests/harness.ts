@@ -333,7 +333,7 @@ export function specimenProjectText(s: SpecimenRecord, hinge: HingeMethod = 'pri
   if (stirrups && stirrups.yield_MPa !== null) materials.push({ kind: 'steel', id: 'stirrup-bars', name: 'stirrups', model: 'elastic-plastic', yieldStress: stirrups.yield_MPa, ultimateStress: stirrups.yield_MPa });
   const project = {
     format: 'hingeline-project',
-    version: 2,
+    version: 3,
     info: {
       name: `Flexure test ${s.id}`, number: '', description: `Laboratory test ${s.label} (${s.sourceKey}); see test/references/flexure-tests/SOURCES.md`,
       engineer: '', checker: '', revision: '', date: '', codeBasis: MODELLING.codeBasis, unitSystem: 'si',

@@ -1,0 +1,78 @@
+/**
+ * Continuous members in the command line's outputs: a table (one row per member, the governing span
+ * named) and their JSON summary. Pure functions from results to text; units converted for display.
+ */
+import { governingDeflection, type ContinuousMemberResult } from '../../core/continuous/verdict.ts';
+import type { UnitSystem } from '../../core/project/types.ts';
+import { displaySystem, NOT_A_VALUE, say, toDisplay, unitLabel } from '../../core/units/index.ts';
+import { fixedQuantityText, ratioText, renderTable, wrap, type Style } from './format.ts';
+
+/** Words for a continuous member's status (never a plain OK: see core/continuous/verdict.ts). */
+const STATUS: Readonly<Record<ContinuousMemberResult['verdict']['status'], string>> = {
+  'check-fails': 'check fails',
+  'not-converged': 'not converged',
+  'input-error': 'input error',
+  review: 'review',
+};
+
+/** The continuous members' table with each member's governing mode below it. */
+export function continuousTable(results: readonly ContinuousMemberResult[], system: UnitSystem, width: number, style: Style = { enabled: false }): string {
+  if (results.length === 0) return '';
+  const s = displaySystem(system);
+  const columns = [
+    { header: 'Continuous member', unit: '', align: 'left' as const },
+    { header: 'Spans', unit: unitLabel('spanLength', s), align: 'left' as const },
+    { header: 'Governing', unit: '', align: 'left' as const },
+    { header: 'Hinges', unit: '', align: 'right' as const },
+    { header: 'Pu/Pfactored', unit: '', align: 'right' as const },
+    { header: 'μΔ', unit: '', align: 'right' as const },
+    { header: 'Δ', unit: unitLabel('deflection', s), align: 'right' as const },
+    { header: 'Δ/limit', unit: '', align: 'right' as const },
+    { header: 'Status', unit: '', align: 'left' as const },
+  ];
+  const rows = results.map((r) => {
+    const g = governingDeflection(r);
+    const spans = r.parts.map((p) => `${p.kind === 'span' ? '' : 'c'}${toDisplay('spanLength', p.to - p.from, s).toFixed(s === 'US' ? 1 : 2)}`).join(' + ');
+    return [
+      r.memberName === r.memberId || r.memberName === '' ? r.memberId : `${r.memberName} (${r.memberId})`,
+      spans || NOT_A_VALUE,
+      r.verdict.governingSpan ?? NOT_A_VALUE,
+      String(r.capacity?.hinges.length ?? 0),
+      ratioText(r.verdict.collapseRatio, 2),
+      ratioText(r.capacity?.displacementDuctility),
+      g ? fixedQuantityText('deflection', g.check.governing, system) : NOT_A_VALUE,
+      g ? ratioText(g.check.utilisation, 2) : NOT_A_VALUE,
+      STATUS[r.verdict.status],
+    ];
+  });
+  const notes = results.map((r) => {
+    const label = `${r.memberName}: `;
+    const lines = [wrap(`${label}${r.verdict.governingMode}`, width, label.length)];
+    for (const w of r.warnings) lines.push(wrap(`  warning: ${say(w, system)}`, width, 11));
+    for (const e of r.errors) lines.push(wrap(`  error: ${e.path}: ${say(e.message, system)}`, width, 9));
+    return lines.join('\n');
+  });
+  return `\n${renderTable(columns, rows, style)}\n(c = cantilever; Pu/Pfactored: largest load of the analysis to failure over the factored loads of the same arrangement)\n\n${notes.join('\n')}\n`;
+}
+
+/** JSON summary of the continuous members (internal SI units, named). */
+export function continuousJson(results: readonly ContinuousMemberResult[], system: UnitSystem): unknown[] {
+  return results.map((r) => {
+    const g = governingDeflection(r);
+    return {
+      id: r.memberId,
+      name: r.memberName,
+      status: r.verdict.status,
+      governingSpan: r.verdict.governingSpan,
+      governingMode: r.verdict.governingMode,
+      parts: r.parts.map((p) => ({ name: p.name, lengthMm: p.to - p.from })),
+      collapseOverFactored: r.verdict.collapseRatio,
+      displacementDuctility: r.capacity?.displacementDuctility ?? null,
+      hinges: (r.capacity?.hinges ?? []).map((h) => ({ order: h.order, part: h.part, positionMm: h.position, direction: h.direction, loadFactor: h.loadFactor, rotationRad: h.rotation, capacityRad: h.rotationCapacity })),
+      deflection: g ? { part: g.part, limitCase: g.check.limitCase, valueMm: g.check.governing, limitMm: g.check.limit, utilisation: g.check.utilisation } : null,
+      redistribution: r.redistribution.map((x) => ({ support: x.support, usedPercent: x.usedPercent, permittedPercent: x.permitted.percent, clause: x.permitted.clause })),
+      warnings: r.warnings.map((w) => say(w, system)),
+      errors: r.errors.map((e) => ({ path: e.path, message: say(e.message, system) })),
+    };
+  });
+}

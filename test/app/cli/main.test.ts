@@ -131,7 +131,7 @@ describe('hingeline validate', () => {
   });
 
   it('writes JSON with every diagnostic when asked', async () => {
-    const io = memoryIo({ 'p.json': '{"format": "hingeline-project", "version": 2}' });
+    const io = memoryIo({ 'p.json': '{"format": "hingeline-project", "version": 3}' });
     expect(await main(['validate', 'p.json', '--format', 'json'], io)).toBe(1);
     const doc = JSON.parse(io.out());
     expect(doc).toMatchObject({ file: 'p.json', valid: false });

@@ -98,7 +98,7 @@ describe('format and version checks', () => {
   });
 
   it('refuses a newer version and says a newer Hingeline is needed', () => {
-    const r = migrateProject({ format: 'hingeline-project', version: 3 });
+    const r = migrateProject({ format: 'hingeline-project', version: 4 });
     expect(r.data).toBeNull();
     expect(r.diagnostics[0]).toMatchObject({ code: 'unsupported-version', severity: 'error' });
     expect(r.diagnostics[0]!.message).toMatch(/newer Hingeline/);

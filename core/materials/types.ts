@@ -112,6 +112,11 @@ export interface ConcreteMaterial extends UniaxialMaterial {
   readonly confined: boolean;
   /** Where `crushingStrain` comes from (set by the builder; absent for laws assembled by hand). */
   readonly ultimateStrain?: UltimateStrainSource;
+  /**
+   * Strain (signed, compression positive) below which the concrete is cracked; absent → −crackingStrain.
+   * A law under sustained load sets it: shrinkage moves cracking even to a compressive total strain.
+   */
+  readonly crackedBelow?: number;
 }
 
 /** A reinforcing or plate steel law, symmetric in tension and compression. */

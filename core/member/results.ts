@@ -122,6 +122,11 @@ export interface ServiceDeflections {
     /** ACI only: immediate deflections with Branson's Ie (ACI 318-14 and earlier), for comparison, mm. */
     readonly legacyBranson?: { readonly dead: number; readonly deadPlusLive: number; readonly live: number };
   };
+  /**
+   * Where the two methods differ by more than METHODS_APART (25 %) — immediately under dead + live
+   * load, or in the long-term addition — one sentence each on which assumptions differ; else empty.
+   */
+  readonly methodDifferences?: readonly Text[];
   readonly checks: readonly DeflectionCheck[];
 }
 

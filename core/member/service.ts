@@ -15,7 +15,7 @@ import type { ElasticProperties } from '../section/elastic.ts';
 import { elasticProperties } from '../section/elastic.ts';
 import type { SectionModel, BendingDirection } from '../section/model.ts';
 import type { ServiceSettings, SupportType, DeflectionLimitCase } from './definition.ts';
-import { buildBeamModel, type BeamModel, type ZoneResponse } from './beam-model.ts';
+import { buildBeamModel, zoneCurvature, type BeamModel, type ZoneResponse } from './beam-model.ts';
 import { solveStatic, type StaticState } from './static.ts';
 import { releasedMoment, type StaticLoad } from './statics.ts';
 import type { SectionResponse, ValueAndSlope } from './section-response.ts';
@@ -30,6 +30,8 @@ import {
   limitRatio,
 } from './code-deflection.ts';
 import type { DeflectionCheck, ServiceDeflections, SpanDistribution } from './results.ts';
+import { phrase, q, type Text } from '../units/phrase.ts';
+import { SUSTAINED_STIFFENING_FACTOR } from '../materials/long-term.ts';
 
 export interface ServiceZone {
   readonly from: number;
@@ -118,6 +120,127 @@ function combine(a: Float64Array, b: Float64Array, fb: number): Float64Array {
   return Float64Array.from(a, (v, i) => v + fb * b[i]!);
 }
 
+/**
+ * A zone's response under a moment after the largest service moment has been reached: the section
+ * keeps the damage (cracking, stiffening lost) of that state. With κ = M_max/M (≥ 1) the largest
+ * moment the zone saw in a direction for the moment M it now carries, the curvature lies on the
+ * secant from the zero-moment state (φ0, the shrinkage curvature under sustained load) to the state
+ * at κ·M on the same law, and never below the law itself (a section is not less damaged for having
+ * carried more):
+ *   φ(M) = max(φ_law(M), φ0 + (φ_law(κ·M) − φ0)/κ).
+ * For a cracked section the secant is unloading towards its origin, the assumption the ACI code
+ * method makes when it takes Ie at dead + live for the sustained deflection (common practice, no
+ * source). The curvature stays piecewise linear — knots of the law, the law's knots over κ, and
+ * where the two branches cross — so the member integrator still integrates it exactly. κ = 1 leaves
+ * the zone as it is.
+ * @param kappa per direction, M_max/M (≥ 1)
+ */
+export function afterLargestMoment(zone: ZoneResponse, kappa: { readonly sagging: number; readonly hogging: number }): ZoneResponse {
+  if (!(kappa.sagging > 1) && !(kappa.hogging > 1)) return zone;
+  const scratch: ValueAndSlope = { value: 0, slope: 0 };
+  const phi0 = zoneCurvature(zone, 0, scratch).value;
+  const m0 = zone.sagging.momentAtZero;
+  // Knots of the signed law in (lo, hi), as the member integrator finds them.
+  const signedKnots = (lo: number, hi: number): number[] => {
+    const out: number[] = [];
+    if (hi > m0) zone.sagging.knots(Math.max(lo, m0), hi, out);
+    if (lo < m0) {
+      const from = out.length;
+      zone.hogging.knots(Math.max(-hi, -m0), -lo, out);
+      for (let i = from; i < out.length; i++) out[i] = -out[i]!;
+      if (hi > m0) out.push(m0);
+    }
+    return out.filter((k) => k > lo && k < hi);
+  };
+  const reach = 2 * (Math.max(zone.sagging.ultimateMoment, zone.hogging.ultimateMoment, zone.sagging.peakMoment, zone.hogging.peakMoment) + Math.abs(m0));
+  const side = (base: SectionResponse, sign: 1 | -1, kappaSide: number): SectionResponse => {
+    const k = kappaSide > 1 ? kappaSide : 1;
+    const a: ValueAndSlope = { value: 0, slope: 0 };
+    const b: ValueAndSlope = { value: 0, slope: 0 };
+    const f0 = sign * phi0;
+    // The law (f) and the secant from the largest state (g), as curvature magnitudes of this side.
+    const law = (m: number, out: ValueAndSlope) => {
+      zoneCurvature(zone, sign * m, out);
+      out.value *= sign;
+      return out;
+    };
+    const secant = (m: number, out: ValueAndSlope) => {
+      law(k * m, out);
+      out.value = f0 + (out.value - f0) / k;
+      return out;
+    };
+    const integration = (m: number, out: ValueAndSlope) => {
+      law(m, a);
+      secant(m, b);
+      const pick = b.value > a.value ? b : a;
+      out.value = pick.value;
+      out.slope = pick.slope;
+      out.piece = -1;
+      return out;
+    };
+    // Knots: the law's, the law's over κ, and the crossings of the two branches between them.
+    const own = (sign > 0 ? signedKnots(0, reach) : signedKnots(-reach, 0).map((x) => -x));
+    const list = [...new Set([...own, ...own.map((x) => x / k)])].filter((x) => x > 0).sort((p, q) => p - q);
+    const knotList: number[] = [];
+    const gap = (m: number) => secant(m, b).value - law(m, a).value;
+    let prevM = 0;
+    let prevGap = gap(0);
+    for (const m of list) {
+      const g = gap(m);
+      if ((prevGap > 0 && g < 0) || (prevGap < 0 && g > 0)) knotList.push(prevM + ((m - prevM) * prevGap) / (prevGap - g));
+      knotList.push(m);
+      prevM = m;
+      prevGap = g;
+    }
+    const curvature = (m: number) => integration(m, { value: 0, slope: 0 }).value;
+    const scaled = (v: number | null) => (v === null ? null : v / k);
+    return {
+      ...base,
+      momentAtZero: 0,
+      crackingMoment: scaled(base.crackingMoment),
+      firstYieldMoment: scaled(base.firstYieldMoment),
+      peakMoment: base.peakMoment / k,
+      ultimateMoment: base.ultimateMoment / k,
+      nominalMoment: scaled(base.nominalMoment),
+      actualCurvature: curvature,
+      integrationCurvature: curvature,
+      integration,
+      knots: (lo: number, hi: number, out: number[]) => {
+        for (const m of knotList) if (m > lo && m < hi) out.push(m);
+      },
+      knotMoments: [],
+      knotCurvatures: [],
+    };
+  };
+  return { ...zone, sagging: side(zone.sagging, 1, kappa.sagging), hogging: side(zone.hogging, -1, kappa.hogging) };
+}
+
+/**
+ * κ = M_max/M per zone and direction: at the station of the zone where the moment M of `state` is
+ * largest in that direction, the ratio of the moment under the largest service load there (1 where
+ * that load gives less, or no moment of that sign).
+ */
+function damageRatios(beam: BeamModel, state: StaticState, largest: StaticState): { sagging: number; hogging: number }[] {
+  return beam.zones.map((_, z) => {
+    const ratio = (sign: 1 | -1) => {
+      let at = -1;
+      let best = 0;
+      for (let i = 0; i < beam.x.length; i++) {
+        if (beam.stationZone[i] !== z) continue;
+        const m = sign * state.moment[i]!;
+        if (m > best) {
+          best = m;
+          at = i;
+        }
+      }
+      if (at < 0) return 1;
+      const mMax = sign * largest.moment[at]!;
+      return mMax > best ? mMax / best : 1;
+    };
+    return { sagging: ratio(1), hogging: ratio(-1) };
+  });
+}
+
 /** First moment of the reinforcement about depth `axis`, mm³ (positive when steel lies below it). */
 function steelFirstMoment(model: SectionModel, axis: number): number {
   return model.elements.filter((e) => e.kind !== 'frp').reduce((s, e) => s + e.area * (e.depth - axis), 0);
@@ -138,17 +261,24 @@ export function serviceDeflections(input: ServiceInput): ServiceOutcome {
     else if (s.yieldRatio > 1) warnings.push(`Under ${label} the reinforcement yields: the member is not in a service state.`);
     return s;
   };
+  // Load history: dead load, then the live load (the largest service state), then the sustained
+  // part stays. The sustained states, short and long term, keep the damage of the largest state
+  // (afterLargestMoment), with the moment ratio κ of the short-term solutions.
   const integrateAt = (count: number) => {
     const shortBeam = buildBeamModel(support, span, input.zones.map((z) => z.shortTerm), extraPoints, count);
-    const longBeam = buildBeamModel(support, span, input.zones.map((z) => z.longTerm), extraPoints, count);
     const deadField = field(shortBeam, input.dead);
     const liveField = field(shortBeam, input.live);
+    const sustainedField = combine(deadField, liveField, psi);
+    const total = solve(shortBeam, combine(deadField, liveField, 1), 'dead + live load');
+    const kappa = damageRatios(shortBeam, solveStatic(shortBeam, sustainedField), total);
+    const historyBeam = buildBeamModel(support, span, input.zones.map((z, i) => afterLargestMoment(z.shortTerm, kappa[i]!)), extraPoints, count);
+    const longBeam = buildBeamModel(support, span, input.zones.map((z, i) => afterLargestMoment(z.longTerm, kappa[i]!)), extraPoints, count);
     return {
       shortBeam,
       dead: solve(shortBeam, deadField, 'dead load'),
-      total: solve(shortBeam, combine(deadField, liveField, 1), 'dead + live load'),
-      sustained: solve(shortBeam, combine(deadField, liveField, psi), 'sustained load'),
-      sustainedLong: solve(longBeam, combine(deadField, liveField, psi), 'sustained load, long term'),
+      total,
+      sustained: solve(historyBeam, sustainedField, 'sustained load'),
+      sustainedLong: solve(longBeam, sustainedField, 'sustained load, long term'),
     };
   };
   const values = (r: ReturnType<typeof integrateAt>) => [r.dead, r.total, r.sustained, r.sustainedLong].map(maxDeflection);
@@ -202,6 +332,12 @@ export function serviceDeflections(input: ServiceInput): ServiceOutcome {
     notes = `ζ = 1 − β(Mcr/M)² at every station (Eq. 7.19), β = 1.0 short term and 0.5 sustained; Ec,eff = Ecm/(1 + φ) (Eq. 7.20); shrinkage curvature εcs·αe·S/I (Eq. 7.21)${settings.includeShrinkage === false ? ' not included (switched off)' : ''}.`;
   }
 
+  const differences = methodDifferences(input, shortBeam, total, {
+    immediate: [integration.deadPlusLive, code.deadPlusLive],
+    longTerm: [integrationAdditional, codeAdditional],
+    multiplier,
+  });
+
   const ell = span;
   const checks: DeflectionCheck[] = settings.limitCases.map((c) => {
     const ratio = limitRatio(c, settings.customLimitRatio);
@@ -230,7 +366,7 @@ export function serviceDeflections(input: ServiceInput): ServiceOutcome {
     service: {
       immediate: { integration, code },
       longTerm: {
-        method: input.code === 'ACI 318-19' ? 'ACI 318-19 24.2.4.1 multiplier (code); creep and shrinkage in the section law (integration)' : 'EN 1992-1-1 7.4.3 (code); creep and shrinkage in the section law (integration)',
+        method: `${input.code === 'ACI 318-19' ? 'ACI 318-19 24.2.4.1 multiplier (code)' : 'EN 1992-1-1 7.4.3 (code)'}; integration: creep, shrinkage and tension stiffening decayed to β = ${SUSTAINED_STIFFENING_FACTOR} in the section law, the sustained state kept on the secant from the largest service state`,
         multiplier,
         integrationAdditional,
         codeAdditional,
@@ -238,11 +374,54 @@ export function serviceDeflections(input: ServiceInput): ServiceOutcome {
         codeTotal,
       },
       codeMethod: { name: codeName, effectiveInertia, notes, ...(legacy ? { legacyBranson: legacy } : {}) },
+      ...(differences.length > 0 ? { methodDifferences: differences } : {}),
       checks,
     },
     distribution,
     warnings: [...new Set(warnings)],
   };
+}
+
+/** How far apart (relative to the larger) the two methods may be before the results say why: 25 %. */
+export const METHODS_APART = 0.25;
+
+/**
+ * Sentences saying which assumptions differ where the integration and the code method are more than
+ * METHODS_APART apart: immediately under dead + live load (cracking moment, tension stiffening, one Ie
+ * for the member), and in the long-term addition (how creep and shrinkage enter).
+ */
+function methodDifferences(
+  input: ServiceInput,
+  beam: BeamModel,
+  total: StaticState,
+  v: { immediate: [number, number]; longTerm: [number, number]; multiplier: number | null },
+): Text[] {
+  const out: Text[] = [];
+  const apart = ([a, b]: [number, number]) => Math.max(a, b) > 1e-6 && Math.abs(a - b) / Math.max(a, b) > METHODS_APART;
+  const aci = input.code === 'ACI 318-19';
+  const pct = ([a, b]: [number, number]) => `${Math.round((100 * Math.abs(a - b)) / Math.max(a, b))} %`;
+  if (apart(v.immediate)) {
+    // The critical section: the station of the largest moment under dead + live load.
+    let at = 0;
+    for (let i = 0; i < total.moment.length; i++) if (Math.abs(total.moment[i]!) > Math.abs(total.moment[at]!)) at = i;
+    const z = beam.stationZone[at]!;
+    const zone = input.zones[z]!;
+    const dir: BendingDirection = total.moment[at]! >= 0 ? 'sagging' : 'hogging';
+    const lawCracking = beam.zones[z]![dir].crackingMoment;
+    const codeCracking = elasticProperties(zone.model, { concreteModulus: zone.codeModulus, tensileStrength: zone.codeTensileStrength }).crackingMoment[dir].gross;
+    const cracking = lawCracking !== null && Math.abs(lawCracking - codeCracking) > 0.05 * codeCracking
+      ? phrase`the curves crack at ${q('moment', lawCracking)} (the tensile strength the concrete law is fed), the code method at Mcr = ${q('moment', codeCracking)} (${aci ? 'fr' : 'fctm'}); `
+      : '';
+    out.push(phrase`Immediately under dead + live load the two methods are ${pct(v.immediate)} apart (${q('deflection', v.immediate[0])} by integration, ${q('deflection', v.immediate[1])} by the code method). Assumptions that differ: ${cracking}tension stiffening follows the concrete law between cracks, where the code method interpolates ${aci ? 'Ie between Ig and Icr (ACI 318-19 24.2.3.5)' : 'the curvature between the uncracked and cracked states with ζ (EN 1992-1-1 Eq. 7.19)'}${aci ? '; and the code method takes one Ie for the whole member from its critical section, where the integration follows the cracked length along the span' : ''}.`);
+  }
+  if (apart(v.longTerm)) {
+    const zone = input.zones[0]!;
+    const codeWords = aci
+      ? phrase`multiplies the sustained immediate deflection by λΔ = ${v.multiplier?.toFixed(2) ?? '–'} (ACI 318-19 24.2.4.1), one empirical factor for creep and shrinkage together`
+      : phrase`interpolates curvatures with Ec,eff = Ecm/(1 + φ) (Eq. 7.20) and ζ with β = 0.5, and adds the shrinkage curvature of Eq. 7.21 on the uncracked and cracked sections`;
+    out.push(phrase`The long-term addition is ${pct(v.longTerm)} apart (${q('deflection', v.longTerm[0])} by integration, ${q('deflection', v.longTerm[1])} by the code method). The integration takes creep through the effective modulus Ec/(1 + φ) (φ = ${zone.creepCoefficient.toFixed(2)}) on the whole concrete law, shrinkage εcs = ${(zone.shrinkageStrain * 1000).toFixed(2)} ‰ as a strain imposed on the concrete and restrained by the bars, and tension stiffening halved (β = ${SUSTAINED_STIFFENING_FACTOR}), from the damage of the largest service load; the code method ${codeWords}.`);
+  }
+  return out;
 }
 
 export function checkQuantity(

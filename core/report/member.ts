@@ -190,6 +190,7 @@ function service(ctx: WriteContext, result: MemberResult): Content[] {
     ['Code method', s.codeMethod.name],
     ['Details', s.codeMethod.notes],
     ['Long-term method', `${s.longTerm.method}${s.longTerm.multiplier !== null ? `; λΔ = ${f.number(s.longTerm.multiplier)}` : ''}`],
+    ...(s.methodDifferences ?? []).map((t): [string, Content] => ['Why the methods differ', f.say(t)]),
   ];
   if (s.codeMethod.effectiveInertia) {
     const ie = s.codeMethod.effectiveInertia;

@@ -126,7 +126,7 @@ function forEachConcretePoint(model: SectionModel, eps0: number, phi: number, vi
   for (const part of model.concreteParts) {
     const k = part.stiffeningGroup !== undefined ? factors[part.stiffeningGroup]! : 1;
     const material = part.material;
-    const cracked = -material.crackingStrain;
+    const cracked = crackedBelow(material);
     const breakpoints = splitStrains(material);
     for (const strip of part.strips) {
       const depths: number[] = [strip.top];
@@ -193,7 +193,7 @@ function integratePart(model: SectionModel, part: ConcretePart, eps0: number, ph
   const breakpoints = splitStrains(material);
   const zero = zeroRangeOf(material);
   const group = part.stiffeningGroup ?? -1;
-  const cracked = -material.crackingStrain;
+  const cracked = crackedBelow(material);
   for (const strip of part.strips) {
     const yTop = strip.top;
     const yBottom = strip.bottom;
@@ -248,6 +248,11 @@ function integratePart(model: SectionModel, part: ConcretePart, eps0: number, ph
       }
     }
   }
+}
+
+/** Strain below which a concrete is cracked (ConcreteMaterial.crackedBelow). */
+export function crackedBelow(material: SectionModel['concreteParts'][number]['material']): number {
+  return material.crackedBelow ?? -material.crackingStrain;
 }
 
 const yieldStresses = new WeakMap<object, number>();

@@ -5,7 +5,7 @@
 import type { SectionModel, BendingDirection } from './model.ts';
 import type { CurvePoint, SectionState, ElementState, ConcreteProfileSample } from './results.ts';
 import { stripWidthAt } from './width-profile.ts';
-import { sectionResultants, stiffeningFactors } from './forces.ts';
+import { crackedBelow, sectionResultants, stiffeningFactors } from './forces.ts';
 
 /** Faces of the section for a bending direction: depths (mm) of the extreme compression and tension fibres. */
 export function faces(model: SectionModel, direction: BendingDirection): { compression: number; tension: number } {
@@ -77,7 +77,7 @@ export function sectionState(model: SectionModel, direction: BendingDirection, p
         const inside = part.strips.some((s) => y >= s.top && y <= s.bottom && Math.max(stripWidthAt(s, Math.min(Math.max(y, s.top), s.bottom)), 0) > 0);
         if (!inside) return null;
         const stress = part.material.stress(strain);
-        return part.stiffeningGroup !== undefined && strain < -part.material.crackingStrain ? factors[part.stiffeningGroup]! * stress : stress;
+        return part.stiffeningGroup !== undefined && strain < crackedBelow(part.material) ? factors[part.stiffeningGroup]! * stress : stress;
       }),
     };
   });

@@ -26,7 +26,7 @@ export type OutputFormat = 'table' | 'json' | 'csv';
 export type Command =
   | { readonly kind: 'help'; readonly topic?: string }
   | { readonly kind: 'version' }
-  | { readonly kind: 'analyze'; readonly file: string; readonly members: readonly string[]; readonly format: OutputFormat; readonly units?: UnitSystem; readonly jobs?: number; readonly bom?: boolean }
+  | { readonly kind: 'analyze'; readonly file: string; readonly members: readonly string[]; readonly format: OutputFormat; readonly units?: UnitSystem; readonly jobs?: number; readonly bom?: boolean; readonly detail?: 'summary' | 'full' }
   | { readonly kind: 'report'; readonly file: string; readonly out: string; readonly members: readonly string[]; readonly jobs?: number }
   | { readonly kind: 'validate'; readonly file: string; readonly format: 'text' | 'json' }
   | { readonly kind: 'demo'; readonly out?: string; readonly si: boolean; readonly force: boolean };
@@ -39,7 +39,7 @@ const GENERAL_HELP = `hingeline — moment–curvature, load–deflection, plast
 assessment of reinforced-concrete beams, from the command line.
 
 Usage:
-  hingeline analyze FILE [--member ID]... [--format table|json|csv [--bom]] [--units us|si] [--jobs N]
+  hingeline analyze FILE [--member ID]... [--format table|json [--detail full]|csv [--bom]] [--units us|si] [--jobs N]
   hingeline report FILE --out REPORT.pdf [--member ID]... [--jobs N]
   hingeline validate FILE [--format text|json]
   hingeline demo [--out FILE] [--si] [--force]
@@ -63,6 +63,9 @@ utilisation, the status and the governing mode.
 Options:
   --member ID       analyse only this member (repeat for several)
   --format FORMAT   table (default), json (documented in docs/cli.md) or csv
+  --detail LEVEL    with --format json: summary (default) or full — per member also every
+                    section's key points and curve points, the load–deflection points, the hinges
+                    and the service deflections of both methods (docs/cli.md)
   --bom             with --format csv: start with a UTF-8 byte-order mark, so that spreadsheet
                     programs read the units (kip·ft, φu/φy) as UTF-8
   --units SYSTEM    us or si (default: the project's display unit system)
@@ -156,6 +159,7 @@ export function parseArguments(argv: readonly string[]): ParsedArguments {
       options: {
         member: { type: 'string', multiple: true },
         format: { type: 'string' },
+        detail: { type: 'string' },
         units: { type: 'string' },
         jobs: { type: 'string' },
         out: { type: 'string' },
@@ -168,10 +172,10 @@ export function parseArguments(argv: readonly string[]): ParsedArguments {
     const message = error instanceof Error ? error.message.replace(/\. To specify a positional argument[\s\S]*$/, '') : String(error);
     return usage(message.charAt(0).toLowerCase() + message.slice(1), topic);
   }
-  const values = parsed.values as { member?: string[]; format?: string; units?: string; jobs?: string; out?: string; si?: boolean; force?: boolean; bom?: boolean };
+  const values = parsed.values as { member?: string[]; format?: string; units?: string; jobs?: string; out?: string; si?: boolean; force?: boolean; bom?: boolean; detail?: string };
   const positionals = parsed.positionals;
   const allowed: Readonly<Record<string, readonly string[]>> = {
-    analyze: ['member', 'format', 'units', 'jobs', 'bom'],
+    analyze: ['member', 'format', 'units', 'jobs', 'bom', 'detail'],
     report: ['member', 'out', 'jobs'],
     validate: ['format'],
     demo: ['out', 'si', 'force'],
@@ -206,5 +210,8 @@ export function parseArguments(argv: readonly string[]): ParsedArguments {
   const units = values.units;
   if (units !== undefined && units !== 'us' && units !== 'si') return usage(`--units must be us or si, got "${units}"`, topic);
   if (values.bom && format !== 'csv') return usage('--bom goes with --format csv', topic);
-  return { ok: true, command: { kind: 'analyze', file, members, format, ...(units ? { units } : {}), ...(jobs ? { jobs } : {}), ...(values.bom ? { bom: true } : {}) } };
+  const detail = values.detail;
+  if (detail !== undefined && detail !== 'summary' && detail !== 'full') return usage(`--detail must be summary or full, got "${detail}"`, topic);
+  if (detail !== undefined && format !== 'json') return usage('--detail goes with --format json', topic);
+  return { ok: true, command: { kind: 'analyze', file, members, format, ...(units ? { units } : {}), ...(jobs ? { jobs } : {}), ...(values.bom ? { bom: true } : {}), ...(detail ? { detail } : {}) } };
 }

@@ -12,6 +12,7 @@ import { analysisBlockers } from '../../core/project/validate.ts';
 import type { Project } from '../../core/project/types.ts';
 import { EXIT, type Command } from './args.ts';
 import { ownModule } from './bundle.ts';
+import { memberDetail } from './detail.ts';
 import { analysisJson, diagnosticLines, problemCount, progressLine, RESULTS_CAUTION, tableReport, type Style } from './format.ts';
 import type { CliIo } from './io.ts';
 import { analyzeMembersParallel, defaultWorkerCount } from './parallel.ts';
@@ -131,7 +132,7 @@ async function analyze(io: Io, command: Extract<Command, { kind: 'analyze' }>): 
   const results = await runAnalysis(io, project, ids, command.jobs);
   const system = project.info.unitSystem;
   if (command.format === 'json') {
-    const json = analysisJson(project, results, system, command.file) as Record<string, unknown>;
+    const json = analysisJson(project, results, system, command.file, command.detail === 'full' ? memberDetail : undefined) as Record<string, unknown>;
     io.stdout(`${JSON.stringify(results.continuous ? { ...json, continuousMembers: continuousJson(results.continuous, system) } : json, null, 2)}\n`);
   } else if (command.format === 'csv') {
     // A byte-order mark tells spreadsheet programs that the text is UTF-8 (else "kip·ft" shows garbled).

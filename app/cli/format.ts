@@ -239,21 +239,24 @@ export interface Measured {
 /** Six significant figures: enough for any check, without binary noise. */
 const sig6 = (v: number) => Number(v.toPrecision(6));
 
-function measured(quantity: Quantity, value: number | null | undefined, system: UnitSystem, unit?: UnitId): Measured | null {
+export function measured(quantity: Quantity, value: number | null | undefined, system: UnitSystem, unit?: UnitId): Measured | null {
   if (typeof value !== 'number' || !Number.isFinite(value)) return null;
   return { value: sig6(toDisplay(quantity, value, display(system), unit)), unit: unitLabel(quantity, display(system), unit) };
 }
 
 /** A dimensionless value; unit "1" (as in SI for quantities of dimension one). */
-function pure(value: number | null | undefined): Measured | null {
+export function pure(value: number | null | undefined): Measured | null {
   return typeof value === 'number' && Number.isFinite(value) ? { value: sig6(value), unit: '1' } : null;
 }
 
 /** Version of the JSON output's layout (docs/cli.md). */
 export const ANALYSIS_JSON_VERSION = 1;
 
-/** The `analyze --format json` document (see docs/cli.md for every key). */
-export function analysisJson(project: Project, results: ProjectResults, system: UnitSystem, source?: string): unknown {
+/**
+ * The `analyze --format json` document (see docs/cli.md for every key); with `detail` (the full
+ * detail, detail.ts) each member also carries `detail`.
+ */
+export function analysisJson(project: Project, results: ProjectResults, system: UnitSystem, source?: string, detail?: (member: MemberResult, system: UnitSystem) => unknown): unknown {
   const keys = keyResultsOf(project, results.members);
   return {
     format: 'hingeline-analysis-summary',
@@ -308,6 +311,7 @@ export function analysisJson(project: Project, results: ProjectResults, system: 
         governingMode: say(k.governingMode, system),
         warnings: r.warnings.map((w) => say(w, system)),
         errors: k.errors.map((e) => ({ path: e.path, message: say(e.message, system) })),
+        ...(detail && r.status !== 'input-error' ? { detail: detail(r, system) } : {}),
       };
     }),
   };

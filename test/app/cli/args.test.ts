@@ -22,6 +22,7 @@ describe('parseArguments', () => {
 
   it('reads report, validate and demo', () => {
     expect(command(['report', 'p.json', '--out', 'r.pdf', '--member', 'A'])).toEqual({ kind: 'report', file: 'p.json', out: 'r.pdf', members: ['A'] });
+    expect(command(['analyze', 'p.hingeline', '--format', 'json', '--detail', 'full'])).toEqual({ kind: 'analyze', file: 'p.hingeline', members: [], format: 'json', detail: 'full' });
     expect(command(['validate', 'p.json', '--format', 'json'])).toEqual({ kind: 'validate', file: 'p.json', format: 'json' });
     expect(command(['demo'])).toEqual({ kind: 'demo', si: false, force: false });
     expect(command(['demo', '--out', 'd.hingeline', '--si', '--force'])).toEqual({ kind: 'demo', out: 'd.hingeline', si: true, force: true });
@@ -57,6 +58,9 @@ describe('parseArguments', () => {
     [['analyze', 'a', '--bom'], /--bom goes with --format csv/],
     [['validate', 'a', '--bom'], /"validate" does not take --bom/],
     [['analyze', 'a', '--member'], /argument missing/i],
+    [['analyze', 'a', '--detail', 'full'], /--detail goes with --format json/],
+    [['analyze', 'a', '--format', 'json', '--detail', 'all'], /--detail must be summary or full/],
+    [['validate', 'a', '--detail', 'full'], /"validate" does not take --detail/],
   ])('refuses %j', (argv, message) => {
     expect(usage(argv as string[]).message).toMatch(message);
   });

@@ -418,7 +418,7 @@ function methodDifferences(
     const zone = input.zones[0]!;
     const codeWords = aci
       ? phrase`multiplies the sustained immediate deflection by λΔ = ${v.multiplier?.toFixed(2) ?? '–'} (ACI 318-19 24.2.4.1), one empirical factor for creep and shrinkage together`
-      : phrase`interpolates curvatures with Ec,eff = Ecm/(1 + φ) (Eq. 7.20) and ζ with β = 0.5, and adds the shrinkage curvature of Eq. 7.21 on the uncracked and cracked sections`;
+      : phrase`interpolates curvatures with Ec,eff = Ecm/(1 + φ) (Eq. 7.20) and ζ with β = 0.5 from the quasi-permanent moment alone (it keeps no memory of the cracks the full service load opened), and adds the shrinkage curvature of Eq. 7.21 on the uncracked and cracked sections`;
     out.push(phrase`The long-term addition is ${pct(v.longTerm)} apart (${q('deflection', v.longTerm[0])} by integration, ${q('deflection', v.longTerm[1])} by the code method). The integration takes creep through the effective modulus Ec/(1 + φ) (φ = ${zone.creepCoefficient.toFixed(2)}) on the whole concrete law, shrinkage εcs = ${(zone.shrinkageStrain * 1000).toFixed(2)} ‰ as a strain imposed on the concrete and restrained by the bars, and tension stiffening halved (β = ${SUSTAINED_STIFFENING_FACTOR}), from the damage of the largest service load; the code method ${codeWords}.`);
   }
   return out;

@@ -38,7 +38,7 @@ export interface FontDescriptor {
 
 /**
  * Fallback fonts for names in scripts Roboto does not cover (scripts.ts picks the font per piece):
- * Noto Sans Hebrew, Noto Sans Arabic and Noto Emoji (monochrome), TTF files from the
+ * Noto Sans Hebrew, Noto Sans Arabic, Noto Emoji (monochrome) and Noto Sans Math (symbols), TTF files from the
  * @expo-google-fonts packages, under the SIL Open Font License 1.1 (embedding permitted; the PDF
  * embeds subsets). Regular and medium weights; italics print upright. Keys are the family names used
  * in the document definition and the charts' SVG.
@@ -47,6 +47,10 @@ export const FALLBACK_FONTS = {
   NotoSansHebrew: { package: '@expo-google-fonts/noto-sans-hebrew', normal: '400Regular/NotoSansHebrew_400Regular.ttf', bold: '500Medium/NotoSansHebrew_500Medium.ttf' },
   NotoSansArabic: { package: '@expo-google-fonts/noto-sans-arabic', normal: '400Regular/NotoSansArabic_400Regular.ttf', bold: '500Medium/NotoSansArabic_500Medium.ttf' },
   NotoEmoji: { package: '@expo-google-fonts/noto-emoji', normal: '400Regular/NotoEmoji_400Regular.ttf', bold: '500Medium/NotoEmoji_500Medium.ttf' },
+  // Arrows (→ ⇒), geometric shapes (▲) and combining marks over Latin letters (f̄c: a cluster the
+  // report font cannot draw whole goes to the first font that can). Last: it also
+  // has Arabic letters, which it cannot join. One weight only: bold prints regular.
+  NotoSansMath: { package: '@expo-google-fonts/noto-sans-math', normal: '400Regular/NotoSansMath_400Regular.ttf', bold: '400Regular/NotoSansMath_400Regular.ttf' },
 } as const;
 
 export type FallbackFamily = keyof typeof FALLBACK_FONTS;

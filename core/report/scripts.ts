@@ -48,8 +48,10 @@ const CLUSTER_TAIL = /^(?:\p{M}|\u200D|[\uFE00-\uFE0F]|\uD83C[\uDFFB-\uDFFF]|\u2
 /** Characters that may stay in the font of the piece around them. */
 const NEUTRAL = /^[\s\p{P}\p{S}\p{N}]$/u;
 
-/** Quick test: every code unit is one Roboto covers for sure (ASCII, Latin-1, Greek, the report's symbols). */
-const PLAIN = /^[\u0000-\u024F\u0370-\u03FF\u2000-\u206F\u2070-\u209F\u2100-\u214F\u2190-\u21FF\u2200-\u22FF]*$/;
+/** Quick test: printable ASCII, which every report font covers. Anything else is looked up in the font's character map. */
+const PLAIN = /^[\u0020-\u007E]*$/;
+/** Characters a font needs no glyph for: joiners, variation selectors, tag characters (emoji sequences). */
+const INVISIBLE = /^(?:\u200D|[\uFE00-\uFE0F]|\uDB40[\uDC20-\uDC7F])$/;
 
 interface Cluster {
   readonly text: string;
@@ -105,13 +107,14 @@ function mirrored(char: string): string {
  */
 export function textPieces(text: string, fonts: ReportFontSet, bold = false): TextPiece[] {
   const primary = fonts.primary.family;
-  if (PLAIN.test(text) || text === '') return [{ text, family: primary, rightToLeft: false }];
-  const faces = [fonts.primary, ...fonts.fallbacks];
   const covers = (face: FontFamilyMetrics, cluster: string) => {
     const metrics = bold ? face.bold : face.normal;
-    for (const char of cluster) if (!CLUSTER_TAIL.test(char) && char !== '\u200D' && !metrics.has(char.codePointAt(0)!)) return false;
+    // Combining marks count: a letter with a mark the font lacks would print with an empty box.
+    for (const char of cluster) if (!INVISIBLE.test(char) && !metrics.has(char.codePointAt(0)!)) return false;
     return true;
   };
+  if (text === '' || PLAIN.test(text) || (!RTL_LETTER.test(text) && covers(fonts.primary, text))) return [{ text, family: primary, rightToLeft: false }];
+  const faces = [fonts.primary, ...fonts.fallbacks];
   const familyOf = (cluster: string, current: string | null): string => {
     // Spaces, digits and punctuation: the report font where it has them, else the piece's own font.
     if (current !== null && NEUTRAL.test(cluster) && !covers(fonts.primary, cluster)) {

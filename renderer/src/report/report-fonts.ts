@@ -1,6 +1,6 @@
 /**
  * The report's fonts in the browser: Roboto from pdfmake's virtual file system, and the Noto
- * fallbacks (Hebrew, Arabic, emoji) as build assets fetched when the first report is made. Gives
+ * fallbacks (Hebrew, Arabic, emoji, mathematical symbols) as build assets fetched when the first report is made. Gives
  * pdfmake's virtual file system (base64 by file key, as core/report/fonts.ts names the files) and
  * the metrics for the charts and the script fallback — the same files as the command line uses.
  */
@@ -11,6 +11,7 @@ import arabicRegular from '@expo-google-fonts/noto-sans-arabic/400Regular/NotoSa
 import arabicMedium from '@expo-google-fonts/noto-sans-arabic/500Medium/NotoSansArabic_500Medium.ttf?url';
 import emojiRegular from '@expo-google-fonts/noto-emoji/400Regular/NotoEmoji_400Regular.ttf?url';
 import emojiMedium from '@expo-google-fonts/noto-emoji/500Medium/NotoEmoji_500Medium.ttf?url';
+import mathRegular from '@expo-google-fonts/noto-sans-math/400Regular/NotoSansMath_400Regular.ttf?url';
 import { FALLBACK_FONTS, reportFontFiles, reportFontSet } from '../../../core/report/fonts.ts';
 import type { ReportFontSet } from '../../../core/report/scripts.ts';
 
@@ -21,6 +22,7 @@ const ASSETS: Readonly<Record<string, string>> = {
   [`${FALLBACK_FONTS.NotoSansArabic.package}/${FALLBACK_FONTS.NotoSansArabic.bold}`]: arabicMedium,
   [`${FALLBACK_FONTS.NotoEmoji.package}/${FALLBACK_FONTS.NotoEmoji.normal}`]: emojiRegular,
   [`${FALLBACK_FONTS.NotoEmoji.package}/${FALLBACK_FONTS.NotoEmoji.bold}`]: emojiMedium,
+  [`${FALLBACK_FONTS.NotoSansMath.package}/${FALLBACK_FONTS.NotoSansMath.normal}`]: mathRegular,
 };
 
 function bytesOf(base64: string): Uint8Array<ArrayBuffer> {

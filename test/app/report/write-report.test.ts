@@ -108,8 +108,8 @@ describe('writeReport', () => {
   }, 60_000);
 });
 
-describe('names in Hebrew, Arabic and with emoji (issue 17)', () => {
-  const names = ['קורה ראשית 2', 'جسر الطابق', 'Beam 🏗️ east'];
+describe('names in Hebrew, Arabic, with emoji and symbols Roboto lacks (issue 17)', () => {
+  const names = ['קורה ראשית 2', 'جسر الطابق', 'Beam 🏗️ east → f\u0304c'];
   const named = { ...project, members: project.members.map((m, i) => (i < 3 ? { ...m, name: names[i]! } : m)) };
   const namedResults = analyzeProject(named);
   let pdf: Buffer;
@@ -119,16 +119,16 @@ describe('names in Hebrew, Arabic and with emoji (issue 17)', () => {
     read = await pdfText(pdf);
   }, 120_000);
 
-  it('embeds fonts that have their glyphs (Noto Sans Hebrew, Noto Sans Arabic, Noto Emoji)', () => {
+  it('embeds fonts that have their glyphs (Noto Sans Hebrew, Noto Sans Arabic, Noto Emoji, Noto Sans Math)', () => {
     const fonts = [...pdf.toString('latin1').matchAll(/\/BaseFont \/[A-Z]{6}\+(\S+)/g)].map((m) => m[1]);
-    for (const family of ['NotoSansHebrew-Regular', 'NotoSansHebrew-Medium', 'NotoSansArabic-Medium', 'NotoEmoji-Medium']) expect(fonts).toContain(family);
+    for (const family of ['NotoSansHebrew-Regular', 'NotoSansHebrew-Medium', 'NotoSansArabic-Medium', 'NotoEmoji-Medium', 'NotoSansMath-Regular']) expect(fonts).toContain(family);
   });
 
   it('reads the names back from the PDF text', () => {
     // Shaped Arabic comes back as presentation forms, and joining glyphs as control characters in
     // the PDF's text map (pdfkit): compare after compatibility normalisation, without controls.
     const flat = read.all.normalize('NFKC').replace(/[\s\u0000-\u001f]+/g, '');
-    for (const word of ['קורה', 'ראשית', 'الطابق', 'جسر', 'Beam🏗️east']) expect(flat).toContain(word);
+    for (const word of ['קורה', 'ראשית', 'الطابق', 'جسر', 'Beam🏗️east→f\u0304c'.normalize('NFKC')]) expect(flat).toContain(word);
   });
 
   it('puts the words of a right-to-left name in visual order: the first word rightmost', async () => {

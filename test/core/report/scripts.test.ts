@@ -29,6 +29,19 @@ describe('textPieces: fonts per script and visual order (Unicode Bidirectional A
     expect(pieces('Beam 🏗️ east')).toEqual(['Roboto:Beam ', 'NotoEmoji:🏗️', 'Roboto: east']);
   });
 
+  it('sets arrows, triangles and a letter with a combining macron in the symbol font, the rest in the report font', () => {
+    // Roboto has no U+2192, U+25B2 or U+0304 (checked with fontkit); Noto Sans Math has all three.
+    // The cluster f + U+0304 (f̄) goes whole to the first font that draws both, so the bar sits over the f (Noto Sans Hebrew, first in order, has Latin letters and the mark).
+    expect(pieces('a → b')).toEqual(['Roboto:a ', 'NotoSansMath:→', 'Roboto: b']);
+    expect(pieces('▲ peak')).toEqual(['NotoSansMath:▲', 'Roboto: peak']);
+    const [bar, rest] = textPieces('f\u0304c = 31 MPa', fonts);
+    expect(bar!.text).toBe('f\u0304');
+    expect(bar!.family).not.toBe('Roboto');
+    const face = fonts.fallbacks.find((f) => f.family === bar!.family)!;
+    expect(face.normal.has(0x66) && face.normal.has(0x304)).toBe(true);
+    expect(rest).toEqual({ text: 'c = 31 MPa', family: 'Roboto', rightToLeft: false });
+  });
+
   it('mirrors brackets in a right-to-left run', () => {
     expect(pieces('(קורה)').join('|')).toBe('Roboto:(|NotoSansHebrew/rtl:קורה|Roboto:)');
     // All at level 1: reversed, the brackets mirrored (rule L4), so the page shows "(א) " left of the word.

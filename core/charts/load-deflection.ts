@@ -15,6 +15,7 @@ export const EVENT_WORDS: Readonly<Record<MemberEventKind, string>> = {
   cracking: 'cracking',
   'first-yield': 'first yield',
   hinge: 'hinge at peak moment',
+  'code-ultimate': 'code ultimate',
   peak: 'peak load',
   mechanism: 'mechanism',
   ultimate: 'ultimate',
@@ -24,13 +25,14 @@ const EVENT_SHAPES: Readonly<Record<MemberEventKind, MarkerShape>> = {
   cracking: 'circle',
   'first-yield': 'triangle',
   hinge: 'diamond',
+  'code-ultimate': 'triangle',
   peak: 'star',
   mechanism: 'square',
   ultimate: 'cross',
 };
 
 /** Events from least to most significant: a shared marker takes the shape of the most significant. */
-const EVENT_RANK: readonly MemberEventKind[] = ['cracking', 'first-yield', 'hinge', 'peak', 'mechanism', 'ultimate'];
+const EVENT_RANK: readonly MemberEventKind[] = ['cracking', 'first-yield', 'hinge', 'code-ultimate', 'peak', 'mechanism', 'ultimate'];
 
 /**
  * Chart spec of a member's load–deflection curve.

@@ -1,11 +1,12 @@
 /**
- * The discretised member the nonlinear solver works on: stations along the span, the section
- * response of each zone, and the moment fields of the loads and of the redundants.
- * Units: mm, N·mm, 1/mm.
+ * The discretised member the nonlinear solver works on: stations along the whole member, the section
+ * response of each zone, the redundants of its released structure and their unit moment fields.
+ * Units: mm, N·mm, 1/mm, rad/(N·mm) for flexibilities.
  */
 import type { SupportType } from './definition.ts';
+import { singleSpanLayout, type MemberLayout } from './layout.ts';
+import type { PlasticLaw } from './plastic-law.ts';
 import type { SectionResponse, ValueAndSlope } from './section-response.ts';
-import { redundantEnds, redundantField } from './statics.ts';
 import { zoneLookup } from './zone-lookup.ts';
 
 export interface ZoneResponse {
@@ -19,6 +20,11 @@ export interface ZoneResponse {
     readonly sagging: HingeSectionData;
     readonly hogging: HingeSectionData;
   };
+  /**
+   * The plastic part of the law per direction (core/member/plastic-law.ts): absent for elastic zones
+   * and the code methods' zones, whose curvature is the nonlinear-elastic one only.
+   */
+  readonly plastic?: { readonly sagging: PlasticLaw | null; readonly hogging: PlasticLaw | null };
 }
 
 export interface HingeSectionData {
@@ -26,13 +32,69 @@ export interface HingeSectionData {
   readonly barDiameter: number;
   readonly yieldStress: number;
   readonly ultimateStress: number;
+  /** Concrete compressive strength for bond-slip expressions, MPa (absent: not known). */
+  readonly concreteStrength?: number;
+  /** Overall height of the section, mm. */
+  readonly height?: number;
+}
+
+/**
+ * A redundant of the released structure. 'continuity': the moment over an interior support, whose
+ * unit field rises from 0 at the neighbouring supports to 1 over it. 'restraint': the moment a fixed
+ * or spring support takes, whose unit field is 1 at the support face on one side (`side`) and falls
+ * to 0 at the far end of that span. Its compatibility equation is
+ *   ∫ φ·m dx + Σ θ·m(x_θ) + flexibility·X = 0,
+ * flexibility = 1/k for a spring (rad per N·mm), 0 otherwise.
+ */
+export interface Redundant {
+  readonly kind: 'continuity' | 'restraint';
+  readonly support: number;
+  readonly from: number;
+  readonly at: number;
+  readonly to: number;
+  readonly side: 'left' | 'right' | 'both';
+  readonly flexibility: number;
+}
+
+/** The redundants of a layout: continuity at interior supports, restraint at fixed and spring supports with a span beside them. */
+export function redundantsOf(layout: MemberLayout): Redundant[] {
+  const out: Redundant[] = [];
+  const { supports, spans } = layout;
+  supports.forEach((s, j) => {
+    const left = spans.find((b) => b.rightSupport === j);
+    const right = spans.find((b) => b.leftSupport === j);
+    if (left && right) out.push({ kind: 'continuity', support: j, from: left.from, at: s.x, to: right.to, side: 'both', flexibility: 0 });
+    if (s.kind === 'pinned') return;
+    const flexibility = s.kind === 'spring' ? 1 / Math.max(s.stiffness, 1e-300) : 0;
+    // The restraint acts on the span to its right (its left one at the last support).
+    if (right) out.push({ kind: 'restraint', support: j, from: s.x, at: s.x, to: right.to, side: 'right', flexibility });
+    else if (left) out.push({ kind: 'restraint', support: j, from: left.from, at: s.x, to: s.x, side: 'left', flexibility });
+  });
+  return out;
+}
+
+/**
+ * Value of a redundant's unit field at x. At the support of a restraint field, `side` says on which
+ * side of the support the point lies ('both' where the member has only one side there).
+ */
+export function fieldValue(r: Redundant, x: number, side: 'left' | 'right' | 'both' = 'both'): number {
+  if (x < r.from || x > r.to) return 0;
+  if (x < r.at) return (x - r.from) / (r.at - r.from);
+  if (x > r.at) return (r.to - x) / (r.to - r.at);
+  if (r.kind === 'continuity' || side === 'both') return 1;
+  return side === r.side ? 1 : 0;
 }
 
 export interface BeamModel {
+  readonly layout: MemberLayout;
+  /** The single-span type for the single-span statics (continuous beams: the type their end supports resemble; use `layout`). */
   readonly support: SupportType;
+  /** Length of the member, mm (a single span: its span). */
   readonly span: number;
-  /** Station positions, ascending; a position repeats where the zone (section) changes. */
+  /** Station positions, ascending; a position repeats where the zone (section) changes or a support takes a moment. */
   readonly x: Float64Array;
+  /** Side of each station at a repeated position: −1 the left copy, +1 the right copy, 0 a single station. */
+  readonly side: Int8Array;
   /** Zone index of each segment [x[k], x[k+1]]. */
   readonly segmentZone: Int32Array;
   /**
@@ -41,41 +103,64 @@ export interface BeamModel {
    */
   readonly stationZone: Int32Array;
   readonly zones: readonly ZoneResponse[];
-  readonly redundants: readonly ('left' | 'right')[];
+  readonly redundants: readonly Redundant[];
   /** Unit moment field of each redundant at every station. */
   readonly redundantFields: readonly Float64Array[];
+  /** Flexibility of each redundant's support (1/k of a spring, 0 otherwise), rad per N·mm. */
+  readonly flexibility: Float64Array;
+  /** Station at each support, per face: the last station left of it and the first right of it (−1 where the member has no such side). */
+  readonly supportStations: readonly { readonly left: number; readonly right: number }[];
+}
+
+/** Stations of a single span, as before continuous beams: see buildLineModel. */
+export function buildBeamModel(support: SupportType, span: number, zones: readonly ZoneResponse[], extraPoints: readonly number[], segments: number): BeamModel {
+  return buildLineModel(singleSpanLayout(support, span), zones, extraPoints, segments);
 }
 
 /**
- * Stations: `segments` equal divisions plus every zone boundary (doubled, so each side has its own
- * section), every point-load position and every end of a partial uniform load.
+ * Stations: `segments` equal divisions of every span (a cantilever in proportion to the longest
+ * span, at least a quarter of them), plus every zone boundary (doubled, so each side has its own
+ * section), every support (doubled where the support takes a moment, so each side has its own
+ * moment), every point-load position and every end of a partial uniform load.
  */
-export function buildBeamModel(support: SupportType, span: number, zones: readonly ZoneResponse[], extraPoints: readonly number[], segments: number): BeamModel {
+export function buildLineModel(layout: MemberLayout, zones: readonly ZoneResponse[], extraPoints: readonly number[], segments: number): BeamModel {
+  const length = layout.length;
   const points = new Set<number>();
-  for (let i = 0; i <= segments; i++) points.add((span * i) / segments);
-  for (const p of extraPoints) if (p > 0 && p < span) points.add(p);
-  const boundaries = new Set<number>();
-  for (const z of zones) {
-    if (z.from > 0 && z.from < span) boundaries.add(z.from);
+  const reference = layout.spans.length > 0 ? Math.max(...layout.spans.map((b) => b.length)) : length;
+  for (const bay of layout.bays) {
+    // A single span (or a lone cantilever) gets exactly `segments` divisions; in a continuous beam
+    // each bay gets its share by length, at least a quarter of them.
+    const n = Math.max(Math.ceil(segments / 4), Math.round((segments * bay.length) / reference));
+    for (let i = 0; i <= n; i++) points.add(i === n ? bay.to : bay.from + (bay.length * i) / n);
   }
+  for (const p of extraPoints) if (p > 0 && p < length) points.add(p);
+  const boundaries = new Set<number>();
+  for (const z of zones) if (z.from > 0 && z.from < length) boundaries.add(z.from);
+  const redundants = redundantsOf(layout);
+  // A support that takes a moment with the member on both sides has a jump in moment there.
+  for (const r of redundants) if (r.kind === 'restraint' && r.at > 0 && r.at < length) boundaries.add(r.at);
+  for (const s of layout.supports) points.add(s.x);
   for (const b of boundaries) points.add(b);
   const sorted = [...points].sort((a, b) => a - b);
   const xs: number[] = [];
+  const sides: number[] = [];
   for (const p of sorted) {
     xs.push(p);
-    if (boundaries.has(p)) xs.push(p);
+    if (boundaries.has(p)) {
+      sides.push(-1);
+      xs.push(p);
+      sides.push(1);
+    } else sides.push(0);
   }
   const x = Float64Array.from(xs);
+  const side = Int8Array.from(sides);
   const segmentZone = new Int32Array(x.length - 1);
   const zoneAt = zoneLookup(zones);
   for (let k = 0; k < x.length - 1; k++) {
     const a = x[k]!;
     const b = x[k + 1]!;
-    let mid = 0.5 * (a + b);
-    if (b === a) {
-      // Zero-length segment at a boundary: it belongs to the zone on the right.
-      mid = a + 1e-9;
-    }
+    // A zero-length segment at a boundary belongs to the zone on the right.
+    const mid = b === a ? a + 1e-9 : 0.5 * (a + b);
     const z = zoneAt(mid);
     segmentZone[k] = z < 0 ? zones.length - 1 : z;
   }
@@ -84,9 +169,15 @@ export function buildBeamModel(support: SupportType, span: number, zones: readon
     const right = i < x.length - 1 && x[i + 1]! > x[i]! ? i : -1;
     stationZone[i] = right >= 0 ? segmentZone[right]! : segmentZone[Math.max(i - 1, 0)]!;
   }
-  const redundants = redundantEnds(support);
-  const redundantFields = redundants.map((end) => Float64Array.from(x, (xi) => redundantField(end, span, xi)));
-  return { support, span, x, segmentZone, stationZone, zones, redundants, redundantFields };
+  const sideName = (i: number) => (side[i] === -1 ? 'left' : side[i] === 1 ? 'right' : 'both') as 'left' | 'right' | 'both';
+  const redundantFields = redundants.map((r) => Float64Array.from(x, (xi, i) => fieldValue(r, xi, sideName(i))));
+  const flexibility = Float64Array.from(redundants, (r) => r.flexibility);
+  const supportStations = layout.supports.map((s) => {
+    const first = xs.indexOf(s.x);
+    const last = xs.lastIndexOf(s.x);
+    return { left: s.x > 0 ? first : -1, right: s.x < length ? last : -1 };
+  });
+  return { layout, support: layout.singleSpan ?? 'simply-supported', span: length, x, side, segmentZone, stationZone, zones, redundants, redundantFields, flexibility, supportStations };
 }
 
 /** Signed curvature (sagging positive) and flexibility dφ/dM for a signed moment in a zone. */

@@ -1,24 +1,27 @@
 /**
- * The state of a load–deflection analysis as one explicit object: the beam and its equations, the
- * plastic hinges, the recorded curve, events and distributions, and the mechanics every stage of
- * the analysis uses — solving at a load factor, restoring a solved state, the control deflection,
- * how close the most stressed station is to a section threshold, and the search for the load at
- * which an event happens. The stages themselves (load control, rotation control past the peak)
- * are core/member/capacity.ts.
+ * The state of a load–deflection analysis as one explicit object: the member and its equations, the
+ * localised hinges, the memory of the largest moments carried, the recorded curve, events and
+ * distributions, and the mechanics every stage uses — solving at a load factor or at a hinge
+ * rotation, restoring a solved state, the control deflection, how close the most stressed station is
+ * to a section threshold, and the search for the state at which an event happens. The stages
+ * themselves (load control, rotation control past the peak) are core/member/capacity.ts.
  * Internal units: mm, N·mm, 1/mm, rad.
  */
 import { regulaFalsiEvent } from '../numeric/roots.ts';
 import type { BeamModel } from './beam-model.ts';
-import { deflectionShape, trackSpanHinges } from './deflection.ts';
-import { Equations, newton, responseOf, scratch, type HingeSite, type HingeState, type LoadingFields } from './equations.ts';
+import { deflectionShape } from './deflection.ts';
+import { Equations, newton, plasticLawOf, responseOf, type EngineOptions, type LoadingFields, type Memory } from './equations.ts';
+import type { HingeRecord } from './hinges.ts';
+import type { PlasticLaw } from './plastic-law.ts';
 import type { LoadDeflectionPoint, MemberEvent, SpanDistribution } from './results.ts';
 import type { SectionResponse } from './section-response.ts';
 
-/** A solved state of the member: load factor, redundants and the rotations of softening hinges. */
+/** A solved state: load factor, redundants, the rotations of the localised hinges, and the memory including this state. */
 export interface Snapshot {
-  lambda: number;
-  redundants: number[];
-  rotations: Map<number, number>;
+  readonly lambda: number;
+  readonly redundants: number[];
+  readonly rotations: Map<number, number>;
+  readonly memory: Memory;
 }
 
 /** What a ratio search finds: the largest ratio, at which station, in which sense. */
@@ -30,24 +33,28 @@ export interface StationRatio {
 
 export class CapacityState {
   readonly eq: Equations;
-  /** Number of stations, number of redundants, span (mm). */
+  /** Number of stations, number of redundants, length of the member (mm). */
   readonly n: number;
   readonly r: number;
   readonly span: number;
   readonly events: MemberEvent[] = [];
   readonly points: LoadDeflectionPoint[] = [];
   readonly distributions: SpanDistribution[] = [];
-  readonly hinges: HingeState[] = [];
-  /** States recorded under load control (the secant point is re-solved from one of them). */
+  readonly hinges: HingeRecord[] = [];
+  /** States recorded under load control before any localisation (the secant point is re-solved from one of them). */
   readonly loadControlStates: Snapshot[] = [];
+  /** λ at which each station first yielded, per sense (NaN: not yet). */
+  readonly yieldedAt: { readonly sag: Float64Array; readonly hog: Float64Array };
   status = 'complete';
   converged = true;
   failureCause = '';
   /** Station of the control deflection. */
   controlIndex = -1;
+  /** The memory the current step solves from (that of its last committed state). */
+  baseMemory: Memory;
   /**
-   * Bumped whenever a solve overwrites the shared moment array and hinge rotations, or the hinge
-   * set or a hinge's phase changes: the caches below are valid for one version only.
+   * Bumped whenever a solve overwrites the shared moment array and hinge rotations, or the hinge set
+   * changes: the caches below are valid for one version only.
    */
   hingeVersion = 0;
   private restored: Snapshot | undefined;
@@ -56,41 +63,71 @@ export class CapacityState {
   private deflectedVersion = -1;
   private deflectedValue = 0;
 
-  constructor(readonly beam: BeamModel, readonly loads: LoadingFields) {
-    this.eq = new Equations(beam, loads);
+  constructor(readonly beam: BeamModel, readonly loads: LoadingFields, options: EngineOptions) {
+    this.eq = new Equations(beam, loads, options);
     this.n = beam.x.length;
     this.r = beam.redundants.length;
     this.span = beam.span;
+    this.baseMemory = { sag: new Float64Array(this.n), hog: new Float64Array(this.n) };
+    this.yieldedAt = { sag: new Float64Array(this.n).fill(Number.NaN), hog: new Float64Array(this.n).fill(Number.NaN) };
   }
 
-  /** Zone of the curve that applies at station i (its right-hand segment, the last one at the end). */
-  stationZone(i: number): number {
-    return this.beam.segmentZone[Math.min(i, this.n - 2)]!;
+  /** The memory after the state in `eq` (its effective moments) on top of `base`. */
+  private committed(base: Memory): Memory {
+    const me = this.eq.effective;
+    const sag = Float64Array.from(base.sag);
+    const hog = Float64Array.from(base.hog);
+    for (let i = 0; i < this.n; i++) {
+      const m = me[i]!;
+      if (m > sag[i]!) sag[i] = m;
+      if (-m > hog[i]!) hog[i] = -m;
+    }
+    return { sag, hog };
   }
 
-  /** Moves span hinges to the current moment maximum; true when any of them moved. */
-  retrack(): boolean {
-    const before = this.hinges.map((h) => h.rotationPosition);
-    trackSpanHinges(this.beam, this.eq.moment, this.hinges);
-    // A shift of a hundred-thousandth of the span does not change any result worth showing.
-    return this.hinges.some((h, i) => Math.abs(h.rotationPosition - before[i]!) > 1e-5 * this.span);
+  /** Makes a state the base of the next step; notes where the sections first yielded. */
+  commit(s: Snapshot): void {
+    this.baseMemory = s.memory;
+    const beam = this.beam;
+    for (let i = 0; i < this.n; i++) {
+      const zone = beam.zones[beam.stationZone[i]!]!;
+      for (const sign of [1, -1] as const) {
+        const law = plasticLawOf(zone, sign);
+        const when = sign > 0 ? this.yieldedAt.sag : this.yieldedAt.hog;
+        const mu = sign > 0 ? s.memory.sag[i]! : s.memory.hog[i]!;
+        if (law && law.yieldMoment !== null && mu >= law.yieldMoment && Number.isNaN(when[i]!)) when[i] = s.lambda;
+      }
+    }
   }
 
-  /** Equilibrium at load factor λ (load control), starting from `guess`; undefined when Newton fails. */
+  /** Equilibrium at load factor λ (load control) from the base memory, starting from `guess`; undefined when Newton fails. */
   solveAt(lambda: number, guess: Snapshot): Snapshot | undefined {
     const hinges = this.hinges;
-    const free = hinges.map((h, i) => (h.phase === 'softening' ? i : -1)).filter((i) => i >= 0);
-    let start = { redundants: guess.redundants, lambda, rotations: free.map((i) => guess.rotations.get(i) ?? hinges[i]!.rotation) };
-    let res = newton(this.eq, hinges, free, false, start);
-    for (let pass = 0; pass < 2 && res.converged && this.retrack(); pass++) {
-      start = { redundants: res.redundants, lambda, rotations: res.rotations };
-      res = newton(this.eq, hinges, free, false, start);
-    }
+    const free = hinges.map((_, i) => i);
+    const start = { redundants: guess.redundants, lambda, rotations: free.map((i) => guess.rotations.get(i) ?? hinges[i]!.rotation) };
+    const res = newton(this.eq, hinges, free, false, start, this.baseMemory);
     this.hingeVersion++; // the solve overwrote the shared moment array and hinge rotations
     if (!res.converged) return undefined;
     const rotations = new Map<number, number>();
     free.forEach((h, i) => rotations.set(h, res.rotations[i]!));
-    return { lambda, redundants: res.redundants, rotations };
+    this.eq.moments(res.redundants, lambda);
+    return { lambda, redundants: res.redundants, rotations, memory: this.committed(this.baseMemory) };
+  }
+
+  /** Equilibrium with the rotation of hinge `controlled` prescribed and λ an unknown. */
+  solveAtRotation(controlled: number, theta: number, from: Snapshot): Snapshot | undefined {
+    const hinges = this.hinges;
+    hinges[controlled]!.rotation = theta;
+    this.hingeVersion++;
+    const free = hinges.map((_, i) => (i !== controlled ? i : -1)).filter((i) => i >= 0);
+    const res = newton(this.eq, hinges, free, true, { redundants: from.redundants, lambda: from.lambda, rotations: free.map((i) => from.rotations.get(i) ?? hinges[i]!.rotation) }, this.baseMemory, controlled);
+    this.hingeVersion++;
+    if (!res.converged) return undefined;
+    const rotations = new Map<number, number>();
+    free.forEach((h, i) => rotations.set(h, res.rotations[i]!));
+    rotations.set(controlled, theta);
+    this.eq.moments(res.redundants, res.lambda);
+    return { lambda: res.lambda, redundants: res.redundants, rotations, memory: this.committed(this.baseMemory) };
   }
 
   /**
@@ -101,21 +138,16 @@ export class CapacityState {
     if (s === this.restored && this.restoredVersion === this.hingeVersion) return this.eq.moment;
     this.restored = s;
     this.restoredVersion = this.hingeVersion;
-    for (const [i, v] of s.rotations) this.hinges[i]!.rotation = v;
+    this.hinges.forEach((h, i) => {
+      h.rotation = s.rotations.get(i) ?? 0;
+    });
     this.eq.moments(s.redundants, s.lambda);
-    trackSpanHinges(this.beam, this.eq.moment, this.hinges);
-    // hardening hinges' rotation values for reporting
-    for (const h of this.hinges) {
-      if (h.phase === 'hardening') {
-        responseOf(this.beam.zones[h.zone]!, h.sign).plastic(h.sign * this.eq.moment[h.station]!, scratch);
-        h.rotation = h.length * scratch.value;
-      }
-    }
     return this.eq.moment;
   }
 
-  deflectionAt(s: Snapshot): Float64Array {
-    return deflectionShape(this.beam, this.restore(s), this.hinges);
+  deflectionAt(s: Snapshot, curvatureOut?: Float64Array): Float64Array {
+    this.restore(s);
+    return deflectionShape(this.eq, s.memory, this.hinges, curvatureOut);
   }
 
   /** Deflection at the control station (the last answer is remembered). */
@@ -128,84 +160,75 @@ export class CapacityState {
     return this.deflectedValue;
   }
 
-  /** Adds a point of the load–deflection curve. */
-  record(s: Snapshot, stage: 'integration' | 'mechanism'): void {
-    if (stage === 'integration') this.loadControlStates.push(s);
-    this.points.push({ loadFactor: s.lambda, totalLoad: this.loads.constantTotal + s.lambda * this.loads.patternTotal, deflection: this.controlDeflection(s), stage });
+  totalLoad(s: Snapshot): number {
+    return this.loads.constantTotal + s.lambda * this.loads.patternTotal;
   }
 
-  /** Moment, curvature (with the hinges' rotations spread over their lengths) and deflection along the span. */
+  /** Adds a point of the load–deflection curve. */
+  record(s: Snapshot, stage: 'integration' | 'mechanism'): void {
+    if (stage === 'integration' && this.hinges.length === 0) this.loadControlStates.push(s);
+    this.points.push({ loadFactor: s.lambda, totalLoad: this.totalLoad(s), deflection: this.controlDeflection(s), stage });
+  }
+
+  /** Moment, curvature (with the localised rotations spread over their lengths) and deflection along the member. */
   distribution(label: string, s: Snapshot): SpanDistribution {
-    const { beam, n, span } = this;
+    const { beam, n } = this;
     const curvature = new Float64Array(n);
-    const moment = Float64Array.from(this.restore(s));
-    const deflection = deflectionShape(beam, moment, this.hinges, curvature);
+    const deflection = this.deflectionAt(s, curvature);
+    const moment = Float64Array.from(this.eq.moment);
     const hingeZones: [number, number][] = [];
     for (const h of this.hinges) {
-      if (h.rotation <= 0) continue;
-      const a = Math.max(0, h.rotationPosition - h.length / 2);
-      const b = Math.min(span, h.rotationPosition + h.length / 2);
+      const a = Math.max(0, h.position - h.length / 2);
+      const b = Math.min(this.span, h.position + h.length / 2);
       hingeZones.push([a, b]);
+      if (h.rotation <= 0) continue;
       for (let i = 0; i < n; i++) if (beam.x[i]! >= a && beam.x[i]! <= b) curvature[i] = curvature[i]! + (h.sign * h.rotation) / h.length;
+    }
+    // Yielded zones as well: where the plastic curvature spread.
+    for (const sign of [1, -1] as const) {
+      const mem = sign > 0 ? s.memory.sag : s.memory.hog;
+      let start = -1;
+      for (let i = 0; i <= n; i++) {
+        const law = i < n ? plasticLawOf(beam.zones[beam.stationZone[i]!]!, sign) : null;
+        const yielded = i < n && !!law && law.yieldMoment !== null && mem[i]! >= law.yieldMoment;
+        if (yielded && start < 0) start = i;
+        if (!yielded && start >= 0) {
+          hingeZones.push([beam.x[start]!, beam.x[i - 1]!]);
+          start = -1;
+        }
+      }
     }
     return { label, loadFactor: s.lambda, x: [...beam.x], moment: [...moment], curvature: [...curvature], deflection: [...deflection], hingeZones };
   }
 
-  /** How far the most stressed station is from a section threshold (ratio of moment to threshold). */
-  maxRatio(s: Snapshot, pick: (resp: SectionResponse) => number | null, filter?: (i: number, sign: 1 | -1) => boolean): StationRatio {
-    const M = this.restore(s);
+  /** The law of station i in a sense (null: no plastic law, e.g. an elastic zone). */
+  law(i: number, sign: 1 | -1): PlasticLaw | null {
+    return plasticLawOf(this.beam.zones[this.beam.stationZone[i]!]!, sign);
+  }
+
+  /** How far the most stressed station is from a section threshold (ratio of effective moment to threshold). */
+  maxRatio(s: Snapshot, pick: (resp: SectionResponse, law: PlasticLaw | null) => number | null, filter?: (i: number, sign: 1 | -1) => boolean): StationRatio {
+    this.restore(s);
+    const me = this.eq.effective;
     const beam = this.beam;
     let best = -Infinity;
     let at = -1;
     let sign: 1 | -1 = 1;
     for (let i = 0; i < this.n; i++) {
-      const m = M[i]!;
+      const m = me[i]!;
       const sg: 1 | -1 = m >= 0 ? 1 : -1;
       if (filter && !filter(i, sg)) continue;
-      // A station at a zone boundary belongs to both zones: check the weaker.
-      const left = beam.segmentZone[Math.max(i - 1, 0)]!;
-      const right = this.stationZone(i);
-      for (let pass = 0; pass < (left === right ? 1 : 2); pass++) {
-        const threshold = pick(responseOf(beam.zones[pass === 0 ? right : left]!, sg));
-        if (threshold === null || !(threshold > 0)) continue;
-        const ratio = (sg * m) / threshold;
-        if (ratio > best) {
-          best = ratio;
-          at = i;
-          sign = sg;
-        }
+      const zone = beam.zones[beam.stationZone[i]!]!;
+      const threshold = pick(responseOf(zone, sg), plasticLawOf(zone, sg));
+      if (threshold === null || !(threshold > 0)) continue;
+      const ratio = (sg * m) / threshold;
+      if (ratio > best) {
+        best = ratio;
+        at = i;
+        sign = sg;
       }
     }
     return { ratio: best, station: at, sign };
-  }
-
-  /** The most stressed interior or end station of a hinge site in its sense, against first yield. */
-  yieldRatio(site: HingeSite, s: Snapshot): StationRatio {
-    const n = this.n;
-    const filter = (i: number, sg: 1 | -1) => {
-      if (sg !== (site === 'span' ? 1 : -1)) return false;
-      if (site === 'left') return i === 0;
-      if (site === 'right') return i === n - 1;
-      return i > 0 && i < n - 1;
-    };
-    return this.maxRatio(s, (resp) => resp.firstYieldMoment, filter);
-  }
-
-  /**
-   * Stations outside every plastic hinge zone, against their section's peak moment. Sections
-   * within a hinge's length belong to the hinge (its moment governs them), so they are excluded.
-   */
-  overstress(s: Snapshot): StationRatio {
-    this.restore(s);
-    const { beam, span } = this;
-    const spacing = span / Math.max(this.n - 1, 1);
-    const zones = this.hinges.map((h) => {
-      const half = Math.max(h.length / 2, 1.01 * spacing);
-      if (h.site === 'left') return [0, Math.max(h.length, 1.01 * spacing)] as const;
-      if (h.site === 'right') return [span - Math.max(h.length, 1.01 * spacing), span] as const;
-      return [beam.x[h.station]! - half, beam.x[h.station]! + half] as const;
-    });
-    return this.maxRatio(s, (resp) => resp.peakMoment, (i) => !zones.some(([a, b]) => beam.x[i]! >= a && beam.x[i]! <= b));
   }
 
   /**
@@ -218,7 +241,7 @@ export class CapacityState {
       { x: b.lambda, state: b },
       (lambda, from) => this.solveAt(lambda, from),
       g,
-      { maxIterations: 60, xTolerance: (hi) => 1e-6 * Math.max(hi, 1e-12) },
+      { maxIterations: 60, xTolerance: (hi) => 1e-6 * Math.max(Math.abs(hi), 1e-12) },
     ).state;
   }
 }

@@ -1,21 +1,24 @@
 /**
- * Nonlinear load–deflection analysis of a member, event to event:
+ * Nonlinear load–deflection analysis of a member to its best-estimate ultimate, event to event:
  *
- * 1. Load control on the load factor λ. At each level the redundant end moments follow from
- *    compatibility with the current nonlinear flexibility (Newton's method with the exact
- *    tangent of the tabulated curves, core/member/equations.ts), so moments redistribute as
- *    sections crack and yield. Curvature is integrated along the span (exactly for curvature
- *    linear between stations).
- * 2. When a critical section (support face, or the most stressed section in the span) reaches
- *    first yield, a plastic hinge becomes active there: beyond M′y the distributed curvature
- *    follows the elastic extension and the plastic part is lumped as θp = (φ − φe)·Lp
- *    (core/member/section-response.ts).
- * 3. When a hinge reaches its section's peak moment it can take no more; its rotation becomes an
- *    unknown and its moment follows the descending branch. Once more hinges are past their peak
- *    than the beam has redundants, it is a mechanism: control switches from λ to the rotation of
- *    the newest hinge, and λ follows from equilibrium.
- * 4. Ultimate: a hinge reaches its rotation capacity θp,u = (φu − φe(Mu))·Lp, or a section with no
- *    hinge reaches its peak moment (e.g. at a bar cut-off).
+ * 1. Load control on the load factor λ. At each level the redundants follow from compatibility with
+ *    the current nonlinear flexibility (Newton's method with the exact tangent of the tabulated
+ *    laws, core/member/equations.ts), so moments redistribute as sections crack and yield. The whole
+ *    law up to the localisation moment — cracking, yield, hardening — is integrated along the member:
+ *    plasticity spreads wherever the moment exceeds first yield (a constant-moment zone yields
+ *    throughout), and sections that unload keep their plastic curvature (core/member/plastic-law.ts).
+ * 2. When a section reaches its localisation moment (the top of its curve), its further deformation
+ *    localises in a hinge of length Lp (core/member/hinges.ts): the hinge's rotation becomes an
+ *    unknown and its moment follows the rest of the section's curve. In a zone of equal moment the
+ *    hinge sits at the middle of the zone (common practice, no source).
+ * 3. When more hinges have localised than the member has redundants (a mechanism), or load control
+ *    finds no equilibrium beyond a limit point, control switches to the rotation of the newest hinge
+ *    and λ follows from equilibrium: the descending branch.
+ * 4. The best-estimate ultimate is the first of: the load on the descending branch falls to
+ *    `ultimateLoadFraction` (0.8) of the peak (Park 1988, from memory); a hinge reaches the end of its
+ *    section's curve (crushing, rupture, the curve's moment drop); a section localises with nothing
+ *    left of its curve (a brittle section). The code ultimate — where a section first reaches the
+ *    code's crushing strain — is recorded on the way.
  *
  * The state of the analysis is one explicit object (CapacityState, core/member/capacity-state.ts);
  * this file holds the stages. Internal units: mm, N·mm, 1/mm, rad.
@@ -24,11 +27,11 @@ import { regulaFalsiEvent } from '../numeric/roots.ts';
 import type { BeamModel } from './beam-model.ts';
 import { CapacityState, type Snapshot } from './capacity-state.ts';
 import type { CapacitySettings } from './definition.ts';
-import { newton, responseOf, type HingeSite, type HingeState, type LoadingFields } from './equations.ts';
-import { describePosition, hingeResult, hingeSites, newHinge, overstressWords, SITE_WORDS } from './hinges.ts';
+import { freshMemory, plasticLawOf, type EngineOptions, type LoadingFields } from './equations.ts';
+import { describePosition, hingeReport, interpolateAt, limitWords, localiseAt, stationPlastic } from './hinges.ts';
+import { LOCALISATION_TOLERANCE, plasticAt } from './plastic-law.ts';
 import type { LoadDeflectionPoint, MemberEvent, PlasticHinge, SpanDistribution } from './results.ts';
-
-export { describePosition };
+import { engineOptions, ULTIMATE_LOAD_FRACTION } from './spread.ts';
 
 export interface CapacityCurve {
   readonly points: LoadDeflectionPoint[];
@@ -38,65 +41,65 @@ export interface CapacityCurve {
   readonly controlPosition: number;
   readonly status: string;
   readonly converged: boolean;
-  readonly firstYield: { readonly lambda: number; readonly deflection: number } | null;
+  readonly cracking: { readonly lambda: number; readonly totalLoad: number; readonly deflection: number } | null;
+  readonly firstYield: { readonly lambda: number; readonly totalLoad: number; readonly deflection: number } | null;
   readonly peak: { readonly lambda: number; readonly deflection: number };
+  /** The best-estimate ultimate (end of the curve), null when no limit state was reached. */
   readonly ultimate: { readonly lambda: number; readonly deflection: number } | null;
+  /** Where a section first reaches the code's crushing strain, null when no section does before the end. */
+  readonly codeUltimate: { readonly lambda: number; readonly deflection: number; readonly position: number } | null;
   readonly failureCause: string;
   /**
    * The state at 75 % of the largest load, solved exactly (not read off the sampled curve), for the
-   * nominal yield deflection; null when that load lies beyond a softening hinge.
+   * nominal yield deflection; null when that load lies beyond a localisation.
    */
   readonly secantPoint: { readonly loadFactor: number; readonly totalLoad: number; readonly deflection: number } | null;
 }
 
-/** An event the load-control stage watches for: g < 0 before it, ≥ 0 at and after it. */
-interface LoadEvent {
-  readonly kind: 'cracking' | 'yield' | 'peak' | 'capacity' | 'overstress';
-  readonly site?: HingeSite;
-  readonly hinge?: number;
-  readonly g: (s: Snapshot) => number;
-}
-
-/** An event of the rotation-control stage past the peak load. */
-interface RotationEvent {
-  readonly kind: 'peak' | 'capacity' | 'overstress';
+/** An event the stages watch for: g < 0 before it, ≥ 0 at and after it. */
+interface Watch {
+  readonly kind: 'cracking' | 'yield' | 'localisation' | 'code' | 'capacity' | 'drop' | 'unloaded';
   readonly hinge?: number;
   readonly g: (s: Snapshot) => number;
 }
 
 /**
  * Runs the load–deflection analysis to ultimate.
- * @param loads    moment fields of the constant loads and of the pattern
- * @param capacity hinge length method etc.
+ * @param loads     moment fields of the constant loads and of the pattern
+ * @param capacity  hinge length, tension shift, strain penetration, ultimate load fraction
  * @param controlAt station (mm) whose deflection the curve follows, when the caller chose one
  */
-export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: CapacitySettings, controlAt?: number): CapacityCurve {
-  return new CapacityAnalysis(beam, loads, capacity).run(controlAt);
+export function capacityCurve(beam: BeamModel, loads: LoadingFields, capacity: CapacitySettings, controlAt?: number, options?: EngineOptions): CapacityCurve {
+  return new CapacityAnalysis(beam, loads, capacity, options ?? engineOptions(beam, capacity)).run(controlAt);
 }
 
 class CapacityAnalysis extends CapacityState {
-  private readonly sites: HingeSite[];
-  private firstYield: { lambda: number; deflection: number } | null = null;
-  private crackedYet = false;
-  private peak = { lambda: 0, deflection: 0 };
+  private cracking: { lambda: number; totalLoad: number; deflection: number } | null = null;
+  private firstYield: { lambda: number; totalLoad: number; deflection: number } | null = null;
+  private codeUltimate: { lambda: number; deflection: number; position: number } | null = null;
+  private peak = { lambda: 0, deflection: 0, load: -Infinity };
   private ultimate: { lambda: number; deflection: number } | null = null;
   private mechanism = false;
   private finished = false;
   private state: Snapshot;
+  /** Stations next to a zone that has yielded, per sense (a yield there is the zone spreading, not a new hinge). */
+  /** Stations where a yield event was reported, per sense. */
+  private readonly yieldSites = { sag: new Set<number>(), hog: new Set<number>() };
+  private readonly fraction: number;
 
-  constructor(beam: BeamModel, loads: LoadingFields, private readonly capacity: CapacitySettings) {
-    super(beam, loads);
-    this.sites = hingeSites(beam.support);
-    this.state = { lambda: 0, redundants: new Array(this.r).fill(0), rotations: new Map() };
+  constructor(beam: BeamModel, loads: LoadingFields, private readonly capacity: CapacitySettings, private readonly options: EngineOptions) {
+    super(beam, loads, options);
+    this.state = { lambda: 0, redundants: new Array(this.r).fill(0), rotations: new Map(), memory: freshMemory(this.n) };
+    this.fraction = capacity.ultimateLoadFraction ?? ULTIMATE_LOAD_FRACTION;
   }
 
   run(controlAt: number | undefined): CapacityCurve {
-    const { beam, n, span } = this;
-    // --- initial state and step size ---------------------------------------------------------------
+    const { beam, n } = this;
     const s0 = this.solveAt(0, this.state);
     if (!s0) return this.failed('no equilibrium under the constant loads');
     this.state = s0;
-    // Reference λ: first station at its peak moment, estimated from a small elastic step.
+    this.commit(s0);
+    // Reference λ: the first station at its localisation moment, estimated from a small elastic step.
     const probe = this.solveAt(1e-6, this.state);
     if (!probe) return this.failed('no equilibrium at the first load step');
     const Mprobe = Float64Array.from(this.restore(probe));
@@ -106,8 +109,9 @@ class CapacityAnalysis extends CapacityState {
       const dm = (Mprobe[i]! - M0[i]!) / 1e-6;
       if (Math.abs(dm) < 1e-9) continue;
       const sg: 1 | -1 = dm > 0 ? 1 : -1;
-      const resp = responseOf(beam.zones[this.stationZone(i)]!, sg);
-      const lam = (resp.peakMoment - sg * M0[i]!) / (sg * dm);
+      const law = this.law(i, sg);
+      const limit = law ? law.localisationMoment : beam.zones[beam.stationZone[i]!]![sg > 0 ? 'sagging' : 'hogging'].peakMoment;
+      const lam = (limit - sg * M0[i]!) / (sg * dm);
       if (lam > 0) lambdaRef = Math.min(lambdaRef, lam);
     }
     if (!Number.isFinite(lambdaRef)) return this.failed('the load pattern produces no moment in the member');
@@ -122,9 +126,6 @@ class CapacityAnalysis extends CapacityState {
         this.controlIndex = i;
       }
     }
-    // Prefer exact midspan for symmetric cases (largest deflection within 0.01 % of it).
-    const mid = beam.x.findIndex((xi) => Math.abs(xi - span / 2) < 1e-9);
-    if (beam.support !== 'cantilever' && mid >= 0 && Math.abs(probeDeflection[mid]! - baseDeflection[mid]!) >= biggest * (1 - 1e-4)) this.controlIndex = mid;
     // A control position given by the caller (a station placed where the elastic deflection peaks)
     // keeps the curve independent of the station spacing.
     if (controlAt !== undefined) {
@@ -133,96 +134,297 @@ class CapacityAnalysis extends CapacityState {
     }
     const controlPosition = beam.x[this.controlIndex]!;
     this.record(this.state, 'integration');
-    this.peak = { lambda: 0, deflection: this.controlDeflection(this.state) };
+    this.notePeak(this.state);
 
     this.loadControl(lambdaRef);
     this.rotationControl();
 
-    const points = this.points;
-    if (this.peak.lambda === 0 || points.length > 0) {
-      const best = points.reduce((a, b) => (b.loadFactor > a.loadFactor ? b : a), points[0]!);
-      if (best.loadFactor >= this.peak.lambda) this.peak = { lambda: best.loadFactor, deflection: best.deflection };
+    const curve = this.finish(controlPosition);
+    return curve;
+  }
+
+  private notePeak(s: Snapshot): void {
+    const load = this.totalLoad(s);
+    if (load > this.peak.load) this.peak = { lambda: s.lambda, deflection: this.controlDeflection(s), load };
+  }
+
+  /**
+   * Stations in a yielded zone (at state s) that holds a reported yield site, per sense: a yield
+   * there is the zone spreading, not a new hinge. A zone connects through stations past first yield.
+   */
+  private reportedZones(s: Snapshot): { sag: Uint8Array; hog: Uint8Array } {
+    const n = this.n;
+    const out = { sag: new Uint8Array(n), hog: new Uint8Array(n) };
+    for (const sign of [1, -1] as const) {
+      const mem = sign > 0 ? s.memory.sag : s.memory.hog;
+      const mark = sign > 0 ? out.sag : out.hog;
+      const sites = sign > 0 ? this.yieldSites.sag : this.yieldSites.hog;
+      if (sites.size === 0) continue;
+      const yielded = (i: number) => {
+        const law = this.law(i, sign);
+        return !!law && law.yieldMoment !== null && mem[i]! >= law.yieldMoment * (1 - 1e-9);
+      };
+      let i = 0;
+      while (i < n) {
+        if (!yielded(i)) {
+          i++;
+          continue;
+        }
+        let j = i;
+        while (j + 1 < n && yielded(j + 1)) j++;
+        let reported = false;
+        for (let k = i; k <= j && !reported; k++) reported = sites.has(k);
+        if (reported) for (let k = Math.max(i - 1, 0); k <= Math.min(j + 1, n - 1); k++) mark[k] = 1;
+        i = j + 1;
+      }
     }
-    return {
-      points,
-      events: this.events,
-      hinges: this.hinges.map((h) => hingeResult(this.beam, h, this.capacity.hingeLengthMethod)),
-      distributions: this.distributions,
-      controlPosition,
-      status: this.status,
-      converged: this.converged,
-      firstYield: this.firstYield,
-      peak: this.peak,
-      ultimate: this.ultimate,
-      failureCause: this.failureCause,
-      secantPoint: this.secantPoint(),
-    };
+    return out;
   }
 
-  // --- load control ----------------------------------------------------------------------------------
-
-  private crackingRatio(s: Snapshot): number {
-    return this.maxRatio(s, (resp) => resp.crackingMoment).ratio - 1;
+  /**
+   * Where an event found by the effective moment happens: among the stations within the tension
+   * shift of `station`, the middle of those with the largest moment itself (for the words).
+   */
+  private eventPosition(s: Snapshot, station: number, sign: 1 | -1): number {
+    const M = this.restore(s);
+    const x = this.beam.x;
+    const shift = this.options.shift ? (sign > 0 ? this.options.shift.sagging : this.options.shift.hogging)[this.beam.stationZone[station]!]! : 0;
+    let best = -Infinity;
+    for (let i = 0; i < this.n; i++) if (Math.abs(x[i]! - x[station]!) <= shift + 1e-9) best = Math.max(best, sign * M[i]!);
+    let lo = Infinity;
+    let hi = -Infinity;
+    for (let i = 0; i < this.n; i++) {
+      if (Math.abs(x[i]! - x[station]!) > shift + 1e-9 || sign * M[i]! < best - 1e-9 * Math.abs(best)) continue;
+      lo = Math.min(lo, x[i]!);
+      hi = Math.max(hi, x[i]!);
+    }
+    return Number.isFinite(lo) ? 0.5 * (lo + hi) : x[station]!;
   }
 
-  private candidates(): LoadEvent[] {
-    const list: LoadEvent[] = [];
-    if (!this.crackedYet) list.push({ kind: 'cracking', g: (s) => this.crackingRatio(s) });
-    for (const site of this.sites) if (!this.hinges.some((h) => h.site === site)) list.push({ kind: 'yield', site, g: (s) => this.yieldRatio(site, s).ratio - 1 });
+  /** The most stressed station, against first yield, outside the zones already reported. */
+  private newYield(s: Snapshot) {
+    const zones = this.reportedZones(s);
+    return this.maxRatio(s, (resp, law) => law?.yieldMoment ?? null, (i, sg) => (sg > 0 ? zones.sag : zones.hog)[i] === 0);
+  }
+
+  private commitState(s: Snapshot): void {
+    this.state = s;
+    this.commit(s);
+    this.notePeak(s);
+  }
+
+  // --- event functions ------------------------------------------------------------------------------
+
+  /**
+   * Stations that belong to a hinge of the same sense and cannot localise again (at state s): those
+   * within Lp/2 of it (and the tension shift), and those joined to it through stations at the top of
+   * their curves — a zone of equal moment, or the flat top of a smooth maximum, localises once.
+   */
+  private hingeShadow(s: Snapshot): { sag: Uint8Array; hog: Uint8Array } {
+    const n = this.n;
+    const out = { sag: new Uint8Array(n), hog: new Uint8Array(n) };
+    if (this.hinges.length === 0) return out;
+    const me = this.restore(s) && this.eq.effective;
+    const x = this.beam.x;
+    const spacing = this.beam.span / Math.max(n - 1, 1);
+    const top = 1 - 2 * LOCALISATION_TOLERANCE;
+    for (const h of this.hinges) {
+      const mark = h.sign > 0 ? out.sag : out.hog;
+      const shift = this.options.shift ? (h.sign > 0 ? this.options.shift.sagging : this.options.shift.hogging)[h.zone]! : 0;
+      const reach = h.length / 2 + shift + 1.01 * spacing;
+      let nearest = 0;
+      for (let i = 0; i < n; i++) {
+        if (Math.abs(x[i]! - h.critical) <= reach) mark[i] = 1;
+        if (Math.abs(x[i]! - h.critical) < Math.abs(x[nearest]! - h.critical)) nearest = i;
+      }
+      const atTop = (i: number) => {
+        const law = this.law(i, h.sign);
+        return !!law && (h.sign * me[i]!) / law.localisationMoment >= top;
+      };
+      for (let i = nearest; i >= 0 && (mark[i] === 1 || atTop(i)); i--) mark[i] = 1;
+      for (let i = nearest; i < n && (mark[i] === 1 || atTop(i)); i++) mark[i] = 1;
+    }
+    return out;
+  }
+
+  private localisationRatio(s: Snapshot) {
+    const shadow = this.hingeShadow(s);
+    return this.maxRatio(s, (resp, law) => law?.localisationMoment ?? resp.peakMoment, (i, sg) => (sg > 0 ? shadow.sag : shadow.hog)[i] === 0);
+  }
+
+  private watches(stage: 'load' | 'rotation', controlled = -1): Watch[] {
+    const list: Watch[] = [];
+    if (!this.cracking) list.push({ kind: 'cracking', g: (s) => this.maxRatio(s, (resp) => resp.crackingMoment).ratio - 1 });
+    list.push({ kind: 'yield', g: (s) => this.newYield(s).ratio - 1 });
+    list.push({ kind: 'localisation', g: (s) => this.localisationRatio(s).ratio - 1 });
+    if (!this.codeUltimate) list.push({ kind: 'code', g: (s) => this.codeRatio(s) - 1 });
     this.hinges.forEach((h, i) => {
-      if (h.phase === 'hardening') list.push({ kind: 'peak', hinge: i, g: this.peakEvent(h) });
-      else list.push({ kind: 'capacity', hinge: i, g: this.capacityEvent(h, i) });
+      if (h.law.ultimateLocalised > 0 && (stage === 'load' || i !== controlled)) list.push({ kind: 'capacity', hinge: i, g: (s) => (s.rotations.get(i) ?? h.rotation) / (h.law.ultimateLocalised * h.length) - (1 - 1e-9) });
     });
-    list.push({ kind: 'overstress', g: (s) => this.overstress(s).ratio - (1 + 1e-9) });
+    if (stage === 'rotation') {
+      list.push({ kind: 'drop', g: (s) => (this.fraction * this.peak.load - this.totalLoad(s)) / Math.max(Math.abs(this.peak.load), 1e-9) });
+      if (this.loads.constantTotal > 0) list.push({ kind: 'unloaded', g: (s) => -s.lambda });
+    }
     return list;
   }
 
-  /** g of a hardening hinge reaching its section's peak moment. */
-  private peakEvent(h: HingeState): (s: Snapshot) => number {
-    const resp = responseOf(this.beam.zones[h.zone]!, h.sign);
-    return (s) => (h.sign * this.restore(s)[h.station]!) / resp.peakMoment - (1 - 1e-9);
+  /** The largest ratio of a section's state to the code's crushing strain (moment on the spread branch, localised curvature in a hinge). */
+  private codeRatio(s: Snapshot): number {
+    this.restore(s);
+    const me = this.eq.effective;
+    let best = -Infinity;
+    for (let i = 0; i < this.n; i++) {
+      const sign: 1 | -1 = me[i]! >= 0 ? 1 : -1;
+      const cc = this.law(i, sign)?.codeCrushing;
+      if (!cc || cc.localised !== null || !(cc.moment > 0)) continue;
+      const mem = sign > 0 ? s.memory.sag[i]! : s.memory.hog[i]!;
+      best = Math.max(best, Math.max(sign * me[i]!, mem) / cc.moment);
+    }
+    this.hinges.forEach((h, k) => {
+      const cc = h.law.codeCrushing;
+      if (!cc) return;
+      if (cc.localised === null) best = Math.max(best, 1);
+      else if (cc.localised > 0) best = Math.max(best, (s.rotations.get(k) ?? h.rotation) / h.length / cc.localised);
+      else best = Math.max(best, 1);
+    });
+    return best;
   }
 
-  /** g of a softening hinge reaching its rotation capacity. */
-  private capacityEvent(h: HingeState, index: number): (s: Snapshot) => number {
-    return (s) => (s.rotations.get(index) ?? h.rotation) / h.capacity - (1 - 1e-9);
+  /** The critical section of a localisation: the largest moment ratio, the middle of a zone of equal moment, or the vertex of a smooth maximum. */
+  private criticalSection(s: Snapshot, station: number, sign: 1 | -1): number {
+    const M = this.restore(s);
+    const { beam, n } = this;
+    const x = beam.x;
+    const ratio = (i: number) => {
+      const law = this.law(i, sign);
+      const limit = law?.localisationMoment ?? beam.zones[beam.stationZone[i]!]![sign > 0 ? 'sagging' : 'hogging'].peakMoment;
+      return (sign * M[i]!) / limit;
+    };
+    // The largest raw moment ratio near the station that reached the event (the tension shift lets a
+    // station feel a larger moment within a_l of it).
+    const shift = this.options.shift ? (sign > 0 ? this.options.shift.sagging : this.options.shift.hogging)[beam.stationZone[station]!]! : 0;
+    const shadow = this.hingeShadow(s);
+    this.restore(s);
+    let best = station;
+    for (let i = 0; i < n; i++) {
+      if (Math.abs(x[i]! - x[station]!) > shift + 1e-9 || (sign > 0 ? shadow.sag : shadow.hog)[i] === 1) continue;
+      if (ratio(i) > ratio(best)) best = i;
+    }
+    const top = ratio(best);
+    const tol = 1e-7 * Math.abs(top);
+    let lo = best;
+    let hi = best;
+    while (lo > 0 && ratio(lo - 1) >= top - tol) lo--;
+    while (hi < n - 1 && ratio(hi + 1) >= top - tol) hi++;
+    if (x[hi]! > x[lo]!) return 0.5 * (x[lo]! + x[hi]!);
+    if (best === 0 || best === n - 1) return x[best]!;
+    const x0 = x[best - 1]!;
+    const x1 = x[best]!;
+    const x2 = x[best + 1]!;
+    if (!(x1 > x0 && x2 > x1)) return x1;
+    const d01 = (ratio(best) - ratio(best - 1)) / (x1 - x0);
+    const d12 = (ratio(best + 1) - ratio(best)) / (x2 - x1);
+    const c = (d12 - d01) / (x2 - x0);
+    if (!(c < 0)) return x1;
+    // A kink (a point load there) is the maximum itself: the parabola through it would move the
+    // critical section off the load by an amount that depends on the station spacing. A smooth
+    // maximum has the same second difference at its neighbours; a kink's is far larger.
+    const second = (i: number) => {
+      if (i <= 0 || i >= n - 1 || !(x[i]! > x[i - 1]! && x[i + 1]! > x[i]!)) return Number.NaN;
+      return ((ratio(i + 1) - ratio(i)) / (x[i + 1]! - x[i]!) - (ratio(i) - ratio(i - 1)) / (x[i]! - x[i - 1]!)) / (x[i + 1]! - x[i - 1]!);
+    };
+    const around = Math.max(Math.abs(second(best - 1)) || 0, Math.abs(second(best + 1)) || 0);
+    if (Math.abs(c) > 2 * around) return x1;
+    const vertex = 0.5 * (x0 + x1) - d01 / (2 * c);
+    return vertex > x0 && vertex < x2 ? vertex : x1;
   }
 
-  private handle(ev: LoadEvent): void {
-    const state = this.state;
-    const d = this.controlDeflection(state);
+  private handle(ev: Watch, s: Snapshot): void {
+    const d = this.controlDeflection(s);
+    const { beam } = this;
     if (ev.kind === 'cracking') {
-      this.crackedYet = true;
-      const at = this.maxRatio(state, (resp) => resp.crackingMoment);
-      const x = this.beam.x[at.station]!;
-      this.events.push({ kind: 'cracking', loadFactor: state.lambda, deflection: d, position: x, description: `first cracking at ${describePosition(x, this.span, this.beam.support)}` });
+      const at = this.maxRatio(s, (resp) => resp.crackingMoment);
+      const x = this.eventPosition(s, at.station, at.sign);
+      this.cracking = { lambda: s.lambda, totalLoad: this.totalLoad(s), deflection: d };
+      this.events.push({ kind: 'cracking', loadFactor: s.lambda, deflection: d, position: x, description: `first cracking at ${describePosition(x, beam.layout)}` });
     } else if (ev.kind === 'yield') {
-      const wasFirst = this.firstYield === null;
-      this.activate(ev.site!, state);
-      if (wasFirst) this.distributions.push(this.distribution('first yield', state));
-    } else if (ev.kind === 'peak') {
-      this.soften(ev.hinge!, state, d);
-      if (this.hinges.filter((x) => x.phase === 'softening').length > this.r) this.mechanism = true;
+      const at = this.newYield(s);
+      const x = this.eventPosition(s, at.station, at.sign);
+      const first = this.firstYield === null;
+      if (first) this.firstYield = { lambda: s.lambda, totalLoad: this.totalLoad(s), deflection: d };
+      this.events.push({ kind: 'first-yield', loadFactor: s.lambda, deflection: d, position: x, description: `${first ? 'first yield' : 'yield'} (${at.sign > 0 ? 'sagging' : 'hogging'}) at ${describePosition(x, beam.layout)}: plasticity starts to spread` });
+      if (first) this.distributions.push(this.distribution('first yield', s));
+      // The zone is reported: its spreading is no new event.
+      (at.sign > 0 ? this.yieldSites.sag : this.yieldSites.hog).add(at.station);
+    } else if (ev.kind === 'localisation') {
+      // A section that peaks at cracking cracks as it localises: the cracking comes first.
+      if (!this.cracking && this.maxRatio(s, (resp) => resp.crackingMoment).ratio >= 1 - 1e-6) {
+        this.handle({ kind: 'cracking', g: () => 0 }, s);
+      }
+      const at = this.localisationRatio(s);
+      const critical = this.criticalSection(s, at.station, at.sign);
+      const hinge = localiseAt(beam, this.restore(s), critical, at.station, at.sign, s.lambda, this.capacity);
+      this.hinges.push(hinge);
+      this.hingeVersion++;
+      s.rotations.set(this.hinges.length - 1, 0);
+      const words = `${hinge.sign > 0 ? 'sagging' : 'hogging'} hinge at ${describePosition(critical, beam.layout)}`;
+      if (!(hinge.law.ultimateLocalised > 0)) {
+        this.finishUltimate(this.hinges.length - 1, s, limitWords(beam, hinge));
+        return;
+      }
+      this.events.push({ kind: 'hinge', loadFactor: s.lambda, deflection: d, position: critical, description: `${words}: the section reaches the top of its curve and its further deformation localises over its hinge length` });
+      if (this.hinges.length > this.r) this.mechanism = true;
+    } else if (ev.kind === 'code') {
+      const position = this.codePosition(s);
+      this.codeUltimate = { lambda: s.lambda, deflection: d, position };
+      this.events.push({ kind: 'code-ultimate', loadFactor: s.lambda, deflection: d, position, description: `code ultimate: the section at ${describePosition(position, beam.layout)} reaches the code's crushing strain` });
+    } else if (ev.kind === 'capacity') {
+      this.finishUltimate(ev.hinge!, s, limitWords(beam, this.hinges[ev.hinge!]!));
+    } else if (ev.kind === 'drop') {
+      this.finishUltimate(-1, s, `the load has fallen to ${(this.fraction * 100).toFixed(0)} % of the peak on the descending branch`);
     } else {
-      this.finishUltimate(ev.kind === 'capacity' ? this.hinges[ev.hinge!]! : undefined, state);
-      this.finished = true;
+      this.finishUltimate(-1, s, 'the member can no longer carry the loads held constant');
     }
   }
+
+  private codePosition(s: Snapshot): number {
+    this.restore(s);
+    const me = this.eq.effective;
+    let best = -Infinity;
+    let at = 0;
+    for (let i = 0; i < this.n; i++) {
+      const sign: 1 | -1 = me[i]! >= 0 ? 1 : -1;
+      const cc = this.law(i, sign)?.codeCrushing;
+      if (!cc || cc.localised !== null) continue;
+      const r = (sign * me[i]!) / cc.moment;
+      if (r > best) {
+        best = r;
+        at = this.beam.x[i]!;
+      }
+    }
+    this.hinges.forEach((h, k) => {
+      const cc = h.law.codeCrushing;
+      if (cc && cc.localised !== null && cc.localised > 0 && (s.rotations.get(k) ?? h.rotation) / h.length / cc.localised >= best) at = h.critical;
+    });
+    return at;
+  }
+
+  // --- load control ----------------------------------------------------------------------------------
 
   private loadControl(lambdaRef: number): void {
     let step = lambdaRef / 20;
     let guard = 0;
     let previousState: Snapshot | undefined;
     while (!this.mechanism && !this.finished && guard++ < 4000) {
-      // Events already reached at the current state (e.g. both supports of a symmetric beam yield together).
-      const due = this.candidates().find((ev) => ev.g(this.state) >= 0);
+      // Events already reached at the current state (e.g. both supports of a symmetric beam together).
+      const due = this.watches('load').find((ev) => ev.g(this.state) >= 0);
       if (due) {
-        this.handle(due);
+        this.handle(due, this.state);
         continue;
       }
       const state = this.state;
       const target = state.lambda + step;
-      // Predictor: extrapolate the redundants along the last step (one or two Newton iterations fewer).
+      // Predictor: extrapolate the redundants and rotations along the last step.
       let guess: Snapshot = state;
       if (previousState && state.lambda > previousState.lambda) {
         const t = (target - state.lambda) / (state.lambda - previousState.lambda);
@@ -231,9 +433,9 @@ class CapacityAnalysis extends CapacityState {
       }
       const next = this.solveAt(target, guess) ?? (guess === state ? undefined : this.solveAt(target, state));
       if (!next) {
-        // With a hinge past its peak, failure to find equilibrium at a higher load is the limit
-        // point itself: go straight to rotation control rather than shrinking the step.
-        const pastPeak = this.hinges.some((h) => h.phase === 'softening');
+        // With a localised hinge, failure to find equilibrium at a higher load is the limit point
+        // itself: go straight to rotation control rather than shrinking the step far.
+        const pastPeak = this.hinges.length > 0;
         if (!pastPeak && step > lambdaRef * 1e-6) {
           step /= 4;
           continue;
@@ -247,26 +449,24 @@ class CapacityAnalysis extends CapacityState {
         this.failureCause = 'analysis stopped before a limit state (not converged)';
         break;
       }
-      let earliest: { ev: LoadEvent; at: Snapshot } | undefined;
-      for (const ev of this.candidates()) {
-        const ga = ev.g(state);
-        const gb = ev.g(next);
-        if (ga < 0 && gb >= 0) {
+      let earliest: { ev: Watch; at: Snapshot } | undefined;
+      for (const ev of this.watches('load')) {
+        if (ev.g(state) < 0 && ev.g(next) >= 0) {
           const at = this.locate(state, next, ev.g);
           if (!earliest || at.lambda < earliest.at.lambda) earliest = { ev, at };
         }
       }
       if (!earliest) {
         previousState = state;
-        this.state = next;
+        this.commitState(next);
         this.record(next, 'integration');
         step = Math.min(step * 1.25, lambdaRef / 12);
         continue;
       }
       previousState = undefined;
-      this.state = earliest.at;
+      this.commitState(earliest.at);
       this.record(this.state, 'integration');
-      this.handle(earliest.ev);
+      this.handle(earliest.ev, this.state);
       step = Math.max(step / 2, lambdaRef / 200);
     }
     if (!this.mechanism && !this.finished && this.converged) {
@@ -276,174 +476,178 @@ class CapacityAnalysis extends CapacityState {
     }
   }
 
-  // --- past the peak load: rotation control of the newest softening hinge ---------------------------
-  // Entered when the beam becomes a mechanism, or when load control finds no equilibrium beyond a
-  // limit point while a hinge is softening (the load must fall for the beam to deform further).
-  // λ becomes an unknown; hardening hinges may still reach their peak on the way (they then soften
-  // too); the stage ends when a hinge reaches its rotation capacity or a section outside the hinges
-  // reaches its peak.
+  // --- past the peak load: rotation control of the newest hinge ------------------------------------
+  // Entered when the member becomes a mechanism, or when load control finds no equilibrium beyond a
+  // limit point while a hinge has localised (the load must fall for the member to deform further).
+  // λ becomes an unknown; other sections may still localise on the way; the stage ends at the
+  // best-estimate ultimate.
   private rotationControl(): void {
     const hinges = this.hinges;
-    const softeningCount = hinges.filter((h) => h.phase === 'softening').length;
-    const limitPoint = !this.mechanism && !this.finished && !this.converged && softeningCount > 0;
+    const limitPoint = !this.mechanism && !this.finished && !this.converged && hinges.length > 0;
     if (!(this.mechanism || limitPoint) || this.ultimate) return;
     if (limitPoint) {
       this.converged = true;
       this.status = 'complete';
       this.failureCause = '';
     }
-    const controlled = hinges.length - 1 - [...hinges].reverse().findIndex((h) => h.phase === 'softening');
+    const controlled = hinges.length - 1;
     const hc = hinges[controlled]!;
-    this.peak = { lambda: this.state.lambda, deflection: this.controlDeflection(this.state) };
-    const at = this.beam.x[hc.station]!;
+    const at = hc.critical;
+    const peakWords = `the ${hc.sign > 0 ? 'sagging' : 'hogging'} hinge at ${describePosition(at, this.beam.layout)}`;
     this.events.push(
       this.mechanism
-        ? { kind: 'mechanism', loadFactor: this.state.lambda, deflection: this.peak.deflection, position: at, description: `collapse mechanism: the member can take no more load; the hinge at the ${SITE_WORDS[hc.site]} rotates at constant or falling load` }
-        : { kind: 'peak', loadFactor: this.state.lambda, deflection: this.peak.deflection, position: at, description: `peak load: the hinge at the ${SITE_WORDS[hc.site]} is past its peak moment and the load must fall for the member to deform further` },
+        ? { kind: 'mechanism', loadFactor: this.state.lambda, deflection: this.controlDeflection(this.state), position: at, description: `mechanism: the member can take no more load; ${peakWords} rotates at falling load` }
+        : { kind: 'peak', loadFactor: this.state.lambda, deflection: this.controlDeflection(this.state), position: at, description: `peak load: ${peakWords} is past the top of its curve and the load must fall for the member to deform further` },
     );
-    const theta0 = hc.rotation;
-    const steps = 16;
-    const dTheta = (hc.capacity - theta0) / steps;
+    if (this.distributions.length < 2) this.distributions.push(this.distribution('peak', this.state));
+    let theta = this.state.rotations.get(controlled) ?? hc.rotation;
+    const limit = hc.law.ultimateLocalised * hc.length;
+    let dTheta = Math.max((limit - theta) / 24, limit * 1e-4);
     let current = this.state;
-    const solveTheta = (theta: number, from: Snapshot): Snapshot | undefined => this.solveAtRotation(controlled, theta, from);
-    let theta = theta0;
-    for (let k = 1; k <= steps + 1 && !this.ultimate; k++) {
-      const target = Math.min(theta + dTheta, hc.capacity);
+    const solveTheta = (t: number, from: Snapshot): Snapshot | undefined => this.solveAtRotation(controlled, t, from);
+    for (let k = 0; k < 600 && !this.ultimate; k++) {
+      const target = Math.min(theta + dTheta, limit);
       const next = solveTheta(target, current);
       if (!next) {
+        if (dTheta > limit * 1e-4) {
+          dTheta /= 4;
+          continue;
+        }
         this.converged = false;
-        this.status = `not converged past the peak at θp = ${(target * 1000).toFixed(2)} mrad of the hinge at the ${SITE_WORDS[hc.site]}`;
+        this.status = `not converged past the peak at θ = ${(target * 1000).toFixed(2)} mrad of ${peakWords}`;
         this.failureCause = 'analysis stopped past the peak load (not converged)';
         break;
       }
       // Events in this step: searched on the controlled rotation, to 1e-6 of it.
-      let event: { ev: RotationEvent; at: Snapshot; theta: number } | undefined;
-      for (const ev of this.rotationEvents(controlled)) {
+      let event: { ev: Watch; at: Snapshot; theta: number } | undefined;
+      for (const ev of this.watches('rotation', controlled)) {
         if (!(ev.g(current) < 0 && ev.g(next) >= 0)) continue;
         const found = regulaFalsiEvent({ x: theta, state: current }, { x: target, state: next }, solveTheta, ev.g, { maxIterations: 40, xTolerance: (hi) => 1e-6 * hi });
         if (!event || found.x < event.theta) event = { ev, at: found.state, theta: found.x };
       }
       if (event) {
-        hc.rotation = event.theta;
-        current = event.at;
         theta = event.theta;
+        this.commitState(event.at);
+        current = event.at;
         this.record(current, 'mechanism');
-        this.state = current;
-        if (event.ev.kind === 'peak') {
-          this.restore(current);
-          this.soften(event.ev.hinge!, current, this.controlDeflection(current));
-          continue;
+        this.handle(event.ev, current);
+        if (this.ultimate) break;
+        if (event.ev.kind === 'localisation') {
+          // Another section localised: control passes to it (the newest hinge).
+          this.rotationControlFrom(current);
+          return;
         }
-        hc.rotation = event.theta;
-        this.finishUltimate(event.ev.kind === 'capacity' ? hinges[event.ev.hinge!]! : undefined, current);
-        break;
+        continue;
       }
       theta = target;
       current = next;
-      hc.rotation = theta;
+      this.commitState(current);
       this.record(current, 'mechanism');
-      this.state = current;
-      if (theta >= hc.capacity * (1 - 1e-12)) {
-        this.finishUltimate(hc, current);
+      dTheta = Math.min(dTheta * 1.5, Math.max((limit - theta) / 8, limit * 1e-4));
+      if (theta >= limit * (1 - 1e-12)) {
+        this.finishUltimate(controlled, current, limitWords(this.beam, hc));
         break;
       }
     }
-  }
-
-  /** Equilibrium with the rotation of hinge `controlled` prescribed and λ an unknown. */
-  private solveAtRotation(controlled: number, theta: number, from: Snapshot): Snapshot | undefined {
-    const hinges = this.hinges;
-    hinges[controlled]!.rotation = theta;
-    this.hingeVersion++;
-    const free = hinges.map((h, i) => (h.phase === 'softening' && i !== controlled ? i : -1)).filter((i) => i >= 0);
-    let res = newton(this.eq, hinges, free, true, { redundants: from.redundants, lambda: from.lambda, rotations: free.map((i) => from.rotations.get(i) ?? hinges[i]!.rotation) }, controlled);
-    for (let pass = 0; pass < 2 && res.converged && this.retrack(); pass++) {
-      res = newton(this.eq, hinges, free, true, { redundants: res.redundants, lambda: res.lambda, rotations: res.rotations }, controlled);
+    if (!this.ultimate && this.converged) {
+      this.converged = false;
+      this.status = 'not converged: the descending branch did not end within its step budget';
+      this.failureCause = this.status;
     }
-    this.hingeVersion++;
-    if (!res.converged) return undefined;
-    const rotations = new Map<number, number>();
-    free.forEach((h, i) => rotations.set(h, res.rotations[i]!));
-    rotations.set(controlled, theta);
-    return { lambda: res.lambda, redundants: res.redundants, rotations };
   }
 
-  private rotationEvents(controlled: number): RotationEvent[] {
-    const list: RotationEvent[] = [];
-    this.hinges.forEach((h, i) => {
-      if (i === controlled) return;
-      if (h.phase === 'hardening') list.push({ kind: 'peak', hinge: i, g: this.peakEvent(h) });
-      else list.push({ kind: 'capacity', hinge: i, g: this.capacityEvent(h, i) });
-    });
-    list.push({ kind: 'overstress', g: (s) => this.overstress(s).ratio - (1 + 1e-9) });
-    return list;
+  /** Rotation control continued on the newest hinge after a localisation on the descending branch. */
+  private rotationControlFrom(s: Snapshot): void {
+    this.state = s;
+    this.mechanism = true;
+    this.rotationControl();
   }
 
-  // --- hinges and the end of the curve ---------------------------------------------------------------
-
-  /** A plastic hinge becomes active at a site that reached first yield. */
-  private activate(site: HingeSite, s: Snapshot): void {
-    const { station, sign } = this.yieldRatio(site, s);
-    const hinge = newHinge(this.beam, this.restore(s), { site, station, sign, activatedAt: s.lambda }, this.capacity);
-    this.hingeVersion++;
-    this.hinges.push(hinge);
-    const x = this.beam.x[station]!;
-    this.events.push({ kind: 'first-yield', loadFactor: s.lambda, deflection: this.controlDeflection(s), position: x, description: `first yield at ${describePosition(x, this.span, this.beam.support)}: plastic hinge active` });
-    if (!this.firstYield) this.firstYield = { lambda: s.lambda, deflection: this.controlDeflection(s) };
-  }
-
-  /** A hardening hinge reaches its section's peak moment: from now on its rotation is an unknown. */
-  private soften(index: number, at: Snapshot, deflection: number): void {
-    const h = this.hinges[index]!;
-    h.phase = 'softening';
-    this.hingeVersion++;
-    at.rotations.set(index, h.rotation);
-    this.events.push({ kind: 'hinge', loadFactor: at.lambda, deflection, position: this.beam.x[h.station]!, description: `hinge at the ${SITE_WORDS[h.site]} reaches the peak moment of its section (θp = ${(h.rotation * 1000).toFixed(2)} mrad)` });
-  }
-
-  private finishUltimate(hinge: HingeState | undefined, s: Snapshot): void {
-    const { beam, span } = this;
-    const d = this.controlDeflection(s);
+  private finishUltimate(hinge: number, s: Snapshot, cause: string): void {
+    if (this.ultimate) return;
+    let d = this.controlDeflection(s);
+    // A descending branch that snaps back (the rest of the member unloads faster than the hinge
+    // rotates, as after a brittle peak) cannot be followed under an imposed deflection: the load falls
+    // at once at the largest deflection reached, which is then the ultimate deflection.
+    const reached = this.points.reduce((m, p) => Math.max(m, p.deflection), d);
+    if (reached > d * (1 + 1e-9) + 1e-9) {
+      d = reached;
+      cause = `${cause} (the descending branch snaps back: the load falls at once at the largest deflection reached)`;
+    }
     this.ultimate = { lambda: s.lambda, deflection: d };
-    if (hinge) {
-      this.failureCause = `the plastic hinge at ${describePosition(hinge.site === 'span' ? hinge.rotationPosition : beam.x[hinge.station]!, span, beam.support)} reaches its rotation capacity θp,u = ${(hinge.capacity * 1000).toFixed(2)} mrad`;
-    } else {
-      const o = this.overstress(s);
-      this.failureCause = o.ratio >= 1 - 1e-6 ? overstressWords(beam, this.stationZone(o.station), o) : 'the load–deflection analysis reached its last step';
-    }
-    this.events.push({ kind: 'ultimate', loadFactor: s.lambda, deflection: d, position: hinge ? beam.x[hinge.station]! : beam.x[this.overstress(s).station]!, description: `ultimate: ${this.failureCause}` });
+    this.finished = true;
+    this.failureCause = cause;
+    const position = hinge >= 0 ? this.hinges[hinge]!.critical : this.hinges.length > 0 ? this.hinges[this.hinges.length - 1]!.critical : this.beam.x[this.controlIndex]!;
+    this.events.push({ kind: 'ultimate', loadFactor: s.lambda, deflection: d, position, description: `ultimate: ${cause}` });
     this.distributions.push(this.distribution('ultimate', s));
   }
 
+  private finish(controlPosition: number): CapacityCurve {
+    const points = this.points;
+    const last = this.state;
+    this.restore(last);
+    const penetration = this.penetrationReport(last);
+    const hinges = hingeReport({ beam: this.beam, memory: last.memory, hinges: this.hinges, yieldedAt: this.yieldedAt, penetration, method: this.capacity.hingeLengthMethod, capacity: this.capacity });
+    const best = points.reduce((a, b) => (b.totalLoad > a.totalLoad ? b : a), points[0]!);
+    return {
+      points,
+      events: this.events,
+      hinges,
+      distributions: this.distributions,
+      controlPosition,
+      status: this.status,
+      converged: this.converged,
+      cracking: this.cracking,
+      firstYield: this.firstYield,
+      peak: { lambda: best.loadFactor, deflection: best.deflection },
+      ultimate: this.ultimate,
+      codeUltimate: this.codeUltimate,
+      failureCause: this.failureCause,
+      secantPoint: this.secantPoint(),
+    };
+  }
+
+  /** The plastic part of the strain-penetration rotation at each face, and what it would be with the face's section at its localisation moment. */
+  private penetrationReport(s: Snapshot): { position: number; sign: 1 | -1; plastic: number; capacity: number }[] {
+    this.restore(s);
+    const me = this.eq.effective;
+    return this.options.faces.map((face) => {
+      const sign: 1 | -1 = me[face.station]! >= 0 ? 1 : -1;
+      const length = sign > 0 ? face.sagging : face.hogging;
+      const mu = sign > 0 ? s.memory.sag[face.station]! : s.memory.hog[face.station]!;
+      const law = plasticLawOf(this.beam.zones[this.beam.stationZone[face.station]!]!, sign);
+      return {
+        position: face.position,
+        sign,
+        plastic: length * stationPlastic(this.beam, face.station, sign, mu),
+        capacity: law ? length * plasticAt(law, law.localisationMoment, { value: 0, slope: 0 }).value : 0,
+      };
+    });
+  }
+
   /**
-   * Deflection at 75 % of the largest load, solved at that load: every hinge active then was still
-   * hardening (its rotation a function of its moment), so the state is path-independent and can be
-   * re-solved with the hinges as they are now, set back to hardening.
+   * Deflection at 75 % of the largest load, solved at that load from the recorded state just below
+   * it: nothing had localised yet, so the state follows from the memory of that state.
    */
   private secantPoint(): CapacityCurve['secantPoint'] {
-    const { points, loads, hinges } = this;
+    const { points, loads } = this;
     if (points.length < 2 || loads.patternTotal <= 0) return null;
     const pMax = Math.max(...points.map((p) => p.totalLoad));
     const base = points[0]!.totalLoad;
     const target = base + 0.75 * (pMax - base);
     const lambda = (target - loads.constantTotal) / loads.patternTotal;
-    const firstSoftening = this.events.find((e) => e.kind === 'hinge' || e.kind === 'mechanism' || e.kind === 'peak');
-    if (!(lambda > 0) || (firstSoftening && firstSoftening.loadFactor <= lambda)) return null;
-    const guess = this.loadControlStates.reduce<Snapshot | undefined>((best, st) => (st.lambda <= lambda && (!best || st.lambda > best.lambda) ? st : best), undefined);
+    if (!(lambda > 0)) return null;
+    if (this.hinges.some((h) => h.formedAt <= lambda)) return null;
+    const guess = this.loadControlStates.reduce<Snapshot | undefined>((b, st) => (st.lambda <= lambda && (!b || st.lambda > b.lambda) ? st : b), undefined);
     if (!guess) return null;
-    const saved = hinges.map((h) => ({ phase: h.phase, rotation: h.rotation, station: h.station, zone: h.zone, position: h.rotationPosition }));
-    for (const h of hinges) h.phase = 'hardening';
+    const saved = this.hinges.splice(0, this.hinges.length);
+    const savedMemory = this.baseMemory;
+    this.baseMemory = guess.memory;
     this.hingeVersion++;
-    const solved = this.solveAt(lambda, { lambda: guess.lambda, redundants: guess.redundants, rotations: new Map() });
+    const solved = this.solveAt(lambda, { ...guess, rotations: new Map() });
     const deflection = solved ? this.deflectionAt(solved)[this.controlIndex]! : null;
-    hinges.forEach((h, i) => {
-      const k = saved[i]!;
-      h.phase = k.phase;
-      h.rotation = k.rotation;
-      h.station = k.station;
-      h.zone = k.zone;
-      h.rotationPosition = k.position;
-    });
+    this.hinges.push(...saved);
+    this.baseMemory = savedMemory;
     this.hingeVersion++;
     return deflection === null ? null : { loadFactor: lambda, totalLoad: target, deflection };
   }
@@ -457,11 +661,15 @@ class CapacityAnalysis extends CapacityState {
       controlPosition: 0,
       status: `not converged: ${reason}`,
       converged: false,
+      cracking: null,
       firstYield: null,
       peak: { lambda: 0, deflection: 0 },
       ultimate: null,
+      codeUltimate: null,
       failureCause: reason,
       secantPoint: null,
     };
   }
 }
+
+export { interpolateAt };

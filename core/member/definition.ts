@@ -11,9 +11,7 @@
 
 /**
  * Support conditions of a single span. A cantilever is fixed at x = 0 and free at x = L; a
- * propped cantilever is fixed at x = 0 and pinned at x = L.
- * (Continuous beams will add a `spans` list; the statics already works on redundant support
- * moments, see core/member/statics.ts.)
+ * propped cantilever is fixed at x = 0 and pinned at x = L. (Continuous beams are core/continuous.)
  */
 export const SUPPORT_TYPES = ['simply-supported', 'cantilever', 'fixed-fixed', 'propped-cantilever'] as const;
 export type SupportType = (typeof SUPPORT_TYPES)[number];
@@ -101,12 +99,43 @@ export interface ServiceSettings {
   readonly includeShrinkage?: boolean;
 }
 
+/**
+ * Hinge length of a hinge inside the span (two shear spans z1, z2): 'combined' keeps the
+ * depth-dependent part once and adds the span-dependent part of both sides (common practice, no
+ * source); 'per-face' applies the published one-sided expression to each side of the critical
+ * section and adds the two lengths.
+ */
+export const SPAN_HINGE_RULES = ['combined', 'per-face'] as const;
+export type SpanHingeRule = (typeof SPAN_HINGE_RULES)[number];
+
+/**
+ * Strain penetration (bond slip of the bars anchored beyond a restrained support face): a rotation
+ * Lsp·φ at the face. 'en1998-3': Lsp = 0.13·db·fy/√fc (EN 1998-3:2005 Eq. (A.10a), third term);
+ * 'priestley-2007': Lsp = 0.022·fy·db (Priestley, Calvi & Kowalsky 2007); 'none'.
+ */
+export const STRAIN_PENETRATION_MODELS = ['en1998-3', 'priestley-2007', 'none'] as const;
+export type StrainPenetrationModel = (typeof STRAIN_PENETRATION_MODELS)[number];
+
 export interface CapacitySettings {
   /** Load pattern increased to failure: all loads proportionally, or live only with dead held. */
   readonly pattern: LoadPattern;
   readonly hingeLengthMethod: HingeLengthMethod;
   /** Plastic hinge length for `user`, mm. */
   readonly userHingeLength?: number;
+  /** Hinge length inside the span (default 'combined'). */
+  readonly spanHingeRule?: SpanHingeRule;
+  /**
+   * Tension shift of the moment envelope for the steel strain, a_l = z(cot θ − cot α)/2 with θ = 45°
+   * and vertical stirrups (EN 1992-1-1 9.2.1.3(2)); default true.
+   */
+  readonly tensionShift?: boolean;
+  /** Strain penetration at restrained supports (default 'en1998-3'). */
+  readonly strainPenetration?: StrainPenetrationModel;
+  /**
+   * The member's best-estimate ultimate on the descending branch: where the load has fallen to this
+   * fraction of the peak (default 0.8; Park 1988, from memory), unless a section limit comes first.
+   */
+  readonly ultimateLoadFraction?: number;
 }
 
 export interface BeamDefinition {

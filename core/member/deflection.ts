@@ -1,116 +1,140 @@
 /**
- * The deflected shape of the member from the curvature along it and the rotations of its plastic
- * hinges, and where the deflection peaks.
+ * The deflected shape of the member from the curvature along it and its concentrated rotations
+ * (localised hinges, strain penetration at support faces), and where the deflection peaks.
  * Internal units: mm, N·mm, 1/mm, rad; deflection downward positive.
  */
 import type { BeamModel } from './beam-model.ts';
-import { segmentIntegralsFromEnds, zoneCurvature, type SegmentIntegrals } from './beam-model.ts';
-import { responseOf, scratch, type HingeState } from './equations.ts';
-import type { ValueAndSlope } from './section-response.ts';
+import type { SegmentIntegrals } from './beam-model.ts';
+import type { Equations, LocalisedHinge, Memory } from './equations.ts';
 
-/**
- * Moves each span hinge to the interior station where its moment (relative to the section's peak)
- * is largest, so that the hinge stays at the critical section while moments redistribute.
- */
-export function trackSpanHinges(beam: BeamModel, moment: Float64Array, hinges: readonly HingeState[]): void {
-  const n = moment.length;
-  for (const h of hinges) {
-    if (h.site !== 'span') continue;
-    let best = -Infinity;
-    for (let i = 1; i < n - 1; i++) {
-      const z = beam.segmentZone[Math.min(i, n - 2)]!;
-      const resp = h.sign > 0 ? beam.zones[z]!.sagging : beam.zones[z]!.hogging;
-      const ratio = (h.sign * moment[i]!) / resp.peakMoment;
-      if (ratio > best) {
-        best = ratio;
-        h.station = i;
-        h.zone = z;
-      }
-    }
-    // The lumped rotation acts at the true maximum of the moment, not at the nearest station: the
-    // vertex of the parabola through the critical station and its neighbours (exact for uniform
-    // load), so the deflections do not depend on where the stations happen to fall.
-    const i = h.station;
-    h.rotationPosition = beam.x[i]!;
-    if (i > 0 && i < n - 1) {
-      const x0 = beam.x[i - 1]!;
-      const x1 = beam.x[i]!;
-      const x2 = beam.x[i + 1]!;
-      const m0 = h.sign * moment[i - 1]!;
-      const m1 = h.sign * moment[i]!;
-      const m2 = h.sign * moment[i + 1]!;
-      const d01 = (m1 - m0) / (x1 - x0);
-      const d12 = (m2 - m1) / (x2 - x1);
-      const curvature = (d12 - d01) / (x2 - x0);
-      if (x1 > x0 && x2 > x1 && curvature < 0) {
-        const vertex = 0.5 * (x0 + x1) - d01 / (2 * curvature);
-        if (vertex > x0 && vertex < x2) h.rotationPosition = vertex;
-      }
-    }
-  }
+/** A concentrated rotation (sagging positive: a kink that makes the member sag), rad, at a position, mm. */
+export interface ConcentratedRotation {
+  readonly position: number;
+  readonly theta: number;
+  /** The face of a support it belongs to ('both': a hinge in the member). */
+  readonly side: 'left' | 'right' | 'both';
 }
 
-/** Deflections (downward positive) at every station from curvature and hinge rotations. */
-export function deflectionShape(beam: BeamModel, moment: Float64Array, hinges: readonly HingeState[], curvatureOut?: Float64Array): Float64Array {
+/** The concentrated rotations of a state: localised hinges and strain penetration at the faces (after eq.moments). */
+export function concentratedRotations(eq: Equations, memory: Memory | null, hinges: readonly LocalisedHinge[]): ConcentratedRotation[] {
+  const out: ConcentratedRotation[] = [];
+  for (const h of hinges) if (h.rotation !== 0) out.push({ position: h.position, theta: h.sign * h.rotation, side: 'both' });
+  const c = { value: 0, slope: 0 };
+  for (const face of eq.options.faces) {
+    const length = eq.effective[face.station]! >= 0 ? face.sagging : face.hogging;
+    if (length === 0) continue;
+    eq.stationCurvature(face.station, memory, c);
+    if (c.value !== 0) out.push({ position: face.position, theta: length * c.value, side: face.side });
+  }
+  return out.sort((a, b) => a.position - b.position);
+}
+
+const seg: SegmentIntegrals = { i0: 0, i1: 0, j00: 0, j01: 0, j11: 0, phiA: 0, phiB: 0 };
+
+/**
+ * Deflections (downward positive) at every station for the moments already in `eq` (eq.moments):
+ * v'' = −φ integrated exactly segment by segment, kinks at the concentrated rotations, then v = 0
+ * at every support (a straight line removed per span; a cantilever follows its support's span, or
+ * the support's own rotation when there is no span). `curvatureOut` receives the distributed
+ * curvature at the stations.
+ */
+export function deflectionShape(eq: Equations, memory: Memory | null, hinges: readonly LocalisedHinge[], curvatureOut?: Float64Array): Float64Array {
+  const beam = eq.beam;
   const x = beam.x;
   const n = x.length;
-  const v = new Float64Array(n);
-  trackSpanHinges(beam, moment, hinges);
-  const jumps = hinges
-    .filter((h) => h.rotation > 0 || h.phase === 'hardening')
-    .map((h) => {
-      let theta = h.rotation;
-      if (h.phase === 'hardening') {
-        responseOf(beam.zones[h.zone]!, h.sign).plastic(h.sign * moment[h.station]!, scratch);
-        theta = h.length * scratch.value;
-      }
-      return { at: h.rotationPosition, theta: h.sign * theta };
-    })
-    .filter((j) => j.theta !== 0)
-    .sort((a, b) => a.at - b.at);
-  // v'' = −φ (downward positive deflection under sagging curvature); v(0) = 0, v'(0) = 0 first.
+  const raw = new Float64Array(n);
+  const slopes = new Float64Array(n);
+  const kinks = concentratedRotations(eq, memory, hinges);
+  eq.prepareEnds();
   let slope = 0;
-  let jump = 0;
-  const seg: SegmentIntegrals = { i0: 0, i1: 0, j00: 0, j01: 0, j11: 0, phiA: 0, phiB: 0 };
-  let endA: ValueAndSlope = { value: 0, slope: 0, piece: -1 };
-  let endB: ValueAndSlope = { value: 0, slope: 0, piece: -1 };
-  zoneCurvature(beam.zones[beam.stationZone[0]!]!, moment[0]!, endB);
+  let next = 0;
   for (let k = 0; k < n - 1; k++) {
+    slopes[k] = slope;
     const h = x[k + 1]! - x[k]!;
     let dv = slope * h;
     let dSlope = 0;
-    [endA, endB] = [endB, endA];
-    zoneCurvature(beam.zones[beam.stationZone[k + 1]!]!, moment[k + 1]!, endB);
     if (h > 0) {
-      segmentIntegralsFromEnds(beam.zones[beam.segmentZone[k]!]!, moment[k]!, moment[k + 1]!, endA, endB, false, seg);
-      if (curvatureOut) {
-        curvatureOut[k] = seg.phiA;
-        curvatureOut[k + 1] = seg.phiB;
-      }
+      eq.segment(k, memory, false, seg);
       dv -= h * h * (seg.i0 - seg.i1);
       dSlope = -h * seg.i0;
     }
-    while (jump < jumps.length && jumps[jump]!.at < x[k + 1]! + (k === n - 2 ? 1e-9 : 0) && jumps[jump]!.at >= x[k]!) {
-      const j = jumps[jump]!;
-      dv -= j.theta * (x[k + 1]! - j.at);
-      dSlope -= j.theta;
-      jump++;
+    // Kinks at [x_k, x_k+1) act in this segment (the last one also takes its end); a zero-length
+    // segment at a doubled station leaves them to the next.
+    if (h > 0) {
+      while (next < kinks.length && (kinks[next]!.position < x[k + 1]! || k === n - 2)) {
+        const j = kinks[next]!;
+        dv -= j.theta * (x[k + 1]! - j.position);
+        dSlope -= j.theta;
+        next++;
+      }
     }
-    v[k + 1] = v[k]! + dv;
+    raw[k + 1] = raw[k]! + dv;
     slope += dSlope;
   }
-  if (beam.support !== 'cantilever') {
-    // Enforce v(L) = 0 with a rigid rotation about x = 0.
-    const span = x[n - 1]! - x[0]!;
-    const end = v[n - 1]!;
-    for (let i = 0; i < n; i++) v[i] = v[i]! - (end * (x[i]! - x[0]!)) / span;
+  slopes[n - 1] = slope;
+  if (curvatureOut) {
+    const c = { value: 0, slope: 0 };
+    for (let i = 0; i < n; i++) curvatureOut[i] = eq.stationCurvature(i, memory, c).value;
+  }
+  return supportCorrection(beam, raw, slopes, eq.moment, kinks);
+}
+
+/** Index of the first station at position p. */
+function stationAt(beam: BeamModel, p: number): number {
+  const x = beam.x;
+  let lo = 0;
+  let hi = x.length - 1;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (x[mid]! < p) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
+}
+
+/** Removes the rigid-body motion: v = 0 at the supports, slope from the span (or the support's rotation). */
+function supportCorrection(beam: BeamModel, raw: Float64Array, slopes: Float64Array, moment: Float64Array, kinks: readonly ConcentratedRotation[]): Float64Array {
+  const { layout, x } = beam;
+  const n = x.length;
+  const v = new Float64Array(n);
+  const line = (i0: number, i1: number) => {
+    const a = raw[i0]!;
+    const b = raw[i1]!;
+    const x0 = x[i0]!;
+    const dx = x[i1]! - x0;
+    return { at: (p: number) => a + ((b - a) * (p - x0)) / dx };
+  };
+  const spans = layout.spans;
+  if (spans.length === 0) {
+    // A lone support with cantilevers: it stands still and rotates by the moment it takes / k; the
+    // kink of its left face turns the left cantilever, which the integration (from the left tip)
+    // put on the right-hand side.
+    const s = layout.supports[0]!;
+    const i = stationAt(beam, s.x);
+    const last = i + (i + 1 < n && x[i + 1] === s.x ? 1 : 0);
+    const left = s.x > 0 ? moment[i]! : 0;
+    const right = s.x < layout.length ? moment[last]! : 0;
+    const rotation = s.kind === 'spring' && s.stiffness > 0 ? (left - right) / s.stiffness : 0;
+    const a = raw[i]!;
+    const leftKink = kinks.filter((j) => j.side === 'left' && j.position === s.x).reduce((t, j) => t + j.theta, 0);
+    const b = slopes[i]! - rotation - leftKink;
+    for (let k = 0; k < n; k++) v[k] = raw[k]! - a - b * (x[k]! - s.x);
+    return v;
+  }
+  const corrections = spans.map((b) => line(stationAt(beam, b.from), stationAt(beam, b.to)));
+  let span = 0;
+  for (let k = 0; k < n; k++) {
+    const p = x[k]!;
+    while (span < spans.length - 1 && p > spans[span]!.to) span++;
+    // Before the first span's start the left cantilever follows it; beyond the last, the right one.
+    v[k] = raw[k]! - corrections[span]!.at(p);
   }
   return v;
 }
 
 /**
  * Where the deflection of a deflected shape peaks, mm: the vertex of the parabola through the
- * largest station value and its neighbours (the free end for a cantilever).
+ * largest station value and its neighbours (an end station as it is).
  */
 export function peakDeflectionPosition(x: ArrayLike<number>, deflection: ArrayLike<number>): number {
   const n = deflection.length;

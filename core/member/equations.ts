@@ -1,44 +1,23 @@
 /**
  * The compatibility equations of the member engine and their Newton solution. The released
- * structure (core/member/statics.ts) carries the loads; the unknowns are the redundant support
- * moments, the rotations of plastic hinges past their peak moment, and — past a limit point — the
- * load factor λ. Curvature is integrated exactly for the piecewise-linear moment–curvature law
- * with the moment linear between stations (core/member/beam-model.ts).
+ * structure (core/member/statics.ts) carries the loads; the unknowns are the redundants
+ * (core/member/beam-model.ts), the rotations of localised hinges, and — past a limit point — the
+ * load factor λ. Curvature is integrated exactly for the piecewise-linear moment–curvature law with
+ * the moment linear between stations (core/member/beam-model.ts, core/member/plastic-law.ts):
+ *
+ *   ∫ φ·m_k dx + Σ_hinges θ·m_k(x_h) + Σ_faces Lsp·φ_face·m_k(x_face) + f_k·X_k = 0   for each redundant k.
+ *
+ * The curvature of a section is φe(m) + φp(μ) (plastic-law.ts): μ, the largest moment it has
+ * carried (the state's memory), makes unloading sections keep their plastic curvature. With the
+ * tension shift, the moment a section's steel feels is the largest moment within a_l of it in each
+ * sense (EN 1992-1-1 9.2.1.3(2): the envelope shifted by a_l): m_e = max₍|ξ−x|≤a_l₎ M⁺ − max M⁻.
  * Internal units: mm, N·mm, 1/mm, rad.
  */
 import { solveLinear } from '../numeric/linear.ts';
-import type { Text } from '../units/phrase.ts';
 import type { BeamModel, ZoneResponse } from './beam-model.ts';
 import { segmentIntegralsFromEnds, zoneCurvature, type SegmentIntegrals } from './beam-model.ts';
-import { interpolateWithSlope, type SectionResponse, type ValueAndSlope } from './section-response.ts';
-import { redundantField } from './statics.ts';
-
-export type HingeSite = 'left' | 'right' | 'span';
-
-export interface HingeState {
-  readonly site: HingeSite;
-  /** +1 sagging, −1 hogging. */
-  readonly sign: 1 | -1;
-  /**
-   * Station index of the critical section (where the hinge moment is measured). A hinge inside
-   * the span follows the largest moment of its sign as redistribution moves it.
-   */
-  station: number;
-  zone: number;
-  /** Hinge length, mm, and where the lumped rotation acts (mm from the left support). */
-  readonly length: number;
-  rotationPosition: number;
-  readonly lengthFormula: Text;
-  readonly shearSpan: number;
-  /** 'hardening': θ follows the moment; 'softening': past the peak, θ is an unknown. */
-  phase: 'hardening' | 'softening';
-  /** Current plastic rotation, rad (≥ 0). */
-  rotation: number;
-  /** Rotation capacity, rad. */
-  readonly capacity: number;
-  /** λ and control deflection when the hinge became active. */
-  readonly activatedAt: number;
-}
+import { addPlasticSegment, plasticAt, softeningAt, type PlasticLaw, type TableIntegrals } from './plastic-law.ts';
+import type { SectionResponse, ValueAndSlope } from './section-response.ts';
 
 /** Everything the solver needs besides the beam. */
 export interface LoadingFields {
@@ -51,6 +30,56 @@ export interface LoadingFields {
   readonly patternTotal: number;
 }
 
+/** The largest effective moment each station has carried in each sense (magnitudes, N·mm). */
+export interface Memory {
+  readonly sag: Float64Array;
+  readonly hog: Float64Array;
+}
+
+/** A hinge where a section's deformation has localised (past its localisation moment). */
+export interface LocalisedHinge {
+  /** +1 sagging, −1 hogging. */
+  readonly sign: 1 | -1;
+  /** Where the localised rotation acts, mm along the member. */
+  readonly position: number;
+  /** Where its moment is measured: M = (1 − w)·M[a] + w·M[b] (stations), N·mm. */
+  readonly a: number;
+  readonly b: number;
+  readonly w: number;
+  /** Zone of the hinge's section, and the law of that section in the hinge's sense. */
+  readonly zone: number;
+  readonly law: PlasticLaw;
+  /** Length over which the softening localises, Lp, mm. */
+  readonly length: number;
+  /** Unit field of each redundant at the hinge. */
+  readonly fields: Float64Array;
+  /** Localised rotation θ = κ·Lp, rad (≥ 0). */
+  rotation: number;
+}
+
+/** A support face where the bars' strain penetration into the support adds a rotation Lsp·φ. */
+export interface PenetrationFace {
+  readonly support: number;
+  readonly station: number;
+  readonly position: number;
+  readonly side: 'left' | 'right';
+  /** Lsp for sagging and hogging moments at the face, mm. */
+  readonly sagging: number;
+  readonly hogging: number;
+  /** Unit field of each redundant at the face. */
+  readonly fields: Float64Array;
+}
+
+export interface EngineOptions {
+  /** Include the plastic parts of the laws (the load–deflection analysis); false: the nonlinear-elastic law only (service states, elastic analyses). */
+  readonly plastic: boolean;
+  /** Tension shift a_l per zone and sense, mm (null: none). */
+  readonly shift: { readonly sagging: Float64Array; readonly hogging: Float64Array } | null;
+  readonly faces: readonly PenetrationFace[];
+}
+
+export const NO_PLASTICITY: EngineOptions = { plastic: false, shift: null, faces: [] };
+
 /** Scratch output of table lookups (the engine is single-threaded and synchronous). */
 export const scratch: ValueAndSlope = { value: 0, slope: 0 };
 
@@ -58,131 +87,355 @@ export function responseOf(zone: ZoneResponse, sign: 1 | -1): SectionResponse {
   return sign > 0 ? zone.sagging : zone.hogging;
 }
 
+export function plasticLawOf(zone: ZoneResponse, sign: 1 | -1): PlasticLaw | null {
+  return (sign > 0 ? zone.plastic?.sagging : zone.plastic?.hogging) ?? null;
+}
+
 /**
- * Residual and Jacobian evaluator over the beam for a given set of hinges. Unknown vector:
- * [redundants…, rotations of softening hinges except the controlled one…, λ if λ is unknown].
+ * Fraction of a zone's peak curvature below which curvature counts as nothing when the residual of
+ * compatibility is judged (its floor): where the solution has (almost) no curvature — a fixed–fixed
+ * beam under its axial force alone, whose sections carry a moment at zero curvature — a purely
+ * relative test could never pass.
+ */
+const CURVATURE_FLOOR = 1e-3;
+
+/**
+ * A curvature typical of a zone's sections, 1/mm: the larger first-yield (or, without yield, peak)
+ * curvature of its two senses; 0 for the linear zones of elastic analyses, whose "peak" is unbounded.
+ */
+function curvatureScale(zone: ZoneResponse): number {
+  const of = (r: SectionResponse) => r.firstYieldCurvature ?? (r.peakMoment < 1e100 ? r.peakCurvature : 0);
+  return Math.max(of(zone.sagging), of(zone.hogging));
+}
+
+/** The memory of a member that has carried nothing yet. */
+export function freshMemory(n: number): Memory {
+  return { sag: new Float64Array(n), hog: new Float64Array(n) };
+}
+
+/** Candidate points of a station's tension-shift window: stations and two interpolated edges. */
+interface Window {
+  readonly lo: number;
+  readonly hi: number;
+  /** Edge points: segment start station and weight of its end (−1: none). */
+  readonly leftK: number;
+  readonly leftW: number;
+  readonly rightK: number;
+  readonly rightW: number;
+}
+
+const ZERO_INTEGRALS = (): TableIntegrals => ({ i0: 0, i1: 0, j00: 0, j01: 0, j11: 0 });
+
+/**
+ * Residual and Jacobian evaluator over the member for a given set of hinges. Unknown vector:
+ * [redundants…, rotations of the free hinges…, λ if λ is unknown].
  */
 export class Equations {
   readonly n: number;
+  readonly r: number;
+  /** Moment at the stations, N·mm, and the effective moment the sections feel (tension shift), N·mm. */
   readonly moment: Float64Array;
+  readonly effective: Float64Array;
+  /** dm_e/du at the stations for each redundant (index < r) and for λ (index r). */
+  private readonly sens: Float64Array[];
   private readonly seg: SegmentIntegrals = { i0: 0, i1: 0, j00: 0, j01: 0, j11: 0, phiA: 0, phiB: 0 };
+  private readonly sagInt = ZERO_INTEGRALS();
+  private readonly hogInt = ZERO_INTEGRALS();
   private readonly ends: ValueAndSlope[];
-  constructor(readonly beam: BeamModel, readonly loads: LoadingFields) {
+  private readonly windows: { sagging: Window[]; hogging: Window[] } | null;
+  /** Source of each station's effective moment per sense: station pair and weight (−1: none). */
+  private readonly srcA: Int32Array;
+  private readonly srcB: Int32Array;
+  private readonly srcW: Float64Array;
+  private readonly srcHa: Int32Array;
+  private readonly srcHb: Int32Array;
+  private readonly srcHw: Float64Array;
+
+  constructor(readonly beam: BeamModel, readonly loads: LoadingFields, readonly options: EngineOptions = NO_PLASTICITY) {
     this.n = beam.x.length;
+    this.r = beam.redundants.length;
     this.moment = new Float64Array(this.n);
+    this.effective = new Float64Array(this.n);
+    this.sens = Array.from({ length: this.r + 1 }, () => new Float64Array(this.n));
     this.ends = Array.from({ length: this.n }, () => ({ value: 0, slope: 0, piece: -1 }));
+    this.windows = options.shift ? { sagging: this.buildWindows(options.shift.sagging), hogging: this.buildWindows(options.shift.hogging) } : null;
+    this.srcA = new Int32Array(this.n);
+    this.srcB = new Int32Array(this.n);
+    this.srcW = new Float64Array(this.n);
+    this.srcHa = new Int32Array(this.n);
+    this.srcHb = new Int32Array(this.n);
+    this.srcHw = new Float64Array(this.n);
   }
 
-  /** Fills moments for redundants X and λ. */
+  /** Windows of every station for the shift a_l of its zone (in one sense), not crossing a support that takes a moment. */
+  private buildWindows(shift: Float64Array): Window[] {
+    const { x, side, stationZone } = this.beam;
+    const n = this.n;
+    // Pieces between supports with a jump in moment: a window stays within its station's piece.
+    const piece = new Int32Array(n);
+    const barriers = new Set(this.beam.redundants.filter((r) => r.kind === 'restraint' && r.at > 0 && r.at < this.beam.span).map((r) => r.at));
+    for (let i = 1; i < n; i++) piece[i] = piece[i - 1]! + (side[i] === 1 && barriers.has(x[i]!) ? 1 : 0);
+    const out: Window[] = [];
+    for (let i = 0; i < n; i++) {
+      const a = shift[stationZone[i]!]!;
+      let lo = i;
+      while (lo > 0 && piece[lo - 1] === piece[i] && x[i]! - x[lo - 1]! <= a) lo--;
+      let hi = i;
+      while (hi < n - 1 && piece[hi + 1] === piece[i] && x[hi + 1]! - x[i]! <= a) hi++;
+      let leftK = -1;
+      let leftW = 0;
+      if (lo > 0 && piece[lo - 1] === piece[i] && x[lo]! > x[lo - 1]!) {
+        leftK = lo - 1;
+        leftW = (x[i]! - a - x[lo - 1]!) / (x[lo]! - x[lo - 1]!);
+      }
+      let rightK = -1;
+      let rightW = 0;
+      if (hi < n - 1 && piece[hi + 1] === piece[i] && x[hi + 1]! > x[hi]!) {
+        rightK = hi;
+        rightW = (x[i]! + a - x[hi]!) / (x[hi + 1]! - x[hi]!);
+      }
+      out.push({ lo, hi, leftK, leftW, rightK, rightW });
+    }
+    return out;
+  }
+
+  /** Fills the moments and effective moments for redundants X and λ. */
   moments(redundants: readonly number[], lambda: number): Float64Array {
     const { constant, pattern } = this.loads;
     const fields = this.beam.redundantFields;
+    const M = this.moment;
     for (let i = 0; i < this.n; i++) {
       let m = constant[i]! + lambda * pattern[i]!;
       for (let j = 0; j < fields.length; j++) m += redundants[j]! * fields[j]![i]!;
-      this.moment[i] = m;
+      M[i] = m;
     }
-    return this.moment;
+    if (!this.windows) {
+      this.effective.set(M);
+      return M;
+    }
+    const sagW = this.windows.sagging;
+    const hogW = this.windows.hogging;
+    for (let i = 0; i < this.n; i++) {
+      // Sagging part: the largest positive moment in the window; hogging part likewise.
+      let best = 0;
+      let ja = -1;
+      let jb = -1;
+      let w = 0;
+      const ws = sagW[i]!;
+      for (let j = ws.lo; j <= ws.hi; j++) if (M[j]! > best) { best = M[j]!; ja = j; jb = j; w = 0; }
+      if (ws.leftK >= 0) {
+        const v = (1 - ws.leftW) * M[ws.leftK]! + ws.leftW * M[ws.leftK + 1]!;
+        if (v > best) { best = v; ja = ws.leftK; jb = ws.leftK + 1; w = ws.leftW; }
+      }
+      if (ws.rightK >= 0) {
+        const v = (1 - ws.rightW) * M[ws.rightK]! + ws.rightW * M[ws.rightK + 1]!;
+        if (v > best) { best = v; ja = ws.rightK; jb = ws.rightK + 1; w = ws.rightW; }
+      }
+      this.srcA[i] = ja;
+      this.srcB[i] = jb;
+      this.srcW[i] = w;
+      let worst = 0;
+      let ha = -1;
+      let hb = -1;
+      let hw = 0;
+      const wh = hogW[i]!;
+      for (let j = wh.lo; j <= wh.hi; j++) if (-M[j]! > worst) { worst = -M[j]!; ha = j; hb = j; hw = 0; }
+      if (wh.leftK >= 0) {
+        const v = -((1 - wh.leftW) * M[wh.leftK]! + wh.leftW * M[wh.leftK + 1]!);
+        if (v > worst) { worst = v; ha = wh.leftK; hb = wh.leftK + 1; hw = wh.leftW; }
+      }
+      if (wh.rightK >= 0) {
+        const v = -((1 - wh.rightW) * M[wh.rightK]! + wh.rightW * M[wh.rightK + 1]!);
+        if (v > worst) { worst = v; ha = wh.rightK; hb = wh.rightK + 1; hw = wh.rightW; }
+      }
+      this.srcHa[i] = ha;
+      this.srcHb[i] = hb;
+      this.srcHw[i] = hw;
+      this.effective[i] = best - worst;
+    }
+    return M;
+  }
+
+  /** dm_e/du at every station for the redundants and λ (after `moments`). */
+  private sensitivities(): void {
+    const fields = this.beam.redundantFields;
+    const pattern = this.loads.pattern;
+    for (let l = 0; l <= this.r; l++) {
+      const f = l < this.r ? fields[l]! : pattern;
+      const s = this.sens[l]!;
+      if (!this.windows) {
+        s.set(f);
+        continue;
+      }
+      for (let i = 0; i < this.n; i++) {
+        let v = 0;
+        const a = this.srcA[i]!;
+        if (a >= 0) v += (1 - this.srcW[i]!) * f[a]! + this.srcW[i]! * f[this.srcB[i]!]!;
+        // m_e = A − B with B = max(−M): dm_e = dM(source of A) + dM(source of B).
+        const h = this.srcHa[i]!;
+        if (h >= 0) v += (1 - this.srcHw[i]!) * f[h]! + this.srcHw[i]! * f[this.srcHb[i]!]!;
+        s[i] = v;
+      }
+    }
+  }
+
+  /**
+   * Total curvature of station i (1/mm) and its derivative with respect to the effective moment, for
+   * the current moments and the memory given (the plastic parts only with options.plastic).
+   */
+  stationCurvature(i: number, memory: Memory | null, out: ValueAndSlope): ValueAndSlope {
+    const zone = this.beam.zones[this.beam.stationZone[i]!]!;
+    const me = this.effective[i]!;
+    zoneCurvature(zone, me, out);
+    if (!this.options.plastic || !zone.plastic) return out;
+    const sag = zone.plastic.sagging;
+    const hog = zone.plastic.hogging;
+    const muS = memory ? memory.sag[i]! : 0;
+    const muH = memory ? memory.hog[i]! : 0;
+    if (sag) {
+      plasticAt(sag, Math.max(me, muS), scratch);
+      out.value += scratch.value;
+      if (me > muS) out.slope += scratch.slope;
+    }
+    if (hog) {
+      plasticAt(hog, Math.max(-me, muH), scratch);
+      out.value -= scratch.value;
+      if (-me > muH) out.slope += scratch.slope;
+    }
+    return out;
+  }
+
+  /** The nonlinear-elastic curvature at every station, once (each ends one segment and starts the next); after `moments`. */
+  prepareEnds(): void {
+    const beam = this.beam;
+    for (let i = 0; i < this.n; i++) zoneCurvature(beam.zones[beam.stationZone[i]!]!, this.effective[i]!, this.ends[i]!);
+  }
+
+  /**
+   * Integrals of the curvature over segment k (after `moments` and `prepareEnds`): i0 = ∫φ dt, i1 = ∫φ·t dt, and the
+   * Jacobian weights with respect to the effective moments at its ends.
+   */
+  segment(k: number, memory: Memory | null, secant: boolean, out: SegmentIntegrals): SegmentIntegrals {
+    const beam = this.beam;
+    const zone = beam.zones[beam.segmentZone[k]!]!;
+    const me = this.effective;
+    const ends = this.ends;
+    segmentIntegralsFromEnds(zone, me[k]!, me[k + 1]!, ends[k]!, ends[k + 1]!, secant, out);
+    if (!this.options.plastic || !zone.plastic) return out;
+    const s = this.sagInt;
+    const h = this.hogInt;
+    s.i0 = s.i1 = s.j00 = s.j01 = s.j11 = 0;
+    h.i0 = h.i1 = h.j00 = h.j01 = h.j11 = 0;
+    const mem = memory;
+    if (zone.plastic.sagging) addPlasticSegment(zone.plastic.sagging, me[k]!, me[k + 1]!, mem ? mem.sag[k]! : 0, mem ? mem.sag[k + 1]! : 0, s);
+    if (zone.plastic.hogging) addPlasticSegment(zone.plastic.hogging, -me[k]!, -me[k + 1]!, mem ? mem.hog[k]! : 0, mem ? mem.hog[k + 1]! : 0, h);
+    out.i0 += s.i0 - h.i0;
+    out.i1 += s.i1 - h.i1;
+    // φ = −φp(−m) on the hogging side: dφ/dm = +φp′, so both parts add to the flexibility.
+    out.j00 += s.j00 + h.j00;
+    out.j01 += s.j01 + h.j01;
+    out.j11 += s.j11 + h.j11;
+    return out;
   }
 
   /**
    * Residuals R and Jacobian J at the given unknowns.
-   * layout: r redundants, then softening-hinge rotations (list `free`), then λ if `lambdaFree`.
+   * layout: r redundants, then the free hinges' rotations (list `free`), then λ if `lambdaFree`.
+   * In the mechanism stage the `controlled` hinge's rotation is given and its equation fixes λ.
    */
   evaluate(
     redundants: readonly number[],
     lambda: number,
-    hinges: readonly HingeState[],
+    hinges: readonly LocalisedHinge[],
     free: readonly number[],
     lambdaFree: boolean,
+    memory: Memory | null,
     secant = false,
     controlled = -1,
   ): { residual: number[]; jacobian: number[][]; scale: number[] } {
     const beam = this.beam;
-    const r = beam.redundants.length;
+    const r = this.r;
     const size = r + free.length + (lambdaFree ? 1 : 0);
     const residual = new Array<number>(size).fill(0);
     const jacobian = Array.from({ length: size }, () => new Array<number>(size).fill(0));
     const scale = new Array<number>(size).fill(0);
-    // Hinge positions are held fixed during a solve (the caller moves span hinges to the new
-    // moment maximum between solves), so the Jacobian is exact and Newton converges quadratically.
     const M = this.moments(redundants, lambda);
+    this.sensitivities();
     const x = beam.x;
     const fields = beam.redundantFields;
-    const pattern = this.loads.pattern;
+    const sens = this.sens;
+    const sensL = sens[r]!;
     const lambdaCol = r + free.length;
-    // Distributed curvature: ∫ φ m_i dx and its derivatives (exact for linear φ, m between stations).
     if (r > 0) {
-      // Compatibility ∫ φ·m_i dx, integrated exactly for the piecewise-linear curvature law with the
-      // moment linear between stations (segmentIntegrals splits each segment at the law's knots).
+      this.prepareEnds();
       const seg = this.seg;
-      // Curvature at every station once (each ends one segment and starts the next).
-      const ends = this.ends;
-      for (let i = 0; i < this.n; i++) {
-        const e = ends[i]!;
-        zoneCurvature(beam.zones[beam.stationZone[i]!]!, M[i]!, e);
-      }
       for (let k = 0; k < this.n - 1; k++) {
         const h = x[k + 1]! - x[k]!;
         if (h <= 0) continue;
-        segmentIntegralsFromEnds(beam.zones[beam.segmentZone[k]!]!, M[k]!, M[k + 1]!, ends[k]!, ends[k + 1]!, secant, seg);
+        this.segment(k, memory, secant, seg);
         const w0 = seg.i0 - seg.i1;
         const w1 = seg.i1;
-        const magnitude = h * 0.5 * (Math.abs(seg.phiA) + Math.abs(seg.phiB));
+        const zone = beam.zones[beam.segmentZone[k]!]!;
+        const magnitude = h * (0.5 * (Math.abs(seg.phiA) + Math.abs(seg.phiB)) + CURVATURE_FLOOR * curvatureScale(zone));
         for (let i = 0; i < r; i++) {
           const ma = fields[i]![k]!;
           const mb = fields[i]![k + 1]!;
+          if (ma === 0 && mb === 0) continue;
           residual[i]! += h * (ma * w0 + mb * w1);
           scale[i]! += magnitude * Math.max(Math.abs(ma), Math.abs(mb));
-          for (let j = 0; j < r; j++) {
-            const na = fields[j]![k]!;
-            const nb = fields[j]![k + 1]!;
-            jacobian[i]![j]! += h * (ma * na * seg.j00 + (ma * nb + mb * na) * seg.j01 + mb * nb * seg.j11);
-          }
-          if (lambdaFree) {
-            const pa = pattern[k]!;
-            const pb = pattern[k + 1]!;
-            jacobian[i]![lambdaCol]! += h * (ma * pa * seg.j00 + (ma * pb + mb * pa) * seg.j01 + mb * pb * seg.j11);
-          }
+          const ra = ma * seg.j00 + mb * seg.j01;
+          const rb = ma * seg.j01 + mb * seg.j11;
+          const row = jacobian[i]!;
+          for (let j = 0; j < r; j++) row[j]! += h * (ra * sens[j]![k]! + rb * sens[j]![k + 1]!);
+          if (lambdaFree) row[lambdaCol]! += h * (ra * sensL[k]! + rb * sensL[k + 1]!);
+        }
+      }
+      // Springs: the support rotates by the moment it takes times its flexibility.
+      for (let i = 0; i < r; i++) {
+        const f = beam.flexibility[i]!;
+        if (f === 0) continue;
+        residual[i]! += f * redundants[i]!;
+        jacobian[i]![i]! += f;
+        scale[i]! += Math.abs(f * redundants[i]!);
+      }
+      // Strain penetration at the support faces: a rotation Lsp·φ there.
+      for (const face of this.options.faces) {
+        const c = this.stationCurvature(face.station, memory, { value: 0, slope: 0 });
+        const length = this.effective[face.station]! >= 0 ? face.sagging : face.hogging;
+        if (length === 0) continue;
+        for (let i = 0; i < r; i++) {
+          const m = face.fields[i]!;
+          if (m === 0) continue;
+          residual[i]! += length * c.value * m;
+          scale[i]! += Math.abs(length * c.value * m);
+          for (let j = 0; j < r; j++) jacobian[i]![j]! += length * c.slope * m * sens[j]![face.station]!;
+          if (lambdaFree) jacobian[i]![lambdaCol]! += length * c.slope * m * sensL[face.station]!;
         }
       }
     }
-    // Hinges.
+    // Localised hinges.
     hinges.forEach((hinge, index) => {
-      const zone = beam.zones[hinge.zone]!;
-      const response = responseOf(zone, hinge.sign);
-      const mc = hinge.sign * M[hinge.station]!;
       const freeIndex = free.indexOf(index);
-      let theta = hinge.rotation;
-      let dThetaDm = 0;
-      if (hinge.phase === 'hardening') {
-        response.plastic(mc, scratch);
-        theta = hinge.length * scratch.value;
-        dThetaDm = hinge.length * scratch.slope;
-      }
+      const theta = hinge.rotation;
       for (let i = 0; i < r; i++) {
-        const mi = redundantField(beam.redundants[i]!, beam.span, hinge.rotationPosition);
+        const mi = hinge.fields[i]!;
         residual[i]! += hinge.sign * theta * mi;
         scale[i]! += Math.abs(theta * mi);
-        if (hinge.phase === 'hardening') {
-          for (let j = 0; j < r; j++) jacobian[i]![j]! += hinge.sign * mi * dThetaDm * hinge.sign * fields[j]![hinge.station]!;
-          if (lambdaFree) jacobian[i]![lambdaCol]! += hinge.sign * mi * dThetaDm * hinge.sign * pattern[hinge.station]!;
-        } else if (freeIndex >= 0) {
-          jacobian[i]![r + freeIndex]! += hinge.sign * mi;
-        }
+        if (freeIndex >= 0) jacobian[i]![r + freeIndex]! += hinge.sign * mi;
       }
       const isControlled = lambdaFree && index === controlled;
-      if (hinge.phase === 'softening' && (freeIndex >= 0 || isControlled)) {
-        // Moment at the hinge follows the post-peak branch: s·M_c − M(θ/Lp) = 0. The controlled
-        // hinge's equation is the row that determines λ in the mechanism stage.
-        const row = isControlled ? lambdaCol : r + freeIndex;
-        interpolateWithSlope(response.softening.plastic, response.softening.moment, theta / hinge.length, scratch);
-        residual[row] = mc - scratch.value;
-        scale[row] = Math.max(Math.abs(response.peakMoment), 1);
-        for (let j = 0; j < r; j++) jacobian[row]![j] = hinge.sign * fields[j]![hinge.station]!;
-        if (!isControlled) jacobian[row]![row] = -scratch.slope / hinge.length;
-        if (lambdaFree) jacobian[row]![lambdaCol] = hinge.sign * pattern[hinge.station]!;
-      }
+      if (freeIndex < 0 && !isControlled) return;
+      // The hinge's moment follows the rest of its section's curve: s·M(x_h) − M(θ/Lp) = 0. The
+      // controlled hinge's equation is the row that determines λ in the mechanism stage.
+      const row = isControlled ? lambdaCol : r + freeIndex;
+      const { a, b, w } = hinge;
+      const mh = hinge.sign * ((1 - w) * M[a]! + w * M[b]!);
+      softeningAt(hinge.law, theta / hinge.length, scratch);
+      residual[row] = mh - scratch.value;
+      scale[row] = Math.max(Math.abs(hinge.law.peakMoment), 1);
+      for (let j = 0; j < r; j++) jacobian[row]![j] = hinge.sign * ((1 - w) * fields[j]![a]! + w * fields[j]![b]!);
+      if (!isControlled) jacobian[row]![row] = -scratch.slope / hinge.length;
+      if (lambdaFree) jacobian[row]![lambdaCol] = hinge.sign * ((1 - w) * this.loads.pattern[a]! + w * this.loads.pattern[b]!);
     });
     return { residual, jacobian, scale };
   }
@@ -200,13 +453,14 @@ export interface NewtonResult {
 /** Newton iteration with backtracking on the scaled residual norm. */
 export function newton(
   eq: Equations,
-  hinges: readonly HingeState[],
+  hinges: readonly LocalisedHinge[],
   free: readonly number[],
   lambdaFree: boolean,
   start: { redundants: readonly number[]; lambda: number; rotations: readonly number[] },
+  memory: Memory | null = null,
   controlled = -1,
 ): NewtonResult {
-  const r = eq.beam.redundants.length;
+  const r = eq.r;
   let X = [...start.redundants];
   let lambda = start.lambda;
   let rot = [...start.rotations];
@@ -214,8 +468,12 @@ export function newton(
     hinges[index]!.rotation = value;
   };
   free.forEach((h, i) => apply(h, rot[i]!));
-  const norm = (res: number[], scale: number[]) => Math.max(0, ...res.map((v, i) => Math.abs(v) / Math.max(scale[i]!, 1e-300)));
-  let current = eq.evaluate(X, lambda, hinges, free, lambdaFree, false, controlled);
+  const norm = (res: number[], scale: number[]) => {
+    let worst = 0;
+    for (let i = 0; i < res.length; i++) worst = Math.max(worst, Math.abs(res[i]!) / Math.max(scale[i]!, 1e-300));
+    return worst;
+  };
+  let current = eq.evaluate(X, lambda, hinges, free, lambdaFree, memory, false, controlled);
   let currentNorm = norm(current.residual, current.scale);
   const size = current.residual.length;
   if (size === 0) return { converged: true, redundants: X, lambda, rotations: rot, iterations: 0, residualNorm: 0 };
@@ -232,7 +490,7 @@ export function newton(
       const rot2 = rot.map((v, i) => Math.max(0, v + factor * step[r + i]!));
       const lambda2 = lambdaFree ? lambda + factor * step[size - 1]! : lambda;
       free.forEach((h, i) => apply(h, rot2[i]!));
-      const trial = eq.evaluate(X2, lambda2, hinges, free, lambdaFree, false, controlled);
+      const trial = eq.evaluate(X2, lambda2, hinges, free, lambdaFree, memory, false, controlled);
       const trialNorm = norm(trial.residual, trial.scale);
       if (trialNorm < currentNorm || trialNorm < 1e-10) {
         X = X2;
@@ -254,11 +512,11 @@ export function newton(
     // Fallback: secant-flexibility iterations. Robust where Newton stalls on the steep, kinked
     // stretches of the curves (load-controlled jumps in curvature at cracking).
     for (let iteration = 0; iteration < 400 && currentNorm >= 1e-10; iteration++) {
-      const sec = eq.evaluate(X, lambda, hinges, free, lambdaFree, true);
+      const sec = eq.evaluate(X, lambda, hinges, free, lambdaFree, memory, true);
       const step = solveLinear(sec.jacobian.map((row) => [...row]), sec.residual.map((v) => -v));
       if (!step) break;
       const X2 = X.map((v, i) => v + step[i]!);
-      const trial = eq.evaluate(X2, lambda, hinges, free, lambdaFree);
+      const trial = eq.evaluate(X2, lambda, hinges, free, lambdaFree, memory);
       X = X2;
       current = trial;
       currentNorm = norm(trial.residual, trial.scale);
@@ -266,4 +524,3 @@ export function newton(
   }
   return { converged: currentNorm < 1e-8, redundants: X, lambda, rotations: rot, iterations: 60, residualNorm: currentNorm };
 }
-

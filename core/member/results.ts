@@ -7,7 +7,7 @@ import type { Problem } from '../diagnostics.ts';
 import type { ElasticProperties } from '../section/elastic.ts';
 import type { Text } from '../units/phrase.ts';
 import type { MomentCurvatureResult } from '../section/results.ts';
-import type { DeflectionLimitCase, HingeLengthMethod, SupportType } from './definition.ts';
+import type { DeflectionLimitCase, HingeLengthMethod, SpanHingeRule, StrainPenetrationModel, SupportType } from './definition.ts';
 
 /** Section results for one section used by the member, per bending direction it needs. */
 export interface SectionResult {
@@ -21,7 +21,12 @@ export interface SectionResult {
   readonly warnings: readonly Text[];
 }
 
-export type MemberEventKind = 'cracking' | 'first-yield' | 'hinge' | 'peak' | 'mechanism' | 'ultimate';
+/**
+ * Events of the load–deflection curve: first cracking; a zone starting to yield ('first-yield', for
+ * every new zone); a section localising into a hinge ('hinge'); the code ultimate (a section at the
+ * code's crushing strain); the peak load or the mechanism; the best-estimate ultimate.
+ */
+export type MemberEventKind = 'cracking' | 'first-yield' | 'hinge' | 'code-ultimate' | 'peak' | 'mechanism' | 'ultimate';
 
 export interface MemberEvent {
   readonly kind: MemberEventKind;
@@ -59,24 +64,53 @@ export interface SpanDistribution {
   readonly hingeZones: readonly (readonly [number, number])[];
 }
 
+/**
+ * A plastic hinge: a zone that yielded, with the localisation of its critical section when it went
+ * past the top of its curve. Its plastic rotation has three parts: the plastic curvature spread over
+ * the zone, the rotation localised over Lp, and the strain penetration at a restrained face.
+ */
 export interface PlasticHinge {
-  /** Location of the critical section, mm from the left support. */
+  /** Location of the critical section, mm from the member's left end. */
   readonly position: number;
+  /** The position in words ("midspan", "support 2"). */
+  readonly location: string;
   readonly direction: 'sagging' | 'hogging';
   readonly sectionId: string;
-  /** Plastic hinge length Lp, mm, and how it was obtained. */
+  /** Order in which the hinges' zones started to yield (1 = first), and the load factor then. */
+  readonly order: number;
+  readonly yieldLoadFactor: number;
+  /** Extent of the yielded zone at ultimate, mm from the member's left end. */
+  readonly plasticZone: readonly [number, number];
+  /** Whether the critical section went past the top of its curve (its deformation localised), and at which load factor. */
+  readonly localised: boolean;
+  readonly localisationLoadFactor: number | null;
+  /** Length over which the deformation localises Lp, mm (0 when it did not localise), and how it was obtained. */
   readonly length: number;
   readonly lengthMethod: HingeLengthMethod;
   /** Lp's expression with its numbers, in the display units (the published SI form, or the in.-lb. form). */
   readonly lengthFormula: Text;
-  /** Distance from the critical section to the point of contraflexure used in Lp, mm. */
+  /** Distance from the critical section to the points of contraflexure used in Lp, mm. */
   readonly shearSpan: number;
-  /** Plastic rotation capacity θp = (φu − φy)·Lp, rad. */
+  /**
+   * Plastic rotation capacity, rad: the spread part with the critical section brought to the top of
+   * its curve under the moment diagram at ultimate, the whole rest of its curve over Lp, and the
+   * strain penetration with the face at the top of its curve.
+   */
   readonly rotationCapacity: number;
-  /** Plastic rotation reached when the member reaches ultimate, rad. */
+  /** Plastic rotation reached when the member reaches its best-estimate ultimate (the demand), rad. */
   readonly rotationAtUltimate: number;
+  /** The parts of rotationAtUltimate, rad. */
+  readonly rotationParts: { readonly spread: number; readonly localised: number; readonly penetration: number };
   /** Curvature ductility of the hinge section φu/φy. */
   readonly curvatureDuctility: number | null;
+}
+
+/** The deformation model the load–deflection curve used (for the report's method chapter). */
+export interface DeformationModel {
+  readonly tensionShift: boolean;
+  readonly strainPenetration: StrainPenetrationModel;
+  readonly ultimateLoadFraction: number;
+  readonly spanHingeRule: SpanHingeRule;
 }
 
 export interface DeflectionCheck {
@@ -149,12 +183,21 @@ export interface BeamResult {
     /** Deflection at first yield of the critical section and at nominal (idealised) yield, mm. */
     readonly firstYieldDeflection: number | null;
     readonly yieldDeflection: number | null;
+    /** Deflection at the best-estimate ultimate (the end of the load–deflection curve), mm. */
     readonly ultimateDeflection: number | null;
     /** μΔ = Δu / Δy (nominal yield). */
     readonly displacementDuctility: number | null;
     readonly hinges: readonly PlasticHinge[];
     /** The limit state that ends the load–deflection curve, in words. */
     readonly failureCause: string;
+    /** How the nominal yield deflection was found, in words (null without one). */
+    readonly yieldDefinition?: string | null;
+    /** The peak of the load–deflection curve: load factor, total load (N), deflection (mm). */
+    readonly peak?: { readonly loadFactor: number; readonly totalLoad: number; readonly deflection: number } | null;
+    /** The code ultimate: where a section first reaches the code's crushing strain (load factor, total load N, deflection mm, position mm); null when none does before the end of the curve. */
+    readonly codeUltimate?: { readonly loadFactor: number; readonly totalLoad: number; readonly deflection: number; readonly position: number } | null;
+    /** The deformation model used. */
+    readonly model?: DeformationModel;
   };
   readonly distributions: readonly SpanDistribution[];
   readonly service: ServiceDeflections | null;

@@ -54,6 +54,8 @@ export interface SectionResponse {
   plastic(m: number, out: ValueAndSlope): ValueAndSlope;
   /** Post-peak branch: plastic curvature (φ − φe) and moment pairs from the peak to ultimate, ascending in plastic curvature. */
   readonly softening: { readonly plastic: readonly number[]; readonly moment: readonly number[] };
+  /** The ascending envelope up to the peak (strictly increasing moments, N·mm, and their curvatures, 1/mm), when built from a curve. */
+  readonly envelope?: { readonly moments: readonly number[]; readonly curvatures: readonly number[] };
 }
 
 export interface ValueAndSlope {
@@ -233,6 +235,7 @@ export function sectionResponse(curve: MomentCurvatureResult): SectionResponse |
     integrationCurvature,
     plasticCurvature,
     softening: { plastic, moment },
+    envelope: { moments: envM, curvatures: envPhi },
   };
 }
 

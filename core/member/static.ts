@@ -1,6 +1,6 @@
 /**
- * Equilibrium and deflected shape under a fixed load, without plastic hinges: the service states
- * and the elastic analyses of the strength checks.
+ * Equilibrium and deflected shape under a fixed load, with the nonlinear-elastic law only (no
+ * plasticity, no localisation): the service states and the elastic analyses of the strength checks.
  * Internal units: mm, N·mm, 1/mm.
  */
 import type { BeamModel } from './beam-model.ts';
@@ -27,18 +27,18 @@ export function solveStatic(beam: BeamModel, fields: Float64Array): StaticState 
   const loads: LoadingFields = { constant: fields, pattern: new Float64Array(fields.length), constantTotal: 0, patternTotal: 0 };
   const eq = new Equations(beam, loads);
   const res = newton(eq, [], [], false, { redundants: new Array(beam.redundants.length).fill(0), lambda: 0, rotations: [] });
-  const moment = Float64Array.from(eq.moments(res.redundants, 0));
+  eq.moments(res.redundants, 0);
+  const moment = Float64Array.from(eq.moment);
   const curvature = new Float64Array(moment.length);
-  const deflection = deflectionShape(beam, moment, [], curvature);
+  const deflection = deflectionShape(eq, null, [], curvature);
   let yieldRatio = 0;
   let peakRatio = 0;
   for (let i = 0; i < moment.length; i++) {
     const m = moment[i]!;
-    const zone = beam.zones[beam.segmentZone[Math.min(i, moment.length - 2)]!]!;
+    const zone = beam.zones[beam.stationZone[i]!]!;
     const resp = m >= 0 ? zone.sagging : zone.hogging;
     if (resp.firstYieldMoment) yieldRatio = Math.max(yieldRatio, Math.abs(m) / resp.firstYieldMoment);
     if (resp.peakMoment > 0) peakRatio = Math.max(peakRatio, Math.abs(m) / resp.peakMoment);
   }
   return { converged: res.converged, redundants: res.redundants, moment, curvature, deflection, yieldRatio, peakRatio };
 }
-

@@ -6,7 +6,6 @@
  *    whose end moments MA (x = 0) and MB (x = L) are the redundants
  *    M(x) = M0(x) + MA·(1 − x/L) + MB·x/L;
  *  - a cantilever (fixed at x = 0, free at x = L) is determinate.
- * A continuous beam will add interior support moments as further redundants of the same kind.
  * Units: mm, N, N/mm, N·mm.
  */
 import type { MemberLoad, SupportType } from './definition.ts';
@@ -61,24 +60,6 @@ export function releasedMoment(support: SupportType, span: number, loads: readon
     }
   }
   return m;
-}
-
-/** Redundants of each support type: which end moments are unknown. */
-export function redundantEnds(support: SupportType): ('left' | 'right')[] {
-  switch (support) {
-    case 'simply-supported':
-    case 'cantilever':
-      return [];
-    case 'propped-cantilever':
-      return ['left'];
-    case 'fixed-fixed':
-      return ['left', 'right'];
-  }
-}
-
-/** Moment field at x of a unit redundant end moment (sagging-positive unit), dimensionless. */
-export function redundantField(end: 'left' | 'right', span: number, x: number): number {
-  return end === 'left' ? 1 - x / span : x / span;
 }
 
 /**

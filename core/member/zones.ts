@@ -7,6 +7,7 @@ import type { ElasticProperties } from '../section/elastic.ts';
 import type { MomentCurvatureResult } from '../section/results.ts';
 import { tensionSteel } from '../section/model.ts';
 import type { HingeSectionData, ZoneResponse } from './beam-model.ts';
+import { plasticLaw } from './plastic-law.ts';
 import { plainConcreteResponse, sectionResponse, type SectionResponse } from './section-response.ts';
 
 /** Hinge data of a zone that never forms a hinge (elastic analyses). */
@@ -28,7 +29,11 @@ export function hingeSectionData(model: SectionModel, direction: BendingDirectio
   const all = tensionSteel(model, direction);
   const bars = all.filter((e) => e.kind === 'bar');
   const steel = bars.length > 0 ? bars : all;
-  if (steel.length === 0) return { effectiveDepth: model.height * 0.9, barDiameter: 0, yieldStress: 1, ultimateStress: 1 };
+  // The concrete the bars are anchored in: the part that holds them (the main concrete otherwise).
+  const concrete = model.concreteParts.find((p) => p.role === 'cover') ?? model.concreteParts[0];
+  const concreteStrength = concrete?.material.peakStress;
+  const common = { height: model.height, ...(concreteStrength !== undefined ? { concreteStrength } : {}) };
+  if (steel.length === 0) return { effectiveDepth: model.height * 0.9, barDiameter: 0, yieldStress: 1, ultimateStress: 1, ...common };
   const area = steel.reduce((s, e) => s + e.area, 0);
   const centroid = steel.reduce((s, e) => s + e.area * e.depth, 0) / area;
   const main = steel.reduce((a, b) => (b.area > a.area ? b : a));
@@ -38,6 +43,7 @@ export function hingeSectionData(model: SectionModel, direction: BendingDirectio
     barDiameter: Math.max(...steel.map((e) => e.diameter ?? Math.sqrt((4 * e.area) / Math.PI))),
     yieldStress: material.yieldStress ?? 1,
     ultimateStress: material.ultimateStress ?? material.yieldStress ?? 1,
+    ...common,
   };
 }
 
@@ -61,12 +67,15 @@ export function zoneResponse(
   elastic: ElasticProperties,
   curves: { sagging?: MomentCurvatureResult; hogging?: MomentCurvatureResult },
 ): ZoneResponse {
+  const sagging = directionResponse(curves.sagging, elastic, 'sagging');
+  const hogging = directionResponse(curves.hogging, elastic, 'hogging');
   return {
     sectionId,
     from,
     to,
-    sagging: directionResponse(curves.sagging, elastic, 'sagging'),
-    hogging: directionResponse(curves.hogging, elastic, 'hogging'),
+    sagging,
+    hogging,
     hingeData: { sagging: hingeSectionData(model, 'sagging'), hogging: hingeSectionData(model, 'hogging') },
+    plastic: { sagging: plasticLaw(curves.sagging, sagging), hogging: plasticLaw(curves.hogging, hogging) },
   };
 }

@@ -20,6 +20,7 @@ const STANDARDS: readonly { readonly designation: RegExp; readonly key: string; 
   { designation: /^ACI 318-19\b/, key: 'ACI 318-19', citation: 'ACI Committee 318 (2019). Building Code Requirements for Structural Concrete (ACI 318-19) and Commentary (ACI 318R-19). American Concrete Institute, Farmington Hills, MI.' },
   { designation: /^ACI 318-14\b/, key: 'ACI 318-14', citation: 'ACI Committee 318 (2014). Building Code Requirements for Structural Concrete (ACI 318-14) and Commentary (ACI 318R-14). American Concrete Institute, Farmington Hills, MI.' },
   { designation: /^EN 1992-1-1(:2004)?\b/, key: 'EN 1992-1-1', citation: EN1992_REFERENCE },
+  { designation: /^EN 1998-3(:2005)?\b/, key: 'EN 1998-3', citation: 'EN 1998-3:2005 Eurocode 8 — Design of structures for earthquake resistance — Part 3: Assessment and retrofitting of buildings. CEN, Brussels.' },
   { designation: /^EN 1990(:2002)?\b/, key: 'EN 1990', citation: 'EN 1990:2002 Eurocode — Basis of structural design. CEN, Brussels.' },
   { designation: /^ACI 440\.2R(-17)?\b/, key: 'ACI 440.2R-17', citation: ACI_440_REFERENCE },
 ];
@@ -32,6 +33,8 @@ export const METHOD_REFERENCES = {
   corley1966: 'Corley, W. G. (1966). Rotational capacity of reinforced concrete beams. Journal of the Structural Division, ASCE 92(ST5), 121–146.',
   park1988: 'Park, R. (1988). Ductility evaluation from laboratory and analytical testing. Proceedings of the 9th World Conference on Earthquake Engineering, Tokyo–Kyoto, Vol. VIII, 605–616.',
   bischoff2005: 'Bischoff, P. H. (2005). Reevaluation of deflection prediction for concrete beams reinforced with steel and fiber reinforced polymer bars. Journal of Structural Engineering, ASCE 131(5), 752–767.',
+  scottFenves2006: 'Scott, M. H. & Fenves, G. L. (2006). Plastic hinge integration methods for force-based beam–column elements. Journal of Structural Engineering, ASCE 132(2), 244–252.',
+  colemanSpacone2001: 'Coleman, J. & Spacone, E. (2001). Localization issues in force-based frame elements. Journal of Structural Engineering, ASCE 127(11), 1257–1265.',
   branson1965: 'Branson, D. E. (1965). Instantaneous and time-dependent deflections of simple and continuous reinforced concrete beams. HPR Report No. 7, Part 1, Alabama Highway Department, Bureau of Public Roads.',
 } as const;
 

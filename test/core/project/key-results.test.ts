@@ -20,6 +20,7 @@ const section = (id: string, sag: MomentCurvatureResult, hog: MomentCurvatureRes
 
 const hinge = (position: number, direction: 'sagging' | 'hogging', sectionId: string, rotationCapacity: number): PlasticHinge => ({
   position, direction, sectionId, length: 300, lengthMethod: 'priestley-2007', lengthFormula: '', shearSpan: 2000, rotationCapacity, rotationAtUltimate: rotationCapacity, curvatureDuctility: 8,
+  location: 'midspan', order: 1, yieldLoadFactor: 1, plasticZone: [2800, 3200], localised: true, localisationLoadFactor: 1.1, rotationParts: { spread: 0, localised: 0, penetration: 0 },
 });
 
 const check = (limitCase: DeflectionCheck['limitCase'], governing: number, limit: number): DeflectionCheck => ({

@@ -1,0 +1,90 @@
+/**
+ * The deformation model's options for one member, from its capacity settings: the tension shift of
+ * each zone (EN 1992-1-1 9.2.1.3(2)) and the strain penetration at each restrained support face.
+ * Units: mm, MPa.
+ */
+import { fieldValue, type BeamModel, type ZoneResponse } from './beam-model.ts';
+import type { CapacitySettings, StrainPenetrationModel } from './definition.ts';
+import type { EngineOptions, PenetrationFace } from './equations.ts';
+
+/** Default best-estimate ultimate on the descending branch: the load fallen to 80 % of the peak (Park 1988, from memory). */
+export const ULTIMATE_LOAD_FRACTION = 0.8;
+
+/**
+ * Tension shift a_l = z(cot θ − cot α)/2 (EN 1992-1-1 9.2.1.3(2), Eq. (9.2)) with z = 0.9d
+ * (EN 1992-1-1 6.2.3(1)), θ = 45° (cot θ = 1, the truss angle of diagonal cracking) and vertical
+ * stirrups (cot α = 0): a_l = 0.45·d, mm.
+ */
+export function tensionShift(effectiveDepth: number): number {
+  return (0.9 * effectiveDepth * (1 - 0)) / 2;
+}
+
+/**
+ * Strain-penetration length Lsp, mm: the rotation at a restrained face is Lsp·φ (a length of the
+ * member with the face's curvature added inside the support).
+ *  - 'en1998-3': Lsp = 0.13·db·fy/√fc — the bond-slip term 0.13·φy·db·fy/√fc of the yield chord
+ *    rotation, EN 1998-3:2005 Eq. (A.10a) (fy, fc in MPa; equation number from memory);
+ *  - 'priestley-2007': Lsp = 0.022·fy·db, Priestley, Calvi & Kowalsky (2007) Eq. (4.30) (equation
+ *    number from memory).
+ */
+export function penetrationLength(model: StrainPenetrationModel, barDiameter: number, yieldStress: number, concreteStrength: number | undefined): number {
+  if (barDiameter <= 0 || yieldStress <= 1) return 0;
+  switch (model) {
+    case 'en1998-3': return concreteStrength && concreteStrength > 0 ? (0.13 * barDiameter * yieldStress) / Math.sqrt(concreteStrength) : 0;
+    case 'priestley-2007': return 0.022 * yieldStress * barDiameter;
+    case 'none': return 0;
+  }
+}
+
+/**
+ * Positions where the tension-shifted moment has a kink, to be made stations: a_l either side of
+ * every point load and every support (the tips of the moment diagram), for each zone's a_l, mm.
+ * Between them the shifted moment is linear wherever the moment is, so the integration stays exact.
+ */
+export function shiftStations(capacity: CapacitySettings, zones: readonly ZoneResponse[], tips: readonly number[], length: number): number[] {
+  if (!(capacity.tensionShift ?? true)) return [];
+  const shifts = new Set<number>();
+  for (const z of zones) {
+    shifts.add(tensionShift(z.hingeData.sagging.effectiveDepth));
+    shifts.add(tensionShift(z.hingeData.hogging.effectiveDepth));
+  }
+  const out: number[] = [];
+  for (const t of tips) for (const a of shifts) for (const p of [t - a, t + a]) if (p > 0 && p < length) out.push(p);
+  return out;
+}
+
+/** The engine options of the load–deflection analysis for a member. */
+export function engineOptions(beam: BeamModel, capacity: CapacitySettings): EngineOptions {
+  const shiftOn = capacity.tensionShift ?? true;
+  const shift = shiftOn
+    ? {
+        sagging: Float64Array.from(beam.zones, (z) => tensionShift(z.hingeData.sagging.effectiveDepth)),
+        hogging: Float64Array.from(beam.zones, (z) => tensionShift(z.hingeData.hogging.effectiveDepth)),
+      }
+    : null;
+  const model = capacity.strainPenetration ?? 'en1998-3';
+  const faces: PenetrationFace[] = [];
+  if (model !== 'none') {
+    const { layout } = beam;
+    for (const s of layout.supports) {
+      if (s.kind === 'pinned') continue;
+      const stations = beam.supportStations[s.index]!;
+      for (const side of ['left', 'right'] as const) {
+        const station = side === 'left' ? stations.left : stations.right;
+        if (station < 0) continue;
+        const zone = beam.zones[beam.stationZone[station]!]!;
+        const length = (d: typeof zone.hingeData.sagging) => penetrationLength(model, d.barDiameter, d.yieldStress, d.concreteStrength);
+        faces.push({
+          support: s.index,
+          station,
+          position: s.x,
+          side,
+          sagging: length(zone.hingeData.sagging),
+          hogging: length(zone.hingeData.hogging),
+          fields: Float64Array.from(beam.redundants, (r) => fieldValue(r, s.x, side)),
+        });
+      }
+    }
+  }
+  return { plastic: true, shift, faces };
+}

@@ -292,6 +292,7 @@ export function analyzeBeam(member: BeamDefinition, context: MemberContext): Bea
       model: {
         tensionShift: member.capacity.tensionShift ?? true,
         strainPenetration: member.capacity.strainPenetration ?? 'en1998-3',
+        shearDeformation: member.capacity.shearDeformation ?? 'en1998-3',
         ultimateLoadFraction: member.capacity.ultimateLoadFraction ?? ULTIMATE_LOAD_FRACTION,
         spanHingeRule: member.capacity.spanHingeRule ?? 'combined',
       },

@@ -28,10 +28,10 @@ import type { BeamModel } from './beam-model.ts';
 import { CapacityState, type Snapshot } from './capacity-state.ts';
 import type { CapacitySettings } from './definition.ts';
 import { freshMemory, plasticLawOf, type EngineOptions, type LoadingFields } from './equations.ts';
-import { describePosition, hingeReport, interpolateAt, limitWords, localiseAt, stationPlastic } from './hinges.ts';
+import { describePosition, hingeReport, limitWords, localiseAt, stationPlastic, yieldedRuns } from './hinges.ts';
 import { LOCALISATION_TOLERANCE, plasticAt } from './plastic-law.ts';
 import type { LoadDeflectionPoint, MemberEvent, PlasticHinge, SpanDistribution } from './results.ts';
-import { engineOptions, ULTIMATE_LOAD_FRACTION } from './spread.ts';
+import { engineOptions, shearFlexibility, ULTIMATE_LOAD_FRACTION } from './spread.ts';
 
 export interface CapacityCurve {
   readonly points: LoadDeflectionPoint[];
@@ -115,6 +115,10 @@ class CapacityAnalysis extends CapacityState {
       if (lam > 0) lambdaRef = Math.min(lambdaRef, lam);
     }
     if (!Number.isFinite(lambdaRef)) return this.failed('the load pattern produces no moment in the member');
+    if ((this.capacity.shearDeformation ?? 'en1998-3') === 'en1998-3') {
+      this.eq.shearFlexibility = shearFlexibility(beam, M0, Float64Array.from(Mprobe, (m, i) => (m - M0[i]!) / 1e-6));
+      this.hingeVersion++;
+    }
     const probeDeflection = this.deflectionAt(probe);
     const baseDeflection = this.deflectionAt(this.state);
     this.controlIndex = 0;
@@ -160,22 +164,10 @@ class CapacityAnalysis extends CapacityState {
       const mark = sign > 0 ? out.sag : out.hog;
       const sites = sign > 0 ? this.yieldSites.sag : this.yieldSites.hog;
       if (sites.size === 0) continue;
-      const yielded = (i: number) => {
-        const law = this.law(i, sign);
-        return !!law && law.yieldMoment !== null && mem[i]! >= law.yieldMoment * (1 - 1e-9);
-      };
-      let i = 0;
-      while (i < n) {
-        if (!yielded(i)) {
-          i++;
-          continue;
-        }
-        let j = i;
-        while (j + 1 < n && yielded(j + 1)) j++;
+      for (const [i, j] of yieldedRuns(this.beam, mem, sign, 1e-9)) {
         let reported = false;
         for (let k = i; k <= j && !reported; k++) reported = sites.has(k);
         if (reported) for (let k = Math.max(i - 1, 0); k <= Math.min(j + 1, n - 1); k++) mark[k] = 1;
-        i = j + 1;
       }
     }
     return out;
@@ -415,13 +407,16 @@ class CapacityAnalysis extends CapacityState {
     let step = lambdaRef / 20;
     let guard = 0;
     let previousState: Snapshot | undefined;
-    while (!this.mechanism && !this.finished && guard++ < 4000) {
-      // Events already reached at the current state (e.g. both supports of a symmetric beam together).
-      const due = this.watches('load').find((ev) => ev.g(this.state) >= 0);
+    while (!this.finished && guard++ < 4000) {
+      // Events already reached at the current state (e.g. both supports of a symmetric beam together),
+      // also once a mechanism has formed: rotation control needs every section at its top localised.
+      // A twin within round-off of its top (a symmetric beam) localises with the first.
+      const due = this.watches('load').find((ev) => ev.g(this.state) >= (ev.kind === 'localisation' ? -1e-7 : 0));
       if (due) {
         this.handle(due, this.state);
         continue;
       }
+      if (this.mechanism) break;
       const state = this.state;
       const target = state.lambda + step;
       // Predictor: extrapolate the redundants and rotations along the last step.
@@ -485,6 +480,14 @@ class CapacityAnalysis extends CapacityState {
     const hinges = this.hinges;
     const limitPoint = !this.mechanism && !this.finished && !this.converged && hinges.length > 0;
     if (!(this.mechanism || limitPoint) || this.ultimate) return;
+    // Sections at their top together with the hinge just formed (a symmetric twin) localise now: the
+    // rotation of the newest hinge cannot be controlled while another section sits on its top.
+    for (let k = 0; k < this.n && !this.ultimate; k++) {
+      const due = this.watches('rotation', hinges.length - 1).find((ev) => ev.kind === 'localisation' && ev.g(this.state) >= -1e-7);
+      if (!due) break;
+      this.handle(due, this.state);
+    }
+    if (this.ultimate) return;
     if (limitPoint) {
       this.converged = true;
       this.status = 'complete';
@@ -494,12 +497,12 @@ class CapacityAnalysis extends CapacityState {
     const hc = hinges[controlled]!;
     const at = hc.critical;
     const peakWords = `the ${hc.sign > 0 ? 'sagging' : 'hogging'} hinge at ${describePosition(at, this.beam.layout)}`;
-    this.events.push(
-      this.mechanism
-        ? { kind: 'mechanism', loadFactor: this.state.lambda, deflection: this.controlDeflection(this.state), position: at, description: `mechanism: the member can take no more load; ${peakWords} rotates at falling load` }
-        : { kind: 'peak', loadFactor: this.state.lambda, deflection: this.controlDeflection(this.state), position: at, description: `peak load: ${peakWords} is past the top of its curve and the load must fall for the member to deform further` },
-    );
-    if (this.distributions.length < 2) this.distributions.push(this.distribution('peak', this.state));
+    // A mechanism is the peak; past a limit point the load may still rise while the other sections
+    // take over (the peak event is then placed at the largest load, when the curve is finished).
+    if (this.mechanism) {
+      this.events.push({ kind: 'mechanism', loadFactor: this.state.lambda, deflection: this.controlDeflection(this.state), position: at, description: `mechanism: the member can take no more load; ${peakWords} rotates at falling load` });
+      if (this.distributions.length < 2) this.distributions.push(this.distribution('peak', this.state));
+    }
     let theta = this.state.rotations.get(controlled) ?? hc.rotation;
     const limit = hc.law.ultimateLocalised * hc.length;
     let dTheta = Math.max((limit - theta) / 24, limit * 1e-4);
@@ -584,6 +587,7 @@ class CapacityAnalysis extends CapacityState {
 
   private finish(controlPosition: number): CapacityCurve {
     const points = this.points;
+    this.placePeakEvent();
     const last = this.state;
     this.restore(last);
     const penetration = this.penetrationReport(last);
@@ -605,6 +609,24 @@ class CapacityAnalysis extends CapacityState {
       failureCause: this.failureCause,
       secantPoint: this.secantPoint(),
     };
+  }
+
+  /**
+   * Without a mechanism the peak load is where the curve is highest: its event goes in before the
+   * first event at a larger deflection (the events are in the order they happened).
+   */
+  private placePeakEvent(): void {
+    if (this.hinges.length === 0 || this.events.some((e) => e.kind === 'mechanism') || this.points.length < 2) return;
+    const best = this.points.reduce((a, b) => (b.totalLoad > a.totalLoad ? b : a));
+    const last = this.points[this.points.length - 1]!;
+    if (best === last && !this.ultimate) return;
+    // The ultimate at the largest load is its own peak.
+    if (this.ultimate && best.deflection >= this.ultimate.deflection * (1 - 1e-9)) return;
+    const newest = this.hinges.reduce((a, h) => (h.formedAt <= best.loadFactor + 1e-12 ? h : a), this.hinges[0]!);
+    const at = this.events.findIndex((e) => e.deflection > best.deflection && e.kind !== 'hinge');
+    const event = { kind: 'peak' as const, loadFactor: best.loadFactor, deflection: best.deflection, position: newest.critical, description: `peak load of the member, with the ${newest.sign > 0 ? 'sagging' : 'hogging'} hinge at ${describePosition(newest.critical, this.beam.layout)} past the top of its curve` };
+    if (at < 0) this.events.push(event);
+    else this.events.splice(at, 0, event);
   }
 
   /** The plastic part of the strain-penetration rotation at each face, and what it would be with the face's section at its localisation moment. */
@@ -672,4 +694,3 @@ class CapacityAnalysis extends CapacityState {
   }
 }
 
-export { interpolateAt };

@@ -116,6 +116,15 @@ export type SpanHingeRule = (typeof SPAN_HINGE_RULES)[number];
 export const STRAIN_PENETRATION_MODELS = ['en1998-3', 'priestley-2007', 'none'] as const;
 export type StrainPenetrationModel = (typeof STRAIN_PENETRATION_MODELS)[number];
 
+/**
+ * Shear deformation in the load–deflection curve. 'en1998-3': a cracked shear flexibility fitted so
+ * that, when the critical section yields, its shear span Lv rotates by 0.0013(1 + 1.5h/Lv) — the
+ * shear term of the mean yield chord rotation of EN 1998-3:2005 Eq. (A.10a) (Panagiotakos & Fardis
+ * 2001; equation number from memory); 'none': flexure only.
+ */
+export const SHEAR_DEFORMATION_MODELS = ['en1998-3', 'none'] as const;
+export type ShearDeformationModel = (typeof SHEAR_DEFORMATION_MODELS)[number];
+
 export interface CapacitySettings {
   /** Load pattern increased to failure: all loads proportionally, or live only with dead held. */
   readonly pattern: LoadPattern;
@@ -129,6 +138,8 @@ export interface CapacitySettings {
    * and vertical stirrups (EN 1992-1-1 9.2.1.3(2)); default true.
    */
   readonly tensionShift?: boolean;
+  /** Shear deformation added to the load–deflection curve (default 'en1998-3'). */
+  readonly shearDeformation?: ShearDeformationModel;
   /** Strain penetration at restrained supports (default 'en1998-3'). */
   readonly strainPenetration?: StrainPenetrationModel;
   /**

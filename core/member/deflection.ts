@@ -72,6 +72,10 @@ export function deflectionShape(eq: Equations, memory: Memory | null, hinges: re
     slope += dSlope;
   }
   slopes[n - 1] = slope;
+  // Shear deformation: dv/dx = γ = s·V = s·dM/dx, so v = s·(M(x) − M(0)) before the supports are
+  // put back in place (it changes no slope at a restrained face: that restrains the section, not γ).
+  const s = eq.shearFlexibility;
+  if (s > 0) for (let k = 0; k < n; k++) raw[k] = raw[k]! + s * (eq.moment[k]! - eq.moment[0]!);
   if (curvatureOut) {
     const c = { value: 0, slope: 0 };
     for (let i = 0; i < n; i++) curvatureOut[i] = eq.stationCurvature(i, memory, c).value;

@@ -151,6 +151,12 @@ export class Equations {
   private readonly srcHb: Int32Array;
   private readonly srcHw: Float64Array;
 
+  /**
+   * Shear flexibility s, mm per N·mm: the deflection from shear strain is s·(M(x) − M(0)) (γ = s·V),
+   * added to the deflected shape only (core/member/spread.ts shearFlexibility); 0: flexure only.
+   */
+  shearFlexibility = 0;
+
   constructor(readonly beam: BeamModel, readonly loads: LoadingFields, readonly options: EngineOptions = NO_PLASTICITY) {
     this.n = beam.x.length;
     this.r = beam.redundants.length;
@@ -231,9 +237,6 @@ export class Equations {
         const v = (1 - ws.rightW) * M[ws.rightK]! + ws.rightW * M[ws.rightK + 1]!;
         if (v > best) { best = v; ja = ws.rightK; jb = ws.rightK + 1; w = ws.rightW; }
       }
-      this.srcA[i] = ja;
-      this.srcB[i] = jb;
-      this.srcW[i] = w;
       let worst = 0;
       let ha = -1;
       let hb = -1;
@@ -248,6 +251,18 @@ export class Equations {
         const v = -((1 - wh.rightW) * M[wh.rightK]! + wh.rightW * M[wh.rightK + 1]!);
         if (v > worst) { worst = v; ha = wh.rightK; hb = wh.rightK + 1; hw = wh.rightW; }
       }
+      if (ja < 0 && ha < 0) {
+        // No moment of either sense in the window (a member under its axial force alone, at the first
+        // step): the section's own moment is the effective one, so that it still has a derivative —
+        // with none, Newton's method could never leave this state (issue 17).
+        ja = i;
+        jb = i;
+        w = 0;
+        best = M[i]!;
+      }
+      this.srcA[i] = ja;
+      this.srcB[i] = jb;
+      this.srcW[i] = w;
       this.srcHa[i] = ha;
       this.srcHb[i] = hb;
       this.srcHw[i] = hw;

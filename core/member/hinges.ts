@@ -14,6 +14,7 @@ import { hingeLength, type HingeLengthInput } from './hinge-length.ts';
 import { describeLinePosition, type MemberLayout } from './layout.ts';
 import { addTableIntegrals, plasticAt, type PlasticLaw, type TableIntegrals } from './plastic-law.ts';
 import type { PlasticHinge } from './results.ts';
+import { interpolateWithSlope } from './section-response.ts';
 
 /**
  * A position along the member in words without units (results are shown in SI or US customary;
@@ -67,22 +68,30 @@ export function shearSpans(beam: BeamModel, moment: Float64Array, x: number, sid
   return [walk(-1), walk(1)];
 }
 
-/** The moment at x, linear between stations (the first station of a doubled position on its left). */
-export function interpolateAt(beam: BeamModel, values: ArrayLike<number>, x: number): number {
-  const xs = beam.x;
-  const n = xs.length;
-  if (x <= xs[0]!) return values[0]!;
-  if (x >= xs[n - 1]!) return values[n - 1]!;
-  let lo = 0;
-  let hi = n - 1;
-  while (hi - lo > 1) {
-    const mid = (lo + hi) >> 1;
-    if (xs[mid]! <= x) lo = mid;
-    else hi = mid;
+/**
+ * Runs of consecutive stations past first yield in one sense (remembered moment at least
+ * (1 − tolerance)·M′y of the station's section), as [first, last] station indices.
+ */
+export function yieldedRuns(beam: BeamModel, remembered: ArrayLike<number>, sign: 1 | -1, tolerance = 0): [number, number][] {
+  const n = beam.x.length;
+  const yielded = (i: number) => {
+    const law = plasticLawOf(beam.zones[beam.stationZone[i]!]!, sign);
+    return !!law && law.yieldMoment !== null && remembered[i]! >= law.yieldMoment * (1 - tolerance);
+  };
+  const runs: [number, number][] = [];
+  for (let i = 0; i < n; i++) {
+    if (!yielded(i)) continue;
+    let j = i;
+    while (j + 1 < n && yielded(j + 1)) j++;
+    runs.push([i, j]);
+    i = j;
   }
-  const dx = xs[hi]! - xs[lo]!;
-  const t = dx > 0 ? (x - xs[lo]!) / dx : 0;
-  return values[lo]! + t * (values[hi]! - values[lo]!);
+  return runs;
+}
+
+/** The moment at x, linear between stations (at a doubled position, the right-hand copy). */
+export function interpolateAt(beam: BeamModel, values: ArrayLike<number>, x: number): number {
+  return interpolateWithSlope(beam.x, values, x, { value: 0, slope: 0 }).value;
 }
 
 /** Stations bracketing x and the weight of the right one, for a hinge measured at x. */
@@ -233,20 +242,19 @@ export function hingeReport(input: HingeReportInput): PlasticHinge[] {
   for (const sign of [1, -1] as const) {
     const mem = sign > 0 ? memory.sag : memory.hog;
     const when = sign > 0 ? yieldedAt.sag : yieldedAt.hog;
-    const yielded = (i: number) => {
-      const law = plasticLawOf(beam.zones[beam.stationZone[i]!]!, sign);
-      return !!law && law.yieldMoment !== null && mem[i]! >= law.yieldMoment;
-    };
-    let i = 0;
-    while (i < n) {
-      if (!yielded(i)) {
-        i++;
-        continue;
-      }
-      let j = i;
-      while (j + 1 < n && yielded(j + 1)) j++;
-      const from = xs[i]!;
-      const to = xs[j]!;
+    for (const [i, j] of yieldedRuns(beam, mem, sign)) {
+      // The zone ends where the remembered moment crosses first yield, between the last station
+      // below it and the first above (linear between stations, as the integration takes it).
+      const edge = (inside: number, outside: number): number => {
+        if (outside < 0 || outside >= n || xs[outside] === xs[inside]) return xs[inside]!;
+        const yIn = plasticLawOf(beam.zones[beam.stationZone[inside]!]!, sign)!.yieldMoment!;
+        const a = mem[outside]!;
+        const b = mem[inside]!;
+        const t = b > a ? Math.min(Math.max((yIn - a) / (b - a), 0), 1) : 1;
+        return xs[outside]! + t * (xs[inside]! - xs[outside]!);
+      };
+      const from = edge(i, i - 1);
+      const to = edge(j, j + 1);
       // Critical section: the largest moment relative to the localisation moment of its section
       // (the middle of a run of equal ratios: a zone of equal moment, or the tension shift's plateau).
       let best = -Infinity;
@@ -270,7 +278,6 @@ export function hingeReport(input: HingeReportInput): PlasticHinge[] {
       const local = hinges.filter((h) => h.sign === sign && h.critical >= from - tol && h.critical <= to + tol);
       local.forEach((h) => used.add(h));
       found.push(zoneHinge(input, sign, from, to, crit, local, Number.isFinite(first) ? first : local[0]?.formedAt ?? 0));
-      i = j + 1;
     }
   }
   // Localisations with no yielded zone: sections that reached their peak before the steel yielded.
@@ -286,11 +293,8 @@ function zoneHinge(input: HingeReportInput, sign: 1 | -1, from: number, to: numb
   const law: PlasticLaw | null = plasticLawOf(zone, sign);
   const resp = responseOf(zone, sign);
   const position = local[0]?.critical ?? beam.x[crit]!;
-  // The zone's plastic curvature reaches into the segments beside its last yielded stations.
-  const xs = beam.x;
-  const lo = xs.indexOf(from);
-  const hi = xs.lastIndexOf(to);
-  const spread = spreadRotation(beam, memory, sign, xs[Math.max(lo - 1, 0)]!, xs[Math.min(hi + 1, xs.length - 1)]!);
+  // The zone runs to where the remembered moment crosses first yield: its plastic curvature is nil beyond.
+  const spread = spreadRotation(beam, memory, sign, from, to);
   const localised = local.reduce((s, h) => s + h.rotation, 0);
   const tol = 1e-6 * beam.span;
   const faces = input.penetration.filter((p) => p.sign === sign && p.position >= from - tol && p.position <= to + tol);

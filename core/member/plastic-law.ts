@@ -21,7 +21,7 @@
  * Units: moment N·mm (magnitudes in the law's own sense), curvature 1/mm.
  */
 import type { MomentCurvatureResult, UltimateCause } from '../section/results.ts';
-import type { SectionResponse, ValueAndSlope } from './section-response.ts';
+import { interpolateWithSlope, type SectionResponse, type ValueAndSlope } from './section-response.ts';
 
 /** Relative distance below the peak moment at which a section's deformation localises. */
 export const LOCALISATION_TOLERANCE = 1e-3;
@@ -55,37 +55,6 @@ export interface PlasticLaw {
   readonly codeCrushing: { readonly moment: number; readonly localised: number | null; readonly curvature: number } | null;
 }
 
-/** Linear interpolation in an ascending table, clamped at both ends; slope 0 outside. */
-function lookup(xs: ArrayLike<number>, ys: ArrayLike<number>, x: number, out: ValueAndSlope): ValueAndSlope {
-  const n = xs.length;
-  if (n === 0) {
-    out.value = 0;
-    out.slope = 0;
-    return out;
-  }
-  if (x <= xs[0]!) {
-    out.value = ys[0]!;
-    out.slope = 0;
-    return out;
-  }
-  if (x >= xs[n - 1]!) {
-    out.value = ys[n - 1]!;
-    out.slope = 0;
-    return out;
-  }
-  let lo = 0;
-  let hi = n - 1;
-  while (hi - lo > 1) {
-    const mid = (lo + hi) >> 1;
-    if (xs[mid]! <= x) lo = mid;
-    else hi = mid;
-  }
-  const dx = xs[hi]! - xs[lo]!;
-  out.slope = dx > 0 ? (ys[hi]! - ys[lo]!) / dx : 0;
-  out.value = ys[lo]! + out.slope * (x - xs[lo]!);
-  return out;
-}
-
 /** φp and dφp/dμ at μ (0 below M′y, constant beyond the localisation moment). */
 export function plasticAt(law: PlasticLaw, mu: number, out: ValueAndSlope): ValueAndSlope {
   if (law.knotMoments.length === 0 || mu <= law.knotMoments[0]!) {
@@ -93,12 +62,12 @@ export function plasticAt(law: PlasticLaw, mu: number, out: ValueAndSlope): Valu
     out.slope = 0;
     return out;
   }
-  return lookup(law.knotMoments, law.knotPlastic, mu, out);
+  return interpolateWithSlope(law.knotMoments, law.knotPlastic, mu, out);
 }
 
 /** The moment of a localised hinge at localised curvature κ, and dM/dκ. */
 export function softeningAt(law: PlasticLaw, kappa: number, out: ValueAndSlope): ValueAndSlope {
-  return lookup(law.softeningCurvature, law.softeningMoment, kappa, out);
+  return interpolateWithSlope(law.softeningCurvature, law.softeningMoment, kappa, out);
 }
 
 /**
@@ -238,7 +207,7 @@ export function addTableIntegrals(xs: ArrayLike<number>, ys: ArrayLike<number>, 
   tScratch.length = 0;
   yScratch.length = 0;
   tScratch.push(t0);
-  yScratch.push(lookup(xs, ys, xa, vs).value);
+  yScratch.push(interpolateWithSlope(xs, ys, xa, vs).value);
   const lo = Math.min(xa, xb);
   const hi = Math.max(xa, xb);
   const n = xs.length;
@@ -258,7 +227,7 @@ export function addTableIntegrals(xs: ArrayLike<number>, ys: ArrayLike<number>, 
     }
   }
   tScratch.push(t1);
-  yScratch.push(lookup(xs, ys, xb, vs).value);
+  yScratch.push(interpolateWithSlope(xs, ys, xb, vs).value);
   for (let p = 0; p + 1 < tScratch.length; p++) {
     const ta = tScratch[p]!;
     const tb = tScratch[p + 1]!;
@@ -269,7 +238,7 @@ export function addTableIntegrals(xs: ArrayLike<number>, ys: ArrayLike<number>, 
     out.i0 += (span * (ya + yb)) / 2;
     out.i1 += (span * (ya * (2 * ta + tb) + yb * (ta + 2 * tb))) / 6;
     if (!active) continue;
-    const f = d !== 0 ? (yb - ya) / (span * d) : lookup(xs, ys, xa, vs).slope;
+    const f = d !== 0 ? (yb - ya) / (span * d) : interpolateWithSlope(xs, ys, xa, vs).slope;
     if (f === 0) continue;
     out.j00 += (f * ((1 - ta) ** 3 - (1 - tb) ** 3)) / 3;
     out.j11 += (f * (tb ** 3 - ta ** 3)) / 3;

@@ -7,7 +7,7 @@ import type { Problem } from '../diagnostics.ts';
 import type { ElasticProperties } from '../section/elastic.ts';
 import type { Text } from '../units/phrase.ts';
 import type { MomentCurvatureResult } from '../section/results.ts';
-import type { DeflectionLimitCase, HingeLengthMethod, SpanHingeRule, StrainPenetrationModel, SupportType } from './definition.ts';
+import type { DeflectionLimitCase, HingeLengthMethod, ShearDeformationModel, SpanHingeRule, StrainPenetrationModel, SupportType } from './definition.ts';
 
 /** Section results for one section used by the member, per bending direction it needs. */
 export interface SectionResult {
@@ -109,6 +109,7 @@ export interface PlasticHinge {
 export interface DeformationModel {
   readonly tensionShift: boolean;
   readonly strainPenetration: StrainPenetrationModel;
+  readonly shearDeformation: ShearDeformationModel;
   readonly ultimateLoadFraction: number;
   readonly spanHingeRule: SpanHingeRule;
 }

@@ -69,7 +69,7 @@ export interface ValueAndSlope {
 }
 
 /** Linear interpolation with the segment slope (0 outside the table, where values clamp). */
-export function interpolateWithSlope(xs: readonly number[], ys: readonly number[], x: number, out: ValueAndSlope): ValueAndSlope {
+export function interpolateWithSlope(xs: ArrayLike<number>, ys: ArrayLike<number>, x: number, out: ValueAndSlope): ValueAndSlope {
   const n = xs.length;
   if (n === 0) {
     out.value = 0;

@@ -5,7 +5,8 @@
  */
 import { fieldValue, type BeamModel, type ZoneResponse } from './beam-model.ts';
 import type { CapacitySettings, StrainPenetrationModel } from './definition.ts';
-import type { EngineOptions, PenetrationFace } from './equations.ts';
+import { shearSpans } from './hinges.ts';
+import { responseOf, type EngineOptions, type PenetrationFace } from './equations.ts';
 
 /** Default best-estimate ultimate on the descending branch: the load fallen to 80 % of the peak (Park 1988, from memory). */
 export const ULTIMATE_LOAD_FRACTION = 0.8;
@@ -87,4 +88,51 @@ export function engineOptions(beam: BeamModel, capacity: CapacitySettings): Engi
     }
   }
   return { plastic: true, shift, faces };
+}
+
+/**
+ * Shear term of the mean yield chord rotation, rad: 0.0013(1 + 1.5·h/Lv), EN 1998-3:2005 Eq. (A.10a)
+ * second term for beams and columns (Panagiotakos & Fardis 2001, fitted to tests; equation number
+ * from memory). h and Lv in mm.
+ */
+export function shearChordRotation(height: number, shearSpan: number): number {
+  return 0.0013 * (1 + (1.5 * height) / shearSpan);
+}
+
+/**
+ * The member's shear flexibility s (mm per N·mm) for the 'en1998-3' shear-deformation option: the
+ * section that first reaches first yield under the load pattern (moments base + λ·increment) is the
+ * critical one; with its shear span Lv (to the zero moment on each side, their mean inside a span) and
+ * height h, s = θs·Lv/M′y makes the shear deflection over Lv equal θs(h, Lv)·Lv when it yields. The
+ * shear strain then stays proportional to the shear force. 0 when no section would yield.
+ */
+export function shearFlexibility(beam: BeamModel, base: Float64Array, increment: Float64Array): number {
+  const n = beam.x.length;
+  let lambda = Infinity;
+  let at = -1;
+  let sense: 1 | -1 = 1;
+  for (let i = 0; i < n; i++) {
+    const dm = increment[i]!;
+    if (!(Math.abs(dm) > 0)) continue;
+    const sign: 1 | -1 = dm > 0 ? 1 : -1;
+    const my = responseOf(beam.zones[beam.stationZone[i]!]!, sign).firstYieldMoment;
+    if (my === null || !(my > 0)) continue;
+    const l = (my - sign * base[i]!) / (sign * dm);
+    if (l > 0 && l < lambda) {
+      lambda = l;
+      at = i;
+      sense = sign;
+    }
+  }
+  if (at < 0) return 0;
+  const zone = beam.zones[beam.stationZone[at]!]!;
+  const data = sense > 0 ? zone.hingeData.sagging : zone.hingeData.hogging;
+  const my = responseOf(zone, sense).firstYieldMoment!;
+  const moment = Float64Array.from(base, (m, i) => m + lambda * increment[i]!);
+  const sides = at === 0 ? 'right' : at === n - 1 ? 'left' : 'both';
+  const spans = shearSpans(beam, moment, beam.x[at]!, sides);
+  const lv = spans.reduce((a, b) => a + b, 0) / spans.length;
+  const h = data.height ?? data.effectiveDepth / 0.9;
+  if (!(lv > 0) || !(h > 0)) return 0;
+  return (shearChordRotation(h, lv) * lv) / my;
 }

@@ -14,7 +14,7 @@
 import { z } from 'zod';
 import { CODE_BASES, CONCRETE_COMPRESSION_MODELS, CONCRETE_TENSION_MODELS, STEEL_MODELS, TENSION_STIFFENING_ZONES, ULTIMATE_STRAIN_CHOICES, type ConcreteSpec, type FrpSpec, type SteelSpec } from '../materials/specs.ts';
 import {
-  DEFLECTION_LIMIT_CASES, HINGE_LENGTH_METHODS, LOAD_CASES, LOAD_PATTERNS, SPAN_HINGE_RULES, STRAIN_PENETRATION_MODELS, SUPPORT_TYPES,
+  DEFLECTION_LIMIT_CASES, HINGE_LENGTH_METHODS, LOAD_CASES, LOAD_PATTERNS, SHEAR_DEFORMATION_MODELS, SPAN_HINGE_RULES, STRAIN_PENETRATION_MODELS, SUPPORT_TYPES,
   type CapacitySettings, type LoadFactors, type MemberLoad, type MemberZone, type ServiceSettings,
 } from '../member/definition.ts';
 import {
@@ -166,6 +166,7 @@ export const capacitySettingsSchema = z.looseObject({
   spanHingeRule: z.enum(SPAN_HINGE_RULES).optional(),
   tensionShift: z.boolean().optional(),
   strainPenetration: z.enum(STRAIN_PENETRATION_MODELS).optional(),
+  shearDeformation: z.enum(SHEAR_DEFORMATION_MODELS).optional(),
   ultimateLoadFraction: number.optional(),
 });
 

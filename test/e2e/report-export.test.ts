@@ -82,7 +82,9 @@ describe('PDF export in the app', () => {
     expect(a.pages.length).toBe(c.pages.length);
     a.pages.forEach((text, i) => expect(text, `page ${i + 1}`).toBe(c.pages[i]));
     // Same figures drawn the same way: the files differ at most by how each build of pdfmake writes them.
-    expect(Math.abs(app.length - cli.length) / cli.length).toBeLessThan(0.02);
+    // (3 %: the load–deflection figures hold about twice the points since the curves follow their
+    // descending branch and the member is integrated at 120 or more stations; 2.5 % measured.)
+    expect(Math.abs(app.length - cli.length) / cli.length).toBeLessThan(0.03);
     expect(app.toString('latin1').match(/\/Subtype \/Image/g)).toBeNull();
     expect(problems).toEqual([]);
   }, 600_000);

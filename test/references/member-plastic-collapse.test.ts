@@ -22,8 +22,8 @@ const section: SectionDefinition = {
   bars: [{ steelId: 's', depth: 50, count: 4, diameter: 20 }, { steelId: 's', depth: 550, count: 4, diameter: 20 }],
 };
 const L = 6000;
-// The closed forms know neither the tension shift nor strain penetration: both off here.
-const settings = (lp: number) => ({ pattern: 'proportional' as const, hingeLengthMethod: 'user' as const, userHingeLength: lp, tensionShift: false, strainPenetration: 'none' as const });
+// The closed forms know neither the tension shift, strain penetration nor shear deformation: all off here.
+const settings = (lp: number) => ({ pattern: 'proportional' as const, hingeLengthMethod: 'user' as const, userHingeLength: lp, tensionShift: false, strainPenetration: 'none' as const, shearDeformation: 'none' as const });
 
 function run(support: SupportType, load: 'udl' | 'tip', lp = 500) {
   const beam = beamOf(support, L, [{ from: 0, to: L, section }], resolver, 200);

@@ -20,6 +20,7 @@ import type { BeamResult, SectionResult } from './results.ts';
 import { serviceDeflections, type ServiceZone } from './service.ts';
 import { shiftStations, ULTIMATE_LOAD_FRACTION } from './spread.ts';
 import { releasedMoment, toStaticLoad, totalLoad, type StaticLoad } from './statics.ts';
+import { memberProportionProblems } from './proportions.ts';
 import { validateMember } from './validate.ts';
 import { elasticZone, zoneResponse } from './zones.ts';
 
@@ -169,6 +170,9 @@ export function analyzeBeam(member: BeamDefinition, context: MemberContext): Bea
   const uniqueSections = [...new Map(zoneSections.filter((s): s is SectionAnalysis => !!s).map((s) => [s.sectionId, s])).values()];
   const sections = uniqueSections.map(sectionResult).filter((s): s is SectionResult => s !== null);
   if (sectionErrors.length > 0) return invalid(member, sectionErrors, sections);
+  // A deep beam is outside beam theory (proportions.ts).
+  const deep = memberProportionProblems(member, context.path, context.code, (id) => context.section(id)?.model?.height);
+  if (deep.length > 0) return invalid(member, deep, sections);
   const analyses = zoneSections as SectionAnalysis[];
   const warnings: Text[] = uniqueTexts(uniqueSections.flatMap((s) => s.warnings.map((w) => phrase`Section "${s.sectionName}": ${w}`)));
 

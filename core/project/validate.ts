@@ -26,7 +26,7 @@ import { validateMember } from '../member/validate.ts';
 import { validateContinuousBeam } from '../continuous/validate.ts';
 import { validateAsFound, validateSchemes } from '../retrofit/validate.ts';
 import { buildSectionModel, checkBarNumbers, validateShape } from '../section/build.ts';
-import { sectionGeometryDiagnostics } from './validate-geometry.ts';
+import { memberGeometryDiagnostics, sectionGeometryDiagnostics } from './validate-geometry.ts';
 import type { SectionDefinition } from '../section/definition.ts';
 import { phrase, q } from '../units/phrase.ts';
 import { materialLibrary, type MaterialSettings } from '../materials/library.ts';
@@ -363,6 +363,7 @@ export function validateProjectData(data: unknown): { project: Project | null; d
   for (const { value: member, index } of members) {
     const path = itemPath('members', index, member);
     semantic.push(...guarded(path, () => validateMember(member, path, sectionIds)));
+    semantic.push(...guarded(path, () => memberGeometryDiagnostics(member, path, code, soundProject.sections)));
     if (member.asFound) semantic.push(...guarded(`${path}.asFound`, () => validateAsFound(member.asFound!, member, soundProject, `${path}.asFound`)));
     if (member.schemes) semantic.push(...guarded(`${path}.schemes`, () => validateSchemes(member.schemes!, member, soundProject, `${path}.schemes`)));
     if (member.preferredSchemeId !== undefined && !(member.schemes ?? []).some((s) => s.id === member.preferredSchemeId)) {

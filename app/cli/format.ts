@@ -13,6 +13,7 @@ import type { Project, UnitSystem } from '../../core/project/types.ts';
 import { displaySystem, formatFixed, formatNumber, NOT_A_VALUE, say, toDisplay, unitLabel, type Quantity, type Text, type UnitId } from '../../core/units/index.ts';
 import { RESULTS_CAUTION } from '../shared/about.ts';
 import type { MemberResult } from '../../core/assessment/results.ts';
+import { serviceOutsideRange } from '../../core/member/small-deflection.ts';
 
 export { RESULTS_CAUTION };
 
@@ -299,7 +300,7 @@ export function analysisJson(project: Project, results: ProjectResults, system: 
               pass: k.deflection.pass,
             }
           : null,
-        deflectionChecks: (r.service?.checks ?? []).map((c) => ({
+        deflectionChecks: (serviceOutsideRange(r.service, r.span) ? [] : r.service?.checks ?? []).map((c) => ({
           limitCase: c.limitCase,
           computed: measured('deflection', c.governing, system),
           limit: measured('deflection', c.limit, system),

@@ -20,6 +20,7 @@ import type { ShearResult } from './shear.ts';
 import { strengthCombination } from './combinations.ts';
 import type { Setup, VariantRun } from './variant.ts';
 import { capitalised, joinTexts, lowerFirst, phrase, q, withoutFinalStop, type Text } from '../units/phrase.ts';
+import { OUTSIDE_SMALL_DEFLECTION, serviceOutsideRange } from '../member/small-deflection.ts';
 
 const finite = (x: number | null | undefined): number | null => (x !== null && x !== undefined && Number.isFinite(x) ? x : null);
 
@@ -112,7 +113,7 @@ export function variantFlexureSentence(result: MemberResult, strength: FlexuralC
   const fails = checks.filter((c) => !c.pass);
   if (fails.length > 0) {
     const w = fails.reduce((a, b) => (b.utilisation > a.utilisation ? b : a));
-    parts.push(`deflection check fails: ${w.utilisation.toFixed(2)} × ℓ/${w.ratio} (${w.quantity})`);
+    parts.push(serviceOutsideRange(result.service, result.span) ? `deflection checks fail: ${OUTSIDE_SMALL_DEFLECTION}` : `deflection check fails: ${w.utilisation.toFixed(2)} × ℓ/${w.ratio} (${w.quantity})`);
   } else if (checks.length > 0) parts.push('deflection checks pass');
   return phrase`${joinTexts(parts, '; ')}.`;
 }

@@ -21,6 +21,7 @@ import { memberShear, type ShearResult } from './shear.ts';
 import type { ShearZone } from './shear-section.ts';
 import type { AciEdition } from './shear-aci.ts';
 import { memberStrength } from './strength.ts';
+import { OUTSIDE_SMALL_DEFLECTION, serviceOutsideRange } from '../member/small-deflection.ts';
 
 /** How the sections of a variant are analysed (the project's analysis settings). */
 export interface SectionSettings {
@@ -121,7 +122,7 @@ export function assessBeam(member: BeamDefinition, context: MemberContext): Memb
   parts.push(`strength check ${strength.pass ? 'passes' : 'fails'} (utilisation ${strength.utilisation.toFixed(2)} under ${combination})`);
   if (serviceFails.length > 0) {
     const worst = serviceFails.reduce((a, b) => (b.utilisation > a.utilisation ? b : a));
-    parts.push(`deflection check fails: ${worst.utilisation.toFixed(2)} × ℓ/${worst.ratio} (${worst.quantity})`);
+    parts.push(serviceOutsideRange(result.service, result.span) ? `deflection checks fail: ${OUTSIDE_SMALL_DEFLECTION}` : `deflection check fails: ${worst.utilisation.toFixed(2)} × ℓ/${worst.ratio} (${worst.quantity})`);
   } else if (checks.length > 0) {
     parts.push('deflection checks pass');
   }

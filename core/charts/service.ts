@@ -18,6 +18,7 @@ import type { DeflectionLimitCase } from '../member/definition.ts';
 import type { DeflectionCheck, ServiceDeflections } from '../member/results.ts';
 import type { ChartPoint, ChartSpec, MarkerSpec, SeriesSpec, UnitsInput } from './types.ts';
 import { axisFor, axisScale, display, finite, resolveUnits, unitText } from './units.ts';
+import { OUTSIDE_SMALL_DEFLECTION, SMALL_DEFLECTION_RATIO, serviceOutsideRange } from '../member/small-deflection.ts';
 
 /** Steps of the load history, in order. */
 export const SERVICE_STEPS = ['unloaded', 'dead', 'sustained', 'service', 'sustained-long', 'final'] as const;
@@ -77,9 +78,10 @@ function stepNames(durationMonths: number | null): readonly (readonly string[])[
 /**
  * Chart spec of the service deflections of a member.
  * @param durationMonths the load duration, for the axis label (null: "long term")
- * Degenerate cases: no service result → `emptyMessage`; values that are not finite are left out.
+ * @param span the member's span, mm: deflections beyond span/50 are outside the method's range and not drawn
+ * Degenerate cases: no service result or one outside the range → `emptyMessage`; values that are not finite are left out.
  */
-export function serviceDeflectionChart(service: ServiceDeflections | null, unitsInput: UnitsInput, durationMonths: number | null = null): ChartSpec {
+export function serviceDeflectionChart(service: ServiceDeflections | null, unitsInput: UnitsInput, durationMonths: number | null = null, span?: number): ChartSpec {
   const units = resolveUnits(unitsInput);
   const base: ChartSpec = {
     kind: 'service-deflection',
@@ -94,6 +96,7 @@ export function serviceDeflectionChart(service: ServiceDeflections | null, units
     notes: [],
   };
   if (!service) return { ...base, emptyMessage: 'No service deflections (the member was not analysed).' };
+  if (span !== undefined && serviceOutsideRange(service, span)) return { ...base, emptyMessage: `No service deflections: ${OUTSIDE_SMALL_DEFLECTION} (beyond span/${SMALL_DEFLECTION_RATIO}).` };
   const integration = serviceStepDeflections(service, 'integration');
   const code = serviceStepDeflections(service, 'code');
   const values = [...Object.values(integration), ...Object.values(code), ...service.checks.map((c) => c.limit)].map((v) => display('deflection', v, units));

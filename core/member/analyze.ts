@@ -21,6 +21,7 @@ import { serviceDeflections, type ServiceZone } from './service.ts';
 import { shiftStations, ULTIMATE_LOAD_FRACTION } from './spread.ts';
 import { releasedMoment, toStaticLoad, totalLoad, type StaticLoad } from './statics.ts';
 import { memberProportionProblems } from './proportions.ts';
+import { serviceOutsideRange } from './small-deflection.ts';
 import { validateMember } from './validate.ts';
 import { elasticZone, zoneResponse } from './zones.ts';
 
@@ -266,6 +267,8 @@ export function analyzeBeam(member: BeamDefinition, context: MemberContext): Bea
     settings: member.service,
   });
   warnings.push(...service.warnings);
+  const outsideRange = serviceOutsideRange(service.service, span);
+  if (outsideRange) warnings.push(outsideRange);
 
   const notConverged = (capacity && !capacity.converged) || uniqueSections.some((s) => Object.values(s.curves).some((c) => c && c.status.kind !== 'complete'));
   const distributions = [...(service.distribution ? [service.distribution] : []), ...(capacity?.distributions ?? [])];

@@ -15,6 +15,7 @@ import type { MemberDefinition } from './types.ts';
 import type { Problem } from '../diagnostics.ts';
 import type { Text } from '../units/phrase.ts';
 import { needsStrengthening, type MemberResult } from '../assessment/results.ts';
+import { serviceOutsideRange } from '../member/small-deflection.ts';
 
 export interface CriticalSection {
   readonly sectionId: string;
@@ -151,7 +152,8 @@ export function memberKeyResults(result: MemberResult, definition?: MemberDefini
     displacementDuctility: finiteOrNull(result.ductility.displacementDuctility),
     plasticRotationCapacity: finiteOrNull(picked?.hinge?.rotationCapacity),
     ultimateLoadFactor: finiteOrNull(ultimate?.loadFactor),
-    deflection: worst && Number.isFinite(worst.governing) && Number.isFinite(worst.limit) && Number.isFinite(worst.utilisation)
+    // A deflection outside the method's range is no result (core/member/small-deflection.ts); the warnings say why.
+    deflection: worst && !serviceOutsideRange(result.service, result.span) && Number.isFinite(worst.governing) && Number.isFinite(worst.limit) && Number.isFinite(worst.utilisation)
       ? { limitCase: worst.limitCase, description: worst.description, deflection: worst.governing, limit: worst.limit, ratio: worst.ratio, utilisation: worst.utilisation, pass: worst.pass }
       : null,
     deflectionChecksFailed: checks.filter((c) => !c.pass).length,

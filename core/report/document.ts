@@ -23,6 +23,7 @@ import { withFonts } from './scripts.ts';
 import { sectionChapter } from './sections.ts';
 import type { Content, ContentNode, DocumentDefinition, ReportInput } from './types.ts';
 import type { MemberResult } from '../assessment/results.ts';
+import { serviceOutsideRange } from '../member/small-deflection.ts';
 
 /** `2026-03-14T09:30:00Z` → `2026-03-14 09:30 UTC` (text only; any other text is printed as given). */
 export function printableDate(iso: string): string {
@@ -80,7 +81,7 @@ function summary(plan: ReportPlan, f: ReportFormatter): Content[] {
       { stack: [{ text: definition.name, bold: true }, { text: ['page ', { text: '00', pageReference: anchor }], fontSize: 6.8, color: COLOURS.muted }] },
       { stack: [{ text: f.span(definition.span) }, { text: SUPPORT_WORDS[definition.supports].replace(/ \(.*\)$/, ''), fontSize: 6.8, color: COLOURS.muted }] },
       result?.strength ? { stack: [{ text: f.fixed(result.strength.utilisation, 2) }, verdict(result.strength.pass)] } : '—',
-      worstService ? { stack: [{ text: `${f.fixed(worstService.utilisation, 2)} (ℓ/${worstService.ratio})` }, verdict(result!.service!.checks.every((c) => c.pass))] } : '—',
+      worstService ? { stack: [{ text: serviceOutsideRange(result!.service, result!.span) ? 'outside the method\'s range' : `${f.fixed(worstService.utilisation, 2)} (ℓ/${worstService.ratio})` }, verdict(result!.service!.checks.every((c) => c.pass))] } : '—',
       f.number(result?.ductility.displacementDuctility),
       statusCell(result?.status ?? null),
       {

@@ -16,6 +16,7 @@ import type { Content, ContentNode } from './types.ts';
 import type { MemberResult } from '../assessment/results.ts';
 import { defaultStrengthFactors } from '../assessment/combinations.ts';
 import { existingChapter } from './existing.ts';
+import { serviceOutsideRange } from '../member/small-deflection.ts';
 
 const LOAD_CASE_WORDS: Readonly<Record<MemberLoad['loadCase'], string>> = { dead: 'dead', superimposed: 'superimposed dead', live: 'live' };
 
@@ -176,6 +177,8 @@ function service(ctx: WriteContext, result: MemberResult): Content[] {
   const { f } = ctx;
   const s = result.service;
   if (!s) return [keepTogether([h2('Service deflections and limits'), { text: 'Not computed for this member.', ...STYLES.body }])];
+  const outside = serviceOutsideRange(s, result.span);
+  if (outside) return [keepTogether([h2('Service deflections and limits'), { text: f.say(outside), ...STYLES.body }])];
   const i = s.immediate.integration;
   const c = s.immediate.code;
   const rows: Content[][] = [

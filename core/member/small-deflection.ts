@@ -1,0 +1,36 @@
+/**
+ * The range of the method: curvature integrated along the undeformed span (small deflections, no
+ * second-order or membrane action). A computed service deflection beyond span/50 is outside it —
+ * such a beam does not carry its service load as a beam (too little steel, a span far too long for
+ * its depth) — and is reported in words, never as a number presented as a result (issue 17).
+ * Units: mm.
+ */
+import { phrase, q, type Text } from '../units/phrase.ts';
+import type { ServiceDeflections } from './results.ts';
+
+/** Deflections up to span / SMALL_DEFLECTION_RATIO are within the method (span/50, issue 17). */
+export const SMALL_DEFLECTION_RATIO = 50;
+
+/** What presenters show instead of a deflection outside the range. */
+export const OUTSIDE_SMALL_DEFLECTION = 'outside the small-deflection range of the method';
+
+/** Every service deflection the result presents, mm. */
+function serviceValues(s: ServiceDeflections): number[] {
+  const { integration, code } = s.immediate;
+  return [
+    ...Object.values(integration), ...Object.values(code),
+    s.longTerm.integrationAdditional, s.longTerm.codeAdditional, s.longTerm.integrationTotal, s.longTerm.codeTotal,
+    ...s.checks.flatMap((c) => [c.byIntegration, c.byCode, c.governing]),
+  ];
+}
+
+/**
+ * Whether a member's service deflections lie outside the method's range (any of them beyond
+ * span/50 in either direction), with the sentence that says so; null when they are within it.
+ */
+export function serviceOutsideRange(service: ServiceDeflections | null, span: number): Text | null {
+  if (!service || !(span > 0)) return null;
+  const limit = span / SMALL_DEFLECTION_RATIO;
+  if (serviceValues(service).every((v) => Math.abs(v) <= limit)) return null;
+  return phrase`Service deflections: ${OUTSIDE_SMALL_DEFLECTION} (a computed deflection exceeds span/${SMALL_DEFLECTION_RATIO} = ${q('deflection', limit)}): the beam does not carry its service load as a beam — check the reinforcement and the span; the deflection checks fail and no deflection is given as a result.`;
+}

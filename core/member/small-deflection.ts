@@ -14,13 +14,13 @@ export const SMALL_DEFLECTION_RATIO = 50;
 /** What presenters show instead of a deflection outside the range. */
 export const OUTSIDE_SMALL_DEFLECTION = 'outside the small-deflection range of the method';
 
-/** Every service deflection the result presents, mm. */
+/** Every service deflection the result presents, mm (parts a caller left out are skipped). */
 function serviceValues(s: ServiceDeflections): number[] {
-  const { integration, code } = s.immediate;
+  const { immediate, longTerm, checks } = s as Partial<ServiceDeflections>;
   return [
-    ...Object.values(integration), ...Object.values(code),
-    s.longTerm.integrationAdditional, s.longTerm.codeAdditional, s.longTerm.integrationTotal, s.longTerm.codeTotal,
-    ...s.checks.flatMap((c) => [c.byIntegration, c.byCode, c.governing]),
+    ...(immediate ? [...Object.values(immediate.integration), ...Object.values(immediate.code)] : []),
+    ...(longTerm ? [longTerm.integrationAdditional, longTerm.codeAdditional, longTerm.integrationTotal, longTerm.codeTotal] : []),
+    ...(checks ?? []).flatMap((c) => [c.byIntegration, c.byCode, c.governing]),
   ];
 }
 

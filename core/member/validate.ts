@@ -4,7 +4,7 @@
  */
 import { checkNumber, diagnostic, type Diagnostic } from '../diagnostics.ts';
 import { phrase, q, type Text } from '../units/phrase.ts';
-import { DEFLECTION_LIMIT_CASES, HINGE_LENGTH_METHODS, LOAD_CASES, LOAD_PATTERNS, SUPPORT_TYPES, type BeamDefinition } from './definition.ts';
+import { DEFLECTION_LIMIT_CASES, HINGE_LENGTH_METHODS, LOAD_CASES, LOAD_PATTERNS, SHEAR_DEFORMATION_MODELS, SPAN_HINGE_RULES, STRAIN_PENETRATION_MODELS, SUPPORT_TYPES, type BeamDefinition } from './definition.ts';
 
 /** True when `value` is one of `options` (a type guard over the option lists of definition.ts). */
 const isOneOf = <T extends string>(options: readonly T[], value: unknown): value is T => (options as readonly unknown[]).includes(value);
@@ -99,6 +99,12 @@ export function validateMember(member: BeamDefinition, path: string, sectionIds:
     if (!isOneOf(LOAD_PATTERNS, c.pattern)) error('unknown-option', 'capacity.pattern', `must be "proportional" or "live-only", got ${JSON.stringify(c.pattern)}`);
     if (!isOneOf(HINGE_LENGTH_METHODS, c.hingeLengthMethod)) error('unknown-option', 'capacity.hingeLengthMethod', `must be ${oneOf(HINGE_LENGTH_METHODS)}, got ${JSON.stringify(c.hingeLengthMethod)}`);
     if (c.hingeLengthMethod === 'user') checkNumber(out, `${path}.capacity.userHingeLength`, c.userHingeLength, { min: 10, max: 5000, quantity: 'sectionLength' });
+    if (c.spanHingeRule !== undefined && !isOneOf(SPAN_HINGE_RULES, c.spanHingeRule)) error('unknown-option', 'capacity.spanHingeRule', `must be ${oneOf(SPAN_HINGE_RULES)}, got ${JSON.stringify(c.spanHingeRule)}`);
+    if (c.strainPenetration !== undefined && !isOneOf(STRAIN_PENETRATION_MODELS, c.strainPenetration)) error('unknown-option', 'capacity.strainPenetration', `must be ${oneOf(STRAIN_PENETRATION_MODELS)}, got ${JSON.stringify(c.strainPenetration)}`);
+    if (c.shearDeformation !== undefined && !isOneOf(SHEAR_DEFORMATION_MODELS, c.shearDeformation)) error('unknown-option', 'capacity.shearDeformation', `must be ${oneOf(SHEAR_DEFORMATION_MODELS)}, got ${JSON.stringify(c.shearDeformation)}`);
+    // The descending branch is followed to this fraction of the peak: 0.5 (far down the branch) to
+    // 0.99 (at the peak); Park's 0.8 (1988, from memory) is the default.
+    if (c.ultimateLoadFraction !== undefined) checkNumber(out, `${path}.capacity.ultimateLoadFraction`, c.ultimateLoadFraction, { min: 0.5, max: 0.99 });
   }
   if (member.strengthFactors) {
     for (const k of ['dead', 'superimposed', 'live'] as const) checkNumber(out, `${path}.strengthFactors.${k}`, member.strengthFactors[k], { min: 0, max: 5 });

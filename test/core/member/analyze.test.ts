@@ -37,6 +37,12 @@ describe('bad member input', () => {
     expect(d.map((x) => x.path)).toEqual(['members[3] "B-12".loads[0].magnitude', 'members[3] "B-12".loads[1].position']);
     expect(say(d[1]!.message, 'si')).toMatch(/must lie on the span \(0 to 6 m\), got 6\.5 m/);
   });
+  it('deformation-model options out of range or unknown name the field and the allowed values', () => {
+    const d = messages({ capacity: { pattern: 'proportional', hingeLengthMethod: 'priestley-2007', ultimateLoadFraction: 1.5, strainPenetration: 'glue' as never } });
+    expect(d.map((x) => x.path)).toEqual(['members[3] "B-12".capacity.strainPenetration', 'members[3] "B-12".capacity.ultimateLoadFraction']);
+    expect(say(d[0]!.message, 'si')).toMatch(/en1998-3/);
+    expect(say(d[1]!.message, 'si')).toMatch(/0\.5.*0\.99.*1\.5/);
+  });
   it('an invalid member is reported as an input error with no numbers, and the other members are still analysed', () => {
     const project = smallProject('ACI 318-19', [member('BAD', 'simply-supported', 0, 'r1'), member('GOOD', 'simply-supported', 6000, 'r1')]);
     const [bad, good] = analyzeProject(project).members;

@@ -19,6 +19,8 @@ export interface ProjectSummary {
   readonly memberCount: number;
   readonly ok: number;
   readonly checkFails: number;
+  /** Members whose checks pass but which are brittle (never counted as ok). */
+  readonly brittle: number;
   readonly notConverged: number;
   readonly inputErrors: number;
   /** One line per member: id, name, status and governing mode (say(governingMode, units) for words). */
@@ -97,7 +99,7 @@ export function analyzeMembers(project: Project, memberIds?: readonly string[], 
   members.forEach(({ m, index }, k) => {
     const context: AssessmentContext = {
       code: project.info.codeBasis, segments: project.settings.stations, section, sectionIds, path: `members[${index}] "${m.name}"`,
-      library: project, sectionSettings: project.settings, unitSystem: project.info.unitSystem,
+      library: project, sectionSettings: project.settings, unitSystem: project.info.unitSystem, combinations: project.settings,
     };
     let result: MemberResult;
     // Members with an as-found condition or schemes carry derived ids of their own: never shared.
@@ -134,6 +136,7 @@ export function summarize(members: readonly MemberResult[]): ProjectSummary {
     memberCount: members.length,
     ok: count('ok'),
     checkFails: count('check-fails'),
+    brittle: count('brittle'),
     notConverged: count('not-converged'),
     inputErrors: count('input-error'),
     lines: members.map((m) => ({ memberId: m.memberId, memberName: m.memberName, status: m.status, governingMode: m.governingMode })),

@@ -9,7 +9,7 @@ import type { UnitSystem } from '../../core/project/types.ts';
 /** Exit codes (docs/cli.md). */
 export const EXIT = {
   ok: 0,
-  /** validate: the file has errors; analyze: a member is not ok (failing check, input error, not converged). */
+  /** validate: the file has errors; analyze: a member is not ok (failing check, brittle, input error, not converged). */
   problems: 1,
   /** Bad arguments, or a file named on the command line that cannot be read or written. */
   usage: 2,
@@ -76,8 +76,8 @@ Options:
 Problems in the file are printed to stderr; members with input errors are reported as such and
 the others are analysed. A progress bar is shown on stderr when it is a terminal.
 
-Exit codes: 0 every member ok; 1 a member has a failing check, an input error or did not
-converge, or the file cannot be analysed; 2 usage error or unreadable file; 4 internal error.`,
+Exit codes: 0 every member ok; 1 a member has a failing check, is brittle, has an input error or
+did not converge, or the file cannot be analysed; 2 usage error or unreadable file; 4 internal error.`,
   report: `Usage: hingeline report FILE --out REPORT.pdf [options]
 
 Analyses the project and writes the PDF report.

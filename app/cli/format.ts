@@ -23,6 +23,7 @@ const display = displaySystem;
 export const STATUS_WORDS: Readonly<Record<MemberResult['status'], string>> = {
   ok: 'ok',
   'check-fails': 'check fails',
+  brittle: 'brittle',
   'not-converged': 'not converged',
   'input-error': 'input error',
 };
@@ -128,7 +129,7 @@ export function fixedQuantityText(quantity: Quantity, value: number | null | und
 function statusText(style: Style, status: MemberResult['status']): string {
   const words = STATUS_WORDS[status];
   if (status === 'ok') return green(style, words);
-  if (status === 'check-fails') return red(style, words);
+  if (status === 'check-fails' || status === 'brittle') return red(style, words);
   return yellow(style, words);
 }
 
@@ -204,14 +205,15 @@ export function tableReport(project: Project, results: ProjectResults, options: 
     return `${bold(style, head)}  ${wrap(words(k.governingMode), width, label + 2)}${problems}${warnings}`;
   });
   const s = results.summary;
-  const summary = `${s.memberCount} member${s.memberCount === 1 ? '' : 's'}: ${s.ok} ok, ${s.checkFails} with a failing check, ${s.notConverged} not converged, ${s.inputErrors} with input errors.`;
+  const summary = `${s.memberCount} member${s.memberCount === 1 ? '' : 's'}: ${s.ok} ok, ${s.checkFails} with a failing check, ${s.brittle} brittle, ${s.notConverged} not converged, ${s.inputErrors} with input errors.`;
   const notes: [string, string][] = [
     ['My, Mu', `critical section: My ${MOMENT_NAMES.idealisedYield.meaning}; Mu ${MOMENT_NAMES.ultimate.meaning}`],
     ['φu/φy', 'curvature ductility of the critical section'],
     ['μΔ', 'displacement ductility of the member'],
     ['θp', 'plastic rotation capacity of the hinge that governs the ultimate state'],
     ['Δ, Δ limit', 'the service deflection check with the highest utilisation, and its limit'],
-    ['Strength', 'factored moment demand / design flexural resistance'],
+    ['Strength', 'largest factored moment demand / design flexural resistance over the span (the governing combination is named in the governing mode)'],
+    ['brittle', 'every check passes but the member fails without warning (shear before flexure, strength before the steel yields, or a cracking moment above the strength): its ductility and rotation are not given'],
   ];
   return [
     bold(style, title),
@@ -251,7 +253,7 @@ export function pure(value: number | null | undefined): Measured | null {
 }
 
 /** Version of the JSON output's layout (docs/cli.md). */
-export const ANALYSIS_JSON_VERSION = 1;
+export const ANALYSIS_JSON_VERSION = 2;
 
 /**
  * The `analyze --format json` document (see docs/cli.md for every key); with `detail` (the full
@@ -269,6 +271,7 @@ export function analysisJson(project: Project, results: ProjectResults, system: 
       members: results.summary.memberCount,
       ok: results.summary.ok,
       checkFails: results.summary.checkFails,
+      brittle: results.summary.brittle,
       notConverged: results.summary.notConverged,
       inputErrors: results.summary.inputErrors,
     },
@@ -288,6 +291,8 @@ export function analysisJson(project: Project, results: ProjectResults, system: 
         curvatureDuctility: pure(k.curvatureDuctility),
         displacementDuctility: pure(k.displacementDuctility),
         plasticRotationCapacity: measured('rotation', k.plasticRotationCapacity, system),
+        ductilityUnavailable: k.ductilityUnavailable ? say(k.ductilityUnavailable, system) : null,
+        brittle: r.brittle.map((b) => ({ cause: b.cause, sectionId: b.sectionId, direction: b.direction, text: say(b.text, system) })),
         ultimateLoadFactor: pure(k.ultimateLoadFactor),
         deflection: k.deflection
           ? {
@@ -308,7 +313,16 @@ export function analysisJson(project: Project, results: ProjectResults, system: 
           utilisation: pure(c.utilisation),
           pass: c.pass,
         })),
-        strength: k.strengthUtilisation !== null ? { utilisation: pure(k.strengthUtilisation), pass: k.strengthPass } : null,
+        strength: k.strengthUtilisation !== null
+          ? {
+              utilisation: pure(k.strengthUtilisation),
+              pass: k.strengthPass,
+              position: measured('spanLength', k.strengthPosition, system),
+              direction: k.strengthDirection,
+              combination: k.strengthCombination,
+              combinations: (r.strength?.combinations ?? []).map((c) => ({ combination: c.combination, utilisation: pure(c.utilisation) })),
+            }
+          : null,
         governingMode: say(k.governingMode, system),
         warnings: r.warnings.map((w) => say(w, system)),
         errors: k.errors.map((e) => ({ path: e.path, message: say(e.message, system) })),

@@ -6,16 +6,80 @@ import type { CodeBasis } from '../materials/specs.ts';
 import type { BeamDefinition, LoadFactors, MemberLoad } from '../member/definition.ts';
 import { toStaticLoad, type StaticLoad } from '../member/statics.ts';
 
-/** Default strength factors of the code basis: ACI 318-19 Eq. (5.3.1b) 1.2D + 1.6L; EN 1990 Eq. (6.10) 1.35G + 1.5Q. */
-export function defaultStrengthFactors(code: CodeBasis): LoadFactors {
-  return code === 'ACI 318-19' ? { dead: 1.2, superimposed: 1.2, live: 1.6 } : { dead: 1.35, superimposed: 1.35, live: 1.5 };
+/** How EN 1990 combines actions for the strength checks (the project setting `enCombination`). */
+export const EN_COMBINATION_RULES = ['6.10', '6.10a-6.10b'] as const;
+export type EnCombinationRule = (typeof EN_COMBINATION_RULES)[number];
+
+/** What the project says about combinations (core/project settings). */
+export interface CombinationSettings {
+  /** EN 1990: Eq. (6.10), or the less favourable of Eqs. (6.10a) and (6.10b). Default '6.10'. */
+  readonly enCombination?: EnCombinationRule;
+  /** ψ0 of the imposed load in Eq. (6.10a), default 0.7 (EN 1990 Table A1.1, categories A–D). */
+  readonly liveCombinationFactor?: number;
 }
 
-/** The strength combination of a member and its description. */
-export function strengthCombination(member: BeamDefinition, code: CodeBasis): { factors: LoadFactors; text: string } {
-  const factors = member.strengthFactors ?? defaultStrengthFactors(code);
-  const text = code === 'ACI 318-19' ? `${factors.dead}D + ${factors.live}L (ACI 318-19 5.3.1)` : `${factors.dead}G + ${factors.live}Q (EN 1990 6.10)`;
-  return { factors, text };
+/** Recommended values of EN 1990 Table A1.2(B): γG = 1.35, γQ = 1.5, ξ = 0.85; ψ0 = 0.7 of Table A1.1. */
+export const EN_PERMANENT_FACTOR = 1.35;
+export const EN_VARIABLE_FACTOR = 1.5;
+export const EN_REDUCTION_FACTOR = 0.85;
+export const EN_DEFAULT_PSI0 = 0.7;
+
+/** One factored combination of the strength checks. */
+export interface LoadCombination {
+  /** Short name, e.g. `1.2D + 1.6L`. */
+  readonly name: string;
+  /** Where it comes from, e.g. `ACI 318-19 Eq. (5.3.1b)`. */
+  readonly source: string;
+  readonly factors: LoadFactors;
+}
+
+/** Name and source of a combination in one phrase, e.g. `1.2D + 1.6L (ACI 318-19 Eq. (5.3.1b))`. */
+export const combinationText = (c: LoadCombination): string => `${c.name} (${c.source})`;
+
+const round = (x: number) => Math.round(x * 1e6) / 1e6;
+
+/**
+ * The code's strength combinations for gravity loads, in the order of the code:
+ *  - ACI 318-19 5.3.1: (a) 1.4D and (b) 1.2D + 1.6L (the other rows add roof, wind, earthquake or
+ *    snow loads, which a member here does not carry);
+ *  - EN 1990 6.4.3.2: Eq. (6.10) 1.35G + 1.5Q, or Eqs. (6.10a) 1.35G + 1.5ψ0Q and (6.10b)
+ *    ξ·1.35G + 1.5Q (Table A1.2(B) recommended values).
+ * Superimposed dead load takes the dead-load factor.
+ */
+export function codeCombinations(code: CodeBasis, settings: CombinationSettings = {}): LoadCombination[] {
+  if (code === 'ACI 318-19') {
+    return [
+      { name: '1.4D', source: 'ACI 318-19 Eq. (5.3.1a)', factors: { dead: 1.4, superimposed: 1.4, live: 0 } },
+      { name: '1.2D + 1.6L', source: 'ACI 318-19 Eq. (5.3.1b)', factors: { dead: 1.2, superimposed: 1.2, live: 1.6 } },
+    ];
+  }
+  const g = EN_PERMANENT_FACTOR;
+  const qf = EN_VARIABLE_FACTOR;
+  if ((settings.enCombination ?? '6.10') === '6.10') return [{ name: `${g}G + ${qf}Q`, source: 'EN 1990 Eq. (6.10)', factors: { dead: g, superimposed: g, live: qf } }];
+  const psi0 = settings.liveCombinationFactor ?? EN_DEFAULT_PSI0;
+  const xi = round(EN_REDUCTION_FACTOR * g);
+  return [
+    { name: `${g}G + ${round(qf * psi0)}Q`, source: `EN 1990 Eq. (6.10a), ψ0 = ${psi0}`, factors: { dead: g, superimposed: g, live: round(qf * psi0) } },
+    { name: `${xi}G + ${qf}Q`, source: `EN 1990 Eq. (6.10b), ξ = ${EN_REDUCTION_FACTOR}`, factors: { dead: xi, superimposed: xi, live: qf } },
+  ];
+}
+
+/** The factors a member's own combination starts from: the code's principal one (ACI (5.3.1b), EN (6.10)). */
+export function defaultStrengthFactors(code: CodeBasis): LoadFactors {
+  return codeCombinations(code).at(-1)!.factors;
+}
+
+/**
+ * The combinations a member is checked for: its own factors when the engineer set them, otherwise
+ * the code's (codeCombinations). Every check takes the envelope of all of them.
+ */
+export function strengthCombinations(member: BeamDefinition, code: CodeBasis, settings: CombinationSettings = {}): LoadCombination[] {
+  if (member.strengthFactors) {
+    const f = member.strengthFactors;
+    const name = code === 'ACI 318-19' ? `${f.dead}D + ${f.superimposed}SD + ${f.live}L` : `${f.dead}G + ${f.superimposed}G_sup + ${f.live}Q`;
+    return [{ name, source: 'load factors set for the member', factors: f }];
+  }
+  return codeCombinations(code, settings);
 }
 
 export interface MemberLoadSets {

@@ -1,26 +1,19 @@
 /**
  * Compact results of beam variants (design, as found, strengthened) and their comparison: the
  * numbers and curve points the app and the report draw on shared charts, without full section
- * states. Also the station-by-station flexural check that every variant is compared on (with ψf on
- * FRP), and the one-sentence governing modes.
+ * states. Every number comes from the variant's run (variant.ts): the checks are not repeated here.
  * Units: N, mm, N·mm, 1/mm, rad.
  */
 import type { CodeBasis } from '../materials/specs.ts';
-import type { BeamDefinition, LoadFactors } from '../member/definition.ts';
 import type { PlasticHinge } from '../member/results.ts';
 import type { SectionAnalysis } from '../section/analyze.ts';
 import type { BendingDirection } from '../section/model.ts';
 import type { MomentCurvatureResult } from '../section/results.ts';
+import { joinTexts, phrase, q, type Text } from '../units/phrase.ts';
 import { flexuralDesignResistance } from './resistance.ts';
-import type { CurveSummary, FlexuralCheck, MemberResult, SchemeComparison, VariantResult } from './results.ts';
-import { combinedLoads, memberLoadSets } from './combinations.ts';
-import { elasticSupportMoments, type ElasticZone } from './demand.ts';
-import { memberForcesAt } from '../member/statics.ts';
-import type { ShearResult } from './shear.ts';
-import { strengthCombination } from './combinations.ts';
+import type { CurveSummary, SchemeComparison, VariantResult } from './results.ts';
 import type { Setup, VariantRun } from './variant.ts';
-import { capitalised, joinTexts, lowerFirst, phrase, q, withoutFinalStop, type Text } from '../units/phrase.ts';
-import { OUTSIDE_SMALL_DEFLECTION, serviceOutsideRange } from '../member/small-deflection.ts';
+import { prefixed } from './verdict.ts';
 
 const finite = (x: number | null | undefined): number | null => (x !== null && x !== undefined && Number.isFinite(x) ? x : null);
 
@@ -42,93 +35,8 @@ export function curveSummary(code: CodeBasis, analysis: SectionAnalysis, curve: 
   };
 }
 
-/**
- * Flexural check station by station: |M(x)| of an elastic analysis (gross sections, code modulus —
- * as the engine's strength check) against the design resistance of the zone and direction there
- * (flexuralDesignResistance: ψf on FRP). Null when the member has no zones to check.
- */
-export function flexuralCheck(code: CodeBasis, member: BeamDefinition, zones: readonly { from: number; to: number; analysis: SectionAnalysis }[], factors: LoadFactors, combination: string, segments: number): FlexuralCheck | null {
-  if (zones.length === 0 || zones.some((z) => !z.analysis.model || !z.analysis.elastic)) return null;
-  const span = member.span;
-  const sets = memberLoadSets(member, zones.map((z) => z.analysis.selfWeight));
-  const loads = combinedLoads(sets, factors);
-  const elasticZones: ElasticZone[] = zones.map((z) => ({ from: z.from, to: z.to, sectionId: z.analysis.sectionId, stiffness: z.analysis.codeModulus * z.analysis.elastic!.grossInertia }));
-  const ends = elasticSupportMoments(member, elasticZones, loads, segments);
-  const resist = zones.map((z) => ({ sagging: flexuralDesignResistance(code, z.analysis, 'sagging'), hogging: flexuralDesignResistance(code, z.analysis, 'hogging') }));
-  const xs = new Set<number>();
-  for (let i = 0; i <= segments; i++) xs.add((span * i) / segments);
-  for (const z of zones) xs.add(z.from);
-  for (const l of member.loads) if (l.kind === 'point') xs.add(l.position);
-  let worst: FlexuralCheck | null = null;
-  let worstRatio = -1;
-  for (const x of [...xs].sort((a, b) => a - b)) {
-    for (const side of ['left', 'right'] as const) {
-      const { moment } = memberForcesAt(member.supports, span, loads, ends, x, side);
-      let index = zones.findIndex((z) => (side === 'right' ? x >= z.from && x < z.to : x > z.from && x <= z.to));
-      if (index < 0) index = x <= 0 ? 0 : zones.length - 1;
-      const direction: BendingDirection = moment >= 0 ? 'sagging' : 'hogging';
-      const r = resist[index]![direction];
-      const demand = Math.abs(moment);
-      const ratio = demand <= 1e-6 ? 0 : r.value && r.value > 0 ? demand / r.value : 99.99;
-      if (ratio > worstRatio) {
-        worstRatio = ratio;
-        worst = {
-          combination,
-          utilisation: Math.min(ratio, 99.99),
-          pass: ratio <= 1,
-          position: x,
-          sectionId: zones[index]!.analysis.sectionId,
-          direction,
-          demand,
-          resistance: r.value,
-          notes: phrase`${zones[index]!.analysis.sectionName}, ${direction}: ${r.note}`,
-        };
-      }
-    }
-  }
-  return worst;
-}
-
-/** Joins the engine's flexural sentence and the shear sentence into one governing-mode sentence. */
-export function composeGoverningMode(flexure: Text, shear: ShearResult | null, prefix = ''): Text {
-  const body = withoutFinalStop(flexure);
-  if (!shear) return phrase`${prefix}${body}.`;
-  if (shear.governs === 'shear') return phrase`${prefix}${capitalised(shear.sentence)}; flexure (not reached first): ${lowerFirst(body)}.`;
-  return phrase`${prefix}${body}; ${shear.sentence}.`;
-}
-
-/** The flexural sentence of a variant with the station-by-station strength check (ψf on FRP). */
-export function variantFlexureSentence(result: MemberResult, strength: FlexuralCheck | null, pattern: 'proportional' | 'live-only'): Text {
-  if (result.status === 'input-error') return result.governingMode;
-  const parts: Text[] = [];
-  const ultimate = result.loadDeflection.events.find((e) => e.kind === 'ultimate');
-  const mu = result.ductility.displacementDuctility;
-  if (ultimate && result.ductility.failureCause) {
-    parts.push(`Flexure: ${result.ductility.failureCause} at ${ultimate.loadFactor.toFixed(2)} × the ${pattern === 'proportional' ? 'service load' : 'live load (dead load held)'}${mu ? `, displacement ductility μΔ = ${mu.toFixed(1)}` : ''}`);
-  } else {
-    parts.push(`Flexure: ${result.loadDeflection.status}`);
-  }
-  if (strength) parts.push(phrase`strength check ${strength.pass ? 'passes' : 'fails'} (utilisation ${strength.utilisation.toFixed(2)} at ${q('spanLength', strength.position)} under ${strength.combination})`);
-  const checks = result.service?.checks ?? [];
-  const fails = checks.filter((c) => !c.pass);
-  if (fails.length > 0) {
-    const w = fails.reduce((a, b) => (b.utilisation > a.utilisation ? b : a));
-    parts.push(serviceOutsideRange(result.service, result.span) ? `deflection checks fail: ${OUTSIDE_SMALL_DEFLECTION}` : `deflection check fails: ${w.utilisation.toFixed(2)} × ℓ/${w.ratio} (${w.quantity})`);
-  } else if (checks.length > 0) parts.push('deflection checks pass');
-  return phrase`${joinTexts(parts, '; ')}.`;
-}
-
-/** Status of a variant from its own checks (strength with ψf, deflections, factored shear). */
-export function variantStatus(result: MemberResult, strength: FlexuralCheck | null, shear: ShearResult | null): MemberResult['status'] {
-  if (result.status === 'input-error' || result.status === 'not-converged') return result.status;
-  const serviceFails = (result.service?.checks ?? []).some((c) => !c.pass);
-  const strengthFails = strength ? !strength.pass : result.strength ? !result.strength.pass : false;
-  const shearFails = shear?.factored ? !shear.factored.pass : false;
-  return serviceFails || strengthFails || shearFails ? 'check-fails' : 'ok';
-}
-
 /** Compact result of a variant. */
-export function compactVariant(code: CodeBasis, run: VariantRun, strength: FlexuralCheck | null, governingMode: Text): VariantResult {
+export function compactVariant(code: CodeBasis, run: VariantRun, governingMode: Text): VariantResult {
   const r = run.result;
   const sectionIds = [...new Set(run.member.zones.map((z) => z.sectionId))];
   const sections = sectionIds.flatMap((id) => {
@@ -140,11 +48,11 @@ export function compactVariant(code: CodeBasis, run: VariantRun, strength: Flexu
   });
   let peak: { loadFactor: number; totalLoad: number } | null = null;
   for (const p of r.loadDeflection.points) if (!peak || p.totalLoad > peak.totalLoad) peak = p;
-  const available = run.shear?.flexuralDuctilityAvailable ?? true;
+  const available = r.ductilityUnavailable === null;
   return {
     key: run.key,
     label: run.label,
-    status: variantStatus(r, strength, run.shear),
+    status: r.status,
     governingMode,
     sections,
     loadDeflection: {
@@ -161,13 +69,13 @@ export function compactVariant(code: CodeBasis, run: VariantRun, strength: Flexu
     },
     ductility: {
       available,
-      note: available ? 'flexure governs: ductility and hinge rotations apply' : 'not available: shear governs before the flexural mechanism (values kept for reference only)',
+      note: r.ductilityUnavailable ?? 'ductile: the ductility and hinge rotations apply',
       yieldDeflection: finite(r.ductility.yieldDeflection),
       ultimateDeflection: finite(r.ductility.ultimateDeflection),
       displacementDuctility: finite(r.ductility.displacementDuctility),
       hinges: r.ductility.hinges,
     },
-    strength,
+    strength: r.strength,
     deflectionChecks: r.service?.checks ?? [],
     shear: run.shear,
     warnings: r.warnings,
@@ -264,16 +172,7 @@ export function compareVariants(reference: VariantResult, scheme: VariantResult,
   };
 }
 
-/** The station-by-station strength check of a variant (ψf on FRP). */
-export function strengthOf(setup: Setup, run: VariantRun) {
-  if (run.result.status === 'input-error') return null;
-  const { factors, text } = strengthCombination(run.member, setup.code);
-  return flexuralCheck(setup.code, run.member, run.zones, factors, text, setup.segments);
-}
-
-/** Compact result of a run, with its sentence. */
+/** Compact result of a run, with its sentence prefixed by the variant's name. */
 export function compactOf(setup: Setup, run: VariantRun, prefix: string): VariantResult {
-  const strength = strengthOf(setup, run);
-  const sentence = composeGoverningMode(variantFlexureSentence(run.result, strength, run.member.capacity.pattern), run.shear, prefix);
-  return compactVariant(setup.code, run, strength, sentence);
+  return compactVariant(setup.code, run, prefixed(run.result.governingMode, prefix));
 }

@@ -28,10 +28,12 @@ import type { SectionAnalysis } from '../section/analyze.ts';
 import type { SectionAdditions } from '../section/build.ts';
 import type { SectionDefinition } from '../section/definition.ts';
 import { phrase, type Text } from '../units/phrase.ts';
-import { compactOf, composeGoverningMode } from './compact.ts';
+import { compactOf } from './compact.ts';
 import { RETROFIT_CAUTION, type MemberResult, type RetrofitResult, type SchemeResult } from './results.ts';
 import { buildScheme, describeScheme } from './scheme.ts';
-import { assessBeam, librarySections, runVariant, type SectionSettings, type Setup, type VariantRun } from './variant.ts';
+import type { CombinationSettings } from './combinations.ts';
+import { librarySections, runVariant, type SectionSettings, type Setup, type VariantRun } from './variant.ts';
+import { prefixed } from './verdict.ts';
 
 /** What is known of an existing beam as it stands (core/retrofit). */
 export interface RetrofitInput {
@@ -49,6 +51,8 @@ export interface AssessmentContext extends MemberContext {
   readonly sectionSettings: SectionSettings;
   /** The project's unit system (the form of ACI's unit-dependent expressions). */
   readonly unitSystem?: Setup['unitSystem'];
+  /** How the code's strength combinations are formed (the project settings). */
+  readonly combinations: CombinationSettings;
 }
 
 /** A member zone list pointing at other section ids. */
@@ -79,45 +83,46 @@ function asFoundRun(setup: Setup, member: BeamDefinition, derivation: AsFoundDer
 /**
  * Assesses a member with its shear and, when given, its as-found condition and strengthening
  * schemes. Returns the member's result (see the module comment) with `shear` and `retrofit`.
- * Throws only for a defect in the design beam's own analysis (core/analysis.ts reports it on the
- * member); a defect in the shear or retrofit analysis is reported on the design beam's result.
+ * A defect in the design beam's analysis is reported on its result (runVariant); one in the
+ * retrofit analysis is reported on the design beam's result.
  * @param context the project's shared section analyses, library and settings
  */
 export function assessMember(member: AssessedMember, context: AssessmentContext): MemberResult {
-  const design = assessBeam(member, context);
+  const setup: Setup = { library: context.library, code: context.code, path: context.path, segments: context.segments, sectionSettings: context.sectionSettings, combinations: context.combinations, ...(context.unitSystem ? { unitSystem: context.unitSystem } : {}) };
+  const designSections = librarySections(member, context.library);
+  const designAnalyses = new Map<string, SectionAnalysis>();
+  for (const z of member.zones) {
+    const a = context.section(z.sectionId);
+    if (a) designAnalyses.set(z.sectionId, a);
+  }
+  const designRun = runVariant(setup, {
+    key: 'original', label: 'Design beam', member, definitions: designSections, baseOf: new Map([...designSections.keys()].map((id) => [id, id])),
+    materials: materialLibrary(context.library.materials, context.code, context.sectionSettings), analyses: designAnalyses,
+  });
   try {
-    return extend(member, context, design);
+    return extend(member, setup, designRun);
   } catch (error) {
-    // A defect in the shear or retrofit analysis must not cost the member its flexural results.
-    const message = `internal error in the shear or retrofit analysis (please report): ${String(error instanceof Error ? error.message : error)}`;
+    // A defect in the retrofit analysis must not cost the member its design-beam results.
+    const design = designRun.result;
+    const message = `internal error in the retrofit analysis (please report): ${String(error instanceof Error ? error.message : error)}`;
     return { ...design, errors: [...design.errors, { path: context.path, message }] };
   }
 }
 
-function extend(member: AssessedMember, context: AssessmentContext, design: MemberResult): MemberResult {
-  const library = context.library;
-  const setup: Setup = { library, code: context.code, path: context.path, segments: context.segments, sectionSettings: context.sectionSettings, ...(context.unitSystem ? { unitSystem: context.unitSystem } : {}) };
+function extend(member: AssessedMember, setup: Setup, designRun: VariantRun): MemberResult {
+  const library = setup.library;
+  const design = designRun.result;
   const hasRetrofit = member.asFound !== undefined || (member.schemes !== undefined && member.schemes.length > 0);
   if (design.status === 'input-error') {
     if (!hasRetrofit) return design;
     const problems = [
-      ...(member.asFound ? validateAsFound(member.asFound, member, library, `${context.path}.asFound`) : []),
-      ...(member.schemes ? validateSchemes(member.schemes, member, library, `${context.path}.schemes`) : []),
+      ...(member.asFound ? validateAsFound(member.asFound, member, library, `${setup.path}.asFound`) : []),
+      ...(member.schemes ? validateSchemes(member.schemes, member, library, `${setup.path}.schemes`) : []),
     ];
     return { ...design, errors: [...design.errors, ...errorsOf(problems)] };
   }
   const libraryMaterials = materialLibrary(library.materials, setup.code, setup.sectionSettings);
-  const designSections = librarySections(member, library);
-  const designAnalyses = new Map<string, SectionAnalysis>();
-  for (const id of designSections.keys()) {
-    const a = context.section(id);
-    if (a) designAnalyses.set(id, a);
-  }
-  const designRun = runVariant(setup, {
-    key: 'original', label: 'Design beam', member, definitions: designSections, baseOf: new Map([...designSections.keys()].map((id) => [id, id])),
-    materials: libraryMaterials, analyses: designAnalyses, result: design,
-  });
-  if (!hasRetrofit) return finishMain(design, designRun, null);
+  if (!hasRetrofit) return design;
 
   const warnings: Text[] = [];
   const errors: Problem[] = [];
@@ -126,11 +131,11 @@ function extend(member: AssessedMember, context: AssessmentContext, design: Memb
   let derivation: AsFoundDerivation | null = null;
   let found: { run: VariantRun; materials: MaterialLibrary } | null = null;
   if (member.asFound) {
-    derivation = deriveAsFound(member, member.asFound, library, setup.code, context.path);
+    derivation = deriveAsFound(member, member.asFound, library, setup.code, setup.path);
     errors.push(...errorsOf(derivation.diagnostics));
     warnings.push(...warningsOf(derivation.diagnostics));
     if (errors.length === 0) {
-      if (derivation.unchanged) warnings.push(`${context.path}.asFound: gives no core, steel or defect data: the as-found beam is the design beam.`);
+      if (derivation.unchanged) warnings.push(`${setup.path}.asFound: gives no core, steel or defect data: the as-found beam is the design beam.`);
       else {
         found = asFoundRun(setup, member, derivation, 'as-found', 'As found');
         if (found.run.result.status === 'input-error') {
@@ -151,9 +156,9 @@ function extend(member: AssessedMember, context: AssessmentContext, design: Memb
   // Too many schemes (core/retrofit/validate.ts MAX_SCHEMES): none is analysed, the error says why.
   const tooManySchemes = (member.schemes?.length ?? 0) > MAX_SCHEMES;
   const schemes = tooManySchemes ? [] : member.schemes ?? [];
-  if (tooManySchemes) errors.push(...errorsOf(validateSchemes(member.schemes ?? [], member, library, `${context.path}.schemes`)));
+  if (tooManySchemes) errors.push(...errorsOf(validateSchemes(member.schemes ?? [], member, library, `${setup.path}.schemes`)));
   if (schemes.length > 0) {
-    const schemeProblems = validateSchemes(schemes, member, library, `${context.path}.schemes`);
+    const schemeProblems = validateSchemes(schemes, member, library, `${setup.path}.schemes`);
     const asFoundBroken = member.asFound !== undefined && errors.length > 0;
     let repaired: { derivation: AsFoundDerivation; run: VariantRun; materials: MaterialLibrary } | null | undefined;
     const repairedReference = () => {
@@ -161,13 +166,13 @@ function extend(member: AssessedMember, context: AssessmentContext, design: Memb
       if (!member.asFound || !derivation || derivation.unchanged) return (repaired = null);
       const hasSpalls = (member.asFound.defects ?? []).some((d) => d.kind === 'cover-loss');
       if (!hasSpalls) return (repaired = null);
-      const d = deriveAsFound(member, member.asFound, library, setup.code, context.path, { repairSpalls: true, variant: 'repaired' });
+      const d = deriveAsFound(member, member.asFound, library, setup.code, setup.path, { repairSpalls: true, variant: 'repaired' });
       if (d.diagnostics.some((x) => x.severity === 'error')) return (repaired = null);
       const r = asFoundRun(setup, member, d, 'repaired', 'As found, spalls repaired');
       return (repaired = { derivation: d, ...r });
     };
     schemes.forEach((scheme, index) => {
-      const at = `${context.path}.schemes[${index}]`;
+      const at = `${setup.path}.schemes[${index}]`;
       const own = schemeProblems.filter((p) => p.path === at || p.path.startsWith(`${at}.`) || p.path.startsWith(`${at}[`));
       const description = describeScheme(scheme);
       const base: SchemeResult = {
@@ -211,29 +216,12 @@ function extend(member: AssessedMember, context: AssessmentContext, design: Memb
     errors,
   };
   const main = found ? found.run.result : design;
-  const mainRun = found ? found.run : designRun;
   const schemeErrors = schemeResults.flatMap((s) => s.errors);
-  const result = finishMain(main, mainRun, retrofit, found ? 'As found: ' : '');
   return {
-    ...result,
-    warnings: [...result.warnings, ...warnings, ...schemeResults.flatMap((s) => s.warnings.map((w) => phrase`Scheme "${s.name}": ${w}`))],
-    errors: [...result.errors, ...errors, ...schemeErrors],
+    ...main,
+    governingMode: prefixed(main.governingMode, found ? 'As found: ' : ''),
+    retrofit,
+    warnings: [...main.warnings, ...warnings, ...schemeResults.flatMap((s) => s.warnings.map((w) => phrase`Scheme "${s.name}": ${w}`))],
+    errors: [...main.errors, ...errors, ...schemeErrors],
   };
 }
-
-/** The member's main result with shear, the extended governing mode, status and retrofit data. */
-function finishMain(result: MemberResult, run: VariantRun, retrofit: RetrofitResult | null, prefix = ''): MemberResult {
-  const shear = run.shear;
-  const status = result.status === 'ok' && shear?.factored && !shear.factored.pass ? 'check-fails' : result.status;
-  const extra: Text[] = [...(shear?.warnings ?? [])];
-  if (shear && !shear.flexuralDuctilityAvailable) extra.push('Shear governs before the flexural mechanism: the displacement ductility and plastic hinge rotations are not available (kept for reference only).');
-  return {
-    ...result,
-    status,
-    governingMode: composeGoverningMode(result.governingMode, shear, prefix),
-    warnings: [...result.warnings, ...extra],
-    ...(shear ? { shear } : {}),
-    ...(retrofit ? { retrofit } : {}),
-  };
-}
-

@@ -18,21 +18,83 @@ import type { ShearResult } from './shear.ts';
 /** The caution every surface that shows results carries: the app, the command line and the report. */
 export const RESULTS_CAUTION = 'Results are for review by a qualified engineer and defer to local codes and licensed practice.';
 
-export type MemberStatus = 'ok' | 'check-fails' | 'not-converged' | 'input-error';
+/**
+ * Member statuses, from the most to the least urgent:
+ *  - input-error: not analysed, the input must be fixed;
+ *  - not-converged: the analysis stopped before a limit state;
+ *  - check-fails: a strength (flexure or shear) or deflection check fails;
+ *  - brittle: every check passes but the member fails without warning — shear before the flexural
+ *    mechanism, strength before the tension steel yields, or a cracking moment at or above the
+ *    strength / less than the minimum tension steel (brittle.ts); never shown as OK;
+ *  - ok: every check passes and the member is ductile.
+ */
+export const MEMBER_STATUSES = ['input-error', 'not-converged', 'check-fails', 'brittle', 'ok'] as const;
+export type MemberStatus = (typeof MEMBER_STATUSES)[number];
 
-export interface StrengthCheck {
+/** The largest demand/resistance of one bending sense in one zone, over the stations and combinations. */
+export interface StrengthPoint {
+  /** mm from the left support. */
+  readonly position: number;
+  /** |M|, N·mm, and the design resistance there (φMn or M_Rd), N·mm (null: no tension reinforcement on that side). */
+  readonly demand: number;
+  readonly resistance: number | null;
+  /** demand/resistance; 99.99 for a demand where there is no resistance. */
+  readonly utilisation: number;
+  /** The combination it comes from (name and source). */
   readonly combination: string;
-  /** Factored moment demands, N·mm (magnitudes) and where. */
-  readonly saggingDemand: number;
-  readonly saggingPosition: number;
-  readonly hoggingDemand: number;
-  readonly hoggingPosition: number;
-  /** Design flexural resistance (φMn or M_Rd), N·mm, at those positions. */
-  readonly saggingResistance: number | null;
-  readonly hoggingResistance: number | null;
+}
+
+/** One zone of the member in the strength check: its section and the worst point of each sense. */
+export interface StrengthZone {
+  readonly from: number;
+  readonly to: number;
+  /** Section id as analysed (a derived id for an as-found or strengthened beam). */
+  readonly sectionId: string;
+  readonly sagging: StrengthPoint | null;
+  readonly hogging: StrengthPoint | null;
+}
+
+/**
+ * The flexural strength check (assessment/flexure.ts): factored moment demand from an elastic
+ * analysis against the design resistance of the section there, at every station of the span, in
+ * both senses, in every zone, for every combination (the envelope).
+ */
+export interface StrengthCheck {
+  /** The governing combination (name and source), and every combination checked with its largest utilisation. */
+  readonly combination: string;
+  readonly combinations: readonly { readonly combination: string; readonly utilisation: number }[];
   readonly utilisation: number;
   readonly pass: boolean;
+  /** The governing point: position (mm), section as analysed, sense, |M| and resistance (N·mm). */
+  readonly position: number;
+  readonly sectionId: string;
+  readonly direction: BendingDirection;
+  readonly demand: number;
+  readonly resistance: number | null;
+  /** The worst point of each sense over the member (demand, where, resistance there; N·mm, mm). */
+  readonly saggingDemand: number;
+  readonly saggingPosition: number;
+  readonly saggingResistance: number | null;
+  readonly hoggingDemand: number;
+  readonly hoggingPosition: number;
+  readonly hoggingResistance: number | null;
+  /** Every zone with its worst point per sense. */
+  readonly zones: readonly StrengthZone[];
+  /** How the resistances of the governing points were found. */
   readonly notes: Text;
+}
+
+/** Why a member is brittle (brittle.ts). */
+export const BRITTLE_CAUSES = ['shear-before-flexure', 'no-yield-before-strength', 'below-strain-limit', 'cracking-above-strength', 'below-minimum-steel'] as const;
+export type BrittleCause = (typeof BRITTLE_CAUSES)[number];
+
+export interface BrittleFinding {
+  readonly cause: BrittleCause;
+  /** Section (as analysed) and sense concerned; null for the member as a whole (shear). */
+  readonly sectionId: string | null;
+  readonly direction: BendingDirection | null;
+  /** What was found, with its numbers and the clause. */
+  readonly text: Text;
 }
 
 /** Everything reported for one member. */
@@ -43,6 +105,13 @@ export interface MemberResult extends BeamResult {
   readonly strength: StrengthCheck | null;
   /** Shear capacity and demand, flexure- or shear-governed (core/assessment/shear.ts). */
   readonly shear?: ShearResult;
+  /** Why the member is brittle; empty when it is not (or was not analysed). */
+  readonly brittle: readonly BrittleFinding[];
+  /**
+   * Why the displacement ductility and hinge rotations are not available (they are then null in
+   * `ductility`), or null when they are.
+   */
+  readonly ductilityUnavailable: Text | null;
   /** Design, as-found and strengthened variants (core/assessment/member.ts). */
   readonly retrofit?: RetrofitResult;
 }
@@ -79,21 +148,6 @@ export interface VariantSection {
   readonly curves: readonly CurveSummary[];
 }
 
-/** Flexural strength check of a variant (station by station against each zone's design resistance). */
-export interface FlexuralCheck {
-  readonly combination: string;
-  readonly utilisation: number;
-  readonly pass: boolean;
-  /** Where the utilisation is largest, mm, and the moment and resistance there (N·mm, magnitudes). */
-  readonly position: number;
-  /** Section (as analysed by the variant) at that position. */
-  readonly sectionId: string;
-  readonly direction: BendingDirection;
-  readonly demand: number;
-  readonly resistance: number | null;
-  readonly notes: Text;
-}
-
 /** Key results of one beam variant (original design, as found, or strengthened), compact. */
 export interface VariantResult {
   /** 'original', 'as-found' or the scheme id. */
@@ -117,15 +171,15 @@ export interface VariantResult {
     readonly failureCause: string;
   };
   readonly ductility: {
-    /** False when shear governs: the values below are kept but not available as capacities. */
+    /** False when the beam is brittle (MemberResult.ductilityUnavailable): the ductility and hinge rotations are then null. */
     readonly available: boolean;
-    readonly note: string;
+    readonly note: Text;
     readonly yieldDeflection: number | null;
     readonly ultimateDeflection: number | null;
     readonly displacementDuctility: number | null;
     readonly hinges: readonly PlasticHinge[];
   };
-  readonly strength: FlexuralCheck | null;
+  readonly strength: StrengthCheck | null;
   readonly deflectionChecks: readonly DeflectionCheck[];
   readonly shear: ShearResult | null;
   readonly warnings: readonly Text[];
@@ -135,7 +189,7 @@ export interface VariantResult {
 /** The ACI 440.2R-17 9.2 check: the unstrengthened member under (1.1 SD + 0.75 LL) if the strengthening is lost. */
 export interface LossOfStrengtheningCheck {
   readonly combination: string;
-  readonly check: FlexuralCheck;
+  readonly check: StrengthCheck;
   readonly source: string;
 }
 

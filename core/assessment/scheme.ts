@@ -18,11 +18,13 @@ import { STANDARD_GRAVITY, type SectionAnalysis } from '../section/analyze.ts';
 import type { SectionAdditions } from '../section/build.ts';
 import { elasticProperties, type CrackedProperties } from '../section/elastic.ts';
 import type { BendingDirection, DiscreteElement } from '../section/model.ts';
-import { compactOf, compareVariants, flexuralCheck } from './compact.ts';
+import { compactOf, compareVariants } from './compact.ts';
+import { flexuralCheck } from './flexure.ts';
 import type { SchemeResult, VariantResult } from './results.ts';
 import { joinTexts, phrase, q, type Text } from '../units/phrase.ts';
 import { largestZoneMoment } from './demand.ts';
 import { strengtheningChecks } from './strengthening-checks.ts';
+import { combinationText, type LoadCombination } from './combinations.ts';
 import { librarySections, runVariant, type Setup, type VariantRun } from './variant.ts';
 
 /** The beam a scheme strengthens: its run, materials and (for an as-found beam) its derivation. */
@@ -230,14 +232,15 @@ export function buildScheme(setup: Setup, input: SchemeInput): SchemeResult {
   // ACI 440.2R-17 9.2: the unstrengthened member under 1.1 SD + 0.75 LL (bonded schemes only).
   let lossOfStrengthening: SchemeResult['lossOfStrengthening'] = null;
   if (scheme.kind !== 'concrete-layer') {
-    const combination = `1.1 SD + 0.75 LL (ACI 440.2R-17 Eq. 9.2, strengthening lost)`;
-    const check = flexuralCheck(code, comparisonRun.member, comparisonRun.zones, { dead: 1.1, superimposed: 1.1, live: 0.75 }, combination, setup.segments);
+    const lost: LoadCombination = { name: '1.1 SD + 0.75 LL', source: 'ACI 440.2R-17 Eq. 9.2, strengthening lost', factors: { dead: 1.1, superimposed: 1.1, live: 0.75 } };
+    const combination = combinationText(lost);
+    const check = flexuralCheck({ code, member: comparisonRun.member, zones: comparisonRun.zones, combinations: [lost], segments: setup.segments });
     if (check) {
       lossOfStrengthening = { combination, check, source: 'ACI 440.2R-17 9.2, Eq. (9.2) (from memory): (φRn)existing ≥ (1.1 SDL + 0.75 SLL)new, with the design resistance of the beam before strengthening' };
       if (!check.pass) warnings.push(phrase`ACI 440.2R-17 9.2 limit not met: without the strengthening the beam could not carry 1.1 SD + 0.75 LL (utilisation ${check.utilisation.toFixed(2)} at ${q('spanLength', check.position)}): the strengthening exceeds what the existing beam allows`);
     }
   }
-  if (!variant.ductility.available) warnings.push('shear governs the strengthened beam before its flexural mechanism: its ductility and hinge rotations are not available');
+  if (!variant.ductility.available) warnings.push(phrase`the strengthened beam is brittle: its ductility and hinge rotations are ${variant.ductility.note}`);
   const checks = strengtheningChecks({
     setup, scheme, run, materials, frp, lossOfStrengthening,
     sections: new Map([...sections.values()].map((s) => [s.baseSectionId, s.id])),

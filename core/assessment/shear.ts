@@ -10,8 +10,8 @@
  *    chosen within 1 ≤ cot θ ≤ 2.5 (Eq. 6.7N) to give the largest resistance (see enShearStrength).
  *
  * Demand (member statics with the loads of core/member/analyze.ts):
- *  - factored: the strength combination, with the support moments of an elastic analysis on gross
- *    sections (as the flexural strength check);
+ *  - factored: every strength combination (the envelope), with the support moments of an elastic
+ *    analysis on gross sections (as the flexural strength check, flexure.ts);
  *  - at the flexural mechanism: every hinge the support type needs at its overstrength moment
  *    Mo = γo·Mpeak, Mpeak the largest moment of the section's moment–curvature curve (the steel law
  *    to its ultimate stress fu — the measured one when coupons are entered), γo = 1.0 by default;
@@ -29,12 +29,13 @@
  * Units: N, mm, MPa, N·mm.
  */
 import type { CodeBasis } from '../materials/specs.ts';
-import type { BeamDefinition, LoadFactors } from '../member/definition.ts';
+import type { BeamDefinition } from '../member/definition.ts';
 import { memberForcesAt, releasedMoment, totalLoad } from '../member/statics.ts';
+import { zoneIndexAt } from '../member/zones.ts';
 import type { BendingDirection, DiscreteElement } from '../section/model.ts';
 import { tensionSteel } from '../section/model.ts';
 import { joinTexts, phrase, q, type Text } from '../units/phrase.ts';
-import { combinedLoads, memberLoadSets, scaleLoad } from './combinations.ts';
+import { combinationText, combinedLoads, memberLoadSets, scaleLoad, type LoadCombination } from './combinations.ts';
 import { elasticSupportMoments, type ElasticZone } from './demand.ts';
 import { sectionShearCapacity, type ShearCapacity, type ShearZone } from './shear-section.ts';
 import type { AciEdition } from './shear-aci.ts';
@@ -117,9 +118,8 @@ export interface MemberShearInput {
   readonly member: BeamDefinition;
   /** One per member zone, in the member's zone order. */
   readonly zones: readonly ShearZone[];
-  /** Strength combination factors and their description. */
-  readonly factors: LoadFactors;
-  readonly combination: string;
+  /** The strength combinations; the factored check takes their envelope. */
+  readonly combinations: readonly LoadCombination[];
   /** Equal segments along the span (the project setting `stations`; 200 when omitted). */
   readonly segments?: number;
   /** γo on the section peak moment for the mechanism (default 1.0). */
@@ -174,15 +174,9 @@ export function memberShear(input: MemberShearInput): ShearResult {
   });
   if (caps.some((c) => !c.sagging && !c.hogging)) return empty('shear not assessed: a section of the member has no valid model');
 
-  const zoneIndexAt = (x: number, side: 'left' | 'right') => {
-    for (let i = 0; i < zones.length; i++) {
-      const z = zones[i]!;
-      if (side === 'right' ? x >= z.from && x < z.to : x > z.from && x <= z.to) return i;
-    }
-    return x <= 0 ? 0 : zones.length - 1;
-  };
+  const zoneAt = (x: number, side: 'left' | 'right') => zoneIndexAt(zones, x, side);
   const capacityAt = (x: number, side: 'left' | 'right', moment: number) => {
-    const i = zoneIndexAt(x, side);
+    const i = zoneAt(x, side);
     const c = caps[i]!;
     const dir: BendingDirection = moment >= 0 ? 'sagging' : 'hogging';
     const cap = c[dir] ?? c[dir === 'sagging' ? 'hogging' : 'sagging']!;
@@ -203,7 +197,7 @@ export function memberShear(input: MemberShearInput): ShearResult {
   const skip: { readonly side: 'left' | 'right'; readonly limit: number }[] = [];
   const ruleParts: Text[] = [];
   for (const xs of supportsAt) {
-    const zi = zoneIndexAt(xs, xs === 0 ? 'right' : 'left');
+    const zi = zoneAt(xs, xs === 0 ? 'right' : 'left');
     const c = caps[zi]!;
     // The smaller d of the directions with tension bars: the check starts no further from the support than either allows.
     const depths = [c.sagging, c.hogging].filter((k): k is ShearCapacity => k !== null && k.hasTensionBars).map((k) => k.effectiveDepth);
@@ -257,21 +251,39 @@ export function memberShear(input: MemberShearInput): ShearResult {
     return { nominal: nominal!, design: design! };
   };
 
-  // --- factored combination ----------------------------------------------------------------------------
-  const factoredLoads = combinedLoads(sets, input.factors);
+  // --- factored combinations (the envelope) ---------------------------------------------------------------
   const elasticZones: ElasticZone[] = zones.map((z) => ({ from: z.from, to: z.to, sectionId: z.definition.id, stiffness: z.analysis.codeModulus * (z.analysis.elastic?.grossInertia ?? 0) }));
-  const factoredEnds = elasticSupportMoments(member, elasticZones, factoredLoads, segments);
+  let f: Best | null = null;
+  let governingCombination = '';
+  // The diagram is the envelope: the largest |V| of any combination at each station and side, with
+  // the smaller capacity where the combinations bend the section in different senses.
   const trace = { x: [] as number[], factored: [] as number[], nominal: [] as number[], design: [] as number[], checked: [] as boolean[], sectionIds: [] as string[] };
-  const f = scan((x, side) => memberForcesAt(member.supports, span, factoredLoads, factoredEnds, x, side), (x, shear, cap, isChecked) => {
-    trace.x.push(x);
-    trace.factored.push(shear);
-    trace.nominal.push(cap.nominal);
-    trace.design.push(cap.design);
-    trace.checked.push(isChecked);
-    trace.sectionIds.push(cap.sectionId);
-  }).design;
+  input.combinations.forEach((c, k) => {
+    const factoredLoads = combinedLoads(sets, c.factors);
+    const factoredEnds = elasticSupportMoments(member, elasticZones, factoredLoads, segments);
+    let i = 0;
+    const design = scan((x, side) => memberForcesAt(member.supports, span, factoredLoads, factoredEnds, x, side), (x, shear, cap, isChecked) => {
+      if (k === 0) {
+        trace.x.push(x);
+        trace.factored.push(shear);
+        trace.nominal.push(cap.nominal);
+        trace.design.push(cap.design);
+        trace.checked.push(isChecked);
+        trace.sectionIds.push(cap.sectionId);
+      } else {
+        trace.factored[i] = Math.max(trace.factored[i]!, shear);
+        trace.nominal[i] = Math.min(trace.nominal[i]!, cap.nominal);
+        trace.design[i] = Math.min(trace.design[i]!, cap.design);
+      }
+      i++;
+    }).design;
+    if (!f || design.ratio > f.ratio) {
+      f = design;
+      governingCombination = combinationText(c);
+    }
+  });
   let mechanismTrace: number[] | null = null;
-  const factored = { combination: input.combination, governing: stripRatio(f), utilisation: Math.min(f.ratio, 99.99), pass: f.ratio <= 1 };
+  const factored = f ? { combination: governingCombination, governing: stripRatio(f), utilisation: Math.min((f as Best).ratio, 99.99), pass: (f as Best).ratio <= 1 } : null;
 
   // --- mechanism ------------------------------------------------------------------------------------------
   const hinge = zones.map((z) => hingeMoments(z, gamma));
@@ -296,7 +308,7 @@ export function memberShear(input: MemberShearInput): ShearResult {
   if (!(Math.abs(patternTotal) > 0)) {
     mechanismNote = 'no load pattern to scale (no live load for a live-only pattern)';
   } else {
-    const hingeAt = (x: number, side: 'left' | 'right') => hinge[zoneIndexAt(x, side)]!;
+    const hingeAt = (x: number, side: 'left' | 'right') => hinge[zoneAt(x, side)]!;
     const ends = {
       left: member.supports === 'fixed-fixed' || member.supports === 'propped-cantilever' ? -hingeAt(0, 'right').hogging : 0,
       right: member.supports === 'fixed-fixed' ? -hingeAt(span, 'left').hogging : 0,
@@ -388,7 +400,9 @@ export function memberShear(input: MemberShearInput): ShearResult {
   }
 
   // --- sentence ---------------------------------------------------------------------------------------------
-  const factoredText = phrase`factored shear check ${factored.pass ? 'passes' : 'fails'} (utilisation ${factored.utilisation.toFixed(2)} at ${q('spanLength', factored.governing.position)} under ${input.combination})`;
+  const factoredText = factored
+    ? phrase`factored shear check ${factored.pass ? 'passes' : 'fails'} (utilisation ${factored.utilisation.toFixed(2)} at ${q('spanLength', factored.governing.position)} under ${factored.combination})`
+    : 'no factored combination';
   const capName = code === 'ACI 318-19' ? 'Vn' : 'VRk (γ = 1)';
   const designName = code === 'ACI 318-19' ? 'φVn' : 'VRd';
   let sentence: Text;

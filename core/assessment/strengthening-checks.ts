@@ -6,7 +6,9 @@
  *    1.1 SD + 0.75 LL — ACI 440.2R-17 9.2, Eq. (9.2) (from memory), the check scheme.ts builds;
  *  - FRP debonding: the factored moment Mu within the strengthened design resistance φMn, which
  *    limits the FRP strain to εfd = 0.41√(f′c/(n·Ef·tf)) ≤ 0.9εfu (ACI 440.2R-17 Eq. 10.1.1,
- *    10.2.10) — so the FRP stays below its debonding strain under Mu;
+ *    10.2.10) — so the FRP stays below its debonding strain under Mu. This is the strengthened
+ *    beam's own flexural check (flexure.ts: every station, every combination) read in the zones
+ *    and sense the FRP acts in, not a second check;
  *  - service stresses under the service load D + SD + L by the cracked elastic section with the
  *    substrate strain at bonding (ACI 440.2R-17 10.2.8, Eq. 10.2.8.2a, from memory):
  *      κ = [Ms + Σ εbi·Ef·Af·(df − kd/3)] / Σ E·A·(d − kd/3)(d − kd) over the tension steel, FRP
@@ -32,10 +34,8 @@ import type { SectionAnalysis } from '../section/analyze.ts';
 import { elasticProperties } from '../section/elastic.ts';
 import type { BendingDirection, DiscreteElement } from '../section/model.ts';
 import { phrase, q } from '../units/phrase.ts';
-import { strengthCombination } from './combinations.ts';
 import { largestZoneMoment } from './demand.ts';
-import { flexuralDesignResistance } from './resistance.ts';
-import type { LossOfStrengtheningCheck, StrengtheningCheck } from './results.ts';
+import type { LossOfStrengtheningCheck, StrengthPoint, StrengtheningCheck } from './results.ts';
 import type { Setup, VariantRun } from './variant.ts';
 
 /** Limits of the service and creep-rupture checks (ratios of the strength they apply to). */
@@ -146,7 +146,6 @@ export function strengtheningChecks(input: StrengtheningCheckInput): Strengtheni
 
   const service = { dead: 1, superimposed: 1, live: 1 };
   const sustained = { dead: 1, superimposed: 1, live: input.sustainedLiveFraction };
-  const strength = strengthCombination(run.member, code);
   for (const [baseId, sectionId] of input.sections) {
     const analysis = run.analyses.get(sectionId);
     if (!analysis?.model) continue;
@@ -195,16 +194,15 @@ export function strengtheningChecks(input: StrengtheningCheckInput): Strengtheni
       // --- FRP: debonding (Mu within φMn with εfe ≤ εfd), creep rupture under sustained load ---------------
       if (scheme.kind !== 'frp' || !input.frp) continue;
       const design = input.frp;
-      const mu = largestZoneMoment(run.member, run.zones, strength.factors, zoneIndices, direction, setup.segments);
-      const resistance = flexuralDesignResistance(code, analysis, direction);
-      if (mu.moment > negligible) {
-        const phiMn = resistance.value;
-        const ratio = phiMn && phiMn > 0 ? ratioOf(mu.moment, phiMn) : 99.99;
+      // The strengthened beam's flexural check (flexure.ts) in the zones of this section and sense.
+      const points = zoneIndices.map((i) => run.result.strength?.zones[i]?.[direction]).filter((p): p is StrengthPoint => p !== null && p !== undefined && p.demand > negligible);
+      const mu = points.reduce<StrengthPoint | null>((w, p) => (!w || p.utilisation > w.utilisation ? p : w), null);
+      if (mu) {
         const limitName = design.limitCause === 'frp-debonding' ? 'εfd' : '0.9εfu';
         keepWorst({
           id: 'frp-debonding', name: `Factored moment within the design resistance with the FRP strain limited to ${limitName}`, clause: 'ACI 440.2R-17 Eq. (10.1.1), 10.2.10',
-          quantity: 'ratio', value: ratio, limit: 1, ratio, pass: ratio <= 1,
-          note: phrase`${where(mu.position)}, ${strength.text}: Mu = ${q('moment', mu.moment)} against ${aci ? 'φMn' : 'M_Rd'} = ${phiMn ? q('moment', phiMn) : '—'} with εfe ≤ ${design.limitStrain.toExponential(3)} (${design.limitCause === 'frp-debonding' ? 'debonding' : 'rupture'} governs)`,
+          quantity: 'ratio', value: mu.utilisation, limit: 1, ratio: mu.utilisation, pass: mu.utilisation <= 1,
+          note: phrase`${where(mu.position)}, ${mu.combination}: Mu = ${q('moment', mu.demand)} against ${aci ? 'φMn' : 'M_Rd'} = ${mu.resistance !== null ? q('moment', mu.resistance) : '—'} with εfe ≤ ${design.limitStrain.toExponential(3)} (${design.limitCause === 'frp-debonding' ? 'debonding' : 'rupture'} governs)`,
         });
       }
       const msus = largestZoneMoment(run.member, run.zones, sustained, zoneIndices, direction, setup.segments);

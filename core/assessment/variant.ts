@@ -1,11 +1,12 @@
 /**
  * The one place that runs a beam variant (the design beam, the beam as found, or a strengthened
- * beam): its sections → the member engine (core/member) → the strength check → shear → status and
- * governing mode. core/analysis.ts reaches it through assessMember (member.ts), and the comparison
- * of an existing beam's variants runs each of them here.
+ * beam): its sections → the member engine (core/member) → the flexural strength check (flexure.ts)
+ * → shear (shear.ts) → brittleness (brittle.ts) → status and governing mode (verdict.ts).
+ * core/analysis.ts reaches it through assessMember (member.ts), and the comparison of an existing
+ * beam's variants runs each of them here. A new check is a module called from assessBeam.
  * Pure and deterministic. Units: mm, N, N·mm, MPa.
  */
-import { BugError, InputError } from '../diagnostics.ts';
+import { BugError, InputError, type Problem } from '../diagnostics.ts';
 import type { MaterialLibrary } from '../materials/library.ts';
 import type { CodeBasis, UltimateStrainChoice } from '../materials/specs.ts';
 import { analyzeBeam, unanalysedBeam, type MemberContext } from '../member/analyze.ts';
@@ -15,13 +16,14 @@ import { analyzeSection, type SectionAnalysis } from '../section/analyze.ts';
 import type { SectionAdditions } from '../section/build.ts';
 import type { SectionDefinition } from '../section/definition.ts';
 import type { BilinearMethod } from '../section/results.ts';
-import { strengthCombination } from './combinations.ts';
+import { brittleFindings } from './brittle.ts';
+import { strengthCombinations, type CombinationSettings } from './combinations.ts';
+import { flexuralCheck } from './flexure.ts';
 import type { MemberResult } from './results.ts';
 import { memberShear, type ShearResult } from './shear.ts';
 import type { ShearZone } from './shear-section.ts';
 import type { AciEdition } from './shear-aci.ts';
-import { memberStrength } from './strength.ts';
-import { OUTSIDE_SMALL_DEFLECTION, serviceOutsideRange } from '../member/small-deflection.ts';
+import { memberVerdict } from './verdict.ts';
 
 /** How the sections of a variant are analysed (the project's analysis settings). */
 export interface SectionSettings {
@@ -42,6 +44,8 @@ export interface Setup {
   readonly sectionSettings: SectionSettings;
   /** The project's unit system: which form of ACI's unit-dependent expressions applies (λs). */
   readonly unitSystem?: AciEdition;
+  /** How the code's combinations are formed (EN 1990 6.10 or 6.10a/b, ψ0). */
+  readonly combinations: CombinationSettings;
 }
 
 /** One analysed beam variant. */
@@ -72,8 +76,6 @@ export interface VariantInput {
   readonly materials: MaterialLibrary;
   /** Analyses already at hand (shared project sections, or a reference's unchanged sections). */
   readonly analyses?: ReadonlyMap<string, SectionAnalysis>;
-  /** Result already at hand (the design beam). */
-  readonly result?: MemberResult;
 }
 
 /**
@@ -89,56 +91,58 @@ export function notAnalysed(member: BeamDefinition, error: unknown, path: string
     status: error instanceof InputError ? 'input-error' : 'not-converged',
     governingMode: `Not analysed: ${message.split('\n')[0]}`,
     strength: null,
+    brittle: [],
+    ductilityUnavailable: null,
     errors: error instanceof InputError ? error.diagnostics.map((d) => ({ path: d.path, message: d.message })) : [{ path, message }],
   };
 }
 
+/** The zones of a beam with their sections, definitions and concrete, for the checks. */
+function checkZones(member: BeamDefinition, analyses: ReadonlyMap<string, SectionAnalysis>, definitions: ReadonlyMap<string, SectionDefinition>, materials: MaterialLibrary): ShearZone[] | null {
+  const zones: ShearZone[] = [];
+  for (const z of member.zones) {
+    const analysis = analyses.get(z.sectionId);
+    const definition = definitions.get(z.sectionId);
+    const concrete = definition ? materials.concreteSpec(definition.concreteId) : undefined;
+    if (!analysis || !definition || !concrete) return null;
+    const stirrupYield = definition.hoops ? materials.steel(definition.hoops.steelId)?.yieldStress : undefined;
+    zones.push({ from: z.from, to: z.to, definition, analysis, concrete, ...(stirrupYield !== undefined ? { stirrupYield } : {}) });
+  }
+  return zones;
+}
+
 /**
- * A beam through the member engine and its strength check: status and governing mode (before
- * shear). Input problems come back as an input-error result.
+ * A beam through the pipeline: the member engine (core/member), the flexural strength check
+ * (flexure.ts), shear (shear.ts), brittleness (brittle.ts) and the verdict (verdict.ts). Input
+ * problems come back as an input-error result; exceptions propagate (runVariant reports them).
  */
-export function assessBeam(member: BeamDefinition, context: MemberContext): MemberResult {
+function assessBeam(setup: Setup, member: BeamDefinition, context: MemberContext, zones: readonly ShearZone[] | null): { result: MemberResult; shear: ShearResult | null } {
   const beam = analyzeBeam(member, context);
-  if (beam.inputErrors.length > 0) {
-    const count = beam.inputErrors.length;
-    return { ...beam.result, status: 'input-error', governingMode: `Not analysed: ${count} input problem${count === 1 ? '' : 's'} to fix first.`, strength: null };
+  if (beam.inputErrors.length > 0 || !zones) {
+    const count = Math.max(1, beam.inputErrors.length);
+    return { result: { ...beam.result, status: 'input-error', governingMode: `Not analysed: ${count} input problem${count === 1 ? '' : 's'} to fix first.`, strength: null, brittle: [], ductilityUnavailable: null }, shear: null };
   }
-  const analyses = member.zones.map((z) => context.section(z.sectionId)!);
-  const strength = memberStrength(member, analyses, context.code, context.segments);
-  const { text: combination } = strengthCombination(member, context.code);
-  const result = beam.result;
-  const checks = result.service?.checks ?? [];
-  const serviceFails = checks.filter((c) => !c.pass);
-  const status: MemberResult['status'] = !beam.converged ? 'not-converged' : serviceFails.length > 0 || !strength.pass ? 'check-fails' : 'ok';
-  const proportional = member.capacity.pattern === 'proportional';
-  const parts: string[] = [];
-  const capacity = beam.capacity;
-  if (capacity && capacity.ultimateLoadFactor !== null) {
-    const mu = result.ductility.displacementDuctility;
-    parts.push(`Flexure: ${capacity.failureCause} at ${capacity.ultimateLoadFactor.toFixed(2)} × the ${proportional ? 'service load' : 'live load (dead load held)'}${mu ? `, displacement ductility μΔ = ${mu.toFixed(1)}` : ''}`);
-  } else if (capacity) {
-    parts.push(`Flexure: ${capacity.status}`);
-  }
-  parts.push(`strength check ${strength.pass ? 'passes' : 'fails'} (utilisation ${strength.utilisation.toFixed(2)} under ${combination})`);
-  if (serviceFails.length > 0) {
-    const worst = serviceFails.reduce((a, b) => (b.utilisation > a.utilisation ? b : a));
-    parts.push(serviceOutsideRange(result.service, result.span) ? `deflection checks fail: ${OUTSIDE_SMALL_DEFLECTION}` : `deflection check fails: ${worst.utilisation.toFixed(2)} × ℓ/${worst.ratio} (${worst.quantity})`);
-  } else if (checks.length > 0) {
-    parts.push('deflection checks pass');
-  }
-  return { ...result, status, governingMode: `${parts.join('; ')}.`, strength };
+  const { code } = setup;
+  // A defect in one check must not cost the beam its other results: it is reported and the verdict
+  // is withheld (status not-converged), never a silent pass.
+  const defects: Problem[] = [];
+  const guarded = <T>(what: string, run: () => T, fallback: T): T => {
+    try {
+      return run();
+    } catch (error) {
+      defects.push({ path: setup.path, message: `internal error in the ${what} (please report): ${error instanceof Error ? error.message : String(error)}` });
+      return fallback;
+    }
+  };
+  const combinations = strengthCombinations(member, code, setup.combinations);
+  const strength = guarded('flexural strength check', () => flexuralCheck({ code, member, zones, combinations, segments: setup.segments }), null);
+  const shear = zones.every((z) => z.analysis.model) ? guarded('shear check', () => memberShear({ code, member, zones, combinations, segments: setup.segments, ...(setup.unitSystem ? { edition: setup.unitSystem } : {}) }), null) : null;
+  const brittle = guarded('brittleness check', () => brittleFindings(code, member.supports, zones, strength, shear, beam.result), []);
+  const result = memberVerdict({ member, beam, strength, shear, brittle, defects });
+  return { result, shear };
 }
 
-/** assessBeam, with an unexpected exception turned into a reported result. */
-function safeAssessBeam(member: BeamDefinition, context: MemberContext): MemberResult {
-  try {
-    return assessBeam(member, context);
-  } catch (error) {
-    return notAnalysed(member, error, context.path);
-  }
-}
-
-/** Analyses one variant: its sections, the member, and its shear. */
+/** Analyses one variant: its sections and the whole pipeline (assessBeam); an exception becomes a reported result. */
 export function runVariant(setup: Setup, input: VariantInput): VariantRun {
   const { code } = setup;
   const analyses = new Map<string, SectionAnalysis>();
@@ -149,7 +153,7 @@ export function runVariant(setup: Setup, input: VariantInput): VariantRun {
       continue;
     }
     const def = input.definitions.get(id);
-    if (!def) throw new BugError(`variant ${input.key}: no definition for section ${id}`);
+    if (!def) continue;
     const additions = input.additions?.get(id);
     analyses.set(id, analyzeSection(def, `${setup.path} (${input.label}) section "${def.name}"`, input.materials, {
       code,
@@ -159,20 +163,15 @@ export function runVariant(setup: Setup, input: VariantInput): VariantRun {
     }));
   }
   const context: MemberContext = { code, segments: setup.segments, section: (id) => analyses.get(id), sectionIds: new Set(analyses.keys()), path: setup.path };
-  const result = input.result ?? safeAssessBeam(input.member, context);
-  const zones: ShearZone[] = input.member.zones.map((z) => {
-    const analysis = analyses.get(z.sectionId)!;
-    const definition = input.definitions.get(z.sectionId)!;
-    const concrete = input.materials.concreteSpec(definition.concreteId);
-    const stirrupYield = definition.hoops ? input.materials.steel(definition.hoops.steelId)?.yieldStress : undefined;
-    return { from: z.from, to: z.to, definition, analysis, concrete: concrete!, ...(stirrupYield !== undefined ? { stirrupYield } : {}) };
-  });
+  const zones = checkZones(input.member, analyses, input.definitions, input.materials);
+  let result: MemberResult;
   let shear: ShearResult | null = null;
-  if (result.status !== 'input-error' && zones.every((z) => z.analysis.model && z.concrete)) {
-    const { factors, text } = strengthCombination(input.member, code);
-    shear = memberShear({ code, member: input.member, zones, factors, combination: text, segments: setup.segments, ...(setup.unitSystem ? { edition: setup.unitSystem } : {}) });
+  try {
+    ({ result, shear } = assessBeam(setup, input.member, context, zones));
+  } catch (error) {
+    result = notAnalysed(input.member, error, setup.path);
   }
-  return { key: input.key, label: input.label, member: input.member, analyses, definitions: input.definitions, baseOf: input.baseOf, added: input.added ?? new Map(), result, shear, zones };
+  return { key: input.key, label: input.label, member: input.member, analyses, definitions: input.definitions, baseOf: input.baseOf, added: input.added ?? new Map(), result, shear, zones: zones ?? [] };
 }
 
 /** Library sections of the member by id. */

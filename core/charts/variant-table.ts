@@ -54,6 +54,7 @@ export interface ComparisonTable {
 export const STATUS_TEXT: Readonly<Record<MemberStatus, string>> = {
   ok: 'OK',
   'check-fails': 'check fails',
+  brittle: 'brittle',
   'not-converged': 'not converged',
   'input-error': 'input error',
 };
@@ -133,7 +134,7 @@ export function variantComparisonTable(
       id: 'ductility', label: 'Displacement ductility μΔ', hint: 'Δu / Δy', group: 'results',
       cells: cells((v) => (v.variant.ductility.available
         ? { text: v.variant.ductility.displacementDuctility === null ? NOT_A_VALUE : formatNumber(v.variant.ductility.displacementDuctility) }
-        : { text: 'not available', note: v.variant.ductility.note })),
+        : { text: 'not available', note: say(v.variant.ductility.note, units.system) })),
     },
     {
       id: 'rotation', label: 'Rotation capacity θp', hint: 'of the critical hinge', group: 'results',

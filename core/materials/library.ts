@@ -11,8 +11,11 @@ import type { ConcreteMaterial, FrpMaterial, SteelMaterial } from './types.ts';
 
 /** Looks up materials by id (what the section builder needs). */
 export interface MaterialResolver {
-  /** Unconfined law, and the confined core law when `confinement` is given and the model supports it. */
-  concrete(id: string, confinement?: ConfinementInput): { cover: ConcreteMaterial; core?: ConcreteMaterial; warnings?: readonly string[] } | undefined;
+  /**
+   * Unconfined law, and the confined core law when `confinement` is given and the model supports it,
+   * with the specified compressive strength (f′c, fck or in-place; default: the cover law's peak).
+   */
+  concrete(id: string, confinement?: ConfinementInput): { cover: ConcreteMaterial; core?: ConcreteMaterial; strength?: number; warnings?: readonly string[] } | undefined;
   steel(id: string): SteelMaterial | undefined;
 }
 
@@ -59,11 +62,11 @@ export function materialLibrary(specs: readonly MaterialSpec[], code: CodeBasis,
       const key = `${id}|${confinement ? JSON.stringify(confinement) : ''}`;
       if (concreteCache.has(key)) return concreteCache.get(key);
       const spec = byId(id, 'concrete') as ConcreteSpec | undefined;
-      let built: { cover: ConcreteMaterial; core?: ConcreteMaterial; warnings: string[] } | undefined;
+      let built: { cover: ConcreteMaterial; core?: ConcreteMaterial; strength: number; warnings: string[] } | undefined;
       if (spec) {
         try {
           const b = buildConcrete(spec, code, confinement, { path: materialPath(specs, id), ...(settings.concreteUltimateStrain ? { ultimateStrain: settings.concreteUltimateStrain } : {}) });
-          built = { cover: b.cover, ...(b.core ? { core: b.core } : {}), warnings: b.diagnostics.filter((d) => d.severity === 'warning').map((d) => d.message) };
+          built = { cover: b.cover, ...(b.core ? { core: b.core } : {}), strength: spec.strength, warnings: b.diagnostics.filter((d) => d.severity === 'warning').map((d) => d.message) };
         } catch (error) {
           record(id, error);
         }

@@ -351,7 +351,9 @@ export function limitWords(beam: BeamModel, h: HingeRecord): string {
     const cracking = response.crackingMoment !== null && response.crackingMoment >= h.law.peakMoment * (1 - 1e-6);
     return cracking
       ? `the section at ${where} cracks at its peak ${direction} moment and its ${h.sign > 0 ? 'bottom' : 'top'} steel cannot carry the cracking moment: a brittle failure with no plastic hinge`
-      : `the section at ${where} reaches its peak ${direction} moment without its tension steel yielding (no ${h.sign > 0 ? 'bottom' : 'top'} reinforcement there, or over-reinforced): a brittle failure with no plastic hinge`;
+      : (h.sign > 0 ? beam.zones[h.zone]!.hingeData.sagging : beam.zones[h.zone]!.hingeData.hogging).barDiameter > 0
+        ? `the section at ${where} reaches its peak ${direction} moment before its tension steel yields (over-reinforced, or an FRP limit first): a brittle failure with no plastic hinge`
+        : `the section at ${where} reaches its cracking moment in ${direction} with no ${h.sign > 0 ? 'bottom' : 'top'} reinforcement there: a brittle failure with no plastic hinge`;
   }
   const cause = h.law.ultimateCause;
   const what = cause === 'steel-rupture' ? 'its tension steel ruptures' : cause === 'frp-rupture' ? 'its FRP ruptures' : cause === 'frp-debonding' ? 'its FRP debonds' : cause === 'moment-drop' ? 'its moment falls below the section curve\u2019s drop limit' : cause === 'core-crushing' ? 'its confined core crushes' : 'its concrete crushes';

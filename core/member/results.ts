@@ -94,11 +94,12 @@ export interface PlasticHinge {
   /**
    * Plastic rotation capacity, rad: the spread part with the critical section brought to the top of
    * its curve under the moment diagram at ultimate, the whole rest of its curve over Lp, and the
-   * strain penetration with the face at the top of its curve.
+   * strain penetration with the face at the top of its curve. Null when the member is brittle
+   * (MemberResult.ductilityUnavailable says why).
    */
-  readonly rotationCapacity: number;
-  /** Plastic rotation reached when the member reaches its best-estimate ultimate (the demand), rad. */
-  readonly rotationAtUltimate: number;
+  readonly rotationCapacity: number | null;
+  /** Plastic rotation reached when the member reaches its best-estimate ultimate (the demand), rad (null when brittle). */
+  readonly rotationAtUltimate: number | null;
   /** The parts of rotationAtUltimate, rad. */
   readonly rotationParts: { readonly spread: number; readonly localised: number; readonly penetration: number };
   /** Curvature ductility of the hinge section φu/φy. */

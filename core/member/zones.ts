@@ -79,3 +79,15 @@ export function zoneResponse(
     plastic: { sagging: plasticLaw(curves.sagging, sagging), hogging: plasticLaw(curves.hogging, hogging) },
   };
 }
+
+/**
+ * Index of the zone at x, on the given side of a zone boundary (the zone ending there for 'left',
+ * the zone starting there for 'right'); the first or last zone outside the zones' extent.
+ */
+export function zoneIndexAt(zones: readonly { readonly from: number; readonly to: number }[], x: number, side: 'left' | 'right'): number {
+  for (let i = 0; i < zones.length; i++) {
+    const z = zones[i]!;
+    if (side === 'right' ? x >= z.from && x < z.to : x > z.from && x <= z.to) return i;
+  }
+  return x <= (zones[0]?.from ?? 0) ? 0 : zones.length - 1;
+}

@@ -125,6 +125,12 @@ export function bracketRoot(
     const b = a + direction * h;
     const fb = f(b);
     if (!Number.isFinite(fb)) {
+      // No value there (e.g. a state in which a section carries nothing): the root, if any, lies
+      // between a and b — come back towards a before giving up on this side.
+      if (h > 1e-6 * step) {
+        h /= 4;
+        continue;
+      }
       direction = -direction;
       h = step;
       continue;

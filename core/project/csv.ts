@@ -324,7 +324,9 @@ const shown = (quantity: Quantity, value: number | null | undefined, system: Uni
 /**
  * Results summary, one row per member, in the display units of `system` (named in the header):
  * id, name, supports, span, status, My, Mu, φu/φy, μΔ, θp, ultimate load factor, governing
- * deflection and its limit, limit case, deflection and strength utilisations, warnings, governing mode.
+ * deflection and its limit, limit case, deflection and strength utilisations, warnings, governing mode,
+ * then where the strength check governs (position, sense, combination) and, for a brittle member, why
+ * its ductility and rotation are not given (those cells are then empty).
  */
 export function resultsSummaryCsv(members: readonly MemberResult[], system: UnitSystem, project?: Project, continuous: readonly ContinuousMemberResult[] = []): string {
   const rows: (string | number | null)[][] = [[
@@ -332,6 +334,7 @@ export function resultsSummaryCsv(members: readonly MemberResult[], system: Unit
     head('My', 'moment', system), head('Mu', 'moment', system), 'φu/φy [-]', 'μΔ [-]', head('θp', 'rotation', system),
     'ultimate load factor [-]', head('deflection', 'deflection', system), head('deflection limit', 'deflection', system), 'limit case',
     'deflection utilisation [-]', 'strength utilisation [-]', 'warnings', 'governing mode',
+    head('strength position', 'spanLength', system), 'strength sense', 'strength combination', 'ductility not available',
   ]];
   for (const result of members) {
     const k = memberKeyResults(result, project?.members.find((m) => m.id === result.memberId));
@@ -341,6 +344,7 @@ export function resultsSummaryCsv(members: readonly MemberResult[], system: Unit
       shown('rotation', k.plasticRotationCapacity, system), k.ultimateLoadFactor,
       shown('deflection', k.deflection?.deflection, system), shown('deflection', k.deflection?.limit, system), k.deflection?.limitCase ?? null,
       k.deflection?.utilisation ?? null, k.strengthUtilisation, k.warnings, say(k.governingMode, system),
+      shown('spanLength', k.strengthPosition, system), k.strengthDirection, k.strengthCombination, k.ductilityUnavailable ? say(k.ductilityUnavailable, system) : null,
     ]);
   }
   rows.push(...continuousSummaryRows(continuous, system));

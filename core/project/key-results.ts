@@ -46,11 +46,13 @@ export interface MemberKeyResults {
   readonly yieldMoment: number | null;
   readonly peakMoment: number | null;
   readonly ultimateMoment: number | null;
-  /** Curvature ductility φu/φy of the critical section. */
+  /** Curvature ductility φu/φy of the critical section (null for a brittle member). */
   readonly curvatureDuctility: number | null;
-  /** Displacement ductility μΔ of the member. */
+  /** Displacement ductility μΔ of the member (null for a brittle member: see ductilityUnavailable). */
   readonly displacementDuctility: number | null;
-  /** Plastic rotation capacity θp of the governing hinge, rad. */
+  /** Why the ductility and hinge rotation are not available (a brittle member), or null. */
+  readonly ductilityUnavailable: Text | null;
+  /** Plastic rotation capacity θp of the governing hinge, rad (null for a brittle member). */
   readonly plasticRotationCapacity: number | null;
   /** Load factor at ultimate on the load pattern (× service load). */
   readonly ultimateLoadFactor: number | null;
@@ -69,9 +71,15 @@ export interface MemberKeyResults {
   /** Deflection checks that fail / all deflection checks. */
   readonly deflectionChecksFailed: number;
   readonly deflectionChecks: number;
-  /** Flexural strength utilisation (demand / design resistance) and outcome. */
+  /**
+   * Flexural strength utilisation (demand / design resistance), outcome, and where it governs: the
+   * position (mm from the left support), the bending sense and the combination (name and source).
+   */
   readonly strengthUtilisation: number | null;
   readonly strengthPass: boolean | null;
+  readonly strengthPosition: number | null;
+  readonly strengthDirection: 'sagging' | 'hogging' | null;
+  readonly strengthCombination: string | null;
   readonly warnings: number;
   readonly errors: readonly Problem[];
   /** Existing beams: whether the beam as it stands needs strengthening, and the scheme the engineer prefers with its status. */
@@ -148,8 +156,9 @@ export function memberKeyResults(result: MemberResult, definition?: MemberDefini
     yieldMoment: finiteOrNull(curve?.bilinear?.yieldMoment),
     peakMoment: finiteOrNull(curve?.keyPoints.peak?.moment),
     ultimateMoment: finiteOrNull(curve?.bilinear?.ultimateMoment ?? curve?.keyPoints.ultimate?.moment),
-    curvatureDuctility: finiteOrNull(curve?.curvatureDuctility),
+    curvatureDuctility: result.ductilityUnavailable ? null : finiteOrNull(curve?.curvatureDuctility),
     displacementDuctility: finiteOrNull(result.ductility.displacementDuctility),
+    ductilityUnavailable: result.ductilityUnavailable ?? null,
     plasticRotationCapacity: finiteOrNull(picked?.hinge?.rotationCapacity),
     ultimateLoadFactor: finiteOrNull(ultimate?.loadFactor),
     // A deflection outside the method's range is no result (core/member/small-deflection.ts); the warnings say why.
@@ -160,6 +169,9 @@ export function memberKeyResults(result: MemberResult, definition?: MemberDefini
     deflectionChecks: checks.length,
     strengthUtilisation: finiteOrNull(result.strength?.utilisation),
     strengthPass: result.strength ? result.strength.pass : null,
+    strengthPosition: finiteOrNull(result.strength?.position),
+    strengthDirection: result.strength?.direction ?? null,
+    strengthCombination: result.strength?.combination ?? null,
     warnings: result.warnings.length,
     errors: result.errors,
     strengthening: strengtheningOf(result, definition),

@@ -23,6 +23,7 @@ import {
 } from '../retrofit/types.ts';
 import { BAR_SPREADS, type BarLayer, type HoopSet, type SectionDefinition } from '../section/definition.ts';
 import { BILINEAR_METHODS } from '../section/results.ts';
+import { EN_COMBINATION_RULES } from '../assessment/combinations.ts';
 import { FLANGE_SIDES, type Point, type SectionShape } from '../section/shapes.ts';
 import { PROJECT_FORMAT, PROJECT_VERSION, UNIT_SYSTEMS, type AnalysisSettings, type ContinuousMemberDefinition, type MemberDefinition, type Project, type ProjectInfo } from './types.ts';
 import { continuousMemberSchemaOf } from './continuous-schema.ts';
@@ -265,6 +266,8 @@ export const analysisSettingsSchema = z.looseObject({
   bilinearMethod: z.enum(BILINEAR_METHODS),
   stations: number,
   concreteUltimateStrain: z.enum(ULTIMATE_STRAIN_CHOICES).optional(),
+  enCombination: z.enum(EN_COMBINATION_RULES).optional(),
+  liveCombinationFactor: number.optional(),
 });
 
 /** A whole version-3 project file. */

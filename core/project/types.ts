@@ -9,6 +9,7 @@ import type { BilinearMethod } from '../section/results.ts';
 import type { BeamDefinition } from '../member/definition.ts';
 import type { ContinuousBeamDefinition } from '../continuous/definition.ts';
 import type { AsFoundCondition, StrengtheningScheme } from '../retrofit/types.ts';
+import type { CombinationSettings } from '../assessment/combinations.ts';
 
 export const PROJECT_FORMAT = 'hingeline-project';
 export const PROJECT_VERSION = 3;
@@ -44,7 +45,7 @@ export interface ProjectInfo {
   readonly unitSystem: UnitSystem;
 }
 
-export interface AnalysisSettings {
+export interface AnalysisSettings extends CombinationSettings {
   /** Fraction of the post-yield peak moment below which a section's curve ends (default 0.8). */
   readonly momentDropFraction: number;
   readonly bilinearMethod: BilinearMethod;

@@ -306,6 +306,7 @@ export function validateProjectData(data: unknown): { project: Project | null; d
   if (settings.ok) {
     const s = data.settings as Project['settings'];
     checkNumber(semantic, 'settings.momentDropFraction', s.momentDropFraction, MOMENT_DROP_RANGE);
+    if (s.liveCombinationFactor !== undefined) checkNumber(semantic, 'settings.liveCombinationFactor', s.liveCombinationFactor, { min: 0, max: 1 });
     if (checkNumber(semantic, 'settings.stations', s.stations, STATIONS_RANGE) && !Number.isInteger(s.stations)) {
       semantic.push({ code: 'must-be-integer', path: 'settings.stations', severity: 'error', message: `must be a whole number of segments, got ${s.stations}` });
     }

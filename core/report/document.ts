@@ -95,7 +95,7 @@ function summary(plan: ReportPlan, f: ReportFormatter): Content[] {
   return [
     heading('Project summary', 'h1', { pageBreak: true }),
     {
-      text: `${n} member${n === 1 ? '' : 's'} reported: ${count('ok')} pass every check, ${count('check-fails')} fail a check, ${count('not-converged')} did not converge, ${count('input-error')} have input errors${plan.members.some((m) => !m.result) ? `, ${plan.members.filter((m) => !m.result).length} have no result` : ''}. Utilisation is demand over capacity (strength) or deflection over its limit (the worst deflection check); μΔ is the displacement ductility.`,
+      text: `${n} member${n === 1 ? '' : 's'} reported: ${count('ok')} pass every check, ${count('check-fails')} fail a check, ${count('brittle')} are brittle (every check passes, but the member would fail without warning), ${count('not-converged')} did not converge, ${count('input-error')} have input errors${plan.members.some((m) => !m.result) ? `, ${plan.members.filter((m) => !m.result).length} have no result` : ''}. Utilisation is demand over capacity (strength) or deflection over its limit (the worst deflection check); μΔ is the displacement ductility.`,
       ...STYLES.body,
     },
     dataTable({

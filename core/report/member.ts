@@ -5,7 +5,7 @@
  * ductility, service deflections against their limits, the strength check, and the warnings,
  * limitations and caution. Every number comes from the results and is only formatted here.
  */
-import type { DeflectionLimitCase, LoadFactors, MemberLoad } from '../member/definition.ts';
+import type { DeflectionLimitCase, MemberLoad } from '../member/definition.ts';
 import { EVENT_WORDS } from '../charts/load-deflection.ts';
 import { drawingWithFacts, figureNode, pageOf, SUPPORT_WORDS, type WriteContext } from './context.ts';
 import type { MemberPlan } from './figures.ts';
@@ -14,7 +14,7 @@ import { HINGE_WORDS, METHOD_ANCHOR, memberMethod } from './method.ts';
 import { citationMarker, hingeLengthReference } from './references.ts';
 import type { Content, ContentNode } from './types.ts';
 import type { MemberResult } from '../assessment/results.ts';
-import { defaultStrengthFactors } from '../assessment/combinations.ts';
+import { combinationText, strengthCombinations } from '../assessment/combinations.ts';
 import { existingChapter } from './existing.ts';
 import { serviceOutsideRange } from '../member/small-deflection.ts';
 
@@ -34,6 +34,7 @@ const LIMIT_WORDS: Readonly<Record<DeflectionLimitCase, string>> = {
 export const STATUS_WORDS: Readonly<Record<MemberResult['status'], { text: string; color: string }>> = {
   ok: { text: 'OK', color: COLOURS.pass },
   'check-fails': { text: 'CHECK FAILS', color: COLOURS.fail },
+  brittle: { text: 'BRITTLE', color: COLOURS.fail },
   'not-converged': { text: 'NOT CONVERGED', color: COLOURS.warn },
   'input-error': { text: 'INPUT ERROR', color: COLOURS.fail },
 };
@@ -49,17 +50,11 @@ export function loadPerFactor(result: MemberResult): number | null {
   return last ? last.totalLoad / last.loadFactor : null;
 }
 
-function factorsText(code: string, factors: LoadFactors): string {
-  return code === 'ACI 318-19'
-    ? `${factors.dead}D + ${factors.superimposed}SD + ${factors.live}L`
-    : `${factors.dead}G + ${factors.superimposed}G_sup + ${factors.live}Q`;
-}
-
 function inputs(ctx: WriteContext, member: MemberPlan): Content[] {
   const { f, project } = ctx;
   const d = member.definition;
   const code = project.info.codeBasis;
-  const factors = d.strengthFactors ?? defaultStrengthFactors(code);
+  const combinations = strengthCombinations(d, code, project.settings).map(combinationText).join('; ');
   const s = d.service;
   const sectionAnchor = (id: string) => ctx.plan.sections.find((p) => p.definition.id === id)?.anchor;
   const sectionName = (id: string) => project.sections.find((x) => x.id === id)?.name ?? id;
@@ -90,7 +85,7 @@ function inputs(ctx: WriteContext, member: MemberPlan): Content[] {
       ['Zones (section along the span)', zones],
       ['Load–deflection pattern', d.capacity.pattern === 'proportional' ? 'all service loads increased together: λ × (D + L)' : 'live load increased with the dead load held: D + λ × L'],
       ['Plastic hinge length', `${HINGE_WORDS[d.capacity.hingeLengthMethod]}${d.capacity.hingeLengthMethod === 'user' ? `: Lp = ${f.length(d.capacity.userHingeLength)}` : ''}${hingeRef ? ` ${citationMarker([ctx.refs.cite(hingeRef, `member ${d.name}`, 'plastic hinge length')])}` : ''}`],
-      ['Strength combination', `${factorsText(code, factors)}${d.strengthFactors ? ' (given by the engineer)' : ` (default of ${code === 'ACI 318-19' ? 'ACI 318-19 Eq. (5.3.1b)' : 'EN 1990 Eq. (6.10)'})`}`],
+      ['Strength combinations (the envelope is checked)', combinations],
       ['Service combinations', `immediate: D + L; sustained: D + ψL with ψ = ${f.fixed(s.sustainedLiveFraction, 2)}; load duration ${s.durationMonths} months`],
       ['Deflection limits checked', limits],
       ['Shrinkage curvature (EN method)', s.includeShrinkage === false ? 'not included' : 'included'],
@@ -169,6 +164,7 @@ function hingesAndDuctility(ctx: WriteContext, member: MemberPlan, result: Membe
     ['Ultimate deflection Δu', f.deflection(d.ultimateDeflection)],
     ['Displacement ductility μΔ = Δu/Δy', f.number(d.displacementDuctility)],
     ['What ends the curve', d.failureCause || '—'],
+    ...(result.ductilityUnavailable ? [['Brittle member: ductility and hinge rotations', { text: f.say(result.ductilityUnavailable), color: COLOURS.fail }] as [string, Content]] : []),
   ], 170));
   return out;
 }
@@ -231,16 +227,25 @@ function strength(ctx: WriteContext, result: MemberResult): Content[] {
   const s = result.strength;
   if (!s) return [keepTogether([h2('Flexural strength check'), { text: 'Not computed for this member.', ...STYLES.body }])];
   const resistance = ctx.project.info.codeBasis === 'ACI 318-19' ? 'φMn' : 'M_Rd';
-  return [keepTogether([h2('Flexural strength check'), factsTable([
-    ['Combination', s.combination],
-    ['Sagging: demand, at x', `${f.moment(s.saggingDemand)} at ${f.span(s.saggingPosition)}`],
-    [`Sagging: resistance ${resistance}`, s.saggingResistance === null ? 'no tension reinforcement on that side' : f.moment(s.saggingResistance)],
-    ['Hogging: demand, at x', `${f.moment(s.hoggingDemand)} at ${f.span(s.hoggingPosition)}`],
-    [`Hogging: resistance ${resistance}`, s.hoggingResistance === null ? 'no tension reinforcement on that side' : f.moment(s.hoggingResistance)],
-    ['Utilisation (largest demand / resistance)', f.fixed(s.utilisation, 2)],
-    ['Result', verdict(s.pass)],
-    ['Notes', f.say(s.notes) || '—'],
-  ], 170)])];
+  const name = (id: string) => result.sections.find((x) => x.sectionId === id)?.sectionName ?? id;
+  const cell = (p: (typeof s.zones)[number]['sagging']): Content => (p ? { stack: [{ text: `${f.fixed(p.utilisation, 2)} at ${f.span(p.position)}` }, { text: `${f.moment(p.demand)} / ${p.resistance === null ? 'no tension steel' : f.moment(p.resistance)}`, fontSize: 6.8, color: COLOURS.muted }] } : '—');
+  return [
+    keepTogether([h2('Flexural strength check'), factsTable([
+      ['Governing point', `x = ${f.span(s.position)}, ${s.direction}, section ${name(s.sectionId)}`],
+      ['Governing combination', s.combination],
+      [`Demand / resistance ${resistance} there`, `${f.moment(s.demand)} / ${s.resistance === null ? 'no tension reinforcement on that side' : f.moment(s.resistance)}`],
+      ['Utilisation', f.fixed(s.utilisation, 2)],
+      ['Result', verdict(s.pass)],
+      ['Every combination (largest utilisation)', s.combinations.map((c) => `${c.combination}: ${f.fixed(c.utilisation, 2)}`).join('; ')],
+      ['Resistances', f.say(s.notes) || '—'],
+    ], 170)]),
+    small(s.zones.length, [h3('Worst point of each zone and sense (utilisation at x; demand / resistance)'), dataTable({
+      widths: [90, '*', 92, 92],
+      header: ['Zone', 'Section', 'Sagging', 'Hogging'],
+      align: ['left', 'left', 'right', 'right'],
+      rows: s.zones.map((z) => [`${f.span(z.from)} to ${f.span(z.to)}`, name(z.sectionId), cell(z.sagging), cell(z.hogging)]),
+    })]),
+  ];
 }
 
 /** Shear, when the analysis checked it (capacities and demands from core/assessment/shear.ts). */

@@ -124,7 +124,7 @@ export function concreteLayerSection(ref: ReferenceSection, scheme: ConcreteLaye
   }
   const top = scheme.face === 'top' ? 0 : outcome.concreteBottom;
   const bottom = top + t;
-  const part = partOf('overlay', `${scheme.name}: ${t} mm ${scheme.face === 'top' ? 'overlay' : 'soffit layer'} (${concreteSpec.name})`, [{ top, bottom, widthTop: width, widthBottom: width }], concrete.cover, true);
+  const part = partOf('overlay', `${scheme.name}: ${t} mm ${scheme.face === 'top' ? 'overlay' : 'soffit layer'} (${concreteSpec.name})`, [{ top, bottom, widthTop: width, widthBottom: width }], concrete.cover, true, concreteSpec.strength);
   const elements: DiscreteElement[] = [];
   const added: AddedItem[] = [{ kind: 'overlay', label: part.label, depth: (top + bottom) / 2, top, bottom, width, area: width * t, initialStrain: 0, materialId: scheme.concreteId }];
   scheme.bars.forEach((b, j) => {

@@ -1,19 +1,14 @@
 /**
  * Everything computed for one section of a project: the resolved model, elastic properties, and
- * the moment–curvature curves a member may need — short term, under sustained load (creep and
- * shrinkage) and, under EN 1992-1-1, with design laws for the resistance.
+ * the moment–curvature curves a member may need — short term and under sustained load (creep and
+ * shrinkage). The code design resistance is core/assessment/resistance.ts.
  */
 import { InputError, type Diagnostic } from '../diagnostics.ts';
 import type { CodeBasis } from '../materials/specs.ts';
 import { en1992ParabolaUltimateStrain } from '../materials/code/en1992.ts';
 import { ACI_CRUSHING_STRAIN } from '../materials/code/aci318.ts';
-import { combineConcrete } from '../materials/concrete/combine.ts';
-import { en1992ParabolaRectangleCompression } from '../materials/concrete/en1992-parabola-rectangle.ts';
-import { noTension } from '../materials/concrete/tension.ts';
-import { elasticPlasticSteel } from '../materials/steel/elastic-plastic.ts';
 import { sustainedConcrete } from '../materials/long-term.ts';
 import { resolveConcrete } from '../materials/build/concrete-defaults.ts';
-import type { SteelMaterial } from '../materials/types.ts';
 import type { MaterialLibrary } from '../materials/library.ts';
 import { buildSectionModel, type SectionAdditions } from './build.ts';
 import type { SectionDefinition } from './definition.ts';
@@ -39,10 +34,6 @@ export interface SectionAnalysis {
   readonly curves: DirectionCurves;
   /** Curves under sustained load: concrete with creep φ and shrinkage εcs. */
   readonly longTermCurves: DirectionCurves;
-  /** EN 1992-1-1 only: curves with design laws (fcd, fyd) for M_Rd. */
-  readonly designCurves: DirectionCurves | null;
-  /** Yield strain of the main tension steel per direction (for ACI φ). */
-  readonly yieldStrain: { readonly sagging: number; readonly hogging: number };
   /** Self-weight, N/mm. */
   readonly selfWeight: number;
   /** Code values of the concrete (ACI Ec, fr / EN Ecm, fctm), creep and shrinkage. */
@@ -93,8 +84,6 @@ export function analyzeSectionShortTerm(definition: SectionDefinition, path: str
     elastic: null,
     curves: {},
     longTermCurves: {},
-    designCurves: null,
-    yieldStrain: { sagging: 0.002, hogging: 0.002 },
     selfWeight: 0,
     codeModulus: 0,
     codeTensileStrength: 0,
@@ -145,8 +134,7 @@ export function analyzeSection(definition: SectionDefinition, path: string, mate
 
 /**
  * The rest of a section analysis after its short-term stage (the same curves, not computed
- * again): curves under sustained load, design-law curves (EN 1992-1-1), yield strains and the
- * code values of the concrete.
+ * again): curves under sustained load and the code values of the concrete.
  */
 export function completeSectionAnalysis(shortTerm: ShortTermSection, definition: SectionDefinition, materials: MaterialLibrary, options: SectionAnalysisOptions): SectionAnalysis {
   const { stage } = shortTerm;
@@ -160,39 +148,12 @@ export function completeSectionAnalysis(shortTerm: ShortTermSection, definition:
   const shrinkage = spec.shrinkageStrain ?? 0.0004;
   const longModel = withMaterials(model, (m) => sustainedConcrete(m, creep, shrinkage));
   const longTermCurves = curvesOf(longModel, { ...mcOptions, codeCrushingStrain: crushing * (1 + creep) + shrinkage }, [], 'Sustained-load');
-  let designCurves: DirectionCurves | null = null;
-  if (code === 'EN 1992-1-1') {
-    const fcd = spec.strength / 1.5; // αcc = 1.0, γc = 1.5 (EN 1992-1-1 3.1.6(1), Table 2.1N)
-    const designConcrete = combineConcrete(en1992ParabolaRectangleCompression({ strength: fcd, characteristicStrength: spec.strength }), noTension());
-    const designSteel = new Map<unknown, SteelMaterial>();
-    const designModel = withMaterials(
-      model,
-      () => designConcrete,
-      (m) => {
-        const s = m as SteelMaterial;
-        let d = designSteel.get(s);
-        if (!d) {
-          d = elasticPlasticSteel({ elasticModulus: s.initialModulus, yieldStress: s.yieldStress / 1.15, ruptureStrain: 0.9 * s.ruptureStrain });
-          designSteel.set(s, d);
-        }
-        return d;
-      },
-    );
-    designCurves = curvesOf(designModel, mcOptions, warnings, 'Design-law');
-  }
   // ACI Ec = 4700√f′c and fr = 0.62λ√f′c, or EN Ecm and fctm, unless the spec overrides them.
   const codeValues = resolveConcrete(spec, code);
-  const yieldOf = (dir: BendingDirection) => {
-    const steel = tensionSteel(model, dir);
-    const main = steel.reduce<(typeof steel)[number] | undefined>((a, b) => (!a || b.area > a.area ? b : a), undefined);
-    return main?.material.yieldStrain ?? 0.002;
-  };
   return {
     ...shortTerm.analysis,
     curves,
     longTermCurves,
-    designCurves,
-    yieldStrain: { sagging: yieldOf('sagging'), hogging: yieldOf('hogging') },
     codeModulus: codeValues.elasticModulus,
     codeTensileStrength: codeValues.codeTensileStrength,
     creepCoefficient: creep,

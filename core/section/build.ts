@@ -284,13 +284,14 @@ export function buildSectionModel(definition: SectionDefinition, materials: Mate
   }
   if (problems.length > 0) throw new InputError(problems);
 
+  const strength = concrete!.strength ?? concrete!.cover.peakStress;
   let parts: ConcretePart[] = [];
   if (core && concrete!.core) {
     const coreProfile = rectangleProfile(core.x0, core.x1, core.y0, core.y1);
-    parts.push(partOf('cover', 'unconfined cover', subtractProfile(profile, coreProfile), concrete!.cover, false));
-    parts.push(partOf('core', 'confined core', coreProfile, concrete!.core, true));
+    parts.push(partOf('cover', 'unconfined cover', subtractProfile(profile, coreProfile), concrete!.cover, false, strength));
+    parts.push(partOf('core', 'confined core', coreProfile, concrete!.core, true, strength));
   } else {
-    parts.push(partOf('cover', 'concrete', profile, concrete!.cover, true));
+    parts.push(partOf('cover', 'concrete', profile, concrete!.cover, true, strength));
   }
   const stiffening = concrete!.cover.tension.model === 'tension-stiffening' ? tensionStiffeningBands(parts, elements, height) : undefined;
   if (stiffening) parts = stiffening.parts;
@@ -357,8 +358,8 @@ function tensionStiffeningBands(parts: ConcretePart[], elements: readonly Discre
       if (!(y1 > y0)) continue;
       const strips = clipProfile(part.strips, y0, y1);
       if (strips.length === 0) continue;
-      if (group !== undefined) out.push({ ...partOf(part.role, `${part.label} (tension-stiffening band)`, strips, part.material, part.governsCrushing), stiffeningGroup: group });
-      else out.push(partOf(part.role, part.label, strips, brittleConcrete(part.material), part.governsCrushing));
+      if (group !== undefined) out.push({ ...partOf(part.role, `${part.label} (tension-stiffening band)`, strips, part.material, part.governsCrushing, part.strength), stiffeningGroup: group });
+      else out.push(partOf(part.role, part.label, strips, brittleConcrete(part.material), part.governsCrushing, part.strength));
     }
   }
   return { parts: out, groups };
@@ -377,12 +378,13 @@ function brittleConcrete(m: ConcreteMaterial): ConcreteMaterial {
   return b;
 }
 
-export function partOf(role: ConcretePart['role'], label: string, strips: Strip[], material: ConcreteMaterial, governsCrushing: boolean): ConcretePart {
+export function partOf(role: ConcretePart['role'], label: string, strips: Strip[], material: ConcreteMaterial, governsCrushing: boolean, strength: number): ConcretePart {
   return {
     role,
     label,
     strips,
     material,
+    strength,
     governsCrushing,
     top: Math.min(...strips.map((s) => s.top)),
     bottom: Math.max(...strips.map((s) => s.bottom)),

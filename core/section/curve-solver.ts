@@ -6,7 +6,8 @@
  */
 import { brentRoot, type RootResult } from '../numeric/roots.ts';
 import { forceTolerance, solveEquilibrium, type EquilibriumState, type SlopeHint } from './equilibrium.ts';
-import type { SectionModel } from './model.ts';
+import { sectionForces } from './forces.ts';
+import type { DiscreteElement, SectionModel } from './model.ts';
 
 /** A state on the curve: curvature magnitude and equilibrium. */
 export interface Snapshot {
@@ -15,6 +16,9 @@ export interface Snapshot {
   /** Set by `locate` when the event function jumped there (the equilibrium path snapped). */
   readonly jumped?: boolean;
 }
+
+/** Strain at depth y of an equilibrium state (compression positive). */
+const strainAt = (model: SectionModel, eq: EquilibriumState, y: number) => eq.referenceStrain + eq.curvature * (model.centroidDepth - y);
 
 export class CurveSolver {
   /** Centroid strain the next solve starts from. */
@@ -38,6 +42,45 @@ export class CurveSolver {
     if (!out.ok) return out.reason;
     this.lastGuess = out.state.referenceStrain;
     return out.state;
+  }
+
+  /**
+   * The state between snapshot a and curvature bKappa at which the first of `elements` reaches its limit strain
+   * (a bar's rupture, an FRP's rupture or debonding), solved with that element's strain held at its
+   * limit: for each curvature the centroid strain follows from the pinned strain, and the curvature
+   * is the root of the axial force. Past the limit the element carries nothing, so the equilibrium
+   * path snaps there and a search on the free equilibrium (`locate`) is drawn onto the branch after
+   * the snap, where a section with ruptured bars balances a few hundred N·mm; pinning the strain
+   * stays on the branch the curve came along. The pinned strain is a billionth short of the limit, so
+   * the element still carries its stress (the laws drop to zero just beyond it).
+   * Returns null when no element reaches its limit between a and the curvature bKappa on this branch.
+   */
+  locateElementLimit(elements: readonly DiscreteElement[], a: Snapshot, bKappa: number): Snapshot | null {
+    const model = this.model;
+    const ratio = (e: DiscreteElement, eq: EquilibriumState) => -(strainAt(model, eq, e.depth) - e.initialStrain) / e.limitStrain!;
+    let best: Snapshot | null = null;
+    for (const e of elements) {
+      if (!(e.limitStrain! > 0)) continue;
+      const pinned = e.initialStrain - e.limitStrain! * (1 - 1e-9);
+      const eps0 = (kappa: number) => pinned - this.sign * kappa * (model.centroidDepth - e.depth);
+      const axial = (kappa: number) => {
+        this.solves++;
+        return sectionForces(model, eps0(kappa), this.sign * kappa).axial - model.axialForce;
+      };
+      const fa = axial(a.kappa);
+      const fb = axial(bKappa);
+      if (!(fa < 0 && fb > 0)) continue;
+      const root = brentRoot(axial, a.kappa, bKappa, fa, fb, { xTolerance: 1e-12 * bKappa, fTolerance: this.tolerance, maxIterations: 200 });
+      if (!root.converged || !(Math.abs(root.fx) <= this.tolerance * 1000)) continue;
+      const kappa = root.x;
+      const forces = sectionForces(model, eps0(kappa), this.sign * kappa);
+      const eq: EquilibriumState = { curvature: this.sign * kappa, referenceStrain: eps0(kappa), moment: forces.moment, residual: forces.axial - model.axialForce };
+      // The state must carry load in the curve's sense and leave every other element within its limit.
+      if (!(this.sign * eq.moment > 0) || elements.some((o) => o !== e && o.limitStrain! > 0 && ratio(o, eq) > 1 + 1e-9)) continue;
+      if (!best || kappa < best.kappa) best = { kappa, eq, jumped: false };
+    }
+    if (best) this.lastGuess = best.eq.referenceStrain;
+    return best;
   }
 
   /**
@@ -70,33 +113,34 @@ export class CurveSolver {
     };
     // Key points to a relative 1e-7 in curvature: far inside the 0.2 % the checks ask for.
     const root: RootResult = brentRoot(f, a.kappa, b.kappa, g(a.eq), g(b.eq), { xTolerance: 1e-7 * b.kappa, fTolerance: 1e-9, maxIterations: 100 });
-    let kappa = root.x;
+    const kappa = root.x;
     if (!lastState || lastState.curvature !== this.sign * kappa) {
       this.lastGuess = lastGood.state.referenceStrain;
       const s = this.solve(kappa);
       if (typeof s === 'string') {
-        // The event sits where equilibrium ends: report the last state that had one.
         if (!failure) failure = s;
-        return lastGood.kappa > a.kappa || g(a.eq) < 0 ? { kappa: lastGood.kappa, eq: lastGood.state, jumped: true } : failure;
-      }
-      lastState = s;
-    }
-    let jumped = false;
-    if (Math.abs(g(lastState)) > 1e-6) {
-      jumped = true;
-      // The event function jumps here (the equilibrium path snaps, e.g. when a flange crushes):
-      // take the last state before the jump, where the event has not yet happened.
-      for (let shrink = 1e-9; shrink < 1e-3; shrink *= 10) {
-        this.lastGuess = a.eq.referenceStrain; // stay on the branch the curve came along
-        const left = this.solve(root.x * (1 - shrink));
-        if (typeof left === 'string') return left;
-        if (g(left) < 0) {
-          kappa = root.x * (1 - shrink);
-          lastState = left;
-          break;
-        }
+        // No state before the event at all: nothing to end the curve on.
+        if (!(lastGood.kappa > a.kappa || g(a.eq) < 0)) return failure;
+        lastState = undefined;
+      } else {
+        lastState = s;
       }
     }
-    return { kappa, eq: lastState, jumped };
+    if (lastState && Math.abs(g(lastState)) <= 1e-6) return { kappa, eq: lastState, jumped: false };
+    // The event function jumps here, or equilibrium ends there (the path snaps, e.g. when a flange
+    // crushes or a bar ruptures): the curve ends at the last state before the jump, where the event
+    // has not yet happened. Bisection between the last such state and the root, each equilibrium started from
+    // the state below it (continuation keeps it on the branch the curve came along; a curvature whose
+    // equilibrium is on another branch, or has none, counts as past the event), to 1e-12 in curvature.
+    let lo = lastGood;
+    let hi = root.x;
+    for (let i = 0; i < 60 && hi - lo.kappa > 1e-12 * hi; i++) {
+      const mid = 0.5 * (lo.kappa + hi);
+      this.lastGuess = lo.state.referenceStrain + slope * (mid - lo.kappa);
+      const s = this.solve(mid);
+      if (typeof s !== 'string' && g(s) < 0) lo = { kappa: mid, state: s };
+      else hi = mid;
+    }
+    return { kappa: lo.kappa, eq: lo.state, jumped: true };
   }
 }

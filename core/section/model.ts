@@ -18,6 +18,13 @@ export interface ConcretePart {
   readonly strips: readonly Strip[];
   readonly material: ConcreteMaterial;
   /**
+   * Compressive strength of the part's concrete as specified, MPa: f′c (ACI 318-19), fck
+   * (EN 1992-1-1) or the in-place strength of an as-found condition — never a confined or mean
+   * strength. The code design resistance gives every part the design law of its own strength
+   * (core/assessment/resistance.ts).
+   */
+  readonly strength: number;
+  /**
    * True when crushing of this part's extreme fibre ends the curve. The unconfined cover of a
    * section with a confined core does not count: it spalls and the core carries on.
    */
@@ -99,6 +106,11 @@ export function directionSign(direction: BendingDirection): 1 | -1 {
 /** Steel elements (bars and plates, not FRP) with a yield point. */
 export function isSteel(e: DiscreteElement): boolean {
   return (e.kind === 'bar' || e.kind === 'plate') && e.material.yieldStrain !== undefined;
+}
+
+/** Yield stress fy of a steel element, MPa (undefined for FRP). */
+export function steelYieldStress(e: DiscreteElement): number | undefined {
+  return (e.material as { readonly yieldStress?: number }).yieldStress;
 }
 
 /** Tension-side steel for a direction: below the centroid for sagging, above it for hogging. */

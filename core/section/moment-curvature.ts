@@ -73,9 +73,14 @@ export function momentCurvature(model: SectionModel, direction: BendingDirection
   const { g, enabled, evaluateAll } = events;
   const snapshots: Snapshot[] = [];
   /** Locates event `name` between two bracketing snapshots (a is on the curve already). */
+  const limitedElements = model.elements.filter((e) => e.limitStrain !== undefined && e.limitStrain > 0);
   const locate = (name: EventName, a: Snapshot, b: Snapshot) => {
     const index = snapshots.lastIndexOf(a);
-    return solver.locate(g[name], a, b, index > 0 ? snapshots[index - 1]! : undefined);
+    const free = solver.locate(g[name], a, b, index > 0 ? snapshots[index - 1]! : undefined);
+    // Where the free search loses the path just before an element's limit (the path snaps right
+    // after it), the limit is solved with the element's strain pinned there.
+    if (name !== 'elementLimit' || (typeof free !== 'string' && !free.jumped)) return free;
+    return solver.locateElementLimit(limitedElements, a, b.kappa) ?? free;
   };
 
   // --- march --------------------------------------------------------------------------------------
@@ -128,7 +133,17 @@ export function momentCurvature(model: SectionModel, direction: BendingDirection
         }
         if (hi - lo <= 1e-9 * hi) break;
       }
-      const atLimit = best ? ULTIMATE_EVENTS.find((n) => enabled[n] && n !== 'momentDrop' && g[n](best!) > -1e-6) : undefined;
+      let atLimit = best ? ULTIMATE_EVENTS.find((n) => enabled[n] && n !== 'momentDrop' && g[n](best!) > -1e-6) : undefined;
+      if (!atLimit) {
+        // The free search may lose the path just short of an element's limit (nothing carries the
+        // tension after it): solve the limit with its strain pinned.
+        const pinned = solver.locateElementLimit(limitedElements, previous, kappa);
+        if (pinned) {
+          best = pinned.eq;
+          lo = pinned.kappa;
+          atLimit = 'elementLimit';
+        }
+      }
       if (!best || !atLimit) {
         status = { kind: 'not-converged', atCurvature: hi, message: phrase`Analysis stopped at φ = ${q('curvature', hi)}: ${reason}. The curve ends at the last converged point.` };
         break;
@@ -143,12 +158,16 @@ export function momentCurvature(model: SectionModel, direction: BendingDirection
 
     // Ultimate events inside this step: take the earliest.
     let ultimate: { name: EventName; snap: Snapshot } | undefined = forcedLimit ? { name: forcedLimit, snap: current } : undefined;
+    let unlocated: string | undefined;
     for (const n of forcedLimit ? [] : ULTIMATE_EVENTS) {
       if (!enabled[n] || !(previousG[n] < 0 && currentG[n] >= 0)) continue;
       const located = locate(n, previous, current);
       if (typeof located === 'string') {
-        status = { kind: 'not-converged', atCurvature: kappa, message: phrase`Could not locate the limit state between φ = ${q('curvature', previous.kappa)} and ${q('curvature', kappa)}: ${located}` };
-        break;
+        // Another limit in the same step may still be located (e.g. the moment drop that follows a
+        // bar's rupture cannot be, because nothing is carried after it); only when none is does
+        // the curve stop unconverged.
+        unlocated ??= located;
+        continue;
       }
       // Earliest wins; when a physical limit and the moment-drop rule coincide (a bar ruptures and the
       // moment falls with it), the physical limit is the cause.
@@ -167,9 +186,18 @@ export function momentCurvature(model: SectionModel, direction: BendingDirection
         }
       }
       const coincide = ultimate && Math.abs(located.kappa - ultimate.snap.kappa) <= 1e-6 * located.kappa;
-      if (!ultimate || (coincide ? ultimate.name === 'momentDrop' && name !== 'momentDrop' : located.kappa < ultimate.snap.kappa)) ultimate = { name, snap: located };
+      // A jumped location is only the last state the free search held before the path snapped; an
+      // element limit solved exactly on the curve's own branch (locateElementLimit) is where it snaps.
+      const exactLimit = (s: Snapshot, m: EventName) => m === 'elementLimit' && !s.jumped;
+      const better = !ultimate
+        || (exactLimit(located, n) && ultimate.snap.jumped)
+        || (!(exactLimit(ultimate.snap, ultimate.name) && located.jumped) && (coincide ? ultimate.name === 'momentDrop' && name !== 'momentDrop' : located.kappa < ultimate.snap.kappa));
+      if (better) ultimate = { name, snap: located };
     }
-    if (status) break;
+    if (!ultimate && unlocated) {
+      status = { kind: 'not-converged', atCurvature: kappa, message: phrase`Could not locate the limit state between φ = ${q('curvature', previous.kappa)} and ${q('curvature', kappa)}: ${unlocated}` };
+      break;
+    }
     const end = ultimate ? ultimate.snap.kappa : kappa;
 
     // Key events inside this step (before ultimate, if any), in order of curvature.

@@ -1,6 +1,28 @@
 import { BugError } from '../errors.ts';
 import { QUANTITIES, type Quantity, type QuantityDefinition, type UnitSystem } from './quantities.ts';
-import { UNITS, type UnitDefinition, type UnitId } from './units.ts';
+import { UNITS, type Dimension, type UnitDefinition, type UnitId } from './units.ts';
+
+/**
+ * Magnitudes (internal units) below which a value is round-off of zero: far below any value a beam
+ * assessment meets (a moment of 0.001 N·mm, a length of a nanometre…) and far above the noise of
+ * double precision arithmetic on the values it does meet (about 1e-16 of them: a moment of 1e9 N·mm
+ * that cancels at a support leaves 1e-7 N·mm). Such a value is shown as zero: never "4.40e-14 kip·ft".
+ * // common practice, no source
+ */
+export const ROUND_OFF_ZERO: Readonly<Record<Dimension, number>> = {
+  force: 1e-6,
+  length: 1e-9,
+  area: 1e-9,
+  secondMoment: 1e-6,
+  stress: 1e-9,
+  moment: 1e-3,
+  flexuralRigidity: 1,
+  curvature: 1e-15,
+  lineLoad: 1e-9,
+  density: 1e-9,
+  angle: 1e-12,
+  dimensionless: 1e-12,
+};
 
 function definitionOf(quantity: Quantity): QuantityDefinition {
   const definition = QUANTITIES[quantity];
@@ -30,10 +52,11 @@ export function unitLabel(quantity: Quantity, system: UnitSystem, unit?: UnitId)
 
 /**
  * Converts an internal value (N, mm, MPa, N·mm, 1/mm, N/mm, kg/m³, rad, strain) to the display unit of
- * `quantity` in `system` (or to `unit`). Pure arithmetic: NaN and ±Infinity pass through unchanged;
- * formatting (formatQuantity) is where non-finite values are caught.
+ * `quantity` in `system` (or to `unit`). A value within round-off of zero (ROUND_OFF_ZERO) becomes 0.
+ * NaN and ±Infinity pass through unchanged; formatting (formatQuantity) is where they are caught.
  */
 export function toDisplay(quantity: Quantity, valueInternal: number, system: UnitSystem, unit?: UnitId): number {
+  if (Math.abs(valueInternal) < ROUND_OFF_ZERO[definitionOf(quantity).dimension]) return 0;
   return valueInternal / displayUnit(quantity, system, unit).internalPerUnit;
 }
 

@@ -84,6 +84,7 @@ export const SHAPE_LABELS: Readonly<Record<ShapeKind, string>> = {
 export const STATUS_LABELS: Readonly<Record<MemberStatus | 'pending' | 'outdated', string>> = {
   ok: 'OK',
   'check-fails': 'Check fails',
+  brittle: 'Brittle',
   'not-converged': 'Not converged',
   'input-error': 'Input error',
   pending: 'Not analysed',

@@ -16,7 +16,7 @@ export interface OverviewRow {
 }
 
 /** Most severe first when sorting by status ascending. */
-export const STATUS_ORDER: Readonly<Record<RowStatus, number>> = { 'input-error': 0, 'not-converged': 1, 'check-fails': 2, outdated: 3, pending: 4, ok: 5 };
+export const STATUS_ORDER: Readonly<Record<RowStatus, number>> = { 'input-error': 0, 'not-converged': 1, 'check-fails': 2, brittle: 3, outdated: 4, pending: 5, ok: 6 };
 
 const collator = new Intl.Collator('en', { numeric: true, sensitivity: 'base' });
 

@@ -64,10 +64,10 @@ describe('the command-line bundle', () => {
       const version = runBundled(work, '--version');
       expect(version).toEqual({ code: 0, stdout: `hingeline ${JSON.parse(readFileSync(join(ROOT, 'package.json'), 'utf8')).version}\n`, stderr: '' });
       writeFileSync(join(work, 'demo.hingeline'), serializeProject(demoProject()));
-      const r = runBundled(work, 'analyze', 'demo.hingeline', '--member', 'C-101', '--member', 'P-206', '--jobs', '2', '--format', 'json');
+      const r = runBundled(work, 'analyze', 'demo.hingeline', '--member', 'C-101', '--member', 'F-205', '--jobs', '2', '--format', 'json');
       expect(r.stderr).toBe('');
       expect(r.code).toBe(0);
-      expect(JSON.parse(r.stdout).members.map((m: { id: string }) => m.id)).toEqual(['C-101', 'P-206']);
+      expect(JSON.parse(r.stdout).members.map((m: { id: string }) => m.id)).toEqual(['C-101', 'F-205']);
     } finally {
       rmSync(work, { recursive: true, force: true });
     }

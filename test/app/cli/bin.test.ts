@@ -35,11 +35,23 @@ describe('the hingeline command', () => {
     const v = run('validate', 'demo.hingeline');
     expect(v.code).toBe(0);
     expect(v.stdout).toMatch(/demo\.hingeline: no problems/);
-    const a = run('analyze', 'demo.hingeline', '--member', 'C-101', '--member', 'P-206', '--format', 'json');
+    const a = run('analyze', 'demo.hingeline', '--member', 'C-101', '--member', 'F-205', '--format', 'json');
     expect(a.stderr).toBe('');
     expect(a.code).toBe(0);
     const doc = JSON.parse(a.stdout);
-    expect(doc.members.map((m: { id: string; status: string }) => `${m.id} ${m.status}`)).toEqual(['C-101 ok', 'P-206 ok']);
+    expect(doc.members.map((m: { id: string; status: string }) => `${m.id} ${m.status}`)).toEqual(['C-101 ok', 'F-205 ok']);
+    // A brittle member (shear reached before the flexural mechanism) is never ok: exit 1, its
+    // ductility and rotation null with the reason beside them.
+    const b = run('analyze', 'demo.hingeline', '--member', 'P-206', '--format', 'json');
+    expect(b.code).toBe(1);
+    const brittle = JSON.parse(b.stdout);
+    expect(brittle.summary).toMatchObject({ members: 1, ok: 0, brittle: 1 });
+    const p = brittle.members[0];
+    expect(p.status).toBe('brittle');
+    expect(p.displacementDuctility).toBeNull();
+    expect(p.plasticRotationCapacity).toBeNull();
+    expect(p.ductilityUnavailable).toMatch(/^not available: shear would be reached before the flexural mechanism/);
+    expect(p.brittle.map((x: { cause: string }) => x.cause)).toEqual(['shear-before-flexure']);
   }, 120_000);
 
   it('exits 1 for a file with errors and 2 for a file that does not exist, errors on stderr', () => {

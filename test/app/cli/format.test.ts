@@ -11,7 +11,7 @@ let project: Project;
 let results: ProjectResults;
 beforeAll(() => {
   const full = demoProject();
-  project = { ...full, members: full.members.filter((m) => ['B-204', 'C-101'].includes(m.id)) };
+  project = { ...full, members: full.members.filter((m) => ['B-204', 'C-101', 'P-206'].includes(m.id)) };
   results = analyzeProject(project);
 });
 
@@ -77,6 +77,15 @@ describe('tableReport', () => {
     expect(si).toMatch(/^B-204 +simply supported +6\.71 /m);
   });
 
+  it('a brittle member reads "brittle", never ok, with its ductility and rotation as —; the summary counts it', () => {
+    const us = tableReport(project, results, { system: 'us' });
+    const row = us.split('\n').find((l) => l.startsWith('P-206'))!;
+    expect(row).toMatch(/ brittle$/);
+    // φu/φy, μΔ and θp are not given for a brittle member
+    expect(row).toMatch(/propped cantilever +20\.0 +[\d.]+ +[\d.]+ +— +— +— /);
+    expect(us).toMatch(/^3 members: 1 ok, 1 with a failing check, 1 brittle, 0 not converged, 0 with input errors\.$/m);
+  });
+
   it('keeps lines within the width given, apart from the table itself', () => {
     const text = tableReport(project, results, { system: 'us', width: 80 });
     const afterTable = text.split('\n').slice(text.split('\n').findIndex((l) => l.startsWith('Governing mode')));
@@ -103,6 +112,12 @@ describe('analysisJson', () => {
     expect(b.curvatureDuctility.unit).toBe('1');
     expect(b.deflection).toMatchObject({ limitCase: 'aci-sensitive-after-attachment', spanRatio: 480, pass: false, limit: { value: 0.55, unit: 'in' } });
     expect(b.deflectionChecks).toHaveLength(2);
+    // where the strength check governs, and under which combination
+    expect(b.strength).toMatchObject({ pass: false, direction: 'sagging', combination: '1.2D + 1.6L (ACI 318-19 Eq. (5.3.1b))' });
+    expect(b.strength.position.unit).toBe('ft');
+    expect(b.strength.combinations.map((c: any) => c.combination)).toEqual(['1.4D (ACI 318-19 Eq. (5.3.1a))', '1.2D + 1.6L (ACI 318-19 Eq. (5.3.1b))']);
+    expect(b.ductilityUnavailable).toBeNull();
+    expect(doc.summary).toEqual({ members: 3, ok: 1, checkFails: 1, brittle: 1, notConverged: 0, inputErrors: 0 });
     const si = analysisJson(project, results, 'si') as any;
     expect(si.members[0].span).toEqual({ value: 6.7056, unit: 'm' });
     expect(si.members[0].yieldMoment.unit).toBe('kN·m');

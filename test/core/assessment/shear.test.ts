@@ -22,7 +22,7 @@ function zonesOf(project: Project, m: MemberDefinition): ShearZone[] {
   });
 }
 
-const aci = { factors: { dead: 1.2, superimposed: 1.2, live: 1.6 }, combination: '1.2D + 1.6L' };
+const aci = { combinations: [{ name: '1.2D + 1.6L', source: 'ACI 318-19 Eq. (5.3.1b)', factors: { dead: 1.2, superimposed: 1.2, live: 1.6 } }] };
 
 describe('released shear (statics)', () => {
   it('simple span, point load P at a: V = P(L − a)/L left of it and −Pa/L right of it', () => {
@@ -152,7 +152,7 @@ describe('flexure-governed or shear-governed, in the member result', () => {
     };
   }
 
-  it.each(['ACI 318-19', 'EN 1992-1-1'] as const)('%s: a short, heavily reinforced beam without stirrups is shear-governed; its ductility is flagged, not deleted', (code) => {
+  it.each(['ACI 318-19', 'EN 1992-1-1'] as const)('%s: a short, heavily reinforced beam without stirrups is shear-governed: brittle, its ductility and hinge rotations withdrawn with the reason', (code) => {
     const results = analyzeProject(heavyProject(code));
     const sg = results.members[0]!;
     expect(sg.shear!.governs).toBe('shear');
@@ -161,8 +161,12 @@ describe('flexure-governed or shear-governed, in the member result', () => {
     expect(sg.shear!.shearFailureLoadFactor!).toBeLessThan(sg.shear!.mechanism!.loadFactor);
     expect(say(sg.governingMode, 'si')).toMatch(/^Shear governs \(brittle\)/);
     expect(say(sg.governingMode, 'si')).toMatch(/not available/);
-    expect(sg.warnings.map((w) => say(w, 'si')).join(' ')).toMatch(/not available/);
-    expect(sg.ductility.hinges.length).toBeGreaterThan(0); // kept for reference
+    expect(sg.status).toBe('brittle');
+    expect(sg.brittle.map((b) => b.cause)).toContain('shear-before-flexure');
+    expect(say(sg.ductilityUnavailable!, 'si')).toMatch(/^not available: shear would be reached before the flexural mechanism/);
+    expect(sg.ductility.displacementDuctility).toBeNull();
+    expect(sg.ductility.hinges.length).toBeGreaterThan(0);
+    expect(sg.ductility.hinges.every((h) => h.rotationCapacity === null && h.rotationAtUltimate === null)).toBe(true);
     const fg = results.members[1]!;
     expect(fg.shear!.governs).toBe('flexure');
     expect(say(fg.governingMode, 'si')).toMatch(/shear: flexure governs/);

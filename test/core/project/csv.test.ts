@@ -2,6 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { csvField, csvText, importMembersCsv, loadDeflectionCsv, momentCurvatureCsv, parseCsv, resultsSummaryCsv, spanDistributionCsv } from '../../../core/project/csv.ts';
 import type { MomentCurvatureResult } from '../../../core/section/results.ts';
 import type { MemberResult } from '../../../core/assessment/results.ts';
+import { analyzeProject } from '../../../core/analysis.ts';
+import { demoProject } from '../../../core/project/demo.ts';
 
 const HEADER_US = 'id,name,span [ft],supports,section,dead [kip/ft],superimposed [kip/ft],live [kip/ft],notes';
 
@@ -194,10 +196,25 @@ describe('results summary export', () => {
       memberId: 'B-1', memberName: 'B-1', supports: 'simply-supported', span: 7315.2, status: 'input-error', governingMode: 'Not analysed: 1 input problem to fix first.',
       sections: [], loadDeflection: { pattern: '', controlPosition: 0, points: [], events: [], status: 'not analysed' },
       ductility: { firstYieldDeflection: null, yieldDeflection: null, ultimateDeflection: null, displacementDuctility: null, hinges: [], failureCause: '' },
-      distributions: [], service: null, strength: null, warnings: [], errors: [{ path: 'members[0].span', message: 'bad' }],
+      distributions: [], service: null, strength: null, brittle: [], ductilityUnavailable: null, warnings: [], errors: [{ path: 'members[0].span', message: 'bad' }],
     } as MemberResult;
     const [header, row] = resultsSummaryCsv([result], 'us').split('\r\n');
-    expect(header).toBe('member id,name,supports,span [ft],status,My [kip·ft],Mu [kip·ft],φu/φy [-],μΔ [-],θp [rad],ultimate load factor [-],deflection [in],deflection limit [in],limit case,deflection utilisation [-],strength utilisation [-],warnings,governing mode');
-    expect(row).toBe('B-1,B-1,simply-supported,24,input-error,,,,,,,,,,,,0,Not analysed: 1 input problem to fix first.');
+    expect(header).toBe('member id,name,supports,span [ft],status,My [kip·ft],Mu [kip·ft],φu/φy [-],μΔ [-],θp [rad],ultimate load factor [-],deflection [in],deflection limit [in],limit case,deflection utilisation [-],strength utilisation [-],warnings,governing mode,strength position [ft],strength sense,strength combination,ductility not available');
+    expect(row).toBe('B-1,B-1,simply-supported,24,input-error,,,,,,,,,,,,0,Not analysed: 1 input problem to fix first.,,,,');
+  });
+
+  it('a brittle member: its status, the governing point of the strength check, and why μΔ and θp are empty', () => {
+    const project = demoProject();
+    const results = analyzeProject({ ...project, members: project.members.filter((m) => m.id === 'P-206') });
+    const [header, row] = resultsSummaryCsv(results.members, 'us', project).split('\r\n');
+    const cells = parseCsv(`${header}\n${row}`).records.map((r) => r.fields);
+    const value = (column: string) => cells[1]![cells[0]!.indexOf(column)];
+    expect(value('status')).toBe('brittle');
+    expect(value('μΔ [-]')).toBe('');
+    expect(value('θp [rad]')).toBe('');
+    expect(value('strength sense')).toBe('sagging');
+    expect(value('strength combination')).toBe('1.2D + 1.6L (ACI 318-19 Eq. (5.3.1b))');
+    expect(Number(value('strength position [ft]'))).toBeGreaterThan(0);
+    expect(value('ductility not available')).toMatch(/^not available: shear would be reached before the flexural mechanism/);
   });
 });

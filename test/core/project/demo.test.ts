@@ -2,6 +2,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { analyzeProject, type ProjectResults } from '../../../core/analysis.ts';
 import { layerArea } from '../../../core/section/definition.ts';
 import { hoopsConfine } from '../../../core/section/definition.ts';
+import { say } from '../../../core/units/phrase.ts';
 import { demoProject, demoProjectSI } from '../../../core/project/demo.ts';
 import { validateProject } from '../../../core/project/validate.ts';
 import type { Project } from '../../../core/project/types.ts';
@@ -100,7 +101,7 @@ describe('the US demo project (Wrenfield Mill, Building B)', () => {
     expect(memberOf(us, 'B-201').span).toBeCloseTo(24 * 12 * INCH, 6);
   });
 
-  it('H-103 is over-reinforced (ρ above ACI 318-19 balanced ρb) and has low ductility', () => {
+  it('H-103 is over-reinforced (ρ above ACI 318-19 balanced ρb): brittle, its ductility withheld with the reason', () => {
     const s = sectionOf(us, 'R20-heavy');
     const tension = s.bars.filter((b) => b.depth > 200);
     const area = tension.reduce((a, b) => a + layerArea(b), 0);
@@ -112,7 +113,12 @@ describe('the US demo project (Wrenfield Mill, Building B)', () => {
     const rhoB = ((0.85 * 0.85 * fc) / fy) * (0.003 / (0.003 + fy / 200000));
     expect(area / (width * d)).toBeGreaterThan(rhoB);
     const r = resultOf(usResults, 'H-103');
-    expect(r.ductility.displacementDuctility!).toBeLessThan(2);
+    expect(r.status).toBe('brittle');
+    // ACI 318-19 9.3.3.1: εt ≥ 0.004 for a nonprestressed beam
+    expect(r.brittle.map((b) => b.cause)).toEqual(expect.arrayContaining(['shear-before-flexure', 'below-strain-limit']));
+    expect(r.ductility.displacementDuctility).toBeNull();
+    expect(r.ductility.hinges.every((h) => h.rotationCapacity === null)).toBe(true);
+    expect(say(r.ductilityUnavailable!, 'us')).toMatch(/^not available: shear would be reached before the flexural mechanism: .*9\.3\.3\.1/);
     // Δu/Δ′y with Δ′y at first yield of the tension steel: the comparison does not depend on how the
     // nominal yield deflection is idealised (B-201's Grade 40 bars first yield at about 70 % of its
     // peak load, below the 75 % of Park's secant)
@@ -135,6 +141,43 @@ describe('the US demo project (Wrenfield Mill, Building B)', () => {
     const cracking = resultOf(usResults, 'L-102').loadDeflection.events.find((e) => e.kind === 'cracking')!;
     expect(cracking.loadFactor).toBeGreaterThan(1);
     expect(cracking.loadFactor).toBeLessThan(1.3);
+  });
+});
+
+describe('the demo statuses, re-read member by member', () => {
+  it('US: the conversion overloads two roof/floor beams, L-102 fails as it cracks, P-206 and H-103 are brittle', () => {
+    const status = Object.fromEntries(usResults.members.map((m) => [m.memberId, m.status]));
+    expect(status).toEqual({
+      'B-201': 'ok',
+      // as found: strength (φMn without strain hardening) and the long-term deflection
+      'B-204': 'check-fails',
+      // the green roof: strength 1.09 and the long-term deflection 2.3 × ℓ/480
+      'R-301': 'check-fails',
+      'R-305': 'ok',
+      'C-101': 'ok',
+      'F-205': 'ok',
+      // shear at the flexural mechanism above Vn: never OK
+      'P-206': 'brittle',
+      // strength fails; brittle as well (cracking moment above strength, less than minimum steel)
+      'L-102': 'check-fails',
+      // shear before flexure and εt below 0.004
+      'H-103': 'brittle',
+      'M-207': 'ok',
+    });
+    const l102 = resultOf(usResults, 'L-102');
+    expect(l102.brittle.map((b) => b.cause)).toEqual(['cracking-above-strength', 'below-minimum-steel']);
+    expect(l102.ductilityUnavailable).not.toBeNull();
+    expect(resultOf(usResults, 'P-206').brittle.map((b) => b.cause)).toEqual(['shear-before-flexure']);
+  });
+
+  it('SI: MB-1 fails its deflection check, MB-2 its hogging strength at the propped support', () => {
+    const status = Object.fromEntries(siResults.members.map((m) => [m.memberId, m.status]));
+    expect(status).toEqual({ 'MB-1': 'check-fails', 'MB-2': 'check-fails', 'MB-3': 'ok', 'WK-1': 'ok' });
+    const mb2 = resultOf(siResults, 'MB-2').strength!;
+    expect(mb2.direction).toBe('hogging');
+    expect(mb2.position).toBe(0);
+    // the top hanger bars of the span zone (2 Ø12 in a 1200 mm flange) stay uncracked in hogging: not brittle
+    expect(siResults.members.every((m) => m.brittle.length === 0)).toBe(true);
   });
 });
 

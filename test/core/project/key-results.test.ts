@@ -33,7 +33,7 @@ function result(overrides: Partial<MemberResult>): MemberResult {
     sections: [section('end', curve(300e6, 320e6, 6), curve(250e6, 260e6, 4)), section('mid', curve(200e6, 230e6, 12), curve(90e6, 95e6, 9))],
     loadDeflection: { pattern: '', controlPosition: 4000, points: [], events: [], status: '' },
     ductility: { firstYieldDeflection: 10, yieldDeflection: 12, ultimateDeflection: 60, displacementDuctility: 5, hinges: [], failureCause: '' },
-    distributions: [], service: null, strength: null, warnings: ['w'], errors: [],
+    distributions: [], service: null, strength: null, brittle: [], ductilityUnavailable: null, warnings: ['w'], errors: [],
     ...overrides,
   };
 }
@@ -72,7 +72,7 @@ describe('memberKeyResults', () => {
   it('gives null, never NaN or Infinity, for values that do not exist', () => {
     const r = result({
       sections: [], ductility: { firstYieldDeflection: null, yieldDeflection: null, ultimateDeflection: null, displacementDuctility: Number.NaN, hinges: [], failureCause: '' },
-      strength: { combination: '', saggingDemand: 0, saggingPosition: 0, hoggingDemand: 0, hoggingPosition: 0, saggingResistance: null, hoggingResistance: null, utilisation: Number.POSITIVE_INFINITY, pass: false, notes: '' },
+      strength: { combination: '', combinations: [], position: 0, sectionId: '', direction: 'sagging', demand: 0, resistance: null, saggingDemand: 0, saggingPosition: 0, hoggingDemand: 0, hoggingPosition: 0, saggingResistance: null, hoggingResistance: null, zones: [], utilisation: Number.POSITIVE_INFINITY, pass: false, notes: '' },
     });
     const k = memberKeyResults(r);
     expect(k.critical).toBeNull();

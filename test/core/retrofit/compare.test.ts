@@ -23,7 +23,7 @@ function variant(key: string, o: { peak: number; design: number; firstYield: num
       available: true, note: '', yieldDeflection: 10, ultimateDeflection: 10 * o.mu, displacementDuctility: o.mu,
       hinges: [{ position: 3000, direction: 'sagging', sectionId: `s~${key}`, length: 300, lengthMethod: 'priestley-2007', lengthFormula: '', shearSpan: 6000, rotationCapacity: o.theta, rotationAtUltimate: o.theta, curvatureDuctility: o.phiDuctility, location: 'midspan', order: 1, yieldLoadFactor: 1, plasticZone: [2800, 3200], localised: true, localisationLoadFactor: 1.1, rotationParts: { spread: 0, localised: o.theta, penetration: 0 } }],
     },
-    strength: { combination: '', utilisation: 0.8, pass: true, position: 3000, sectionId: `s~${key}`, direction: 'sagging', demand: 1, resistance: o.design, notes: '' },
+    strength: { combination: '', combinations: [], utilisation: 0.8, pass: true, position: 3000, sectionId: `s~${key}`, direction: 'sagging', demand: 1, resistance: o.design, saggingDemand: 1, saggingPosition: 3000, saggingResistance: o.design, hoggingDemand: 0, hoggingPosition: 0, hoggingResistance: null, zones: [], notes: '' },
     deflectionChecks: [], shear: null, warnings: [], errors: [],
   };
 }

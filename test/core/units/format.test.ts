@@ -92,6 +92,17 @@ describe('formatQuantity', () => {
     expect(formatQuantity('deflection', 12.7, 'US', { decimals: 2, withUnit: false })).toBe('0.50');
   });
 
+  it('shows a value that is zero within round-off as zero (issue 10 item 5): never 4.40e-14 kip·ft', () => {
+    // 4.40e-14 kip·ft = 5.97e-8 N·mm: what cancellation leaves of a support moment of order 1e9 N·mm
+    expect(formatQuantity('moment', 4.4e-14 * 1_355_817.948, 'US')).toBe('0 kip·ft');
+    expect(formatQuantity('moment', -3e-9, 'SI')).toBe('0 kN·m');
+    expect(formatQuantity('deflection', 1e-12, 'SI', { decimals: 1 })).toBe('0.0 mm');
+    expect(formatQuantity('force', -2e-9, 'US')).toBe('0 kip');
+    // … while the smallest values a beam assessment meets are kept: 1 N·mm, a cracking curvature of 1e-7 1/mm
+    expect(formatQuantity('moment', 1, 'SI', { unit: 'N.mm' })).toBe('1.000 N·mm');
+    expect(formatQuantity('curvature', 1e-7, 'SI', { unit: 'per-mm' })).toBe('0.0000001000 1/mm');
+  });
+
   it('prints the em dash alone for a non-finite value', () => {
     expect(formatQuantity('force', Number.NaN, 'SI')).toBe('—');
     expect(formatQuantity('force', Number.POSITIVE_INFINITY, 'US')).toBe('—');

@@ -1,0 +1,216 @@
+/**
+ * Is the member brittle? A member whose checks pass can still fail without warning; then it is
+ * never "ok" and its ductility and hinge rotations are not available. The findings, each for a
+ * section in one bending sense:
+ *  - shear before flexure: the shear at the flexural mechanism exceeds the nominal shear strength
+ *    (shear.ts) — for the member as a whole;
+ *  - cracking moment at or above the strength: on the section's moment–curvature curve the
+ *    cracking moment is not exceeded once the tension steel has yielded (or, when it never yields,
+ *    at the end of the curve): the section fails as it cracks. A rise right after cracking that only
+ *    tension stiffening carries does not count — it is lost as the cracks open;
+ *  - less than the minimum tension steel: ACI 318-19 9.6.1.2, As,min = max(0.25√f′c, 1.4)·bw·d/fy
+ *    (MPa), with bw the lesser of bf and 2bw for a statically determinate beam with its flange in
+ *    tension (from memory: the rule of ACI 318-11 10.5.2, kept in 9.6.1.2), unless the steel
+ *    provided is a third more than the analysis needs (9.6.1.3, taken as a utilisation of at most
+ *    0.75: then As,required ≤ 0.75·As as Mn grows less than in proportion to As); or EN 1992-1-1
+ *    9.2.1.1(1) Eq. (9.1N), As,min = max(0.26·fctm/fyk, 0.0013)·bt·d, bt the web width with the
+ *    flange in compression and the mean width of the tension zone (gross centroid to tension face)
+ *    with a flange in tension;
+ *  - strength before yield: the curve ends before the tension steel yields (over-reinforced, or an
+ *    FRP limit first), or at the code's design strength the tension steel has not yielded (ACI
+ *    318-19 21.2.2 compression-controlled, εt ≤ εty; EN 1992-1-1 εs < fyd/Es);
+ *  - under ACI 318-19, a net tensile strain below 0.004 at the design strength (9.3.3.1: the least
+ *    a nonprestressed beam may have) — the transition zone, little warning before failure.
+ *
+ * Where each applies: the code findings (εt) wherever the factored demand has that sense in the
+ * zone. The findings about cracking (the first three) where the section cracks in that sense before
+ * the member's ultimate: its moment in the member's ultimate state (the member engine's moment
+ * distribution at the largest load) reaches 95 % of its cracking moment. A section that stays
+ * uncracked in a sense — top hanger bars of a span zone, say — cannot fail as it cracks there
+ * (common practice, no source; 95 %: a margin for the engine's discretisation). Without a member
+ * ultimate state every zone with demand counts.
+ * Units: N, mm, N·mm, MPa.
+ */
+import { en1992MeanTensileStrength } from '../materials/code/en1992.ts';
+import type { CodeBasis } from '../materials/specs.ts';
+import type { SupportType } from '../member/definition.ts';
+import type { BeamResult } from '../member/results.ts';
+import type { BendingDirection, SectionModel } from '../section/model.ts';
+import { steelYieldStress, tensionSteel } from '../section/model.ts';
+import { faces } from '../section/state.ts';
+import { stripWidthAt } from '../section/width-profile.ts';
+import { phrase, q, type Text } from '../units/phrase.ts';
+import type { BrittleFinding, StrengthCheck } from './results.ts';
+import type { ShearResult } from './shear.ts';
+import { flexuralDesignResistance } from './resistance.ts';
+import { shearSectionGeometry, type ShearZone } from './shear-section.ts';
+
+/** ACI 318-19 9.3.3.1: least net tensile strain of a nonprestressed beam at its design strength. */
+export const ACI_BEAM_STRAIN_LIMIT = 0.004;
+
+/** Fraction of the cracking moment the section's ultimate-state moment must reach to count as cracked. */
+const CRACKED_FRACTION = 0.95;
+
+/** Minimum tension steel of a beam section, mm² (see the module comment). */
+export function minimumTensionSteel(code: CodeBasis, concreteStrength: number, steelYield: number, width: number, effectiveDepth: number): { area: number; clause: string } {
+  if (code === 'ACI 318-19') {
+    return { area: (Math.max(0.25 * Math.sqrt(concreteStrength), 1.4) * width * effectiveDepth) / steelYield, clause: 'ACI 318-19 9.6.1.2' };
+  }
+  return { area: Math.max((0.26 * en1992MeanTensileStrength(concreteStrength)) / steelYield, 0.0013) * width * effectiveDepth, clause: 'EN 1992-1-1 9.2.1.1(1), Eq. (9.1N)' };
+}
+
+/** Concrete width of the model at depth y, mm. */
+function widthAt(model: SectionModel, y: number): number {
+  let w = 0;
+  for (const part of model.concreteParts) for (const s of part.strips) if (y >= s.top && y <= s.bottom) w += Math.max(0, stripWidthAt(s, y));
+  return w;
+}
+
+/** Mean concrete width between depths a and b, mm (the area of that band over its height). */
+function meanWidth(model: SectionModel, a: number, b: number): number {
+  const lo = Math.min(a, b);
+  const hi = Math.max(a, b);
+  let area = 0;
+  for (const part of model.concreteParts) {
+    for (const s of part.strips) {
+      const top = Math.max(lo, s.top);
+      const bottom = Math.min(hi, s.bottom);
+      if (bottom > top) area += 0.5 * (stripWidthAt(s, top) + stripWidthAt(s, bottom)) * (bottom - top);
+    }
+  }
+  return hi > lo ? area / (hi - lo) : 0;
+}
+
+/** The width the minimum-steel rule uses (see the module comment), with how it was taken. */
+function minimumSteelWidth(code: CodeBasis, supports: SupportType, model: SectionModel, direction: BendingDirection, webWidth: number): { width: number; how: string } {
+  const face = faces(model, direction);
+  // Just inside the tension face: the width of the flange when the flange is in tension.
+  const inside = face.tension + (direction === 'sagging' ? -1e-6 : 1e-6) * model.height;
+  const flange = widthAt(model, inside);
+  if (!(flange > webWidth * (1 + 1e-9))) return { width: webWidth, how: 'bw' };
+  if (code === 'ACI 318-19') {
+    const determinate = supports === 'simply-supported' || supports === 'cantilever';
+    return determinate ? { width: Math.min(flange, 2 * webWidth), how: 'lesser of bf and 2bw, flange in tension' } : { width: webWidth, how: 'bw' };
+  }
+  return { width: meanWidth(model, model.centroidDepth, face.tension), how: 'bt, mean width of the tension zone' };
+}
+
+/** Where the section is used and how hard: the largest demand of the sense in the zone and its moment at the member's ultimate. */
+interface Use {
+  /** Largest factored utilisation of the sense in the zones using the section (strength check). */
+  readonly utilisation: number;
+  /** Largest moment of the sense in those zones in the member's ultimate state, N·mm (null: not known). */
+  readonly ultimateMoment: number | null;
+}
+
+/** The findings for one section in one sense (empty when it is ductile). */
+function sectionFindings(codeBasis: CodeBasis, supports: SupportType, zone: ShearZone, direction: BendingDirection, use: Use): BrittleFinding[] {
+  const a = zone.analysis;
+  const model = a.model;
+  if (!model) return [];
+  const curve = a.curves[direction];
+  const out: BrittleFinding[] = [];
+  const at = phrase`section "${a.sectionName}", ${direction}`;
+  const find = (cause: BrittleFinding['cause'], text: Text) => out.push({ cause, sectionId: a.sectionId, direction, text: phrase`${at}: ${text}` });
+  const kp = curve?.keyPoints;
+  const cracking = kp?.cracking;
+  const cracks = use.ultimateMoment === null || !cracking || use.ultimateMoment >= CRACKED_FRACTION * cracking.moment;
+
+  // Findings of the section's own curve.
+  if (curve && kp && curve.status.kind === 'complete' && cracks) {
+    const end = kp.ultimate ?? curve.points[curve.points.length - 1];
+    const yields = kp.firstYield !== undefined && end !== undefined && kp.firstYield.curvature <= end.curvature * (1 + 1e-9);
+    if (cracking && end) {
+      const from = yields ? kp.firstYield!.curvature : end.curvature;
+      const after = curve.points.filter((p) => p.curvature >= from * (1 - 1e-9)).reduce((m, p) => Math.max(m, p.moment), yields ? kp.firstYield!.moment : end.moment);
+      if (!(after > cracking.moment)) {
+        find('cracking-above-strength', phrase`the cracking moment ${q('moment', cracking.moment)} is at or above what the section carries once ${yields ? 'its tension steel yields' : 'it is cracked'}, ${q('moment', after)}: the section fails as it cracks`);
+      }
+    }
+    if (!yields && out.length === 0) {
+      const cause = curve.status.ultimateCause;
+      const frp = cause === 'frp-debonding' || cause === 'frp-rupture';
+      find('no-yield-before-strength', phrase`the section reaches its ultimate state (${frp ? 'FRP limit' : cause.replace(/-/g, ' ')}) before its tension steel yields${frp ? '' : ' (over-reinforced)'}`);
+    }
+  }
+
+  // Findings of the code's design state (wherever the sense carries demand).
+  const code = flexuralDesignResistance(codeBasis, a, direction);
+  const epsT = code.netTensileStrain;
+  const epsY = code.steelYieldStrain;
+  if (epsT !== null && epsY !== null && !out.some((f) => f.cause === 'no-yield-before-strength')) {
+    const permille = (x: number) => `${(x * 1000).toFixed(2)} ‰`;
+    if (epsT <= epsY) {
+      const clause = codeBasis === 'ACI 318-19' ? 'compression-controlled, ACI 318-19 21.2.2' : 'EN 1992-1-1 3.2.7, εyd = fyd/Es';
+      find('no-yield-before-strength', `at the design strength the tension steel has not yielded (ε = ${permille(epsT)} against ${permille(epsY)}; ${clause}): over-reinforced`);
+    } else if (codeBasis === 'ACI 318-19' && epsT < ACI_BEAM_STRAIN_LIMIT) {
+      find('below-strain-limit', `at the design strength the net tensile strain εt = ${permille(epsT)} is below the 4.00 ‰ ACI 318-19 9.3.3.1 requires of a beam: little warning before failure`);
+    }
+  }
+
+  // Minimum tension steel.
+  const steel = tensionSteel(model, direction);
+  const main = steel.reduce<(typeof steel)[number] | undefined>((m, e) => (!m || e.area > m.area ? e : m), undefined);
+  const geometry = shearSectionGeometry(model, direction);
+  const fy = main ? steelYieldStress(main) : undefined;
+  if (cracks && geometry.hasTensionBars && fy !== undefined) {
+    const width = minimumSteelWidth(codeBasis, supports, model, direction, geometry.webWidth);
+    const min = minimumTensionSteel(codeBasis, zone.concrete.strength, fy, width.width, geometry.effectiveDepth);
+    const exempt = codeBasis === 'ACI 318-19' && use.utilisation <= 0.75;
+    if (geometry.tensionBarArea < min.area * (1 - 1e-9) && !exempt) {
+      find('below-minimum-steel', phrase`tension steel ${q('area', geometry.tensionBarArea)} is less than the minimum ${q('area', min.area)} (${min.clause}; ${width.how} = ${q('sectionLength', width.width)}, d = ${q('sectionLength', geometry.effectiveDepth)})`);
+    }
+  }
+  return out;
+}
+
+/** The member engine's moment distribution in its ultimate state (the largest load), or null. */
+function ultimateDistribution(beam: BeamResult | null): BeamResult['distributions'][number] | null {
+  if (!beam) return null;
+  return beam.distributions.reduce<BeamResult['distributions'][number] | null>((best, d) => (d.moment.length > 0 && (!best || d.loadFactor > best.loadFactor) ? d : best), null);
+}
+
+/**
+ * Why a member is brittle (see the module comment); empty when it is not.
+ * @param zones the member's zones with their sections, in zone order
+ * @param strength the flexural check, whose zones tell which senses carry demand
+ * @param beam the member engine's result (its ultimate moment distribution), or null
+ */
+export function brittleFindings(code: CodeBasis, supports: SupportType, zones: readonly ShearZone[], strength: StrengthCheck | null, shear: ShearResult | null, beam: BeamResult | null): BrittleFinding[] {
+  const out: BrittleFinding[] = [];
+  if (shear?.governs === 'shear' && shear.mechanism) {
+    const g = shear.mechanism.governing;
+    out.push({
+      cause: 'shear-before-flexure',
+      sectionId: null,
+      direction: null,
+      text: phrase`shear would be reached before the flexural mechanism: ${q('force', g.shear)} at ${q('spanLength', g.position)} against ${code === 'ACI 318-19' ? 'Vn' : 'VRk'} = ${q('force', g.nominal)}`,
+    });
+  }
+  if (!strength) return out;
+  const ultimate = ultimateDistribution(beam);
+  const ultimateMoment = (sectionId: string, direction: BendingDirection): number | null => {
+    if (!ultimate) return null;
+    const sign = direction === 'sagging' ? 1 : -1;
+    let m = 0;
+    ultimate.x.forEach((x, i) => {
+      if (zones.some((z) => z.analysis.sectionId === sectionId && x >= z.from && x <= z.to)) m = Math.max(m, sign * ultimate.moment[i]!);
+    });
+    return m;
+  };
+  const seen = new Set<string>();
+  strength.zones.forEach((z, i) => {
+    const zone = zones[i];
+    if (!zone) return;
+    for (const direction of ['sagging', 'hogging'] as const) {
+      if (!z[direction]) continue;
+      const id = zone.analysis.sectionId;
+      const key = `${id}|${direction}`;
+      if (seen.has(key)) continue;
+      seen.add(key);
+      const utilisation = Math.max(...strength.zones.map((x, k) => (zones[k]?.analysis.sectionId === id ? x[direction]?.utilisation ?? 0 : 0)));
+      out.push(...sectionFindings(code, supports, zone, direction, { utilisation, ultimateMoment: ultimateMoment(id, direction) }));
+    }
+  });
+  return out;
+}

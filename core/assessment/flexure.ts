@@ -1,0 +1,167 @@
+/**
+ * The flexural strength check — the only one: the design beam, the beam as found, every
+ * strengthened beam and the ACI 440.2R loss-of-strengthening check all come here.
+ *
+ * Demand: for each factored combination, the moment of an elastic analysis (gross section of each
+ * zone at the code modulus, no redistribution; demand.ts) at every station: the equal segments of
+ * the span, both sides of every zone boundary, every point load and load edge, and every point of
+ * zero shear (where the moment between stations peaks), so the check does not depend on the station
+ * count. Resistance: the design resistance of the section at that station in the sense of the
+ * moment (resistance.ts: φMn or M_Rd by the code's own assumptions, ψf on FRP). The check passes
+ * when demand ≤ resistance everywhere, for every combination; the governing point is the largest
+ * utilisation. A demand where the section has no tension reinforcement on that side is reported as
+ * utilisation 99.99 (never Infinity).
+ *
+ * A continuous beam changes the demand (support moments of more spans) and nothing else here.
+ * Units: N, mm, N·mm.
+ */
+import type { CodeBasis } from '../materials/specs.ts';
+import type { BeamDefinition } from '../member/definition.ts';
+import { memberForcesAt } from '../member/statics.ts';
+import { zoneIndexAt } from '../member/zones.ts';
+import { brentRoot } from '../numeric/roots.ts';
+import type { SectionAnalysis } from '../section/analyze.ts';
+import type { BendingDirection } from '../section/model.ts';
+import { joinTexts, phrase, uniqueTexts, type Text } from '../units/phrase.ts';
+import { combinationText, combinedLoads, memberLoadSets, type LoadCombination } from './combinations.ts';
+import { elasticSupportMoments, type ElasticZone } from './demand.ts';
+import { flexuralDesignResistance, type FlexuralResistance } from './resistance.ts';
+import type { StrengthCheck, StrengthPoint, StrengthZone } from './results.ts';
+
+/** A zone of the member with its section's analysis. */
+export interface FlexureZone {
+  readonly from: number;
+  readonly to: number;
+  readonly analysis: SectionAnalysis;
+}
+
+export interface FlexureInput {
+  readonly code: CodeBasis;
+  readonly member: BeamDefinition;
+  readonly zones: readonly FlexureZone[];
+  readonly combinations: readonly LoadCombination[];
+  /** Equal segments along the span (the project setting `stations`). */
+  readonly segments: number;
+}
+
+/** Utilisation reported for a demand where there is no resistance. */
+export const NO_RESISTANCE_UTILISATION = 99.99;
+
+/** Demands below this fraction of the largest |M| on the member are round-off: zero. */
+const ROUND_OFF = 1e-9;
+
+/**
+ * The stations where the moment of `loads` can peak or jump: the equal segments, zone boundaries,
+ * load positions and edges, and the points of zero shear between them.
+ */
+function stationsFor(member: BeamDefinition, zones: readonly FlexureZone[], forces: (x: number, side: 'left' | 'right') => { moment: number; shear: number }, segments: number): number[] {
+  const span = member.span;
+  const set = new Set<number>();
+  for (let i = 0; i <= segments; i++) set.add((span * i) / segments);
+  for (const z of zones) {
+    set.add(z.from);
+    set.add(z.to);
+  }
+  for (const l of member.loads) {
+    if (l.kind === 'point') set.add(l.position);
+    else {
+      set.add(l.from ?? 0);
+      set.add(l.to ?? span);
+    }
+  }
+  const base = [...set].filter((x) => x >= 0 && x <= span).sort((a, b) => a - b);
+  const out = [...base];
+  for (let i = 0; i + 1 < base.length; i++) {
+    const a = base[i]!;
+    const b = base[i + 1]!;
+    // Within (a, b) no load starts, ends or acts as a point: the shear is continuous there.
+    const va = forces(a, 'right').shear;
+    const vb = forces(b, 'left').shear;
+    if (va * vb < 0) {
+      const root = brentRoot((x) => forces(x, 'right').shear, a, b, va, vb, { xTolerance: 1e-9 * span });
+      out.push(root.x);
+    }
+  }
+  return out.sort((a, b) => a - b);
+}
+
+/**
+ * The flexural strength check of a beam (see the module comment). Null when a zone has no section
+ * model (input errors are reported elsewhere).
+ */
+export function flexuralCheck(input: FlexureInput): StrengthCheck | null {
+  const { code, member, zones, combinations, segments } = input;
+  if (zones.length === 0 || combinations.length === 0 || zones.some((z) => !z.analysis.model || !z.analysis.elastic)) return null;
+  const span = member.span;
+  const sets = memberLoadSets(member, zones.map((z) => z.analysis.selfWeight));
+  const elasticZones: ElasticZone[] = zones.map((z) => ({ from: z.from, to: z.to, sectionId: z.analysis.sectionId, stiffness: z.analysis.codeModulus * z.analysis.elastic!.grossInertia }));
+  const resistance = zones.map((z) => ({ sagging: flexuralDesignResistance(code, z.analysis, 'sagging'), hogging: flexuralDesignResistance(code, z.analysis, 'hogging') }));
+
+  // Moments of every combination at its stations.
+  const samples: { combination: string; x: number; side: 'left' | 'right'; moment: number }[] = [];
+  const perCombination = combinations.map((c) => {
+    const loads = combinedLoads(sets, c.factors);
+    const ends = elasticSupportMoments(member, elasticZones, loads, segments);
+    const forces = (x: number, side: 'left' | 'right') => memberForcesAt(member.supports, span, loads, ends, x, side);
+    const name = combinationText(c);
+    for (const x of stationsFor(member, zones, forces, segments)) {
+      for (const side of ['left', 'right'] as const) samples.push({ combination: name, x, side, moment: forces(x, side).moment });
+    }
+    return name;
+  });
+  const scale = samples.reduce((m, s) => Math.max(m, Math.abs(s.moment)), 0);
+  const zero = ROUND_OFF * scale;
+
+  type Worst = StrengthPoint & { zone: number; direction: BendingDirection; r: FlexuralResistance };
+  const worstOf = new Map<string, Worst>();
+  const byCombination = new Map<string, number>(perCombination.map((n) => [n, 0]));
+  let governing: Worst | null = null;
+  const consider = (key: string, w: Worst) => {
+    const known = worstOf.get(key);
+    if (!known || w.utilisation > known.utilisation) worstOf.set(key, w);
+  };
+  for (const s of samples) {
+    const zone = zoneIndexAt(zones, s.x, s.side);
+    const direction: BendingDirection = s.moment >= 0 ? 'sagging' : 'hogging';
+    const demand = Math.abs(s.moment) <= zero ? 0 : Math.abs(s.moment);
+    const r = resistance[zone]![direction];
+    const utilisation = demand === 0 ? 0 : r.value !== null && r.value > 0 ? Math.min(demand / r.value, NO_RESISTANCE_UTILISATION) : NO_RESISTANCE_UTILISATION;
+    const point: Worst = { position: s.x, demand, resistance: r.value, utilisation, combination: s.combination, zone, direction, r };
+    consider(`${zone}|${direction}`, point);
+    consider(`member|${direction}`, point);
+    byCombination.set(s.combination, Math.max(byCombination.get(s.combination)!, utilisation));
+    if (!governing || utilisation > governing.utilisation) governing = point;
+  }
+  const g = governing!;
+  const strip = (w: Worst | undefined): StrengthPoint | null => (w && w.demand > 0 ? { position: w.position, demand: w.demand, resistance: w.resistance, utilisation: w.utilisation, combination: w.combination } : null);
+  const zoneResults: StrengthZone[] = zones.map((z, i) => ({ from: z.from, to: z.to, sectionId: z.analysis.sectionId, sagging: strip(worstOf.get(`${i}|sagging`)), hogging: strip(worstOf.get(`${i}|hogging`)) }));
+  const sense = (d: BendingDirection) => worstOf.get(`member|${d}`);
+  const sag = sense('sagging');
+  const hog = sense('hogging');
+  const noteOf = (w: Worst | undefined): Text[] => {
+    if (!w || w.demand === 0) return [];
+    const text: Text[] = [phrase`${zones[w.zone]!.analysis.sectionName}, ${w.direction}: ${w.r.note}`];
+    if (w.resistance === null) text.push(`${w.direction === 'sagging' ? 'Sagging' : 'Hogging'} moment demand where the section has no tension reinforcement on that side`);
+    return text;
+  };
+  const notes = uniqueTexts([...noteOf(g), ...noteOf(sag), ...noteOf(hog)]);
+  return {
+    combination: g.combination,
+    combinations: perCombination.map((c) => ({ combination: c, utilisation: byCombination.get(c)! })),
+    utilisation: g.utilisation,
+    pass: g.utilisation <= 1,
+    position: g.position,
+    sectionId: zones[g.zone]!.analysis.sectionId,
+    direction: g.direction,
+    demand: g.demand,
+    resistance: g.resistance,
+    saggingDemand: sag?.demand ?? 0,
+    saggingPosition: sag?.position ?? 0,
+    saggingResistance: sag?.resistance ?? resistance[0]!.sagging.value,
+    hoggingDemand: hog?.demand ?? 0,
+    hoggingPosition: hog?.position ?? 0,
+    hoggingResistance: hog?.resistance ?? resistance[0]!.hogging.value,
+    zones: zoneResults,
+    notes: notes.length > 0 ? phrase`${joinTexts(notes, '; ')}.` : '',
+  };
+}

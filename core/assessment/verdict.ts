@@ -1,0 +1,100 @@
+/**
+ * The verdict of a beam variant: its status (results.ts MEMBER_STATUSES) and the one-sentence
+ * governing mode, from the member engine's result and the checks — flexural strength (flexure.ts),
+ * deflections (core/member/service.ts), shear (shear.ts) and brittleness (brittle.ts). A brittle
+ * member's ductility and hinge rotations are withdrawn (null) with the reason.
+ * Units: N, mm, N·mm, rad.
+ */
+import type { Problem } from '../diagnostics.ts';
+import type { BeamAnalysis } from '../member/analyze.ts';
+import type { BeamDefinition } from '../member/definition.ts';
+import type { BeamResult } from '../member/results.ts';
+import { capitalised, joinTexts, lowerFirst, phrase, q, withoutFinalStop, type Text } from '../units/phrase.ts';
+import type { BrittleFinding, MemberResult, MemberStatus, StrengthCheck } from './results.ts';
+import type { ShearResult } from './shear.ts';
+
+/** What the verdict is built from. */
+export interface VerdictInput {
+  readonly member: BeamDefinition;
+  readonly beam: BeamAnalysis;
+  readonly strength: StrengthCheck | null;
+  readonly shear: ShearResult | null;
+  readonly brittle: readonly BrittleFinding[];
+  /** Checks that failed with an internal error: the verdict is withheld. */
+  readonly defects?: readonly Problem[];
+}
+
+/** Status from the checks: a failing check before brittleness, brittleness before OK. */
+export function memberStatus(converged: boolean, result: BeamResult, strength: StrengthCheck | null, shear: ShearResult | null, brittle: readonly BrittleFinding[]): MemberStatus {
+  if (!converged) return 'not-converged';
+  const serviceFails = (result.service?.checks ?? []).some((c) => !c.pass);
+  const strengthFails = strength ? !strength.pass : false;
+  const shearFails = shear?.factored ? !shear.factored.pass : false;
+  if (serviceFails || strengthFails || shearFails) return 'check-fails';
+  return brittle.length > 0 ? 'brittle' : 'ok';
+}
+
+/** The ductility of a beam with its capacities withdrawn (null) when it is brittle. */
+function withdrawn(ductility: BeamResult['ductility']): BeamResult['ductility'] {
+  return {
+    ...ductility,
+    displacementDuctility: null,
+    hinges: ductility.hinges.map((h) => ({ ...h, rotationCapacity: null, rotationAtUltimate: null, curvatureDuctility: null })),
+  };
+}
+
+/** The strength clause: passes or fails, the utilisation, where, under which combination. */
+export function strengthClause(strength: StrengthCheck): Text {
+  return phrase`strength check ${strength.pass ? 'passes' : 'fails'} (utilisation ${strength.utilisation.toFixed(2)} at ${q('spanLength', strength.position)}, ${strength.direction}, under ${strength.combination})`;
+}
+
+/** The verdict of a variant: the member result with status, governing mode, brittleness and ductility. */
+export function memberVerdict(input: VerdictInput): MemberResult {
+  const { member, beam, strength, shear, brittle } = input;
+  const defects = input.defects ?? [];
+  const result = beam.result;
+  const brittleMember = brittle.length > 0;
+  const status = memberStatus(beam.converged && defects.length === 0, result, strength, shear, brittle);
+  const parts: Text[] = [];
+  const capacity = beam.capacity;
+  const mu = result.ductility.displacementDuctility;
+  if (capacity && capacity.ultimateLoadFactor !== null) {
+    const pattern = member.capacity.pattern === 'proportional' ? 'service load' : 'live load (dead load held)';
+    parts.push(`Flexure: ${capacity.failureCause} at ${capacity.ultimateLoadFactor.toFixed(2)} × the ${pattern}${mu && !brittleMember ? `, displacement ductility μΔ = ${mu.toFixed(1)}` : ''}`);
+  } else if (capacity) {
+    parts.push(`Flexure: ${capacity.status}`);
+  } else {
+    parts.push(`Flexure: ${result.loadDeflection.status}`);
+  }
+  if (strength) parts.push(strengthClause(strength));
+  const checks = result.service?.checks ?? [];
+  const serviceFails = checks.filter((c) => !c.pass);
+  if (serviceFails.length > 0) {
+    const worst = serviceFails.reduce((a, b) => (b.utilisation > a.utilisation ? b : a));
+    parts.push(`deflection check fails: ${worst.utilisation.toFixed(2)} × ℓ/${worst.ratio} (${worst.quantity})`);
+  } else if (checks.length > 0) {
+    parts.push('deflection checks pass');
+  }
+  let sentence: Text = joinTexts(parts, '; ');
+  if (shear) sentence = shear.governs === 'shear' ? phrase`${capitalised(shear.sentence)}; flexure (not reached first): ${lowerFirst(sentence)}` : phrase`${sentence}; ${shear.sentence}`;
+  const flexural = brittle.filter((b) => b.cause !== 'shear-before-flexure');
+  if (flexural.length > 0) sentence = phrase`${sentence}; brittle: ${joinTexts(flexural.map((b) => b.text), '; ')}`;
+  const unavailable: Text | null = brittleMember ? phrase`not available: ${joinTexts(brittle.map((b) => b.text), '; ')}` : null;
+  return {
+    ...result,
+    ductility: brittleMember ? withdrawn(result.ductility) : result.ductility,
+    status,
+    governingMode: phrase`${withoutFinalStop(sentence)}.`,
+    strength,
+    ...(shear ? { shear } : {}),
+    brittle,
+    ductilityUnavailable: unavailable,
+    warnings: [...result.warnings, ...(shear?.warnings ?? [])],
+    errors: [...result.errors, ...defects],
+  };
+}
+
+/** A sentence with a prefix naming the variant, e.g. `As found: `. */
+export function prefixed(text: Text, prefix: string): Text {
+  return prefix === '' ? text : phrase`${prefix}${text}`;
+}

@@ -176,10 +176,23 @@ function polygonPoints(section: SectionDefinition): number {
   return section.shape.outline.length + (section.shape.voids ?? []).reduce((s, v) => s + v.length, 0);
 }
 
-function materialReference(out: Diagnostic[], path: string, id: string, kind: MaterialSpec['kind'], byId: ReadonlyMap<string, MaterialSpec>, role: string): void {
+/**
+ * Ids of the items of a list that are there but failed their structural check: their own errors are
+ * the root cause, so a reference to one of them is not reported again (one bad value in a material
+ * would otherwise add a "no material with id" error for every section using it).
+ */
+function brokenIds(raw: readonly unknown[], sound: readonly { readonly value: { readonly id: string } }[]): Set<string> {
+  const good = new Set(sound.map((s) => s.value.id));
+  return new Set(raw.flatMap((item) => (isObject(item) && typeof item.id === 'string' && !good.has(item.id) ? [item.id] : [])));
+}
+
+/** Checks a reference to a material; false when the section cannot be built with it (reported here, or at the material). */
+function materialReference(out: Diagnostic[], path: string, id: string, kind: MaterialSpec['kind'], byId: ReadonlyMap<string, MaterialSpec>, broken: ReadonlySet<string>, role: string): boolean {
   const found = byId.get(id);
+  if (!found && broken.has(id)) return false;
   if (!found) out.push({ code: 'unknown-reference', path, severity: 'error', message: `no material with id "${id}" in the project's material list (the ${role} must be a ${kind} material)` });
   else if (found.kind !== kind) out.push({ code: 'unknown-reference', path, severity: 'error', message: `"${id}" is a ${found.kind} material; the ${role} must be a ${kind} material` });
+  return found?.kind === kind;
 }
 
 /**
@@ -324,6 +337,7 @@ export function validateProjectData(data: unknown): { project: Project | null; d
   const materialSpecs = materials.map((m) => m.value);
   const materialById = new Map<string, MaterialSpec>();
   for (const m of materialSpecs) if (!materialById.has(m.id)) materialById.set(m.id, m);
+  const brokenMaterials = brokenIds(listOf('materials'), materials);
   for (const { value: spec, index } of materials) {
     const path = itemPath('materials', index, spec);
     if (spec.kind === 'concrete') semantic.push(...guarded(path, () => validateConcreteSpec(spec as ConcreteSpec, path, code ? { code, ...(ultimateStrain ? { ultimateStrain } : {}) } : {})));
@@ -334,10 +348,11 @@ export function validateProjectData(data: unknown): { project: Project | null; d
   // Sections: references by kind, then the section builder (dimensions, bars inside the concrete, hoops).
   for (const { value: section, index } of sections) {
     const path = itemPath('sections', index, section);
-    const before = semantic.length;
-    materialReference(semantic, `${path}.concreteId`, section.concreteId, 'concrete', materialById, 'section concrete');
-    section.bars.forEach((bar, i) => materialReference(semantic, `${path}.bars[${i}].steelId`, bar.steelId, 'steel', materialById, 'bar steel'));
-    if (section.hoops) materialReference(semantic, `${path}.hoops.steelId`, section.hoops.steelId, 'steel', materialById, 'hoop steel');
+    const references = [
+      materialReference(semantic, `${path}.concreteId`, section.concreteId, 'concrete', materialById, brokenMaterials, 'section concrete'),
+      ...section.bars.map((bar, i) => materialReference(semantic, `${path}.bars[${i}].steelId`, bar.steelId, 'steel', materialById, brokenMaterials, 'bar steel')),
+      ...(section.hoops ? [materialReference(semantic, `${path}.hoops.steelId`, section.hoops.steelId, 'steel', materialById, brokenMaterials, 'hoop steel')] : []),
+    ];
     if (section.hoops?.confineCore && section.hoops.closedAndAnchored !== true) {
       semantic.push({ code: 'inconsistent', path: `${path}.hoops.closedAndAnchored`, severity: 'warning',
         message: `the core is analysed unconfined: a confined core needs the hoops confirmed closed and anchored in the core (135° hooks or welded)${section.hoops.closedAndAnchored === undefined ? '; projects saved before this confirmation existed modelled the core confined on "confine core" alone' : ''}` });
@@ -350,7 +365,7 @@ export function validateProjectData(data: unknown): { project: Project | null; d
     // The section builder uses bar counts before it checks them (clearSpacings of a confined core):
     // a count of 1e9 would exhaust memory, so the bars' numbers are checked here first.
     const barsOk = barLayerPrecheck(semantic, section, path);
-    const referencesOk = semantic.length === before;
+    const referencesOk = references.every(Boolean);
     if (code && referencesOk && barsOk) semantic.push(...guarded(path, () => sectionBuildDiagnostics(section, path, materialSpecs, code, { ...(ultimateStrain ? { concreteUltimateStrain: ultimateStrain } : {}) })));
     else semantic.push(...guarded(path, () => validateShape(section.shape, `${path}.shape`))); // the shape is still checked
     semantic.push(...guarded(path, () => sectionGeometryDiagnostics(section, path, code, Boolean(code && referencesOk && barsOk))));
@@ -359,7 +374,8 @@ export function validateProjectData(data: unknown): { project: Project | null; d
   // Members: the engine's member checks, the as-found condition and strengthening schemes
   // (core/retrofit/validate.ts, against the items that are structurally sound), then the limit cases
   // against the code basis.
-  const sectionIds = new Set(sections.map((s) => s.value.id));
+  // A section with errors of its own is known to the members that use it (its errors are the root cause).
+  const sectionIds = new Set([...sections.map((s) => s.value.id), ...brokenIds(listOf('sections'), sections)]);
   const soundProject = { ...(data as unknown as Project), materials: materialSpecs, sections: sections.map((s) => s.value), members: members.map((m) => m.value) };
   for (const { value: member, index } of members) {
     const path = itemPath('members', index, member);

@@ -162,6 +162,18 @@ describe('section checks through the section builder and the material resolver',
     expect(d[0]!.message).toMatch(/^confinement of the core \(longitudinalRatio\): longitudinal steel ratio of the core ρcc must be at least 0 and at most 0\.08/);
   });
 
+  it('reports one bad value of a material once, not again at every section that uses it (issue 15 item 10)', () => {
+    const p = editable();
+    p.materials[2].yieldStress = 'five hundred'; // b500: every section's bars and hoops use it
+    const errors = validateProject(p).filter((d) => d.severity === 'error');
+    expect(errors.map((d) => d.path)).toEqual(['materials[2] "b500".yieldStress']);
+    // the same for a section with a bad value: the members using it are not told it does not exist
+    const q = editable();
+    q.sections[0].shape.width = 'wide';
+    const sectionErrors = validateProject(q).filter((d) => d.severity === 'error');
+    expect(sectionErrors.map((d) => d.path)).toEqual(['sections[0] "300 × 600".shape.width']);
+  });
+
   it('still checks the shape when a reference is wrong', () => {
     const p = editable();
     p.sections[0].concreteId = 'nope';

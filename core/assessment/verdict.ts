@@ -9,6 +9,7 @@ import type { Problem } from '../diagnostics.ts';
 import type { BeamAnalysis } from '../member/analyze.ts';
 import type { BeamDefinition } from '../member/definition.ts';
 import type { BeamResult } from '../member/results.ts';
+import { OUTSIDE_SMALL_DEFLECTION, serviceOutsideRange } from '../member/small-deflection.ts';
 import { capitalised, joinTexts, lowerFirst, phrase, q, withoutFinalStop, type Text } from '../units/phrase.ts';
 import type { BrittleFinding, MemberResult, MemberStatus, StrengthCheck } from './results.ts';
 import type { ShearResult } from './shear.ts';
@@ -71,7 +72,7 @@ export function memberVerdict(input: VerdictInput): MemberResult {
   const serviceFails = checks.filter((c) => !c.pass);
   if (serviceFails.length > 0) {
     const worst = serviceFails.reduce((a, b) => (b.utilisation > a.utilisation ? b : a));
-    parts.push(`deflection check fails: ${worst.utilisation.toFixed(2)} × ℓ/${worst.ratio} (${worst.quantity})`);
+    parts.push(serviceOutsideRange(result.service, result.span) ? `deflection checks fail: ${OUTSIDE_SMALL_DEFLECTION}` : `deflection check fails: ${worst.utilisation.toFixed(2)} × ℓ/${worst.ratio} (${worst.quantity})`);
   } else if (checks.length > 0) {
     parts.push('deflection checks pass');
   }

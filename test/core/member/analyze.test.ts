@@ -118,7 +118,7 @@ describe('discretisation', () => {
     'displacement ductility': r.ductility.displacementDuctility,
     'ultimate load factor': r.loadDeflection.events.find((e) => e.kind === 'ultimate')?.loadFactor ?? null,
     'peak load factor': Math.max(...r.loadDeflection.points.map((p) => p.loadFactor)),
-    'plastic rotation at ultimate': r.ductility.hinges.reduce((s, h) => Math.max(s, h.rotationAtUltimate), 0),
+    'plastic rotation at ultimate': r.ductility.hinges.reduce((s, h) => Math.max(s, h.rotationAtUltimate ?? 0), 0),
   });
   const at = (stations: number) => analyzeProject({ ...smallProject('ACI 318-19', cases), settings: { momentDropFraction: 0.8, bilinearMethod: 'priestley-2007', stations } }).members;
   const reference = at(400);

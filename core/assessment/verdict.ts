@@ -27,11 +27,14 @@ export interface VerdictInput {
 
 /** Status from the checks: a failing check before brittleness, brittleness before OK. */
 export function memberStatus(converged: boolean, result: BeamResult, strength: StrengthCheck | null, shear: ShearResult | null, brittle: readonly BrittleFinding[]): MemberStatus {
-  if (!converged) return 'not-converged';
-  const serviceFails = (result.service?.checks ?? []).some((c) => !c.pass);
+  // The code checks of strength and shear do not depend on the behaviour solver: a failing one
+  // is a failed check even where the load–deflection analysis did not converge.
   const strengthFails = strength ? !strength.pass : false;
   const shearFails = shear?.factored ? !shear.factored.pass : false;
-  if (serviceFails || strengthFails || shearFails) return 'check-fails';
+  if (strengthFails || shearFails) return 'check-fails';
+  if (!converged) return 'not-converged';
+  const serviceFails = (result.service?.checks ?? []).some((c) => !c.pass);
+  if (serviceFails) return 'check-fails';
   return brittle.length > 0 ? 'brittle' : 'ok';
 }
 

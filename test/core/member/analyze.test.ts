@@ -130,6 +130,15 @@ describe('discretisation', () => {
         const b = key(reference[i]!);
         for (const [name, value] of Object.entries(a)) {
           const ref = b[name as keyof typeof b];
+          // A brittle member (here the cantilever: hogging steel below ACI 318-19 9.6.1.2's minimum) has its
+          // ductility withdrawn (null) at every station count; everything else must be there.
+          if (r.status === 'brittle' || r.brittle.length > 0) {
+            if (value === null || ref === null || name === 'plastic rotation at ultimate') {
+              // (withdrawn hinge rotations read as 0 in the maximum above)
+              expect(value, `${cases[i]!.id}: ${name}`).toBe(ref);
+              continue;
+            }
+          }
           expect(value, `${cases[i]!.id}: ${name}`).not.toBeNull();
           expect(Math.abs(value! / ref! - 1), `${cases[i]!.id}: ${name} ${value} vs ${ref}`).toBeLessThan(0.01);
         }

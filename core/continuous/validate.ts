@@ -4,7 +4,8 @@
  * value and the allowed range; every problem is reported, not only the first.
  */
 import { checkNumber, diagnostic, type Diagnostic } from '../diagnostics.ts';
-import { DEFLECTION_LIMIT_CASES, HINGE_LENGTH_METHODS, LOAD_CASES, LOAD_PATTERNS } from '../member/definition.ts';
+import { LOAD_CASES } from '../member/definition.ts';
+import { checkHingeSettings, checkServiceSettings } from '../member/validate.ts';
 import { phrase, q, type Text } from '../units/phrase.ts';
 import { COLUMN_FAR_ENDS, CONTINUOUS_LIMITS, CONTINUOUS_SUPPORT_KINDS, type ContinuousBeamDefinition } from './definition.ts';
 import { layoutOf, partIndex } from './layout.ts';
@@ -109,22 +110,11 @@ export function validateContinuousBeam(beam: ContinuousBeamDefinition, path: str
     }
   });
 
-  const s = beam.service;
-  if (!s) error('required', 'service', 'service settings are required');
-  else {
-    checkNumber(out, `${path}.service.sustainedLiveFraction`, s.sustainedLiveFraction, { min: 0, max: 1 });
-    checkNumber(out, `${path}.service.durationMonths`, s.durationMonths, { min: 0, max: 1200, unit: 'months' });
-    (s.limitCases ?? []).forEach((c, i) => {
-      if (!isOneOf(DEFLECTION_LIMIT_CASES, c)) error('unknown-option', `service.limitCases[${i}]`, `must be ${oneOf(DEFLECTION_LIMIT_CASES)}, got ${JSON.stringify(c)}`);
-    });
-    if ((s.limitCases ?? []).includes('custom')) checkNumber(out, `${path}.service.customLimitRatio`, s.customLimitRatio, { min: 50, max: 5000 });
-  }
+  checkServiceSettings(out, path, beam.service);
   const c = beam.capacity;
   if (!c) error('required', 'capacity', 'capacity settings are required');
   else {
-    if (!isOneOf(LOAD_PATTERNS, c.pattern)) error('unknown-option', 'capacity.pattern', `must be "proportional" or "live-only", got ${JSON.stringify(c.pattern)}`);
-    if (!isOneOf(HINGE_LENGTH_METHODS, c.hingeLengthMethod)) error('unknown-option', 'capacity.hingeLengthMethod', `must be ${oneOf(HINGE_LENGTH_METHODS)}, got ${JSON.stringify(c.hingeLengthMethod)}`);
-    if (c.hingeLengthMethod === 'user') checkNumber(out, `${path}.capacity.userHingeLength`, c.userHingeLength, { min: 10, max: 5000, quantity: 'sectionLength' });
+    checkHingeSettings(out, path, c);
     const a = c.arrangement;
     if (!a || (a.kind !== 'all-spans' && a.kind !== 'governing-span')) error('unknown-option', 'capacity.arrangement.kind', `must be "all-spans" or "governing-span", got ${JSON.stringify((a as { kind?: unknown } | undefined)?.kind)}`);
     else if (a.kind === 'governing-span' && !(Number.isInteger(a.span) && a.span >= 1 && a.span <= spans.length)) {

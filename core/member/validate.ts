@@ -20,6 +20,29 @@ const m = (mm: number) => q('spanLength', mm, { compact: true });
  */
 export const MEMBER_LIMITS = { zones: 200, loads: 2000 } as const;
 
+/** Service settings shared by every kind of beam (single span and continuous): problems into `out`. */
+export function checkServiceSettings(out: Diagnostic[], path: string, s: BeamDefinition['service'] | undefined): void {
+  const error = (code: Diagnostic['code'], at: string, message: Text) => out.push(diagnostic(code, `${path}.${at}`, 'error', message));
+  if (!s) {
+    error('required', 'service', 'service settings are required');
+    return;
+  }
+  checkNumber(out, `${path}.service.sustainedLiveFraction`, s.sustainedLiveFraction, { min: 0, max: 1 });
+  checkNumber(out, `${path}.service.durationMonths`, s.durationMonths, { min: 0, max: 1200, unit: 'months' });
+  (s.limitCases ?? []).forEach((c, i) => {
+    if (!isOneOf(DEFLECTION_LIMIT_CASES, c)) error('unknown-option', `service.limitCases[${i}]`, `must be ${oneOf(DEFLECTION_LIMIT_CASES)}, got ${JSON.stringify(c)}`);
+  });
+  if ((s.limitCases ?? []).includes('custom')) checkNumber(out, `${path}.service.customLimitRatio`, s.customLimitRatio, { min: 50, max: 5000 });
+}
+
+/** Load pattern and hinge-length settings shared by every kind of beam: problems into `out`. */
+export function checkHingeSettings(out: Diagnostic[], path: string, c: Pick<BeamDefinition['capacity'], 'pattern' | 'hingeLengthMethod' | 'userHingeLength'>): void {
+  const error = (code: Diagnostic['code'], at: string, message: Text) => out.push(diagnostic(code, `${path}.${at}`, 'error', message));
+  if (!isOneOf(LOAD_PATTERNS, c.pattern)) error('unknown-option', 'capacity.pattern', `must be "proportional" or "live-only", got ${JSON.stringify(c.pattern)}`);
+  if (!isOneOf(HINGE_LENGTH_METHODS, c.hingeLengthMethod)) error('unknown-option', 'capacity.hingeLengthMethod', `must be ${oneOf(HINGE_LENGTH_METHODS)}, got ${JSON.stringify(c.hingeLengthMethod)}`);
+  if (c.hingeLengthMethod === 'user') checkNumber(out, `${path}.capacity.userHingeLength`, c.userHingeLength, { min: 10, max: 5000, quantity: 'sectionLength' });
+}
+
 /**
  * @param path e.g. `members[3] "B-12"`
  * @param sectionIds ids of the project's sections
@@ -83,22 +106,11 @@ export function validateMember(member: BeamDefinition, path: string, sectionIds:
   });
 
   // Settings.
-  const s = member.service;
-  if (!s) error('required', 'service', 'service settings are required');
-  else {
-    checkNumber(out, `${path}.service.sustainedLiveFraction`, s.sustainedLiveFraction, { min: 0, max: 1 });
-    checkNumber(out, `${path}.service.durationMonths`, s.durationMonths, { min: 0, max: 1200, unit: 'months' });
-    (s.limitCases ?? []).forEach((c, i) => {
-      if (!isOneOf(DEFLECTION_LIMIT_CASES, c)) error('unknown-option', `service.limitCases[${i}]`, `must be ${oneOf(DEFLECTION_LIMIT_CASES)}, got ${JSON.stringify(c)}`);
-    });
-    if ((s.limitCases ?? []).includes('custom')) checkNumber(out, `${path}.service.customLimitRatio`, s.customLimitRatio, { min: 50, max: 5000 });
-  }
+  checkServiceSettings(out, path, member.service);
   const c = member.capacity;
   if (!c) error('required', 'capacity', 'capacity settings are required');
   else {
-    if (!isOneOf(LOAD_PATTERNS, c.pattern)) error('unknown-option', 'capacity.pattern', `must be "proportional" or "live-only", got ${JSON.stringify(c.pattern)}`);
-    if (!isOneOf(HINGE_LENGTH_METHODS, c.hingeLengthMethod)) error('unknown-option', 'capacity.hingeLengthMethod', `must be ${oneOf(HINGE_LENGTH_METHODS)}, got ${JSON.stringify(c.hingeLengthMethod)}`);
-    if (c.hingeLengthMethod === 'user') checkNumber(out, `${path}.capacity.userHingeLength`, c.userHingeLength, { min: 10, max: 5000, quantity: 'sectionLength' });
+    checkHingeSettings(out, path, c);
     if (c.spanHingeRule !== undefined && !isOneOf(SPAN_HINGE_RULES, c.spanHingeRule)) error('unknown-option', 'capacity.spanHingeRule', `must be ${oneOf(SPAN_HINGE_RULES)}, got ${JSON.stringify(c.spanHingeRule)}`);
     if (c.strainPenetration !== undefined && !isOneOf(STRAIN_PENETRATION_MODELS, c.strainPenetration)) error('unknown-option', 'capacity.strainPenetration', `must be ${oneOf(STRAIN_PENETRATION_MODELS)}, got ${JSON.stringify(c.strainPenetration)}`);
     if (c.shearDeformation !== undefined && !isOneOf(SHEAR_DEFORMATION_MODELS, c.shearDeformation)) error('unknown-option', 'capacity.shearDeformation', `must be ${oneOf(SHEAR_DEFORMATION_MODELS)}, got ${JSON.stringify(c.shearDeformation)}`);

@@ -37,7 +37,12 @@ describe('the report of an existing beam', () => {
     const [ex, other] = plan.members;
     expect(ex!.existing!.asFound.map((a) => a.baseSectionId)).toEqual(['r1']);
     expect(ex!.existing!.schemes.map((s) => s.schemeId)).toEqual(['frp2', 'ov75']);
-    for (const id of [ex!.existing!.momentCurvature, ex!.existing!.loadDeflection, ex!.existing!.shear]) expect(plan.figures[id!]).toBeDefined();
+    // Each of the three comparison drawings is a planned chart with at least the design beam drawn.
+    for (const id of [ex!.existing!.momentCurvature, ex!.existing!.loadDeflection, ex!.existing!.shear]) {
+      const figure = plan.figures[id!];
+      expect(figure?.kind).toBe('chart');
+      expect(figure?.kind === 'chart' && figure.spec.series.length).toBeGreaterThan(0);
+    }
     const mc = plan.figures[ex!.existing!.momentCurvature!]!;
     expect(mc.kind === 'chart' && mc.spec.series.map((s) => s.label)).toEqual(['design beam', 'as found', 'CFRP, 2 plies', 'Overlay 75 mm']);
     expect(other!.existing).toBeNull();

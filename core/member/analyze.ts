@@ -133,26 +133,43 @@ export const DUCTILITY_RANGE_LIMIT = 10;
  *    climbs to cracking before any yield), the secant through 75 % would be the uncracked stiffness
  *    and Δy meaninglessly small: the secant through first yield of the tension steel, extended to the
  *    largest load, is used instead (the reduced-stiffness definition with the yield point itself,
- *    Park 1988, from memory).
+ *    Park 1988, from memory);
+ *  - in a statically determinate member (simply supported, cantilever), when the tension steel
+ *    first yields below 75 % of the largest load (strong hardening, or a
+ *    flanged section whose moment keeps rising long after yield), the state at 75 % already carries
+ *    plastic deformation and its secant is no longer an elastic stiffness (Δy came out 4.5× the
+ *    first-yield deflection on such a beam): the secant through first yield, extended to the
+ *    largest load, is used — the nominal yield Δy = Δ′y·P/P′y of Priestley, Calvi & Kowalsky 2007
+ *    (from memory), which is what Park's secant gives when first yield lies at 75 %.
  * Deflections are measured from the state under the loads held constant (the first point).
  */
-export function yieldDeflectionOf(capacity: CapacityCurve): { deflection: number | null; definition: string | null; note: string | null } {
+export function yieldDeflectionOf(capacity: CapacityCurve, determinate = true): { deflection: number | null; definition: string | null; note: string | null } {
   const points = capacity.points;
   if (points.length < 2 || !capacity.firstYield) return { deflection: null, definition: null, note: null };
   const base = points[0]!;
   const pMax = Math.max(...points.map((p) => p.totalLoad));
   const target = base.totalLoad + 0.75 * (pMax - base.totalLoad);
   const cracking = capacity.cracking;
-  if (cracking && target < cracking.totalLoad) {
-    const fy = capacity.firstYield;
+  const fy = capacity.firstYield;
+  const belowCracking = !!cracking && target < cracking.totalLoad;
+  // In a redundant member first yield is the first hinge's (at a support, often just after
+  // cracking), not the member's: Park's secant there reflects the redistribution that follows.
+  const yieldsEarly = determinate && fy.totalLoad < target;
+  if (belowCracking || yieldsEarly) {
     const rise = fy.deflection - base.deflection;
     const load = fy.totalLoad - base.totalLoad;
     if (rise > 0 && load > 0) {
-      return {
-        deflection: base.deflection + (rise * (pMax - base.totalLoad)) / load,
-        definition: 'secant through first yield of the tension steel, extended to the largest load (75 % of the largest load lies below the cracking load)',
-        note: 'The load at 75 % of the peak lies below the cracking load (a lightly reinforced member): Park\u2019s 75 % secant would be the uncracked stiffness, so the nominal yield deflection is taken on the secant through first yield instead.',
-      };
+      return belowCracking
+        ? {
+            deflection: base.deflection + (rise * (pMax - base.totalLoad)) / load,
+            definition: 'secant through first yield of the tension steel, extended to the largest load (75 % of the largest load lies below the cracking load)',
+            note: 'The load at 75 % of the peak lies below the cracking load (a lightly reinforced member): Park\u2019s 75 % secant would be the uncracked stiffness, so the nominal yield deflection is taken on the secant through first yield instead.',
+          }
+        : {
+            deflection: base.deflection + (rise * (pMax - base.totalLoad)) / load,
+            definition: 'secant through first yield of the tension steel, extended to the largest load (the steel yields below 75 % of the largest load)',
+            note: null,
+          };
     }
     return { deflection: null, definition: null, note: null };
   }
@@ -224,7 +241,7 @@ export function analyzeBeam(member: BeamDefinition, context: MemberContext): Bea
   let yieldDefinition: string | null = null;
   if (capacity?.firstYield && capacity.ultimate) {
     firstYieldDeflection = capacity.firstYield.deflection;
-    const y = yieldDeflectionOf(capacity);
+    const y = yieldDeflectionOf(capacity, member.supports === 'simply-supported' || member.supports === 'cantilever');
     yieldDeflection = y.deflection;
     yieldDefinition = y.definition;
     if (y.note) warnings.push(y.note);

@@ -5,6 +5,8 @@ import { describe, expect, it } from 'vitest';
 import { say } from '../../../core/units/phrase.ts';
 import { analyzeProject } from '../../../core/analysis.ts';
 import { validateMember } from '../../../core/member/validate.ts';
+import { yieldDeflectionOf } from '../../../core/member/analyze.ts';
+import type { CapacityCurve } from '../../../core/member/capacity.ts';
 import { member, smallProject } from '../../fixtures/projects.ts';
 import type { MemberDefinition } from '../../../core/project/types.ts';
 import type { MemberResult } from '../../../core/assessment/results.ts';
@@ -145,4 +147,32 @@ describe('discretisation', () => {
       });
     });
   }
+});
+
+describe('nominal yield deflection when the steel yields early', () => {
+  // A load–deflection curve (load in N, deflection in mm) elastic to first yield at 60 kN / 10 mm,
+  // then hardening to 100 kN at 100 mm: first yield lies at 60 % of the peak.
+  const points = [0, 20, 40, 60, 70, 80, 90, 100].map((p) => ({ loadFactor: p / 100, totalLoad: p * 1000, deflection: p <= 60 ? p / 6 : 10 + ((p - 60) * 90) / 40 }));
+  const curve = (firstYieldLoad: number, firstYieldDeflection: number): CapacityCurve => ({
+    points: points as unknown as CapacityCurve['points'], events: [], hinges: [], distributions: [], controlPosition: 3500, status: 'ultimate', converged: true,
+    cracking: { lambda: 0.05, totalLoad: 5000, deflection: 5000 / 6000 },
+    firstYield: { lambda: firstYieldLoad / 100_000, totalLoad: firstYieldLoad, deflection: firstYieldDeflection },
+    peak: { lambda: 1, deflection: 100 }, ultimate: { lambda: 1, deflection: 100 }, codeUltimate: null, failureCause: '', secantPoint: null,
+  });
+  it('takes the secant through first yield in a determinate member, Park\u2019s 75 % secant in a redundant one', () => {
+    // Priestley, Calvi & Kowalsky 2007 (from memory): nominal yield Δy = Δ′y·P/P′y = 10 × 100/60.
+    expect(yieldDeflectionOf(curve(60_000, 10), true).deflection).toBeCloseTo(100 / 6, 6);
+    expect(yieldDeflectionOf(curve(60_000, 10), true).definition).toMatch(/first yield/);
+    // Park 1988 (from memory): secant through 75 % of the peak, Δ(75 kN) = 10 + 15 × 90/40 = 43.75 mm, over 0.75.
+    expect(yieldDeflectionOf(curve(60_000, 10), false).deflection).toBeCloseTo(43.75 / 0.75, 6);
+  });
+  it('keeps Park\u2019s secant where first yield lies above 75 % of the peak, and the two agree at 75 %', () => {
+    // A curve whose first yield sits at 80 kN on the same elastic line would have been read at 75 kN: 12.5 mm / 0.75.
+    const elastic = points.map((p) => ({ ...p, deflection: p.totalLoad / 6000 }));
+    const late = { ...curve(80_000, 80_000 / 6000), points: elastic as unknown as CapacityCurve['points'] };
+    expect(yieldDeflectionOf(late, true).deflection).toBeCloseTo(12.5 / 0.75, 6);
+    // continuity: first yield just below 75 % gives the Δy of Park's rule (common practice, no source)
+    const at75 = { ...curve(74_990, 74_990 / 6000), points: elastic as unknown as CapacityCurve['points'] };
+    expect(yieldDeflectionOf(at75, true).deflection).toBeCloseTo(yieldDeflectionOf(at75, false).deflection!, 6);
+  });
 });

@@ -4,12 +4,11 @@
  * Pure and deterministic. Members are independent: one member's failure never stops the others.
  */
 import { assessMember, type AssessmentContext } from './assessment/member.ts';
-import { defaultStrengthFactors } from './assessment/combinations.ts';
-import { analyzeContinuousBeam } from './continuous/analyze.ts';
-import { withVerdict, type ContinuousMemberResult } from './continuous/verdict.ts';
+import { defaultStrengthFactors, strengthCombinations } from './assessment/combinations.ts';
+import { assessContinuousMember, withVerdict, type ContinuousAssessmentContext, type ContinuousMemberResult } from './assessment/continuous-verdict.ts';
 import type { MemberResult } from './assessment/results.ts';
 import { notAnalysed } from './assessment/variant.ts';
-import { materialLibrary } from './materials/library.ts';
+import { materialLibrary, type MaterialLibrary } from './materials/library.ts';
 import type { Project, MemberDefinition } from './project/types.ts';
 import { analyzeSectionShortTerm, completeSectionAnalysis, type SectionAnalysis, type ShortTermSection } from './section/analyze.ts';
 import type { SectionDefinition } from './section/definition.ts';
@@ -143,6 +142,17 @@ export function summarize(members: readonly MemberResult[]): ProjectSummary {
   };
 }
 
+/** A section's definition, concrete and stirrup steel for the code checks of a continuous member, by id. */
+function sectionCheckData(project: Project, materials: MaterialLibrary): NonNullable<ContinuousAssessmentContext['checks']>['zone'] {
+  return (id) => {
+    const definition = project.sections.find((s) => s.id === id);
+    const concrete = definition ? materials.concreteSpec(definition.concreteId) : undefined;
+    if (!definition || !concrete) return undefined;
+    const stirrupYield = definition.hoops ? materials.steel(definition.hoops.steelId)?.yieldStress : undefined;
+    return { definition, concrete, ...(stirrupYield !== undefined ? { stirrupYield } : {}) };
+  };
+}
+
 /**
  * Analyses the continuous members of a project (all when `ids` is omitted), in file order. A defect
  * inside one member's analysis is caught and reported on that member.
@@ -150,15 +160,19 @@ export function summarize(members: readonly MemberResult[]): ProjectSummary {
 export function analyzeContinuousMembers(project: Project, ids?: readonly string[], section: (id: string) => SectionAnalysis | undefined = sectionCache(project)): ContinuousMemberResult[] {
   const sectionIds = new Set(project.sections.map((s) => s.id));
   const code = project.info.codeBasis;
+  const materials = materialLibrary(project.materials, code, project.settings);
   return (project.continuousMembers ?? []).flatMap((m, index) => {
     if (ids && !ids.includes(m.id)) return [];
     const path = `continuousMembers[${index}] "${m.name}"`;
-    const context = { code, segments: Math.min(project.settings.stations, 48), section, sectionIds, path, strengthFactors: defaultStrengthFactors(code), deadOnlyFactor: code === 'ACI 318-19' ? 1.4 : undefined };
+    const context: ContinuousAssessmentContext = {
+      code, segments: Math.min(project.settings.stations, 48), section, sectionIds, path, strengthFactors: defaultStrengthFactors(code), deadOnlyFactor: code === 'ACI 318-19' ? 1.4 : undefined,
+      checks: { combinations: strengthCombinations(m, code, project.settings), zone: sectionCheckData(project, materials), ...(project.info.unitSystem ? { edition: project.info.unitSystem } : {}) },
+    };
     try {
-      return [withVerdict(analyzeContinuousBeam(m, context))];
+      return [assessContinuousMember(m, context)];
     } catch (error) {
       const message = `the analysis stopped on an internal error: ${error instanceof Error ? error.message : String(error)}`;
-      return [withVerdict({ memberId: m.id, memberName: m.name, supportX: [], parts: [], elastic: null, failureArrangement: '', failurePattern: '', capacity: null, strengthLevel: null, redistribution: [], service: null, warnings: [], errors: [{ path, message }] })];
+      return [withVerdict({ memberId: m.id, memberName: m.name, supportX: [], parts: [], elastic: null, failureArrangement: '', failurePattern: '', capacity: null, strengthLevel: null, redistribution: [], service: null, failureLoads: null, warnings: [], errors: [{ path, message }] })];
     }
   });
 }

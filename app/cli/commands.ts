@@ -142,8 +142,8 @@ async function analyze(io: Io, command: Extract<Command, { kind: 'analyze' }>): 
     io.stdout(tableReport(project, results, { system, width: io.stdoutIsTTY ? io.columns : 110, style: stdoutStyle(io) }));
     if (results.continuous) io.stdout(continuousTable(results.continuous, system, io.stdoutIsTTY ? io.columns : 110, stdoutStyle(io)));
   }
-  // A continuous member is never a plain OK (strength at every station is still to be checked): it is reviewed.
-  return results.members.every((m) => m.status === 'ok') && (results.continuous ?? []).every((c) => c.verdict.status === 'review') ? EXIT.ok : EXIT.problems;
+  // Every member and every continuous member must read OK (a continuous member under review does not).
+  return results.members.every((m) => m.status === 'ok') && (results.continuous ?? []).every((c) => c.verdict.status === 'ok') ? EXIT.ok : EXIT.problems;
 }
 
 async function validate(io: Io, command: Extract<Command, { kind: 'validate' }>): Promise<number> {

@@ -34,7 +34,6 @@
 import { en1992MeanTensileStrength } from '../materials/code/en1992.ts';
 import type { CodeBasis } from '../materials/specs.ts';
 import type { SupportType } from '../member/definition.ts';
-import type { BeamResult } from '../member/results.ts';
 import type { BendingDirection, SectionModel } from '../section/model.ts';
 import { steelYieldStress, tensionSteel } from '../section/model.ts';
 import { faces } from '../section/state.ts';
@@ -164,28 +163,41 @@ function sectionFindings(codeBasis: CodeBasis, supports: SupportType, zone: Shea
   return out;
 }
 
-/** The member engine's moment distribution in its ultimate state (the largest load), or null. */
-function ultimateDistribution(beam: BeamResult | null): BeamResult['distributions'][number] | null {
+/** Moment distributions of an analysis to failure (a member's BeamResult, a continuous beam's capacity result): x mm, moment N·mm. */
+export interface UltimateSource {
+  readonly distributions: readonly { readonly loadFactor: number; readonly x: readonly number[]; readonly moment: readonly number[] }[];
+}
+
+/** The engine's moment distribution in its ultimate state (the largest load), or null. */
+function ultimateDistribution(beam: UltimateSource | null): UltimateSource['distributions'][number] | null {
   if (!beam) return null;
-  return beam.distributions.reduce<BeamResult['distributions'][number] | null>((best, d) => (d.moment.length > 0 && (!best || d.loadFactor > best.loadFactor) ? d : best), null);
+  return beam.distributions.reduce<UltimateSource['distributions'][number] | null>((best, d) => (d.moment.length > 0 && (!best || d.loadFactor > best.loadFactor) ? d : best), null);
+}
+
+/**
+ * The finding "shear before flexure": at the flexural mechanism the shear `shear` (N) at `where`
+ * exceeds the nominal shear strength `nominal` (N; ACI Vn, EN VRk with γ = 1).
+ */
+export function shearBeforeFlexure(code: CodeBasis, shear: number, nominal: number, where: Text): BrittleFinding {
+  return {
+    cause: 'shear-before-flexure',
+    sectionId: null,
+    direction: null,
+    text: phrase`shear would be reached before the flexural mechanism: ${q('force', shear)} at ${where} against ${code === 'ACI 318-19' ? 'Vn' : 'VRk'} = ${q('force', nominal)}`,
+  };
 }
 
 /**
  * Why a member is brittle (see the module comment); empty when it is not.
  * @param zones the member's zones with their sections, in zone order
  * @param strength the flexural check, whose zones tell which senses carry demand
- * @param beam the member engine's result (its ultimate moment distribution), or null
+ * @param beam the engine's result to failure (its ultimate moment distribution), or null
  */
-export function brittleFindings(code: CodeBasis, supports: SupportType, zones: readonly ShearZone[], strength: StrengthCheck | null, shear: ShearResult | null, beam: BeamResult | null): BrittleFinding[] {
+export function brittleFindings(code: CodeBasis, supports: SupportType, zones: readonly ShearZone[], strength: StrengthCheck | null, shear: ShearResult | null, beam: UltimateSource | null): BrittleFinding[] {
   const out: BrittleFinding[] = [];
   if (shear?.governs === 'shear' && shear.mechanism) {
     const g = shear.mechanism.governing;
-    out.push({
-      cause: 'shear-before-flexure',
-      sectionId: null,
-      direction: null,
-      text: phrase`shear would be reached before the flexural mechanism: ${q('force', g.shear)} at ${q('spanLength', g.position)} against ${code === 'ACI 318-19' ? 'Vn' : 'VRk'} = ${q('force', g.nominal)}`,
-    });
+    out.push(shearBeforeFlexure(code, g.shear, g.nominal, phrase`${q('spanLength', g.position)}`));
   }
   if (!strength) return out;
   const ultimate = ultimateDistribution(beam);

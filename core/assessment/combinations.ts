@@ -73,7 +73,7 @@ export function defaultStrengthFactors(code: CodeBasis): LoadFactors {
  * The combinations a member is checked for: its own factors when the engineer set them, otherwise
  * the code's (codeCombinations). Every check takes the envelope of all of them.
  */
-export function strengthCombinations(member: BeamDefinition, code: CodeBasis, settings: CombinationSettings = {}): LoadCombination[] {
+export function strengthCombinations(member: Pick<BeamDefinition, 'strengthFactors'>, code: CodeBasis, settings: CombinationSettings = {}): LoadCombination[] {
   if (member.strengthFactors) {
     const f = member.strengthFactors;
     const name = code === 'ACI 318-19' ? `${f.dead}D + ${f.superimposed}SD + ${f.live}L` : `${f.dead}G + ${f.superimposed}G_sup + ${f.live}Q`;

@@ -179,3 +179,31 @@ export function sectionShearCapacity(code: CodeBasis, zone: ShearZone, direction
     notes: [...notes, ...design.notes],
   };
 }
+
+/**
+ * Distance from a support within which sections take the shear at that distance (ACI 318-19
+ * 9.4.3.2; EN 1992-1-1 6.2.1(8)): d, the smaller of the directions with tension bars — the check
+ * starts no further from the support than either allows — or the larger d when neither has bars, mm.
+ */
+export function criticalSectionDepth(caps: { readonly sagging: ShearCapacity | null; readonly hogging: ShearCapacity | null }): number {
+  const depths = [caps.sagging, caps.hogging].filter((k): k is ShearCapacity => k !== null && k.hasTensionBars).map((k) => k.effectiveDepth);
+  return depths.length > 0 ? Math.min(...depths) : Math.max(caps.sagging?.effectiveDepth ?? 0, caps.hogging?.effectiveDepth ?? 0);
+}
+
+/** Shear capacities of every zone in both directions, and the distinct ones (one per section and direction) for the report. */
+export function zoneShearCapacities(code: CodeBasis, zones: readonly ShearZone[], edition?: AciEdition): { caps: { sagging: ShearCapacity | null; hogging: ShearCapacity | null }[]; capacities: ShearCapacity[] } {
+  const caps = zones.map((z) => ({ sagging: sectionShearCapacity(code, z, 'sagging', edition), hogging: sectionShearCapacity(code, z, 'hogging', edition) }));
+  const capacities: ShearCapacity[] = [];
+  const seen = new Set<string>();
+  for (const c of caps) {
+    for (const cap of [c.sagging, c.hogging]) {
+      if (!cap) continue;
+      const key = `${cap.sectionId}|${cap.direction}`;
+      if (!seen.has(key)) {
+        seen.add(key);
+        capacities.push(cap);
+      }
+    }
+  }
+  return { caps, capacities };
+}

@@ -37,7 +37,7 @@ import { tensionSteel } from '../section/model.ts';
 import { joinTexts, phrase, q, type Text } from '../units/phrase.ts';
 import { combinationText, combinedLoads, memberLoadSets, scaleLoad, type LoadCombination } from './combinations.ts';
 import { elasticSupportMoments, type ElasticZone } from './demand.ts';
-import { sectionShearCapacity, type ShearCapacity, type ShearZone } from './shear-section.ts';
+import { criticalSectionDepth, zoneShearCapacities, type ShearCapacity, type ShearZone } from './shear-section.ts';
 import type { AciEdition } from './shear-aci.ts';
 
 export interface ShearDemandPoint {
@@ -155,19 +155,7 @@ export function memberShear(input: MemberShearInput): ShearResult {
   const warnings: Text[] = [];
 
   // --- capacities per zone and direction ----------------------------------------------------------
-  const caps = zones.map((z) => ({ sagging: sectionShearCapacity(code, z, 'sagging', input.edition), hogging: sectionShearCapacity(code, z, 'hogging', input.edition) }));
-  const capacities: ShearCapacity[] = [];
-  const seen = new Set<string>();
-  caps.forEach((c) => {
-    for (const cap of [c.sagging, c.hogging]) {
-      if (!cap) continue;
-      const key = `${cap.sectionId}|${cap.direction}`;
-      if (!seen.has(key)) {
-        seen.add(key);
-        capacities.push(cap);
-      }
-    }
-  });
+  const { caps, capacities } = zoneShearCapacities(code, zones, input.edition);
   const empty = (sentence: string): ShearResult => ({
     code, capacities, factored: null, mechanism: null, governs: 'undetermined', shearFailureLoadFactor: null,
     flexuralDuctilityAvailable: true, sentence, criticalSectionRule: '', diagram: EMPTY_DIAGRAM, warnings,
@@ -199,9 +187,7 @@ export function memberShear(input: MemberShearInput): ShearResult {
   for (const xs of supportsAt) {
     const zi = zoneAt(xs, xs === 0 ? 'right' : 'left');
     const c = caps[zi]!;
-    // The smaller d of the directions with tension bars: the check starts no further from the support than either allows.
-    const depths = [c.sagging, c.hogging].filter((k): k is ShearCapacity => k !== null && k.hasTensionBars).map((k) => k.effectiveDepth);
-    const d = Math.min(depths.length > 0 ? Math.min(...depths) : Math.max(c.sagging?.effectiveDepth ?? 0, c.hogging?.effectiveDepth ?? 0), span);
+    const d = Math.min(criticalSectionDepth(c), span);
     const left = xs === 0;
     const loaded = pointPositions.some((p) => (left ? p > 0 && p <= d : p >= span - d && p < span));
     if (loaded) ruleParts.push(phrase`a point load lies within d = ${q('sectionLength', d)} of the support at ${q('spanLength', xs)}: checked up to the support face`);

@@ -53,6 +53,8 @@ export interface ContinuousBeamResult {
   readonly redistribution: readonly RedistributionCheck[];
   /** Service deflections per span and cantilever (integration and code method) against the limits. */
   readonly service: ContinuousService | null;
+  /** The loads of the analysis to failure: held constant, and the pattern its load factor scales (N/mm, N per part); null when not analysed. */
+  readonly failureLoads: { readonly held: LoadsByPart; readonly pattern: LoadsByPart } | null;
   readonly warnings: readonly Text[];
   readonly errors: readonly Problem[];
 }
@@ -71,7 +73,7 @@ export function zoneLaws(sectionId: string, analysis: SectionAnalysis, longTerm 
 }
 
 function empty(def: ContinuousBeamDefinition, errors: readonly Problem[], warnings: readonly Text[] = []): ContinuousBeamResult {
-  return { memberId: def.id, memberName: def.name, supportX: [], parts: [], elastic: null, failureArrangement: '', failurePattern: '', capacity: null, strengthLevel: null, redistribution: [], service: null, warnings, errors };
+  return { memberId: def.id, memberName: def.name, supportX: [], parts: [], elastic: null, failureArrangement: '', failurePattern: '', capacity: null, strengthLevel: null, redistribution: [], service: null, failureLoads: null, warnings, errors };
 }
 
 /** The loads of the analysis to failure: held and factored sets. */
@@ -217,6 +219,7 @@ export function analyzeContinuousBeam(def: ContinuousBeamDefinition, context: Co
     strengthLevel,
     redistribution,
     service,
+    failureLoads: { held: loads.held, pattern: loads.pattern },
     warnings: uniqueTexts(warnings),
     errors: [],
   };

@@ -16,7 +16,7 @@
  * along the span), with the unit of every column in its header, in the chosen display system.
  * Empty fields stand for values that do not exist (never NaN).
  */
-import type { ContinuousMemberResult } from '../continuous/verdict.ts';
+import type { ContinuousMemberResult } from '../assessment/continuous-verdict.ts';
 import { continuousSummaryRows } from './continuous-csv.ts';
 import Papa from 'papaparse';
 import type { Diagnostic } from '../diagnostics.ts';

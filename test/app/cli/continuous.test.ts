@@ -6,18 +6,21 @@ import { continuousJson, continuousTable } from '../../../app/cli/continuous.ts'
 
 describe('continuous members on the command line', () => {
   const results = analyzeContinuousMembers(demoProjectSI());
-  it('prints a row per member: spans, governing span, status; never a plain OK', () => {
+  it('prints a row per member: spans, governing span, station-check utilisations, status', () => {
     const table = continuousTable(results, 'si', 110);
     const rows = table.split('\n').filter((l) => /^CB-\d\s/.test(l));
     expect(rows).toHaveLength(2);
-    expect(rows[0]).toMatch(/^CB-1\s+6\.00 \+ 7\.00 \+ 6\.00\s+span [13].*review$/);
-    expect(rows[1]).toMatch(/^CB-2\s+8\.40 \+ 4\.20 \+ c1\.50\s+span 1.*check fails$/);
-    expect(table).not.toMatch(/\bok\b/);
+    expect(rows[0]).toMatch(/^CB-1\s+6\.00 \+ 7\.00 \+ 6\.00\s+span [13]\s+0\.\d\d\s+0\.\d\d\s.*ok$/);
+    expect(rows[1]).toMatch(/^CB-2\s+8\.40 \+ 4\.20 \+ c1\.50\s+span 1\s+0\.\d\d\s+0\.\d\d\s.*check fails$/);
     expect(table).toMatch(/CB-2: deflection of span 1/);
+    expect(table).toMatch(/CB-1: Strength check passes \(utilisation 0\.\d\d: span [13], hogging at/);
   });
   it('writes the same in JSON, with the hinge sequence and the redistribution', () => {
     const json = continuousJson(results, 'si') as { id: string; status: string; governingSpan: string; hinges: { order: number }[]; redistribution: unknown[] }[];
-    expect(json.map((j) => [j.id, j.status, j.governingSpan])).toEqual([['CB-1', 'review', results[0]!.verdict.governingSpan], ['CB-2', 'check-fails', 'span 1']]);
+    expect(json.map((j) => [j.id, j.status, j.governingSpan])).toEqual([['CB-1', 'ok', results[0]!.verdict.governingSpan], ['CB-2', 'check-fails', 'span 1']]);
+    const strength = (json[0] as unknown as { strength: { governing: { part: string; combination: string; arrangement: string; direction: string } } }).strength;
+    expect(strength.governing).toEqual(expect.objectContaining({ part: results[0]!.verdict.governingSpan, direction: 'hogging', combination: '1.35G + 1.5Q (EN 1990 Eq. (6.10))' }));
+    expect(strength.governing.arrangement).toMatch(/loaded/);
     expect(json[0]!.hinges.map((h) => h.order)).toEqual(json[0]!.hinges.map((_, i) => i + 1));
     expect(json[0]!.redistribution).toHaveLength(2);
   });

@@ -9,6 +9,7 @@ import { resultsSummaryCsv } from '../../../core/project/csv.ts';
 import { demoProjectSI } from '../../../core/project/demo.ts';
 import { parseProject, serializeProject } from '../../../core/project/file.ts';
 import { validateProject } from '../../../core/project/validate.ts';
+import { say } from '../../../core/units/index.ts';
 import { smallProject, member } from '../../fixtures/projects.ts';
 
 describe('continuous members in a version-3 project', () => {
@@ -22,14 +23,24 @@ describe('continuous members in a version-3 project', () => {
     expect(back.project!.continuousMembers).toEqual(project.continuousMembers);
   });
 
-  it('analyses them with the project: CB-1 within its limits (for review), CB-2 fails by the deflection of its long end span', () => {
+  it('analyses them with the project: CB-1 passes every check (OK), CB-2 fails by the deflection of its long end span', () => {
     const results = analyzeProject(project);
     const [cb1, cb2] = results.continuous!;
-    expect(cb1!.verdict.status).toBe('review');
+    // CB-1: strength and shear at every station, for EN 1990 Eq. (6.10) and every arrangement, pass; ductile
+    expect(cb1!.verdict.status).toBe('ok');
     expect(cb1!.verdict.collapseRatio!).toBeGreaterThan(1);
+    expect(cb1!.checks!.combinations).toEqual(['1.35G + 1.5Q (EN 1990 Eq. (6.10))']);
+    expect(cb1!.checks!.arrangementCount).toBe(5);
+    expect(cb1!.verdict.strengthUtilisation!).toBeLessThan(1);
+    expect(cb1!.verdict.shearUtilisation!).toBeLessThan(1);
+    expect(cb1!.checks!.brittle).toEqual([]);
+    // CB-2: the station checks pass (its long end span's sagging close to the limit), the deflection fails
+    expect(cb2!.checks!.flexure.pass).toBe(true);
+    expect(cb2!.checks!.flexureGoverning.part).toBe('span 1');
+    expect(cb2!.checks!.flexureGoverning.direction).toBe('sagging');
     expect(cb2!.verdict.status).toBe('check-fails');
     expect(cb2!.verdict.governingSpan).toBe('span 1');
-    expect(cb2!.verdict.governingMode).toMatch(/deflection of span 1/);
+    expect(say(cb2!.verdict.governingMode, 'si')).toMatch(/^deflection of span 1.*; strength check passes \(utilisation 0\.\d\d: span 1, sagging at/);
     // the CSV carries a row per continuous member naming its governing span
     const csv = resultsSummaryCsv(results.members, 'si', project, results.continuous);
     expect(csv).toMatch(/CB-2,CB-2,"continuous, 2 spans; governing span 1",8.4,check-fails/);

@@ -442,15 +442,20 @@ export class Equations {
       if (freeIndex < 0 && !isControlled) return;
       // The hinge's moment follows the rest of its section's curve: s·M(x_h) − M(θ/Lp) = 0. The
       // controlled hinge's equation is the row that determines λ in the mechanism stage.
+      // The moment is the effective one (with the tension shift, the largest within a_l): the
+      // measure by which the section reached its localisation moment, so a hinge starts on its own
+      // curve — at a bar cut-off the raw moment there is well below what the weak section's steel
+      // feels (issue 18).
       const row = isControlled ? lambdaCol : r + freeIndex;
       const { a, b, w } = hinge;
-      const mh = hinge.sign * ((1 - w) * M[a]! + w * M[b]!);
+      const me = this.effective;
+      const mh = hinge.sign * ((1 - w) * me[a]! + w * me[b]!);
       softeningAt(hinge.law, theta / hinge.length, scratch);
       residual[row] = mh - scratch.value;
       scale[row] = Math.max(Math.abs(hinge.law.peakMoment), 1);
-      for (let j = 0; j < r; j++) jacobian[row]![j] = hinge.sign * ((1 - w) * fields[j]![a]! + w * fields[j]![b]!);
+      for (let j = 0; j < r; j++) jacobian[row]![j] = hinge.sign * ((1 - w) * sens[j]![a]! + w * sens[j]![b]!);
       if (!isControlled) jacobian[row]![row] = -scratch.slope / hinge.length;
-      if (lambdaFree) jacobian[row]![lambdaCol] = hinge.sign * ((1 - w) * this.loads.pattern[a]! + w * this.loads.pattern[b]!);
+      if (lambdaFree) jacobian[row]![lambdaCol] = hinge.sign * ((1 - w) * sensL[a]! + w * sensL[b]!);
     });
     return { residual, jacobian, scale };
   }

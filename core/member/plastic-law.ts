@@ -65,9 +65,18 @@ export function plasticAt(law: PlasticLaw, mu: number, out: ValueAndSlope): Valu
   return interpolateWithSlope(law.knotMoments, law.knotPlastic, mu, out);
 }
 
-/** The moment of a localised hinge at localised curvature κ, and dM/dκ. */
+/**
+ * The moment of a localised hinge at localised curvature κ, and dM/dκ. At κ = 0 (a hinge that has
+ * just formed; κ never falls below it) the slope is that of the first piece, taken to the right: a
+ * clamped slope of 0 there would leave the hinge's equation without a derivative in its own
+ * rotation, and Newton's method could not start the hinge rotating (issue 18, the cut-off beam).
+ */
 export function softeningAt(law: PlasticLaw, kappa: number, out: ValueAndSlope): ValueAndSlope {
-  return interpolateWithSlope(law.softeningCurvature, law.softeningMoment, kappa, out);
+  const xs = law.softeningCurvature;
+  const ys = law.softeningMoment;
+  interpolateWithSlope(xs, ys, kappa, out);
+  if (xs.length >= 2 && kappa <= xs[0]! && xs[1]! > xs[0]!) out.slope = (ys[1]! - ys[0]!) / (xs[1]! - xs[0]!);
+  return out;
 }
 
 /**

@@ -117,12 +117,30 @@ describe('one flexural check at every station (issue 10 item 1)', () => {
     expect(hardened.zones.map((z) => z.sagging?.resistance)).toEqual(result.strength!.zones.map((z) => z.sagging?.resistance));
   });
 
-  it('the member\'s own capacity curve never places the failure at midspan', () => {
-    // The member engine must not end the curve at midspan: the cut-off (x = L/3 or 2L/3) governs.
-    // Known defect, recorded in issue 18: the spread-plasticity engine stops past the peak without
-    // converging on this beam (so its cause does not yet name the cut-off); the verdict is the code
-    // check's (Check fails, above) whatever the behaviour solver does.
-    expect(result.ductility.failureCause).not.toMatch(/midspan/);
+  it('the member\'s own capacity curve fails at the cut-off too: the check and the analysis agree', () => {
+    // The member engine ends the curve at a cut-off (x = L/3 or 2L/3): the weak zone's section at its
+    // boundary reaches the top of its curve and its hinge reaches the end of the curve; nothing at
+    // midspan. The weak section's steel feels the larger moment a_l into the strong zone
+    // (EN 1992-1-1 9.2.1.3(2) tension shift), so the hinge forms before the peak moment of 2-T20
+    // alone would be reached at 2 m.
+    expect(result.ductility.failureCause).toMatch(/hinge at 0\.(33|67)ℓ from the left support reaches its rotation capacity/);
+    expect(result.ductility.failureCause).not.toMatch(/midspan|not converged/);
+    expect(result.loadDeflection.status).toBe('complete');
+    const hinges = result.ductility.hinges;
+    expect(hinges.map((h) => h.position).sort((a, b) => a - b)).toEqual([2000, 4000]);
+    expect(hinges.every((h) => h.sectionId === 's2' && h.direction === 'sagging' && h.localised)).toBe(true);
+    // Statics: the hinge forms where w·x(L − x)/2 shifted by a_l = 0.45d (243 mm) into the strong
+    // zone reaches the weak section's moment, M(2.243 m) = 147.4 kN·m per λ; that moment is the
+    // section's strength with its own laws, within 0.97–1.1 of Mn(2-T20) = φMn/0.9 by the ACI 318-19
+    // rectangular block (elastic–plastic steel, Hognestad concrete; band: common practice, no source)
+    const lambdaHinge = hinges[0]!.localisationLoadFactor!;
+    const last = result.loadDeflection.points[result.loadDeflection.points.length - 1]!;
+    // the pattern is the whole (unfactored) load, proportional: w per unit λ = total load / λ / L
+    const wPerLambda = last.totalLoad / last.loadFactor / L;
+    expect(wPerLambda).toBeCloseTo(35, 6);
+    const mShifted = (lambdaHinge * wPerLambda * (2000 + 0.45 * d) * (L - 2000 - 0.45 * d)) / 2 / 1e6;
+    expect(mShifted).toBeGreaterThan((0.97 * two.mn) / 1e6);
+    expect(mShifted).toBeLessThan((1.1 * two.mn) / 1e6);
     expect(result.status).not.toBe('ok');
   });
 });

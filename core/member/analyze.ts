@@ -178,6 +178,23 @@ export function yieldDeflectionOf(capacity: CapacityCurve, determinate = true): 
   return { deflection, definition: deflection === null ? null : 'secant through the state at 75 % of the largest load, extended to the largest load (Park 1988)', note: null };
 }
 
+/**
+ * Extra stations either side of each change of section (a bar cut-off): within 1.5 segments of the
+ * boundary at a quarter of the segment length. A hinge at a cut-off has a short plastic zone in the
+ * weaker section, whose plastic curvature rises steeply with the moment; integrated over whole
+ * segments its length converged only linearly with the station count (1.2 % between 60 and 400
+ * stations on a fixed–fixed beam with top bars cut off), mm.
+ */
+export function cutOffStations(zones: readonly { from: number; to: number }[], span: number, segments: number): number[] {
+  const h = span / segments;
+  const out: number[] = [];
+  for (let i = 1; i < zones.length; i++) {
+    const b = zones[i]!.from;
+    for (let k = 1; k <= 6; k++) for (const p of [b - (k * h) / 4, b + (k * h) / 4]) if (p > 0 && p < span) out.push(p);
+  }
+  return out;
+}
+
 export function analyzeBeam(member: BeamDefinition, context: MemberContext): BeamAnalysis {
   const problems = validateMember(member, context.path, context.sectionIds);
   if (problems.length > 0) return invalid(member, problems);
@@ -218,7 +235,8 @@ export function analyzeBeam(member: BeamDefinition, context: MemberContext): Bea
   const probe = solveStatic(probeBeam, fieldOf(probeBeam, patternLoads.length > 0 ? patternLoads : deadLoads));
   const controlAt = Math.round(peakDeflectionPosition(probeBeam.x, probe.deflection) * 10) / 10;
   const tips = [...member.loads.filter((l) => l.kind === 'point').map((l) => (l as { position: number }).position), ...layout.supports.map((s) => s.x)];
-  const beam = buildLineModel(layout, responses, [...extraPoints, controlAt, ...shiftStations(member.capacity, responses, tips, span)], Math.max(context.segments, CAPACITY_MIN_SEGMENTS));
+  const segments = Math.max(context.segments, CAPACITY_MIN_SEGMENTS);
+  const beam = buildLineModel(layout, responses, [...extraPoints, controlAt, ...shiftStations(member.capacity, responses, tips, span), ...cutOffStations(member.zones, span, segments)], segments);
   const loading: LoadingFields = {
     constant: fieldOf(beam, constantLoads),
     pattern: fieldOf(beam, patternLoads),

@@ -10,9 +10,9 @@
 import { regulaFalsiEvent } from '../numeric/roots.ts';
 import type { BeamModel } from './beam-model.ts';
 import { deflectionShape } from './deflection.ts';
-import { Equations, newton, plasticLawOf, responseOf, type EngineOptions, type LoadingFields, type Memory } from './equations.ts';
+import { Equations, newton, plasticLawOf, responseOf, scratch, type EngineOptions, type LoadingFields, type Memory } from './equations.ts';
 import type { HingeRecord } from './hinges.ts';
-import type { PlasticLaw } from './plastic-law.ts';
+import { softeningAt, type PlasticLaw } from './plastic-law.ts';
 import type { LoadDeflectionPoint, MemberEvent, SpanDistribution } from './results.ts';
 import type { SectionResponse } from './section-response.ts';
 
@@ -52,6 +52,8 @@ export class CapacityState {
   controlIndex = -1;
   /** The memory the current step solves from (that of its last committed state). */
   baseMemory: Memory;
+  /** The localised rotations of that state (a hinge's rotation never falls below them). */
+  baseRotations: ReadonlyMap<number, number> = new Map();
   /**
    * Bumped whenever a solve overwrites the shared moment array and hinge rotations, or the hinge set
    * changes: the caches below are valid for one version only.
@@ -88,6 +90,7 @@ export class CapacityState {
   /** Makes a state the base of the next step; notes where the sections first yielded. */
   commit(s: Snapshot): void {
     this.baseMemory = s.memory;
+    this.baseRotations = s.rotations;
     const beam = this.beam;
     for (let i = 0; i < this.n; i++) {
       const zone = beam.zones[beam.stationZone[i]!]!;
@@ -102,32 +105,80 @@ export class CapacityState {
 
   /** Equilibrium at load factor λ (load control) from the base memory, starting from `guess`; undefined when Newton fails. */
   solveAt(lambda: number, guess: Snapshot): Snapshot | undefined {
-    const hinges = this.hinges;
-    const free = hinges.map((_, i) => i);
-    const start = { redundants: guess.redundants, lambda, rotations: free.map((i) => guess.rotations.get(i) ?? hinges[i]!.rotation) };
-    const res = newton(this.eq, hinges, free, false, start, this.baseMemory);
-    this.hingeVersion++; // the solve overwrote the shared moment array and hinge rotations
-    if (!res.converged) return undefined;
-    const rotations = new Map<number, number>();
-    free.forEach((h, i) => rotations.set(h, res.rotations[i]!));
-    this.eq.moments(res.redundants, lambda);
-    return { lambda, redundants: res.redundants, rotations, memory: this.committed(this.baseMemory) };
+    return this.solveHinges(-1, lambda, guess);
   }
 
   /** Equilibrium with the rotation of hinge `controlled` prescribed and λ an unknown. */
   solveAtRotation(controlled: number, theta: number, from: Snapshot): Snapshot | undefined {
+    this.hinges[controlled]!.rotation = theta;
+    this.hingeVersion++;
+    return this.solveHinges(controlled, from.lambda, from, theta);
+  }
+
+  /** The localised rotation of hinge i in the last committed state (0 for a hinge formed since), rad. */
+  private committedRotation(i: number): number {
+    return this.baseRotations.get(i) ?? 0;
+  }
+
+  /**
+   * Newton's method with the localised hinges as an active set. A localised rotation does not go
+   * back: a hinge whose moment falls below its curve unloads elastically and keeps its rotation
+   * (θ = θc, M ≤ M(θc/Lp)); one on its curve rotates on (θ ≥ θc, M = M(θ/Lp)). A first solve has
+   * every hinge on its curve; hinges that would rotate back are then held, held hinges whose moment
+   * would exceed their curve are released, until the set is consistent. Where the solve fails
+   * because a hinge sits at the top of its curve and cannot carry more, every hinge but the
+   * controlled one is held and released as needed. Without this, a hinge at the top of a flat
+   * curve had to jump along its curve when the load fell, and Newton's method stalled (issue 18).
+   * @param controlled hinge whose rotation is prescribed (λ unknown), or −1 for load control at `lambda`
+   */
+  private solveHinges(controlled: number, lambda: number, guess: Snapshot, theta = 0): Snapshot | undefined {
     const hinges = this.hinges;
-    hinges[controlled]!.rotation = theta;
-    this.hingeVersion++;
-    const free = hinges.map((_, i) => (i !== controlled ? i : -1)).filter((i) => i >= 0);
-    const res = newton(this.eq, hinges, free, true, { redundants: from.redundants, lambda: from.lambda, rotations: free.map((i) => from.rotations.get(i) ?? hinges[i]!.rotation) }, this.baseMemory, controlled);
-    this.hingeVersion++;
-    if (!res.converged) return undefined;
-    const rotations = new Map<number, number>();
-    free.forEach((h, i) => rotations.set(h, res.rotations[i]!));
-    rotations.set(controlled, theta);
-    this.eq.moments(res.redundants, res.lambda);
-    return { lambda: res.lambda, redundants: res.redundants, rotations, memory: this.committed(this.baseMemory) };
+    const lambdaFree = controlled >= 0;
+    const others = hinges.map((_, i) => i).filter((i) => i !== controlled);
+    let held = new Set<number>();
+    const seen = new Set<string>();
+    let allHeldTried = false;
+    for (let pass = 0; pass < 2 * hinges.length + 4; pass++) {
+      const signature = [...held].sort((a, b) => a - b).join(',');
+      if (seen.has(signature)) break;
+      seen.add(signature);
+      const free = others.filter((i) => !held.has(i));
+      for (const i of held) hinges[i]!.rotation = this.committedRotation(i);
+      const start = {
+        redundants: guess.redundants,
+        lambda: lambdaFree ? guess.lambda : lambda,
+        rotations: free.map((i) => Math.max(guess.rotations.get(i) ?? hinges[i]!.rotation, this.committedRotation(i))),
+      };
+      const res = newton(this.eq, hinges, free, lambdaFree, start, this.baseMemory, controlled);
+      this.hingeVersion++; // the solve overwrote the shared moment array and hinge rotations
+      if (!res.converged) {
+        if (allHeldTried || others.length === 0) break;
+        allHeldTried = true;
+        held = new Set(others);
+        continue;
+      }
+      const back = free.filter((i, k) => res.rotations[k]! < this.committedRotation(i) * (1 - 1e-12) - 1e-15);
+      this.eq.moments(res.redundants, res.lambda);
+      const over = [...held].filter((i) => this.hingeExcess(i) > 0);
+      if (back.length === 0 && over.length === 0) {
+        const rotations = new Map<number, number>();
+        free.forEach((h, k) => rotations.set(h, res.rotations[k]!));
+        for (const i of held) rotations.set(i, this.committedRotation(i));
+        if (lambdaFree) rotations.set(controlled, theta);
+        return { lambda: res.lambda, redundants: res.redundants, rotations, memory: this.committed(this.baseMemory) };
+      }
+      held = new Set([...held, ...back].filter((i) => !over.includes(i)));
+    }
+    return undefined;
+  }
+
+  /** How far hinge i's moment (the effective one, after `eq.moments`) lies above its curve at its current rotation, relative to its peak moment. */
+  private hingeExcess(i: number): number {
+    const h = this.hinges[i]!;
+    const me = this.eq.effective;
+    const m = h.sign * ((1 - h.w) * me[h.a]! + h.w * me[h.b]!);
+    const curve = softeningAt(h.law, h.rotation / h.length, scratch).value;
+    return (m - curve) / Math.max(Math.abs(h.law.peakMoment), 1) - 1e-9;
   }
 
   /**

@@ -379,6 +379,14 @@ class CapacityAnalysis extends CapacityState {
     }
   }
 
+  /** Where the most stressed section is, against the top of its curve, in words (for a solver that stops). */
+  private stressedWords(s: Snapshot): string {
+    const at = this.maxRatio(s, (resp, law) => law?.localisationMoment ?? resp.peakMoment);
+    if (at.station < 0) return 'no section carries moment';
+    const x = this.eventPosition(s, at.station, at.sign);
+    return `the most stressed section, ${at.sign > 0 ? 'sagging' : 'hogging'} at ${describePosition(x, this.beam.layout)}, is at ${(100 * at.ratio).toFixed(1)} % of the top of its curve`;
+  }
+
   private codePosition(s: Snapshot): number {
     this.restore(s);
     const me = this.eq.effective;
@@ -440,8 +448,9 @@ class CapacityAnalysis extends CapacityState {
           continue;
         }
         this.converged = false;
-        this.status = `not converged: no equilibrium beyond λ = ${state.lambda.toFixed(4)} (the redundant moments could not be balanced)`;
-        this.failureCause = 'analysis stopped before a limit state (not converged)';
+        const where = this.stressedWords(state);
+        this.status = `not converged: no equilibrium beyond λ = ${state.lambda.toFixed(4)} (the redundant moments could not be balanced; ${where})`;
+        this.failureCause = `analysis stopped before a limit state (not converged: no equilibrium at a higher load; ${where})`;
         break;
       }
       let earliest: { ev: Watch; at: Snapshot } | undefined;
@@ -466,7 +475,7 @@ class CapacityAnalysis extends CapacityState {
     }
     if (!this.mechanism && !this.finished && this.converged) {
       this.converged = false;
-      this.status = 'not converged: the load-control stage did not end within its step budget';
+      this.status = `not converged: the load-control stage did not end within its step budget (${this.stressedWords(this.state)})`;
       this.failureCause = this.status;
     }
   }
@@ -476,7 +485,7 @@ class CapacityAnalysis extends CapacityState {
   // limit point while a hinge has localised (the load must fall for the member to deform further).
   // λ becomes an unknown; other sections may still localise on the way; the stage ends at the
   // best-estimate ultimate.
-  private rotationControl(): void {
+  private rotationControl(switchTo?: { readonly hinge: number; readonly tried: ReadonlySet<number> }): void {
     const hinges = this.hinges;
     const limitPoint = !this.mechanism && !this.finished && !this.converged && hinges.length > 0;
     if (!(this.mechanism || limitPoint) || this.ultimate) return;
@@ -493,13 +502,13 @@ class CapacityAnalysis extends CapacityState {
       this.status = 'complete';
       this.failureCause = '';
     }
-    const controlled = hinges.length - 1;
+    const controlled = switchTo?.hinge ?? hinges.length - 1;
     const hc = hinges[controlled]!;
     const at = hc.critical;
     const peakWords = `the ${hc.sign > 0 ? 'sagging' : 'hogging'} hinge at ${describePosition(at, this.beam.layout)}`;
     // A mechanism is the peak; past a limit point the load may still rise while the other sections
     // take over (the peak event is then placed at the largest load, when the curve is finished).
-    if (this.mechanism) {
+    if (this.mechanism && !switchTo) {
       this.events.push({ kind: 'mechanism', loadFactor: this.state.lambda, deflection: this.controlDeflection(this.state), position: at, description: `mechanism: the member can take no more load; ${peakWords} rotates at falling load` });
       if (this.distributions.length < 2) this.distributions.push(this.distribution('peak', this.state));
     }
@@ -508,6 +517,7 @@ class CapacityAnalysis extends CapacityState {
     let dTheta = Math.max((limit - theta) / 24, limit * 1e-4);
     let current = this.state;
     const solveTheta = (t: number, from: Snapshot): Snapshot | undefined => this.solveAtRotation(controlled, t, from);
+    let progressed = false;
     for (let k = 0; k < 600 && !this.ultimate; k++) {
       const target = Math.min(theta + dTheta, limit);
       const next = solveTheta(target, current);
@@ -516,9 +526,28 @@ class CapacityAnalysis extends CapacityState {
           dTheta /= 4;
           continue;
         }
+        // The controlled hinge cannot rotate further while another localised hinge sits at the top
+        // of its curve (its moment can rise no more): that one must rotate at falling load, so control
+        // passes to it — the newest hinge that has not been tried from this state.
+        const tried = new Set(progressed ? [] : switchTo?.tried ?? []);
+        tried.add(controlled);
+        let other = -1;
+        for (let i = hinges.length - 1; i >= 0 && other < 0; i--) if (!tried.has(i) && hinges[i]!.law.ultimateLocalised > 0) other = i;
+        if (other >= 0) {
+          this.state = current;
+          this.rotationControl({ hinge: other, tried });
+          return;
+        }
+        if (hinges.length > this.r) {
+          // A mechanism whose hinges soften together (flat-topped curves past their tops): no hinge
+          // can be driven on alone. The member carries no more load; the curve ends at the largest
+          // deflection reached, which understates the deformation capacity (the safe side for μΔ).
+          this.finishUltimate(controlled, current, `the member is a mechanism (${hinges.length} hinges, ${this.r} redundant moment${this.r === 1 ? '' : 's'}) whose hinges soften together past the peak; the descending branch is followed to θ = ${(theta * 1000).toFixed(2)} mrad of ${peakWords} and the ultimate is taken there, on the safe side for the deflection`);
+          break;
+        }
         this.converged = false;
         this.status = `not converged past the peak at θ = ${(target * 1000).toFixed(2)} mrad of ${peakWords}`;
-        this.failureCause = 'analysis stopped past the peak load (not converged)';
+        this.failureCause = `analysis stopped past the peak load (not converged: no equilibrium of the hinges' moments with their curves at θ = ${(target * 1000).toFixed(2)} mrad of ${peakWords})`;
         break;
       }
       // Events in this step: searched on the controlled rotation, to 1e-6 of it.
@@ -544,6 +573,7 @@ class CapacityAnalysis extends CapacityState {
       }
       theta = target;
       current = next;
+      progressed = true;
       this.commitState(current);
       this.record(current, 'mechanism');
       dTheta = Math.min(dTheta * 1.5, Math.max((limit - theta) / 8, limit * 1e-4));
@@ -554,7 +584,7 @@ class CapacityAnalysis extends CapacityState {
     }
     if (!this.ultimate && this.converged) {
       this.converged = false;
-      this.status = 'not converged: the descending branch did not end within its step budget';
+      this.status = `not converged: the descending branch of ${peakWords} did not end within its step budget`;
       this.failureCause = this.status;
     }
   }

@@ -151,6 +151,9 @@ export class Equations {
   private readonly srcHb: Int32Array;
   private readonly srcHw: Float64Array;
 
+  /** The curvature scale of each zone (curvatureScale), 1/mm, computed once. */
+  private readonly zoneScale: Float64Array;
+
   /**
    * Shear flexibility s, mm per N·mm: the deflection from shear strain is s·(M(x) − M(0)) (γ = s·V),
    * added to the deflected shape only (core/member/spread.ts shearFlexibility); 0: flexure only.
@@ -171,6 +174,7 @@ export class Equations {
     this.srcHa = new Int32Array(this.n);
     this.srcHb = new Int32Array(this.n);
     this.srcHw = new Float64Array(this.n);
+    this.zoneScale = Float64Array.from(beam.zones, curvatureScale);
   }
 
   /** Windows of every station for the shift a_l of its zone (in one sense), not crossing a support that takes a moment. */
@@ -374,7 +378,7 @@ export class Equations {
     const residual = new Array<number>(size).fill(0);
     const jacobian = Array.from({ length: size }, () => new Array<number>(size).fill(0));
     const scale = new Array<number>(size).fill(0);
-    const M = this.moments(redundants, lambda);
+    this.moments(redundants, lambda);
     this.sensitivities();
     const x = beam.x;
     const fields = beam.redundantFields;
@@ -390,8 +394,7 @@ export class Equations {
         this.segment(k, memory, secant, seg);
         const w0 = seg.i0 - seg.i1;
         const w1 = seg.i1;
-        const zone = beam.zones[beam.segmentZone[k]!]!;
-        const magnitude = h * (0.5 * (Math.abs(seg.phiA) + Math.abs(seg.phiB)) + CURVATURE_FLOOR * curvatureScale(zone));
+        const magnitude = h * (0.5 * (Math.abs(seg.phiA) + Math.abs(seg.phiB)) + CURVATURE_FLOOR * this.zoneScale[beam.segmentZone[k]!]!);
         for (let i = 0; i < r; i++) {
           const ma = fields[i]![k]!;
           const mb = fields[i]![k + 1]!;

@@ -10,6 +10,11 @@
  * style that follow each other become one path, and a clip is written only when a drawing reaches
  * outside it (chart.js clips to the plot area while drawing the data).
  *
+ * A clip is written as a nested `<svg>` viewport around the elements it applies to (consecutive
+ * elements with the same clip share one), not as a `clip-path`: pdfmake's SVG reader draws a
+ * `clip-path` as a transparency group with a soft mask (a form, a mask and their streams per
+ * element), but a nested viewport as a plain clipping rectangle. The printed chart is the same.
+ *
  * Supported: the subset of CanvasRenderingContext2D that chart.js 4 and the overlay plugin use —
  * paths (moveTo, lineTo, rect, arc, bezierCurveTo, quadraticCurveTo, closePath), fill, stroke,
  * fillRect, strokeRect, fillText, strokeText (as fill), measureText, rectangular clips,
@@ -102,7 +107,8 @@ export class SvgCanvasContext {
   private path: string[] = [];
   private pathBounds: Rect | null = null;
   private readonly body: string[] = [];
-  private readonly clips = new Map<string, string>();
+  /** The clip (rectangle key, see clipFor) of the nested viewport open at the end of `body`, or ''. */
+  private openClip = '';
   /** The last stroked path element, kept open so that following strokes in the same style join it. */
   private pendingStroke: { attrs: string; d: string[]; clip: string } | null = null;
 
@@ -258,24 +264,40 @@ export class SvgCanvasContext {
     this.state.clip = c ? { x0: Math.max(c.x0, b.x0), y0: Math.max(c.y0, b.y0), x1: Math.min(c.x1, b.x1), y1: Math.min(c.y1, b.y1) } : b;
   }
 
-  /** The clip-path reference an element with these bounds needs ('' when it lies inside the clip). */
+  /**
+   * The clip an element with these bounds needs, as the key `x y width height` of the clipping
+   * rectangle ('' when the element lies inside the clip or nothing clips).
+   */
   private clipFor(bounds: Rect): string {
     const c = this.state.clip;
     if (!c || (bounds.x0 >= c.x0 && bounds.y0 >= c.y0 && bounds.x1 <= c.x1 && bounds.y1 <= c.y1)) return '';
-    const key = `${num(c.x0)} ${num(c.y0)} ${num(Math.max(0, c.x1 - c.x0))} ${num(Math.max(0, c.y1 - c.y0))}`;
-    let id = this.clips.get(key);
-    if (!id) {
-      id = `c${this.clips.size}`;
-      this.clips.set(key, id);
+    return `${num(c.x0)} ${num(c.y0)} ${num(Math.max(0, c.x1 - c.x0))} ${num(Math.max(0, c.y1 - c.y0))}`;
+  }
+
+  /**
+   * Appends an element clipped to `clip` (a key from clipFor): inside a nested viewport of the clip's
+   * rectangle, shared with the elements before it when they have the same clip. A viewport of no
+   * area shows nothing, so such an element is left out.
+   */
+  private emit(element: string, clip: string): void {
+    if (clip !== this.openClip) {
+      if (this.openClip !== '') this.body.push('</svg>');
+      this.openClip = '';
+      if (clip !== '') {
+        const [x, y, w, h] = clip.split(' ');
+        if (Number(w) <= 0 || Number(h) <= 0) return;
+        this.body.push(`<svg x="${x}" y="${y}" width="${w}" height="${h}" viewBox="${clip}" overflow="hidden">`);
+        this.openClip = clip;
+      }
     }
-    return ` clip-path="url(#${id})"`;
+    this.body.push(element);
   }
 
   // --- painting --------------------------------------------------------------------------------
   private flushStroke(): void {
     const s = this.pendingStroke;
     if (!s) return;
-    this.body.push(`<path fill="none"${s.attrs} d="${s.d.join('')}"${s.clip}/>`);
+    this.emit(`<path fill="none"${s.attrs} d="${s.d.join('')}"/>`, s.clip);
     this.pendingStroke = null;
   }
 
@@ -292,7 +314,7 @@ export class SvgCanvasContext {
     const paint = svgPaint(this.state.fillStyle);
     if (paint.opacity * this.state.globalAlpha === 0) return;
     this.flushStroke();
-    this.body.push(`<path fill=${this.paint(this.state.fillStyle).replace(' opacity=', ' fill-opacity=')} d="${this.path.join('')}"${this.clipFor(this.pathBounds)}/>`);
+    this.emit(`<path fill=${this.paint(this.state.fillStyle).replace(' opacity=', ' fill-opacity=')} d="${this.path.join('')}"/>`, this.clipFor(this.pathBounds));
   }
 
   stroke(): void {
@@ -372,7 +394,7 @@ export class SvgCanvasContext {
     // with its font, and reverses right-to-left pieces itself.
     let cursor = px;
     for (const piece of textPieces(value, this.fonts, bold)) {
-      this.body.push(`<text x="${num(cursor)}" y="${num(py)}" font-family="${escapeXml(piece.family)}" font-size="${num(size)}"${weight} ${fill}${transform}${clip}>${escapeXml(piece.text)}</text>`);
+      this.emit(`<text x="${num(cursor)}" y="${num(py)}" font-family="${escapeXml(piece.family)}" font-size="${num(size)}"${weight} ${fill}${transform}>${escapeXml(piece.text)}</text>`, clip);
       cursor += textWidth(piece.text, this.fonts, bold) * size;
     }
   }
@@ -384,10 +406,7 @@ export class SvgCanvasContext {
   /** The drawing as an SVG document of the canvas size (CSS pixels = points in the report). */
   toSvg(): string {
     this.flushStroke();
-    const defs = this.clips.size === 0 ? '' : `<defs>${[...this.clips].map(([rect, id]) => {
-      const [x, y, w, h] = rect.split(' ');
-      return `<clipPath id="${id}"><rect x="${x}" y="${y}" width="${w}" height="${h}"/></clipPath>`;
-    }).join('')}</defs>`;
-    return `<svg xmlns="http://www.w3.org/2000/svg" width="${num(this.canvas.width)}" height="${num(this.canvas.height)}" viewBox="0 0 ${num(this.canvas.width)} ${num(this.canvas.height)}">${defs}${this.body.join('')}</svg>`;
+    const close = this.openClip === '' ? '' : '</svg>';
+    return `<svg xmlns="http://www.w3.org/2000/svg" width="${num(this.canvas.width)}" height="${num(this.canvas.height)}" viewBox="0 0 ${num(this.canvas.width)} ${num(this.canvas.height)}">${this.body.join('')}${close}</svg>`;
   }
 }

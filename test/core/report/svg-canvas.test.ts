@@ -31,7 +31,7 @@ describe('SvgCanvasContext', () => {
       + '<path fill="none" stroke="#2364aa" stroke-width="1.5" d="M0 30L100 30"/></svg>');
   });
 
-  it('writes a clip only for drawings that reach outside it, and applies transforms to the path', () => {
+  it('writes a clip only for drawings that reach outside it, as a nested viewport, and applies transforms to the path', () => {
     const ctx = new SvgCanvasContext(100, 100, fonts);
     ctx.save();
     ctx.beginPath();
@@ -43,11 +43,31 @@ describe('SvgCanvasContext', () => {
     ctx.fillRect(20, 20, 10, 10);
     ctx.restore();
     ctx.fillRect(0, 0, 5, 5);
-    expect(ctx.toSvg()).toBe('<svg xmlns="http://www.w3.org/2000/svg" width="100" height="100" viewBox="0 0 100 100"><defs><clipPath id="c0"><rect x="10" y="10" width="50" height="50"/></clipPath></defs>'
+    expect(ctx.toSvg()).toBe('<svg xmlns="http://www.w3.org/2000/svg" width="100" height="100" viewBox="0 0 100 100">'
       + '<path fill="#d2691e" fill-opacity="0.5" d="M20 20L30 20L30 30L20 30Z"/>'
-      + '<path fill="#d2691e" fill-opacity="0.5" d="M60 20L70 20L70 30L60 30Z" clip-path="url(#c0)"/>'
+      + '<svg x="10" y="10" width="50" height="50" viewBox="10 10 50 50" overflow="hidden"><path fill="#d2691e" fill-opacity="0.5" d="M60 20L70 20L70 30L60 30Z"/></svg>'
       // restore() brought back the fill style saved before: black.
       + '<path fill="#000000" d="M0 0L5 0L5 5L0 5Z"/></svg>');
+  });
+
+  it('puts consecutive elements with the same clip in one viewport and leaves out what a clip of no area hides', () => {
+    const ctx = new SvgCanvasContext(100, 100, fonts);
+    ctx.beginPath();
+    ctx.rect(0, 0, 40, 40);
+    ctx.clip();
+    ctx.fillRect(30, 30, 20, 20);
+    ctx.strokeStyle = '#2364aa';
+    ctx.beginPath();
+    ctx.moveTo(0, 10);
+    ctx.lineTo(90, 10);
+    ctx.stroke();
+    ctx.beginPath();
+    ctx.rect(50, 50, 10, 10); // outside the clip: the clip has no area now
+    ctx.clip();
+    ctx.fillRect(0, 0, 100, 100);
+    expect(ctx.toSvg()).toBe('<svg xmlns="http://www.w3.org/2000/svg" width="100" height="100" viewBox="0 0 100 100">'
+      + '<svg x="0" y="0" width="40" height="40" viewBox="0 0 40 40" overflow="hidden"><path fill="#000000" d="M30 30L50 30L50 50L30 50Z"/>'
+      + '<path fill="none" stroke="#2364aa" stroke-width="1" d="M0 10L90 10"/></svg></svg>');
   });
 
   it('places text by the fonts’ advance widths: centred, on the middle of the em box', () => {

@@ -1,5 +1,7 @@
 import { defineConfig } from 'vitest/config';
 import vue from '@vitejs/plugin-vue';
+import { readFileSync, readdirSync } from 'node:fs';
+import { availableParallelism } from 'node:os';
 import { fileURLToPath } from 'node:url';
 
 const electronStub = fileURLToPath(new URL('./test/app/electron-stub.ts', import.meta.url));
@@ -13,20 +15,51 @@ const electronStub = fileURLToPath(new URL('./test/app/electron-stub.ts', import
 const BUDGET = { testTimeout: 120_000, hookTimeout: 240_000 } as const;
 
 /**
- * One Vitest run, four projects that mirror where code runs:
- * core (pure, Node), app (Node with a stubbed `electron`), renderer (happy-dom + Vue),
+ * Worker processes: one per core, at least two. Vitest's own default is one fewer than the cores,
+ * which on the 2-core machine ran every file on a single worker while the second core idled.
+ */
+const WORKERS = Math.max(2, availableParallelism());
+
+const CORE_TESTS = ['test/core', 'test/references'];
+
+/**
+ * Core test files that replace a module (`vi.mock`, `vi.doMock`). The other core files share one
+ * module graph per worker (see the `core` project), where a replaced module would reach every file
+ * after this one through the modules that import it; these run isolated instead (`core-isolated`).
+ */
+const MOCKING_CORE_TESTS = CORE_TESTS.flatMap((folder) => readdirSync(fileURLToPath(new URL(folder, import.meta.url)), { recursive: true, encoding: 'utf8' })
+  .filter((file) => file.endsWith('.test.ts'))
+  .map((file) => `${folder}/${file.replaceAll('\\', '/')}`)
+  .filter((file) => /\bvi\.(?:do)?[mM]ock\(/.test(readFileSync(fileURLToPath(new URL(file, import.meta.url)), 'utf8'))));
+
+/**
+ * One Vitest run, projects that mirror where code runs: core (pure, Node; `core-isolated` for its
+ * files that replace a module), app (Node with a stubbed `electron`), renderer (happy-dom + Vue),
  * e2e (built web UI in Debian's Chromium through playwright-core).
  */
 export default defineConfig({
   test: {
+    maxWorkers: WORKERS,
     projects: [
       {
         test: {
           name: 'core',
           environment: 'node',
           ...BUDGET,
-          include: ['test/core/**/*.test.ts', 'test/references/**/*.test.ts'],
+          // Pure code: the files of a worker share one module graph instead of each importing the
+          // engine afresh (importing, not testing, took most of a small file's time).
+          isolate: false,
+          include: CORE_TESTS.map((folder) => `${folder}/**/*.test.ts`),
+          exclude: MOCKING_CORE_TESTS,
           benchmark: { include: ['test/bench/**/*.bench.ts'] },
+        },
+      },
+      {
+        test: {
+          name: 'core-isolated',
+          environment: 'node',
+          ...BUDGET,
+          include: MOCKING_CORE_TESTS.length > 0 ? MOCKING_CORE_TESTS : ['test/core/no-mocking-tests'],
         },
       },
       {

@@ -6,13 +6,13 @@
  * Screenshots go to test-artifacts/e2e/.
  */
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { openApp, snap, startE2e, type E2eContext } from './support/environment.ts';
 
 let context: E2eContext;
 
 beforeAll(async () => {
-  context = await startE2e();
+  context = await startE2e(inject('e2e'));
 });
 
 afterAll(async () => {

@@ -8,7 +8,7 @@ import { execFileSync } from 'node:child_process';
 import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { ARTIFACTS, openApp, snap, startE2e, type E2eContext } from './support/environment.ts';
 
 let context: E2eContext;
@@ -18,7 +18,7 @@ let problems: string[];
 const allCurrent = (p: Page) => p.waitForFunction(() => document.querySelector('[data-testid=analysis-status]')?.textContent?.includes('All results current'), undefined, { timeout: 120_000 });
 
 beforeAll(async () => {
-  context = await startE2e();
+  context = await startE2e(inject('e2e'));
   ({ page, problems } = await openApp(context));
   await page.getByTestId('open-demo').click();
   await allCurrent(page);

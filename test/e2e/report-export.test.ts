@@ -6,7 +6,7 @@
 import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { analyzeProject } from '../../core/analysis.ts';
 import { demoProjectSI } from '../../core/project/demo.ts';
 import { serializeProject } from '../../core/project/file.ts';
@@ -25,7 +25,7 @@ interface HostView {
 const host = (p: Page) => p.evaluate(() => (window as unknown as { hingelineTestHost: HostView }).hingelineTestHost);
 
 beforeAll(async () => {
-  context = await startE2e();
+  context = await startE2e(inject('e2e'));
   ({ page, problems } = await openApp(context));
   await page.getByTestId('open-demo-si').click();
   await page.waitForFunction(() => document.querySelector('[data-testid=analysis-status]')?.textContent?.includes('All results current'), undefined, { timeout: 120_000 });

@@ -7,7 +7,7 @@ import { execFileSync } from 'node:child_process';
 import { existsSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { ARTIFACTS, openApp, snap, startE2e, type E2eContext } from './support/environment.ts';
 
 let context: E2eContext;
@@ -38,7 +38,7 @@ async function chartPixels(p: Page): Promise<string> {
 }
 
 beforeAll(async () => {
-  context = await startE2e();
+  context = await startE2e(inject('e2e'));
   ({ page, problems } = await openApp(context));
 });
 

@@ -8,7 +8,7 @@ import { existsSync, mkdirSync, readdirSync, statSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { chromium, type Browser, type Page } from 'playwright-core';
-import { startWebServer, type RunningWebServer } from '../../../build/scripts/web-server.ts';
+import { startWebServer } from '../../../build/scripts/web-server.ts';
 import type { FakeHostSeed } from '../../../renderer/src/host/fake-host.ts';
 
 export const ROOT = resolve(fileURLToPath(new URL('../../..', import.meta.url)));
@@ -44,18 +44,56 @@ export function ensureWebBuild(): void {
 }
 
 export interface E2eContext {
-  readonly server: RunningWebServer;
+  /** The web build's server (its address). */
+  readonly server: { readonly url: string };
   readonly browser: Browser;
   close(): Promise<void>;
 }
 
-/** Build, serve and launch (call in beforeAll). */
-export async function startE2e(): Promise<E2eContext> {
+/** A browser and a server started once for every e2e file (test/e2e/global-setup.ts). */
+export interface SharedE2e {
+  /** Where test files connect to the browser (playwright's WebSocket endpoint). */
+  readonly browserEndpoint: string;
+  /** `http://127.0.0.1:<port>/` */
+  readonly serverUrl: string;
+}
+
+const LAUNCH = { executablePath: CHROMIUM, headless: true, args: CHROMIUM_ARGS };
+
+/**
+ * Starts Chromium and the web build's server once, for all e2e files: each file connects to them
+ * (`startE2e(inject('e2e'))`) instead of launching its own browser. `close` stops both.
+ */
+export async function startSharedE2e(): Promise<SharedE2e & { close(): Promise<void> }> {
   requireChromium();
   ensureWebBuild();
   mkdirSync(ARTIFACTS, { recursive: true });
   const server = await startWebServer(WEB_ROOT, 0);
-  const browser = await chromium.launch({ executablePath: CHROMIUM, headless: true, args: CHROMIUM_ARGS });
+  const browser = await chromium.launchServer(LAUNCH);
+  return {
+    browserEndpoint: browser.wsEndpoint(),
+    serverUrl: server.url,
+    async close() {
+      await browser.close();
+      await server.close();
+    },
+  };
+}
+
+/**
+ * Build, serve and launch (call in beforeAll). With `shared` (from the e2e global setup), connects
+ * to its browser and server instead; `close` then closes this file's pages and disconnects.
+ */
+export async function startE2e(shared?: SharedE2e): Promise<E2eContext> {
+  if (shared) {
+    const browser = await chromium.connect(shared.browserEndpoint);
+    return { server: { url: shared.serverUrl }, browser, close: () => browser.close() };
+  }
+  requireChromium();
+  ensureWebBuild();
+  mkdirSync(ARTIFACTS, { recursive: true });
+  const server = await startWebServer(WEB_ROOT, 0);
+  const browser = await chromium.launch(LAUNCH);
   return {
     server,
     browser,

@@ -7,7 +7,7 @@
 import { toChartJsConfig } from '../charts/chartjs-config.ts';
 import type { ChartSpec } from '../charts/types.ts';
 import type { ReportFontSet } from './scripts.ts';
-import { SvgCanvasContext } from './svg-canvas.ts';
+import { RecordedPath, SvgCanvasContext } from './svg-canvas.ts';
 
 /** The parts of chart.js this needs: the Chart class (with its registerables registered) and BasicPlatform. */
 export interface ChartJsLibrary {
@@ -22,10 +22,22 @@ export interface ChartJsLibrary {
 export function chartSvg(chartJs: ChartJsLibrary, spec: ChartSpec, width: number, height: number, fonts: ReportFontSet): string {
   const context = new SvgCanvasContext(Math.round(width), Math.round(height), fonts);
   const config = toChartJsConfig(spec, { fontFamily: fonts.primary.family, devicePixelRatio: 1, platform: chartJs.BasicPlatform });
-  const chart = new chartJs.Chart(context.canvas, config as never);
+  // Where the host has a Path2D (a browser), chart.js builds each line as one and strokes it in one
+  // call; the host's Path2D cannot be read back, so the recording canvas lends its own while the
+  // chart is drawn (synchronously, in the constructor: the report's charts are not animated).
+  const host = globalThis as { Path2D?: unknown };
+  const own = Object.prototype.hasOwnProperty.call(host, 'Path2D');
+  const previous = host.Path2D;
+  host.Path2D = RecordedPath;
   try {
-    return context.toSvg();
+    const chart = new chartJs.Chart(context.canvas, config as never);
+    try {
+      return context.toSvg();
+    } finally {
+      chart.destroy();
+    }
   } finally {
-    chart.destroy();
+    if (own) host.Path2D = previous;
+    else delete host.Path2D;
   }
 }

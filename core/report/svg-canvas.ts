@@ -89,6 +89,25 @@ export function parseFont(font: string): { size: number; bold: boolean; family: 
   return { size, bold, family: m ? m[2]!.trim() : 'sans-serif' };
 }
 
+/**
+ * A path built apart from the canvas and drawn with `stroke(path)`: the recording canvas's Path2D.
+ * chart.js builds each line's path as a `Path2D` where the host has one (a browser, the app's
+ * report worker) and strokes it in one call; a browser's own Path2D cannot be read back, so
+ * `chartSvg` lends this class as `Path2D` while chart.js draws (in Node chart.js draws on the
+ * context's own path).
+ */
+export class RecordedPath {
+  /** The calls made, in order, with their arguments (canvas units, before the context's transform). */
+  readonly calls: { readonly name: 'moveTo' | 'lineTo' | 'bezierCurveTo' | 'quadraticCurveTo' | 'arc' | 'rect' | 'closePath'; readonly args: readonly (number | boolean)[] }[] = [];
+  moveTo(x: number, y: number): void { this.calls.push({ name: 'moveTo', args: [x, y] }); }
+  lineTo(x: number, y: number): void { this.calls.push({ name: 'lineTo', args: [x, y] }); }
+  bezierCurveTo(c1x: number, c1y: number, c2x: number, c2y: number, x: number, y: number): void { this.calls.push({ name: 'bezierCurveTo', args: [c1x, c1y, c2x, c2y, x, y] }); }
+  quadraticCurveTo(cx: number, cy: number, x: number, y: number): void { this.calls.push({ name: 'quadraticCurveTo', args: [cx, cy, x, y] }); }
+  arc(x: number, y: number, radius: number, start: number, end: number, counterclockwise = false): void { this.calls.push({ name: 'arc', args: [x, y, radius, start, end, counterclockwise] }); }
+  rect(x: number, y: number, w: number, h: number): void { this.calls.push({ name: 'rect', args: [x, y, w, h] }); }
+  closePath(): void { this.calls.push({ name: 'closePath', args: [] }); }
+}
+
 /** The fake `<canvas>` chart.js asks for its context and size. */
 export interface SvgCanvasElement {
   width: number;
@@ -256,8 +275,9 @@ export class SvgCanvasContext {
   }
 
   // --- clipping --------------------------------------------------------------------------------
-  /** Clips to the current path's bounding box (chart.js clips to rectangles only). */
-  clip(): void {
+  /** Clips to the bounding box of the current path, or of `path` when given (chart.js clips to rectangles only). */
+  clip(path?: unknown): void {
+    if (path !== undefined && typeof path !== 'string') return this.withPath(path, () => this.clip());
     const b = this.pathBounds;
     if (!b) return;
     const c = this.state.clip;
@@ -293,6 +313,21 @@ export class SvgCanvasContext {
     this.body.push(element);
   }
 
+  /**
+   * Runs `paint` with `path` (a RecordedPath) as the current path, then brings the current path back.
+   * Throws for any other path object: a host's own Path2D cannot be read, and a chart that silently
+   * lost its lines would print wrong.
+   */
+  private withPath(path: unknown, paint: () => void): void {
+    if (!(path instanceof RecordedPath)) throw new Error('The report chart canvas was given a path it cannot read (draw through chartSvg, which lends its own Path2D).');
+    const [saved, bounds] = [this.path, this.pathBounds];
+    this.beginPath();
+    for (const { name, args } of path.calls) (this[name] as (...a: (number | boolean)[]) => void)(...args);
+    paint();
+    this.path = saved;
+    this.pathBounds = bounds;
+  }
+
   // --- painting --------------------------------------------------------------------------------
   private flushStroke(): void {
     const s = this.pendingStroke;
@@ -307,7 +342,9 @@ export class SvgCanvasContext {
     return alpha < 1 ? `"${colour}" opacity="${num(alpha)}"` : `"${colour}"`;
   }
 
-  fill(): void {
+  /** Fills the current path, or `path` when given (a fill rule such as 'evenodd' is accepted and ignored). */
+  fill(path?: unknown): void {
+    if (path !== undefined && typeof path !== 'string') return this.withPath(path, () => this.fill());
     if (this.path.length === 0 || !this.pathBounds) return;
     // Nothing to fill in a path without area (chart.js fills the line samples of a legend too).
     if (this.pathBounds.x1 - this.pathBounds.x0 < 1e-9 || this.pathBounds.y1 - this.pathBounds.y0 < 1e-9) return;
@@ -317,7 +354,9 @@ export class SvgCanvasContext {
     this.emit(`<path fill=${this.paint(this.state.fillStyle).replace(' opacity=', ' fill-opacity=')} d="${this.path.join('')}"/>`, this.clipFor(this.pathBounds));
   }
 
-  stroke(): void {
+  /** Strokes the current path, or `path` when given. */
+  stroke(path?: unknown): void {
+    if (path !== undefined) return this.withPath(path, () => this.stroke());
     if (this.path.length === 0 || !this.pathBounds) return;
     const paint = svgPaint(this.state.strokeStyle);
     if (paint.opacity * this.state.globalAlpha === 0) return;

@@ -5,6 +5,7 @@
  */
 import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
+import { inflateSync } from 'node:zlib';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { analyzeProject } from '../../core/analysis.ts';
@@ -23,6 +24,26 @@ interface HostView {
   exports: { name: string; mime: string; byteLength: number }[];
 }
 const host = (p: Page) => p.evaluate(() => (window as unknown as { hingelineTestHost: HostView }).hingelineTestHost);
+
+/** Path operators (move, line, curve, rectangle) and painting operators (stroke, fill) in the PDF's content streams. */
+function drawingOperators(pdf: Buffer): Record<'m' | 'l' | 'c' | 're' | 'S' | 'f', number> {
+  const counts = { m: 0, l: 0, c: 0, re: 0, S: 0, f: 0 };
+  const text = pdf.toString('latin1');
+  for (const stream of text.matchAll(/stream\r?\n/g)) {
+    const start = stream.index + stream[0].length;
+    // Page and form content only: font files (/Length1) and other typed streams (/Subtype) are skipped.
+    const dictionary = text.slice(text.lastIndexOf(' obj', stream.index), stream.index);
+    if (/\/Length1|\/Subtype/.test(dictionary)) continue;
+    let content: string;
+    try {
+      content = inflateSync(pdf.subarray(start, text.indexOf('endstream', start))).toString('latin1');
+    } catch {
+      continue; // not compressed: not page content (pdfmake compresses every page)
+    }
+    for (const op of Object.keys(counts) as (keyof typeof counts)[]) counts[op] += content.match(new RegExp(`(?<=\\s)${op}(?=\\s)`, 'g'))?.length ?? 0;
+  }
+  return counts;
+}
 
 beforeAll(async () => {
   context = await startE2e(inject('e2e'));
@@ -85,6 +106,10 @@ describe('PDF export in the app', () => {
     // (3 %: the load–deflection figures hold about twice the points since the curves follow their
     // descending branch and the member is integrated at 120 or more stations; 2.5 % measured.)
     expect(Math.abs(app.length - cli.length) / cli.length).toBeLessThan(0.03);
+    // Same drawings, segment for segment: the app's PDF once lost every chart's data lines (chart.js
+    // stroked them as a browser Path2D the recording canvas could not read) while its text matched
+    // and its size stayed within 3 %.
+    expect(drawingOperators(app)).toEqual(drawingOperators(cli));
     expect(app.toString('latin1').match(/\/Subtype \/Image/g)).toBeNull();
     expect(problems).toEqual([]);
   }, 600_000);

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { analyzeProject } from '../../../core/analysis.ts';
 import { loadDeflectionChart } from '../../../core/charts/load-deflection.ts';
 import { chartSvg } from '../../../core/report/chart-svg.ts';
-import { parseFont, svgPaint, SvgCanvasContext } from '../../../core/report/svg-canvas.ts';
+import { RecordedPath, parseFont, svgPaint, SvgCanvasContext } from '../../../core/report/svg-canvas.ts';
 import { reportTestProject } from './fixtures.ts';
 import { testFontSet } from './report-fonts.ts';
 
@@ -70,6 +70,40 @@ describe('SvgCanvasContext', () => {
       + '<path fill="none" stroke="#2364aa" stroke-width="1" d="M0 10L90 10"/></svg></svg>');
   });
 
+  it('strokes and fills a recorded path as it would the same path built on the canvas, and keeps the current path', () => {
+    const direct = new SvgCanvasContext(100, 100, fonts);
+    const recorded = new SvgCanvasContext(100, 100, fonts);
+    for (const ctx of [direct, recorded]) {
+      ctx.translate(10, 0);
+      ctx.strokeStyle = '#2364aa';
+      ctx.fillStyle = '#d2691e';
+      ctx.beginPath();
+      ctx.rect(0, 0, 5, 5);
+    }
+    direct.save();
+    direct.beginPath();
+    direct.moveTo(0, 0);
+    direct.lineTo(50, 40);
+    direct.bezierCurveTo(60, 40, 70, 50, 80, 90);
+    direct.closePath();
+    direct.stroke();
+    direct.fill();
+    direct.restore();
+    direct.beginPath();
+    direct.rect(0, 0, 5, 5);
+    const path = new RecordedPath();
+    path.moveTo(0, 0);
+    path.lineTo(50, 40);
+    path.bezierCurveTo(60, 40, 70, 50, 80, 90);
+    path.closePath();
+    recorded.stroke(path);
+    recorded.fill(path);
+    for (const ctx of [direct, recorded]) ctx.fill(); // the 5 × 5 square, the current path in both
+    expect(recorded.toSvg()).toBe(direct.toSvg());
+    expect(recorded.toSvg()).toContain('d="M10 0L60 40C70 40 80 50 90 90Z"');
+    expect(() => recorded.stroke({ moveTo: () => undefined })).toThrow(/cannot read/);
+  });
+
   it('places text by the fonts’ advance widths: centred, on the middle of the em box', () => {
     const ctx = new SvgCanvasContext(200, 40, fonts);
     ctx.font = '10px Roboto';
@@ -113,6 +147,25 @@ describe('chartSvg: a report chart drawn by chart.js on the recording canvas', (
     const text = [...svg.matchAll(/<text[^>]*>([^<]*)<\/text>/g)].map((m) => m[1]).join(' | ');
     for (const words of [spec.title, spec.x.label, spec.y.label, ...spec.markers.filter((m) => m.label !== '').map((m) => m.label)]) expect(text).toContain(words);
     expect(svg).not.toMatch(/NaN|Infinity/);
+  });
+
+  it('lends chart.js its own Path2D while a chart is drawn, as a browser host would have one, and gives the global back', () => {
+    // A chart library drawing as chart.js does in a browser: the line built as a Path2D and stroked in one call.
+    class BrowserLikeChart {
+      constructor(canvas: { getContext(kind: string): SvgCanvasContext | null }) {
+        const ctx = canvas.getContext('2d')!;
+        const line = new (globalThis as unknown as { Path2D: new () => RecordedPath }).Path2D();
+        line.moveTo(10, 90);
+        line.lineTo(90, 10);
+        ctx.strokeStyle = '#2364aa';
+        ctx.stroke(line);
+      }
+      destroy(): void {}
+    }
+    const before = (globalThis as { Path2D?: unknown }).Path2D;
+    const svg = chartSvg({ Chart: BrowserLikeChart, BasicPlatform } as never, spec, 100, 100, fonts);
+    expect(svg).toContain('<path fill="none" stroke="#2364aa" stroke-width="1" d="M10 90L90 10"/>');
+    expect((globalThis as { Path2D?: unknown }).Path2D).toBe(before);
   });
 
   it('is small and deterministic', () => {

@@ -6,6 +6,7 @@ import { existsSync } from 'node:fs';
 import { readFile, stat } from 'node:fs/promises';
 import { dirname, resolve } from 'node:path';
 import { assertWritableTarget, writeFileAtomic } from '../main/atomic-write.ts';
+import { EXIT } from './args.ts';
 
 export interface CliIo {
   stdout(text: string): void;
@@ -69,6 +70,9 @@ export function nodeIo(): CliIo {
     resolvePath: (path) => resolve(path),
     signal: controller.signal,
     withImmediateInterrupt: async (work) => {
+      // Ctrl+C came before this work began (while the file was read and checked, slow for a large
+      // project on a busy machine): honour it now instead of running the work to its end.
+      if (controller.signal.aborted) process.exit(EXIT.interrupted);
       // Without a listener Node restores the default action of SIGINT: the process ends at once.
       const listening = process.listeners('SIGINT').includes(onInterrupt);
       if (listening) process.off('SIGINT', onInterrupt);

@@ -95,6 +95,9 @@ describe('the hingeline command', () => {
     // Ended by the interrupt (status 130 in a shell), not by finishing: no results were printed.
     expect(code === 130 || signal === 'SIGINT').toBe(true);
     expect(stdout).toBe('');
-    expect(seconds).toBeLessThan(1);
+    // Stopped, not finished: the 1,000 members take far longer. (A bound for a busy machine, where the
+    // parent may hear of the exit late; the interrupt arrives while the file is still being read
+    // there, and the command then stops before the analysis begins.)
+    expect(seconds).toBeLessThan(10);
   }, 60_000);
 });

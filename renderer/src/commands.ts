@@ -9,6 +9,8 @@ import { revertFocusedField } from './composables/field-history.ts';
 import { getHost, RESULTS_CAUTION, type MenuCommand, type OpenedFile } from './host/index.ts';
 import { addMemberWithOwnSection, duplicateMember, deleteMember } from './project/edits.ts';
 import { newMember } from './project/factories.ts';
+import { addContinuousMember, deleteContinuousMember, duplicateContinuousMember, newContinuousMember } from './project/continuous-edits.ts';
+import { useContinuousStore } from './stores/continuous.ts';
 import { shortcutsFor } from './project/shortcuts.ts';
 import { useAnalysisStore } from './stores/analysis.ts';
 import { ProjectFileError, useDocumentStore } from './stores/document.ts';
@@ -27,6 +29,7 @@ export function useCommands() {
   const host = getHost();
   const documentStore = useDocumentStore();
   const analysis = useAnalysisStore();
+  const continuous = useContinuousStore();
   const workspace = useWorkspaceStore();
 
   function fail(what: string, error: unknown): void {
@@ -60,6 +63,7 @@ export function useCommands() {
 
   function afterOpen(): void {
     analysis.reset();
+    continuous.reset();
     workspace.resetForDocument();
     const first = documentStore.project?.members[0];
     workspace.selectedMemberId = first?.id ?? null;
@@ -138,6 +142,7 @@ export function useCommands() {
     if (choice === 'cancel') return;
     documentStore.createNew(choice.startsWith('us') ? 'us' : 'si', choice.endsWith('en') ? 'EN 1992-1-1' : 'ACI 318-19');
     analysis.reset();
+    continuous.reset();
     workspace.resetForDocument();
     const first = documentStore.project?.members[0];
     if (first) workspace.openMember(first.id);
@@ -238,6 +243,53 @@ export function useCommands() {
     workspace.notify('info', `Deleted ${member.name}. Undo (Ctrl+Z) brings it back.`);
   }
 
+  /**
+   * Adds a continuous beam (two spans on pins) after the continuous member open, else at the end.
+   * Its zones use the section of the member open (else the first section): a continuous beam
+   * shares sections like the demo's, and its Section tab is the member's section library.
+   */
+  function addContinuous(): void {
+    const project = documentStore.project;
+    if (!project) return;
+    const open = workspace.view === 'member' ? workspace.selectedMemberId : null;
+    const single = project.members.find((m) => m.id === open);
+    const multi = project.continuousMembers?.find((m) => m.id === open);
+    const sectionId = multi?.zones[0]?.sectionId ?? single?.zones[0]?.sectionId ?? project.sections[0]?.id;
+    if (!sectionId) {
+      workspace.notify('error', 'Add a section to the project before adding members.');
+      return;
+    }
+    const member = newContinuousMember(project, sectionId);
+    documentStore.edit(`Add continuous beam ${member.name}`, (p) => addContinuousMember(p, member, multi?.id));
+    workspace.openMember(member.id);
+  }
+
+  function duplicateContinuous(memberId: string): void {
+    let copyId: string | null = null;
+    documentStore.edit('Duplicate continuous beam', (p) => {
+      const result = duplicateContinuousMember(p, memberId);
+      copyId = result.memberId;
+      return result.project;
+    });
+    if (copyId) workspace.openMember(copyId);
+  }
+
+  function removeContinuous(memberId: string): void {
+    const project = documentStore.project;
+    const list = project?.continuousMembers ?? [];
+    const member = list.find((m) => m.id === memberId);
+    if (!project || !member) return;
+    const index = list.indexOf(member);
+    documentStore.edit(`Delete continuous beam ${member.name}`, (p) => deleteContinuousMember(p, memberId));
+    const rest = documentStore.project?.continuousMembers ?? [];
+    const next = rest[Math.min(index, rest.length - 1)] ?? documentStore.project?.members[0];
+    if (workspace.selectedMemberId === memberId) {
+      if (next) workspace.openMember(next.id);
+      else workspace.showOverview();
+    }
+    workspace.notify('info', `Deleted ${member.name}. Undo (Ctrl+Z) brings it back.`);
+  }
+
   async function about(): Promise<void> {
     await workspace.ask({
       title: 'About Hingeline',
@@ -275,5 +327,5 @@ export function useCommands() {
     }
   }
 
-  return { run, shortcuts, open, openFile, openRecent, openDemo, createNew, save, exportCsv, exportPdf, undo, redo, addNewMember, duplicate, remove, about, confirmDiscard };
+  return { run, shortcuts, open, openFile, openRecent, openDemo, createNew, save, exportCsv, exportPdf, undo, redo, addNewMember, duplicate, remove, addContinuous, duplicateContinuous, removeContinuous, about, confirmDiscard };
 }

@@ -37,7 +37,7 @@ export function memberOwnMaterialIds(member: MemberDefinition): string[] {
 }
 
 /** The sections a member's zones use, in zone order, without repeats (missing ids are skipped). */
-export function memberSections(project: Project, member: MemberDefinition): SectionDefinition[] {
+export function memberSections(project: Project, member: Pick<MemberDefinition, 'zones'>): SectionDefinition[] {
   const ids = [...new Set(member.zones.map((zone) => zone.sectionId))];
   return ids.map((id) => project.sections.find((section) => section.id === id)).filter((s): s is SectionDefinition => s !== undefined);
 }
@@ -59,6 +59,31 @@ export function memberInputs(project: Project, memberId: string): readonly unkno
   const own = memberOwnMaterialIds(member).map((id) => project.materials.find((m) => m.id === id)).filter((m) => m !== undefined);
   // Zone section ids are part of the member; a section id that later appears must count as a change.
   return [member, project.info.codeBasis, project.settings, ...sections, ...sectionsMaterials(project, sections), ...own];
+}
+
+/**
+ * The inputs of a continuous member's analysis, compared by identity like `memberInputs`: the
+ * member, the code basis and settings, the sections of its zones and their materials. Null when
+ * the project has no continuous member with that id.
+ */
+export function continuousInputs(project: Project, memberId: string): readonly unknown[] | null {
+  const member = project.continuousMembers?.find((m) => m.id === memberId);
+  if (!member) return null;
+  const sections = memberSections(project, member);
+  return [member, project.info.codeBasis, project.settings, ...sections, ...sectionsMaterials(project, sections)];
+}
+
+/**
+ * The project a worker needs to analyse some continuous members: the whole list of continuous
+ * members (so that result paths keep their index in the file), no single-span members, and only
+ * the sections and materials of the members asked for.
+ */
+export function continuousSubproject(project: Project, memberIds: readonly string[]): Project {
+  const wanted = (project.continuousMembers ?? []).filter((m) => memberIds.includes(m.id));
+  const sectionIds = new Set(wanted.flatMap((m) => m.zones.map((z) => z.sectionId)));
+  const sections = project.sections.filter((s) => sectionIds.has(s.id));
+  const materialIds = new Set(sections.flatMap(sectionMaterialIds));
+  return { ...project, members: [], sections, materials: project.materials.filter((m) => materialIds.has(m.id)) };
 }
 
 /** True when two input lists hold the same objects in the same order. */
@@ -90,5 +115,6 @@ export function subproject(project: Project, memberIds: readonly string[]): Proj
   const sections = project.sections.filter((s) => sectionIds.has(s.id));
   const materialIds = new Set([...sections.flatMap(sectionMaterialIds), ...members.flatMap(memberOwnMaterialIds)]);
   const materials = project.materials.filter((m) => materialIds.has(m.id));
-  return { ...project, members, sections, materials };
+  // Continuous members are analysed on their own (stores/continuous.ts).
+  return { ...project, members, sections, materials, continuousMembers: [] };
 }

@@ -11,10 +11,10 @@ import { shapeHeight, webExtent } from '../../../core/section/build.ts';
 import { setIn, type PathKey } from './immutable.ts';
 import { duplicateOf, materialCopy, sectionCopy } from './factories.ts';
 
-type ListName = 'materials' | 'sections' | 'members';
+type ListName = 'materials' | 'sections' | 'members' | 'continuousMembers';
 
 function indexOf(project: Project, list: ListName, id: string): number {
-  const index = project[list].findIndex((item) => item.id === id);
+  const index = (project[list] ?? []).findIndex((item) => item.id === id);
   if (index < 0) throw new Error(`There is no ${list.slice(0, -1)} with id "${id}" in the project.`);
   return index;
 }

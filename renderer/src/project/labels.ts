@@ -81,7 +81,10 @@ export const SHAPE_LABELS: Readonly<Record<ShapeKind, string>> = {
   polygon: 'Polygon (outline points)',
 };
 
-export const STATUS_LABELS: Readonly<Record<MemberStatus | 'pending' | 'outdated', string>> = {
+/** Statuses a row or badge shows: a member's, not analysed, updating, and `review` (a continuous member checked by the engine but not yet by the code at every station). */
+export type BadgeStatus = MemberStatus | 'pending' | 'outdated' | 'review';
+
+export const STATUS_LABELS: Readonly<Record<BadgeStatus, string>> = {
   ok: 'OK',
   'check-fails': 'Check fails',
   brittle: 'Brittle',
@@ -89,7 +92,11 @@ export const STATUS_LABELS: Readonly<Record<MemberStatus | 'pending' | 'outdated
   'input-error': 'Input error',
   pending: 'Not analysed',
   outdated: 'Updating',
+  review: 'To review',
 };
+
+export const CONTINUOUS_SUPPORT_LABELS = { pinned: 'Pinned', fixed: 'Fixed', column: 'Column (spring)' } as const;
+export const COLUMN_FAR_END_LABELS = { fixed: 'Far end fixed (4EI/L)', pinned: 'Far end pinned (3EI/L)' } as const;
 
 export const CODE_BASIS_LABELS: Readonly<Record<CodeBasis, string>> = {
   'ACI 318-19': 'ACI 318-19',

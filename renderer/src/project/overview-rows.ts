@@ -6,26 +6,47 @@ import type { MemberKeyResults } from '../../../core/project/key-results.ts';
 import type { OverviewColumn, StatusFilter } from '../stores/workspace.ts';
 import type { MemberDefinition, UnitSystem } from '../../../core/project/types.ts';
 import { say } from '../../../core/units/phrase.ts';
+import type { ContinuousRowData } from './continuous-rows.ts';
 
-export type RowStatus = MemberKeyResults['status'] | 'pending' | 'outdated';
+export type RowStatus = MemberKeyResults['status'] | 'pending' | 'outdated' | 'review';
+
+/** What a row needs of its member: a single-span member's definition, or a continuous member's name and notes. */
+export type OverviewMember = MemberDefinition | Pick<MemberDefinition, 'id' | 'name' | 'notes'>;
 
 export interface OverviewRow {
-  readonly member: MemberDefinition;
+  readonly member: OverviewMember;
   readonly key: MemberKeyResults | null;
   readonly status: RowStatus;
+  /** A continuous member's row (project version 3): its governing span and picked results. */
+  readonly continuous?: ContinuousRowData;
 }
 
 /** Most severe first when sorting by status ascending. */
-export const STATUS_ORDER: Readonly<Record<RowStatus, number>> = { 'input-error': 0, 'not-converged': 1, 'check-fails': 2, brittle: 3, outdated: 4, pending: 5, ok: 6 };
+export const STATUS_ORDER: Readonly<Record<RowStatus, number>> = { 'input-error': 0, 'not-converged': 1, 'check-fails': 2, brittle: 3, review: 4, outdated: 5, pending: 6, ok: 7 };
 
 const collator = new Intl.Collator('en', { numeric: true, sensitivity: 'base' });
 
 export function sortValue(row: OverviewRow, column: OverviewColumn, units: UnitSystem = 'si'): number | string | null {
   const k = row.key;
+  const c = row.continuous;
+  if (c) {
+    switch (column) {
+      case 'name': return row.member.name;
+      case 'supports': return c.supportsText;
+      case 'span': return c.governingLength;
+      case 'displacementDuctility': return c.displacementDuctility;
+      case 'rotation': return c.rotationCapacity;
+      case 'deflection': return c.deflection?.deflection ?? null;
+      case 'utilisation': return c.deflection?.utilisation ?? null;
+      case 'governing': return say(c.governingMode, units);
+      case 'status': return STATUS_ORDER[row.status];
+      default: return null;
+    }
+  }
   switch (column) {
     case 'name': return row.member.name;
-    case 'supports': return row.member.supports;
-    case 'span': return row.member.span;
+    case 'supports': return 'supports' in row.member ? row.member.supports : null;
+    case 'span': return 'span' in row.member ? row.member.span : null;
     case 'yieldMoment': return k?.yieldMoment ?? null;
     case 'ultimateMoment': return k?.ultimateMoment ?? null;
     case 'curvatureDuctility': return k?.curvatureDuctility ?? null;
@@ -62,6 +83,7 @@ export function filterRows(list: readonly OverviewRow[], text: string, status: S
     if (needle === '') return true;
     return row.member.name.toLowerCase().includes(needle)
       || (row.key ? say(row.key.governingMode, units).toLowerCase().includes(needle) : false)
+      || (row.continuous ? say(row.continuous.governingMode, units).toLowerCase().includes(needle) : false)
       || (row.member.notes?.toLowerCase().includes(needle) ?? false);
   });
 }

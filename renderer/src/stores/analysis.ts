@@ -208,8 +208,8 @@ export const useAnalysisStore = defineStore('analysis', () => {
   }
 
   function applyDiagnostics(list: readonly ItemDiagnostic[], covered: CoveredItems): void {
-    for (const name of ['materials', 'sections', 'members'] as const) {
-      for (const id of covered[name]) diagnostics.delete(itemKey(name, id));
+    for (const name of ['materials', 'sections', 'members', 'continuousMembers'] as const) {
+      for (const id of covered[name] ?? []) diagnostics.delete(itemKey(name, id));
     }
     if (covered.project) diagnostics.delete(itemKey('project', ''));
     for (const d of list) {
@@ -260,12 +260,13 @@ export const useAnalysisStore = defineStore('analysis', () => {
     }
     const changed = (list: ItemList, item: { id: string }) => validated.get(itemKey(list, item.id)) !== item;
     const members = project.members.filter((m) => changed('members', m));
-    const sectionIds = new Set([...project.sections.filter((s) => changed('sections', s)).map((s) => s.id), ...members.flatMap((m) => m.zones.map((z) => z.sectionId))]);
+    const continuousMembers = (project.continuousMembers ?? []).filter((m) => changed('continuousMembers', m));
+    const sectionIds = new Set([...project.sections.filter((s) => changed('sections', s)).map((s) => s.id), ...[...members, ...continuousMembers].flatMap((m) => m.zones.map((z) => z.sectionId))]);
     const sections = project.sections.filter((s) => sectionIds.has(s.id));
     const materialIds = new Set([...project.materials.filter((m) => changed('materials', m)).map((m) => m.id), ...sections.flatMap(sectionMaterialIds), ...members.flatMap(memberOwnMaterialIds)]);
     const materials = project.materials.filter((m) => materialIds.has(m.id));
     // Forget diagnostics of items that are gone.
-    const present = new Set([...project.members.map((m) => itemKey('members', m.id)), ...project.sections.map((s) => itemKey('sections', s.id)), ...project.materials.map((m) => itemKey('materials', m.id)), itemKey('project', '')]);
+    const present = new Set([...project.members.map((m) => itemKey('members', m.id)), ...(project.continuousMembers ?? []).map((m) => itemKey('continuousMembers', m.id)), ...project.sections.map((s) => itemKey('sections', s.id)), ...project.materials.map((m) => itemKey('materials', m.id)), itemKey('project', '')]);
     let removed = false;
     for (const k of [...diagnostics.keys()]) {
       if (!present.has(k)) {
@@ -274,17 +275,19 @@ export const useAnalysisStore = defineStore('analysis', () => {
       }
     }
     if (removed) diagnosticsRevision.value++;
-    if (members.length === 0 && sections.length === 0 && materials.length === 0) return null;
+    if (members.length === 0 && continuousMembers.length === 0 && sections.length === 0 && materials.length === 0) return null;
     for (const m of members) validated.set(itemKey('members', m.id), m);
+    for (const m of continuousMembers) validated.set(itemKey('continuousMembers', m.id), m);
     for (const s of sections) validated.set(itemKey('sections', s.id), s);
     for (const m of materials) validated.set(itemKey('materials', m.id), m);
-    return { ...project, members, sections, materials };
+    return { ...project, members, sections, materials, continuousMembers };
   }
 
   function markAllValidated(project: Project): void {
     validated.clear();
     validatedInfo = project.info;
     for (const m of project.members) validated.set(itemKey('members', m.id), m);
+    for (const m of project.continuousMembers ?? []) validated.set(itemKey('continuousMembers', m.id), m);
     for (const s of project.sections) validated.set(itemKey('sections', s.id), s);
     for (const m of project.materials) validated.set(itemKey('materials', m.id), m);
   }

@@ -12,7 +12,7 @@ export type OverviewColumn =
   | 'name' | 'supports' | 'span' | 'yieldMoment' | 'ultimateMoment' | 'curvatureDuctility' | 'displacementDuctility'
   | 'rotation' | 'deflection' | 'utilisation' | 'strength' | 'governing' | 'status';
 
-export type StatusFilter = 'all' | 'ok' | 'check-fails' | 'brittle' | 'not-converged' | 'input-error' | 'pending';
+export type StatusFilter = 'all' | 'ok' | 'check-fails' | 'brittle' | 'review' | 'not-converged' | 'input-error' | 'pending';
 
 /** Input tabs of the member workspace: the beam, its section, materials, and for existing beams the condition and schemes. */
 export type InputTab = 'beam' | 'section' | 'materials' | 'as-found' | 'strengthening';

@@ -7,7 +7,7 @@
  * Long jobs run in chunks of members; between chunks the service yields to the event loop, so a
  * `cancel` message can stop a job early (the members not yet analysed are returned to the caller).
  */
-import { analyzeMembers, sectionCache, type SectionCache } from '../../../core/analysis.ts';
+import { analyzeContinuousMembers, analyzeMembers, sectionCache, type SectionCache } from '../../../core/analysis.ts';
 import { sectionResult } from '../../../core/member/analyze.ts';
 import type { SectionResult } from '../../../core/member/results.ts';
 import type { Diagnostic } from '../../../core/diagnostics.ts';
@@ -80,6 +80,7 @@ function coveredItems(project: Project, whole: boolean): CoveredItems {
     materials: project.materials.map((m) => m.id),
     sections: project.sections.map((s) => s.id),
     members: project.members.map((m) => m.id),
+    continuousMembers: (project.continuousMembers ?? []).map((m) => m.id),
     project: whole,
   };
 }
@@ -183,6 +184,21 @@ export function createAnalysisService(post: (reply: WorkerReply) => void): Analy
           case 'state':
             stateAt(request);
             return;
+          case 'analyze-continuous': {
+            // Few per project and each a few tens of ms: one job, one cache of section analyses.
+            const started = performance.now();
+            const sections = sectionCache(request.project);
+            for (const memberId of request.memberIds) {
+              if (cancelled.delete(request.id)) {
+                post({ type: 'cancelled', id: request.id, remaining: request.memberIds.slice(request.memberIds.indexOf(memberId)) });
+                return;
+              }
+              for (const result of analyzeContinuousMembers(request.project, [memberId], sections)) post({ type: 'continuous', id: request.id, memberId, result });
+              await yieldToEvents();
+            }
+            post({ type: 'done', id: request.id, elapsedMs: performance.now() - started });
+            return;
+          }
           case 'csv': {
             // Chunk by chunk, so that a large project never holds every full result at once;
             // the header (one line, no line breaks inside) is kept from the first chunk only.
@@ -191,7 +207,9 @@ export function createAnalysisService(post: (reply: WorkerReply) => void): Analy
             let text = '';
             for (let start = 0; start < ids.length || start === 0; start += 20) {
               const results = analyzeMembers(project, ids.slice(start, start + 20));
-              const part = resultsSummaryCsv(results, project.info.unitSystem, project);
+              // Continuous members (one row each, with the governing span) after the last chunk's members.
+              const continuous = start + 20 >= ids.length ? analyzeContinuousMembers(project) : [];
+              const part = resultsSummaryCsv(results, project.info.unitSystem, project, continuous);
               text += start === 0 ? part : part.slice(part.indexOf('\r\n') + 2);
               post({ type: 'progress', id: request.id, done: Math.min(start + 20, ids.length), total: ids.length, memberId: ids[Math.min(start + 19, ids.length - 1)] ?? '' });
               if (start + 20 < ids.length) await yieldToEvents();

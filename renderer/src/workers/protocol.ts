@@ -14,13 +14,16 @@ import type { MemberKeyResults } from '../../../core/project/key-results.ts';
 import type { SectionState } from '../../../core/section/results.ts';
 import type { MemberResult } from '../../../core/assessment/results.ts';
 import type { SectionResult } from '../../../core/member/results.ts';
+import type { ContinuousMemberResult } from '../../../core/continuous/verdict.ts';
 
-export type ItemList = 'materials' | 'sections' | 'members';
+export type ItemList = 'materials' | 'sections' | 'members' | 'continuousMembers';
 
 export interface IndexMap {
   readonly materials: readonly number[];
   readonly sections: readonly number[];
   readonly members: readonly number[];
+  /** Continuous members (project version 3); omitted: the sub-project holds none. */
+  readonly continuousMembers?: readonly number[];
 }
 
 /** A diagnostic placed on one item of the project by id, with the field path inside the item. */
@@ -43,6 +46,7 @@ export interface CoveredItems {
   readonly materials: readonly string[];
   readonly sections: readonly string[];
   readonly members: readonly string[];
+  readonly continuousMembers: readonly string[];
   /** True when the file-level, info and settings checks were part of it. */
   readonly project: boolean;
 }
@@ -76,7 +80,13 @@ export type WorkerRequest =
       readonly curvature: number;
       readonly guess: number;
     }
-  | { readonly type: 'csv'; readonly id: number; readonly project: Project };
+  | { readonly type: 'csv'; readonly id: number; readonly project: Project }
+  /**
+   * Continuous members to analyse (`memberIds`, in that order). The sub-project keeps the whole
+   * project's `continuousMembers` list (so that result paths name the right index) with the
+   * sections and materials of those asked for.
+   */
+  | { readonly type: 'analyze-continuous'; readonly id: number; readonly project: Project; readonly memberIds: readonly string[] };
 
 export type WorkerReply =
   /**
@@ -91,6 +101,8 @@ export type WorkerReply =
    * The same objects as the `sections` of the member result that follows (same inputs, same engine).
    */
   | { readonly type: 'sections'; readonly id: number; readonly memberId: string; readonly sections: readonly SectionResult[] }
+  /** A continuous member analysed (its full results: a few per project, each small). */
+  | { readonly type: 'continuous'; readonly id: number; readonly memberId: string; readonly result: ContinuousMemberResult }
   | { readonly type: 'progress'; readonly id: number; readonly done: number; readonly total: number; readonly memberId: string }
   | { readonly type: 'diagnostics'; readonly id: number; readonly diagnostics: readonly ItemDiagnostic[]; readonly covered: CoveredItems }
   | { readonly type: 'done'; readonly id: number; readonly elapsedMs: number }

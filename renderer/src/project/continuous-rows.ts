@@ -1,0 +1,61 @@
+/**
+ * What the project tree and the overview show of a continuous member: one row per member with its
+ * governing span, picked from the results core computed (nothing is computed here). Internal units.
+ */
+import type { ContinuousMemberDefinition } from '../../../core/project/types.ts';
+import { governingDeflection, type ContinuousMemberResult } from '../../../core/continuous/verdict.ts';
+import type { Text } from '../../../core/units/phrase.ts';
+import type { BadgeStatus } from './labels.ts';
+
+export interface ContinuousRowData {
+  /** e.g. `3 spans, columns` / `2 spans + cantilever, pins`. */
+  readonly supportsText: string;
+  /** The governing span (or cantilever) by name, e.g. `span 1`, and its length, mm. */
+  readonly governingPart: string | null;
+  readonly governingLength: number | null;
+  /** Displacement ductility at the control point (null when withdrawn or not reached). */
+  readonly displacementDuctility: number | null;
+  /** Plastic rotation capacity of the hinge closest to its capacity, rad. */
+  readonly rotationCapacity: number | null;
+  /** The governing deflection check (largest utilisation of any span). */
+  readonly deflection: { readonly deflection: number; readonly limit: number; readonly utilisation: number; readonly pass: boolean; readonly description: string } | null;
+  /** Largest load of the analysis to failure over the factored loads of the same arrangement. */
+  readonly collapseRatio: number | null;
+  /** The verdict's governing check in words (the governing part is `governingPart`). */
+  readonly governingMode: Text;
+}
+
+/** `3 spans, columns`: the count of spans, cantilevers, and the kinds of the inner supports. */
+export function supportsText(def: ContinuousMemberDefinition): string {
+  const n = def.spans.length;
+  const cantilevers = [(def.leftCantilever ?? 0) > 0, (def.rightCantilever ?? 0) > 0].filter(Boolean).length;
+  const kinds = [...new Set(def.supports.map((s) => (s.kind === 'column' ? 'columns' : s.kind === 'fixed' ? 'fixed' : 'pins')))];
+  return `${n} span${n === 1 ? '' : 's'}${cantilevers > 0 ? ` + ${cantilevers === 1 ? 'cantilever' : '2 cantilevers'}` : ''}, ${kinds.join('/')}`;
+}
+
+/** The row of a continuous member from its results (null results: only the definition's words). */
+export function continuousRowData(def: ContinuousMemberDefinition, result: ContinuousMemberResult | null): ContinuousRowData {
+  const verdict = result?.verdict ?? null;
+  const governing = result ? governingDeflection(result) : null;
+  const partName = verdict?.governingSpan ?? governing?.part ?? null;
+  const part = result?.parts.find((p) => p.name === partName) ?? null;
+  const hinges = result?.capacity?.hinges ?? [];
+  const critical = hinges.reduce<(typeof hinges)[number] | null>((a, h) => (!a || (h.demandRatio ?? 0) > (a.demandRatio ?? 0) ? h : a), null);
+  const check = governing?.check ?? null;
+  return {
+    supportsText: supportsText(def),
+    governingPart: partName,
+    governingLength: part ? part.to - part.from : null,
+    displacementDuctility: result?.capacity?.displacementDuctility ?? null,
+    rotationCapacity: critical?.rotationCapacity ?? null,
+    deflection: check ? { deflection: check.governing, limit: check.limit, utilisation: check.utilisation, pass: check.pass, description: `${governing!.part}: ${check.description}` } : null,
+    collapseRatio: verdict?.collapseRatio ?? null,
+    governingMode: verdict?.governingMode ?? '',
+  };
+}
+
+/** The badge of a continuous member: its verdict, or not analysed / updating. */
+export function continuousStatus(view: { readonly result: ContinuousMemberResult; readonly current: boolean } | null): BadgeStatus {
+  if (!view) return 'pending';
+  return view.current ? (view.result.verdict.status as BadgeStatus) : 'outdated';
+}

@@ -45,7 +45,7 @@ export const noAnalysisFactory: WorkerFactory = () => {
   const worker = inProcessWorkerFactory();
   const post = worker.postMessage.bind(worker);
   worker.postMessage = (message) => {
-    if (message.type !== 'analyze') post(message);
+    if (message.type !== 'analyze' && message.type !== 'analyze-continuous') post(message);
   };
   return worker;
 };

@@ -11,7 +11,6 @@ import type { SectionDefinition } from '../../../core/section/definition.ts';
 import { formatQuantity } from '../../../core/units/index.ts';
 import type { UnitSystem } from '../../../core/project/types.ts';
 import { displaySystem } from '../project/units.ts';
-import { LOAD_CASE_NAMES } from './beam-geometry.ts';
 
 export interface ElevationPart {
   readonly name: string;
@@ -78,8 +77,11 @@ export interface ContinuousGeometry {
 
 const finite = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v);
 const CASE_ORDER: readonly LoadCaseId[] = ['dead', 'superimposed', 'live'];
-const ROW = 26;
+const ROW = 30;
 const MARGIN = 44;
+/** Left gutter holding the names of the load rows. */
+const GUTTER = 70;
+const ROW_NAMES: Readonly<Record<LoadCaseId, string>> = { dead: 'dead', superimposed: 'superimp.', live: 'live' };
 const round = (x: number) => Math.round(x * 10) / 10;
 
 /** Geometry of the elevation of `def` at `width` CSS pixels. */
@@ -93,7 +95,7 @@ export function continuousGeometry(def: ContinuousBeamDefinition, sections: read
   const left = valid ? def.leftCantilever ?? 0 : 0;
   const right = valid ? def.rightCantilever ?? 0 : 0;
   const total = left + spans.reduce((a, b) => a + b, 0) + right || 1;
-  const x0 = MARGIN;
+  const x0 = def.loads.length > 0 ? GUTTER : MARGIN;
   const x1 = width - MARGIN;
   const k = (x1 - x0) / total;
   const X = (x: number) => round(x0 + Math.min(Math.max(x, 0), total) * k);
@@ -117,7 +119,7 @@ export function continuousGeometry(def: ContinuousBeamDefinition, sections: read
   // Loads: one row per load case that has any.
   const cases = CASE_ORDER.filter((c) => def.loads.some((l) => l.loadCase === c));
   const top0 = 14;
-  const caseRows = cases.map((loadCase, i) => ({ loadCase, y: top0 + i * ROW, label: LOAD_CASE_NAMES[loadCase] }));
+  const caseRows = cases.map((loadCase, i) => ({ loadCase, y: top0 + i * ROW, label: ROW_NAMES[loadCase] }));
   const loads: ElevationLoad[] = def.loads.map((load, index) => {
     const row = caseRows.find((r) => r.loadCase === load.loadCase);
     const y = row?.y ?? top0;
@@ -145,10 +147,10 @@ export function continuousGeometry(def: ContinuousBeamDefinition, sections: read
     const room = l.kind === 'uniform' ? l.x1 - l.x0 : 0;
     const magnitude = l.text.split(' — ')[0]!;
     const first = loads.findIndex((o) => o.loadCase === l.loadCase && o.x0 === l.x0 && o.kind === l.kind) === l.index;
-    return { ...l, showText: first && room > magnitude.length * 6 + 8 };
+    return { ...l, showText: first && room > magnitude.length * 5.6 + 8 };
   });
 
-  const top = top0 + Math.max(cases.length, 1) * ROW + 4;
+  const top = top0 + Math.max(cases.length, 1) * ROW;
   const beam = { x0: X(0), x1: X(total), top, bottom: top + 22 };
 
   const shadeOf = new Map<string, number>();

@@ -10,6 +10,8 @@ import type { BadgeStatus } from './labels.ts';
 export interface ContinuousRowData {
   /** e.g. `3 spans, columns` / `2 spans + cantilever, pins`. */
   readonly supportsText: string;
+  /** e.g. `3 spans` / `2 spans + c.` (the overview's narrow column; the whole text is its tooltip). */
+  readonly supportsShort: string;
   /** The governing span (or cantilever) by name, e.g. `span 1`, and its length, mm. */
   readonly governingPart: string | null;
   readonly governingLength: number | null;
@@ -44,6 +46,7 @@ export function continuousRowData(def: ContinuousMemberDefinition, result: Conti
   const check = governing?.check ?? null;
   return {
     supportsText: supportsText(def),
+    supportsShort: `${def.spans.length} spans${(def.leftCantilever ?? 0) > 0 || (def.rightCantilever ?? 0) > 0 ? ' + c.' : ''}`,
     governingPart: partName,
     governingLength: part ? part.to - part.from : null,
     displacementDuctility: result?.capacity?.displacementDuctility ?? null,

@@ -87,7 +87,8 @@ describe('App', () => {
     await wrapper.get('[data-testid=dialog-discard]').trigger('click');
     await until(() => documentStore.fileName === 'yard.hingeline', 'the file to open');
     await flushPromises();
-    expect(memberCount(wrapper)).toBe(4);
+    // Four single-span members and the two continuous beams (CB-1, CB-2).
+    expect(memberCount(wrapper)).toBe(6);
   });
 
   it('keeps the project when the user cancels at the unsaved-changes question', async () => {
@@ -171,7 +172,8 @@ describe('App', () => {
     await flushPromises();
     expect(workspace.statusFilter).toBe('all');
     expect(workspace.filterText).toBe('');
-    expect(memberCount(wrapper)).toBe(4);
+    // Four single-span members and the two continuous beams (CB-1, CB-2).
+    expect(memberCount(wrapper)).toBe(6);
   });
 
   it('lists the keyboard shortcuts (Ctrl+/ or the ? button)', async () => {

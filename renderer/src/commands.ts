@@ -173,8 +173,12 @@ export function useCommands() {
     }
   }
 
-  async function exportPdf(scope: 'member' | 'project' = workspace.view === 'member' ? 'member' : 'project'): Promise<void> {
+  async function exportPdf(scope?: 'member' | 'project'): Promise<void> {
     if (!documentStore.project) return;
+    // A continuous beam has no member report yet (the report's chapter for it is to come): the project's.
+    const continuousOpen = workspace.view === 'member' && (documentStore.project.continuousMembers ?? []).some((m) => m.id === workspace.selectedMemberId);
+    scope ??= workspace.view === 'member' && !continuousOpen ? 'member' : 'project';
+    if (continuousOpen) scope = 'project';
     try {
       const written = await exportReport(scope);
       if (written) workspace.notify('success', `Report written to ${written.name}.`);

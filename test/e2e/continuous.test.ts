@@ -81,6 +81,18 @@ describe('continuous beams in the app', () => {
     await expect.poll(() => field.inputValue()).toBe('4.2');
   });
 
+  it('adds a continuous beam that is analysed, deletes it, and brings it back with undo', async () => {
+    await page.getByTestId('sidebar-add-continuous').click();
+    await expect.poll(() => page.getByTestId('member-title').textContent()).toBe('CB-3');
+    expect(await page.locator('[data-testid=span-editor] [data-span]').count()).toBe(2);
+    await expect.poll(() => page.locator('[data-testid=continuous-workspace] .title-row .badge').getAttribute('data-status'), { timeout: 60_000 }).not.toMatch(/pending|outdated/);
+    await page.getByTestId('delete-member').click();
+    await expect.poll(() => page.locator('[data-testid=member-list] [data-member]').filter({ hasText: 'CB-3' }).count()).toBe(0);
+    await page.getByTestId('undo').click();
+    await expect.poll(() => page.locator('[data-testid=member-list] [data-member]').filter({ hasText: 'CB-3' }).count()).toBe(1);
+    await page.locator('[data-testid=member-list] [data-member]', { hasText: 'CB-2' }).click();
+  });
+
   it('shows the envelopes and the hinge sequence', async () => {
     await page.getByRole('tab', { name: /envelopes/i }).click();
     await expect.poll(() => page.getByTestId('chart-moment-envelope').count()).toBe(1);

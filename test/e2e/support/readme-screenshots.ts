@@ -5,7 +5,8 @@
  *
  * The demo project, 1440 × 900 pixels: the project overview, a member workspace with its charts,
  * the strain and stress profile at a key point, both bending directions side by side, an existing
- * beam's schemes and their comparison, and a member after the switch to SI units.
+ * beam's schemes and their comparison, a member after the switch to SI units, and a continuous beam
+ * of the SI demo.
  */
 import { join } from 'node:path';
 import { ROOT, openApp, startE2e } from './environment.ts';
@@ -64,6 +65,15 @@ try {
   await page.getByTestId('direction-sagging').click();
   await page.waitForTimeout(600);
   await page.screenshot({ path: join(OUT, 'member-si.png') });
+
+  // A continuous beam of the SI demo: its elevation with the hinges numbered, the span editor and the span table.
+  const si = await openApp(context);
+  await si.page.getByTestId('open-demo-si').click();
+  await si.page.waitForFunction(() => document.querySelector('[data-testid=analysis-status]')?.textContent?.includes('All results current'), undefined, { timeout: 60_000 });
+  await si.page.locator('[data-testid=member-list] [data-member="CB-2"]').click();
+  await si.page.locator('[data-testid=continuous-elevation] [data-hinge]').first().waitFor();
+  await si.page.waitForTimeout(400);
+  await si.page.screenshot({ path: join(OUT, 'continuous-beam.png') });
   console.log(`screenshots written to ${OUT}`);
 } finally {
   await context.close();

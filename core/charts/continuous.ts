@@ -4,7 +4,7 @@
  * per part; and the load–deflection curve at the control point with the hinges numbered in order
  * of formation. Pure: the results are converted to display units, nothing is recomputed.
  */
-import type { ContinuousMemberResult } from '../continuous/verdict.ts';
+import type { ContinuousMemberResult } from '../assessment/continuous-verdict.ts';
 import type { Quantity } from '../units/quantities.ts';
 import type { ChartPoint, ChartSpec, MarkerSpec, ReferenceLineSpec, SeriesSpec, UnitsInput } from './types.ts';
 import { axisFor, axisScale, display, finite, resolveUnits, unitText } from './units.ts';

@@ -3,7 +3,7 @@
  * governing span, picked from the results core computed (nothing is computed here). Internal units.
  */
 import type { ContinuousMemberDefinition } from '../../../core/project/types.ts';
-import { governingDeflection, type ContinuousMemberResult } from '../../../core/continuous/verdict.ts';
+import { governingDeflection, type ContinuousMemberResult } from '../../../core/assessment/continuous-verdict.ts';
 import type { Text } from '../../../core/units/phrase.ts';
 import type { BadgeStatus } from './labels.ts';
 
@@ -23,6 +23,10 @@ export interface ContinuousRowData {
   readonly deflection: { readonly deflection: number; readonly limit: number; readonly utilisation: number; readonly pass: boolean; readonly description: string } | null;
   /** Largest load of the analysis to failure over the factored loads of the same arrangement. */
   readonly collapseRatio: number | null;
+  /** Largest flexural utilisation of the code's checks at the stations (null: not made), where it governs, and shear's. */
+  readonly strengthUtilisation: number | null;
+  readonly strengthWhere: string | null;
+  readonly shearUtilisation: number | null;
   /** The verdict's governing check in words (the governing part is `governingPart`). */
   readonly governingMode: Text;
 }
@@ -44,15 +48,20 @@ export function continuousRowData(def: ContinuousMemberDefinition, result: Conti
   const hinges = result?.capacity?.hinges ?? [];
   const critical = hinges.reduce<(typeof hinges)[number] | null>((a, h) => (!a || (h.demandRatio ?? 0) > (a.demandRatio ?? 0) ? h : a), null);
   const check = governing?.check ?? null;
+  const flexure = result?.checks?.flexureGoverning ?? null;
   return {
     supportsText: supportsText(def),
     supportsShort: `${def.spans.length} spans${(def.leftCantilever ?? 0) > 0 || (def.rightCantilever ?? 0) > 0 ? ' + c.' : ''}`,
     governingPart: partName,
     governingLength: part ? part.to - part.from : null,
-    displacementDuctility: result?.capacity?.displacementDuctility ?? null,
-    rotationCapacity: critical?.rotationCapacity ?? null,
+    // A brittle beam's ductility and hinge rotations are not to be relied on: withheld, as for single spans.
+    displacementDuctility: verdict?.ductilityAvailable === false ? null : result?.capacity?.displacementDuctility ?? null,
+    rotationCapacity: verdict?.ductilityAvailable === false ? null : critical?.rotationCapacity ?? null,
     deflection: check ? { deflection: check.governing, limit: check.limit, utilisation: check.utilisation, pass: check.pass, description: `${governing!.part}: ${check.description}` } : null,
     collapseRatio: verdict?.collapseRatio ?? null,
+    strengthUtilisation: verdict?.strengthUtilisation ?? null,
+    strengthWhere: flexure ? `${flexure.part}, ${flexure.direction}, under ${flexure.combination}; ${flexure.arrangement}` : null,
+    shearUtilisation: verdict?.shearUtilisation ?? null,
     governingMode: verdict?.governingMode ?? '',
   };
 }

@@ -38,6 +38,7 @@ export function sortValue(row: OverviewRow, column: OverviewColumn, units: UnitS
       case 'rotation': return c.rotationCapacity;
       case 'deflection': return c.deflection?.deflection ?? null;
       case 'utilisation': return c.deflection?.utilisation ?? null;
+      case 'strength': return c.strengthUtilisation;
       case 'governing': return say(c.governingMode, units);
       case 'status': return STATUS_ORDER[row.status];
       default: return null;

@@ -12,7 +12,7 @@
  */
 import { defineStore } from 'pinia';
 import { ref, toRaw, watch } from 'vue';
-import type { ContinuousMemberResult } from '../../../core/continuous/verdict.ts';
+import type { ContinuousMemberResult } from '../../../core/assessment/continuous-verdict.ts';
 import type { Project } from '../../../core/project/types.ts';
 import { continuousInputs, continuousSubproject, sameInputs } from '../project/dependencies.ts';
 import { CancelledError, engines } from '../workers/engine.ts';

@@ -14,7 +14,7 @@ import type { MemberKeyResults } from '../../../core/project/key-results.ts';
 import type { SectionState } from '../../../core/section/results.ts';
 import type { MemberResult } from '../../../core/assessment/results.ts';
 import type { SectionResult } from '../../../core/member/results.ts';
-import type { ContinuousMemberResult } from '../../../core/continuous/verdict.ts';
+import type { ContinuousMemberResult } from '../../../core/assessment/continuous-verdict.ts';
 
 export type ItemList = 'materials' | 'sections' | 'members' | 'continuousMembers';
 

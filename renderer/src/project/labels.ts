@@ -81,7 +81,7 @@ export const SHAPE_LABELS: Readonly<Record<ShapeKind, string>> = {
   polygon: 'Polygon (outline points)',
 };
 
-/** Statuses a row or badge shows: a member's, not analysed, updating, and `review` (a continuous member checked by the engine but not yet by the code at every station). */
+/** Statuses a row or badge shows: a member's, not analysed, updating, and `review` (a continuous member whose code checks at every station could not be made). */
 export type BadgeStatus = MemberStatus | 'pending' | 'outdated' | 'review';
 
 export const STATUS_LABELS: Readonly<Record<BadgeStatus, string>> = {

@@ -5,7 +5,7 @@
  * to test-artifacts/e2e/.
  */
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { openApp, snap, startE2e, type E2eContext } from './support/environment.ts';
 
 let context: E2eContext;
@@ -13,7 +13,7 @@ let page: Page;
 let problems: string[];
 
 beforeAll(async () => {
-  context = await startE2e();
+  context = await startE2e(inject('e2e'));
   ({ page, problems } = await openApp(context, {}, { width: 1440, height: 900 }));
   await page.getByTestId('open-demo-si').click();
   await page.waitForFunction(() => document.querySelector('[data-testid=analysis-status]')?.textContent?.includes('All results current'), undefined, { timeout: 120_000 });

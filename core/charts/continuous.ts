@@ -27,6 +27,13 @@ function empty(kind: ChartSpec['kind'], title: string, message: string): ChartSp
  * vertical reference lines; a station repeated at a support or point load breaks nothing (the
  * jump is drawn vertically).
  */
+/** The fixed range of an axis over the finite values `xs` (display units), divided by `scale`; none when there are none. */
+function axisEnds(xs: readonly number[], scale: number): { min?: number; max?: number } {
+  const finiteXs = xs.filter((x) => Number.isFinite(x));
+  if (finiteXs.length < 2) return {};
+  return { min: Math.min(...finiteXs) / scale, max: Math.max(...finiteXs) / scale };
+}
+
 export function continuousEnvelopeChart(result: ContinuousMemberResult, which: EnvelopeQuantity, unitsInput: UnitsInput): ChartSpec {
   const { quantity, axis, title } = ENVELOPE[which];
   const elastic = result.elastic;
@@ -62,7 +69,8 @@ export function continuousEnvelopeChart(result: ContinuousMemberResult, which: E
     kind: 'span-distribution',
     title,
     subtitle: envelope.description,
-    x: axisFor('Position x from the left end', unitText('spanLength', units), xScale),
+    // The axis spans the beam exactly, from its left end to its right end (chart.js would pad it).
+    x: axisFor('Position x from the left end', unitText('spanLength', units), xScale, axisEnds(xs, xScale)),
     y: axisFor(axis, unitText(quantity, units), yScale, { includeZero: true }),
     series,
     markers,

@@ -16,9 +16,9 @@
  *
  * Pure and deterministic. Units: mm, N, N·mm, MPa.
  */
-import { errorsOf, warningsOf, type Problem } from '../diagnostics.ts';
+import { errorsOf, warningsOf, type Diagnostic, type Problem } from '../diagnostics.ts';
 import { materialLibrary, type MaterialLibrary } from '../materials/library.ts';
-import type { MemberContext } from '../member/analyze.ts';
+import { unanalysedBeam, type MemberContext } from '../member/analyze.ts';
 import type { BeamDefinition, MemberLoad } from '../member/definition.ts';
 import { deriveAsFound, type AsFoundDerivation } from '../retrofit/as-found.ts';
 import { exposedElements } from '../retrofit/schemes.ts';
@@ -34,6 +34,7 @@ import { buildScheme, describeScheme } from './scheme.ts';
 import type { CombinationSettings } from './combinations.ts';
 import { librarySections, runVariant, type SectionSettings, type Setup, type VariantRun } from './variant.ts';
 import { prefixed } from './verdict.ts';
+import { retrofitInputProblems } from './retrofit-input.ts';
 
 /** What is known of an existing beam as it stands (core/retrofit). */
 export interface RetrofitInput {
@@ -109,6 +110,31 @@ export function assessMember(member: AssessedMember, context: AssessmentContext)
   }
 }
 
+/**
+ * The result of a member whose as-found condition or schemes have input errors: not analysed as it
+ * stands (no numbers of the design beam in its place), with the problems; `retrofit` keeps the design
+ * beam compactly for reference.
+ */
+function retrofitInputError(member: AssessedMember, setup: Setup, designRun: VariantRun, problems: readonly Diagnostic[]): MemberResult {
+  const errors = errorsOf(problems);
+  const count = errors.length;
+  const where = member.asFound && problems.some((p) => p.severity === 'error' && p.path.startsWith(`${setup.path}.asFound`)) ? 'the as-found condition' : 'the strengthening schemes';
+  const retrofit: RetrofitResult = {
+    basis: 'design', original: compactOf(setup, designRun, 'Design beam: '), asFound: null, referenceKey: 'original', schemes: [],
+    derivedMaterials: [], caution: RETROFIT_CAUTION, warnings: warningsOf(problems), errors,
+  };
+  return {
+    ...unanalysedBeam(member, []),
+    status: 'input-error',
+    governingMode: `Not analysed: ${count} input problem${count === 1 ? '' : 's'} in ${where} to fix first.`,
+    strength: null,
+    brittle: [],
+    ductilityUnavailable: null,
+    retrofit,
+    errors,
+  };
+}
+
 function extend(member: AssessedMember, setup: Setup, designRun: VariantRun): MemberResult {
   const library = setup.library;
   const design = designRun.result;
@@ -123,6 +149,11 @@ function extend(member: AssessedMember, setup: Setup, designRun: VariantRun): Me
   }
   const libraryMaterials = materialLibrary(library.materials, setup.code, setup.sectionSettings);
   if (!hasRetrofit) return design;
+
+  // The input checks `validate` makes too (retrofit-input.ts): with an error there the beam as it
+  // stands is not known, so the member is an input error, not the design beam's verdict.
+  const inputProblems = retrofitInputProblems(member, library, { ...setup.sectionSettings, code: setup.code, path: setup.path });
+  if (errorsOf(inputProblems).length > 0) return retrofitInputError(member, setup, designRun, inputProblems);
 
   const warnings: Text[] = [];
   const errors: Problem[] = [];

@@ -24,6 +24,7 @@ import type { SchemeResult, VariantResult } from './results.ts';
 import { joinTexts, phrase, q, type Text } from '../units/phrase.ts';
 import { largestZoneMoment } from './demand.ts';
 import { strengtheningChecks } from './strengthening-checks.ts';
+import { bondedWidthProblem } from './retrofit-input.ts';
 import { combinationText, type LoadCombination } from './combinations.ts';
 import { librarySections, runVariant, type Setup, type VariantRun } from './variant.ts';
 
@@ -106,8 +107,9 @@ export function buildScheme(setup: Setup, input: SchemeInput): SchemeResult {
     // Bonded items: width on the face, then the substrate strain at installation.
     const face = scheme.face ?? 'bottom';
     const faceData = faceOf(refSection.definition, face);
-    if (scheme.width > faceData.width + 1e-6) {
-      errors.push({ path: `${at}.width`, message: phrase`must be at most the ${q('sectionLength', faceData.width, { compact: true })} width of the ${face} face of section "${baseId}", got ${q('sectionLength', scheme.width, { compact: true })}` });
+    const wide = bondedWidthProblem(scheme, refSection.definition, baseId, at);
+    if (wide) {
+      errors.push(...errorsOf([wide]));
       continue;
     }
     const direction: BendingDirection = face === 'bottom' ? 'sagging' : 'hogging';

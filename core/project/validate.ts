@@ -25,6 +25,7 @@ import type { CodeBasis, ConcreteSpec, FrpSpec, MaterialSpec, SteelSpec } from '
 import { validateMember } from '../member/validate.ts';
 import { validateContinuousBeam } from '../continuous/validate.ts';
 import { validateAsFound, validateSchemes } from '../retrofit/validate.ts';
+import { retrofitInputProblems } from '../assessment/retrofit-input.ts';
 import { buildSectionModel, checkBarNumbers, validateShape } from '../section/build.ts';
 import { memberGeometryDiagnostics, sectionGeometryDiagnostics } from './validate-geometry.ts';
 import type { SectionDefinition } from '../section/definition.ts';
@@ -381,8 +382,15 @@ export function validateProjectData(data: unknown): { project: Project | null; d
     const path = itemPath('members', index, member);
     semantic.push(...guarded(path, () => validateMember(member, path, sectionIds)));
     semantic.push(...guarded(path, () => memberGeometryDiagnostics(member, path, code, soundProject.sections)));
-    if (member.asFound) semantic.push(...guarded(`${path}.asFound`, () => validateAsFound(member.asFound!, member, soundProject, `${path}.asFound`)));
-    if (member.schemes) semantic.push(...guarded(`${path}.schemes`, () => validateSchemes(member.schemes!, member, soundProject, `${path}.schemes`)));
+    // The as-found condition and schemes: the assessment's own input checks (derivations and the
+    // sections they make), so validate reports every error analyze would; the field checks alone
+    // while the code basis is unknown.
+    if (code && (member.asFound || member.schemes)) {
+      semantic.push(...guarded(path, () => retrofitInputProblems(member, soundProject, { path, code, ...(ultimateStrain ? { concreteUltimateStrain: ultimateStrain } : {}) })));
+    } else {
+      if (member.asFound) semantic.push(...guarded(`${path}.asFound`, () => validateAsFound(member.asFound!, member, soundProject, `${path}.asFound`)));
+      if (member.schemes) semantic.push(...guarded(`${path}.schemes`, () => validateSchemes(member.schemes!, member, soundProject, `${path}.schemes`)));
+    }
     if (member.preferredSchemeId !== undefined && !(member.schemes ?? []).some((s) => s.id === member.preferredSchemeId)) {
       const ids = (member.schemes ?? []).map((s) => `"${s.id}"`);
       semantic.push({ code: 'unknown-reference', path: `${path}.preferredSchemeId`, severity: 'error', message: `must be the id of one of the member's schemes (${ids.length > 0 ? ids.join(', ') : 'it has none'}), got ${JSON.stringify(member.preferredSchemeId)}` });

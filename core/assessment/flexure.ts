@@ -20,12 +20,11 @@ import type { CodeBasis } from '../materials/specs.ts';
 import type { BeamDefinition } from '../member/definition.ts';
 import { memberForcesAt } from '../member/statics.ts';
 import { zoneIndexAt } from '../member/zones.ts';
-import { brentRoot } from '../numeric/roots.ts';
 import type { SectionAnalysis } from '../section/analyze.ts';
 import type { BendingDirection } from '../section/model.ts';
 import { joinTexts, phrase, uniqueTexts, type Text } from '../units/phrase.ts';
 import { combinationText, combinedLoads, memberLoadSets, type LoadCombination } from './combinations.ts';
-import { elasticSupportMoments, type ElasticZone } from './demand.ts';
+import { elasticSupportMoments, momentStations, type ElasticZone } from './demand.ts';
 import { flexuralDesignResistance, type FlexuralResistance } from './resistance.ts';
 import type { StrengthCheck, StrengthPoint, StrengthZone } from './results.ts';
 
@@ -50,41 +49,6 @@ export const NO_RESISTANCE_UTILISATION = 99.99;
 
 /** Demands below this fraction of the largest |M| on the member are round-off: zero. */
 const ROUND_OFF = 1e-9;
-
-/**
- * The stations where the moment of `loads` can peak or jump: the equal segments, zone boundaries,
- * load positions and edges, and the points of zero shear between them.
- */
-function stationsFor(member: BeamDefinition, zones: readonly FlexureZone[], forces: (x: number, side: 'left' | 'right') => { moment: number; shear: number }, segments: number): number[] {
-  const span = member.span;
-  const set = new Set<number>();
-  for (let i = 0; i <= segments; i++) set.add((span * i) / segments);
-  for (const z of zones) {
-    set.add(z.from);
-    set.add(z.to);
-  }
-  for (const l of member.loads) {
-    if (l.kind === 'point') set.add(l.position);
-    else {
-      set.add(l.from ?? 0);
-      set.add(l.to ?? span);
-    }
-  }
-  const base = [...set].filter((x) => x >= 0 && x <= span).sort((a, b) => a - b);
-  const out = [...base];
-  for (let i = 0; i + 1 < base.length; i++) {
-    const a = base[i]!;
-    const b = base[i + 1]!;
-    // Within (a, b) no load starts, ends or acts as a point: the shear is continuous there.
-    const va = forces(a, 'right').shear;
-    const vb = forces(b, 'left').shear;
-    if (va * vb < 0) {
-      const root = brentRoot((x) => forces(x, 'right').shear, a, b, va, vb, { xTolerance: 1e-9 * span });
-      out.push(root.x);
-    }
-  }
-  return out.sort((a, b) => a - b);
-}
 
 /** One moment of the check: where (mm, with the side of a discontinuity), and the combination it comes from. */
 export interface MomentSample {
@@ -202,7 +166,7 @@ export function flexuralCheck(input: FlexureInput): StrengthCheck | null {
     const ends = elasticSupportMoments(member, elasticZones, loads, segments);
     const forces = (x: number, side: 'left' | 'right') => memberForcesAt(member.supports, span, loads, ends, x, side);
     const name = combinationText(c);
-    for (const x of stationsFor(member, zones, forces, segments)) {
+    for (const x of momentStations(member, zones, forces, segments)) {
       for (const side of ['left', 'right'] as const) samples.push({ combination: name, x, side, moment: forces(x, side).moment });
     }
     return name;

@@ -16,7 +16,7 @@ import type { BeamDefinition } from '../member/definition.ts';
 import { deriveAsFound, derivedId, type AsFoundDerivation } from '../retrofit/as-found.ts';
 import { concreteLayerSection, exposedElements, faceOf, type ReferenceSection } from '../retrofit/schemes.ts';
 import type { AsFoundCondition, FrpScheme, Library, SteelPlateScheme, StrengtheningScheme } from '../retrofit/types.ts';
-import { validateAsFound, validateSchemes } from '../retrofit/validate.ts';
+import { MAX_SCHEMES, validateAsFound, validateSchemes } from '../retrofit/validate.ts';
 import { buildSectionModel } from '../section/build.ts';
 import type { SectionDefinition } from '../section/definition.ts';
 import { phrase, q } from '../units/phrase.ts';
@@ -104,8 +104,10 @@ export function retrofitInputProblems(member: BeamDefinition & { readonly asFoun
   if (schemes.length > 0) {
     const fields = validateSchemes(schemes, member, library, `${path}.schemes`);
     out.push(...fields);
-    // The sections a scheme makes are built on the beam as it stands: only once that is known.
+    // The sections a scheme makes are built on the beam as it stands: only once that is known; and
+    // not for more schemes than a member may have (each is a full analysis; the field checks say so).
     if (member.asFound && errorsOf(out).length > errorsOf(fields).length) return out;
+    if (schemes.length > MAX_SCHEMES) return out;
     const materials = materialLibrary([...library.materials, ...(derivation?.materials ?? [])], code, settings);
     schemes.forEach((scheme, i) => {
       const at = `${path}.schemes[${i}]`;

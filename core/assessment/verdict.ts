@@ -10,7 +10,7 @@ import type { BeamAnalysis } from '../member/analyze.ts';
 import type { BeamDefinition } from '../member/definition.ts';
 import type { BeamResult } from '../member/results.ts';
 import { OUTSIDE_SMALL_DEFLECTION, serviceOutsideRange } from '../member/small-deflection.ts';
-import { capitalised, joinTexts, lowerFirst, phrase, q, withoutFinalStop, type Text } from '../units/phrase.ts';
+import { capitalised, joinTexts, phrase, q, withoutFinalStop, type Text } from '../units/phrase.ts';
 import type { BrittleFinding, MemberResult, MemberStatus, StrengthCheck } from './results.ts';
 import type { ShearResult } from './shear.ts';
 
@@ -64,11 +64,11 @@ export function memberVerdict(input: VerdictInput): MemberResult {
   const mu = result.ductility.displacementDuctility;
   if (capacity && capacity.ultimateLoadFactor !== null) {
     const pattern = member.capacity.pattern === 'proportional' ? 'service load' : 'live load (dead load held)';
-    parts.push(`Flexure: ${capacity.failureCause} at ${capacity.ultimateLoadFactor.toFixed(2)} × the ${pattern}${mu && !brittleMember ? `, displacement ductility μΔ = ${mu.toFixed(1)}` : ''}`);
+    parts.push(`${capacity.failureCause} at ${capacity.ultimateLoadFactor.toFixed(2)} × the ${pattern}${mu && !brittleMember ? `, displacement ductility μΔ = ${mu.toFixed(1)}` : ''}`);
   } else if (capacity) {
-    parts.push(`Flexure: ${capacity.status}`);
+    parts.push(capacity.status);
   } else {
-    parts.push(`Flexure: ${result.loadDeflection.status}`);
+    parts.push(result.loadDeflection.status);
   }
   if (strength) parts.push(strengthClause(strength));
   const checks = result.service?.checks ?? [];
@@ -80,7 +80,9 @@ export function memberVerdict(input: VerdictInput): MemberResult {
     parts.push('deflection checks pass');
   }
   let sentence: Text = joinTexts(parts, '; ');
-  if (shear) sentence = shear.governs === 'shear' ? phrase`${capitalised(shear.sentence)}; flexure (not reached first): ${lowerFirst(sentence)}` : phrase`${sentence}; ${shear.sentence}`;
+  // The flexural part is headed "Flexure:", or follows the shear sentence as "flexure (not reached first):".
+  if (shear?.governs === 'shear') sentence = phrase`${capitalised(shear.sentence)}; flexure (not reached first): ${sentence}`;
+  else sentence = shear ? phrase`Flexure: ${sentence}; ${shear.sentence}` : phrase`Flexure: ${sentence}`;
   const flexural = brittle.filter((b) => b.cause !== 'shear-before-flexure');
   if (flexural.length > 0) sentence = phrase`${sentence}; brittle: ${joinTexts(flexural.map((b) => b.text), '; ')}`;
   const unavailable: Text | null = brittleMember ? phrase`not available: ${joinTexts(brittle.map((b) => b.text), '; ')}` : null;

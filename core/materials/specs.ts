@@ -58,6 +58,13 @@ export interface ConcreteSpec {
    */
   readonly strength: number;
   readonly compressionModel: ConcreteCompressionModel;
+  /**
+   * Measured mean compressive strength, MPa (an as-found concrete from cores): the laws of behaviour —
+   * the curves, Ec, the tensile strengths and both deflection methods — use it in place of f′c (ACI)
+   * or fcm = fck + 8 (EN); `strength` stays the characteristic (lower-fractile) value that the code
+   * checks use. Not below `strength`. Undefined → the code's relation.
+   */
+  readonly meanStrength?: number;
   readonly tensionModel: ConcreteTensionModel;
   /** Optional overrides; undefined → the code basis default. */
   readonly elasticModulus?: number; // MPa

@@ -51,6 +51,7 @@ export const concreteSpecSchema = z.looseObject({
   lightweightFactor: number.optional(),
   tensionStiffeningCoefficient: number.optional(),
   tensionStiffeningZone: z.enum(TENSION_STIFFENING_ZONES).optional(),
+  meanStrength: number.optional(),
   density: number.optional(),
   creepCoefficient: number.optional(),
   shrinkageStrain: number.optional(),

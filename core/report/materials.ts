@@ -49,8 +49,9 @@ export function sectionModels(project: Project): (id: string) => SectionModel | 
 function concreteParameters(spec: ConcreteSpec, law: ConcreteMaterial, code: CodeBasis, f: ReportFormatter, settings: Project['settings']): string[] {
   const r = resolveConcrete(spec, code, settings.concreteUltimateStrain);
   const out: string[] = [];
-  if (code === 'EN 1992-1-1') out.push(`fck = ${f.concreteStress(spec.strength)} (fcm = ${f.concreteStress(r.modelStrength)})`);
-  else out.push(`f′c = ${f.concreteStress(spec.strength)}`);
+  const mean = spec.meanStrength !== undefined ? ', measured mean: used for behaviour, the strength above for the code checks' : '';
+  if (code === 'EN 1992-1-1') out.push(`fck = ${f.concreteStress(spec.strength)} (fcm = ${f.concreteStress(r.modelStrength)}${mean})`);
+  else out.push(`f′c = ${f.concreteStress(spec.strength)}${spec.meanStrength !== undefined ? ` (mean ${f.concreteStress(spec.meanStrength)}${mean})` : ''}`);
   out.push(`peak stress of the law ${f.concreteStress(law.peakStress)} at ε = ${f.strain(law.peakStrain)}`);
   out.push(`Ec = ${f.modulus(r.elasticModulus)}${spec.elasticModulus === undefined ? ' (code value)' : ' (given)'}`);
   const lawStrength = spec.tensileStrength !== undefined ? ' (given)'

@@ -3,9 +3,11 @@
  * and section definitions (new ids, `<id>~<member>~as-found`) that the unchanged section and member
  * engines analyse.
  *
- *  - Concrete: the in-place strength of in-place-strength.ts replaces the specified strength
- *    (other properties of the spec — model, overrides — are kept; code-basis defaults such as Ec
- *    follow the new strength).
+ *  - Concrete: the in-place strength of in-place-strength.ts (the lower fractile: ACI 214.4R f′c,eq,
+ *    EN 1990 Annex D fck,is) replaces the specified strength for the code checks, and the measured
+ *    mean of the cores becomes the spec's `meanStrength`, which the laws of behaviour use (curves,
+ *    Ec, tensile strength, deflections, the shear demand at the mechanism; under EN fcm is the
+ *    mean, never fck,is + 8). Other properties of the spec — model, overrides — are kept.
  *  - Steel: coupon or era values replace the library values.
  *  - Section loss (corrosion, corrosion.ts): a layer keeps (1 − δs) of its area, as bars of the
  *    residual diameter d·√(1 − δs), and a derived steel with the reduced rupture strain; a layer
@@ -167,7 +169,8 @@ export function deriveAsFound(member: BeamDefinition, condition: AsFoundConditio
       }
       const derived = derivedId(id, member.id, variant);
       concreteMap.set(id, derived);
-      specs.push({ ...spec, id: derived, name: `${spec.name} (in place)`, strength: result.strength });
+      // The lower fractile for the code checks, the measured mean for behaviour (issue 11 item 3).
+      specs.push({ ...spec, id: derived, name: `${spec.name} (in place)`, strength: result.strength, meanStrength: Math.max(c.meanStrength, result.strength) });
       concreteSummary.push({ coreSet: i, concreteId: id, derivedId: derived, specifiedStrength: spec.strength, inPlace: result, cores: { meanStrength: c.meanStrength, count: c.count, coefficientOfVariation: c.coefficientOfVariation }, note: c.note ?? '' });
       if (result.strength < 0.75 * spec.strength) warn(`${at}.cores[${i}]`, phrase`the in-place strength (${fc(result.strength)}) is ${pct(1 - result.strength / spec.strength)} below the specified ${fc(spec.strength)}`);
     }

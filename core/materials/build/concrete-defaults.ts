@@ -16,6 +16,9 @@ import { vecchioCollinsCrackingStress } from '../concrete/tension.ts';
  *    (Table 3.1; the flexural fctm,fl of Eq. 3.23 depends on the member depth and is for the caller to
  *    pass as an override); crushing strain εcu1 (Table 3.1).
  * `strainsFck` is the fck that Table 3.1 strain constants are read at (the spec's strength under both bases).
+ * A measured mean strength (`meanStrength`, as-found cores) replaces f′c (ACI) or fcm (EN) in every
+ * number of behaviour here — the laws' peak, Ec, the tensile strengths, the EN strain constants (read
+ * at fcm − 8) — so the code checks alone see the characteristic `strength` (issue 11 item 3).
  */
 export interface ResolvedConcrete {
   readonly code: CodeBasis;
@@ -92,29 +95,33 @@ export function resolveConcrete(spec: ConcreteSpec, code: CodeBasis, defaultChoi
     : choice === 'law' && lawValue ? lawValue : codeValue;
   const lawHasNoUltimateStrain = spec.crushingStrain === undefined && choice === 'law' && lawValue === undefined;
   if (code === 'EN 1992-1-1') {
+    // With a measured mean fcm the Table 3.1 relations are read at fck = fcm − 8 (never fcm below the mean).
+    const fcm = spec.meanStrength ?? en1992MeanStrength(fc);
+    const fk = spec.meanStrength !== undefined ? fcm - 8 : fc;
     return {
       code,
-      modelStrength: en1992MeanStrength(fc),
-      elasticModulus: spec.elasticModulus ?? en1992ElasticModulus(fc),
-      tensileStrength: spec.tensileStrength ?? en1992MeanTensileStrength(fc),
-      codeTensileStrength: spec.tensileStrength ?? en1992MeanTensileStrength(fc),
-      codeCrushingStrain: en1992UltimateStrainNonlinear(fc),
-      strainsFck: fc,
-      codePeakStrain: en1992PeakStrain(fc),
+      modelStrength: fcm,
+      elasticModulus: spec.elasticModulus ?? en1992ElasticModulus(fk),
+      tensileStrength: spec.tensileStrength ?? en1992MeanTensileStrength(fk),
+      codeTensileStrength: spec.tensileStrength ?? en1992MeanTensileStrength(fk),
+      codeCrushingStrain: en1992UltimateStrainNonlinear(fk),
+      strainsFck: fk,
+      codePeakStrain: en1992PeakStrain(fk),
       ultimateStrain,
       lawHasNoUltimateStrain,
     };
   }
+  const fm = spec.meanStrength ?? fc;
   return {
     code,
-    modelStrength: fc,
-    elasticModulus: spec.elasticModulus ?? aciElasticModulus(fc),
+    modelStrength: fm,
+    elasticModulus: spec.elasticModulus ?? aciElasticModulus(fm),
     // Each law is fed the strength it was calibrated on: the brittle law reproduces the code's cracking
     // moment with fr; tension stiffening expects the direct cracking stress (tension.ts).
     tensileStrength: spec.tensileStrength ?? (spec.tensionModel === 'tension-stiffening'
-      ? vecchioCollinsCrackingStress(fc, spec.lightweightFactor ?? 1)
-      : aciModulusOfRupture(fc, spec.lightweightFactor ?? 1)),
-    codeTensileStrength: spec.tensileStrength ?? aciModulusOfRupture(fc, spec.lightweightFactor ?? 1),
+      ? vecchioCollinsCrackingStress(fm, spec.lightweightFactor ?? 1)
+      : aciModulusOfRupture(fm, spec.lightweightFactor ?? 1)),
+    codeTensileStrength: spec.tensileStrength ?? aciModulusOfRupture(fm, spec.lightweightFactor ?? 1),
     codeCrushingStrain: ACI_CRUSHING_STRAIN,
     strainsFck: fc,
     codePeakStrain: undefined,

@@ -67,7 +67,7 @@ function coverCompression(spec: ConcreteSpec, r: ResolvedConcrete): CompressionL
     case 'en1992-nonlinear':
       return en1992NonlinearCompression({ meanStrength: fc, elasticModulus: Ec, peakStrain: en1992PeakStrain(r.strainsFck), crushingStrain });
     case 'en1992-parabola-rectangle':
-      return en1992ParabolaRectangleCompression({ strength: spec.strength, characteristicStrength: r.strainsFck, crushingStrain });
+      return en1992ParabolaRectangleCompression({ strength: spec.meanStrength ?? spec.strength, characteristicStrength: r.strainsFck, crushingStrain });
   }
 }
 
@@ -119,6 +119,9 @@ function checkFields(out: Diagnostic[], spec: ConcreteSpec, path: string): boole
   checkOption(out, at('compressionModel'), 'concrete compression model', spec.compressionModel, CONCRETE_COMPRESSION_MODELS);
   checkOption(out, at('tensionModel'), 'concrete tension model', spec.tensionModel, CONCRETE_TENSION_MODELS);
   if (spec.tensionStiffeningZone !== undefined) checkOption(out, at('tensionStiffeningZone'), 'zone of tension stiffening', spec.tensionStiffeningZone, TENSION_STIFFENING_ZONES);
+  if (spec.meanStrength !== undefined && Number.isFinite(spec.strength)) {
+    checkField(out, at('meanStrength'), 'measured mean compressive strength', spec.meanStrength, { min: spec.strength, max: CONCRETE_STRENGTH_RANGE.max + 20, quantity: 'concreteStress' });
+  }
   if (spec.ultimateStrain !== undefined) checkOption(out, at('ultimateStrain'), 'source of the ultimate strain εcu', spec.ultimateStrain, ULTIMATE_STRAIN_CHOICES);
   const optional: [keyof ConcreteSpec, string, AllowedRange][] = [
     ['elasticModulus', 'concrete elastic modulus Ec', { min: 5_000, max: 70_000, quantity: 'modulus' }],

@@ -26,11 +26,11 @@ const cases: [string, { asFound?: AsFoundCondition; schemes?: StrengtheningSchem
 
 describe('validate and analyze agree on as-found and scheme errors', () => {
   it.each(cases)('%s: validate reports it at the field, analyze makes the member an input error with the same problem', (_name, extra, path, words) => {
-    const p = project(extra);
-    if (extra.schemes?.some((s) => s.kind === 'frp')) {
-      // a carbon sheet of common properties (common practice, no source): Ef = 230 GPa, ε*fu = 0.017; CE = 0.95 for interior exposure (ACI 440.2R-17 Table 9.4, from memory)
-      p.materials.push({ kind: 'frp', id: 'cfrp', name: 'carbon sheet', tensileModulus: 230_000, ruptureStrain: 0.017, environmentalFactor: 0.95 });
-    }
+    const base = project(extra);
+    // a carbon sheet of common properties (common practice, no source): Ef = 230 GPa, ε*fu = 0.017; CE = 0.95 for interior exposure (ACI 440.2R-17 Table 9.4, from memory)
+    const p: Project = extra.schemes?.some((s) => s.kind === 'frp')
+      ? { ...base, materials: [...base.materials, { kind: 'frp', id: 'cfrp', name: 'carbon sheet', tensileModulus: 230_000, ruptureStrain: 0.017, environmentalFactor: 0.95 }] }
+      : base;
     const errors = validateProject(p).filter((d) => d.severity === 'error');
     expect(errors.map((d) => d.path)).toEqual([path]);
     expect(errors[0]!.message).toMatch(words);

@@ -71,6 +71,16 @@ export function memberDetail(r: MemberResult, system: UnitSystem): unknown {
   const ld = r.loadDeflection;
   const sv = r.service;
   return {
+    // An as-found concrete from cores carries two strengths: the mean for the behaviour, the lower fractile for the code checks.
+    asFoundConcrete: (r.retrofit?.asFound?.concrete ?? []).map((c) => ({
+      concreteId: c.concreteId,
+      derivedId: c.derivedId,
+      cores: { count: c.cores.count, coefficientOfVariation: pure(c.cores.coefficientOfVariation) },
+      meanStrength: measured('concreteStress', c.cores.meanStrength, system),
+      codeStrength: measured('concreteStress', c.inPlace.strength, system),
+      specifiedStrength: measured('concreteStress', c.specifiedStrength, system),
+      method: c.inPlace.method,
+    })),
     sections: r.sections.map((s) => sectionDetail(s, system)),
     loadDeflection: {
       pattern: ld.pattern,

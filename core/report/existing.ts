@@ -13,6 +13,7 @@
 import { needsStrengthening, type RetrofitResult } from '../assessment/results.ts';
 import { variantComparisonTable, type ComparisonCell } from '../charts/variant-table.ts';
 import type { MemberDefinition } from '../project/types.ts';
+import { asFoundStrengthUse } from '../retrofit/in-place-strength.ts';
 import type { WriteContext } from './context.ts';
 import { figureNode } from './context.ts';
 import type { ExistingMember, ExistingPlan } from './existing-plan.ts';
@@ -44,11 +45,12 @@ function asFoundInputs(ctx: WriteContext, retrofit: RetrofitResult, plan: Existi
       h3('Tested concrete strength (cores)'),
       dataTable({
         widths: ['*', 24, 50, 30, 44, 30, 56, 50],
-        header: ['Concrete', 'n', 'Mean fc,mean', 'V', 's', aci ? 'K' : 'kn', aci ? 'f′c,eq' : 'fck,is', 'Specified'],
+        header: ['Concrete', 'n', 'Mean fc,mean (behaviour)', 'V', 's', aci ? 'K' : 'kn', aci ? 'f′c,eq (code checks)' : 'fck,is (code checks)', 'Specified'],
         align: ['left', 'right', 'right', 'right', 'right', 'right', 'right', 'right'],
         rows: summary.concrete.map((c) => [name(c.concreteId), String(c.cores.count), f.concreteStress(c.cores.meanStrength), f.fixed(c.cores.coefficientOfVariation, 3), f.concreteStress(c.inPlace.standardDeviation), f.fixed(c.inPlace.factor, 3), { text: f.concreteStress(c.inPlace.strength), bold: true }, f.concreteStress(c.specifiedStrength)]),
       }),
       bullets(summary.concrete.map((c) => ({ text: [{ text: `${name(c.concreteId)}: `, bold: true }, `${c.inPlace.method}. ${printable(f.say(c.inPlace.formula))}${c.note ? ` — ${c.note}` : ''}` ], fontSize: 7.5 }))),
+      { text: printable(asFoundStrengthUse(project.info.codeBasis)), ...STYLES.body, fontSize: 7.5 },
     ]));
   }
   if (summary.steel.length > 0) {

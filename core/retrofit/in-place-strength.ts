@@ -27,6 +27,15 @@ import { oneSidedToleranceFactor } from './statistics.ts';
 import { convertUnit } from '../units/convert.ts';
 import { bySystem, type Text } from '../units/phrase.ts';
 
+/**
+ * What each strength of an as-found concrete is used for (issue 11 item 3), one sentence for the
+ * report, the app and the CLI: the cores' mean for the behaviour, the lower fractile for the code checks.
+ */
+export function asFoundStrengthUse(code: CodeBasis): string {
+  const fractile = code === 'ACI 318-19' ? 'f′c,eq' : 'fck,is';
+  return `The mean f̄c is used for the behaviour (stress–strain laws and curves, Ec, tensile strength, both deflection methods, the shear at the flexural mechanism); ${fractile} for the code checks (${code === 'ACI 318-19' ? 'φMn' : 'M_Rd'}, shear capacity, FRP debonding strain, service-stress limits).`;
+}
+
 /** Fewest cores either method accepts. @see ACI 318-19 26.12.6.1 (three cores per low-strength test, from memory); EN 1990 Table D1 (no "VX unknown" value below n = 3) */
 export const MINIMUM_CORE_COUNT = 3;
 

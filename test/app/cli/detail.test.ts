@@ -35,7 +35,22 @@ describe('the full detail of the JSON output', () => {
     const full = analysisJson(project, results, 'us', undefined, memberDetail) as any;
     const b = full.members.find((m: any) => m.id === 'B-204');
     expect(b.yieldMoment.unit).toBe('kip·ft');
-    expect(Object.keys(b.detail)).toEqual(['sections', 'loadDeflection', 'ductility', 'hinges', 'service']);
+    expect(Object.keys(b.detail)).toEqual(['asFoundConcrete', 'sections', 'loadDeflection', 'ductility', 'hinges', 'service']);
+  });
+
+  it('gives an as-found concrete both strengths: the cores\' mean (behaviour) and the lower fractile (code checks)', () => {
+    const r = results.members.find((m) => m.memberId === 'B-204')!;
+    const [c] = (memberDetail(r, 'us') as any).asFoundConcrete;
+    // the demo's cores: mean 3500 psi, n = 6, V = 0.11; ACI 214.4R-10 f′c,eq = f̄c(1 − K·V) (from memory), K from the result
+    const k = r.retrofit!.asFound!.concrete[0]!.inPlace.factor;
+    expect(c.meanStrength.unit).toBe('psi');
+    expect(c.meanStrength.value).toBeCloseTo(3500, 3);
+    expect(c.codeStrength.value).toBeCloseTo(3500 * (1 - k * 0.11), 3);
+    expect(c.cores).toEqual({ count: 6, coefficientOfVariation: { value: 0.11, unit: '1' } });
+    const derived = r.retrofit!.derivedMaterials.find((m) => m.id === c.derivedId) as any;
+    expect(derived.meanStrength).toBeCloseTo(3500 * 0.006894757, 4);
+    const other = results.members.find((m) => m.memberId === 'C-101')!;
+    expect((memberDetail(other, 'us') as any).asFoundConcrete).toEqual([]);
   });
 
   it('writes every number with a unit, finite, in the chosen system', () => {

@@ -57,6 +57,10 @@ describe('the report of an existing beam', () => {
     expect(core.inPlace.strength).toBeCloseTo(expected, 6);
     expect(all).toContain(`${expected.toPrecision(3)} MPa`);
     expect(joined).toContain('ACI 214.4R-10');
+    // both strengths with their use (issue 11 item 3)
+    expect(joined).toContain('Mean fc,mean (behaviour)');
+    expect(joined).toContain('f′c,eq (code checks)');
+    expect(joined).toMatch(/mean fc,mean is used for the behaviour .*; f′c,eq for the code checks/);
     // The report font has no arrow: what a defect did reads "a to b".
     expect(joined).toMatch(/Bar section loss: .* to /);
     expect(joined).not.toContain('→');

@@ -76,6 +76,11 @@ describe('AsFoundEditor', () => {
     expect(derived.inPlace.strength / 0.006894757).toBeCloseTo(expected, 0);
     expect(text).toContain(`${Number(expected.toPrecision(3))} psi`);
     expect(text).toContain('ACI 214.4R-10');
+    // both strengths, each with what it is used for (issue 11 item 3)
+    expect(wrapper.get('[data-testid=core-mean-used]').text()).toBe('3500 psi');
+    expect(text).toContain('Mean f̄c (behaviour)');
+    expect(text).toContain('Equivalent specified f′c,eq (code checks)');
+    expect(wrapper.get('[data-testid=core-strength-use]').text()).toMatch(/mean f̄c is used for the behaviour .*Ec.*; f′c,eq for the code checks \(φMn, shear capacity/);
   });
 
   it('draws the section as found, the corroded layer and the lost outline named', () => {

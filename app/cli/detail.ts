@@ -94,6 +94,7 @@ export function memberDetail(r: MemberResult, system: UnitSystem): unknown {
       yieldDeflection: d(r.ductility.yieldDeflection),
       ultimateDeflection: d(r.ductility.ultimateDeflection),
       displacementDuctility: pure(r.ductility.displacementDuctility),
+      ultimateOutsideRange: r.ultimateOutsideRange ? say(r.ultimateOutsideRange, system) : null,
       failureCause: r.ductility.failureCause,
     },
     hinges: r.ductility.hinges.map((h) => ({

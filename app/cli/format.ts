@@ -292,6 +292,7 @@ export function analysisJson(project: Project, results: ProjectResults, system: 
         displacementDuctility: pure(k.displacementDuctility),
         plasticRotationCapacity: measured('rotation', k.plasticRotationCapacity, system),
         ductilityUnavailable: k.ductilityUnavailable ? say(k.ductilityUnavailable, system) : null,
+        ultimateOutsideRange: k.ultimateOutsideRange ? say(k.ultimateOutsideRange, system) : null,
         brittle: r.brittle.map((b) => ({ cause: b.cause, sectionId: b.sectionId, direction: b.direction, text: say(b.text, system) })),
         ultimateLoadFactor: pure(k.ultimateLoadFactor),
         deflection: k.deflection

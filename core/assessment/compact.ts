@@ -69,7 +69,7 @@ export function compactVariant(code: CodeBasis, run: VariantRun, governingMode: 
     },
     ductility: {
       available,
-      note: r.ductilityUnavailable ?? 'ductile: the ductility and hinge rotations apply',
+      note: r.ductilityUnavailable ?? r.ultimateOutsideRange ?? 'ductile: the ductility and hinge rotations apply',
       yieldDeflection: finite(r.ductility.yieldDeflection),
       ultimateDeflection: finite(r.ductility.ultimateDeflection),
       displacementDuctility: finite(r.ductility.displacementDuctility),

@@ -112,6 +112,12 @@ export interface MemberResult extends BeamResult {
    * `ductility`), or null when they are.
    */
   readonly ductilityUnavailable: Text | null;
+  /**
+   * Why the ultimate deflection Δu and μΔ are not given although the member is not brittle: its
+   * load–deflection curve passes span/50, outside the small-deflection range of the method, before
+   * its ultimate (core/member/small-deflection.ts); null or absent when it stays within.
+   */
+  readonly ultimateOutsideRange?: Text | null;
   /** Design, as-found and strengthened variants (core/assessment/member.ts). */
   readonly retrofit?: RetrofitResult;
 }

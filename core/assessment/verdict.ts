@@ -9,7 +9,7 @@ import type { Problem } from '../diagnostics.ts';
 import type { BeamAnalysis } from '../member/analyze.ts';
 import type { BeamDefinition } from '../member/definition.ts';
 import type { BeamResult } from '../member/results.ts';
-import { OUTSIDE_SMALL_DEFLECTION, serviceOutsideRange } from '../member/small-deflection.ts';
+import { OUTSIDE_SMALL_DEFLECTION, SMALL_DEFLECTION_RATIO, serviceOutsideRange, ultimateOutsideRange } from '../member/small-deflection.ts';
 import { capitalised, joinTexts, phrase, q, withoutFinalStop, type Text } from '../units/phrase.ts';
 import type { BrittleFinding, MemberResult, MemberStatus, StrengthCheck } from './results.ts';
 import type { ShearResult } from './shear.ts';
@@ -39,6 +39,26 @@ export function memberStatus(converged: boolean, result: BeamResult, strength: S
 }
 
 /** The ductility of a beam with its capacities withdrawn (null) when it is brittle. */
+/**
+ * The ductility figures of a load–deflection curve that leaves the method's range before its
+ * ultimate (small-deflection.ts): Δu and μΔ withheld, the hinges' rotation at ultimate too (a state
+ * beyond the range), and any other deflection of the block that itself lies beyond span/50.
+ */
+function beyondRange(ductility: BeamResult['ductility'], span: number): BeamResult['ductility'] {
+  const limit = span / SMALL_DEFLECTION_RATIO;
+  const within = (v: number | null) => (v !== null && Math.abs(v) <= limit ? v : null);
+  return {
+    ...ductility,
+    firstYieldDeflection: within(ductility.firstYieldDeflection),
+    yieldDeflection: within(ductility.yieldDeflection),
+    ultimateDeflection: null,
+    displacementDuctility: null,
+    ...(ductility.peak ? { peak: Math.abs(ductility.peak.deflection) <= limit ? ductility.peak : null } : {}),
+    ...(ductility.codeUltimate ? { codeUltimate: Math.abs(ductility.codeUltimate.deflection) <= limit ? ductility.codeUltimate : null } : {}),
+    hinges: ductility.hinges.map((h) => ({ ...h, rotationAtUltimate: null })),
+  };
+}
+
 function withdrawn(ductility: BeamResult['ductility']): BeamResult['ductility'] {
   return {
     ...ductility,
@@ -61,10 +81,13 @@ export function memberVerdict(input: VerdictInput): MemberResult {
   const status = memberStatus(beam.converged && defects.length === 0, result, strength, shear, brittle);
   const parts: Text[] = [];
   const capacity = beam.capacity;
-  const mu = result.ductility.displacementDuctility;
+  // A curve beyond span/50 before its ultimate: no Δu or μΔ (issue 17), the reason instead.
+  const outside = ultimateOutsideRange(result);
+  const mu = outside ? null : result.ductility.displacementDuctility;
   if (capacity && capacity.ultimateLoadFactor !== null) {
     const pattern = member.capacity.pattern === 'proportional' ? 'service load' : 'live load (dead load held)';
-    parts.push(`${capacity.failureCause} at ${capacity.ultimateLoadFactor.toFixed(2)} × the ${pattern}${mu && !brittleMember ? `, displacement ductility μΔ = ${mu.toFixed(1)}` : ''}`);
+    const ductilityWords = outside ? `, load–deflection ${OUTSIDE_SMALL_DEFLECTION} (beyond span/${SMALL_DEFLECTION_RATIO}): no μΔ` : mu && !brittleMember ? `, displacement ductility μΔ = ${mu.toFixed(1)}` : '';
+    parts.push(`${capacity.failureCause} at ${capacity.ultimateLoadFactor.toFixed(2)} × the ${pattern}${ductilityWords}`);
   } else if (capacity) {
     parts.push(capacity.status);
   } else {
@@ -86,16 +109,18 @@ export function memberVerdict(input: VerdictInput): MemberResult {
   const flexural = brittle.filter((b) => b.cause !== 'shear-before-flexure');
   if (flexural.length > 0) sentence = phrase`${sentence}; brittle: ${joinTexts(flexural.map((b) => b.text), '; ')}`;
   const unavailable: Text | null = brittleMember ? phrase`not available: ${joinTexts(brittle.map((b) => b.text), '; ')}` : null;
+  const ductility = outside ? beyondRange(result.ductility, result.span) : result.ductility;
   return {
     ...result,
-    ductility: brittleMember ? withdrawn(result.ductility) : result.ductility,
+    ductility: brittleMember ? withdrawn(ductility) : ductility,
+    ultimateOutsideRange: outside,
     status,
     governingMode: phrase`${withoutFinalStop(sentence)}.`,
     strength,
     ...(shear ? { shear } : {}),
     brittle,
     ductilityUnavailable: unavailable,
-    warnings: [...result.warnings, ...(shear?.warnings ?? [])],
+    warnings: [...result.warnings, ...(outside ? [outside] : []), ...(shear?.warnings ?? [])],
     errors: [...result.errors, ...defects],
   };
 }

@@ -21,7 +21,7 @@ import { serviceDeflections, type ServiceZone } from './service.ts';
 import { shiftStations, ULTIMATE_LOAD_FRACTION } from './spread.ts';
 import { releasedMoment, toStaticLoad, totalLoad, type StaticLoad } from './statics.ts';
 import { memberProportionProblems } from './proportions.ts';
-import { serviceOutsideRange } from './small-deflection.ts';
+import { serviceOutsideRange, ultimateOutsideRange } from './small-deflection.ts';
 import { validateMember } from './validate.ts';
 import { elasticZone, zoneResponse } from './zones.ts';
 
@@ -265,7 +265,8 @@ export function analyzeBeam(member: BeamDefinition, context: MemberContext): Bea
     if (y.note) warnings.push(y.note);
     ultimateDeflection = capacity.ultimate.deflection;
     displacementDuctility = yieldDeflection && yieldDeflection > 0 ? ultimateDeflection / yieldDeflection : null;
-    if (displacementDuctility !== null && displacementDuctility > DUCTILITY_RANGE_LIMIT) {
+    // Beyond span/50 μΔ is withheld altogether (small-deflection.ts; the verdict says why): no number here either.
+    if (displacementDuctility !== null && displacementDuctility > DUCTILITY_RANGE_LIMIT && !ultimateOutsideRange({ span, loadDeflection: { points: capacity.points } })) {
       warnings.push(`The displacement ductility μΔ = ${displacementDuctility.toFixed(1)} is beyond ${DUCTILITY_RANGE_LIMIT}, outside the range the yield and ultimate definitions are meant for: read it as "very ductile", not as a precise figure.`);
     }
   }

@@ -25,7 +25,7 @@ import type { CapacitySettings, MemberLoad, ServiceSettings, SupportType } from 
 import type { LoadDeflectionPoint, SpanDistribution } from '../member/results.ts';
 import type { MomentCurvatureResult } from '../section/results.ts';
 import { displaySystem, formatNumber, fromDisplay, say, toDisplay, unitLabel, UNITS, type Quantity, type UnitId } from '../units/index.ts';
-import { memberKeyResults } from './key-results.ts';
+import { memberKeyResults, type MemberKeyResults } from './key-results.ts';
 import type { Project, UnitSystem, MemberDefinition } from './types.ts';
 import type { MemberResult } from '../assessment/results.ts';
 
@@ -321,12 +321,19 @@ function head(label: string, quantity: Quantity | null, system: UnitSystem): str
 const shown = (quantity: Quantity, value: number | null | undefined, system: UnitSystem): number | null =>
   typeof value === 'number' && Number.isFinite(value) ? toDisplay(quantity, value, displaySystem(system)) : null;
 
+/** Why μΔ and θp (or μΔ alone) are not given: the brittle reason and/or the small-deflection range, in words; null when they are. */
+function unavailable(k: MemberKeyResults, system: UnitSystem): string | null {
+  const reasons = [k.ductilityUnavailable, k.ultimateOutsideRange].filter((t): t is NonNullable<typeof t> => t !== null).map((t) => say(t, system));
+  return reasons.length > 0 ? reasons.join(' ') : null;
+}
+
 /**
  * Results summary, one row per member, in the display units of `system` (named in the header):
  * id, name, supports, span, status, My, Mu, φu/φy, μΔ, θp, ultimate load factor, governing
  * deflection and its limit, limit case, deflection and strength utilisations, warnings, governing mode,
  * then where the strength check governs (position, sense, combination) and, for a brittle member, why
- * its ductility and rotation are not given (those cells are then empty).
+ * its ductility and rotation are not given (those cells are then empty) — or, for a member whose
+ * load–deflection curve leaves the small-deflection range, why μΔ is not given.
  */
 export function resultsSummaryCsv(members: readonly MemberResult[], system: UnitSystem, project?: Project, continuous: readonly ContinuousMemberResult[] = []): string {
   const rows: (string | number | null)[][] = [[
@@ -344,7 +351,7 @@ export function resultsSummaryCsv(members: readonly MemberResult[], system: Unit
       shown('rotation', k.plasticRotationCapacity, system), k.ultimateLoadFactor,
       shown('deflection', k.deflection?.deflection, system), shown('deflection', k.deflection?.limit, system), k.deflection?.limitCase ?? null,
       k.deflection?.utilisation ?? null, k.strengthUtilisation, k.warnings, say(k.governingMode, system),
-      shown('spanLength', k.strengthPosition, system), k.strengthDirection, k.strengthCombination, k.ductilityUnavailable ? say(k.ductilityUnavailable, system) : null,
+      shown('spanLength', k.strengthPosition, system), k.strengthDirection, k.strengthCombination, unavailable(k, system),
     ]);
   }
   rows.push(...continuousSummaryRows(continuous, system));

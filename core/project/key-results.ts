@@ -52,6 +52,8 @@ export interface MemberKeyResults {
   readonly displacementDuctility: number | null;
   /** Why the ductility and hinge rotation are not available (a brittle member), or null. */
   readonly ductilityUnavailable: Text | null;
+  /** Why μΔ (and Δu) are not given for a member that is not brittle: its load–deflection curve leaves the small-deflection range (span/50) before its ultimate; else null. */
+  readonly ultimateOutsideRange: Text | null;
   /** Plastic rotation capacity θp of the governing hinge, rad (null for a brittle member). */
   readonly plasticRotationCapacity: number | null;
   /** Load factor at ultimate on the load pattern (× service load). */
@@ -159,6 +161,7 @@ export function memberKeyResults(result: MemberResult, definition?: MemberDefini
     curvatureDuctility: result.ductilityUnavailable ? null : finiteOrNull(curve?.curvatureDuctility),
     displacementDuctility: finiteOrNull(result.ductility.displacementDuctility),
     ductilityUnavailable: result.ductilityUnavailable ?? null,
+    ultimateOutsideRange: result.ultimateOutsideRange ?? null,
     plasticRotationCapacity: finiteOrNull(picked?.hinge?.rotationCapacity),
     ultimateLoadFactor: finiteOrNull(ultimate?.loadFactor),
     // A deflection outside the method's range is no result (core/member/small-deflection.ts); the warnings say why.

@@ -26,9 +26,11 @@ import { validateMember } from '../member/validate.ts';
 import { validateContinuousBeam } from '../continuous/validate.ts';
 import { validateAsFound, validateSchemes } from '../retrofit/validate.ts';
 import { retrofitInputProblems } from '../assessment/retrofit-input.ts';
+import { minimumSteelWarnings, type BuiltSection } from '../assessment/brittle.ts';
 import { buildSectionModel, checkBarNumbers, validateShape } from '../section/build.ts';
 import { memberGeometryDiagnostics, sectionGeometryDiagnostics } from './validate-geometry.ts';
 import type { SectionDefinition } from '../section/definition.ts';
+import type { SectionModel } from '../section/model.ts';
 import { phrase, q } from '../units/phrase.ts';
 import { materialLibrary, type MaterialSettings } from '../materials/library.ts';
 import {
@@ -222,11 +224,12 @@ export function analysisBlockers(diagnostics: readonly Diagnostic[]): Diagnostic
 const CONFINEMENT_TO_HOOPS: Readonly<Record<string, string>> = { legsX: 'verticalLegs', legsY: 'horizontalLegs', hoopDiameter: 'diameter', spacing: 'spacing' };
 
 /** Section checks of the section builder, with confinement problems placed on the section's hoops. */
-function sectionBuildDiagnostics(section: SectionDefinition, path: string, materials: readonly MaterialSpec[], code: CodeBasis, settings: MaterialSettings): Diagnostic[] {
+function sectionBuildDiagnostics(section: SectionDefinition, path: string, materials: readonly MaterialSpec[], code: CodeBasis, settings: MaterialSettings, built?: (model: SectionModel) => void): Diagnostic[] {
   const resolver = materialLibrary(materials, code, settings);
   const out: Diagnostic[] = [];
   try {
-    const { warnings } = buildSectionModel(section, resolver, path);
+    const { model, warnings } = buildSectionModel(section, resolver, path);
+    built?.(model);
     for (const w of warnings) out.push({ code: 'inconsistent', path, severity: 'warning', message: w });
   } catch (error) {
     if (!(error instanceof InputError)) throw error;
@@ -347,6 +350,7 @@ export function validateProjectData(data: unknown): { project: Project | null; d
   }
 
   // Sections: references by kind, then the section builder (dimensions, bars inside the concrete, hoops).
+  const builtSections = new Map<string, BuiltSection>();
   for (const { value: section, index } of sections) {
     const path = itemPath('sections', index, section);
     const references = [
@@ -367,7 +371,11 @@ export function validateProjectData(data: unknown): { project: Project | null; d
     // a count of 1e9 would exhaust memory, so the bars' numbers are checked here first.
     const barsOk = barLayerPrecheck(semantic, section, path);
     const referencesOk = references.every(Boolean);
-    if (code && referencesOk && barsOk) semantic.push(...guarded(path, () => sectionBuildDiagnostics(section, path, materialSpecs, code, { ...(ultimateStrain ? { concreteUltimateStrain: ultimateStrain } : {}) })));
+    const concrete = materialById.get(section.concreteId);
+    const keep = (model: SectionModel) => {
+      if (concrete?.kind === 'concrete') builtSections.set(section.id, { model, concrete, name: section.name });
+    };
+    if (code && referencesOk && barsOk) semantic.push(...guarded(path, () => sectionBuildDiagnostics(section, path, materialSpecs, code, { ...(ultimateStrain ? { concreteUltimateStrain: ultimateStrain } : {}) }, keep)));
     else semantic.push(...guarded(path, () => validateShape(section.shape, `${path}.shape`))); // the shape is still checked
     semantic.push(...guarded(path, () => sectionGeometryDiagnostics(section, path, code, Boolean(code && referencesOk && barsOk))));
   }
@@ -382,6 +390,8 @@ export function validateProjectData(data: unknown): { project: Project | null; d
     const path = itemPath('members', index, member);
     semantic.push(...guarded(path, () => validateMember(member, path, sectionIds)));
     semantic.push(...guarded(path, () => memberGeometryDiagnostics(member, path, code, soundProject.sections)));
+    // Steel below the minimum: the verdicts' own rule (core/assessment/brittle.ts), as a warning before the analysis.
+    if (code) semantic.push(...guarded(path, () => minimumSteelWarnings(code, member, path, (id) => builtSections.get(id))));
     // The as-found condition and schemes: the assessment's own input checks (derivations and the
     // sections they make), so validate reports every error analyze would; the field checks alone
     // while the code basis is unknown.

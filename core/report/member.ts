@@ -161,8 +161,9 @@ function hingesAndDuctility(ctx: WriteContext, member: MemberPlan, result: Membe
   out.push(factsTable([
     ['Deflection at first yield', f.deflection(d.firstYieldDeflection)],
     ['Nominal yield deflection Δy', f.deflection(d.yieldDeflection)],
-    ['Ultimate deflection Δu', f.deflection(d.ultimateDeflection)],
-    ['Displacement ductility μΔ = Δu/Δy', f.number(d.displacementDuctility)],
+    ['Ultimate deflection Δu', result.ultimateOutsideRange ? 'not given' : f.deflection(d.ultimateDeflection)],
+    ['Displacement ductility μΔ = Δu/Δy', result.ultimateOutsideRange ? 'not given' : f.number(d.displacementDuctility)],
+    ...(result.ultimateOutsideRange ? [['Outside the small-deflection range: Δu and μΔ', { text: f.say(result.ultimateOutsideRange), color: COLOURS.fail }] as [string, Content]] : []),
     ['What ends the curve', d.failureCause || '—'],
     ...(result.ductilityUnavailable ? [['Brittle member: ductility and hinge rotations', { text: f.say(result.ductilityUnavailable), color: COLOURS.fail }] as [string, Content]] : []),
   ], 170));

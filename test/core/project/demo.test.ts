@@ -33,7 +33,8 @@ describe('the US demo project (Wrenfield Mill, Building B)', () => {
     expect(us.info.unitSystem).toBe('us');
     expect(us.members.length).toBeGreaterThanOrEqual(8);
     expect(us.members.length).toBeLessThanOrEqual(12);
-    expect(validateProject(us)).toEqual([]);
+    // one warning only: L-102 is below the minimum steel on purpose (the demo's beam that fails as it cracks)
+    expect(validateProject(us).map((d) => [d.severity, d.path])).toEqual([['warning', 'members[7] "L-102".zones[0].sectionId']]);
   });
 
   it('analyses every member without input errors and every analysis converges', () => {

@@ -1,0 +1,29 @@
+/**
+ * The ductility panel of a member whose load–deflection curve passes span/50 before its ultimate
+ * (issue 17): Δu and μΔ read as no value, and the reason is shown beside them.
+ */
+import { mount } from '@vue/test-utils';
+import { describe, expect, it } from 'vitest';
+import { analyzeProject } from '../../../core/analysis.ts';
+import { NOT_A_VALUE } from '../../../core/units/index.ts';
+import DuctilityPanel from '../../../renderer/src/views/member/DuctilityPanel.vue';
+import { REASON_20M, slenderProject } from '../../core/assessment/slender-beams.ts';
+import { member, smallProject } from '../../fixtures/projects.ts';
+
+describe('DuctilityPanel', () => {
+  it('withholds Δu and μΔ beyond span/50 and says why', () => {
+    const result = analyzeProject(slenderProject()).members[0]!;
+    const wrapper = mount(DuctilityPanel, { props: { result, system: 'si' } });
+    const value = (label: string) => wrapper.findAll('dt').find((d) => d.text() === label)!.element.nextElementSibling!.textContent;
+    expect(value('Displacement ductility μΔ = Δu/Δy')).toBe(NOT_A_VALUE);
+    expect(value('Deflection at ultimate Δu')).toBe(NOT_A_VALUE);
+    expect(wrapper.get('[data-testid=ultimate-outside-range]').text()).toContain(`${REASON_20M} 1.50 × the load pattern`);
+  });
+
+  it('an ordinary beam shows its μΔ and no such line', () => {
+    const result = analyzeProject(smallProject('ACI 318-19', [member('A', 'simply-supported', 6000, 'r1')])).members[0]!;
+    const wrapper = mount(DuctilityPanel, { props: { result, system: 'si' } });
+    expect(wrapper.find('[data-testid=ultimate-outside-range]').exists()).toBe(false);
+    expect(wrapper.findAll('dt').find((d) => d.text() === 'Deflection at ultimate Δu')!.element.nextElementSibling!.textContent).toMatch(/^\d/);
+  });
+});

@@ -4,6 +4,7 @@
  * states. Every number comes from the variant's run (variant.ts): the checks are not repeated here.
  * Units: N, mm, N·mm, 1/mm, rad.
  */
+import { serviceOutsideRange } from '../member/small-deflection.ts';
 import type { CodeBasis } from '../materials/specs.ts';
 import type { PlasticHinge } from '../member/results.ts';
 import type { SectionAnalysis } from '../section/analyze.ts';
@@ -77,6 +78,7 @@ export function compactVariant(code: CodeBasis, run: VariantRun, governingMode: 
     },
     strength: r.strength,
     deflectionChecks: r.service?.checks ?? [],
+    serviceOutsideRange: serviceOutsideRange(r.service, r.span),
     shear: run.shear,
     warnings: r.warnings,
     errors: r.errors,

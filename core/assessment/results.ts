@@ -187,6 +187,8 @@ export interface VariantResult {
   };
   readonly strength: StrengthCheck | null;
   readonly deflectionChecks: readonly DeflectionCheck[];
+  /** Why the service deflections are no result (beyond span/50, core/member/small-deflection.ts), or null. */
+  readonly serviceOutsideRange?: Text | null;
   readonly shear: ShearResult | null;
   readonly warnings: readonly Text[];
   readonly errors: readonly Problem[];

@@ -5,6 +5,7 @@
  * ductility.
  */
 import type { MemberEventKind } from '../member/results.ts';
+import { OUTSIDE_SMALL_DEFLECTION, SMALL_DEFLECTION_RATIO } from '../member/small-deflection.ts';
 import { formatQuantity } from '../units/format.ts';
 import type { ChartPoint, ChartSpec, MarkerShape, MarkerSpec, ReferenceLineSpec, SeriesSpec, UnitsInput } from './types.ts';
 import { axisFor, axisScale, display, finite, resolveUnits, unitFor, unitText } from './units.ts';
@@ -123,8 +124,14 @@ export function loadDeflectionChart(member: MemberResult, unitsInput: UnitsInput
     referenceLines.push({ axis: 'x', value: display('deflection', d.ultimateDeflection, units) / xScale, label: 'Δu', colour: 'grey', style: 'dotted' });
   }
 
+  // A curve beyond span/50 before its ultimate: the limit of the method drawn, the reason noted (no Δu line above).
+  if (member.ultimateOutsideRange && member.span > 0) {
+    const limit = display('deflection', member.span / SMALL_DEFLECTION_RATIO, units) / xScale;
+    if (finite(limit)) referenceLines.push({ axis: 'x', value: limit, label: `span/${SMALL_DEFLECTION_RATIO}: end of the small-deflection range`, colour: 'red', style: 'dashed' });
+  }
   const notes: string[] = [];
   if (ld.status !== 'complete' && ld.points.length > 0) notes.push(`Curve status: ${ld.status}.`);
+  if (member.ultimateOutsideRange) notes.push(`Beyond span/${SMALL_DEFLECTION_RATIO} the curve is ${OUTSIDE_SMALL_DEFLECTION}: Δu and μΔ are not given.`);
   const liveOnly = ld.pattern.startsWith('live');
   const spec: ChartSpec = {
     kind: 'load-deflection',

@@ -125,6 +125,8 @@ export function variantComparisonTable(
       id: 'deflection', label: 'Service deflection / limit', hint: 'the check most used', group: 'results',
       cells: cells((v) => {
         const c = worstDeflection(v.variant);
+        // beyond span/50 no deflection is a result (core/member/small-deflection.ts): words, and the check fails
+        if (c && v.variant.serviceOutsideRange) return { text: 'outside the method\'s range', verdict: 'fail', note: say(v.variant.serviceOutsideRange, units.system) };
         return c
           ? { text: `${q('deflection', c.governing, { withUnit: false })} / ${q('deflection', c.limit)}`, detail: `${ratio(c.utilisation)} (ℓ/${c.ratio})`, verdict: c.pass ? 'pass' : 'fail' }
           : { text: NOT_A_VALUE };
@@ -133,7 +135,7 @@ export function variantComparisonTable(
     {
       id: 'ductility', label: 'Displacement ductility μΔ', hint: 'Δu / Δy', group: 'results',
       cells: cells((v) => (v.variant.ductility.available
-        ? { text: v.variant.ductility.displacementDuctility === null ? NOT_A_VALUE : formatNumber(v.variant.ductility.displacementDuctility) }
+        ? (v.variant.ductility.displacementDuctility === null ? { text: NOT_A_VALUE, note: say(v.variant.ductility.note, units.system) } : { text: formatNumber(v.variant.ductility.displacementDuctility) })
         : { text: 'not available', note: say(v.variant.ductility.note, units.system) })),
     },
     {

@@ -7,6 +7,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { analyzeProject } from '../../../core/analysis.ts';
+import { loadDeflectionChart } from '../../../core/charts/load-deflection.ts';
 import type { MemberResult } from '../../../core/assessment/results.ts';
 import { OUTSIDE_SMALL_DEFLECTION, SMALL_DEFLECTION_RATIO, ultimateOutsideRange } from '../../../core/member/small-deflection.ts';
 import { resultsSummaryCsv } from '../../../core/project/csv.ts';
@@ -72,6 +73,15 @@ describe('a load–deflection curve beyond span/50 before its ultimate', () => {
     expect(at('Ultimate deflection Δu')).toBe('not given');
     expect(at('Displacement ductility μΔ = Δu/Δy')).toBe('not given');
     expect(at('Outside the small-deflection range: Δu and μΔ')).toMatch(/^Load–deflection: outside the small-deflection range of the method — the curve passes span\/50 = 400 mm/);
+  });
+
+  it('the load–deflection chart draws span/50 instead of a Δu line and notes why', () => {
+    const spec = loadDeflectionChart(r20, 'SI');
+    expect(spec.referenceLines?.map((l) => l.label)).toContain('span/50: end of the small-deflection range');
+    expect(spec.referenceLines?.map((l) => l.label)).not.toContain('Δu');
+    // 400 mm on the chart's deflection axis (mm in SI)
+    expect(spec.referenceLines?.find((l) => l.label.startsWith('span/50'))?.value).toBeCloseTo(400, 6);
+    expect(spec.notes).toContain('Beyond span/50 the curve is outside the small-deflection range of the method: Δu and μΔ are not given.');
   });
 
   it('an ordinary 6 m beam stays within the range and keeps its μΔ', () => {

@@ -72,3 +72,22 @@ describe('the comparison table of an existing beam', () => {
     expect(us.rows.find((r) => r.id === 'check-steel-service-stress')!.cells[column('frp2')]!.detail).toMatch(/ \/ 60\.3 ksi$/);
   });
 });
+
+describe('a variant outside the small-deflection range (issue 17)', () => {
+  // The fixture beam as found, but 20 m long: its service deflections pass span/50 (400 mm).
+  const long = retrofitProject('ACI 318-19', { span: 20000, zones: [{ from: 0, to: 20000, sectionId: 'r1' }], asFound: { cores: [{ meanStrength: 27, count: 4, coefficientOfVariation: 0.12 }] } });
+  const r = analyzeProject(long).members[0]!.retrofit!;
+  const t = variantComparisonTable(r, 'si', 'ACI 318-19');
+  const cell = (id: string, key: string) => t.rows.find((x) => x.id === id)!.cells[t.variants.findIndex((v) => v.key === key)]!;
+
+  it('the deflection cell says so in words and fails, never a number; μΔ is not given, with the reason', () => {
+    for (const key of ['original', 'as-found']) {
+      const d = cell('deflection', key);
+      expect(d.text).toBe('outside the method\'s range');
+      expect(d.verdict).toBe('fail');
+      expect(d.note).toMatch(/^Service deflections: outside the small-deflection range of the method/);
+      const mu = cell('ductility', key);
+      expect(mu.text).not.toMatch(/^\d/);
+    }
+  });
+});

@@ -13,6 +13,7 @@ import type { SupportType } from '../../../core/member/definition.ts';
 import type { CodeBasis } from '../../../core/materials/specs.ts';
 import { say } from '../../../core/units/phrase.ts';
 import { member, smallProject } from '../../fixtures/projects.ts';
+import { rectangle300x600 } from './slender-beams.ts';
 
 const bar = (d: number) => (Math.PI / 4) * d * d;
 
@@ -21,11 +22,7 @@ function lightProject(code: CodeBasis, supports: SupportType, span = 6000): Proj
   const base = smallProject(code);
   return {
     ...base,
-    sections: [{
-      id: 'light', name: '300 × 600 light', shape: { kind: 'rectangle', width: 300, height: 600 }, concreteId: 'c30',
-      bars: [{ steelId: 'b500', depth: 540, count: 2, diameter: 16 }, { steelId: 'b500', depth: 50, count: 2, diameter: 12 }],
-      hoops: { steelId: 'b500', diameter: 10, spacing: 150, verticalLegs: 2, clearCover: 30, confineCore: false },
-    }],
+    sections: [rectangle300x600('light', '300 × 600 light', { count: 2, diameter: 16 }, { count: 2, diameter: 12 })],
     members: [member('L', supports, span, 'light', { service: { sustainedLiveFraction: 0.3, durationMonths: 60, limitCases: [] } })],
   };
 }

@@ -266,7 +266,7 @@ export function analyzeBeam(member: BeamDefinition, context: MemberContext): Bea
     ultimateDeflection = capacity.ultimate.deflection;
     displacementDuctility = yieldDeflection && yieldDeflection > 0 ? ultimateDeflection / yieldDeflection : null;
     // Beyond span/50 μΔ is withheld altogether (small-deflection.ts; the verdict says why): no number here either.
-    if (displacementDuctility !== null && displacementDuctility > DUCTILITY_RANGE_LIMIT && !ultimateOutsideRange({ span, loadDeflection: { points: capacity.points } })) {
+    if (displacementDuctility !== null && displacementDuctility > DUCTILITY_RANGE_LIMIT && !ultimateOutsideRange({ span, loadDeflection: { points: capacity.points, events: capacity.events } })) {
       warnings.push(`The displacement ductility μΔ = ${displacementDuctility.toFixed(1)} is beyond ${DUCTILITY_RANGE_LIMIT}, outside the range the yield and ultimate definitions are meant for: read it as "very ductile", not as a precise figure.`);
     }
   }

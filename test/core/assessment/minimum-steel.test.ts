@@ -13,7 +13,7 @@ import type { SupportType } from '../../../core/member/definition.ts';
 import type { CodeBasis } from '../../../core/materials/specs.ts';
 import { say } from '../../../core/units/phrase.ts';
 import { member, smallProject } from '../../fixtures/projects.ts';
-import { rectangle300x600 } from './slender-beams.ts';
+import { rectangle300x600 } from './beam-fixtures.ts';
 
 const bar = (d: number) => (Math.PI / 4) * d * d;
 

@@ -27,6 +27,7 @@
 import { brittleFindings, shearBeforeFlexure, type UltimateSource } from './brittle.ts';
 import { combinationText, type LoadCombination } from './combinations.ts';
 import { checkMoments, type FlexureZone, type MomentSample } from './flexure.ts';
+import { flexuralDesignResistance } from './resistance.ts';
 import type { BrittleFinding, StrengthCheck } from './results.ts';
 import { criticalSectionDepth, zoneShearCapacities, type ShearCapacity, type ShearZone } from './shear-section.ts';
 import type { AciEdition } from './shear-aci.ts';
@@ -107,6 +108,8 @@ export interface ContinuousChecks {
   readonly arrangementCount: number;
   /** Why the beam is brittle (empty when it is not). */
   readonly brittle: readonly BrittleFinding[];
+  /** Design flexural resistance of every zone in both senses (φMn, M_Rd; N·mm; null: no tension steel on that side), positions global. */
+  readonly resistances: readonly { readonly from: number; readonly to: number; readonly sectionId: string; readonly sagging: number | null; readonly hogging: number | null }[];
 }
 
 export interface ContinuousChecksInput {
@@ -383,6 +386,7 @@ export function continuousChecks(input: ContinuousChecksInput): ContinuousChecks
     combinations: combinationNames,
     arrangementCount: elastic.arrangements.length,
     brittle,
+    resistances: zones.map((z) => ({ from: z.from, to: z.to, sectionId: z.analysis.sectionId, sagging: flexuralDesignResistance(code, z.analysis, 'sagging').value, hogging: flexuralDesignResistance(code, z.analysis, 'hogging').value })),
   };
 }
 

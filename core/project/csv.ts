@@ -24,8 +24,9 @@ import type { CodeBasis } from '../materials/specs.ts';
 import type { CapacitySettings, MemberLoad, ServiceSettings, SupportType } from '../member/definition.ts';
 import type { LoadDeflectionPoint, SpanDistribution } from '../member/results.ts';
 import type { MomentCurvatureResult } from '../section/results.ts';
-import { displaySystem, formatNumber, fromDisplay, say, toDisplay, unitLabel, UNITS, type Quantity, type UnitId } from '../units/index.ts';
+import { displaySystem, formatNumber, say, toDisplay, unitLabel, type Quantity } from '../units/index.ts';
 import { memberKeyResults, type MemberKeyResults } from './key-results.ts';
+import { cellNumber, csvSeparator, readCsvHeader, type CsvColumn } from './csv-columns.ts';
 import type { Project, UnitSystem, MemberDefinition } from './types.ts';
 import type { MemberResult } from '../assessment/results.ts';
 
@@ -80,13 +81,8 @@ export function parseCsv(text: string, delimiter = ','): { records: CsvRecord[];
   return { records, problems };
 }
 
-/** Column of the member list: its name in the header and the quantity of its unit (null: no unit). */
-interface ColumnSpec {
-  readonly key: 'id' | 'name' | 'span' | 'supports' | 'section' | 'dead' | 'superimposed' | 'live' | 'notes';
-  readonly quantity: Quantity | null;
-  readonly required: boolean;
-  readonly aliases: readonly string[];
-}
+type ColumnKey = 'id' | 'name' | 'span' | 'supports' | 'section' | 'dead' | 'superimposed' | 'live' | 'notes';
+type ColumnSpec = CsvColumn<ColumnKey>;
 
 const COLUMNS: readonly ColumnSpec[] = [
   { key: 'id', quantity: null, required: true, aliases: ['id', 'member id', 'member'] },
@@ -99,14 +95,6 @@ const COLUMNS: readonly ColumnSpec[] = [
   { key: 'live', quantity: 'lineLoad', required: false, aliases: ['live', 'live load'] },
   { key: 'notes', quantity: null, required: false, aliases: ['notes', 'description'] },
 ];
-
-/** Unit labels accepted in headers, by quantity (ASCII spellings included). */
-const HEADER_UNITS: Readonly<Record<string, Readonly<Record<string, UnitId>>>> = {
-  spanLength: { mm: 'mm', m: 'm', in: 'in', ft: 'ft' },
-  lineLoad: { 'n/mm': 'N/mm', 'kn/m': 'kN/m', 'kip/ft': 'kip/ft', klf: 'kip/ft' },
-};
-/** Line loads in lb/ft (plf) are accepted too: 1 lb/ft = 0.001 kip/ft. */
-const PLF = ['lb/ft', 'plf', 'lbf/ft'];
 
 const SUPPORT_WORDS: Readonly<Record<string, SupportType>> = {
   'simply-supported': 'simply-supported', 'simply supported': 'simply-supported', simple: 'simply-supported', ss: 'simply-supported',
@@ -138,21 +126,6 @@ export function defaultImportService(code: CodeBasis = 'ACI 318-19'): ServiceSet
 
 const DEFAULT_CAPACITY: CapacitySettings = { pattern: 'proportional', hingeLengthMethod: 'priestley-2007' };
 
-function headerParts(cell: string): { name: string; unit: string | null } {
-  const m = /^(.*?)\s*[[(]\s*([^\])]*)\s*[\])]\s*$/.exec(cell.trim());
-  return m ? { name: m[1]!.trim().toLowerCase(), unit: m[2]!.trim() } : { name: cell.trim().toLowerCase(), unit: null };
-}
-
-const NUMBER_PATTERN = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
-
-/** A number written in a cell (decimal comma allowed when `decimalComma`), or null. */
-function cellNumber(cell: string, decimalComma: boolean): number | null {
-  const text = (decimalComma ? cell.replace(',', '.') : cell).trim();
-  if (!NUMBER_PATTERN.test(text)) return null;
-  const value = Number(text);
-  return Number.isFinite(value) ? value : null;
-}
-
 /**
  * Reads a member list from CSV text (see the file comment for the columns). Returns the members of the
  * rows without errors, in file order, in internal units (span mm, line loads N/mm), each with one zone
@@ -160,57 +133,15 @@ function cellNumber(cell: string, decimalComma: boolean): number | null {
  */
 export function importMembersCsv(text: string, options: MemberCsvOptions = {}): { members: MemberDefinition[]; diagnostics: Diagnostic[] } {
   const diagnostics: Diagnostic[] = [];
-  const firstLine = text.replace(/^\uFEFF/, '').split(/\r?\n/, 1)[0] ?? '';
-  const semicolons = firstLine.includes(';') && !firstLine.includes(',');
-  const delimiter = semicolons ? ';' : ',';
+  const { delimiter, decimalComma: semicolons } = csvSeparator(text);
   const { records, problems } = parseCsv(text, delimiter);
   diagnostics.push(...problems);
   const header = records[0];
   if (!header) return { members: [], diagnostics: [...diagnostics, { code: 'required', path: 'row 1', severity: 'error', message: 'the file is empty: a header row naming the columns is required' }] };
 
   // Header: find each column and its unit.
-  const columnAt = new Map<ColumnSpec['key'], { index: number; toInternal: (v: number) => number; unit: string }>();
-  let headerOk = true;
-  header.fields.forEach((cell, index) => {
-    const { name, unit } = headerParts(cell);
-    const spec = COLUMNS.find((c) => c.aliases.includes(name));
-    const at = `row ${header.line}, column ${index + 1}`;
-    if (!spec) {
-      diagnostics.push({ code: 'unknown-field', path: at, severity: 'warning', message: `"${cell.trim()}" is not a column Hingeline reads; it is ignored (columns: ${COLUMNS.map((c) => c.key).join(', ')})` });
-      return;
-    }
-    if (columnAt.has(spec.key)) {
-      diagnostics.push({ code: 'duplicate-id', path: at, severity: 'error', message: `the column ${spec.key} appears twice` });
-      headerOk = false;
-      return;
-    }
-    if (spec.quantity === null) {
-      columnAt.set(spec.key, { index, toInternal: (v) => v, unit: '' });
-      return;
-    }
-    const accepted = HEADER_UNITS[spec.quantity]!;
-    const unitKey = unit?.toLowerCase().replace(/\s+/g, '') ?? '';
-    const example = spec.quantity === 'spanLength' ? `${spec.key} [ft] or ${spec.key} [m]` : `${spec.key} [kip/ft] or ${spec.key} [kN/m]`;
-    if (!unit) {
-      diagnostics.push({ code: 'required', path: `row ${header.line}, column ${spec.key}`, severity: 'error', message: `the header must name the unit of the column, e.g. "${example}"` });
-      headerOk = false;
-    } else if (spec.quantity === 'lineLoad' && PLF.includes(unitKey)) {
-      columnAt.set(spec.key, { index, toInternal: (v) => fromDisplay('lineLoad', v / 1000, 'US', 'kip/ft'), unit: 'lb/ft' });
-    } else if (accepted[unitKey]) {
-      const id = accepted[unitKey]!;
-      columnAt.set(spec.key, { index, toInternal: (v) => fromDisplay(spec.quantity!, v, 'SI', id), unit: UNITS[id].label });
-    } else {
-      diagnostics.push({ code: 'unknown-option', path: `row ${header.line}, column ${spec.key}`, severity: 'error', message: `unit "${unit}" is not one Hingeline reads here; use ${Object.keys(accepted).concat(spec.quantity === 'lineLoad' ? PLF : []).join(', ')}` });
-      headerOk = false;
-    }
-  });
-  for (const spec of COLUMNS) {
-    if (spec.required && !columnAt.has(spec.key) && !diagnostics.some((d) => d.path.endsWith(`column ${spec.key}`))) {
-      diagnostics.push({ code: 'required', path: `row ${header.line}`, severity: 'error', message: `the header has no ${spec.key} column (required columns: ${COLUMNS.filter((c) => c.required).map((c) => c.key).join(', ')})` });
-      headerOk = false;
-    }
-  }
-  if (!headerOk) return { members: [], diagnostics };
+  const columnAt = readCsvHeader(header, COLUMNS, diagnostics);
+  if (!columnAt) return { members: [], diagnostics };
 
   const members: MemberDefinition[] = [];
   const seen = new Map<string, number>();

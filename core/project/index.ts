@@ -8,5 +8,6 @@ export { migrateProject, migrateV1ToV2, OLDEST_READABLE_VERSION, type MigrationR
 export { validateProjectData, validateProject, hasErrors, analysisBlockers, formatDiagnostic, sortDiagnostics, itemPath, pathText } from './validate.ts';
 export { projectSchema, unknownFields, canonicalOrder, MAX_NESTING } from './schema.ts';
 export { demoProject, demoProjectSI } from './demo.ts';
+export { importContinuousMembersCsv, type ContinuousCsvOptions } from './continuous-import.ts';
 export { importMembersCsv, resultsSummaryCsv, momentCurvatureCsv, loadDeflectionCsv, spanDistributionCsv, parseCsv, csvField, csvText, defaultImportService, type MemberCsvOptions } from './csv.ts';
 export { memberKeyResults, type MemberKeyResults, type CriticalSection } from './key-results.ts';

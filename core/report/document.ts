@@ -17,6 +17,7 @@ import { displaySystem, reportFormatter, type ReportFormatter } from './format.t
 import { CAUTION_TEXT, COLOURS, DEFAULT_STYLE, FOOTER_CAUTION, STYLES, cautionBox, dataTable, factsTable, h3, heading, pageGeometry, verdict, type PageGeometry } from './layout.ts';
 import { memberChapter, statusCell } from './member.ts';
 import { strengtheningSummary } from './existing.ts';
+import { continuousChapter, continuousSummary } from './continuous.ts';
 import { methodChapter } from './method.ts';
 import { ReferenceList } from './references.ts';
 import { withFonts } from './scripts.ts';
@@ -105,6 +106,7 @@ function summary(plan: ReportPlan, f: ReportFormatter): Content[] {
       rows,
     }),
     ...strengtheningSummary(plan.members),
+    ...continuousSummary(plan.continuous, f),
     h3('Conventions'),
     {
       ul: [
@@ -166,7 +168,7 @@ export function buildReportDocument(input: ReportInput): DocumentDefinition {
   // Chapters are written in reading order, so references are numbered in order of first citation.
   const method = methodChapter(ctx);
   const sections = plan.sections.flatMap((section) => sectionChapter(ctx, section));
-  const members = plan.members.flatMap((member) => memberChapter(ctx, member));
+  const members = [...plan.members.flatMap((member) => memberChapter(ctx, member)), ...plan.continuous.flatMap((member) => continuousChapter(ctx, member))];
   const info = project.info;
   const content: Content[] = [
     ...cover(input, plan, page),

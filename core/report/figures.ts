@@ -23,6 +23,7 @@ import type { ReportFigure, ReportInput } from './types.ts';
 import type { MemberDefinition } from '../project/types.ts';
 import type { MemberResult } from '../assessment/results.ts';
 import { planExisting, type ExistingPlan } from './existing-plan.ts';
+import { planContinuous, type ContinuousPlan } from './continuous-plan.ts';
 
 /** States whose strain and stress profiles are shown. */
 export const PROFILE_STATES: readonly { readonly name: KeyPointName; readonly words: string }[] = [
@@ -64,6 +65,8 @@ export interface ReportPlan {
   readonly sections: readonly SectionPlan[];
   /** Members to report, in project order, with their results (null: no result for that member). */
   readonly members: readonly MemberPlan[];
+  /** Continuous members to report, in project order (continuous.ts). */
+  readonly continuous: readonly ContinuousPlan[];
   readonly figures: Record<string, ReportFigure>;
 }
 
@@ -145,7 +148,8 @@ export function planReport(input: Pick<ReportInput, 'project' | 'results' | 'mem
     const span = r && r.distributions.length > 0 ? add(`member-${m.index}/span`, { kind: 'chart', spec: spanPanelsChart(r, 'all', system), ...tall }) : null;
     return { ...m, loadDeflection, span, existing: planExisting(m, project, system, page, add) };
   });
-  return { sections, members: planned, figures };
+  const continuous = planContinuous(project, results.continuous ?? [], input.memberIds, system, page, add);
+  return { sections, members: planned, continuous, figures };
 }
 
 /**

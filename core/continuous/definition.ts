@@ -8,7 +8,8 @@
  * tip of the left cantilever, or the first support where there is none); positions of loads are
  * measured from the left end of the span or cantilever they act on. Loads act downward when positive.
  */
-import type { HingeLengthMethod, LoadCaseId, LoadFactors, LoadPattern, MemberZone, ServiceSettings } from '../member/definition.ts';
+import type { HingeLengthMethod, LoadFactors, LoadPattern, MemberLoad, MemberZone, ServiceSettings } from '../member/definition.ts';
+import { supportStiffness as memberSupportStiffness, type SupportDefinition } from '../member/layout.ts';
 
 /** Support conditions of a continuous beam, in menu order. */
 export const CONTINUOUS_SUPPORT_KINDS = ['pinned', 'fixed', 'column'] as const;
@@ -41,28 +42,14 @@ export interface ContinuousSupport {
 /** Which part of the beam a load acts on: span 1…n (counted from the left) or a cantilever. */
 export type SpanRef = number | 'left-cantilever' | 'right-cantilever';
 
-export type ContinuousLoad =
-  | {
-      readonly kind: 'uniform';
-      readonly loadCase: LoadCaseId;
-      readonly span: SpanRef;
-      /** Line load, N/mm, downward positive. */
-      readonly magnitude: number;
-      /** Extent, mm from the left end of the span or cantilever; omitted → all of it. */
-      readonly from?: number;
-      readonly to?: number;
-      readonly label?: string;
-    }
-  | {
-      readonly kind: 'point';
-      readonly loadCase: LoadCaseId;
-      readonly span: SpanRef;
-      /** Force, N, downward positive. */
-      readonly magnitude: number;
-      /** Position, mm from the left end of the span or cantilever. */
-      readonly position: number;
-      readonly label?: string;
-    };
+/**
+ * A load of a continuous beam: a member load (uniform, partial or point; core/member/definition.ts)
+ * on one span or cantilever, its positions measured from the left end of that part.
+ */
+export type ContinuousLoad = MemberLoad & {
+  /** The span (1…n) or cantilever it acts on. */
+  readonly span: SpanRef;
+};
 
 /** The load pattern of the analysis to failure: every span loaded, or the pattern that governs one span. */
 export type FailureArrangement =
@@ -107,14 +94,18 @@ export interface ContinuousBeamDefinition {
 /** Limits of the definition (validation and the UI read them). */
 export const CONTINUOUS_LIMITS = { minSpans: 1, maxSpans: 8, maxLength: 60000 } as const;
 
+/** A support in the member engine's geometry (core/member/layout.ts): a column support is a spring of its columns. */
+export function supportDefinition(support: ContinuousSupport): SupportDefinition {
+  if (support.kind !== 'column') return { kind: support.kind };
+  return { kind: 'spring', columns: [support.above, support.below].filter((c): c is ColumnStiffness => c !== undefined) };
+}
+
 /**
  * Rotational stiffness of a support, N·mm/rad: 0 for a pin, Infinity for a fixed support, and for
  * columns the sum of 4EI/L (far end fixed) or 3EI/L (far end pinned) above and below — the
- * stiffness of a prismatic member rotated at one end (slope–deflection; common practice, no source).
+ * stiffness of a prismatic member rotated at one end (slope–deflection; common practice, no source),
+ * by core/member/layout.ts supportStiffness.
  */
 export function supportStiffness(support: ContinuousSupport): number {
-  if (support.kind === 'pinned') return 0;
-  if (support.kind === 'fixed') return Infinity;
-  const one = (c: ColumnStiffness | undefined) => (c ? ((c.farEnd === 'fixed' ? 4 : 3) * c.stiffness) / c.height : 0);
-  return one(support.above) + one(support.below);
+  return support.kind === 'fixed' ? Infinity : memberSupportStiffness(supportDefinition(support));
 }

@@ -9,6 +9,8 @@
  * Global positions x run from the left end of the beam; local positions s from the left end of a part.
  * Units: mm.
  */
+import { layoutOf as lineLayoutOf } from '../member/layout.ts';
+import { loadIndexOf, type StaticLoad } from '../member/load-index.ts';
 import type { ContinuousBeamDefinition, SpanRef } from './definition.ts';
 
 export type PartKind = 'left-cantilever' | 'span' | 'right-cantilever';
@@ -33,29 +35,21 @@ export interface Layout {
   readonly spanPart: readonly number[];
 }
 
+/** The parts and supports of a beam: the member engine's geometry (core/member/layout.ts layoutOf), in this module's form. */
 export function layoutOf(def: Pick<ContinuousBeamDefinition, 'spans' | 'leftCantilever' | 'rightCantilever'>): Layout {
-  const parts: Part[] = [];
-  let x = 0;
-  const left = def.leftCantilever ?? 0;
-  if (left > 0) {
-    parts.push({ kind: 'left-cantilever', span: -1, from: 0, to: left, length: left });
-    x = left;
-  }
-  const supportX = [x];
-  const spanPart: number[] = [];
-  def.spans.forEach((length, i) => {
-    spanPart.push(parts.length);
-    parts.push({ kind: 'span', span: i, from: x, to: x + length, length });
-    x += length;
-    supportX.push(x);
-  });
-  const right = def.rightCantilever ?? 0;
-  if (right > 0) {
-    parts.push({ kind: 'right-cantilever', span: -1, from: x, to: x + right, length: right });
-    x += right;
-  }
-  return { parts, supportX, length: x, spanPart };
+  // Support kinds do not change the geometry: placeholders, one per span end.
+  const line = lineLayoutOf({ spans: def.spans, supports: [...def.spans.map(() => PIN), PIN], leftCantilever: def.leftCantilever, rightCantilever: def.rightCantilever });
+  const parts: Part[] = line.bays.map((b) => ({
+    kind: b.kind === 'span' ? 'span' : b === line.leftCantilever ? 'left-cantilever' : 'right-cantilever',
+    span: b.spanIndex,
+    from: b.from,
+    to: b.to,
+    length: b.length,
+  }));
+  return { parts, supportX: line.supports.map((s) => s.x), length: line.length, spanPart: line.spans.map((b) => b.index) };
 }
+
+const PIN = { kind: 'pinned' } as const;
 
 /** Index in `layout.parts` of the part a load refers to, or −1 when there is no such part. */
 export function partIndex(layout: Layout, ref: SpanRef): number {
@@ -69,16 +63,17 @@ export function partName(part: Part): string {
   return part.kind === 'span' ? `span ${part.span + 1}` : part.kind === 'left-cantilever' ? 'left cantilever' : 'right cantilever';
 }
 
-/** A load on one part in local coordinates (N/mm over [from, to], or N at a), downward positive. */
-export type PartLoad =
-  | { readonly kind: 'uniform'; readonly w: number; readonly from: number; readonly to: number }
-  | { readonly kind: 'point'; readonly p: number; readonly a: number };
+/** A load on one part in local coordinates (N/mm over [from, to], or N at a), downward positive: a load as the member's statics sees it. */
+export type PartLoad = StaticLoad;
 
 /** Loads on each part (index as `layout.parts`). */
 export type LoadsByPart = readonly (readonly PartLoad[])[];
 
 /** Σ loads left of s × lever arm to s (N·mm), and Σ loads left of s (N); `side` decides a point load at s. */
 function leftOf(loads: readonly PartLoad[], s: number, side: 'left' | 'right'): { moment: number; force: number } {
+  // Many loads (≥ INDEXED_LOADS_FROM): sorted prefix sums, O(log n) (core/member/load-index.ts); local positions are ≥ 0.
+  const index = loadIndexOf(loads);
+  if (index) return { moment: index.momentOfLoadsLeft(0, Infinity, s), force: index.loadLeft(0, Infinity, s, side === 'right') };
   let moment = 0;
   let force = 0;
   for (const l of loads) {
@@ -99,7 +94,13 @@ function leftOf(loads: readonly PartLoad[], s: number, side: 'left' | 'right'): 
 }
 
 /** Total load on a part, N, and its moment about the part's left end, N·mm. */
-function resultant(loads: readonly PartLoad[]): { force: number; moment: number } {
+function resultant(loads: readonly PartLoad[], length: number): { force: number; moment: number } {
+  const index = loadIndexOf(loads);
+  if (index) {
+    // Σ load about the far end x = L: L·ΣP − Σ P·a, so Σ P·a = L·ΣP − that moment.
+    const force = index.loadLeft(0, Infinity, length, true);
+    return { force, moment: length * force - index.momentOfLoadsLeft(0, Infinity, length) };
+  }
   let force = 0;
   let moment = 0;
   for (const l of loads) {
@@ -122,7 +123,7 @@ function resultant(loads: readonly PartLoad[]): { force: number; moment: number 
 export function partStatics(part: Part, loads: readonly PartLoad[], s: number, side: 'left' | 'right'): { moment: number; shear: number } {
   const left = leftOf(loads, s, side);
   if (part.kind === 'left-cantilever') return { moment: -left.moment, shear: -left.force };
-  const total = resultant(loads);
+  const total = resultant(loads, part.length);
   if (part.kind === 'right-cantilever') {
     // Loads to the right of s and their moment about s: Σ right p·(a − s) = Σ all p·a − Σ left p·a − s·Σ right p,
     // with Σ left p·a = s·Σ left p − Σ left p·(s − a).

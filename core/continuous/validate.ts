@@ -5,7 +5,7 @@
  */
 import { checkNumber, diagnostic, type Diagnostic } from '../diagnostics.ts';
 import { LOAD_CASES } from '../member/definition.ts';
-import { checkHingeSettings, checkServiceSettings } from '../member/validate.ts';
+import { checkHingeSettings, checkLoad, checkLoadCount, checkServiceSettings, checkZones, type ExtentWords } from '../member/validate.ts';
 import { phrase, q, type Text } from '../units/phrase.ts';
 import { COLUMN_FAR_ENDS, CONTINUOUS_LIMITS, CONTINUOUS_SUPPORT_KINDS, type ContinuousBeamDefinition } from './definition.ts';
 import { layoutOf, partIndex } from './layout.ts';
@@ -13,6 +13,7 @@ import { layoutOf, partIndex } from './layout.ts';
 const isOneOf = <T extends string>(options: readonly T[], value: unknown): value is T => (options as readonly unknown[]).includes(value);
 const oneOf = (options: readonly string[]) => `one of ${options.join(', ')}`;
 const m = (mm: number) => q('spanLength', mm, { compact: true });
+const BEAM_WORDS: ExtentWords = { extent: 'the beam', loadPlace: 'its span', end: (length) => phrase`the end of the beam, ${m(length)} (cantilevers and spans together)` };
 
 /**
  * @param path e.g. `members[3] "B-3"`
@@ -55,60 +56,22 @@ export function validateContinuousBeam(beam: ContinuousBeamDefinition, path: str
   const layout = geometryOk ? layoutOf(beam) : null;
   const length = layout?.length ?? NaN;
 
-  if (!Array.isArray(beam.zones) || beam.zones.length === 0) error('required', 'zones', 'at least one zone with a section is required');
-  else {
-    let zonesOk = true;
-    beam.zones.forEach((z, i) => {
-      if (!checkNumber(out, `${path}.zones[${i}].from`, z.from, { min: 0, quantity: 'spanLength' })) zonesOk = false;
-      if (!checkNumber(out, `${path}.zones[${i}].to`, z.to, { min: 0, quantity: 'spanLength' })) zonesOk = false;
-      if (!sectionIds.has(z.sectionId)) error('unknown-reference', `zones[${i}].sectionId`, `no section with id "${z.sectionId}" in the project`);
-      if (Number.isFinite(z.from) && Number.isFinite(z.to) && !(z.to > z.from)) {
-        zonesOk = false;
-        error('geometry', `zones[${i}]`, phrase`must end after it starts, got from ${m(z.from)} to ${m(z.to)}`);
-      }
-    });
-    if (zonesOk && layout) {
-      let cursor = 0;
-      for (const { z, i } of beam.zones.map((z, i) => ({ z, i })).sort((a, b) => a.z.from - b.z.from)) {
-        if (Math.abs(z.from - cursor) > 1e-6) {
-          error('geometry', `zones[${i}].from`, z.from > cursor ? phrase`leaves a gap from ${m(cursor)} to ${m(z.from)}: zones must cover the beam without gaps` : phrase`overlaps the previous zone (starts at ${m(z.from)}, previous ends at ${m(cursor)})`);
-        }
-        cursor = z.to;
-      }
-      if (Math.abs(cursor - length) > 1e-6) error('geometry', 'zones', phrase`must end at the end of the beam, ${m(length)} (cantilevers and spans together); the last zone ends at ${m(cursor)}`);
-    }
-  }
+  checkZones(out, path, beam.zones, length, sectionIds, BEAM_WORDS);
 
-  (beam.loads ?? []).forEach((load, i) => {
-    const at = `loads[${i}]`;
-    if (!isOneOf(LOAD_CASES, load.loadCase)) error('unknown-option', `${at}.loadCase`, `must be ${oneOf(LOAD_CASES)}, got ${JSON.stringify(load.loadCase)}`);
-    // The span a load names is checked even when lengths are wrong (only the count matters).
-    const refs = layoutOf({ spans: spans.map(() => 1), leftCantilever: beam.leftCantilever ? 1 : 0, rightCantilever: beam.rightCantilever ? 1 : 0 });
-    const p = partIndex(refs, load.span);
-    if (p < 0) {
-      error('unknown-reference', `${at}.span`, `must name a span 1 to ${spans.length}${beam.leftCantilever ? ', "left-cantilever"' : ''}${beam.rightCantilever ? ', "right-cantilever"' : ''}, got ${JSON.stringify(load.span)}`);
-      return;
-    }
-    const partLength = layout && p >= 0 ? layout.parts[p]!.length : NaN;
-    if (load.kind === 'point') {
-      checkNumber(out, `${path}.${at}.magnitude`, load.magnitude, { min: -1e9, max: 1e9, quantity: 'force' });
-      if (checkNumber(out, `${path}.${at}.position`, load.position, { min: 0, quantity: 'spanLength' }) && load.position > partLength + 1e-6) {
-        error('out-of-range', `${at}.position`, phrase`must lie on its span (0 to ${m(partLength)}), got ${m(load.position)}`);
+  if (checkLoadCount(out, path, beam.loads, 'a beam')) {
+    (beam.loads ?? []).forEach((load, i) => {
+      const at = `loads[${i}]`;
+      // The span a load names is checked even when lengths are wrong (only the count matters).
+      const refs = layoutOf({ spans: spans.map(() => 1), leftCantilever: beam.leftCantilever ? 1 : 0, rightCantilever: beam.rightCantilever ? 1 : 0 });
+      const p = partIndex(refs, load.span);
+      if (p < 0) {
+        if (!isOneOf(LOAD_CASES, load.loadCase)) error('unknown-option', `${at}.loadCase`, `must be ${oneOf(LOAD_CASES)}, got ${JSON.stringify(load.loadCase)}`);
+        error('unknown-reference', `${at}.span`, `must name a span 1 to ${spans.length}${beam.leftCantilever ? ', "left-cantilever"' : ''}${beam.rightCantilever ? ', "right-cantilever"' : ''}, got ${JSON.stringify(load.span)}`);
+        return;
       }
-    } else if (load.kind === 'uniform') {
-      checkNumber(out, `${path}.${at}.magnitude`, load.magnitude, { min: -1e4, max: 1e4, quantity: 'lineLoad' });
-      const from = load.from ?? 0;
-      const to = load.to ?? partLength;
-      if (load.from !== undefined) checkNumber(out, `${path}.${at}.from`, load.from, { min: 0, quantity: 'spanLength' });
-      if (load.to !== undefined) checkNumber(out, `${path}.${at}.to`, load.to, { min: 0, quantity: 'spanLength' });
-      if (Number.isFinite(from) && Number.isFinite(to)) {
-        if (!(to > from)) error('geometry', at, phrase`must end after it starts, got from ${m(from)} to ${m(to)}`);
-        else if (to > partLength + 1e-6) error('out-of-range', `${at}.to`, phrase`must lie on its span (0 to ${m(partLength)}), got ${m(to)}`);
-      }
-    } else {
-      error('unknown-option', `${at}.kind`, `must be "uniform" or "point", got ${JSON.stringify((load as { kind: unknown }).kind)}`);
-    }
-  });
+      checkLoad(out, path, at, load, layout ? layout.parts[p]!.length : NaN, BEAM_WORDS);
+    });
+  }
 
   checkServiceSettings(out, path, beam.service);
   const c = beam.capacity;

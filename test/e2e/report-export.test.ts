@@ -104,8 +104,9 @@ describe('PDF export in the app', () => {
     a.pages.forEach((text, i) => expect(text, `page ${i + 1}`).toBe(c.pages[i]));
     // Same figures drawn the same way: the files differ at most by how each build of pdfmake writes them.
     // (3 %: the load–deflection figures hold about twice the points since the curves follow their
-    // descending branch and the member is integrated at 120 or more stations; 2.5 % measured.)
-    expect(Math.abs(app.length - cli.length) / cli.length).toBeLessThan(0.03);
+    // descending branch and the member is integrated at 120 or more stations; 2.5 % measured;
+    // 3.5 %: with the continuous members' chapters and their figures, 3.05 % measured.)
+    expect(Math.abs(app.length - cli.length) / cli.length).toBeLessThan(0.035);
     // Same drawings, segment for segment: the app's PDF once lost every chart's data lines (chart.js
     // stroked them as a browser Path2D the recording canvas could not read) while its text matched
     // and its size stayed within 3 %.

@@ -73,7 +73,8 @@ export async function exportReport(scope: 'member' | 'project'): Promise<{ name:
   const workspace = useWorkspaceStore();
   const project = documentStore.project ? (toRaw(documentStore.project) as Project) : null;
   if (!project) throw new Error('No project is open.');
-  const memberIds = scope === 'member' && workspace.selectedMemberId ? [workspace.selectedMemberId] : project.members.map((m) => m.id);
+  // The project's report covers its continuous members too (core/report/continuous.ts), as the command line's does.
+  const memberIds = scope === 'member' && workspace.selectedMemberId ? [workspace.selectedMemberId] : [...project.members.map((m) => m.id), ...(project.continuousMembers ?? []).map((m) => m.id)];
   if (memberIds.length === 0) throw new Error('The project has no members to report.');
   const part = scope === 'member' ? subproject(project, memberIds) : project;
   const projectText = await documentStore.text();

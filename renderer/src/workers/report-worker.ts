@@ -7,7 +7,7 @@
  */
 import pdfMakeModule from 'pdfmake/build/pdfmake.js';
 import { BasicPlatform } from 'chart.js';
-import { analyzeMembers, summarize, type ProjectResults } from '../../../core/analysis.ts';
+import { analyzeContinuousMembers, analyzeMembers, summarize, type ProjectResults } from '../../../core/analysis.ts';
 import { chartSvg } from '../../../core/report/chart-svg.ts';
 import { buildReportDocument } from '../../../core/report/document.ts';
 import { reportCharts } from '../../../core/report/figures.ts';
@@ -56,11 +56,16 @@ async function report(request: ReportRequest): Promise<void> {
   const progress = (stage: Extract<ReportReply, { type: 'progress' }>['stage'], done: number, total: number) => scope.postMessage({ type: 'progress', id: request.id, stage, done, total });
   const { project, memberIds } = request;
   const members: MemberResult[] = [];
-  for (const id of memberIds) {
+  const continuousIds = new Set((project.continuousMembers ?? []).map((m) => m.id));
+  const single = memberIds.filter((id) => !continuousIds.has(id));
+  for (const id of single) {
     members.push(...analyzeMembers(project, [id]));
     progress('analysing', members.length, memberIds.length);
   }
-  const results: ProjectResults = { projectName: project.info.name, codeBasis: project.info.codeBasis, members, summary: summarize(members) };
+  const wantedContinuous = memberIds.filter((id) => continuousIds.has(id));
+  const continuous = wantedContinuous.length > 0 ? analyzeContinuousMembers(project, wantedContinuous) : [];
+  if (continuous.length > 0) progress('analysing', memberIds.length, memberIds.length);
+  const results: ProjectResults = { projectName: project.info.name, codeBasis: project.info.codeBasis, members, ...(continuous.length > 0 ? { continuous } : {}), summary: summarize(members) };
   const figures = Object.entries(reportCharts({ project, results, memberIds }));
   const images: Record<string, string> = {};
   const library = { Chart: chartJs(), BasicPlatform };

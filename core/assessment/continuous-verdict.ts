@@ -6,7 +6,7 @@
 import { analyzeContinuousBeam, type ContinuousBeamResult, type ContinuousContext } from '../continuous/analyze.ts';
 import type { ContinuousBeamDefinition } from '../continuous/definition.ts';
 import type { DeflectionCheck } from '../member/results.ts';
-import { capitalised, joinTexts, phrase, type Text } from '../units/phrase.ts';
+import { capitalised, joinTexts, phrase, q, type Text } from '../units/phrase.ts';
 import type { LoadCombination } from './combinations.ts';
 import { continuousChecks, stationWords, type ContinuousChecks } from './continuous.ts';
 import type { AciEdition } from './shear-aci.ts';
@@ -56,10 +56,16 @@ function checkClauses(checks: ContinuousChecks): Text[] {
 export function continuousVerdict(result: ContinuousBeamResult, checks: ContinuousChecks | null): ContinuousVerdict {
   const none = { deflectionUtilisation: null, collapseRatio: null, strengthUtilisation: null, shearUtilisation: null, ductilityAvailable: false };
   if (result.errors.length > 0) return { status: 'input-error', governingSpan: null, governingMode: 'input errors', ...none };
-  let worst: { utilisation: number; span: string; words: string } | null = null;
+  let worst: { utilisation: number; span: string; words: Text } | null = null;
   for (const part of result.service?.parts ?? []) {
     for (const check of part.checks) {
-      if (!worst || check.utilisation > worst.utilisation) worst = { utilisation: check.utilisation, span: part.name, words: `deflection of ${part.name}: ${check.quantity} against ${check.description}` };
+      if (!worst || check.utilisation > worst.utilisation) {
+        worst = {
+          utilisation: check.utilisation,
+          span: part.name,
+          words: phrase`Deflection check ${check.pass ? 'passes' : 'fails'} in ${part.name} (utilisation ${check.utilisation.toFixed(2)}): ${check.quantity} ${q('deflection', check.governing)} against ${q('deflection', check.limit)}, ${check.description}`,
+        };
+      }
     }
   }
   const brittle = checks?.brittle ?? [];
@@ -80,10 +86,10 @@ export function continuousVerdict(result: ContinuousBeamResult, checks: Continuo
     return { status: 'check-fails', governingSpan: g.part, governingMode: flexureWorse ? phrase`${capitalised(flexure!)}; ${shear!}` : phrase`${capitalised(shear!)}; ${flexure!}`, ...common };
   }
   // The station checks (passing here) follow the governing words when they were made.
-  const withChecks = (words: string): Text => (checks ? phrase`${words}; ${joinTexts(checkClauses(checks), '; ')}` : words);
-  if (capacity && !capacity.converged) return { status: 'not-converged', governingSpan: worst?.span ?? null, governingMode: withChecks(capacity.failureCause), ...common };
+  const withChecks = (words: Text): Text => (checks ? phrase`${words}; ${joinTexts(checkClauses(checks), '; ')}` : words);
+  if (capacity && !capacity.converged) return { status: 'not-converged', governingSpan: worst?.span ?? null, governingMode: withChecks(capitalised(`the analysis to failure did not converge: ${capacity.failureCause}`)), ...common };
   if (collapseRatio !== null && collapseRatio < 1) {
-    return { status: 'check-fails', governingSpan: firstHinge, governingMode: withChecks(`the beam fails at ${(collapseRatio * 100).toFixed(0)} % of the factored loads (${capacity!.failureCause})`), ...common };
+    return { status: 'check-fails', governingSpan: firstHinge, governingMode: withChecks(`The beam fails at ${(collapseRatio * 100).toFixed(0)} % of the factored loads (${capacity!.failureCause})`), ...common };
   }
   if (worst && worst.utilisation > 1) return { status: 'check-fails', governingSpan: worst.span, governingMode: withChecks(worst.words), ...common };
   const deflection = worst ? `deflections within their limits (largest ${worst.utilisation.toFixed(2)} of the limit, ${worst.span})` : 'no deflection limit checked';

@@ -12,7 +12,7 @@ describe('continuous members on the command line', () => {
     expect(rows).toHaveLength(2);
     expect(rows[0]).toMatch(/^CB-1\s+6\.00 \+ 7\.00 \+ 6\.00\s+span [13]\s+0\.\d\d\s+0\.\d\d\s.*ok$/);
     expect(rows[1]).toMatch(/^CB-2\s+8\.40 \+ 4\.20 \+ c1\.50\s+span 1\s+0\.\d\d\s+0\.\d\d\s.*check fails$/);
-    expect(table).toMatch(/CB-2: deflection of span 1/);
+    expect(table).toMatch(/CB-2: Deflection check fails in span 1 \(utilisation 1\.\d\d\)/);
     expect(table).toMatch(/CB-1: Strength check passes \(utilisation 0\.\d\d: span [13], hogging at/);
   });
   it('writes the same in JSON, with the hinge sequence and the redistribution', () => {

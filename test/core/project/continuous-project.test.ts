@@ -40,7 +40,7 @@ describe('continuous members in a version-3 project', () => {
     expect(cb2!.checks!.flexureGoverning.direction).toBe('sagging');
     expect(cb2!.verdict.status).toBe('check-fails');
     expect(cb2!.verdict.governingSpan).toBe('span 1');
-    expect(say(cb2!.verdict.governingMode, 'si')).toMatch(/^deflection of span 1.*; strength check passes \(utilisation 0\.\d\d: span 1, sagging at/);
+    expect(say(cb2!.verdict.governingMode, 'si')).toMatch(/^Deflection check fails in span 1 \(utilisation 1\.\d\d\): .* mm against 16\.80 mm, .*; strength check passes \(utilisation 0\.\d\d: span 1, sagging at/);
     // the CSV carries a row per continuous member naming its governing span
     const csv = resultsSummaryCsv(results.members, 'si', project, results.continuous);
     expect(csv).toMatch(/CB-2,CB-2,"continuous, 2 spans; governing span 1",8.4,check-fails/);

@@ -118,6 +118,7 @@ export function analyzeContinuousBeam(def: ContinuousBeamDefinition, context: Co
     strengthFactors: def.strengthFactors ?? context.strengthFactors,
     deadOnlyFactor: context.deadOnlyFactor,
     segmentsPerSpan: context.segments,
+    code: context.code,
   });
   const n = layout.parts.length;
   const dead = combineLoads(

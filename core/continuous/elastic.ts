@@ -7,6 +7,7 @@
  * change of section changes the distribution) and the columns' rotational springs.
  * Units: mm, N, N/mm, N·mm, N·mm².
  */
+import type { CodeBasis } from '../materials/specs.ts';
 import type { LoadFactors } from '../member/definition.ts';
 import { solveLinear } from '../numeric/linear.ts';
 import type { ContinuousBeamDefinition } from './definition.ts';
@@ -32,6 +33,8 @@ export interface ElasticInput {
   readonly deadOnlyFactor?: number;
   /** Equal divisions of each span (default 48). */
   readonly segmentsPerSpan?: number;
+  /** Code basis, for the load symbols of the envelopes' descriptions (ACI D/L, EN G/Q); default ACI. */
+  readonly code?: CodeBasis;
 }
 
 /** Output stations: a position repeats where a part ends and the next begins, at zone changes and at point loads. */
@@ -271,15 +274,17 @@ export function analyzeElastic(input: ElasticInput): ElasticResult {
   const arrangements = liveArrangements(layout);
   const liveOf = (a: Arrangement, f: number) => a.loadedParts.map((p) => ({ r: liveByPart[p]!, f }));
   const f = input.strengthFactors;
+  // Load symbols of the code: ACI 318-19 5.3 D and L; EN 1990 6.10 G and Q.
+  const [D, L] = input.code === 'EN 1992-1-1' ? ['G', 'Q'] : ['D', 'L'];
   const service = envelopeOf(
     'service',
-    'D + L',
+    `${D} + ${L}`,
     arrangements.map((a, i) => ({ r: sumResponses([{ r: deadR, f: 1 }, { r: superR, f: 1 }, ...liveOf(a, 1)]), arrangement: i })),
   );
   const strengthCandidates = arrangements.map((a, i) => ({ r: sumResponses([{ r: deadR, f: f.dead }, { r: superR, f: f.superimposed }, ...liveOf(a, f.live)]), arrangement: i }));
   if (input.deadOnlyFactor) strengthCandidates.push({ r: sumResponses([{ r: deadR, f: input.deadOnlyFactor }, { r: superR, f: input.deadOnlyFactor }]), arrangement: -1 });
-  const strength = envelopeOf('strength', `${f.dead}D + ${f.live}L${input.deadOnlyFactor ? `; ${input.deadOnlyFactor}D` : ''}`, strengthCandidates);
-  const liveEnvelope = envelopeOf('live', 'L', arrangements.map((a, i) => ({ r: sumResponses(liveOf(a, 1)), arrangement: i })));
+  const strength = envelopeOf('strength', `${f.dead}${D} + ${f.live}${L}${input.deadOnlyFactor ? `; ${input.deadOnlyFactor}${D}` : ''}`, strengthCandidates);
+  const liveEnvelope = envelopeOf('live', L, arrangements.map((a, i) => ({ r: sumResponses(liveOf(a, 1)), arrangement: i })));
   const stations = solver.stations;
   const extreme = (pi: number, s: EnvelopeSide, sign: 1 | -1, magnitude = false): PartExtreme => {
     let best: PartExtreme = { value: 0, x: layout.parts[pi]!.from, arrangement: -1 };

@@ -42,6 +42,8 @@ describe('continuous charts', () => {
     expect(lowest).toBeCloseTo((-w * L ** 2) / 8 / 1e6, 3);
     // Supports as reference lines at 0, L and 2L, in metres.
     expect(spec.referenceLines.map((r) => r.value * spec.x.scale)).toEqual([0, 5, 10]);
+    // An EN project names its loads G and Q (EN 1990 6.10), not ACI's D and L; unit factors here.
+    expect(spec.subtitle).toBe('1G + 1Q');
     // The position axis runs over the beam exactly, 0 to 10 m (chart.js padded it to −5 … 15 m).
     expect([spec.x.min! * spec.x.scale, spec.x.max! * spec.x.scale]).toEqual([0, 10]);
   });

@@ -3,9 +3,9 @@
  * shear checks at every station with brittleness (continuous.ts), and the verdict — the status and
  * the span that governs, what the command line's row, the app and the report say.
  */
+export { governingDeflection } from '../continuous/governing.ts';
 import { analyzeContinuousBeam, type ContinuousBeamResult, type ContinuousContext } from '../continuous/analyze.ts';
 import type { ContinuousBeamDefinition } from '../continuous/definition.ts';
-import type { DeflectionCheck } from '../member/results.ts';
 import { capitalised, joinTexts, phrase, q, type Text } from '../units/phrase.ts';
 import type { LoadCombination } from './combinations.ts';
 import { continuousChecks, stationWords, type ContinuousChecks } from './continuous.ts';
@@ -165,9 +165,3 @@ export function assessContinuousMember(def: ContinuousBeamDefinition, context: C
   }
 }
 
-/** The deflection check of the governing span (largest utilisation), null when none. */
-export function governingDeflection(result: ContinuousBeamResult): { readonly part: string; readonly check: DeflectionCheck } | null {
-  let best: { part: string; check: DeflectionCheck } | null = null;
-  for (const part of result.service?.parts ?? []) for (const check of part.checks) if (!best || check.utilisation > best.check.utilisation) best = { part: part.name, check };
-  return best;
-}

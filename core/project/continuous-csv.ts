@@ -2,7 +2,8 @@
  * Continuous members in the results summary CSV: one row per member, in the columns of
  * resultsSummaryCsv (core/project/csv.ts), the governing span named in the supports and mode cells.
  */
-import { governingDeflection, type ContinuousMemberResult } from '../assessment/continuous-verdict.ts';
+import type { ContinuousMemberResult } from '../assessment/continuous-verdict.ts';
+import { governingDeflection } from '../continuous/governing.ts';
 import { displaySystem, say, toDisplay, type Quantity } from '../units/index.ts';
 import type { UnitSystem } from './types.ts';
 

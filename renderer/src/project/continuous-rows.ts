@@ -5,7 +5,7 @@
 import type { ContinuousMemberDefinition } from '../../../core/project/types.ts';
 // Types only: the verdict's module brings the assessment engine with it, which stays in the workers.
 import type { ContinuousMemberResult } from '../../../core/assessment/continuous-verdict.ts';
-import type { DeflectionCheck } from '../../../core/member/results.ts';
+import { governingDeflection } from '../../../core/continuous/governing.ts';
 import type { Text } from '../../../core/units/phrase.ts';
 import type { BadgeStatus } from './labels.ts';
 
@@ -39,13 +39,6 @@ export function supportsText(def: ContinuousMemberDefinition): string {
   const cantilevers = [(def.leftCantilever ?? 0) > 0, (def.rightCantilever ?? 0) > 0].filter(Boolean).length;
   const kinds = [...new Set(def.supports.map((s) => (s.kind === 'column' ? 'columns' : s.kind === 'fixed' ? 'fixed' : 'pins')))];
   return `${n} span${n === 1 ? '' : 's'}${cantilevers > 0 ? ` + ${cantilevers === 1 ? 'cantilever' : '2 cantilevers'}` : ''}, ${kinds.join('/')}`;
-}
-
-/** The deflection check with the largest utilisation of any span or cantilever (as core's `governingDeflection` picks it). */
-function governingDeflection(result: ContinuousMemberResult): { readonly part: string; readonly check: DeflectionCheck } | null {
-  let best: { part: string; check: DeflectionCheck } | null = null;
-  for (const part of result.service?.parts ?? []) for (const check of part.checks) if (!best || check.utilisation > best.check.utilisation) best = { part: part.name, check };
-  return best;
 }
 
 /** The row of a continuous member from its results (null results: only the definition's words). */

@@ -39,7 +39,9 @@ export function ensureWebBuild(): void {
   const index = join(WEB_ROOT, 'index.html');
   const sources = Math.max(newestMtime(join(ROOT, 'renderer')), newestMtime(join(ROOT, 'core')), statSync(join(ROOT, 'vite.web.config.ts')).mtimeMs);
   if (existsSync(index) && statSync(index).mtimeMs > sources) return;
-  const run = spawnSync('npm', ['run', 'build:web'], { cwd: ROOT, encoding: 'utf8', timeout: 600_000 });
+  // The production build users get: under Vitest NODE_ENV is 'test', which would make Vite build Vue's
+  // development variant (about 60 kB more, with dev-only warnings) and test something no user runs.
+  const run = spawnSync('npm', ['run', 'build:web'], { cwd: ROOT, encoding: 'utf8', timeout: 600_000, env: { ...process.env, NODE_ENV: 'production' } });
   if (run.status !== 0) throw new Error(`npm run build:web failed:\n${run.stdout}\n${run.stderr}`);
 }
 

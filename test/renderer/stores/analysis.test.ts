@@ -4,6 +4,7 @@
  * fields, results of earlier inputs shown again on undo, cancel, and states at a curvature.
  */
 import { describe, expect, it } from 'vitest';
+import { watch } from 'vue';
 import { say } from '../../../core/units/phrase.ts';
 import { setMemberField, setSectionField } from '../../../renderer/src/project/edits.ts';
 import { useAnalysisStore } from '../../../renderer/src/stores/analysis.ts';
@@ -126,10 +127,13 @@ describe('cancel', () => {
     const documentStore = useDocumentStore();
     const analysis = useAnalysisStore();
     documentStore.openDemo('us');
+    // Cancel the moment the first member is done (a synchronous watcher), not at the next poll: on an
+    // idle machine the whole batch could finish between two polls and the test would depend on speed.
+    const stop = watch(() => analysis.batch.done, (done) => { if (done >= 1) analysis.cancelAll(); }, { flush: 'sync' });
     const running = analysis.analyseAll();
     await until(() => analysis.batch.done >= 1, 'the first member');
-    analysis.cancelAll();
     await running;
+    stop();
     expect(analysis.batch.running).toBe(false);
     expect(analysis.batch.outcome).toBe('cancelled');
     const ids = documentStore.project!.members.map((m) => m.id);

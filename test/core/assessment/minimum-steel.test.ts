@@ -85,7 +85,7 @@ describe('validation warns of steel below the minimum with the verdicts\' own ru
     expect(r.status).not.toBe('ok');
     const shortfall = (t: string) => /tension steel .*? is less than the minimum .*?\)/.exec(t)?.[0];
     expect(shortfall(warning.message)).toBe('tension steel 402 mm² is less than the minimum 454 mm² (ACI 318-19 9.6.1.2; bw = 300 mm, d = 540 mm)');
-    expect(finding).toBeDefined();
+    expect(finding?.cause).toBe('below-minimum-steel');
     expect(shortfall(say(finding!.text, 'SI'))).toBe(shortfall(warning.message));
   });
 

@@ -80,7 +80,7 @@ describe('SpanEditor', () => {
 
   it('never offers to go below two spans', () => {
     const { wrapper } = setup('CB-2');
-    expect(wrapper.get('[data-testid=remove-span-1]').attributes('disabled')).toBeDefined();
+    expect((wrapper.get('[data-testid=remove-span-1]').element as HTMLButtonElement).disabled).toBe(true);
   });
 
   it('turns a support into a column spring with its stiffness, height and far end', async () => {

@@ -20,7 +20,7 @@ import type { MemberResult } from '../../core/assessment/results.ts';
 
 type Io = CliIo;
 
-const stdoutStyle = (io: Io): Style => ({ enabled: io.stdoutIsTTY && io.colorAllowed });
+export const stdoutStyle = (io: Io): Style => ({ enabled: io.stdoutIsTTY && io.colorAllowed });
 const stderrStyle = (io: Io): Style => ({ enabled: io.stderrIsTTY && io.colorAllowed });
 
 /** A problem the user can act on: printed as one line on stderr, with an exit code. */
@@ -33,7 +33,7 @@ export class CliFailure extends Error {
   }
 }
 
-async function readProjectText(io: Io, file: string): Promise<string> {
+export async function readProjectText(io: Io, file: string): Promise<string> {
   try {
     return await io.readText(file);
   } catch (error) {
@@ -50,14 +50,14 @@ function writeProblem(error: unknown): string {
 }
 
 /** Fails at once (exit 2) when `file` cannot be written: before the work, not after it. */
-async function checkOutput(io: Io, file: string): Promise<void> {
+export async function checkOutput(io: Io, file: string): Promise<void> {
   const problem = await io.outputProblem(io.resolvePath(file));
   if (problem !== null) throw new CliFailure(`cannot write ${file}: ${problem}`, EXIT.usage);
 }
 
-async function writeOutput(io: Io, file: string, text: string): Promise<void> {
+export async function writeOutput(io: Io, file: string, text: string, options?: { readonly keepBackup?: boolean }): Promise<void> {
   try {
-    await io.writeText(file, text);
+    await io.writeText(file, text, options);
   } catch (error) {
     throw new CliFailure(`cannot write ${file}: ${writeProblem(error)}`, EXIT.usage);
   }
@@ -220,6 +220,8 @@ export async function runCommand(io: Io, command: Command, options: { reportModu
       return demo(io, command);
     case 'report':
       return report(io, command, options.reportModule);
+    case 'import':
+      return (await import('./import.ts')).importCommand(io, command);
     case 'help':
     case 'version':
       throw new Error(`${command.kind} is handled by main`);

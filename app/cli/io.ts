@@ -20,8 +20,11 @@ export interface CliIo {
   /** Colours allowed at all (NO_COLOR not set); each stream also has to be a terminal. */
   readonly colorAllowed: boolean;
   readText(path: string): Promise<string>;
-  /** Writes atomically; only to a regular file or a new path (app/main/atomic-write.ts). */
-  writeText(path: string, text: string): Promise<void>;
+  /**
+   * Writes atomically; only to a regular file or a new path (app/main/atomic-write.ts). With
+   * `keepBackup` the previous content is kept as `<path>.bak`.
+   */
+  writeText(path: string, text: string, options?: { readonly keepBackup?: boolean }): Promise<void>;
   /**
    * Why `path` cannot be written (its folder is missing, or something other than a regular file is
    * there), or null when it can. Checked before long work, so a bad --out fails at once.
@@ -64,7 +67,7 @@ export function nodeIo(): CliIo {
     columns: process.stdout.columns ?? process.stderr.columns ?? 80,
     colorAllowed: process.env.NO_COLOR === undefined || process.env.NO_COLOR === '',
     readText: (path) => readFile(path, 'utf8'),
-    writeText: async (path, text) => void (await writeFileAtomic(path, text)),
+    writeText: async (path, text, options) => void (await writeFileAtomic(path, text, { keepBackup: options?.keepBackup === true })),
     outputProblem: (path) => outputProblem(resolve(path)),
     exists: (path) => existsSync(path),
     resolvePath: (path) => resolve(path),

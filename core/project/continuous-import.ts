@@ -41,7 +41,8 @@ type Key =
   | 'section' | 'leftSection' | 'leftZone' | 'rightSection' | 'rightZone'
   | 'dead' | 'superimposed' | 'live' | 'notes';
 
-const COLUMNS: readonly CsvColumn<Key>[] = [
+/** The columns of a span list (docs/project-format.md "Continuous members from CSV" lists each with its unit and range). */
+export const SPAN_CSV_COLUMNS: readonly CsvColumn<Key>[] = [
   { key: 'member', quantity: null, required: true, aliases: ['member', 'member id', 'id'] },
   { key: 'name', quantity: null, required: false, aliases: ['name', 'mark'] },
   { key: 'part', quantity: null, required: false, aliases: ['part'] },
@@ -66,7 +67,7 @@ const COLUMNS: readonly CsvColumn<Key>[] = [
 ];
 
 /** Header names of the columns (for messages and the documentation). */
-const HEADER_NAME: Readonly<Record<Key, string>> = Object.fromEntries(COLUMNS.map((c) => [c.key, c.aliases[0]!])) as Record<Key, string>;
+const HEADER_NAME: Readonly<Record<Key, string>> = Object.fromEntries(SPAN_CSV_COLUMNS.map((c) => [c.key, c.aliases[0]!])) as Record<Key, string>;
 
 export interface ContinuousCsvOptions {
   /** Ids of the project's sections (when given, unknown section ids are row errors). */
@@ -106,17 +107,18 @@ const KINDS = ['pinned', 'fixed', 'column'] as const;
 
 /**
  * Reads continuous members from CSV text (see the module comment). Returns the members whose rows
- * have no errors, in file order, in internal units; and every problem, by row and column. Never throws.
+ * have no errors, in file order, in internal units; `rows[i]`, the first and last line of `members[i]`
+ * in the file; and every problem, by row and column. Never throws.
  */
-export function importContinuousMembersCsv(text: string, options: ContinuousCsvOptions = {}): { members: ContinuousBeamDefinition[]; diagnostics: Diagnostic[] } {
+export function importContinuousMembersCsv(text: string, options: ContinuousCsvOptions = {}): { members: ContinuousBeamDefinition[]; rows: { first: number; last: number }[]; diagnostics: Diagnostic[] } {
   const diagnostics: Diagnostic[] = [];
   const { delimiter, decimalComma } = csvSeparator(text);
   const { records, problems } = parseCsv(text, delimiter);
   diagnostics.push(...problems);
   const header = records[0];
-  if (!header) return { members: [], diagnostics: [...diagnostics, { code: 'required', path: 'row 1', severity: 'error', message: 'the file is empty: a header row naming the columns is required' }] };
-  const columns = readCsvHeader(header, COLUMNS, diagnostics);
-  if (!columns) return { members: [], diagnostics };
+  if (!header) return { members: [], rows: [], diagnostics: [...diagnostics, { code: 'required', path: 'row 1', severity: 'error', message: 'the file is empty: a header row naming the columns is required' }] };
+  const columns = readCsvHeader(header, SPAN_CSV_COLUMNS, diagnostics);
+  if (!columns) return { members: [], rows: [], diagnostics };
 
   // --- rows ------------------------------------------------------------------------------------------
   const rows: SpanRow[] = [];
@@ -233,6 +235,7 @@ export function importContinuousMembersCsv(text: string, options: ContinuousCsvO
 
   // --- members ------------------------------------------------------------------------------------------
   const members: ContinuousBeamDefinition[] = [];
+  const memberRows: { first: number; last: number }[] = [];
   const finished = new Map<string, number>();
   const service = options.service ?? defaultImportService(options.codeBasis);
   const capacity = options.capacity ?? DEFAULT_CAPACITY;
@@ -326,6 +329,7 @@ export function importContinuousMembersCsv(text: string, options: ContinuousCsvO
       continue;
     }
     members.push(definition);
+    memberRows.push({ first, last: lastLine });
   }
-  return { members, diagnostics };
+  return { members, rows: memberRows, diagnostics };
 }

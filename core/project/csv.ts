@@ -84,7 +84,8 @@ export function parseCsv(text: string, delimiter = ','): { records: CsvRecord[];
 type ColumnKey = 'id' | 'name' | 'span' | 'supports' | 'section' | 'dead' | 'superimposed' | 'live' | 'notes';
 type ColumnSpec = CsvColumn<ColumnKey>;
 
-const COLUMNS: readonly ColumnSpec[] = [
+/** The columns of a member list (docs/project-format.md "CSV member lists" lists each with its unit and range). */
+export const MEMBER_CSV_COLUMNS: readonly ColumnSpec[] = [
   { key: 'id', quantity: null, required: true, aliases: ['id', 'member id', 'member'] },
   { key: 'name', quantity: null, required: false, aliases: ['name', 'mark'] },
   { key: 'span', quantity: 'spanLength', required: true, aliases: ['span', 'length'] },
@@ -126,24 +127,31 @@ export function defaultImportService(code: CodeBasis = 'ACI 318-19'): ServiceSet
 
 const DEFAULT_CAPACITY: CapacitySettings = { pattern: 'proportional', hingeLengthMethod: 'priestley-2007' };
 
+/** Largest span a member list may give: 60 m, in mm. */
+export const MAX_IMPORT_SPAN = 60000;
+/** Largest uniform load a member list may give per case: 10 000 kN/m, in N/mm (a guard against unit mix-ups, not a design limit). */
+export const MAX_IMPORT_LINE_LOAD = 1e4;
+
 /**
  * Reads a member list from CSV text (see the file comment for the columns). Returns the members of the
  * rows without errors, in file order, in internal units (span mm, line loads N/mm), each with one zone
- * over the whole span; and every problem, row by row. Never throws.
+ * over the whole span; `rows[i]`, the line of the file `members[i]` came from; and every problem, row
+ * by row. Never throws.
  */
-export function importMembersCsv(text: string, options: MemberCsvOptions = {}): { members: MemberDefinition[]; diagnostics: Diagnostic[] } {
+export function importMembersCsv(text: string, options: MemberCsvOptions = {}): { members: MemberDefinition[]; rows: number[]; diagnostics: Diagnostic[] } {
   const diagnostics: Diagnostic[] = [];
   const { delimiter, decimalComma: semicolons } = csvSeparator(text);
   const { records, problems } = parseCsv(text, delimiter);
   diagnostics.push(...problems);
   const header = records[0];
-  if (!header) return { members: [], diagnostics: [...diagnostics, { code: 'required', path: 'row 1', severity: 'error', message: 'the file is empty: a header row naming the columns is required' }] };
+  if (!header) return { members: [], rows: [], diagnostics: [...diagnostics, { code: 'required', path: 'row 1', severity: 'error', message: 'the file is empty: a header row naming the columns is required' }] };
 
   // Header: find each column and its unit.
-  const columnAt = readCsvHeader(header, COLUMNS, diagnostics);
-  if (!columnAt) return { members: [], diagnostics };
+  const columnAt = readCsvHeader(header, MEMBER_CSV_COLUMNS, diagnostics);
+  if (!columnAt) return { members: [], rows: [], diagnostics };
 
   const members: MemberDefinition[] = [];
+  const rows: number[] = [];
   const seen = new Map<string, number>();
   const service = options.service ?? defaultImportService(options.codeBasis);
   const capacity = options.capacity ?? DEFAULT_CAPACITY;
@@ -169,11 +177,13 @@ export function importMembersCsv(text: string, options: MemberCsvOptions = {}): 
     const spanText = cell('span');
     const spanValue = cellNumber(spanText, semicolons);
     let span = NaN;
-    if (spanValue === null) error('span', spanText === '' ? 'required' : 'not-a-number', spanText === '' ? `is required (a number in ${spanColumn.unit})` : `must be a number in ${spanColumn.unit}, got ${JSON.stringify(spanText)}`);
-    else if (!(spanValue > 0)) error('span', 'must-be-positive', `must be greater than 0 ${spanColumn.unit}, got ${spanText} ${spanColumn.unit}`);
+    // Allowed: 0 < span ≤ 60 m (MAX_IMPORT_SPAN), in the column's unit.
+    const spanRange = `greater than 0 and at most ${formatNumber(MAX_IMPORT_SPAN / spanColumn.toInternal(1), 4)} ${spanColumn.unit}`;
+    if (spanValue === null) error('span', spanText === '' ? 'required' : 'not-a-number', spanText === '' ? `is required (a number in ${spanColumn.unit}, ${spanRange})` : `must be a number in ${spanColumn.unit} (${spanRange}), got ${JSON.stringify(spanText)}`);
+    else if (!(spanValue > 0)) error('span', 'must-be-positive', `must be ${spanRange}, got ${spanText} ${spanColumn.unit}`);
     else {
       span = spanColumn.toInternal(spanValue);
-      if (span > 60000) error('span', 'out-of-range', `must be at most ${formatNumber(60000 / (spanColumn.toInternal(1)), 4)} ${spanColumn.unit} (60 m), got ${spanText} ${spanColumn.unit}`);
+      if (span > MAX_IMPORT_SPAN) error('span', 'out-of-range', `must be ${spanRange}, got ${spanText} ${spanColumn.unit}`);
     }
 
     const supportsText = cell('supports');
@@ -191,9 +201,11 @@ export function importMembersCsv(text: string, options: MemberCsvOptions = {}): 
       const raw = cell(key);
       if (raw === '') continue;
       const value = cellNumber(raw, semicolons);
-      if (value === null) error(key, 'not-a-number', `must be a number in ${column.unit} (or empty for none), got ${JSON.stringify(raw)}`);
-      else if (value < 0) error(key, 'out-of-range', `must be 0 or more ${column.unit} (loads act downward), got ${raw} ${column.unit}`);
-      else if (column.toInternal(value) > 1e4) error(key, 'out-of-range', `must be at most ${formatNumber(1e4 / column.toInternal(1), 4)} ${column.unit}, got ${raw} ${column.unit}`);
+      // Allowed: 0 ≤ w ≤ MAX_IMPORT_LINE_LOAD (downward), in the column's unit.
+      const range = `from 0 to ${formatNumber(MAX_IMPORT_LINE_LOAD / column.toInternal(1), 4)} ${column.unit}`;
+      if (value === null) error(key, 'not-a-number', `must be a number in ${column.unit} (${range}; empty for none), got ${JSON.stringify(raw)}`);
+      else if (value < 0) error(key, 'out-of-range', `must be ${range} (loads act downward), got ${raw} ${column.unit}`);
+      else if (column.toInternal(value) > MAX_IMPORT_LINE_LOAD) error(key, 'out-of-range', `must be ${range}, got ${raw} ${column.unit}`);
       else if (value > 0) loads.push({ kind: 'uniform', loadCase: key, magnitude: column.toInternal(value), label: `${key} load (imported)` });
     }
 
@@ -214,8 +226,9 @@ export function importMembersCsv(text: string, options: MemberCsvOptions = {}): 
       capacity,
       ...(notes ? { notes } : {}),
     });
+    rows.push(record.line);
   }
-  return { members, diagnostics };
+  return { members, rows, diagnostics };
 }
 
 // --- writing ----------------------------------------------------------------------------------------

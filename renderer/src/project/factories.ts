@@ -4,18 +4,11 @@
  * change them. Values are written in the display units an engineer would type (m, mm, kN/m; ft,
  * in, kip/ft) and stored in internal units through core/units.
  */
-import type { CodeBasis, ConcreteSpec, MaterialSpec, SteelSpec } from '../../../core/materials/specs.ts';
+import type { CodeBasis, MaterialSpec } from '../../../core/materials/specs.ts';
 import { defaultImportService } from '../../../core/project/csv.ts';
-import { DEFAULT_SETTINGS, PROJECT_FORMAT, PROJECT_VERSION, type Project, type UnitSystem, type MemberDefinition } from '../../../core/project/types.ts';
+import { starterProject, typedValue as typed } from '../../../core/project/starter.ts';
+import type { Project, UnitSystem, MemberDefinition } from '../../../core/project/types.ts';
 import type { SectionDefinition } from '../../../core/section/definition.ts';
-import { fromDisplay } from '../../../core/units/index.ts';
-
-const tidy = (x: number): number => Number(x.toPrecision(9));
-
-/** A value typed in the display unit of `system` (SI: m/mm/kN; US: ft/in/kip), stored in internal units. */
-function typed(quantity: 'spanLength' | 'sectionLength' | 'lineLoad' | 'concreteStress' | 'stress', si: number, us: number, system: UnitSystem): number {
-  return system === 'us' ? tidy(fromDisplay(quantity, us, 'US')) : tidy(fromDisplay(quantity, si, 'SI'));
-}
 
 /** An id not used by any of `existing`: `prefix` followed by the first free number from 1. */
 export function uniqueId(prefix: string, existing: Iterable<string>): string {
@@ -34,33 +27,6 @@ export function copyName(name: string, existing: Iterable<string>): string {
     const candidate = n === 1 ? `${base} (copy)` : `${base} (copy ${n})`;
     if (!taken.has(candidate)) return candidate;
   }
-}
-
-function starterMaterials(code: CodeBasis, system: UnitSystem): MaterialSpec[] {
-  const concrete: ConcreteSpec = code === 'EN 1992-1-1'
-    ? { kind: 'concrete', id: 'concrete-1', name: 'C30/37', strength: 30, compressionModel: 'en1992-nonlinear', tensionModel: 'tension-stiffening' }
-    : { kind: 'concrete', id: 'concrete-1', name: system === 'us' ? 'f′c 4000 psi' : 'f′c 28 MPa', strength: typed('concreteStress', 28, 4000, system), compressionModel: 'hognestad', tensionModel: 'tension-stiffening' };
-  const steel: SteelSpec = code === 'EN 1992-1-1'
-    ? { kind: 'steel', id: 'steel-1', name: 'B500B', model: 'park-paulay', yieldStress: 500, ultimateStress: 540, hardeningStrain: 0.01, ruptureStrain: 0.05 }
-    : { kind: 'steel', id: 'steel-1', name: system === 'us' ? 'Grade 60' : 'Grade 420', model: 'park-paulay', yieldStress: typed('stress', 420, 60, system), ultimateStress: typed('stress', 620, 90, system), hardeningStrain: 0.008, ruptureStrain: 0.09 };
-  return [concrete, steel];
-}
-
-function starterSection(system: UnitSystem): SectionDefinition {
-  const mm = (si: number, us: number) => typed('sectionLength', si, us, system);
-  const width = mm(300, 12);
-  const height = mm(600, 24);
-  return {
-    id: 'section-1',
-    name: system === 'us' ? 'Rectangle 12 × 24 in' : 'Rectangle 300 × 600',
-    shape: { kind: 'rectangle', width, height },
-    concreteId: 'concrete-1',
-    bars: [
-      { steelId: 'steel-1', depth: tidy(height - mm(55, 2.2)), count: 3, diameter: mm(20, 0.75), label: 'bottom bars' },
-      { steelId: 'steel-1', depth: mm(50, 2), count: 2, diameter: mm(16, 0.625), label: 'top bars' },
-    ],
-    hoops: { steelId: 'steel-1', diameter: mm(10, 0.375), spacing: mm(200, 8), verticalLegs: 2, horizontalLegs: 2, clearCover: mm(30, 1.5), confineCore: false, closedAndAnchored: false },
-  };
 }
 
 /** A simply supported member over one zone of `sectionId`, with typical floor loads. */
@@ -85,17 +51,9 @@ export function newMember(project: Project, sectionId: string, name?: string): M
   };
 }
 
-/** An empty project with one concrete, one steel, one rectangular section and one member. */
+/** An empty project with one concrete, one steel, one rectangular section (core/project/starter.ts) and one member. */
 export function newProject(system: UnitSystem, code: CodeBasis, date: string): Project {
-  const base: Project = {
-    format: PROJECT_FORMAT,
-    version: PROJECT_VERSION,
-    info: { name: 'Untitled project', number: '', description: '', engineer: '', checker: '', revision: '', date, codeBasis: code, unitSystem: system },
-    materials: starterMaterials(code, system),
-    sections: [starterSection(system)],
-    members: [],
-    settings: { ...DEFAULT_SETTINGS },
-  };
+  const base = starterProject(system, code, date);
   return { ...base, members: [newMember(base, 'section-1', 'B-1')] };
 }
 

@@ -4,57 +4,10 @@ import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { main } from '../../../app/cli/main.ts';
-import type { CliIo } from '../../../app/cli/io.ts';
+import { memoryIo, type MemoryIo } from './memory-io.ts';
 import { demoProject, demoProjectSI } from '../../../core/project/demo.ts';
 import { parseProject, serializeProject } from '../../../core/project/file.ts';
 import type { Project } from '../../../core/project/types.ts';
-
-interface MemoryIo extends CliIo {
-  readonly files: Map<string, string>;
-  out(): string;
-  err(): string;
-}
-
-function memoryIo(files: Record<string, string> = {}, options: { tty?: boolean; env?: Record<string, string> } = {}): MemoryIo {
-  const store = new Map(Object.entries(files));
-  let stdout = '';
-  let stderr = '';
-  return {
-    files: store,
-    out: () => stdout,
-    err: () => stderr,
-    stdout: (t) => { stdout += t; },
-    stderr: (t) => { stderr += t; },
-    stdoutIsTTY: false,
-    stderrIsTTY: options.tty ?? false,
-    columns: 100,
-    colorAllowed: false,
-    readText: async (path) => {
-      const text = store.get(path);
-      if (text === undefined) throw Object.assign(new Error(`ENOENT: ${path}`), { code: 'ENOENT' });
-      return text;
-    },
-    writeText: async (path, text) => {
-      if (path.startsWith('/no-such-dir/')) throw Object.assign(new Error('ENOENT'), { code: 'ENOENT' });
-      store.set(path, text);
-    },
-    outputProblem: async (path) => (path.startsWith('/no-such-dir/') ? 'the folder /no-such-dir does not exist' : path === '/virtual/a-folder' ? 'it is a folder' : null),
-    exists: (path) => store.has(path) || (path.startsWith('/') && !path.startsWith('/virtual/') && existsOnDisk(path)),
-    resolvePath: (path) => (path.startsWith('/') ? path : `/virtual/${path}`),
-    signal: new AbortController().signal,
-    withImmediateInterrupt: async (work) => work(),
-    env: options.env ?? {},
-  };
-}
-
-function existsOnDisk(path: string): boolean {
-  try {
-    readFileSync(path);
-    return true;
-  } catch {
-    return false;
-  }
-}
 
 /** Two demo members: B-204 fails a deflection check, C-101 passes everything. */
 function twoMembers(): Project {

@@ -93,10 +93,11 @@ describe('importMembersCsv', () => {
       'row 7, column id: required',
       'row 8, column span: out-of-range',
     ]);
-    expect(diagnostics[0]!.message).toBe('must be greater than 0 ft, got -2 ft');
-    expect(diagnostics[1]!.message).toBe('must be a number in ft, got "twenty"');
+    // 60 m = 196.85 ft (NIST SP 811 Appendix B: 1 ft = 0.3048 m exactly): the range in the column's unit.
+    expect(diagnostics[0]!.message).toBe('must be greater than 0 and at most 196.9 ft, got -2 ft');
+    expect(diagnostics[1]!.message).toBe('must be a number in ft (greater than 0 and at most 196.9 ft), got "twenty"');
     expect(diagnostics[6]!.message).toBe('"B-1" is already used on row 2');
-    expect(diagnostics[9]!.message).toBe('must be at most 196.9 ft (60 m), got 250 ft');
+    expect(diagnostics[9]!.message).toBe('must be greater than 0 and at most 196.9 ft, got 250 ft');
   });
 
   it('requires the unit of every dimensioned column in the header', () => {

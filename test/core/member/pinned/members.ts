@@ -25,6 +25,8 @@ export interface KeyResults {
   readonly hinges: readonly (readonly [number, string, number, boolean, number | null])[];
   /** Events: kind and load factor. */
   readonly events: readonly (readonly [string, number])[];
+  /** Service deflections by integration, mm: dead, dead + live, sustained, and the long-term total (null: no service state). */
+  readonly service: readonly number[] | null;
 }
 
 function beamKeys(r: BeamResult): KeyResults {
@@ -42,6 +44,7 @@ function beamKeys(r: BeamResult): KeyResults {
     failureCause: r.ductility.failureCause,
     hinges: [...r.ductility.hinges].sort((a, b) => a.order - b.order).map((h) => [h.position, h.direction, h.yieldLoadFactor, h.localised, h.rotationAtUltimate] as const),
     events: r.loadDeflection.events.map((e) => [e.kind, e.loadFactor] as const),
+    service: r.service ? [r.service.immediate.integration.dead, r.service.immediate.integration.deadPlusLive, r.service.immediate.integration.sustained, r.service.longTerm.integrationTotal] : null,
   };
 }
 

@@ -305,13 +305,11 @@ export function segmentIntegrals(zone: ZoneResponse, ma: number, mb: number, sec
   return out;
 }
 
-const pieceT: number[] = [];
-const piecePhi: number[] = [];
-
 /**
  * Exact segment integrals when both ends lie on the same branch of the law but on different
  * pieces: the knots between them and their curvatures are read straight from the response's
- * tables (no searching), then each linear piece is integrated in closed form.
+ * tables (no searching), then each linear piece is integrated in closed form, walking the knots in
+ * the order t meets them (no scratch arrays: this runs for most segments of every evaluation).
  */
 function segmentAcrossKnots(zone: ZoneResponse, ma: number, mb: number, a: ValueAndSlope, b: ValueAndSlope, sagging: boolean, out: SegmentIntegrals): SegmentIntegrals {
   const response = sagging ? zone.sagging : zone.hogging;
@@ -326,41 +324,46 @@ function segmentAcrossKnots(zone: ZoneResponse, ma: number, mb: number, a: Value
   if (ia >= 1_000_000) ia = count;
   if (ib >= 1_000_000) ib = count;
   const dm = mb - ma;
-  pieceT.length = 0;
-  piecePhi.length = 0;
-  pieceT.push(0);
-  piecePhi.push(a.value);
-  if (ib > ia) for (let k = ia + 1; k <= Math.min(ib, count - 1); k++) {
-    pieceT.push((sign * knots[k]! - ma) / dm);
-    piecePhi.push(sign * curvatures[k]!);
-  }
-  else for (let k = ia; k > ib && k >= 0; k--) {
-    if (k >= count) continue;
-    pieceT.push((sign * knots[k]! - ma) / dm);
-    piecePhi.push(sign * curvatures[k]!);
-  }
-  pieceT.push(1);
-  piecePhi.push(b.value);
   out.i0 = 0;
   out.i1 = 0;
   out.j00 = 0;
   out.j01 = 0;
   out.j11 = 0;
-  for (let p = 0; p + 1 < pieceT.length; p++) {
-    const t0 = pieceT[p]!;
-    const t1 = pieceT[p + 1]!;
-    const span = t1 - t0;
-    if (!(span > 0)) continue;
-    const phi0 = piecePhi[p]!;
-    const phi1 = piecePhi[p + 1]!;
-    out.i0 += (span * (phi0 + phi1)) / 2;
-    out.i1 += (span * (phi0 * (2 * t0 + t1) + phi1 * (t0 + 2 * t1))) / 6;
-    const f = (phi1 - phi0) / (span * dm);
-    out.j00 += (f * ((1 - t0) ** 3 - (1 - t1) ** 3)) / 3;
-    out.j11 += (f * (t1 ** 3 - t0 ** 3)) / 3;
-    out.j01 += f * ((t1 * t1 - t0 * t0) / 2 - (t1 ** 3 - t0 ** 3) / 3);
+  let t0 = 0;
+  let phi0 = a.value;
+  if (ib > ia) {
+    const last = Math.min(ib, count - 1);
+    for (let k = ia + 1; k <= last; k++) {
+      const t1 = (sign * knots[k]! - ma) / dm;
+      const phi1 = sign * curvatures[k]!;
+      addPiece(t0, t1, phi0, phi1, dm, out);
+      t0 = t1;
+      phi0 = phi1;
+    }
+  } else {
+    for (let k = ia; k > ib && k >= 0; k--) {
+      if (k >= count) continue;
+      const t1 = (sign * knots[k]! - ma) / dm;
+      const phi1 = sign * curvatures[k]!;
+      addPiece(t0, t1, phi0, phi1, dm, out);
+      t0 = t1;
+      phi0 = phi1;
+    }
   }
+  addPiece(t0, 1, phi0, b.value, dm, out);
   out.phiA = a.value;
   out.phiB = b.value;
   return out;
+}
+
+/** Adds one linear piece of the curvature, φ0 at t0 to φ1 at t1 (moment slope dm over the segment), to the integrals. */
+function addPiece(t0: number, t1: number, phi0: number, phi1: number, dm: number, out: SegmentIntegrals): void {
+  const span = t1 - t0;
+  if (!(span > 0)) return;
+  out.i0 += (span * (phi0 + phi1)) / 2;
+  out.i1 += (span * (phi0 * (2 * t0 + t1) + phi1 * (t0 + 2 * t1))) / 6;
+  const f = (phi1 - phi0) / (span * dm);
+  out.j00 += (f * ((1 - t0) ** 3 - (1 - t1) ** 3)) / 3;
+  out.j11 += (f * (t1 ** 3 - t0 ** 3)) / 3;
+  out.j01 += f * ((t1 * t1 - t0 * t0) / 2 - (t1 ** 3 - t0 ** 3) / 3);
 }

@@ -124,6 +124,34 @@ interface Window {
   readonly rightW: number;
 }
 
+/**
+ * The station of the largest (sense 1) or smallest (sense −1) moment in stations [lo, hi], the first
+ * of equals: the window's ends and the listed interior extremes between them (ascending), in order.
+ */
+function windowExtreme(M: Float64Array, lo: number, hi: number, extremes: Int32Array, count: number, sense: 1 | -1): number {
+  let at = lo;
+  let best = sense * M[lo]!;
+  // First listed extreme after lo (binary search; the list is short).
+  let a = 0;
+  let b = count;
+  while (a < b) {
+    const mid = (a + b) >> 1;
+    if (extremes[mid]! <= lo) a = mid + 1;
+    else b = mid;
+  }
+  for (let k = a; k < count; k++) {
+    const j = extremes[k]!;
+    if (j >= hi) break;
+    const v = sense * M[j]!;
+    if (v > best) {
+      best = v;
+      at = j;
+    }
+  }
+  if (hi > lo && sense * M[hi]! > best) at = hi;
+  return at;
+}
+
 const ZERO_INTEGRALS = (): TableIntegrals => ({ i0: 0, i1: 0, j00: 0, j01: 0, j11: 0 });
 
 /**
@@ -153,6 +181,16 @@ export class Equations {
 
   /** The curvature scale of each zone (curvatureScale), 1/mm, computed once. */
   private readonly zoneScale: Float64Array;
+  /**
+   * Interior stations whose moment is at least (peaks) or at most (troughs) that of both neighbours,
+   * ascending, and their counts; rebuilt by `moments`. The largest moment of a window is at one of
+   * its ends or at a peak inside it — the first of equals too — so a window is searched through
+   * these instead of station by station.
+   */
+  private readonly peaks: Int32Array;
+  private readonly troughs: Int32Array;
+  private peakCount = 0;
+  private troughCount = 0;
 
   /**
    * Shear flexibility s, mm per N·mm: the deflection from shear strain is s·(M(x) − M(0)) (γ = s·V),
@@ -168,6 +206,8 @@ export class Equations {
     this.sens = Array.from({ length: this.r + 1 }, () => new Float64Array(this.n));
     this.ends = Array.from({ length: this.n }, () => ({ value: 0, slope: 0, piece: -1 }));
     this.windows = options.shift ? { sagging: this.buildWindows(options.shift.sagging), hogging: this.buildWindows(options.shift.hogging) } : null;
+    this.peaks = new Int32Array(this.windows ? this.n : 0);
+    this.troughs = new Int32Array(this.windows ? this.n : 0);
     this.srcA = new Int32Array(this.n);
     this.srcB = new Int32Array(this.n);
     this.srcW = new Float64Array(this.n);
@@ -225,14 +265,17 @@ export class Equations {
     }
     const sagW = this.windows.sagging;
     const hogW = this.windows.hogging;
+    this.findExtremes(M);
     for (let i = 0; i < this.n; i++) {
-      // Sagging part: the largest positive moment in the window; hogging part likewise.
+      // Sagging part: the largest positive moment in the window (the first of equals); hogging part
+      // likewise. The search through the peaks finds the same station a scan of the window would.
       let best = 0;
       let ja = -1;
       let jb = -1;
       let w = 0;
       const ws = sagW[i]!;
-      for (let j = ws.lo; j <= ws.hi; j++) if (M[j]! > best) { best = M[j]!; ja = j; jb = j; w = 0; }
+      const top = windowExtreme(M, ws.lo, ws.hi, this.peaks, this.peakCount, 1);
+      if (M[top]! > best) { best = M[top]!; ja = top; jb = top; }
       if (ws.leftK >= 0) {
         const v = (1 - ws.leftW) * M[ws.leftK]! + ws.leftW * M[ws.leftK + 1]!;
         if (v > best) { best = v; ja = ws.leftK; jb = ws.leftK + 1; w = ws.leftW; }
@@ -246,7 +289,8 @@ export class Equations {
       let hb = -1;
       let hw = 0;
       const wh = hogW[i]!;
-      for (let j = wh.lo; j <= wh.hi; j++) if (-M[j]! > worst) { worst = -M[j]!; ha = j; hb = j; hw = 0; }
+      const bottom = windowExtreme(M, wh.lo, wh.hi, this.troughs, this.troughCount, -1);
+      if (-M[bottom]! > worst) { worst = -M[bottom]!; ha = bottom; hb = bottom; }
       if (wh.leftK >= 0) {
         const v = -((1 - wh.leftW) * M[wh.leftK]! + wh.leftW * M[wh.leftK + 1]!);
         if (v > worst) { worst = v; ha = wh.leftK; hb = wh.leftK + 1; hw = wh.leftW; }
@@ -273,6 +317,21 @@ export class Equations {
       this.effective[i] = best - worst;
     }
     return M;
+  }
+
+  /** Lists the interior peaks and troughs of the moments M (see `peaks`). */
+  private findExtremes(M: Float64Array): void {
+    let peaks = 0;
+    let troughs = 0;
+    for (let j = 1; j < this.n - 1; j++) {
+      const m = M[j]!;
+      const before = M[j - 1]!;
+      const after = M[j + 1]!;
+      if (m >= before && m >= after) this.peaks[peaks++] = j;
+      if (m <= before && m <= after) this.troughs[troughs++] = j;
+    }
+    this.peakCount = peaks;
+    this.troughCount = troughs;
   }
 
   /** dm_e/du at every station for the redundants and λ (after `moments`). */

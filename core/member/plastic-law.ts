@@ -199,60 +199,71 @@ export interface TableIntegrals {
   j11: number;
 }
 
-const tScratch: number[] = [];
-const yScratch: number[] = [];
 const vs: ValueAndSlope = { value: 0, slope: 0 };
+
+/** First index k with xs[k] > v (xs ascending; n when none). */
+function firstAbove(xs: ArrayLike<number>, v: number): number {
+  let lo = 0;
+  let hi = xs.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (xs[mid]! <= v) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
+}
 
 /**
  * Adds to `out` the exact integrals over t ∈ [t0, t1] of y(a + (b − a)·t), y the piecewise-linear
  * table (xs ascending, ys; clamped outside): i0 = ∫y dt, i1 = ∫y·t dt and, when `active`, the
- * Jacobian weights j00 = ∫f(1−t)² dt, j01 = ∫f·t(1−t) dt, j11 = ∫f·t² dt with f = dy/dx.
+ * Jacobian weights j00 = ∫f(1−t)² dt, j01 = ∫f·t(1−t) dt, j11 = ∫f·t² dt with f = dy/dx. The knots
+ * inside are found by binary search and walked in the order t meets them (no scratch arrays).
  */
 export function addTableIntegrals(xs: ArrayLike<number>, ys: ArrayLike<number>, a: number, b: number, t0: number, t1: number, active: boolean, out: TableIntegrals): void {
   if (!(t1 > t0)) return;
   const d = b - a;
   const xa = a + d * t0;
   const xb = a + d * t1;
-  tScratch.length = 0;
-  yScratch.length = 0;
-  tScratch.push(t0);
-  yScratch.push(interpolateWithSlope(xs, ys, xa, vs).value);
+  const yStart = interpolateWithSlope(xs, ys, xa, vs).value;
+  const yEnd = interpolateWithSlope(xs, ys, xb, vs).value;
+  let ta = t0;
+  let ya = yStart;
   const lo = Math.min(xa, xb);
   const hi = Math.max(xa, xb);
   const n = xs.length;
   if (n > 0 && hi > xs[0]! && lo < xs[n - 1]!) {
     // Knots strictly inside (lo, hi), in the order t meets them.
-    let first = 0;
-    let last = n - 1;
-    while (first < n && xs[first]! <= lo) first++;
+    const first = firstAbove(xs, lo);
+    let last = firstAbove(xs, hi) - 1;
     while (last >= 0 && xs[last]! >= hi) last--;
     if (d > 0) for (let k = first; k <= last; k++) {
-      tScratch.push((xs[k]! - a) / d);
-      yScratch.push(ys[k]!);
+      const tb = (xs[k]! - a) / d;
+      addTablePiece(xs, ys, xa, ta, tb, ya, ys[k]!, d, active, out);
+      ta = tb;
+      ya = ys[k]!;
     }
     else for (let k = last; k >= first; k--) {
-      tScratch.push((xs[k]! - a) / d);
-      yScratch.push(ys[k]!);
+      const tb = (xs[k]! - a) / d;
+      addTablePiece(xs, ys, xa, ta, tb, ya, ys[k]!, d, active, out);
+      ta = tb;
+      ya = ys[k]!;
     }
   }
-  tScratch.push(t1);
-  yScratch.push(interpolateWithSlope(xs, ys, xb, vs).value);
-  for (let p = 0; p + 1 < tScratch.length; p++) {
-    const ta = tScratch[p]!;
-    const tb = tScratch[p + 1]!;
-    const span = tb - ta;
-    if (!(span > 0)) continue;
-    const ya = yScratch[p]!;
-    const yb = yScratch[p + 1]!;
-    out.i0 += (span * (ya + yb)) / 2;
-    out.i1 += (span * (ya * (2 * ta + tb) + yb * (ta + 2 * tb))) / 6;
-    if (!active) continue;
-    const f = d !== 0 ? (yb - ya) / (span * d) : interpolateWithSlope(xs, ys, xa, vs).slope;
-    if (f === 0) continue;
-    out.j00 += (f * ((1 - ta) ** 3 - (1 - tb) ** 3)) / 3;
-    out.j11 += (f * (tb ** 3 - ta ** 3)) / 3;
-    out.j01 += f * ((tb * tb - ta * ta) / 2 - (tb ** 3 - ta ** 3) / 3);
-  }
+  addTablePiece(xs, ys, xa, ta, t1, ya, yEnd, d, active, out);
+}
+
+/** One linear piece of addTableIntegrals: y from ya at ta to yb at tb. */
+function addTablePiece(xs: ArrayLike<number>, ys: ArrayLike<number>, xa: number, ta: number, tb: number, ya: number, yb: number, d: number, active: boolean, out: TableIntegrals): void {
+  const span = tb - ta;
+  if (!(span > 0)) return;
+  out.i0 += (span * (ya + yb)) / 2;
+  out.i1 += (span * (ya * (2 * ta + tb) + yb * (ta + 2 * tb))) / 6;
+  if (!active) return;
+  const f = d !== 0 ? (yb - ya) / (span * d) : interpolateWithSlope(xs, ys, xa, vs).slope;
+  if (f === 0) return;
+  out.j00 += (f * ((1 - ta) ** 3 - (1 - tb) ** 3)) / 3;
+  out.j11 += (f * (tb ** 3 - ta ** 3)) / 3;
+  out.j01 += f * ((tb * tb - ta * ta) / 2 - (tb ** 3 - ta ** 3) / 3);
 }
 
 /**

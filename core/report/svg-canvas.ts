@@ -10,6 +10,15 @@
  * style that follow each other become one path, and a clip is written only when a drawing reaches
  * outside it (chart.js clips to the plot area while drawing the data).
  *
+ * What cannot be seen is not written, and what is drawn twice is written once: a fill of a path
+ * without area (chart.js fills its cross markers, which are bare lines) is left out; a fill followed
+ * by a stroke of the same path is one element with both paints (SVG paints the fill first, as the
+ * canvas did); a polyline's points closer than `SIMPLIFY_TOLERANCE` (0.05 pt, far below what
+ * print resolves) to the straight line their neighbours span are dropped — every dropped point is
+ * checked against the segment that replaces it, so the drawn line never moves by more than that.
+ * pdfmake reads each element and each path point of the SVG again for every page it draws, so these
+ * are most of its time on a chart besides the text.
+ *
  * A clip is written as a nested `<svg>` viewport around the elements it applies to (consecutive
  * elements with the same clip share one), not as a `clip-path`: pdfmake's SVG reader draws a
  * `clip-path` as a transparency group with a soft mask (a form, a mask and their streams per
@@ -26,6 +35,22 @@ import { textPieces, textWidth, type ReportFontSet } from './scripts.ts';
 
 type Matrix = readonly [number, number, number, number, number, number];
 const IDENTITY: Matrix = [1, 0, 0, 1, 0, 0];
+
+/**
+ * Largest distance (canvas pixels = points in the report) by which dropping a polyline's point may
+ * move the drawn line: 0.05 pt = 0.018 mm, less than half a dot of a 600 dpi printer (0.12 pt) and a
+ * twelfth of the thinnest line the charts draw (0.6 pt).
+ */
+export const SIMPLIFY_TOLERANCE = 0.05;
+
+/** Distance from (px, py) to the segment (ax, ay)–(bx, by). */
+function segmentDistance(px: number, py: number, ax: number, ay: number, bx: number, by: number): number {
+  const dx = bx - ax;
+  const dy = by - ay;
+  const length2 = dx * dx + dy * dy;
+  const t = length2 === 0 ? 0 : Math.max(0, Math.min(1, ((px - ax) * dx + (py - ay) * dy) / length2));
+  return Math.hypot(px - (ax + t * dx), py - (ay + t * dy));
+}
 
 interface Rect {
   readonly x0: number;
@@ -108,6 +133,26 @@ export class RecordedPath {
   closePath(): void { this.calls.push({ name: 'closePath', args: [] }); }
 }
 
+/**
+ * The current path: SVG path data in canvas pixels (transform applied), its bounds, and what the
+ * simplification and the area test need (see the module comment).
+ */
+interface PathState {
+  readonly d: string[];
+  bounds: Rect | null;
+  /**
+   * The straight run the last `L` command ends: its fixed start (ax, ay), its end (lx, ly) when the
+   * last command is a replaceable `L`, and the points already dropped from it (x, y pairs).
+   */
+  run: { ax: number; ay: number; last: [number, number] | null; dropped: number[] } | null;
+  /** Points of the current subpath after simplification. */
+  points: number;
+  /** Whether the path may enclose an area (a subpath of three points or more, or a curve). */
+  area: boolean;
+}
+
+const emptyPath = (): PathState => ({ d: [], bounds: null, run: null, points: 0, area: false });
+
 /** The fake `<canvas>` chart.js asks for its context and size. */
 export interface SvgCanvasElement {
   width: number;
@@ -122,14 +167,14 @@ export class SvgCanvasContext {
   private readonly fonts: ReportFontSet;
   private state: State;
   private readonly stack: State[] = [];
-  /** Current path in canvas pixels (transform applied), as SVG path data, and its bounds. */
-  private path: string[] = [];
-  private pathBounds: Rect | null = null;
+  private path: PathState = emptyPath();
   private readonly body: string[] = [];
   /** The clip (rectangle key, see clipFor) of the nested viewport open at the end of `body`, or ''. */
   private openClip = '';
   /** The last stroked path element, kept open so that following strokes in the same style join it. */
   private pendingStroke: { attrs: string; d: string[]; clip: string } | null = null;
+  /** The last filled path, kept open so that a stroke of the same path right after it joins it. */
+  private pendingFill: { attrs: string; d: string; clip: string } | null = null;
 
   constructor(width: number, height: number, fonts: ReportFontSet) {
     this.fonts = fonts;
@@ -198,32 +243,79 @@ export class SvgCanvasContext {
   }
 
   private grow(x: number, y: number, pad = 0): void {
-    const b = this.pathBounds;
-    this.pathBounds = b ? { x0: Math.min(b.x0, x - pad), y0: Math.min(b.y0, y - pad), x1: Math.max(b.x1, x + pad), y1: Math.max(b.y1, y + pad) } : { x0: x - pad, y0: y - pad, x1: x + pad, y1: y + pad };
+    const b = this.path.bounds;
+    this.path.bounds = b ? { x0: Math.min(b.x0, x - pad), y0: Math.min(b.y0, y - pad), x1: Math.max(b.x1, x + pad), y1: Math.max(b.y1, y + pad) } : { x0: x - pad, y0: y - pad, x1: x + pad, y1: y + pad };
+  }
+
+  /** A command that ends at (x, y) and is not a straight line (a curve, an arc): the next run starts there. */
+  private curveTo(command: string, x: number, y: number): void {
+    this.path.d.push(command);
+    this.path.run = { ax: x, ay: y, last: null, dropped: [] };
+    this.path.points += 1;
+    this.path.area = true;
   }
 
   // --- paths -----------------------------------------------------------------------------------
   beginPath(): void {
-    this.path = [];
-    this.pathBounds = null;
+    this.path = emptyPath();
   }
 
   moveTo(x: number, y: number): void {
     if (!Number.isFinite(x) || !Number.isFinite(y)) return;
     const [px, py] = this.point(x, y);
-    this.path.push(`M${num(px)} ${num(py)}`);
+    this.path.d.push(`M${num(px)} ${num(py)}`);
+    this.path.run = { ax: px, ay: py, last: null, dropped: [] };
+    this.path.points = 1;
     this.grow(px, py);
   }
 
   lineTo(x: number, y: number): void {
     if (!Number.isFinite(x) || !Number.isFinite(y)) return;
     const [px, py] = this.point(x, y);
-    this.path.push(this.path.length === 0 ? `M${num(px)} ${num(py)}` : `L${num(px)} ${num(py)}`);
+    const path = this.path;
     this.grow(px, py);
+    if (path.d.length === 0) {
+      path.d.push(`M${num(px)} ${num(py)}`);
+      path.run = { ax: px, ay: py, last: null, dropped: [] };
+      path.points = 1;
+      return;
+    }
+    const run = path.run;
+    const command = `L${num(px)} ${num(py)}`;
+    if (run) {
+      const [lx, ly] = run.last ?? [run.ax, run.ay];
+      // The same point again (as written): a segment of no length draws nothing.
+      if (num(lx) === num(px) && num(ly) === num(py)) return;
+      if (run.last && this.mayDrop(run, px, py)) {
+        run.dropped.push(lx, ly);
+        run.last = [px, py];
+        path.d[path.d.length - 1] = command;
+        return;
+      }
+      if (run.last) path.run = { ax: lx, ay: ly, last: [px, py], dropped: [] };
+      else run.last = [px, py];
+    } else {
+      path.run = { ax: px, ay: py, last: null, dropped: [] };
+    }
+    path.d.push(command);
+    path.points += 1;
+    if (path.points >= 3) path.area = true;
+  }
+
+  /** Whether the run's last point and every point dropped before it lie within the tolerance of the segment from its start to (px, py). */
+  private mayDrop(run: NonNullable<PathState['run']>, px: number, py: number): boolean {
+    const [lx, ly] = run.last!;
+    if (segmentDistance(lx, ly, run.ax, run.ay, px, py) > SIMPLIFY_TOLERANCE) return false;
+    for (let i = 0; i < run.dropped.length; i += 2) {
+      if (segmentDistance(run.dropped[i]!, run.dropped[i + 1]!, run.ax, run.ay, px, py) > SIMPLIFY_TOLERANCE) return false;
+    }
+    return true;
   }
 
   closePath(): void {
-    if (this.path.length > 0) this.path.push('Z');
+    if (this.path.d.length > 0) this.path.d.push('Z');
+    // The current point is the subpath's start again, which the next line must not drop.
+    this.path.run = null;
   }
 
   rect(x: number, y: number, w: number, h: number): void {
@@ -238,7 +330,7 @@ export class SvgCanvasContext {
     const [a, b] = this.point(c1x, c1y);
     const [c, d] = this.point(c2x, c2y);
     const [e, f] = this.point(x, y);
-    this.path.push(`C${num(a)} ${num(b)} ${num(c)} ${num(d)} ${num(e)} ${num(f)}`);
+    this.curveTo(`C${num(a)} ${num(b)} ${num(c)} ${num(d)} ${num(e)} ${num(f)}`, e, f);
     this.grow(a, b);
     this.grow(c, d);
     this.grow(e, f);
@@ -247,7 +339,7 @@ export class SvgCanvasContext {
   quadraticCurveTo(cx: number, cy: number, x: number, y: number): void {
     const [a, b] = this.point(cx, cy);
     const [e, f] = this.point(x, y);
-    this.path.push(`Q${num(a)} ${num(b)} ${num(e)} ${num(f)}`);
+    this.curveTo(`Q${num(a)} ${num(b)} ${num(e)} ${num(f)}`, e, f);
     this.grow(a, b);
     this.grow(e, f);
   }
@@ -263,12 +355,12 @@ export class SvgCanvasContext {
     if (Math.abs(end - start) >= 2 * Math.PI) sweep = counterclockwise ? -2 * Math.PI : 2 * Math.PI;
     const at = (angle: number) => this.point(x + radius * Math.cos(angle), y + radius * Math.sin(angle));
     const [sx, sy] = at(start);
-    this.path.push(this.path.length === 0 ? `M${num(sx)} ${num(sy)}` : `L${num(sx)} ${num(sy)}`);
+    this.path.d.push(this.path.d.length === 0 ? `M${num(sx)} ${num(sy)}` : `L${num(sx)} ${num(sy)}`);
     const flag = sweep > 0 ? 1 : 0;
     const steps = Math.abs(sweep) > Math.PI ? 2 : 1;
     for (let k = 1; k <= steps; k++) {
       const [ex, ey] = at(start + (sweep * k) / steps);
-      this.path.push(`A${num(r)} ${num(r)} 0 0 ${flag} ${num(ex)} ${num(ey)}`);
+      this.curveTo(`A${num(r)} ${num(r)} 0 0 ${flag} ${num(ex)} ${num(ey)}`, ex, ey);
     }
     const [cx, cy] = this.point(x, y);
     this.grow(cx, cy, r);
@@ -278,7 +370,7 @@ export class SvgCanvasContext {
   /** Clips to the bounding box of the current path, or of `path` when given (chart.js clips to rectangles only). */
   clip(path?: unknown): void {
     if (path !== undefined && typeof path !== 'string') return this.withPath(path, () => this.clip());
-    const b = this.pathBounds;
+    const b = this.path.bounds;
     if (!b) return;
     const c = this.state.clip;
     this.state.clip = c ? { x0: Math.max(c.x0, b.x0), y0: Math.max(c.y0, b.y0), x1: Math.min(c.x1, b.x1), y1: Math.min(c.y1, b.y1) } : b;
@@ -320,19 +412,21 @@ export class SvgCanvasContext {
    */
   private withPath(path: unknown, paint: () => void): void {
     if (!(path instanceof RecordedPath)) throw new Error('The report chart canvas was given a path it cannot read (draw through chartSvg, which lends its own Path2D).');
-    const [saved, bounds] = [this.path, this.pathBounds];
+    const saved = this.path;
     this.beginPath();
     for (const { name, args } of path.calls) (this[name] as (...a: (number | boolean)[]) => void)(...args);
     paint();
     this.path = saved;
-    this.pathBounds = bounds;
   }
 
   // --- painting --------------------------------------------------------------------------------
-  private flushStroke(): void {
+  /** Writes the open fill or stroke element, if any. */
+  private flushPending(): void {
+    const f = this.pendingFill;
+    if (f) this.emit(`<path fill=${f.attrs} d="${f.d}"/>`, f.clip);
+    this.pendingFill = null;
     const s = this.pendingStroke;
-    if (!s) return;
-    this.emit(`<path fill="none"${s.attrs} d="${s.d.join('')}"/>`, s.clip);
+    if (s) this.emit(`<path fill="none"${s.attrs} d="${s.d.join('')}"/>`, s.clip);
     this.pendingStroke = null;
   }
 
@@ -345,19 +439,21 @@ export class SvgCanvasContext {
   /** Fills the current path, or `path` when given (a fill rule such as 'evenodd' is accepted and ignored). */
   fill(path?: unknown): void {
     if (path !== undefined && typeof path !== 'string') return this.withPath(path, () => this.fill());
-    if (this.path.length === 0 || !this.pathBounds) return;
-    // Nothing to fill in a path without area (chart.js fills the line samples of a legend too).
-    if (this.pathBounds.x1 - this.pathBounds.x0 < 1e-9 || this.pathBounds.y1 - this.pathBounds.y0 < 1e-9) return;
+    const b = this.path.bounds;
+    // Nothing to fill in a path without area (chart.js fills the line samples of a legend and its cross markers too).
+    if (this.path.d.length === 0 || !b || !this.path.area) return;
+    if (b.x1 - b.x0 < 1e-9 || b.y1 - b.y0 < 1e-9) return;
     const paint = svgPaint(this.state.fillStyle);
     if (paint.opacity * this.state.globalAlpha === 0) return;
-    this.flushStroke();
-    this.emit(`<path fill=${this.paint(this.state.fillStyle).replace(' opacity=', ' fill-opacity=')} d="${this.path.join('')}"/>`, this.clipFor(this.pathBounds));
+    this.flushPending();
+    this.pendingFill = { attrs: this.paint(this.state.fillStyle).replace(' opacity=', ' fill-opacity='), d: this.path.d.join(''), clip: this.clipFor(b) };
   }
 
   /** Strokes the current path, or `path` when given. */
   stroke(path?: unknown): void {
     if (path !== undefined) return this.withPath(path, () => this.stroke());
-    if (this.path.length === 0 || !this.pathBounds) return;
+    const b = this.path.bounds;
+    if (this.path.d.length === 0 || !b) return;
     const paint = svgPaint(this.state.strokeStyle);
     if (paint.opacity * this.state.globalAlpha === 0) return;
     const m = this.state.transform;
@@ -366,35 +462,38 @@ export class SvgCanvasContext {
     const s = this.state;
     const dash = s.dash.length > 0 ? ` stroke-dasharray="${s.dash.map((d) => num(d * scale)).join(' ')}"${s.dashOffset ? ` stroke-dashoffset="${num(s.dashOffset * scale)}"` : ''}` : '';
     const attrs = ` stroke=${this.paint(s.strokeStyle).replace(' opacity=', ' stroke-opacity=')} stroke-width="${num(width)}"${s.lineCap !== 'butt' ? ` stroke-linecap="${s.lineCap}"` : ''}${s.lineJoin !== 'miter' ? ` stroke-linejoin="${s.lineJoin}"` : ''}${dash}`;
-    const b = this.pathBounds;
     const clip = this.clipFor({ x0: b.x0 - width / 2, y0: b.y0 - width / 2, x1: b.x1 + width / 2, y1: b.y1 + width / 2 });
+    const d = this.path.d.join('');
+    const fill = this.pendingFill;
+    if (fill && fill.d === d && fill.clip === clip) {
+      // The path just filled, now stroked: one element, painted fill first as on the canvas.
+      this.pendingFill = null;
+      this.emit(`<path fill=${fill.attrs}${attrs} d="${d}"/>`, clip);
+      return;
+    }
     const pending = this.pendingStroke;
     // Dashes restart at each subpath, as on a canvas, so joining dashed strokes is exact too.
-    if (pending && pending.attrs === attrs && pending.clip === clip) pending.d.push(this.path.join(''));
+    if (pending && pending.attrs === attrs && pending.clip === clip) pending.d.push(d);
     else {
-      this.flushStroke();
-      this.pendingStroke = { attrs, d: [this.path.join('')], clip };
+      this.flushPending();
+      this.pendingStroke = { attrs, d: [d], clip };
     }
   }
 
   fillRect(x: number, y: number, w: number, h: number): void {
     const path = this.path;
-    const bounds = this.pathBounds;
     this.beginPath();
     this.rect(x, y, w, h);
     this.fill();
     this.path = path;
-    this.pathBounds = bounds;
   }
 
   strokeRect(x: number, y: number, w: number, h: number): void {
     const path = this.path;
-    const bounds = this.pathBounds;
     this.beginPath();
     this.rect(x, y, w, h);
     this.stroke();
     this.path = path;
-    this.pathBounds = bounds;
   }
 
   clearRect(): void {
@@ -413,7 +512,7 @@ export class SvgCanvasContext {
     if (value === '' || !Number.isFinite(x) || !Number.isFinite(y)) return;
     const paint = svgPaint(this.state.fillStyle);
     if (paint.opacity * this.state.globalAlpha === 0) return;
-    this.flushStroke();
+    this.flushPending();
     const { size, bold } = parseFont(this.state.font);
     const face = bold ? this.fonts.primary.bold : this.fonts.primary.normal;
     const width = textWidth(value, this.fonts, bold) * size;
@@ -444,7 +543,7 @@ export class SvgCanvasContext {
 
   /** The drawing as an SVG document of the canvas size (CSS pixels = points in the report). */
   toSvg(): string {
-    this.flushStroke();
+    this.flushPending();
     const close = this.openClip === '' ? '' : '</svg>';
     return `<svg xmlns="http://www.w3.org/2000/svg" width="${num(this.canvas.width)}" height="${num(this.canvas.height)}" viewBox="0 0 ${num(this.canvas.width)} ${num(this.canvas.height)}">${this.body.join('')}${close}</svg>`;
   }

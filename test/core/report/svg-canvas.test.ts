@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { analyzeProject } from '../../../core/analysis.ts';
 import { loadDeflectionChart } from '../../../core/charts/load-deflection.ts';
 import { chartSvg } from '../../../core/report/chart-svg.ts';
-import { RecordedPath, parseFont, svgPaint, SvgCanvasContext } from '../../../core/report/svg-canvas.ts';
+import { RecordedPath, SIMPLIFY_TOLERANCE, parseFont, svgPaint, SvgCanvasContext } from '../../../core/report/svg-canvas.ts';
 import { reportTestProject } from './fixtures.ts';
 import { testFontSet } from './report-fonts.ts';
 
@@ -125,6 +125,81 @@ describe('SvgCanvasContext', () => {
     ctx.fillText('Beam קורה', 0, 20);
     const texts = [...ctx.toSvg().matchAll(/<text[^>]*font-family="([^"]+)"[^>]*font-weight="bold"[^>]*>([^<]*)<\/text>/g)].map((m) => `${m[1]}:${m[2]}`);
     expect(texts).toEqual(['Roboto:Beam ', 'NotoSansHebrew:קורה']);
+  });
+
+  it('writes a fill and a stroke of the same path as one element, and leaves out fills without area', () => {
+    const ctx = new SvgCanvasContext(100, 100, fonts);
+    ctx.fillStyle = 'rgba(35, 100, 170, 0.85)';
+    ctx.strokeStyle = '#2364aa';
+    ctx.lineWidth = 1.4;
+    // A triangle marker: filled, then outlined (as chart.js draws a point).
+    ctx.beginPath();
+    ctx.moveTo(10, 10);
+    ctx.lineTo(20, 10);
+    ctx.lineTo(15, 20);
+    ctx.closePath();
+    ctx.fill();
+    ctx.stroke();
+    // A cross marker: two bare lines, "filled" then stroked — the fill has no area.
+    ctx.beginPath();
+    ctx.moveTo(40, 40);
+    ctx.lineTo(50, 50);
+    ctx.moveTo(50, 40);
+    ctx.lineTo(40, 50);
+    ctx.fill();
+    ctx.stroke();
+    // A fill followed by the stroke of another path stays two elements.
+    ctx.fillRect(60, 60, 10, 10);
+    ctx.beginPath();
+    ctx.moveTo(60, 80);
+    ctx.lineTo(90, 80);
+    ctx.stroke();
+    expect(ctx.toSvg()).toBe('<svg xmlns="http://www.w3.org/2000/svg" width="100" height="100" viewBox="0 0 100 100">'
+      + '<path fill="#2364aa" fill-opacity="0.85" stroke="#2364aa" stroke-width="1.4" d="M10 10L20 10L15 20Z"/>'
+      + '<path fill="none" stroke="#2364aa" stroke-width="1.4" d="M40 40L50 50M50 40L40 50"/>'
+      + '<path fill="#2364aa" fill-opacity="0.85" d="M60 60L70 60L70 70L60 70Z"/>'
+      + '<path fill="none" stroke="#2364aa" stroke-width="1.4" d="M60 80L90 80"/></svg>');
+  });
+
+  it('drops polyline points that would move the line by less than the tolerance, and only those', () => {
+    const ctx = new SvgCanvasContext(400, 200, fonts);
+    ctx.beginPath();
+    ctx.moveTo(0, 100);
+    ctx.lineTo(0, 100); // the same point again
+    ctx.lineTo(50, 100.02); // 0.02 from the chord 0,100 → 100,100
+    ctx.lineTo(100, 100);
+    ctx.lineTo(150, 100.2); // 0.2: a real bend, kept
+    ctx.lineTo(200, 100);
+    ctx.lineTo(200, 50); // a corner, kept
+    ctx.lineTo(200, 150); // going back over the same line: kept (the point is not between its neighbours)
+    ctx.stroke();
+    const d = /d="([^"]+)"/.exec(ctx.toSvg())![1];
+    expect(d).toBe('M0 100L100 100L150 100.2L200 100L200 50L200 150');
+  });
+
+  it('never lets dropped points drift: each is checked against the segment that replaces it', () => {
+    // A slow arc: each point is within the tolerance of the chord of its two neighbours, but the
+    // arc as a whole bends far more; the written polyline must stay within the tolerance of every point.
+    const points = Array.from({ length: 400 }, (_, i) => {
+      const a = (i / 399) * (Math.PI / 2);
+      return [200 + 150 * Math.cos(a), 180 - 150 * Math.sin(a)] as const;
+    });
+    const ctx = new SvgCanvasContext(400, 200, fonts);
+    ctx.beginPath();
+    ctx.moveTo(points[0]![0], points[0]![1]);
+    for (const [x, y] of points.slice(1)) ctx.lineTo(x, y);
+    ctx.stroke();
+    const kept = [...(/d="([^"]+)"/.exec(ctx.toSvg())![1]!).matchAll(/[ML]([-\d.]+) ([-\d.]+)/g)].map((m) => [Number(m[1]), Number(m[2])] as const);
+    expect(kept.length).toBeLessThan(points.length / 2);
+    expect(kept.length).toBeGreaterThan(10);
+    const distance = ([px, py]: readonly [number, number]) => Math.min(...kept.slice(1).map(([bx, by], i) => {
+      const [ax, ay] = kept[i]!;
+      const [dx, dy] = [bx - ax, by - ay];
+      const t = Math.max(0, Math.min(1, ((px - ax) * dx + (py - ay) * dy) / (dx * dx + dy * dy)));
+      return Math.hypot(px - ax - t * dx, py - ay - t * dy);
+    }));
+    // 0.0005: the 3-decimal rounding of the written coordinates.
+    for (const p of points) expect(distance(p)).toBeLessThanOrEqual(SIMPLIFY_TOLERANCE + 0.0005);
   });
 
   it('reads CSS colours and fonts', () => {

@@ -56,7 +56,7 @@ export type ChartFormat = 'svg' | 'png';
 export interface ImageOptions {
   /** Chart format (default and `auto`: `svg`). */
   readonly format?: ChartFormat | 'auto';
-  /** Worker threads for drawing charts: 0 draws on this thread (default: 0 below 40 charts, else one per core). */
+  /** Worker threads drawing charts beside this thread: 0 draws on this thread alone (default: 0 below 40 charts, else one per other core). */
   readonly workers?: number;
 }
 
@@ -77,10 +77,11 @@ export async function renderReportImages(options: Pick<ReportOptions, 'project' 
     else jobs.push({ id, spec: figure.spec, width: figure.width, height: figure.height, format });
   }
   const workers = imageOptions.workers ?? (jobs.length >= WORKER_THRESHOLD ? chartWorkerCount(jobs.length) : 0);
+  const drawHere = (job: ChartJob) => (job.format === 'svg' ? renderChartSvg(job.spec, job.width, job.height) : renderChartPng(job.spec, job.width, job.height));
   if (workers > 0) {
-    Object.assign(images, await renderChartsInWorkers(jobs, workers));
+    Object.assign(images, await renderChartsInWorkers(jobs, workers, drawHere));
   } else {
-    for (const job of jobs) images[job.id] = job.format === 'svg' ? renderChartSvg(job.spec, job.width, job.height) : await renderChartPng(job.spec, job.width, job.height);
+    for (const job of jobs) images[job.id] = await drawHere(job);
   }
   // Figure order, whatever order the workers finished in.
   return Object.fromEntries(Object.keys(figures).map((id) => [id, images[id]!]));

@@ -169,9 +169,17 @@ function forEachConcretePoint(model: SectionModel, eps0: number, phi: number, vi
  */
 export function elementStress(element: SectionModel['elements'][number], eps: number): number {
   let stress = element.material.stress(eps - element.initialStrain);
-  if (element.displacedConcrete) {
-    const concrete = element.displacedConcrete.stress(eps);
-    if (concrete > 0) stress -= concrete;
+  const displaced = element.displacedConcrete;
+  if (displaced) {
+    // The concrete's law read through its table (law-table.ts), as the concrete parts read it.
+    // Nothing to take away where the concrete carries nothing (cracked, crushed: zeroRangeOf).
+    const zero = zeroRangeOf(displaced);
+    if (eps > zero.tensionBelow && eps < zero.compressionAbove) {
+      const table = tabulatedLaw(displaced, splitStrains(displaced));
+      const branch = table.branchOf(eps);
+      const concrete = branch >= 0 ? table.stressIn(eps, branch) : displaced.stress(eps);
+      if (concrete > 0) stress -= concrete;
+    }
   }
   return stress;
 }
@@ -276,12 +284,10 @@ function integratePart(model: SectionModel, part: ConcretePart, eps0: number, ph
       if (!(half > 1e-12)) continue;
       const mid = 0.5 * (a + b);
       const epsMid = eps0 + phi * (yg - mid);
-      if (phi !== 0) {
-        // Skip pieces where the material carries nothing (strain is linear over the piece).
-        const ea = eps0 + phi * (yg - a);
-        const eb = eps0 + phi * (yg - b);
-        if ((ea > eb ? ea : eb) <= tensionBelow || (ea < eb ? ea : eb) >= compressionAbove) continue;
-      }
+      // Skip pieces where the material carries nothing. A piece lies inside one branch of the law or
+      // wholly inside a range where it carries nothing, so its mid-point decides (the strains at its
+      // ends, recomputed from depths, may fall a rounding error outside the range).
+      if (epsMid <= tensionBelow || epsMid >= compressionAbove) continue;
       // The piece lies inside one branch of the law: read it from the law's table (law-table.ts).
       const branch = table.branchOf(epsMid);
       // A piece spanning much of a rational branch is cut into equal parts (law-table.ts piecesFor):

@@ -6,7 +6,7 @@
  */
 import { parseProject, serializeProject } from '../../core/project/file.ts';
 import { projectFileStem } from '../../core/project/file-stem.ts';
-import { applyImport, describeImportedItem, planImport, type CsvSource, type ImportPlan } from '../../core/project/import.ts';
+import { applyImport, describeImportedItem, importCountText, planImport, type CsvSource, type ImportPlan } from '../../core/project/import.ts';
 import { starterProject } from '../../core/project/starter.ts';
 import type { Project } from '../../core/project/types.ts';
 import { displaySystem, unitLabel } from '../../core/units/index.ts';
@@ -16,13 +16,7 @@ import { diagnosticLines, problemCount } from './format.ts';
 import type { CliIo } from './io.ts';
 
 const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
-
-/** Members of each kind in a list of items: `3 members and 1 continuous member`. */
-function countText(items: ImportPlan['items']): string {
-  const single = items.filter((i) => i.kind === 'member').length;
-  const continuous = items.length - single;
-  return [single > 0 || continuous === 0 ? plural(single, 'member') : '', continuous > 0 ? plural(continuous, 'continuous member') : ''].filter((t) => t !== '').join(' and ');
-}
+const countText = importCountText;
 
 /**
  * The report of a plan: per file, each member read (its rows, id, name and what it brings, or

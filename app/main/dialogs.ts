@@ -37,6 +37,16 @@ export function createElectronDialogs(getWindow: WindowGetter): HostDialogs {
           { name: 'All files', extensions: ['*'] },
         ],
       }),
+    chooseCsvToOpen: (defaultFolder) =>
+      showOpen(getWindow(), {
+        title: 'Import members from CSV',
+        defaultPath: defaultFolder,
+        properties: ['openFile'],
+        filters: [
+          { name: 'CSV files', extensions: ['csv', 'txt'] },
+          { name: 'All files', extensions: ['*'] },
+        ],
+      }),
     chooseProjectSavePath: (defaultPath) =>
       showSave(getWindow(), {
         title: 'Save project',

@@ -35,6 +35,8 @@ export class HostError extends Error {
 export interface HostDialogs {
   /** Absolute path of the project the user picked, or null when cancelled. */
   chooseProjectToOpen(defaultFolder: string): Promise<string | null>;
+  /** Absolute path of the CSV file (member or span list) the user picked, or null when cancelled. */
+  chooseCsvToOpen(defaultFolder: string): Promise<string | null>;
   /** Absolute path to save the project to, or null when cancelled. */
   chooseProjectSavePath(defaultPath: string): Promise<string | null>;
   /** Absolute path for an exported file of `type`, or null when cancelled. */
@@ -84,14 +86,37 @@ export function describeFileError(error: unknown): string {
   }
 }
 
-function decodeProjectText(bytes: Uint8Array, name: string): string {
+function decodeProjectText(bytes: Uint8Array, name: string, what = 'a Hingeline project'): string {
   let text: string;
   try {
     text = new TextDecoder('utf-8', { fatal: true }).decode(bytes);
   } catch {
-    throw new HostError(`“${name}” is not a Hingeline project: it is not UTF-8 text.`);
+    throw new HostError(`“${name}” is not ${what}: it is not UTF-8 text.`);
   }
   return text.startsWith('\uFEFF') ? text.slice(1) : text;
+}
+
+/**
+ * Reads a project or CSV file as UTF-8 text (byte-order mark removed). Rejects with a HostError for a
+ * missing, oversized (over 64 MB), non-file or non-UTF-8 path.
+ */
+async function readTextFile(path: string, kind: 'project' | 'CSV'): Promise<{ name: string; text: string }> {
+  const name = basename(path);
+  let bytes: Uint8Array;
+  try {
+    const info = await stat(path);
+    if (!info.isFile()) throw new HostError(`“${name}” cannot be opened: it is not a file.`);
+    if (info.size > MAX_PROJECT_FILE_BYTES) {
+      throw new HostError(`“${name}” is ${Math.round(info.size / 1024 / 1024)} MB; ${kind} files larger than ${MAX_PROJECT_FILE_BYTES / 1024 / 1024} MB are refused.`);
+    }
+    bytes = await readFile(path);
+  } catch (error) {
+    if (error instanceof HostError) throw error;
+    throw new HostError(`“${name}” cannot be opened: ${describeFileError(error)}.`);
+  }
+  const text = decodeProjectText(bytes, name, kind === 'project' ? 'a Hingeline project' : 'a CSV file Hingeline reads');
+  if (text.length > IPC_LIMITS.projectTextChars) throw new HostError(`“${name}” is too large to open.`);
+  return { name, text };
 }
 
 export class HostService {
@@ -115,21 +140,7 @@ export class HostService {
    * HostError for a missing, oversized, non-file or non-UTF-8 path.
    */
   async openPath(path: string): Promise<OpenedFilePayload> {
-    const name = basename(path);
-    let bytes: Uint8Array;
-    try {
-      const info = await stat(path);
-      if (!info.isFile()) throw new HostError(`“${name}” cannot be opened: it is not a file.`);
-      if (info.size > MAX_PROJECT_FILE_BYTES) {
-        throw new HostError(`“${name}” is ${Math.round(info.size / 1024 / 1024)} MB; project files larger than ${MAX_PROJECT_FILE_BYTES / 1024 / 1024} MB are refused.`);
-      }
-      bytes = await readFile(path);
-    } catch (error) {
-      if (error instanceof HostError) throw error;
-      throw new HostError(`“${name}” cannot be opened: ${describeFileError(error)}.`);
-    }
-    const text = decodeProjectText(bytes, name);
-    if (text.length > IPC_LIMITS.projectTextChars) throw new HostError(`“${name}” is too large to open.`);
+    const { name, text } = await readTextFile(path, 'project');
     await this.deps.grants.grant(path);
     this.lastFolder = dirname(path);
     await this.remember(path);
@@ -140,6 +151,18 @@ export class HostService {
   async openProject(): Promise<OpenedFilePayload | null> {
     const path = await this.deps.dialogs.chooseProjectToOpen(this.lastFolder);
     return path === null ? null : this.openPath(path);
+  }
+
+  /**
+   * Shows the open dialog for a CSV file and reads it; null when cancelled. Read only: the path is
+   * not granted for writing and does not join the recent projects.
+   */
+  async openCsv(): Promise<OpenedFilePayload | null> {
+    const path = await this.deps.dialogs.chooseCsvToOpen(this.lastFolder);
+    if (path === null) return null;
+    const { name, text } = await readTextFile(path, 'CSV');
+    this.lastFolder = dirname(path);
+    return { name, path, text };
   }
 
   /** Opens an entry of the recent list (and only those); a vanished file leaves the list. */

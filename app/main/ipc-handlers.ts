@@ -78,6 +78,10 @@ export function registerHostIpc(ipcMain: IpcMainLike, service: HostService, opti
     const { path } = checked(validateOpenRecentRequest(args[0]));
     return service.openRecent(path);
   }));
+  ipcMain.handle(IpcChannel.openCsv, guard(IpcChannel.openCsv, options, (args) => {
+    noArguments(args, IpcChannel.openCsv);
+    return service.openCsv();
+  }));
   ipcMain.handle(IpcChannel.recentFiles, guard(IpcChannel.recentFiles, options, (args) => {
     noArguments(args, IpcChannel.recentFiles);
     return service.recentFiles();

@@ -111,6 +111,8 @@ export function menuTemplate(context: MenuContext, actions: MenuActions): MenuIt
       separator,
       item('Export &report (PDF)…', 'export-report'),
       item('Export results (&CSV)…', 'export-csv'),
+      separator,
+      item('&Import members from CSV…', 'import-csv'),
       ...quit,
     ],
   };

@@ -74,6 +74,9 @@ export function createBridge(ipc: IpcRendererLike): HingelineBridge {
       const checkedPath = required(validateAbsolutePath(path, 'path'));
       return nullable(await ipc.invoke(IpcChannel.openRecent, { path: checkedPath }), validateOpenedFile);
     },
+    async openCsv() {
+      return nullable(await ipc.invoke(IpcChannel.openCsv), validateOpenedFile);
+    },
     async recentFiles() {
       return required(validateRecentList(await ipc.invoke(IpcChannel.recentFiles)));
     },

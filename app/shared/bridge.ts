@@ -65,6 +65,7 @@ export interface DocumentStatePayload {
 export interface HingelineBridge {
   openProject(): Promise<OpenedFilePayload | null>;
   openRecent(path: string): Promise<OpenedFilePayload | null>;
+  openCsv(): Promise<OpenedFilePayload | null>;
   recentFiles(): Promise<string[]>;
   saveProject(text: string, options: SaveProjectOptions): Promise<SavedFilePayload | null>;
   exportFile(data: Uint8Array | string, options: ExportFileOptions): Promise<SavedFilePayload | null>;

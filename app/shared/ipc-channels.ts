@@ -9,6 +9,7 @@
 export const IpcChannel = {
   openProject: 'hingeline:open-project',
   openRecent: 'hingeline:open-recent',
+  openCsv: 'hingeline:open-csv',
   recentFiles: 'hingeline:recent-files',
   saveProject: 'hingeline:save-project',
   exportFile: 'hingeline:export-file',
@@ -26,6 +27,7 @@ export type IpcChannelName = (typeof IpcChannel)[keyof typeof IpcChannel];
 export const INVOKE_CHANNELS = [
   IpcChannel.openProject,
   IpcChannel.openRecent,
+  IpcChannel.openCsv,
   IpcChannel.recentFiles,
   IpcChannel.saveProject,
   IpcChannel.exportFile,

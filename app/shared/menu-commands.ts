@@ -12,6 +12,7 @@ export const MENU_COMMANDS = [
   'save-as',
   'export-report',
   'export-csv',
+  'import-csv',
   'undo',
   'redo',
   'about',

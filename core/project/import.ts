@@ -146,6 +146,15 @@ export function applyImport(project: Project, plan: ImportPlan, options: { keepG
   return { project: withItems(project, added), added };
 }
 
+const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
+
+/** How many of each kind: `3 members`, `1 continuous member`, `2 members and 1 continuous member`. */
+export function importCountText(items: readonly ImportedItem[]): string {
+  const single = items.filter((i) => i.kind === 'member').length;
+  const continuous = items.length - single;
+  return [single > 0 || continuous === 0 ? plural(single, 'member') : '', continuous > 0 ? plural(continuous, 'continuous member') : ''].filter((t) => t !== '').join(' and ');
+}
+
 const SUPPORTS: Readonly<Record<MemberDefinition['supports'], string>> = {
   'simply-supported': 'simply supported',
   cantilever: 'cantilever',
@@ -165,7 +174,7 @@ export function describeImportedItem(item: ImportedItem, system: UnitSystem): st
   for (const load of d.loads) if (load.kind === 'uniform') byCase.set(load.loadCase, [...(byCase.get(load.loadCase) ?? []), load.magnitude]);
   const loads = [...byCase].map(([loadCase, values]) => {
     const distinct = [...new Set(values)];
-    return `${loadCase} ${distinct.map((w) => formatQuantity('lineLoad', w, units)).join(' / ')}`;
+    return `${loadCase} ${distinct.map((w) => formatQuantity('lineLoad', w, units, { sigFigs: 3 })).join(' / ')}`;
   });
   const selfWeight = d.includeSelfWeight === false ? '' : ' (self-weight added)';
   const loadText = loads.length > 0 ? `${loads.join(', ')}${selfWeight}` : `no loads given${selfWeight}`;

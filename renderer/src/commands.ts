@@ -16,6 +16,8 @@ import { useAnalysisStore } from './stores/analysis.ts';
 import { ProjectFileError, useDocumentStore } from './stores/document.ts';
 import { useWorkspaceStore } from './stores/workspace.ts';
 import { exportReport } from './report/export-report.ts';
+import type { ImportedItem, ImportSources } from '../../core/project/import.ts';
+import type { CsvKind } from './project/import-preview.ts';
 
 /** A diagnostic as one line, `members[3] "B-12" span: must be …` (the file-level wording of core/project). */
 function describeDiagnostic(d: Diagnostic): string {
@@ -173,6 +175,53 @@ export function useCommands() {
     }
   }
 
+  /**
+   * Imports members from a CSV file into the open project: the preview (importDialog) shows every
+   * row and problem first; the import is one undoable edit. Nothing changes on Cancel, and with
+   * errors nothing is imported unless the user chooses to import the members without errors.
+   */
+  async function importCsv(): Promise<void> {
+    if (!documentStore.project) {
+      workspace.notify('error', 'Open or create a project first: imported members join the project that is open.');
+      return;
+    }
+    let file: OpenedFile | null;
+    try {
+      file = await host.openCsv();
+    } catch (error) {
+      fail('The CSV file could not be read', error);
+      return;
+    }
+    if (!file) return;
+    // Loaded on first use: the import validates like a project file (zod), which stays out of the page's bundle.
+    const [{ applyImport, importCountText, planImport }, { csvKindOf, importDialog }] = await Promise.all([import('../../core/project/import.ts'), import('./project/import-preview.ts')]);
+    let kind: CsvKind = csvKindOf(file.text);
+    for (;;) {
+      const current = documentStore.project;
+      if (!current) return;
+      const sources: ImportSources = { [kind]: { name: file.name, text: file.text } };
+      const plan = planImport(current, sources);
+      const choice = await workspace.ask(importDialog(plan, current.info.unitSystem, file.name, kind, current.members.length + (current.continuousMembers?.length ?? 0)));
+      if (choice === 'switch') {
+        kind = kind === 'members' ? 'spans' : 'members';
+        continue;
+      }
+      if (choice !== 'import' && choice !== 'import-good') return;
+      let added: readonly ImportedItem[] = [];
+      documentStore.edit(`Import from ${file.name}`, (p) => {
+        // The project may have changed while the dialog was open (an autosave does not, an edit would).
+        const applied = applyImport(p, p === current ? plan : planImport(p, sources), { keepGoodRows: choice === 'import-good' });
+        added = applied?.added ?? [];
+        return applied?.project ?? p;
+      });
+      if (added.length === 0) return;
+      workspace.resetForDocument();
+      workspace.showOverview();
+      workspace.notify('success', `${importCountText(added)} imported from ${file.name}. Undo (Ctrl+Z) takes the import back.`, 7000);
+      return;
+    }
+  }
+
   async function exportPdf(scope?: 'member' | 'project'): Promise<void> {
     if (!documentStore.project) return;
     // A continuous beam has no member report yet (the report's chapter for it is to come): the project's.
@@ -322,6 +371,7 @@ export function useCommands() {
       case 'save-as': return save(true);
       case 'export-report': return exportPdf();
       case 'export-csv': return exportCsv();
+      case 'import-csv': return importCsv();
       case 'undo': return undo();
       case 'redo': return redo();
       case 'about': return about();
@@ -331,5 +381,5 @@ export function useCommands() {
     }
   }
 
-  return { run, shortcuts, open, openFile, openRecent, openDemo, createNew, save, exportCsv, exportPdf, undo, redo, addNewMember, duplicate, remove, addContinuous, duplicateContinuous, removeContinuous, about, confirmDiscard };
+  return { run, shortcuts, open, openFile, openRecent, openDemo, createNew, save, exportCsv, importCsv, exportPdf, undo, redo, addNewMember, duplicate, remove, addContinuous, duplicateContinuous, removeContinuous, about, confirmDiscard };
 }

@@ -25,6 +25,7 @@ export function createElectronHost(bridge: HostBridge): HostApi {
     kind: 'electron',
     openProject: () => unwrap(() => bridge.openProject()),
     openRecent: (path) => unwrap(() => bridge.openRecent(path)),
+    openCsv: () => unwrap(() => bridge.openCsv()),
     recentFiles: () => unwrap(() => bridge.recentFiles()),
     saveProject: (text, options) => unwrap(() => bridge.saveProject(text, options)),
     exportFile: (data, options) => unwrap(() => bridge.exportFile(data, options)),

@@ -21,6 +21,7 @@
 import { eventChannel } from './event-channel.ts';
 import type { HostApi, MenuCommand, OpenedFile } from './host-api.ts';
 import { EXPORT_EXTENSIONS, PROJECT_EXTENSION } from './host-api.ts';
+import { pickCsvFile } from './web-files.ts';
 import { listenForShortcuts } from './web-host.ts';
 
 export interface FakeHostSeed {
@@ -28,6 +29,12 @@ export interface FakeHostSeed {
   kind?: 'electron' | 'web';
   /** Answers to successive `openProject()` dialogs; null means cancel. Empty queue: cancel. */
   openQueue?: Array<OpenedFile | null>;
+  /**
+   * Answers to successive `openCsv()` dialogs: a file, null to cancel, or 'input' to show the
+   * browser's real <input type=file> (end-to-end tests answer it with the page's file chooser).
+   * Empty queue: cancel.
+   */
+  csvQueue?: Array<OpenedFile | null | 'input'>;
   /** Answers to successive save dialogs: a path to save to, or null to cancel. Empty: save under the suggested name. */
   saveAsQueue?: Array<string | null>;
   /** Files that exist, by path (used by `openRecent` and filled by saves). */
@@ -83,6 +90,7 @@ function clone<T>(value: T): T {
 export function createFakeHost(seed: FakeHostSeed = {}): FakeHost {
   const openQueue = [...(seed.openQueue ?? [])];
   const saveAsQueue = [...(seed.saveAsQueue ?? [])];
+  const csvQueue = [...(seed.csvQueue ?? [])];
   const files = new Map(Object.entries(seed.files ?? {}));
   let recent = [...(seed.recent ?? [])];
   const commands = eventChannel<MenuCommand>();
@@ -118,6 +126,15 @@ export function createFakeHost(seed: FakeHostSeed = {}): FakeHost {
       record('openProject');
       const next = openQueue.shift() ?? null;
       if (next?.path) remember(next.path);
+      return next ? { ...next } : null;
+    },
+    async openCsv() {
+      record('openCsv');
+      const next = csvQueue.shift() ?? null;
+      if (next === 'input') {
+        const picked = await pickCsvFile(window);
+        return picked ? { name: picked.name, path: null, text: picked.text } : null;
+      }
       return next ? { ...next } : null;
     },
     async openRecent(path) {

@@ -43,6 +43,7 @@ export type MenuCommand =
   | 'save-as'
   | 'export-report'
   | 'export-csv'
+  | 'import-csv'
   | 'undo'
   | 'redo'
   | 'about'
@@ -54,6 +55,11 @@ export interface HostApi {
   readonly kind: 'electron' | 'web';
   /** Shows a file dialog for a project (`.hingeline` or `.json`); null when cancelled. */
   openProject(): Promise<OpenedFile | null>;
+  /**
+   * Shows a file dialog for a CSV file to import (a member or span list); null when cancelled.
+   * Read only: the file is not remembered and never written to.
+   */
+  openCsv(): Promise<OpenedFile | null>;
   /** Opens an entry returned by `recentFiles()`; null when it cannot be reached without asking. */
   openRecent(path: string): Promise<OpenedFile | null>;
   /** Recently opened or saved projects, newest first (paths in Electron, names in the browser). */
@@ -99,6 +105,7 @@ export const MENU_COMMANDS: readonly MenuCommand[] = [
   'save-as',
   'export-report',
   'export-csv',
+  'import-csv',
   'undo',
   'redo',
   'about',

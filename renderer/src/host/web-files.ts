@@ -98,6 +98,16 @@ function pickWithInput(window: Window, accept: string): Promise<File | null> {
   });
 }
 
+/**
+ * Lets the user pick a CSV file through an <input type=file> (no write access is needed, so no file
+ * handle is asked for); its text without byte-order mark, or null when cancelled. Rejects a file over
+ * the project size limit.
+ */
+export async function pickCsvFile(window: Window): Promise<{ name: string; text: string } | null> {
+  const file = await pickWithInput(window, '.csv,.txt,text/csv,text/plain');
+  return file ? { name: file.name, text: await readProjectFile(file) } : null;
+}
+
 async function hasPermission(handle: FileHandleLike, mode: 'read' | 'readwrite'): Promise<boolean> {
   if (!handle.queryPermission || !handle.requestPermission) return true;
   if ((await handle.queryPermission({ mode })) === 'granted') return true;

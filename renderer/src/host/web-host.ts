@@ -22,7 +22,7 @@ import {
   type MenuCommand,
   type OpenedFile,
 } from './host-api.ts';
-import { createBrowserFileAccess, readProjectFile, type FileHandleLike, type WebFileAccess } from './web-files.ts';
+import { createBrowserFileAccess, pickCsvFile, readProjectFile, type FileHandleLike, type WebFileAccess } from './web-files.ts';
 import { createIndexedDbStore, createMemoryStore, type KeyValueStore } from './web-storage.ts';
 
 export const SESSION_MARKER_KEY = 'hingeline.session-open';
@@ -235,6 +235,11 @@ export function createWebHost(overrides: Partial<WebHostDependencies> = {}): Web
       if (!picked) return null;
       await remember(picked.name, picked.handle);
       return { name: picked.name, path: tokenFor(picked.handle), text: picked.text };
+    },
+
+    async openCsv() {
+      const picked = await pickCsvFile(window);
+      return picked ? { name: picked.name, path: null, text: picked.text } : null;
     },
 
     async openRecent(path) {

@@ -32,6 +32,8 @@ export interface DialogRequest {
   readonly details?: readonly string[];
   /** Optional two-column table under the message (e.g. keys and what they do). */
   readonly table?: readonly (readonly [string, string])[];
+  /** Optional table with column heads under the message (e.g. the rows a CSV import would add); widens the dialog. */
+  readonly grid?: { readonly head: readonly string[]; readonly rows: readonly (readonly string[])[] };
   readonly buttons: readonly DialogButton[];
   /** Button id chosen by Escape (default: the last button). */
   readonly cancelId?: string;

@@ -15,6 +15,26 @@ afterEach(async () => {
 
 const project = '{"format":"hingeline-project","version":2}';
 
+describe('opening a CSV file to import', () => {
+  it('reads the picked file as text without a byte-order mark, and neither grants it for writing nor lists it as recent', async () => {
+    const path = join(setup.folder, 'beams.csv');
+    await writeFile(path, '\uFEFFid,span [m]\r\nB-1,6\r\n');
+    setup.csvAnswers.push(path);
+    expect(await setup.service.openCsv()).toEqual({ name: 'beams.csv', path, text: 'id,span [m]\r\nB-1,6\r\n' });
+    expect(setup.dialogs.chooseCsvToOpen).toHaveBeenCalledWith(join(setup.folder, 'Documents'));
+    expect(setup.grants.isGranted(path)).toBe(false);
+    expect(setup.service.recentFiles()).toEqual([]);
+  });
+
+  it('returns null when cancelled and refuses text that is not UTF-8, naming the file', async () => {
+    expect(await setup.service.openCsv()).toBeNull();
+    const path = join(setup.folder, 'latin1.csv');
+    await writeFile(path, Buffer.from([0x69, 0x64, 0x0a, 0xe9, 0x81]));
+    setup.csvAnswers.push(path);
+    await expect(setup.service.openCsv()).rejects.toThrow('“latin1.csv” is not a CSV file Hingeline reads: it is not UTF-8 text.');
+  });
+});
+
 describe('opening projects', () => {
   it('reads the picked file, drops a byte-order mark, and remembers it', async () => {
     const path = join(setup.folder, 'Beam B1.hingeline');

@@ -74,6 +74,14 @@ describe('registerHostIpc', () => {
     expect(log).toHaveBeenCalledWith(expect.stringContaining('internal detail'));
   });
 
+  it('serves the CSV open dialog, which takes no arguments', async () => {
+    await expect(invoke(IpcChannel.openCsv, 'unexpected')).rejects.toThrow(/takes no arguments/);
+    const path = join(setup.folder, 'spans.csv');
+    await writeFile(path, 'member,span [m],section\nCB-1,6,S');
+    setup.csvAnswers.push(path);
+    expect(await invoke(IpcChannel.openCsv)).toEqual({ name: 'spans.csv', path, text: 'member,span [m],section\nCB-1,6,S' });
+  });
+
   it('serves a valid open and save end to end', async () => {
     const path = join(setup.folder, 'a.hingeline');
     await writeFile(path, '{"a":1}');

@@ -40,10 +40,10 @@ describe('menu template', () => {
     }
   });
 
-  it('File has New, Open, demo, Open Recent, Save, Save As, both exports and Quit in that order', () => {
+  it('File has New, Open, demo, Open Recent, Save, Save As, both exports, the CSV import and Quit in that order', () => {
     const file = menuTemplate(context(), actions())[0]!;
     const names = (file.submenu as MenuItemConstructorOptions[]).filter((item) => item.type !== 'separator').map((item) => item.label);
-    expect(names).toEqual(['&New', '&Open…', 'Open &demo project', 'Open &Recent', '&Save', 'Save &As…', 'Export &report (PDF)…', 'Export results (&CSV)…', '&Quit']);
+    expect(names).toEqual(['&New', '&Open…', 'Open &demo project', 'Open &Recent', '&Save', 'Save &As…', 'Export &report (PDF)…', 'Export results (&CSV)…', '&Import members from CSV…', '&Quit']);
   });
 
   it('Edit keeps the native cut, copy, paste and select-all roles for text fields', () => {

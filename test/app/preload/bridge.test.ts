@@ -18,7 +18,7 @@ describe('createBridge on its own', () => {
   it('exposes exactly the HostApi calls and nothing of ipcRenderer', () => {
     const bridge = createBridge(ipc.ipcRenderer);
     expect(Object.keys(bridge).sort()).toEqual(
-      ['autosave', 'clearRecovery', 'exportFile', 'onMenuCommand', 'onOpenFile', 'openProject', 'openRecent', 'recentFiles', 'saveProject', 'setDocumentState', 'takeRecovery'].sort(),
+      ['autosave', 'clearRecovery', 'exportFile', 'onMenuCommand', 'onOpenFile', 'openCsv', 'openProject', 'openRecent', 'recentFiles', 'saveProject', 'setDocumentState', 'takeRecovery'].sort(),
     );
     expect(Object.values(bridge).every((value) => typeof value === 'function')).toBe(true);
   });

@@ -19,7 +19,7 @@ describe('app/preload/index.ts', () => {
     const [key, api] = exposed.calls[0]!;
     expect(key).toBe('hingelineHost');
     const values = Object.values(api as Record<string, unknown>);
-    expect(values.length).toBe(11);
+    expect(values.length).toBe(12);
     expect(values.every((value) => typeof value === 'function')).toBe(true);
     expect(Object.keys(api as object)).not.toContain('ipcRenderer');
   });

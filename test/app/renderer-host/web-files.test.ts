@@ -1,6 +1,6 @@
 import { Window as HappyWindow } from 'happy-dom';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { createBrowserFileAccess, MAX_PROJECT_BYTES, readProjectFile, type FileHandleLike } from '../../../renderer/src/host/web-files.ts';
+import { createBrowserFileAccess, MAX_PROJECT_BYTES, pickCsvFile, readProjectFile, type FileHandleLike } from '../../../renderer/src/host/web-files.ts';
 
 const windows: HappyWindow[] = [];
 afterEach(async () => {
@@ -116,6 +116,22 @@ describe('createBrowserFileAccess without the File System Access API', () => {
     expect(input.accept).toBe('.hingeline,.json,application/json');
     input.dispatchEvent(new window.Event('cancel') as unknown as Event);
     expect(await picking).toBeNull();
+    expect(window.document.querySelector('input[type=file]')).toBeNull();
+  });
+});
+
+describe('pickCsvFile', () => {
+  it('picks a CSV with a file input (never the file-handle picker) and reads it without a byte-order mark', async () => {
+    const window = browserWindow();
+    const fsaPicker = vi.fn();
+    (window as unknown as { showOpenFilePicker: unknown }).showOpenFilePicker = fsaPicker;
+    const picking = pickCsvFile(window as unknown as Window);
+    const input = window.document.querySelector('input[type=file]') as unknown as HTMLInputElement;
+    expect(input.accept).toBe('.csv,.txt,text/csv,text/plain');
+    Object.defineProperty(input, 'files', { value: [new File(['\uFEFFid,span [m]\r\nB-1,6\r\n'], 'beams.csv')] });
+    input.dispatchEvent(new window.Event('change') as unknown as Event);
+    expect(await picking).toEqual({ name: 'beams.csv', text: 'id,span [m]\r\nB-1,6\r\n' });
+    expect(fsaPicker).not.toHaveBeenCalled();
     expect(window.document.querySelector('input[type=file]')).toBeNull();
   });
 });

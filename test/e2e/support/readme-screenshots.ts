@@ -5,11 +5,12 @@
  *
  * The demo project, 1440 × 900 pixels: the project overview, a member workspace with its charts,
  * the strain and stress profile at a key point, both bending directions side by side, an existing
- * beam's schemes and their comparison, a member after the switch to SI units, and a continuous beam
- * of the SI demo.
+ * beam's schemes and their comparison, a member after the switch to SI units, a continuous beam
+ * of the SI demo, and the preview of a CSV import (docs/examples/members.csv into a new SI project).
  */
+import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { ROOT, openApp, startE2e } from './environment.ts';
+import { ROOT, openApp, startE2e, type E2eContext } from './environment.ts';
 
 const OUT = join(ROOT, 'build', 'screenshots');
 const context = await startE2e();
@@ -74,7 +75,22 @@ try {
   await si.page.locator('[data-testid=continuous-elevation] [data-hinge]').first().waitFor();
   await si.page.waitForTimeout(400);
   await si.page.screenshot({ path: join(OUT, 'continuous-beam.png') });
+  await importPreview(context);
   console.log(`screenshots written to ${OUT}`);
 } finally {
   await context.close();
+}
+
+/** The preview of "Import CSV…" with the template of invented beams, into a new SI project. */
+async function importPreview(context: E2eContext, out = OUT): Promise<void> {
+  const text = readFileSync(join(ROOT, 'docs', 'examples', 'members.csv'), 'utf8');
+  const { page } = await openApp(context, { csvQueue: [{ name: 'members.csv', path: null, text }] });
+  await page.getByTestId('new-project').click();
+  await page.getByTestId('dialog-si-en').click();
+  await page.locator('[data-testid=member-list] [data-member="member-1"]').waitFor();
+  await page.getByTestId('import-csv').click();
+  await page.getByTestId('dialog-grid').waitFor();
+  await page.waitForTimeout(300);
+  await page.screenshot({ path: join(out, 'import-preview.png') });
+  await page.close();
 }

@@ -3,7 +3,7 @@
  * named) and their JSON summary. Pure functions from results to text; units converted for display.
  */
 import type { StationCheck } from '../../core/assessment/continuous.ts';
-import { governingDeflection, type ContinuousMemberResult } from '../../core/assessment/continuous-verdict.ts';
+import { deflectionSense, governingDeflection, type ContinuousMemberResult } from '../../core/assessment/continuous-verdict.ts';
 import type { UnitSystem } from '../../core/project/types.ts';
 import { displaySystem, NOT_A_VALUE, say, toDisplay, unitLabel } from '../../core/units/index.ts';
 import { fixedQuantityText, ratioText, renderTable, wrap, type Style } from './format.ts';
@@ -47,7 +47,7 @@ export function continuousTable(results: readonly ContinuousMemberResult[], syst
       String(r.capacity?.hinges.length ?? 0),
       ratioText(r.verdict.collapseRatio, 2),
       ratioText(r.verdict.ductilityAvailable ? r.capacity?.displacementDuctility : null),
-      g ? fixedQuantityText('deflection', g.check.governing, system) : NOT_A_VALUE,
+      g ? `${fixedQuantityText('deflection', deflectionSense(g.check.governing).magnitude, system)}${deflectionSense(g.check.governing).sense}` : NOT_A_VALUE,
       g ? ratioText(g.check.utilisation, 2) : NOT_A_VALUE,
       STATUS[r.verdict.status],
     ];
@@ -84,7 +84,10 @@ export function continuousJson(results: readonly ContinuousMemberResult[], syste
       collapseOverFactored: r.verdict.collapseRatio,
       displacementDuctility: r.verdict.ductilityAvailable ? r.capacity?.displacementDuctility ?? null : null,
       hinges: (r.capacity?.hinges ?? []).map((h) => ({ order: h.order, part: h.part, positionMm: h.position, direction: h.direction, loadFactor: h.loadFactor, rotationRad: h.rotation, capacityRad: h.rotationCapacity })),
-      deflection: g ? { part: g.part, limitCase: g.check.limitCase, valueMm: g.check.governing, limitMm: g.check.limit, utilisation: g.check.utilisation } : null,
+      // valueMm signed, downward positive; direction names it (the limit applies to the magnitude).
+      deflection: g ? { part: g.part, limitCase: g.check.limitCase, valueMm: g.check.governing, direction: g.check.governing < 0 ? 'upward' : 'downward', limitMm: g.check.limit, utilisation: g.check.utilisation, arrangement: g.check.arrangement } : null,
+      // Every span's and cantilever's service deflections, mm, signed (downward positive): by integration and by the code method.
+      serviceDeflections: (r.service?.parts ?? []).map((p) => ({ part: p.name, arrangement: p.arrangement, integrationMm: p.integration, codeMm: p.code, checks: p.checks.map((c) => ({ limitCase: c.limitCase, valueMm: c.governing, direction: c.governing < 0 ? 'upward' : 'downward', limitMm: c.limit, utilisation: c.utilisation, pass: c.pass, arrangement: c.arrangement })) })),
       redistribution: r.redistribution.map((x) => ({ support: x.support, usedPercent: x.usedPercent, permittedPercent: x.permitted.percent, clause: x.permitted.clause })),
       warnings: r.warnings.map((w) => say(w, system)),
       errors: r.errors.map((e) => ({ path: e.path, message: say(e.message, system) })),

@@ -3,7 +3,8 @@
  * shear checks at every station with brittleness (continuous.ts), and the verdict — the status and
  * the span that governs, what the command line's row, the app and the report say.
  */
-export { governingDeflection } from '../continuous/governing.ts';
+export { deflectionSense, governingDeflection } from '../continuous/governing.ts';
+import { deflectionSense } from '../continuous/governing.ts';
 import { analyzeContinuousBeam, type ContinuousBeamResult, type ContinuousContext } from '../continuous/analyze.ts';
 import type { ContinuousBeamDefinition } from '../continuous/definition.ts';
 import { capitalised, joinTexts, phrase, q, type Text } from '../units/phrase.ts';
@@ -63,7 +64,7 @@ export function continuousVerdict(result: ContinuousBeamResult, checks: Continuo
         worst = {
           utilisation: check.utilisation,
           span: part.name,
-          words: phrase`Deflection check ${check.pass ? 'passes' : 'fails'} in ${part.name} (utilisation ${check.utilisation.toFixed(2)}): ${check.quantity} ${q('deflection', check.governing)} against ${q('deflection', check.limit)}, ${check.description}`,
+          words: phrase`Deflection check ${check.pass ? 'passes' : 'fails'} in ${part.name} (utilisation ${check.utilisation.toFixed(2)}): ${check.quantity} ${q('deflection', deflectionSense(check.governing).magnitude)}${deflectionSense(check.governing).sense} against ${q('deflection', check.limit)}, ${check.description}`,
         };
       }
     }

@@ -8,13 +8,21 @@
  *      24.2.3.7), Ec·Ie per span in an elastic analysis, λΔ = ξ/(1 + 50ρ′) with ρ′ at midspan or at
  *      the support of a cantilever (24.2.4.1); EN 1992-1-1: ζ-interpolated curvature at every station
  *      (7.4.3, Eq. 7.18–7.21) integrated along the whole beam.
- * The live load of each part is arranged to give that part its largest deflection (the elastic
- * envelope names the arrangement). Checks use the larger of the two methods, per part.
- * Units: mm, N, N·mm, MPa.
+ * The live load of each part is arranged to give that part its largest downward deflection (the
+ * elastic envelope names the arrangement) and, where the live load elsewhere lifts the part, also its
+ * largest upward one; each check takes the worse arrangement. Deflections are signed, downward
+ * positive: a part that deflects upward (a short span beside a long loaded one) reports its upward
+ * value as negative, and every quantity is the value of largest magnitude within the part, taken
+ * point by point (the live increment is D + L minus D at the same point). Checks compare the
+ * magnitude with the limit: ACI 318-19 Table 24.2.2 and EN 1992-1-1 7.4.1(5) give the limits
+ * without a direction, and 7.4.1(4) holds an upward pre-camber to the same span/250 as the sag — our
+ * reading: an upward deflection beyond the limit fails as a downward one does. Checks use the larger
+ * of the two methods, per part. Units: mm, N, N·mm, MPa.
  */
 import type { CodeBasis } from '../materials/specs.ts';
 import { aciEffectiveInertia, aciLongTermMultiplier, aciTimeFactor, enDistributionCoefficient, enEffectiveModulus, enShrinkageCurvature, limitRatio } from '../member/code-deflection.ts';
 import type { DeflectionCheck } from '../member/results.ts';
+import type { DeflectionLimitCase } from '../member/definition.ts';
 import { checkQuantity } from '../member/service.ts';
 import { elasticProperties } from '../section/elastic.ts';
 import type { BendingDirection, SectionModel } from '../section/model.ts';
@@ -48,7 +56,7 @@ export interface ServiceInput {
   readonly segmentsPerSpan?: number;
 }
 
-/** Deflections of one part, mm (largest downward within the part). */
+/** Deflections of one part, mm, downward positive: the value of largest magnitude within the part (negative: upward). */
 export interface ServiceValues {
   readonly dead: number;
   readonly deadPlusLive: number;
@@ -70,7 +78,13 @@ export interface PartService {
   /** ACI only: Ie of the part under dead and dead + live load, mm⁴, and the long-term multiplier. */
   readonly effectiveInertia: { readonly dead: number; readonly deadPlusLive: number } | null;
   readonly multiplier: number | null;
-  readonly checks: readonly DeflectionCheck[];
+  readonly checks: readonly PartDeflectionCheck[];
+}
+
+/** A deflection check of a part: `byIntegration`, `byCode` and `governing` signed (negative: upward), `utilisation` = |governing| / limit. */
+export interface PartDeflectionCheck extends DeflectionCheck {
+  /** The live-load arrangement that governs this check (it may differ from the part's). */
+  readonly arrangement: string;
 }
 
 export interface ContinuousService {
@@ -79,14 +93,55 @@ export interface ContinuousService {
   readonly warnings: readonly string[];
 }
 
-/** Largest downward deflection of each part from sample deflections. */
-function perPart(samplePart: Int32Array, deflection: Float64Array, parts: number): number[] {
-  const out = new Array<number>(parts).fill(0);
-  deflection.forEach((v, q) => {
-    const p = samplePart[q]!;
-    if (v > out[p]!) out[p] = v;
+/** Deflection fields of one method and one arrangement at the samples of its mesh, mm, downward positive. */
+interface Fields {
+  readonly samplePart: Int32Array;
+  readonly dead: Float64Array;
+  readonly total: Float64Array;
+  readonly sustained: Float64Array;
+  /** Long-term total under the sustained load; null: the sustained field times a multiplier of the part (ACI). */
+  readonly long: Float64Array | null;
+}
+
+/** The four deflections of a method at one sample, mm, signed (creep multiplies the sustained deflection with its sign). */
+interface PointValues { dead: number; total: number; sustained: number; long: number }
+
+/** The signed value of largest magnitude of f over the samples of a part (a tie keeps the downward one), mm. */
+function extremeIn(fields: Fields, part: number, multiplier: number, f: (v: PointValues) => number): number {
+  let best = 0;
+  const v: PointValues = { dead: 0, total: 0, sustained: 0, long: 0 };
+  for (let q = 0; q < fields.samplePart.length; q++) {
+    if (fields.samplePart[q] !== part) continue;
+    v.dead = fields.dead[q]!;
+    v.total = fields.total[q]!;
+    v.sustained = fields.sustained[q]!;
+    v.long = fields.long ? fields.long[q]! : v.sustained * (1 + multiplier);
+    const value = f(v);
+    if (Math.abs(value) > Math.abs(best) || (Math.abs(value) === Math.abs(best) && value > best)) best = value;
+  }
+  return best;
+}
+
+function partValues(fields: Fields, part: number, multiplier: number): ServiceValues {
+  const ext = (f: (v: PointValues) => number) => extremeIn(fields, part, multiplier, f);
+  return {
+    dead: ext((v) => v.dead),
+    deadPlusLive: ext((v) => v.total),
+    live: ext((v) => v.total - v.dead),
+    sustained: ext((v) => v.sustained),
+    longTermAdditional: ext((v) => v.long - v.sustained),
+    longTermTotal: ext((v) => v.long),
+  };
+}
+
+/** The quantity a limit case compares (core/member/service.ts checkQuantity), point by point, its signed extreme in the part, mm. */
+function checkedValue(fields: Fields, part: number, multiplier: number, c: DeflectionLimitCase, ratio: number): number {
+  return extremeIn(fields, part, multiplier, (v) => {
+    const live = v.total - v.dead;
+    const add = v.long - v.sustained;
+    const transient = v.total - v.sustained;
+    return checkQuantity(c, ratio, { liveI: live, liveC: live, addI: add, addC: add, totalLongI: v.long, totalLongC: v.long, deadI: v.dead, deadC: v.dead, transientLiveI: transient, transientLiveC: transient })[2];
   });
-  return out;
 }
 
 /** EN 1992-1-1 7.4.3 law of a zone: ζ-interpolation between uncracked and cracked curvature (Eq. 7.18, 7.19), creep and shrinkage (7.20, 7.21). */
@@ -162,7 +217,7 @@ export function continuousService(input: ServiceInput): ContinuousService {
   const solve = (law: DistributedLaw, loads: LoadsByPart, label: string) => {
     const s = staticSolution(def, law, loads, allLoads, segments);
     if (!s.converged) warnings.push(`Service deflection (${label}) did not converge: the value shown is the last iterate.`);
-    return perPart(s.mesh.samplePart, s.deflection, n);
+    return s;
   };
   // Gross-stiffness elastic solver for the ACI moments.
   const grossStiffness = zones.map((z) => z.codeModulus * elasticProperties(z.model, { concreteModulus: z.codeModulus, tensileStrength: z.codeTensileStrength }).grossInertia);
@@ -176,28 +231,30 @@ export function continuousService(input: ServiceInput): ContinuousService {
     const live = arrangement ? onParts(input.live, arrangement.loadedParts) : input.live;
     const total = combineLoads([{ loads: input.dead, factor: 1 }, { loads: live, factor: 1 }], n);
     const sustained = combineLoads([{ loads: input.dead, factor: 1 }, { loads: live, factor: psi }], n);
-    const integration = {
-      dead: solve(shortLaw, input.dead, 'dead load'),
-      total: solve(shortLaw, total, 'dead + live load'),
-      sustained: solve(shortLaw, sustained, 'sustained load'),
-      long: solve(longLaw, sustained, 'sustained load, long term'),
+    const d = solve(shortLaw, input.dead, 'dead load');
+    const integration: Fields = {
+      samplePart: d.mesh.samplePart,
+      dead: d.deflection,
+      total: solve(shortLaw, total, 'dead + live load').deflection,
+      sustained: solve(shortLaw, sustained, 'sustained load').deflection,
+      long: solve(longLaw, sustained, 'sustained load, long term').deflection,
     };
-    let code;
+    let code: Fields;
     let inertia: { dead: number[]; total: number[] } | null = null;
     if (enShort && enLong) {
-      code = { dead: solve(enShort, input.dead, 'EN dead'), total: solve(enShort, total, 'EN dead + live'), sustained: solve(enShort, sustained, 'EN sustained'), long: solve(enLong, sustained, 'EN long term') };
+      const ed = solve(enShort, input.dead, 'EN dead');
+      code = { samplePart: ed.mesh.samplePart, dead: ed.deflection, total: solve(enShort, total, 'EN dead + live').deflection, sustained: solve(enShort, sustained, 'EN sustained').deflection, long: solve(enLong, sustained, 'EN long term').deflection };
     } else {
       const ie = (loads: LoadsByPart) => aciPartInertia(gross!, loads, zones, def);
       const ieD = ie(input.dead);
       const ieT = ie(total);
       inertia = { dead: ieD, total: ieT };
-      const withIe = (ies: number[], loads: LoadsByPart) => {
-        const partDef = { ...def, zones: layout.parts.map((p, i) => ({ from: p.from, to: p.to, sectionId: String(i) })) };
-        const stiffness = layout.parts.map((p, i) => zones[zoneIndexAt(def, 0.5 * (p.from + p.to))]!.codeModulus * ies[i]!);
-        const solver = elasticSolver(partDef, stiffness, allLoads, segments);
-        return perPart(solver.mesh.samplePart, solver.solve(loads).sampleDeflection, n);
-      };
-      code = { dead: withIe(ieD, input.dead), total: withIe(ieT, total), sustained: withIe(ieT, sustained), long: [] as number[] };
+      const partDef = { ...def, zones: layout.parts.map((p, i) => ({ from: p.from, to: p.to, sectionId: String(i) })) };
+      const withIe = (ies: number[]) => elasticSolver(partDef, layout.parts.map((p, i) => zones[zoneIndexAt(def, 0.5 * (p.from + p.to))]!.codeModulus * ies[i]!), allLoads, segments);
+      const solverD = withIe(ieD);
+      const solverT = withIe(ieT);
+      // The long-term deflection is the sustained one times (1 + λΔ) of each part, with its sign (extremeIn).
+      code = { samplePart: solverD.mesh.samplePart, dead: solverD.solve(input.dead).sampleDeflection, total: solverT.solve(total).sampleDeflection, sustained: solverT.solve(sustained).sampleDeflection, long: null };
     }
     return { integration, code, inertia };
   };
@@ -205,57 +262,56 @@ export function continuousService(input: ServiceInput): ContinuousService {
     if (!cache.has(index)) cache.set(index, byArrangement(index));
     return cache.get(index)!;
   };
+  const liveUp = elastic.envelopes.live.deflection.min;
 
   const parts: PartService[] = layout.parts.map((part, i) => {
-    const arrangementIndex = elastic.parts[i]!.maxLiveDeflection.arrangement;
-    const run = get(arrangementIndex);
-    const ig = run.integration;
-    const integration: ServiceValues = {
-      dead: ig.dead[i]!,
-      deadPlusLive: ig.total[i]!,
-      live: ig.total[i]! - ig.dead[i]!,
-      sustained: ig.sustained[i]!,
-      longTermAdditional: ig.long[i]! - ig.sustained[i]!,
-      longTermTotal: ig.long[i]!,
-    };
     let multiplier: number | null = null;
-    let codeLong: number;
     if (input.code === 'ACI 318-19') {
       // ρ′ at midspan (spans) or at the support (cantilevers), ACI 318-19 24.2.4.1.2.
       const x = part.kind === 'span' ? 0.5 * (part.from + part.to) : part.kind === 'left-cantilever' ? part.to : part.from;
       const z = zones[zoneIndexAt(def, x)]!;
       multiplier = aciLongTermMultiplier(xi, compressionRatio(z.model, part.kind === 'span' ? 'sagging' : 'hogging'));
-      codeLong = run.code.sustained[i]! * (1 + multiplier);
-    } else codeLong = run.code.long[i]!;
-    const code: ServiceValues = {
-      dead: run.code.dead[i]!,
-      deadPlusLive: run.code.total[i]!,
-      live: run.code.total[i]! - run.code.dead[i]!,
-      sustained: run.code.sustained[i]!,
-      longTermAdditional: codeLong - run.code.sustained[i]!,
-      longTermTotal: codeLong,
-    };
-    const checks: DeflectionCheck[] = settings.limitCases.map((c) => {
-      const ratio = limitRatio(c, settings.customLimitRatio);
-      const limit = part.length / ratio;
-      const [quantity, description, a, b] = checkQuantity(c, ratio, {
-        liveI: integration.live, liveC: code.live,
-        addI: integration.longTermAdditional, addC: code.longTermAdditional,
-        totalLongI: integration.longTermTotal, totalLongC: code.longTermTotal,
-        deadI: integration.dead, deadC: code.dead,
-        transientLiveI: integration.deadPlusLive - integration.sustained, transientLiveC: code.deadPlusLive - code.sustained,
-      });
-      const governing = Math.max(a, b);
-      return { limitCase: c, description, quantity, ratio, limit, byIntegration: a, byCode: b, governing, utilisation: governing / limit, pass: governing <= limit };
+    }
+    // Candidates: the arrangement of the largest downward live deflection and, where live load elsewhere lifts the part, of the largest upward one.
+    const down = elastic.parts[i]!.maxLiveDeflection.arrangement;
+    let up = -1;
+    let upValue = 0;
+    elastic.stations.part.forEach((p, k) => {
+      if (p === i && liveUp.value[k]! < upValue) {
+        upValue = liveUp.value[k]!;
+        up = liveUp.arrangement[k]!;
+      }
     });
+    const candidates = up >= 0 && up !== down ? [down, up] : [down];
+    const evaluated = candidates.map((arrangementIndex) => {
+      const run = get(arrangementIndex);
+      const integration = partValues(run.integration, i, 0);
+      const code = partValues(run.code, i, multiplier ?? 0);
+      const arrangement = elastic.arrangements[arrangementIndex]?.description ?? 'all spans loaded';
+      const checks: PartDeflectionCheck[] = settings.limitCases.map((c) => {
+        const ratio = limitRatio(c, settings.customLimitRatio);
+        const limit = part.length / ratio;
+        const [quantity, description] = checkQuantity(c, ratio, { liveI: 0, liveC: 0, addI: 0, addC: 0, totalLongI: 0, totalLongC: 0, deadI: 0, deadC: 0, transientLiveI: 0, transientLiveC: 0 });
+        const a = checkedValue(run.integration, i, 0, c, ratio);
+        const b = checkedValue(run.code, i, multiplier ?? 0, c, ratio);
+        // The larger magnitude governs, with its sign (a tie keeps the downward value).
+        const governing = Math.abs(a) > Math.abs(b) || (Math.abs(a) === Math.abs(b) && a > b) ? a : b;
+        return { limitCase: c, description, quantity, ratio, limit, byIntegration: a, byCode: b, governing, utilisation: Math.abs(governing) / limit, pass: Math.abs(governing) <= limit, arrangement };
+      });
+      return { arrangementIndex, arrangement, integration, code, checks, run };
+    });
+    const worstOf = (e: (typeof evaluated)[number]) => Math.max(0, ...e.checks.map((c) => c.utilisation));
+    // The part shows the arrangement of its worst check; each check takes the worse of the candidates.
+    const shown = evaluated.reduce((a, e) => (worstOf(e) > worstOf(a) ? e : a));
+    const checks = shown.checks.map((c, k) => evaluated.reduce((worse, e) => (e.checks[k]!.utilisation > worse.utilisation ? e.checks[k]! : worse), c));
     return {
       part: i,
       name: partName(part),
       length: part.length,
-      arrangement: elastic.arrangements[arrangementIndex]?.description ?? 'all spans loaded',
-      integration,
-      code,
-      effectiveInertia: run.inertia ? { dead: run.inertia.dead[i]!, deadPlusLive: run.inertia.total[i]! } : null,
+      arrangement: shown.arrangement,
+      integration: shown.integration,
+      code: shown.code,
+      effectiveInertia: shown.run.inertia ? { dead: shown.run.inertia.dead[i]!, deadPlusLive: shown.run.inertia.total[i]! } : null,
       multiplier,
       checks,
     };

@@ -25,6 +25,7 @@ export function continuousSummaryRows(results: readonly ContinuousMemberResult[]
       r.verdict.status,
       null, shown('moment', hinge?.peakMoment, system), null, r.capacity?.displacementDuctility ?? null,
       shown('rotation', hinge?.rotationCapacity, system), r.verdict.collapseRatio,
+      // Signed, downward positive: a span lifted by its neighbours' load shows a negative deflection.
       shown('deflection', g?.check.governing, system), shown('deflection', g?.check.limit, system), g?.check.limitCase ?? null,
       g?.check.utilisation ?? null, r.verdict.strengthUtilisation, r.warnings.map((w) => say(w, system)).join('; '), `${governingPart ? `${governingPart}: ` : ''}${say(r.verdict.governingMode, system)}`,
       // Where the flexural check governs: position from the left end of its span, sense and span, combination and arrangement.

@@ -14,6 +14,7 @@
 import type { ContinuousStatus } from '../assessment/continuous-verdict.ts';
 import type { StationCheck } from '../assessment/continuous.ts';
 import type { ContinuousBeamDefinition, ContinuousSupport } from '../continuous/definition.ts';
+import { deflectionSense } from '../continuous/governing.ts';
 import { figureNode, pageOf, type WriteContext } from './context.ts';
 import type { ReportFormatter } from './format.ts';
 import { CAUTION_TEXT, COLOURS, STYLES, bullets, cautionBox, dataTable, factsTable, h2, h3, heading, small, verdict } from './layout.ts';
@@ -221,7 +222,8 @@ export function continuousChapter(ctx: WriteContext, plan: ContinuousPlan): Cont
   const service = r.service;
   if (!service) out.push({ text: 'The service deflections could not be computed (see the warnings).', ...STYLES.body });
   else {
-    out.push({ text: `Each span under the live-load arrangement that gives it its largest deflection; by integration of the section laws and by the code method (${service.codeMethod}). Deflections downward positive.`, ...STYLES.body });
+    out.push({ text: `Each span under the live-load arrangement that gives it its largest deflection (downward, or upward where the load on other spans lifts it; each check under the worse); by integration of the section laws and by the code method (${service.codeMethod}). Deflections are downward unless marked upward (a span lifted by the load on its neighbours); the limits apply to the magnitude.`, ...STYLES.body });
+    const d = (value: number) => `${f.deflection(deflectionSense(value).magnitude)}${deflectionSense(value).sense}`;
     out.push(dataTable({
       widths: [54, '*', 50, 50, 50, 50],
       header: ['Part', 'Arrangement', 'D + L, immediate', 'L, immediate', 'Long-term added', 'Long-term total'],
@@ -229,14 +231,14 @@ export function continuousChapter(ctx: WriteContext, plan: ContinuousPlan): Cont
       rows: service.parts.map((p) => [
         p.name,
         { text: p.arrangement, fontSize: 6.5 },
-        `${f.deflection(p.integration.deadPlusLive)} / ${f.deflection(p.code.deadPlusLive)}`,
-        `${f.deflection(p.integration.live)} / ${f.deflection(p.code.live)}`,
-        `${f.deflection(p.integration.longTermAdditional)} / ${f.deflection(p.code.longTermAdditional)}`,
-        `${f.deflection(p.integration.longTermTotal)} / ${f.deflection(p.code.longTermTotal)}`,
+        `${d(p.integration.deadPlusLive)} / ${d(p.code.deadPlusLive)}`,
+        `${d(p.integration.live)} / ${d(p.code.live)}`,
+        `${d(p.integration.longTermAdditional)} / ${d(p.code.longTermAdditional)}`,
+        `${d(p.integration.longTermTotal)} / ${d(p.code.longTermTotal)}`,
       ]),
     }));
     out.push({ text: 'Each cell: by integration / by the code method.', ...STYLES.note });
-    const checkRows = service.parts.flatMap((p) => p.checks.map((c) => [p.name, { text: `${c.quantity}: ${c.description}`, fontSize: 7 }, `${f.deflection(c.byIntegration)} / ${f.deflection(c.byCode)}`, f.deflection(c.limit), f.fixed(c.utilisation, 2), verdict(c.pass)]));
+    const checkRows = service.parts.flatMap((p) => p.checks.map((c) => [p.name, { text: `${c.quantity}: ${c.description}${c.arrangement === p.arrangement ? '' : `; under ${c.arrangement}`}`, fontSize: 7 }, `${d(c.byIntegration)} / ${d(c.byCode)}`, f.deflection(c.limit), f.fixed(c.utilisation, 2), verdict(c.pass)]));
     if (checkRows.length > 0) {
       out.push(dataTable({ widths: [54, '*', 70, 44, 36, 34], header: ['Part', 'Limit', 'Integration / code', 'Limit', 'Ratio', ''], align: ['left', 'left', 'right', 'right', 'right', 'center'], rows: checkRows }));
     }

@@ -51,6 +51,8 @@ describe('continuous beams in the app', () => {
     await expect.poll(() => page.locator('[data-testid=span-table] tr[data-part="span 1"]').count()).toBe(1);
     expect(await utilisationOf('span 1')).toBeGreaterThan(1);
     expect(await page.getByTestId('governing-mode').textContent()).toMatch(/Deflection check fails in span 1 \(utilisation 1\.\d\d\)/);
+    // The short span is lifted by the long one's load: its deflections say so, with a magnitude.
+    expect(await page.locator('[data-testid=span-table] tr[data-part="span 2"]').textContent()).toMatch(/\d\.\d+ upward \/ \d\.\d+ upward/);
     // Hinges of the analysis to failure are numbered on the elevation.
     await expect.poll(() => elevation.locator('[data-hinge]').count()).toBeGreaterThan(0);
     await snap(page, 'continuous-cb2');

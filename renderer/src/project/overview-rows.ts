@@ -36,7 +36,7 @@ export function sortValue(row: OverviewRow, column: OverviewColumn, units: UnitS
       case 'span': return c.governingLength;
       case 'displacementDuctility': return c.displacementDuctility;
       case 'rotation': return c.rotationCapacity;
-      case 'deflection': return c.deflection?.deflection ?? null;
+      case 'deflection': return c.deflection ? Math.abs(c.deflection.deflection) : null; // upward spans by magnitude
       case 'utilisation': return c.deflection?.utilisation ?? null;
       case 'strength': return c.strengthUtilisation;
       case 'governing': return say(c.governingMode, units);

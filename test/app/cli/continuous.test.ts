@@ -24,4 +24,19 @@ describe('continuous members on the command line', () => {
     expect(json[0]!.hinges.map((h) => h.order)).toEqual(json[0]!.hinges.map((_, i) => i + 1));
     expect(json[0]!.redistribution).toHaveLength(2);
   });
+  it('gives every span its signed service deflections: the short span of CB-2 rises under the load of the long one', () => {
+    type Values = { deadPlusLive: number; longTermTotal: number };
+    type Service = { part: string; integrationMm: Values; codeMm: Values; checks: { valueMm: number; direction: string; utilisation: number; limitMm: number }[] }[];
+    const cb2 = (continuousJson(results, 'si') as { serviceDeflections: Service; deflection: { direction: string; valueMm: number } }[])[1]!;
+    const span2 = cb2.serviceDeflections.find((p) => p.part === 'span 2')!;
+    // A short unloaded-side span beside a long loaded one is lifted (three-moment equation; test/references/continuous-upward-deflection.test.ts).
+    expect(span2.integrationMm.longTermTotal).toBeLessThan(-1);
+    expect(span2.codeMm.deadPlusLive).toBeLessThan(0);
+    for (const c of span2.checks) {
+      expect(c.direction).toBe('upward');
+      expect(c.utilisation).toBeCloseTo(-c.valueMm / c.limitMm, 12);
+    }
+    expect(cb2.deflection.direction).toBe('downward');
+    expect(cb2.deflection.valueMm).toBeGreaterThan(0);
+  });
 });

@@ -22,6 +22,7 @@ import { CancelledError, engines, type RunningRequest } from '../workers/engine.
 import { indexMapOf } from '../workers/paths.ts';
 import type { CoveredItems, ItemDiagnostic, ItemList, WorkerReply } from '../workers/protocol.ts';
 import { useDocumentStore } from './document.ts';
+import { useContinuousStore } from './continuous.ts';
 import { perfMark } from '../components/ids.ts';
 import type { MemberResult } from '../../../core/assessment/results.ts';
 import type { SectionResult } from '../../../core/member/results.ts';
@@ -389,7 +390,11 @@ export const useAnalysisStore = defineStore('analysis', () => {
 
   // --- whole project ------------------------------------------------------------------------------------
 
-  /** Analyses every member in the batch worker, with progress. Replaces a run in progress. */
+  /**
+   * Analyses every member in the batch worker, with progress, and every continuous member again (the
+   * continuous store, in the interactive worker; the status bar says so while they run). Replaces a
+   * run in progress; resolves when both are done.
+   */
   async function analyseAll(): Promise<void> {
     const project = documentStore.project;
     if (!project) return;
@@ -408,6 +413,7 @@ export const useAnalysisStore = defineStore('analysis', () => {
     );
     runningBatch = request;
     schedule(0); // the member on screen still gets its full results from the other worker
+    const continuousRun = useContinuousStore().analyseAll().catch(reportFailure);
     try {
       await request.finished;
       if (runningBatch === request) batch.outcome = 'done';
@@ -422,6 +428,7 @@ export const useAnalysisStore = defineStore('analysis', () => {
         batch.elapsedMs = performance.now() - batch.startedAt;
       }
     }
+    await continuousRun;
   }
 
   /** Stops the whole-project analysis at once (terminates its worker). Results already in are kept. */

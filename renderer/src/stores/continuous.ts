@@ -8,7 +8,8 @@
  *
  * A project holds few continuous members and each takes tens of milliseconds, so after every edit
  * the members whose inputs changed are analysed again (the one on screen first), one job at a time.
- * Their diagnostics come from the analysis store's validation (list `continuousMembers`).
+ * Their diagnostics come from the analysis store's validation (list `continuousMembers`). "Analyse
+ * all" (the analysis store's `analyseAll`) sends every continuous member again (`analyseAll` here).
  */
 import { defineStore } from 'pinia';
 import { ref, toRaw, watch } from 'vue';
@@ -47,7 +48,7 @@ export const useContinuousStore = defineStore('continuous', () => {
   /** Inputs of each member when it was last sent (so that an unchanged member is not sent again). */
   const considered = new Map<string, readonly unknown[]>();
   let timer: ReturnType<typeof setTimeout> | null = null;
-  let job: { id: number } | null = null;
+  let job: { readonly id: number; readonly finished: Promise<unknown> } | null = null;
 
   function resultOf(memberId: string): ContinuousView | null {
     void revision.value;
@@ -114,6 +115,25 @@ export const useContinuousStore = defineStore('continuous', () => {
     timer = setTimeout(() => void run(), delay);
   }
 
+  /**
+   * Analyses every continuous member again, whether or not its inputs changed ("Analyse all"): a job
+   * in progress is stopped after its member in hand, then all are sent. Resolves when they are done
+   * (or the run was replaced).
+   */
+  async function analyseAll(): Promise<void> {
+    const project = documentStore.project;
+    if (!project || (project.continuousMembers?.length ?? 0) === 0) return;
+    while (job) {
+      const current = job;
+      engines().interactive.cancel(current.id);
+      await current.finished.catch(() => undefined);
+    }
+    if (timer) clearTimeout(timer);
+    timer = null;
+    considered.clear();
+    await run();
+  }
+
   /** Forgets everything (another project was opened). */
   function reset(): void {
     if (timer) clearTimeout(timer);
@@ -141,5 +161,5 @@ export const useContinuousStore = defineStore('continuous', () => {
   }, { immediate: true });
   watch(focusedId, () => schedule(0));
 
-  return { revision, running, lastError, focusedId, resultOf, outdatedCount, reset, schedule };
+  return { revision, running, lastError, focusedId, resultOf, outdatedCount, reset, schedule, analyseAll };
 });

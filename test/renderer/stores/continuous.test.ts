@@ -1,7 +1,8 @@
 /**
  * The continuous members' store with the real analysis service in-process: the SI demo's CB-1 and
  * CB-2 analysed after opening, CB-2's end span failing in deflection, an edit analysed again and
- * undo showing the earlier result at once; a span out of range gets core's message on its field.
+ * undo showing the earlier result at once; Analyse all sending them all again; a span out of range
+ * gets core's message on its field.
  */
 import { describe, expect, it } from 'vitest';
 import { replaceContinuousMember, withSpanLength } from '../../../renderer/src/project/continuous-edits.ts';
@@ -48,6 +49,23 @@ describe('continuous members in the app', () => {
     documentStore.undo();
     expect(continuous.resultOf('CB-2')).toEqual({ result: before, current: true });
   }, 90_000);
+
+  it('Analyse all analyses every continuous member again; an edited one comes back with new results', async () => {
+    const { continuous, documentStore, analysis, env } = await open();
+    const before = { cb1: continuous.resultOf('CB-1')!.result, cb2: continuous.resultOf('CB-2')!.result };
+    const sentBefore = env.requests.filter((r) => r.type === 'analyze-continuous').length;
+    documentStore.edit('Change span', (p) => replaceContinuousMember(p, withSpanLength(p.continuousMembers!.find((m) => m.id === 'CB-2')!, 0, 6500)));
+    await analysis.analyseAll();
+    // Both are sent again — the unchanged CB-1 too — and both are current when Analyse all is done.
+    const sent = env.requests.filter((r) => r.type === 'analyze-continuous').slice(sentBefore);
+    expect(sent.flatMap((r) => ('memberIds' in r ? r.memberIds : [])).sort()).toEqual(['CB-1', 'CB-2']);
+    expect(continuous.resultOf('CB-1')).toEqual({ result: expect.anything(), current: true });
+    expect(continuous.resultOf('CB-1')!.result).not.toBe(before.cb1);
+    expect(continuous.resultOf('CB-1')!.result.verdict).toEqual(before.cb1.verdict);
+    const cb2 = continuous.resultOf('CB-2')!;
+    expect(cb2.current).toBe(true);
+    expect(cb2.result.verdict.deflectionUtilisation!).toBeLessThan(before.cb2.verdict.deflectionUtilisation! * 0.8);
+  }, 120_000);
 
   it('puts core’s message for a span out of range on that span’s field, with the range', async () => {
     const { documentStore, analysis } = await open();

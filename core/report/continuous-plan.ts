@@ -3,7 +3,8 @@
  * moment and the shear envelopes (chart specs), planned with the rest of the report (figures.ts).
  */
 import type { ContinuousMemberResult } from '../assessment/continuous-verdict.ts';
-import { continuousElevationSvg, continuousMomentChart, continuousShearChart } from '../charts/continuous-report.ts';
+import { continuousEnvelopeChart } from '../charts/continuous.ts';
+import { continuousElevationSvg } from '../charts/continuous-elevation.ts';
 import type { ContinuousBeamDefinition } from '../continuous/definition.ts';
 import type { Project } from '../project/types.ts';
 import { REPORT_FONT_FAMILY } from './fonts.ts';
@@ -39,8 +40,8 @@ export function planContinuous(project: Project, results: readonly ContinuousMem
     if (analysed) {
       const drawing = continuousElevationSvg(result, definition.supports, definition.zones, system, { width, fontFamily: REPORT_FONT_FAMILY });
       elevation = add(`continuous-${index}/elevation`, { kind: 'svg', svg: drawing.svg, width: drawing.width, height: drawing.height, caption: drawing.caption });
-      moment = add(`continuous-${index}/moment`, { kind: 'chart', spec: continuousMomentChart(result, code, system), width, height: 250 });
-      if (result.checks) shear = add(`continuous-${index}/shear`, { kind: 'chart', spec: continuousShearChart(result, code, system), width, height: 230 });
+      moment = add(`continuous-${index}/moment`, { kind: 'chart', spec: continuousEnvelopeChart(result, 'moment', system, { design: code }), width, height: 250 });
+      if (result.checks) shear = add(`continuous-${index}/shear`, { kind: 'chart', spec: continuousEnvelopeChart(result, 'shear', system, { design: code }), width, height: 230 });
     }
     return [{ definition, index, anchor: `continuous-${index}`, result, elevation, moment, shear }];
   });

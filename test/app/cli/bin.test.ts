@@ -97,9 +97,11 @@ describe('the hingeline command', () => {
     // Ended by the interrupt (status 130 in a shell), not by finishing: no results were printed.
     expect(code === 130 || signal === 'SIGINT').toBe(true);
     expect(stdout).toBe('');
-    // Stopped, not finished: the 1,000 members take far longer. (A bound for a busy machine, where the
-    // parent may hear of the exit late; the interrupt arrives while the file is still being read
-    // there, and the command then stops before the analysis begins.)
-    expect(seconds).toBeLessThan(10);
+    // Stopped, not finished: a command that ignored the interrupt would print its results (above) or,
+    // on a busy machine, run on for minutes. The bound is for a hang, not a speed expectation: 10 s
+    // was exceeded (11.0 s) under load 25 on the shared 2-core machine, where the parent hears of
+    // the exit late; the interrupt may arrive while the file is still being read, and the command
+    // then stops before the analysis begins.
+    expect(seconds).toBeLessThan(45);
   }, 60_000);
 });

@@ -26,7 +26,7 @@ let text: PdfText;
 beforeAll(async () => {
   bytes = await renderReportBuffer(options);
   text = await pdfText(bytes);
-}, 60_000);
+}, 240_000); // a whole report: 60 s was exceeded under load 25 on the shared 2-core machine
 
 describe('PDF report (pdfmake in Node)', () => {
   it('numbers every page "Page x of y" with the right total', () => {
@@ -73,7 +73,7 @@ describe('PDF report (pdfmake in Node)', () => {
     const again = await renderReportBuffer(options);
     expect(again.equals(bytes)).toBe(true);
     expect(bytes.toString('latin1')).toContain('(D:20260314093000Z)');
-  }, 60_000);
+  }, 240_000);
 
   it('draws charts as images too, with the same text around them', async () => {
     const png = await renderReportBuffer({ ...options, chartFormat: 'png', chartWorkers: 0 });
@@ -81,7 +81,7 @@ describe('PDF report (pdfmake in Node)', () => {
     expect(t.pages.length).toBe(text.pages.length);
     expect(png.toString('latin1')).toMatch(/\/Subtype \/Image/);
     expect(t.all).toContain(words(say(results.members[0]!.governingMode, 'si')));
-  }, 60_000);
+  }, 240_000);
 
   it('refuses a report date that is not a date', async () => {
     await expect(renderReportBuffer({ ...options, generatedOn: 'last Tuesday' })).rejects.toThrow(/not an ISO 8601 date/);
@@ -105,7 +105,7 @@ describe('writeReport', () => {
     expect(written.subarray(0, 5).toString('latin1')).toBe('%PDF-');
     expect(written.equals(await renderReportBuffer({ ...options, memberIds: ['C-1'] }))).toBe(true);
     expect(await readdir(folder)).toEqual(['report.pdf']);
-  }, 60_000);
+  }, 240_000);
 });
 
 describe('names in Hebrew, Arabic, with emoji and symbols Roboto lacks (issue 17)', () => {
@@ -117,7 +117,7 @@ describe('names in Hebrew, Arabic, with emoji and symbols Roboto lacks (issue 17
   beforeAll(async () => {
     pdf = await renderReportBuffer({ ...options, project: named, results: namedResults, memberIds: named.members.slice(0, 3).map((m) => m.id) });
     read = await pdfText(pdf);
-  }, 120_000);
+  }, 240_000);
 
   it('embeds fonts that have their glyphs (Noto Sans Hebrew, Noto Sans Arabic, Noto Emoji, Noto Sans Math)', () => {
     const fonts = [...pdf.toString('latin1').matchAll(/\/BaseFont \/[A-Z]{6}\+(\S+)/g)].map((m) => m[1]);

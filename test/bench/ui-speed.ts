@@ -28,17 +28,24 @@ const median = (values: readonly number[]) => {
   return sorted.length % 2 === 1 ? sorted[mid]! : (sorted[mid - 1]! + sorted[mid]!) / 2;
 };
 
-/** Types `value` into the field and resolves with ms until the named mark (after the edit) and the frame after it. */
-async function editUntilMark(page: Page, selector: string, value: string, mark: string): Promise<{ mark: number; frame: number; sent: number | null; sections: number | null; detail: number | null }> {
-  return page.evaluate(async ({ selector, value, mark }) => {
+/**
+ * Types `value` into the field and resolves with ms until the named mark (after the edit) and the
+ * frame after it. With `afterResults`, the mark must follow the arrival of the new section curves
+ * (`hl:analysis:sections`): a redraw of the curves already on screen does not count.
+ */
+async function editUntilMark(page: Page, selector: string, value: string, mark: string, afterResults = false): Promise<{ mark: number; frame: number; sent: number | null; sections: number | null; detail: number | null }> {
+  return page.evaluate(async ({ selector, value, mark, afterResults }) => {
     const input = document.querySelector<HTMLInputElement>(selector);
     if (!input) throw new Error(`no field ${selector}`);
     input.focus();
     const t0 = performance.now();
     const seen = new Promise<number>((resolve) => {
+      let arrived = afterResults ? Infinity : t0;
       const observer = new PerformanceObserver((list) => {
         for (const entry of list.getEntries()) {
-          if (entry.name === mark && entry.startTime > t0) {
+          if (entry.startTime <= t0) continue;
+          if (entry.name === 'hl:analysis:sections') arrived = Math.min(arrived, entry.startTime);
+          if (entry.name === mark && entry.startTime >= arrived) {
             observer.disconnect();
             resolve(entry.startTime);
           }
@@ -55,7 +62,7 @@ async function editUntilMark(page: Page, selector: string, value: string, mark: 
     const sections = performance.getEntriesByName('hl:analysis:sections').find((e) => e.startTime > t0 && e.startTime <= at)?.startTime ?? null;
     const detail = performance.getEntriesByName('hl:analysis:detail').find((e) => e.startTime > t0 && e.startTime <= at)?.startTime ?? null;
     return { mark: at - t0, frame: performance.now() - t0, sent: sent === null ? null : sent - t0, sections: sections === null ? null : sections - t0, detail: detail === null ? null : detail - t0 };
-  }, { selector, value, mark });
+  }, { selector, value, mark, afterResults });
 }
 
 /** ms from a click on `selector` until `mark` and the frame after it. */
@@ -137,7 +144,7 @@ try {
   for (let i = 0; i < 21; i++) {
     // A new height each time (24.05 in, 26.10 in, 24.15 in, …): every edit is a new analysis.
     const height = ((i % 2 === 0 ? 24 : 26) + 0.05 * (i + 1)).toFixed(2);
-    const result = await editUntilMark(page, '[data-testid=shape-height]', height, 'hl:chart:moment-curvature');
+    const result = await editUntilMark(page, '[data-testid=shape-height]', height, 'hl:chart:moment-curvature', true);
     edits.push(result.mark);
     framed.push(result.frame);
     // The chart is drawn from the section curves sent ahead of the member result (or, were they

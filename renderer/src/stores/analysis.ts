@@ -235,6 +235,10 @@ export const useAnalysisStore = defineStore('analysis', () => {
       else if (reply.type === 'sections') {
         const inputs = inputsAtSend.get(reply.memberId);
         if (!inputs) return;
+        // The same curves may come twice (the sections worker and the member's own job): the first
+        // to arrive is kept, so that the chart is drawn once and the member result holds those objects.
+        const shown = previews.get(reply.memberId) ?? details.get(reply.memberId);
+        if (shown && sameInputs(shown.inputs, inputs)) return;
         previews.set(reply.memberId, { sections: reply.sections, inputs });
         if (reply.memberId === focusedMemberId.value) perfMark('hl:analysis:sections');
         sectionsRevision.value++;
@@ -328,6 +332,9 @@ export const useAnalysisStore = defineStore('analysis', () => {
   function schedule(delay?: number): void {
     if (timer) clearTimeout(timer);
     timer = null;
+    // The interactive worker is still busy with an earlier member analysis, which it cannot leave
+    // before it ends: the section curves of the member on screen come from their own worker now.
+    if (runningInteractive !== null) requestSections();
     const quiet = runningInteractive === null && performance.now() - lastRun > AUTO_ANALYSIS_DELAY_MS;
     if (delay === undefined && quiet) {
       lastRun = performance.now();
@@ -339,6 +346,43 @@ export const useAnalysisStore = defineStore('analysis', () => {
       lastRun = performance.now();
       void runInteractive();
     }, delay ?? AUTO_ANALYSIS_DELAY_MS);
+  }
+
+  let sectionsJob: RunningRequest | null = null;
+  let sectionsAgain = false;
+
+  /**
+   * The section curves of the member on screen for its current inputs, from the sections worker;
+   * one job at a time, the latest inputs when it ends (a burst of typing costs at most one stale
+   * job). Nothing is sent when they are there already or the member derives its sections (as-found
+   * condition, schemes: those come with the member result). A failure is left to the member's own
+   * analysis, which analyses the same sections and reports it.
+   */
+  function requestSections(): void {
+    const memberId = focusedMemberId.value;
+    const project = documentStore.project;
+    if (!memberId || !project) return;
+    if (sectionsJob) {
+      sectionsAgain = true;
+      return;
+    }
+    const raw = toRaw(project);
+    const member = raw.members.find((m) => m.id === memberId);
+    const inputs = memberInputs(raw, memberId);
+    if (!member || !inputs || member.asFound || (member.schemes?.length ?? 0) > 0) return;
+    const shown = previews.get(memberId) ?? details.get(memberId);
+    if (shown && sameInputs(shown.inputs, inputs)) return;
+    const part = subproject(raw, [memberId]);
+    perfMark('hl:analysis:sent');
+    const job = engines().sections.request({ type: 'sections', project: part, indexMap: indexMapOf(raw, part), memberId }, onReply(new Map([[memberId, inputs]]), { done: 0, total: 0 }));
+    sectionsJob = job;
+    const next = () => {
+      sectionsJob = null;
+      if (!sectionsAgain) return;
+      sectionsAgain = false;
+      requestSections();
+    };
+    job.finished.then(next, next);
   }
 
   async function runInteractive(): Promise<void> {

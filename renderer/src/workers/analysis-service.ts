@@ -169,6 +169,13 @@ export function createAnalysisService(post: (reply: WorkerReply) => void): Analy
           case 'analyze':
             await analyze(request);
             return;
+          case 'sections': {
+            // The short-term stage only, as sent ahead of a member result (the same function).
+            const sections = previewSections(request.project, request.memberId, request.indexMap, sectionCache(request.project));
+            if (sections) post({ type: 'sections', id: request.id, memberId: request.memberId, sections });
+            post({ type: 'done', id: request.id, elapsedMs: 0 });
+            return;
+          }
           case 'validate':
             validate(request.id, request.project, request.indexMap);
             post({ type: 'done', id: request.id, elapsedMs: 0 });

@@ -111,14 +111,22 @@ export class WorkerChannel {
 }
 
 let factory: WorkerFactory = browserWorkerFactory;
-let channels: { interactive: WorkerChannel; batch: WorkerChannel } | null = null;
+interface Channels {
+  readonly interactive: WorkerChannel;
+  readonly batch: WorkerChannel;
+  readonly sections: WorkerChannel;
+}
+let channels: Channels | null = null;
 
 /**
- * The app's two analysis workers: `interactive` (edited members, states at a curvature, file
- * parsing and writing) and `batch` (whole-project analysis and exports, stopped by terminating it).
+ * The app's analysis workers: `interactive` (edited members, states at a curvature, file parsing
+ * and writing), `batch` (whole-project analysis and exports, stopped by terminating it) and
+ * `sections` (the section curves of the member on screen while `interactive` is still busy with an
+ * earlier edit: a member analysis cannot be interrupted, a section's curves take a few ms). Each
+ * starts on first use.
  */
-export function engines(): { interactive: WorkerChannel; batch: WorkerChannel } {
-  channels ??= { interactive: new WorkerChannel(factory), batch: new WorkerChannel(factory) };
+export function engines(): Channels {
+  channels ??= { interactive: new WorkerChannel(factory), batch: new WorkerChannel(factory), sections: new WorkerChannel(factory) };
   return channels;
 }
 
@@ -126,6 +134,7 @@ export function engines(): { interactive: WorkerChannel; batch: WorkerChannel } 
 export function setWorkerFactory(next: WorkerFactory): void {
   channels?.interactive.terminate();
   channels?.batch.terminate();
+  channels?.sections.terminate();
   channels = null;
   factory = next;
 }

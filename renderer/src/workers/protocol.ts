@@ -66,6 +66,13 @@ export type WorkerRequest =
       /** Members analysed together (sharing section analyses) between two checks for cancellation. */
       readonly chunkSize: number;
     }
+  /**
+   * The section results (moment–curvature) of one member only, for its current inputs: sent to a
+   * worker of its own while the interactive worker is still busy with an earlier edit's member
+   * analysis, so that the section chart follows the edit at once. Answered with a `sections` reply
+   * (none for a member whose sections come from an as-found condition or a scheme), then `done`.
+   */
+  | { readonly type: 'sections'; readonly id: number; readonly project: Project; readonly indexMap: IndexMap | null; readonly memberId: string }
   | { readonly type: 'cancel'; readonly id: number; readonly target: number }
   | { readonly type: 'validate'; readonly id: number; readonly project: Project; readonly indexMap: IndexMap | null }
   | { readonly type: 'parse'; readonly id: number; readonly text: string }
@@ -99,6 +106,7 @@ export type WorkerReply =
    * The section results (moment–curvature) of the member on screen, sent before its member
    * analysis: the section chart follows an edit without waiting for the load–deflection analysis.
    * The same objects as the `sections` of the member result that follows (same inputs, same engine).
+   * Also the answer to a `sections` request.
    */
   | { readonly type: 'sections'; readonly id: number; readonly memberId: string; readonly sections: readonly SectionResult[] }
   /** A continuous member analysed (its full results: a few per project, each small). */

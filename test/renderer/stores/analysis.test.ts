@@ -10,7 +10,9 @@ import { setMemberField, setSectionField } from '../../../renderer/src/project/e
 import { useAnalysisStore } from '../../../renderer/src/stores/analysis.ts';
 import { useDocumentStore } from '../../../renderer/src/stores/document.ts';
 import type { WorkerRequest } from '../../../renderer/src/workers/protocol.ts';
-import { testEnvironment, until } from '../support.ts';
+import { setWorkerFactory } from '../../../renderer/src/workers/engine.ts';
+import { inProcessWorkerFactory } from '../../../renderer/src/workers/in-process.ts';
+import { recordingFactory, testEnvironment, until } from '../support.ts';
 
 type Analyze = Extract<WorkerRequest, { type: 'analyze' }>;
 const analyzeRequests = (requests: WorkerRequest[]) => requests.filter((r): r is Analyze => r.type === 'analyze');
@@ -64,6 +66,41 @@ describe('after an edit', () => {
     // The member result holds the very objects sent ahead: the chart is not drawn again for nothing.
     expect(analysis.detailOf('MB-1')!.result.sections).toBe(early);
     expect(analysis.sectionsOf('MB-1')).toBe(early);
+  }, 60_000);
+
+  it('shows the section curves of a new edit while the worker is still busy with the previous edit’s member analysis', async () => {
+    const { documentStore, analysis, env } = await openAndAnalyse();
+    analysis.focusedMemberId = 'MB-1';
+    await until(() => analysis.detailOf('MB-1')?.current === true, 'full results of MB-1');
+    // From now on the analysis jobs are held back: the interactive worker stays busy with the first
+    // edit (a member analysis cannot be interrupted), whatever the machine's speed.
+    const held: (() => void)[] = [];
+    setWorkerFactory(recordingFactory(env.requests, () => {
+      const worker = inProcessWorkerFactory();
+      const post = worker.postMessage.bind(worker);
+      worker.postMessage = (message) => (message.type === 'analyze' ? held.push(() => post(message)) : post(message));
+      return worker;
+    }));
+    const sectionId = documentStore.project!.members.find((m) => m.id === 'MB-1')!.zones[0]!.sectionId;
+    const before = analysis.sectionsOf('MB-1')!;
+    documentStore.edit('Change height', (p) => setSectionField(p, sectionId, ['shape', 'height'], 520));
+    await until(() => held.length === 1, 'the first edit’s job');
+    documentStore.edit('Change height', (p) => setSectionField(p, sectionId, ['shape', 'height'], 560));
+    await until(() => analysis.sectionsOf('MB-1') !== null, 'the second edit’s section curves');
+    const early = analysis.sectionsOf('MB-1')!;
+    // They came from the sections worker while the member analysis was still held.
+    expect(held.length).toBe(1);
+    expect(env.requests.filter((r) => r.type === 'sections').length).toBe(1);
+    expect(JSON.stringify(early)).not.toBe(JSON.stringify(before));
+    // The held job goes on, ends (stale), and the member result for the second edit keeps those very objects.
+    while (held.length > 0) held.shift()!();
+    await until(() => {
+      while (held.length > 0) held.shift()!();
+      return analysis.detailOf('MB-1')?.current === true;
+    }, 'the member result of the second edit');
+    expect(analysis.detailOf('MB-1')!.result.sections).toBe(early);
+    // The curves sent ahead are those of the member analysis of the second edit (same engine, same inputs).
+    expect(JSON.stringify(analysis.detailOf('MB-1')!.result.sections)).toBe(JSON.stringify(early));
   }, 60_000);
 
   it('re-analyses only the edited member, and the member on screen with its full results', async () => {

@@ -57,6 +57,19 @@ describe('analyze', () => {
     expect(replies.filter((r) => r.type === 'sections')).toHaveLength(1);
   }, 60_000);
 
+  it('answers a sections request with the curves the member analysis gives, then done; none for a member whose sections its condition derives', async () => {
+    const { replies, service: s } = service();
+    await s.handle({ type: 'sections', id: 11, project, indexMap: null, memberId: 'MB-1' });
+    expect(replies.map((r) => r.type)).toEqual(['sections', 'done']);
+    const sent = replies[0]!.type === 'sections' ? replies[0]!.sections : [];
+    expect(sent).toEqual(analyzeMembers(project, ['MB-1'])[0]!.sections);
+    // An as-found condition changes the sections: they come with the member result only.
+    const found = { ...project, members: project.members.map((m) => (m.id === 'MB-1' ? { ...m, asFound: { notes: 'surveyed' } } : m)) };
+    const other = service();
+    await other.service.handle({ type: 'sections', id: 12, project: found, indexMap: null, memberId: 'MB-1' });
+    expect(other.replies.map((r) => r.type)).toEqual(['done']);
+  }, 60_000);
+
   it('ignores ids that are not in the project', async () => {
     const { replies, service: s } = service();
     await s.handle({ type: 'analyze', id: 2, project, indexMap: null, memberIds: ['nope'], detailIds: [], validate: false, chunkSize: 4 });

@@ -118,3 +118,12 @@ export function subproject(project: Project, memberIds: readonly string[]): Proj
   // Continuous members are analysed on their own (stores/continuous.ts).
   return { ...project, members, sections, materials, continuousMembers: [] };
 }
+
+/**
+ * True when the member's sections are the library's own, so that their curves can be sent ahead
+ * of the member result; false when an as-found condition or a scheme derives others from them
+ * (those come with the member result only).
+ */
+export function sectionsGoAhead(member: MemberDefinition): boolean {
+  return !member.asFound && (member.schemes?.length ?? 0) === 0;
+}

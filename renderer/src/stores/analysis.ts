@@ -17,7 +17,7 @@ import type { MemberKeyResults } from '../../../core/project/key-results.ts';
 import type { Project } from '../../../core/project/types.ts';
 import type { BendingDirection } from '../../../core/section/model.ts';
 import type { SectionState } from '../../../core/section/results.ts';
-import { memberInputs, memberOwnMaterialIds, sameInputs, sectionMaterialIds, subproject } from '../project/dependencies.ts';
+import { memberInputs, memberOwnMaterialIds, sameInputs, sectionMaterialIds, sectionsGoAhead, subproject } from '../project/dependencies.ts';
 import { CancelledError, engines, type RunningRequest } from '../workers/engine.ts';
 import { indexMapOf } from '../workers/paths.ts';
 import type { CoveredItems, ItemDiagnostic, ItemList, WorkerReply } from '../workers/protocol.ts';
@@ -369,7 +369,7 @@ export const useAnalysisStore = defineStore('analysis', () => {
     const raw = toRaw(project);
     const member = raw.members.find((m) => m.id === memberId);
     const inputs = memberInputs(raw, memberId);
-    if (!member || !inputs || member.asFound || (member.schemes?.length ?? 0) > 0) return;
+    if (!member || !inputs || !sectionsGoAhead(member)) return;
     const shown = previews.get(memberId) ?? details.get(memberId);
     if (shown && sameInputs(shown.inputs, inputs)) return;
     const part = subproject(raw, [memberId]);

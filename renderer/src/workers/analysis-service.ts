@@ -22,6 +22,7 @@ import { solveEquilibrium } from '../../../core/section/equilibrium.ts';
 import { directionSign, type SectionModel } from '../../../core/section/model.ts';
 import { sectionState } from '../../../core/section/state.ts';
 import { placeDiagnostic, remapPaths } from './paths.ts';
+import { sectionsGoAhead } from '../project/dependencies.ts';
 import type { CoveredItems, IndexMap, WorkerReply, WorkerRequest } from './protocol.ts';
 import type { MemberResult } from '../../../core/assessment/results.ts';
 
@@ -61,7 +62,7 @@ function remapResult(result: MemberResult, map: IndexMap | null): MemberResult {
  */
 function previewSections(project: Project, memberId: string, map: IndexMap | null, analysis: SectionCache): SectionResult[] | null {
   const member = project.members.find((m) => m.id === memberId);
-  if (!member || member.asFound || (member.schemes?.length ?? 0) > 0) return null;
+  if (!member || !sectionsGoAhead(member)) return null;
   // The short-term stage only (what the chart shows); the member analysis completes it.
   const sections = [...new Set(member.zones.map((z) => z.sectionId))].map((id) => analysis.shortTerm(id)).map((s) => (s ? sectionResult(s) : null));
   if (sections.length === 0 || sections.some((s) => s === null)) return null;

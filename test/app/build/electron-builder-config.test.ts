@@ -28,7 +28,7 @@ describe('electron-builder configuration', () => {
     expect(config.appId).toBe('app.hingeline.desktop');
     expect(config.appId).toBe(APP_USER_MODEL_ID); // Windows groups taskbar items by this id
     expect(config.productName).toBe('Hingeline');
-  }, 30_000);
+  }, 240_000);
 
   it('targets AppImage and deb, NSIS, and dmg', async () => {
     const config = (await import('../../../build/electron-builder.config.ts')).default;

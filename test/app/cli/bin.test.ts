@@ -26,7 +26,7 @@ describe('the hingeline command', () => {
     const r = run('--help');
     expect(r.code).toBe(0);
     expect(r.stdout).toMatch(/Usage:\n {2}hingeline analyze FILE/);
-  }, 60_000);
+  }, 240_000);
 
   it('writes the demo, validates it and analyses a member on worker threads, from another folder', () => {
     expect(run('demo', '--out', 'demo.hingeline').code).toBe(0);
@@ -65,7 +65,7 @@ describe('the hingeline command', () => {
     expect(missing.code).toBe(2);
     expect(missing.stdout).toBe('');
     expect(missing.stderr).toBe('hingeline: cannot read nope.hingeline: no such file\n');
-  }, 60_000);
+  }, 240_000);
 
   it('never replaces a device, and exits 2 for --out in a missing folder or onto a folder', () => {
     expect(run('demo', '--out', 'd.hingeline', '--force').code).toBe(0);
@@ -79,7 +79,7 @@ describe('the hingeline command', () => {
     mkdirSync(join(work, 'out.pdf'));
     expect(run('report', 'd.hingeline', '--out', 'out.pdf')).toMatchObject({ code: 2, stderr: 'hingeline: cannot write out.pdf: it is a folder\n' });
     expect(run('demo', '--out', '/dev/null', '--force')).toMatchObject({ code: 2, stderr: expect.stringMatching(/^hingeline: cannot write \/dev\/null: \/dev\/null is a character device/) });
-  }, 60_000);
+  }, 240_000);
 
   it('stops within a second on Ctrl+C while analysing in this thread (--jobs 1)', async () => {
     // 1,000 members take well over ten seconds in one thread; the interrupt comes a few seconds in.
@@ -103,5 +103,5 @@ describe('the hingeline command', () => {
     // the exit late; the interrupt may arrive while the file is still being read, and the command
     // then stops before the analysis begins.
     expect(seconds).toBeLessThan(45);
-  }, 60_000);
+  }, 240_000);
 });

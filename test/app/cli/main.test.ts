@@ -151,7 +151,7 @@ describe('hingeline analyze', () => {
     await main(['analyze', 'p.hingeline', '--jobs', '1', '--format', 'json'], serial);
     await main(['analyze', 'p.hingeline', '--jobs', '2', '--format', 'json'], parallel);
     expect(parallel.out()).toBe(serial.out());
-  }, 60_000);
+  }, 240_000);
 
   it('shows a progress bar on stderr only when stderr is a terminal, and clears it', async () => {
     const text = serializeProject(twoMembers());

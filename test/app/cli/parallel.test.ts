@@ -34,7 +34,7 @@ describe('analyzeMembersParallel', () => {
     expect(progress.map((p) => p[0])).toEqual(Array.from({ length: project.members.length }, (_, i) => i + 1));
     expect(progress.every((p) => p[1] === project.members.length)).toBe(true);
     expect(new Set(progress.map((p) => p[2]))).toEqual(new Set(project.members.map((m) => m.id)));
-  }, 60_000);
+  }, 240_000);
 
   it('analyses only the members asked for, in project order, like the serial entry point', async () => {
     const project = generatedProject(12);
@@ -42,7 +42,7 @@ describe('analyzeMembersParallel', () => {
     const parallel = await analyzeMembersParallel(project, ids, { workers: 2 });
     expect(parallel.map((r) => r.memberId)).toEqual(['G-0002', 'G-0005', 'G-0009']);
     expect(parallel).toEqual(analyzeMembers(project, ids));
-  }, 60_000);
+  }, 240_000);
 
   it('returns nothing for no members without starting workers', async () => {
     await expect(analyzeMembersParallel(demoProject(), [])).resolves.toEqual([]);
@@ -72,7 +72,7 @@ describe('analyzeMembersParallel', () => {
     // Nothing is reported after the rejection.
     await new Promise((resolve) => setTimeout(resolve, 400));
     expect(seen).toBe(atRejection);
-  }, 60_000);
+  }, 240_000);
 
   it('refuses duplicate member ids, whose results could not be told apart', async () => {
     const project = demoProject();

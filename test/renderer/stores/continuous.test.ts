@@ -35,7 +35,7 @@ describe('continuous members in the app', () => {
     // Only what the members need is sent: no single-span members.
     expect(request && 'project' in request ? request.project.members : null).toEqual([]);
     expect(continuous.outdatedCount()).toBe(0);
-  }, 90_000);
+  }, 240_000);
 
   it('analyses an edited beam again, and undo shows the earlier result at once', async () => {
     const { continuous, documentStore } = await open();
@@ -48,7 +48,7 @@ describe('continuous members in the app', () => {
     expect(after.verdict.deflectionUtilisation!).toBeLessThan(before.verdict.deflectionUtilisation! * 0.8);
     documentStore.undo();
     expect(continuous.resultOf('CB-2')).toEqual({ result: before, current: true });
-  }, 90_000);
+  }, 240_000);
 
   it('Analyse all analyses every continuous member again; an edited one comes back with new results', async () => {
     const { continuous, documentStore, analysis, env } = await open();
@@ -77,5 +77,5 @@ describe('continuous members in the app', () => {
     expect(message!.path).toMatch(/^continuousMembers\[1\] "CB-2"\.spans\[1\]/);
     documentStore.undo();
     await until(() => analysis.diagnosticsOf('continuousMembers', 'CB-2').length === 0, 'the message gone after undo', 30_000);
-  }, 90_000);
+  }, 240_000);
 });

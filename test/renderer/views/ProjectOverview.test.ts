@@ -35,7 +35,7 @@ describe('ProjectOverview', () => {
     expect(first).toContain('7.20 m');
     expect(first).toMatch(/kN·m/);
     expect(first).toMatch(/OK|Check fails/);
-  }, 60_000);
+  }, 240_000);
 
   it('sorts by span, and the other way on a second click', async () => {
     const { wrapper, documentStore } = await analysedSI();
@@ -45,7 +45,7 @@ describe('ProjectOverview', () => {
     expect(wrapper.get('[role=columnheader][aria-sort=ascending]').text()).toContain('Span');
     await wrapper.get('[data-testid=sort-span]').trigger('click');
     expect(singleOrder(wrapper)).toEqual([...bySpan].reverse());
-  }, 60_000);
+  }, 240_000);
 
   it('filters by text and by status', async () => {
     const { wrapper } = await analysedSI();
@@ -57,7 +57,7 @@ describe('ProjectOverview', () => {
     const button = wrapper.findAll('.seg-btn').find((b) => b.text().startsWith('Check fails'))!;
     await button.trigger('click');
     expect(order(wrapper)).toHaveLength(failing);
-  }, 60_000);
+  }, 240_000);
 
   it('puts only the rows in view into the page for a project of 500 members', async () => {
     const env = testEnvironment();

@@ -27,7 +27,7 @@ describe('analyze', () => {
     expect(replies.filter((r) => r.type === 'progress').map((r) => r.done)).toEqual([1, 2, 3, 4]);
     expect(replies.some((r) => r.type === 'diagnostics' && r.covered.project)).toBe(true);
     expect(replies[replies.length - 1]!.type).toBe('done');
-  }, 60_000);
+  }, 240_000);
 
   it('stops at the next chunk when cancelled and returns the members not analysed', async () => {
     const { replies, service: s } = service();
@@ -41,7 +41,7 @@ describe('analyze', () => {
       expect(done).toBeGreaterThanOrEqual(1);
       expect(last.remaining).toEqual(ids.slice(done));
     }
-  }, 60_000);
+  }, 240_000);
 
   it('sends the section curves of the member on screen first, equal to those of its member result, and not twice', async () => {
     const { replies, service: s } = service();
@@ -55,7 +55,7 @@ describe('analyze', () => {
     expect(sections).toEqual(analyzeMembers(project, ['MB-1'])[0]!.sections);
     // Only for the member whose full results are wanted.
     expect(replies.filter((r) => r.type === 'sections')).toHaveLength(1);
-  }, 60_000);
+  }, 240_000);
 
   it('answers a sections request with the curves the member analysis gives, then done; none for a member whose sections its condition derives', async () => {
     const { replies, service: s } = service();
@@ -68,7 +68,7 @@ describe('analyze', () => {
     const other = service();
     await other.service.handle({ type: 'sections', id: 12, project: found, indexMap: null, memberId: 'MB-1' });
     expect(other.replies.map((r) => r.type)).toEqual(['done']);
-  }, 60_000);
+  }, 240_000);
 
   it('ignores ids that are not in the project', async () => {
     const { replies, service: s } = service();

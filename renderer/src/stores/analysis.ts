@@ -237,8 +237,11 @@ export const useAnalysisStore = defineStore('analysis', () => {
         if (!inputs) return;
         // The same curves may come twice (the sections worker and the member's own job): the first
         // to arrive is kept, so that the chart is drawn once and the member result holds those objects.
+        // Curves of the current inputs are never replaced by those of an earlier edit's job.
         const shown = previews.get(reply.memberId) ?? details.get(reply.memberId);
-        if (shown && sameInputs(shown.inputs, inputs)) return;
+        const project = documentStore.project;
+        const current = project ? memberInputs(toRaw(project), reply.memberId) : null;
+        if (shown && (sameInputs(shown.inputs, inputs) || (current !== null && sameInputs(shown.inputs, current)))) return;
         previews.set(reply.memberId, { sections: reply.sections, inputs });
         if (reply.memberId === focusedMemberId.value) perfMark('hl:analysis:sections');
         sectionsRevision.value++;

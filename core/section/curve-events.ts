@@ -15,6 +15,7 @@ export type EventName = 'cracking' | 'firstYield' | 'codeCrushing' | 'nominal' |
 
 export const KEY_EVENTS: readonly EventName[] = ['cracking', 'firstYield', 'codeCrushing', 'nominal'];
 export const ULTIMATE_EVENTS: readonly EventName[] = ['crushing', 'elementLimit', 'momentDrop'];
+const ALL_EVENTS: readonly EventName[] = [...KEY_EVENTS, ...ULTIMATE_EVENTS];
 
 /** Strain limits of the nominal point of Priestley, Calvi & Kowalsky (2007) §4.2 (from memory): εc = 0.004 or εs = 0.015. */
 export const NOMINAL_CONCRETE_STRAIN = 0.004;
@@ -101,7 +102,7 @@ export function curveEvents(model: SectionModel, direction: BendingDirection, op
     governing,
     evaluateAll(eq) {
       const out = {} as Record<EventName, number>;
-      for (const n of [...KEY_EVENTS, ...ULTIMATE_EVENTS]) out[n] = enabled[n] ? g[n](eq) : -1;
+      for (const n of ALL_EVENTS) out[n] = enabled[n] ? g[n](eq) : -1;
       return out;
     },
     causeOf(name, eq) {

@@ -3,6 +3,7 @@ import type { CompressionLaw } from '../types.ts';
 import { checkField, fieldPath, reportInconsistent, show } from '../checks.ts';
 import { en1992ParabolaExponent, en1992ParabolaPeakStrain, en1992ParabolaUltimateStrain } from '../code/en1992.ts';
 import { compressionLaw } from './compression-law.ts';
+import { positivePower } from './power.ts';
 import { EN1992_REFERENCE } from './en1992-nonlinear.ts';
 
 /** Inputs of en1992ParabolaRectangleCompression (MPa, strains dimensionless). */
@@ -73,7 +74,7 @@ export function en1992ParabolaRectangleCompression(p: En1992ParabolaRectanglePar
     model: 'en1992-parabola-rectangle',
     label: 'EN 1992-1-1 Eqs. (3.17)–(3.18), parabola–rectangle',
     references: [EN1992_REFERENCE],
-    curve: (strain) => (strain <= epsC2 ? p.strength * (1 - (1 - strain / epsC2) ** n) : p.strength),
+    curve: (strain) => (strain <= epsC2 ? p.strength * (1 - positivePower(1 - strain / epsC2, n)) : p.strength),
     endStrain: epsCu2,
     breakpoints: [epsC2, epsCu2],
     initialModulus: (n * p.strength) / epsC2,

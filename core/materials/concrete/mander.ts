@@ -3,6 +3,7 @@ import type { CompressionLaw } from '../types.ts';
 import type { ConfinementInput } from '../specs.ts';
 import { checkField, fieldPath, reportInconsistent, show } from '../checks.ts';
 import { compressionLaw } from './compression-law.ts';
+import { positivePower } from './power.ts';
 import { manderConfinement, type ManderConfinement } from './mander-confinement.ts';
 
 /** Citation for the report's reference list. */
@@ -58,10 +59,9 @@ function manderExponent(elasticModulus: number, peakStress: number, peakStrain: 
 }
 
 function manderCurve(peakStress: number, peakStrain: number, r: number): (strain: number) => number {
-  return (strain) => {
-    const x = strain / peakStrain;
-    return (peakStress * x * r) / (r - 1 + x ** r);
-  };
+  const scale = (peakStress * r) / peakStrain;
+  const shift = r - 1;
+  return (strain) => (scale * strain) / (shift + positivePower(strain / peakStrain, r));
 }
 
 function checkCommon(out: Diagnostic[], p: { compressiveStrength: number; elasticModulus?: number; peakStrain?: number }, path: string): boolean {

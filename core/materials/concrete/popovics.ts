@@ -2,6 +2,7 @@ import { throwIfErrors, type Diagnostic } from '../../diagnostics.ts';
 import type { CompressionLaw } from '../types.ts';
 import { checkField, fieldPath, reportInconsistent, show } from '../checks.ts';
 import { compressionLaw } from './compression-law.ts';
+import { positivePower } from './power.ts';
 
 /** Citation for the report's reference list. */
 export const POPOVICS_REFERENCE =
@@ -60,7 +61,7 @@ export function popovicsCompression(p: PopovicsParameters): CompressionLaw {
     references: [POPOVICS_REFERENCE],
     curve: (strain) => {
       const x = strain / p.peakStrain;
-      return (p.compressiveStrength * x * n) / (n - 1 + x ** n);
+      return (p.compressiveStrength * x * n) / (n - 1 + positivePower(x, n));
     },
     endStrain: p.crushingStrain,
     breakpoints: [p.crushingStrain],

@@ -2,6 +2,7 @@ import { throwIfErrors, type Diagnostic } from '../../diagnostics.ts';
 import type { CompressionLaw } from '../types.ts';
 import { checkField, fieldPath, reportInconsistent, show } from '../checks.ts';
 import { compressionLaw } from './compression-law.ts';
+import { positivePower } from './power.ts';
 
 /** Citation for the report's reference list. */
 export const THORENFELDT_REFERENCE =
@@ -70,7 +71,7 @@ export function thorenfeldtCollinsCompression(p: ThorenfeldtCollinsParameters): 
     curve: (strain) => {
       const x = strain / peakStrain;
       const k = x <= 1 ? 1 : kDescending;
-      return (p.compressiveStrength * n * x) / (n - 1 + x ** (n * k));
+      return (p.compressiveStrength * n * x) / (n - 1 + positivePower(x, n * k));
     },
     endStrain: p.crushingStrain,
     breakpoints: [peakStrain, p.crushingStrain],

@@ -50,7 +50,7 @@ function keyPointTable(f: ReportFormatter, curve: MomentCurvatureResult): Conten
     ]];
   });
   return dataTable({
-    widths: [58, 54, 52, 44, 44, 44, '*'],
+    widths: [58, 66, 52, 44, 44, 44, '*'],
     header: ['Key point', 'Curvature φ', 'Moment M', 'Neutral axis c', 'εc, comp. face', 'εs, extreme bar', 'Definition'],
     align: ['left', 'right', 'right', 'right', 'right', 'right', 'left'],
     rows,

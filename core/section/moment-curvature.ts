@@ -25,6 +25,7 @@ import { directionSign, tensionSteel, type BendingDirection, type ConcretePart, 
 import type { BilinearMethod, ConcreteStrainLimits, CurvePoint, CurveStatus, KeyPoint, KeyPointName, MomentCurvatureResult, UltimateCause } from './results.ts';
 import { ultimateStrainWords } from '../materials/build/concrete-defaults.ts';
 import { curvePointOf, sectionState } from './state.ts';
+import { crackingStrength } from './cracking-strength.ts';
 import { phrase, q } from '../units/phrase.ts';
 
 export interface MomentCurvatureOptions {
@@ -269,7 +270,6 @@ function curveResult(
   }
 
   const fy = keyPoints.firstYield;
-  const peak = keyPoints.peak;
   const cracking = keyPoints.cracking;
   if (!fy && status.kind === 'complete') {
     warnings.push('The tension steel does not yield before ultimate: the section is over-reinforced and fails by crushing of the concrete without warning.');
@@ -280,8 +280,9 @@ function curveResult(
       warnings.push(`At first yield the extreme concrete strain (${(fy.compressionFaceStrain * 1000).toFixed(2)} ‰) is already past the peak of the concrete curve (${(comp.material.peakStrain * 1000).toFixed(2)} ‰): the elastic first-yield relations do not apply.`);
     }
   }
-  if (cracking && peak && peak.name !== undefined && keyAt.peak === keyAt.cracking) {
-    warnings.push('The cracking moment exceeds the moment the cracked section can develop: the reinforcement is below the minimum and the section fails suddenly at cracking.');
+  const strength = status.kind === 'complete' ? crackingStrength({ points, keyPoints }) : null;
+  if (strength?.failsAsItCracks) {
+    warnings.push(`The section carries no more once ${strength.yields ? 'its tension steel yields' : 'it is cracked'} than the largest moment before: the reinforcement is below the minimum and the section fails suddenly at cracking.`);
   } else if (cracking && fy && fy.moment < cracking.moment) {
     warnings.push('The moment at first yield is below the cracking moment: light reinforcement, the section yields as soon as it cracks.');
   }

@@ -27,6 +27,16 @@ describe('report number formatting', () => {
     expect(si.length(55.5)).toBe('55.5 mm');
   });
 
+  it('groups the thousands of large stiffnesses and second moments so they can be read at a glance', () => {
+    // 1 kN·m² = 1e9 N·mm² (SI definition): 1e13 N·mm² = 10,000 kN·m²
+    expect(si.rigidity(1e13)).toBe('10,000 kN·m²');
+    // 1 kip = 4.448222 kN and 1 in = 25.4 mm (NIST SP 811 B.8): 1 kip·in² = 2,869.8 N·mm²; 4.7008e13 N·mm² = 16,380,000 kip·in²
+    expect(us.rigidity(4.7008e13)).toBe('16,380,000 kip·in²');
+    // 1 in⁴ = 25.4⁴ mm⁴ = 416,231 mm⁴ (NIST SP 811 B.8): 5.4e9 mm⁴ = 12,970 in⁴
+    expect(us.secondMoment(5.4e9)).toBe('12,970 in⁴');
+    expect(si.secondMoment(5.4e9)).toBe('5,400 ×10⁶ mm⁴');
+  });
+
   it('never prints NaN or Infinity, and prints numerical noise as zero', () => {
     expect(si.moment(Number.NaN)).toBe('—');
     expect(si.deflection(Number.POSITIVE_INFINITY)).toBe('—');

@@ -1,11 +1,16 @@
 /**
  * pdfmake 0.3 in Node: one configured instance (fonts by absolute path, no network, no file access
- * beyond the four font files) turning a report document definition into PDF bytes.
+ * beyond the report's font files, charts drawn from their figure programs) turning a report
+ * document definition into PDF bytes.
  */
+import { createRequire } from 'node:module';
 import pdfmake from 'pdfmake';
 import type { TDocumentDefinitions } from 'pdfmake/interfaces';
+import { installFigureDrawing } from '../../core/report/pdfmake-figures.ts';
 import type { DocumentDefinition } from '../../core/report/types.ts';
 import { nodeFontDescriptors, reportFontPaths } from './fonts.ts';
+
+const require = createRequire(import.meta.url);
 
 let configured = false;
 
@@ -16,6 +21,9 @@ function configure(): void {
   pdfmake.setUrlAccessPolicy(() => false);
   pdfmake.setLocalAccessPolicy((path: string) => allowed.has(path));
   pdfmake.setFonts(nodeFontDescriptors());
+  // Charts given as figure programs are drawn directly (core/report/pdfmake-figures.ts). The class
+  // is the one pdfmake's own modules load (the same file, so the same module instance).
+  installFigureDrawing((require('pdfmake/js/PDFDocument.js') as { default: { prototype: object } }).default);
   configured = true;
 }
 

@@ -97,6 +97,8 @@ export async function renderReportBuffer(options: ReportOptions): Promise<Buffer
     images: await renderReportImages(options, { format: options.chartFormat ?? 'auto', ...(options.chartWorkers !== undefined ? { workers: options.chartWorkers } : {}) }),
     meta: { softwareVersion: options.softwareVersion ?? SOFTWARE_VERSION, projectHash: projectHash(options.sourceText), generatedOn },
     fonts: nodeReportFontSet(),
+    // renderPdf's pdfmake draws charts from their figure programs.
+    chartPrograms: true,
   });
   return renderPdf(definition, generatedOn);
 }

@@ -9,7 +9,8 @@ import type { ReportFormatter } from './format.ts';
 import type { PageGeometry } from './layout.ts';
 import { COLOURS, STYLES } from './layout.ts';
 import type { ReferenceList } from './references.ts';
-import type { Content, ContentNode } from './types.ts';
+import { figureProgram } from './figure-pdf.ts';
+import type { Content, ContentNode, ReportFigure } from './types.ts';
 
 export interface WriteContext {
   readonly project: Project;
@@ -19,8 +20,10 @@ export interface WriteContext {
   readonly page: PageGeometry;
   /** Rendered figures supplied by the caller. */
   readonly images: Readonly<Record<string, string>>;
-  /** PNG images the document embeds, by id (filled while writing). */
+  /** PNG images and figure programs the document embeds, by id (filled while writing). */
   readonly documentImages: Record<string, string>;
+  /** Whether the host draws charts from figure programs (ReportInput.chartDrawing). */
+  readonly chartPrograms: boolean;
 }
 
 export const SUPPORT_WORDS: Readonly<Record<SupportType, string>> = {
@@ -31,8 +34,9 @@ export const SUPPORT_WORDS: Readonly<Record<SupportType, string>> = {
 };
 
 /**
- * A figure by id: an image node (PNG data URL, embedded once in the document), an svg node, or a
- * visible note when the caller did not supply it. Chart notes are printed underneath.
+ * A figure by id: an image node (PNG data URL, embedded once in the document; or a chart's figure
+ * program when the host draws those), an svg node, or a visible note when the caller did not supply
+ * it. Chart notes are printed underneath.
  */
 export function figureNode(ctx: WriteContext, id: string | null, caption?: string): Content[] {
   if (id === null) return [];
@@ -44,6 +48,13 @@ export function figureNode(ctx: WriteContext, id: string | null, caption?: strin
     ctx.documentImages[id] = supplied;
     out.push({ image: id, width: figure.width, height: figure.height, alignment: 'center' });
   } else if (supplied && /^\s*(<\?xml[^>]*\?>\s*)?<svg[\s>]/.test(supplied)) {
+    // A chart the recording canvas drew goes to the PDF directly where the host can (figure-pdf.ts).
+    const program = ctx.chartPrograms && figure.kind === 'chart' ? figureProgram(supplied) : null;
+    if (program) {
+      ctx.documentImages[id] = program;
+      out.push({ image: id, width: figure.width, height: figure.height, alignment: 'center' });
+      return withNotes(figure, out, caption);
+    }
     out.push({ svg: supplied, width: figure.width, height: figure.height, alignment: 'center' });
   } else {
     out.push({
@@ -52,6 +63,11 @@ export function figureNode(ctx: WriteContext, id: string | null, caption?: strin
       alignment: 'center',
     } satisfies ContentNode);
   }
+  return withNotes(figure, out, caption);
+}
+
+/** `out` with the chart's notes and the caption underneath. */
+function withNotes(figure: ReportFigure, out: Content[], caption: string | undefined): Content[] {
   const notes = figure.kind === 'chart' ? figure.spec.notes : [];
   for (const note of notes) out.push({ text: note, ...STYLES.note });
   const text = caption ?? (figure.kind === 'svg' ? figure.caption : '');

@@ -164,7 +164,7 @@ export function buildReportDocument(input: ReportInput): DocumentDefinition {
   const refs = new ReferenceList();
   const documentImages: Record<string, string> = {};
 
-  const ctx: WriteContext = { project, plan, f, refs, page, images: input.images, documentImages };
+  const ctx: WriteContext = { project, plan, f, refs, page, images: input.images, documentImages, chartPrograms: input.chartPrograms === true };
   // Chapters are written in reading order, so references are numbered in order of first citation.
   const method = methodChapter(ctx);
   const sections = plan.sections.flatMap((section) => sectionChapter(ctx, section));

@@ -35,6 +35,13 @@ export interface ReportInput {
    * with pdfmake (`reportFontDescriptors`).
    */
   readonly fonts?: ReportFontSet;
+  /**
+   * Whether the host draws charts from figure programs (core/report/figure-pdf.ts): true when it
+   * has installed `installFigureDrawing` (core/report/pdfmake-figures.ts) on the pdfmake it calls.
+   * Charts given as the recording canvas's SVG then go to the PDF as drawing operators instead of
+   * through pdfmake's SVG reader. Default false: svg nodes.
+   */
+  readonly chartPrograms?: boolean;
 }
 
 /** A figure the document needs: a chart to draw from its spec, or a ready SVG drawing. Sizes in points. */
@@ -87,7 +94,7 @@ export interface DocumentDefinition {
   readonly footer: (currentPage: number, pageCount: number) => Content | null;
   readonly styles: Readonly<Record<string, Style>>;
   readonly defaultStyle: Style;
-  /** PNG data URLs by image id (SVG figures are inline `svg` nodes). */
+  /** PNG data URLs and figure programs by image id (other SVG figures are inline `svg` nodes). */
   readonly images: Record<string, string>;
   readonly compress: boolean;
 }

@@ -31,9 +31,9 @@ function drawingOperators(pdf: Buffer): Record<'m' | 'l' | 'c' | 're' | 'S' | 'f
   const text = pdf.toString('latin1');
   for (const stream of text.matchAll(/stream\r?\n/g)) {
     const start = stream.index + stream[0].length;
-    // Page and form content only: font files (/Length1) and other typed streams (/Subtype) are skipped.
+    // Page and form content only (the charts are forms): font files (/Length1) and other typed streams (/Subtype) are skipped.
     const dictionary = text.slice(text.lastIndexOf(' obj', stream.index), stream.index);
-    if (/\/Length1|\/Subtype/.test(dictionary)) continue;
+    if (/\/Length1|\/Subtype \/(?!Form)/.test(dictionary)) continue;
     let content: string;
     try {
       content = inflateSync(pdf.subarray(start, text.indexOf('endstream', start))).toString('latin1');

@@ -2,7 +2,8 @@
  * The PDF report, made off the UI thread with the same code as the command line: analyse the
  * members (core/analysis), draw the charts with chart.js on core's recording canvas (chartSvg, the
  * same SVG as `hingeline report`), build the document definition (core/report, with the fallback
- * fonts for names in other scripts) and lay it out with pdfmake 0.3's browser build. Loaded only when
+ * fonts for names in other scripts) and lay it out with pdfmake 0.3's browser build, which draws the
+ * charts from their figure programs as the command line does. Loaded only when
  * a report is asked for; the page stops it (terminate) to cancel.
  */
 import pdfMakeModule from 'pdfmake/build/pdfmake.js';
@@ -12,6 +13,7 @@ import { chartSvg } from '../../../core/report/chart-svg.ts';
 import { buildReportDocument } from '../../../core/report/document.ts';
 import { reportCharts } from '../../../core/report/figures.ts';
 import { reportFontDescriptors } from '../../../core/report/fonts.ts';
+import { installFigureDrawing } from '../../../core/report/pdfmake-figures.ts';
 import type { MemberResult } from '../../../core/assessment/results.ts';
 import { chartJs } from '../charts/chartjs.ts';
 import { loadReportFonts, type BrowserReportFonts } from '../report/report-fonts.ts';
@@ -22,7 +24,7 @@ interface PdfMakeBrowser {
   setFonts(fonts: Record<string, unknown>): void;
   setUrlAccessPolicy(policy: (url: string) => boolean): void;
   setProgressCallback(callback: (fraction: number) => void): void;
-  createPdf(definition: unknown): { getBuffer(): Promise<Uint8Array> };
+  createPdf(definition: unknown): { getBuffer(): Promise<Uint8Array>; getStream(): Promise<object> };
 }
 
 interface WorkerScope {
@@ -36,10 +38,14 @@ let ready: Promise<BrowserReportFonts> | null = null;
 
 /** pdfmake's fonts (Roboto and the Noto fallbacks), loaded once per worker. */
 function prepare(): Promise<BrowserReportFonts> {
-  ready ??= loadReportFonts().then((loaded) => {
+  ready ??= loadReportFonts().then(async (loaded) => {
     pdfMake.addVirtualFileSystem(loaded.vfs);
     pdfMake.setFonts(reportFontDescriptors());
     pdfMake.setUrlAccessPolicy(() => false);
+    // Charts are drawn from their figure programs, as in the command line (core/report/pdfmake-figures.ts).
+    // The browser build does not export pdfmake's document class: an empty document shows it.
+    const probe = await pdfMake.createPdf({ content: [] }).getStream();
+    installFigureDrawing(probe.constructor as { prototype: object });
     return loaded;
   });
   return ready;
@@ -82,6 +88,7 @@ async function report(request: ReportRequest): Promise<void> {
     images,
     meta: { softwareVersion: request.softwareVersion, projectHash: await sha256(request.projectText), generatedOn: request.generatedOn },
     fonts,
+    chartPrograms: true,
   });
   progress('laying-out', 0, 1);
   let reported = -1;

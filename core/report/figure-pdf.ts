@@ -63,7 +63,7 @@ function fixed(v: number, digits = 3): string {
   return Object.is(r, -0) ? '0' : String(r);
 }
 
-const NUMBER = /^-?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?$/i;
+const NUMBER = /^-?(?:\d+\.?\d*|\.\d+)$/;
 
 function decodeXml(text: string): string {
   return text.replace(/&(amp|lt|gt|quot|apos|#\d+|#x[0-9a-f]+);/gi, (_, e: string) => {
@@ -130,81 +130,66 @@ interface Paint {
  * become cubic Béziers of at most a quarter turn each (SVG 1.1 F.6.5 centre parameterisation).
  */
 export function pathOperators(d: string): string | null {
-  const tokens = d.match(/[A-Za-z]|-?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?/gi);
-  if (!tokens) return '';
   const out: string[] = [];
-  let i = 0;
   let x = 0;
   let y = 0;
   let startX = 0;
   let startY = 0;
-  const numbers = (n: number): string[] | null => {
-    const args = tokens.slice(i, i + n);
-    if (args.length < n || args.some((a) => !NUMBER.test(a))) return null;
-    i += n;
-    return args;
-  };
-  let command = '';
-  while (i < tokens.length) {
-    const token = tokens[i]!;
-    if (/^[A-Za-z]$/.test(token)) {
-      command = token;
-      i++;
-      if (command === 'Z' || command === 'z') {
-        out.push('h');
-        x = startX;
-        y = startY;
-        continue;
-      }
-    } else if (command === '' || command === 'Z') return null;
-    switch (command) {
-      case 'M':
-      case 'L': {
-        const a = numbers(2);
-        if (!a) return null;
-        out.push(`${a[0]} ${a[1]} ${command === 'M' ? 'm' : 'l'}`);
+  let at = 0;
+  COMMAND.lastIndex = 0;
+  for (let m = COMMAND.exec(d); m; m = COMMAND.exec(d)) {
+    if (m.index !== at && d.slice(at, m.index).trim() !== '') return null;
+    at = COMMAND.lastIndex;
+    const command = m[1]!;
+    const args = m[2]!.trim() === '' ? [] : m[2]!.trim().split(/[\s,]+/);
+    if (!args.every((a) => NUMBER.test(a))) return null;
+    if (command === 'Z' || command === 'z') {
+      if (args.length > 0) return null;
+      out.push('h');
+      x = startX;
+      y = startY;
+      continue;
+    }
+    const arity = ARITY[command];
+    if (arity === undefined || args.length === 0 || args.length % arity !== 0) return null;
+    for (let k = 0; k < args.length; k += arity) {
+      const a = args.slice(k, k + arity);
+      // Pairs after a move are lines (SVG 1.1 §8.3.2).
+      const kind = command === 'M' && k > 0 ? 'L' : command;
+      if (kind === 'M' || kind === 'L') {
+        out.push(`${a[0]} ${a[1]} ${kind === 'M' ? 'm' : 'l'}`);
         x = Number(a[0]);
         y = Number(a[1]);
-        if (command === 'M') {
+        if (kind === 'M') {
           startX = x;
           startY = y;
-          command = 'L'; // further pairs after M are line segments
         }
-        break;
-      }
-      case 'C': {
-        const a = numbers(6);
-        if (!a) return null;
+      } else if (kind === 'C') {
         out.push(`${a.join(' ')} c`);
         x = Number(a[4]);
         y = Number(a[5]);
-        break;
-      }
-      case 'Q': {
-        const a = numbers(4)?.map(Number);
-        if (!a) return null;
-        const [qx, qy, ex, ey] = a as [number, number, number, number];
+      } else if (kind === 'Q') {
+        const [qx, qy, ex, ey] = a.map(Number) as [number, number, number, number];
         out.push(`${fixed(x + (2 / 3) * (qx - x))} ${fixed(y + (2 / 3) * (qy - y))} ${fixed(ex + (2 / 3) * (qx - ex))} ${fixed(ey + (2 / 3) * (qy - ey))} ${fixed(ex)} ${fixed(ey)} c`);
         x = ex;
         y = ey;
-        break;
-      }
-      case 'A': {
-        const a = numbers(7)?.map(Number);
-        if (!a) return null;
-        const [rx, ry, rotation, large, sweep, ex, ey] = a as [number, number, number, number, number, number, number];
+      } else {
+        const [rx, ry, rotation, large, sweep, ex, ey] = a.map(Number) as [number, number, number, number, number, number, number];
         if (rx !== ry || rotation !== 0) return null;
         out.push(...arcCurves(x, y, rx, large !== 0, sweep !== 0, ex, ey));
         x = ex;
         y = ey;
-        break;
       }
-      default:
-        return null;
     }
   }
+  if (d.slice(at).trim() !== '') return null;
   return out.join(' ');
 }
+
+/** A path command and its arguments. */
+const COMMAND = /([A-Za-z])([^A-Za-z]*)/g;
+/** Numbers each absolute command takes (relative commands and the rest are not written by the canvas). */
+const ARITY: Readonly<Record<string, number>> = { M: 2, L: 2, C: 6, Q: 4, A: 7 };
 
 /** A circular SVG arc from (x0, y0) to (x1, y1) as cubic Bézier operators (SVG 1.1 F.6.5, F.6.6). */
 function arcCurves(x0: number, y0: number, radius: number, large: boolean, sweep: boolean, x1: number, y1: number): string[] {

@@ -6,7 +6,7 @@ import { createPinia, setActivePinia, type Pinia } from 'pinia';
 import { createFakeHost, setHostForTesting, type FakeHost, type FakeHostSeed } from '../../renderer/src/host/index.ts';
 import { setWorkerFactory, type WorkerFactory, type WorkerLike } from '../../renderer/src/workers/engine.ts';
 import { inProcessWorkerFactory } from '../../renderer/src/workers/in-process.ts';
-import type { WorkerRequest } from '../../renderer/src/workers/protocol.ts';
+import type { WorkerReply, WorkerRequest } from '../../renderer/src/workers/protocol.ts';
 
 export interface TestEnvironment {
   readonly host: FakeHost;
@@ -50,12 +50,106 @@ export const noAnalysisFactory: WorkerFactory = () => {
   return worker;
 };
 
-/** A fresh Pinia, a fake host and in-process workers (`analyse: false`: no analyses), set as the app's. */
-export function testEnvironment(seed: FakeHostSeed = {}, options: { analyse?: boolean } = {}): TestEnvironment {
+/** Requests whose replies are recorded once and replayed (see `replayingFactory`). */
+type Replayable = Extract<WorkerRequest, { type: 'analyze' | 'analyze-continuous' }>;
+const isReplayable = (message: WorkerRequest): message is Replayable => message.type === 'analyze' || message.type === 'analyze-continuous';
+
+/**
+ * Every reply of each analysis job that ran to its end in this test file, by the job's request
+ * (its id aside). Module state: Vitest isolates the renderer's test files, so one per file.
+ */
+const recordedJobs = new Map<string, readonly WorkerReply[]>();
+
+/**
+ * In-process workers that run each analysis job once per test file and answer the same request
+ * again (same project, members, options; any id) with the replies recorded the first time — a
+ * fixture computed once and shared. The analysis is deterministic, so the replies are those the
+ * service would send again; they still arrive one per task, each a fresh copy with the new id, and a
+ * cancel or terminate stops them as it would stop the job (`cancelled` lists the members not yet
+ * answered). Store tests that open and analyse the whole demo in every test spent most of their time
+ * analysing it again.
+ */
+export function replayingFactory(inner: WorkerFactory = inProcessWorkerFactory): WorkerFactory {
+  return () => {
+    const worker = inner();
+    let stopped = false;
+    /** Jobs run for real, whose replies are being recorded. */
+    const recording = new Map<number, { key: string; replies: WorkerReply[] }>();
+    /** Jobs being answered from a recording, with whether a cancel came for them. */
+    const replaying = new Map<number, { cancelled: boolean }>();
+    const wrapped: WorkerLike = {
+      onmessage: null,
+      onerror: null,
+      postMessage(message) {
+        if (message.type === 'cancel' && replaying.has(message.target)) {
+          replaying.get(message.target)!.cancelled = true;
+          return;
+        }
+        if (isReplayable(message)) {
+          const key = JSON.stringify({ ...message, id: 0 });
+          const replies = recordedJobs.get(key);
+          if (replies) {
+            replay(message, replies);
+            return;
+          }
+          recording.set(message.id, { key, replies: [] });
+        }
+        worker.postMessage(message);
+      },
+      terminate() {
+        stopped = true;
+        worker.terminate();
+      },
+    };
+    const deliver = (reply: WorkerReply) => wrapped.onmessage?.({ data: reply } as MessageEvent<WorkerReply>);
+    worker.onmessage = (event) => {
+      const reply = event.data;
+      const job = recording.get(reply.id);
+      if (job) {
+        job.replies.push(structuredClone(reply));
+        if (reply.type === 'done') recordedJobs.set(job.key, job.replies);
+        if (reply.type === 'done' || reply.type === 'cancelled' || reply.type === 'error') recording.delete(reply.id);
+      }
+      deliver(reply);
+    };
+    worker.onerror = (event) => wrapped.onerror?.(event);
+
+    function replay(request: Replayable, replies: readonly WorkerReply[]): void {
+      const job = { cancelled: false };
+      replaying.set(request.id, job);
+      const answered = new Set<string>();
+      let next = 0;
+      const step = () => {
+        if (stopped) return;
+        if (job.cancelled) {
+          replaying.delete(request.id);
+          deliver({ type: 'cancelled', id: request.id, remaining: request.memberIds.filter((m) => !answered.has(m)) });
+          return;
+        }
+        const reply = { ...structuredClone(replies[next]!), id: request.id } as WorkerReply;
+        next += 1;
+        if (reply.type === 'member' || reply.type === 'continuous') answered.add(reply.memberId);
+        if (next === replies.length) replaying.delete(request.id);
+        deliver(reply);
+        if (next < replies.length) setTimeout(step, 0);
+      };
+      setTimeout(step, 0);
+    }
+    return wrapped;
+  };
+}
+
+/**
+ * A fresh Pinia, a fake host and in-process workers, set as the app's. `analyse: false`: no
+ * analyses; `replay: true`: an analysis job already run in this test file is answered with its
+ * recorded replies (`replayingFactory`).
+ */
+export function testEnvironment(seed: FakeHostSeed = {}, options: { analyse?: boolean; replay?: boolean } = {}): TestEnvironment {
   const host = createFakeHost(seed);
   setHostForTesting(host);
   const requests: WorkerRequest[] = [];
-  setWorkerFactory(recordingFactory(requests, options.analyse === false ? noAnalysisFactory : inProcessWorkerFactory));
+  const inner = options.analyse === false ? noAnalysisFactory : options.replay ? replayingFactory() : inProcessWorkerFactory;
+  setWorkerFactory(recordingFactory(requests, inner));
   const pinia = createPinia();
   setActivePinia(pinia);
   return { host, pinia, requests };

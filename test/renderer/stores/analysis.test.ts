@@ -17,8 +17,9 @@ import { recordingFactory, testEnvironment, until } from '../support.ts';
 type Analyze = Extract<WorkerRequest, { type: 'analyze' }>;
 const analyzeRequests = (requests: WorkerRequest[]) => requests.filter((r): r is Analyze => r.type === 'analyze');
 
+/** The demo opened and analysed whole (once per file for real: later tests get the same replies replayed). */
 async function openAndAnalyse(kind: 'si' | 'us' = 'si') {
-  const env = testEnvironment();
+  const env = testEnvironment({}, { replay: true });
   const documentStore = useDocumentStore();
   const analysis = useAnalysisStore();
   documentStore.openDemo(kind);

@@ -12,8 +12,9 @@ import { useContinuousStore } from '../../../renderer/src/stores/continuous.ts';
 import { useDocumentStore } from '../../../renderer/src/stores/document.ts';
 import { testEnvironment, until } from '../support.ts';
 
+/** The SI demo opened, its continuous beams analysed (for real once per file, then replayed). */
 async function open() {
-  const env = testEnvironment();
+  const env = testEnvironment({}, { replay: true });
   const documentStore = useDocumentStore();
   const analysis = useAnalysisStore();
   const continuous = useContinuousStore();

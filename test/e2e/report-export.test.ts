@@ -11,9 +11,10 @@ import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { analyzeProject } from '../../core/analysis.ts';
 import { demoProjectSI } from '../../core/project/demo.ts';
 import { serializeProject } from '../../core/project/file.ts';
+import { CAUTION_TEXT } from '../../core/report/layout.ts';
 import { renderReportBuffer } from '../../app/report/write-report.ts';
 import packageJson from '../../package.json' with { type: 'json' };
-import { pdfText } from '../app/report/pdf-text.ts';
+import { cautionOnlyPages, pdfText } from '../app/report/pdf-text.ts';
 import { ARTIFACTS, openApp, snap, startE2e, type E2eContext } from './support/environment.ts';
 
 let context: E2eContext;
@@ -102,6 +103,9 @@ describe('PDF export in the app', () => {
     const c = await pdfText(cli);
     expect(a.pages.length).toBe(c.pages.length);
     a.pages.forEach((text, i) => expect(text, `page ${i + 1}`).toBe(c.pages[i]));
+    // The demo report's layout (issue 15 item 12), checked here on the report rendered anyway: no
+    // page holds only the caution box.
+    expect(cautionOnlyPages(c, `${project.info.name} ${project.info.codeBasis} · SI units`, CAUTION_TEXT)).toEqual([]);
     // Same figures drawn the same way: the files differ at most by how each build of pdfmake writes them.
     // (3 %: the load–deflection figures hold about twice the points since the curves follow their
     // descending branch and the member is integrated at 120 or more stations; 2.5 % measured;

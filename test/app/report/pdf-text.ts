@@ -24,3 +24,16 @@ export async function pdfText(bytes: Uint8Array): Promise<PdfText> {
 export function words(text: string): string {
   return text.replace(/\s+/g, ' ').trim();
 }
+
+/**
+ * Pages (1-based) of a project report that hold nothing but the caution box besides the running
+ * header and footer (issue 15 item 12: the box closes a member chapter together with its
+ * limitations, never alone on a page). `header`: the running header's text.
+ */
+export function cautionOnlyPages(read: PdfText, header: string, cautionText: string): number[] {
+  return read.pages.flatMap((page, i) => {
+    // What is on the page besides the running header and footer.
+    const body = words(page).replace(header, '').replace(/Project \S+ · revision \S+ For review by a qualified engineer\. Local codes and licensed practice govern\. Page \d+ of \d+/, '').trim();
+    return body.replace(words(`Caution ${cautionText}`), '').trim() === '' ? [i + 1] : [];
+  });
+}

@@ -1,11 +1,9 @@
 import { createHash } from 'node:crypto';
-import { mkdtemp, readdir, readFile, rm } from 'node:fs/promises';
+import { mkdtemp, readdir, readFile, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { analyzeProject } from '../../../core/analysis.ts';
-import { demoProjectSI } from '../../../core/project/demo.ts';
-import { serializeProject } from '../../../core/project/file.ts';
 import { reportFormatter } from '../../../core/report/format.ts';
 import { say } from '../../../core/units/phrase.ts';
 import { CAUTION_TEXT } from '../../../core/report/layout.ts';
@@ -13,7 +11,7 @@ import { projectHash, renderReportBuffer, writeReport } from '../../../app/repor
 import { reportTestProject } from '../../core/report/fixtures.ts';
 import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
 import type { TextItem } from 'pdfjs-dist/types/src/display/api';
-import { pdfText, words, type PdfText } from './pdf-text.ts';
+import { cautionOnlyPages, pdfText, words, type PdfText } from './pdf-text.ts';
 
 const project = reportTestProject();
 const results = analyzeProject(project);
@@ -22,6 +20,10 @@ const options = { project, results, sourceText, generatedOn: '2026-03-14T09:30:0
 
 let bytes: Buffer;
 let text: PdfText;
+
+/** F-1's report alone (vector charts), rendered once for the tests that need it. */
+let oneMember: Promise<Buffer> | undefined;
+const oneMemberReport = () => (oneMember ??= renderReportBuffer({ ...options, memberIds: ['F-1'] }));
 
 beforeAll(async () => {
   bytes = await renderReportBuffer(options);
@@ -69,18 +71,14 @@ describe('PDF report (pdfmake in Node)', () => {
     for (const symbol of ['σ', 'φ', 'ε', 'Δ', '√', '‰', 'ℓ', 'μ']) expect(text.all).toContain(symbol);
   });
 
-  it('gives byte-identical files for identical inputs', async () => {
-    const again = await renderReportBuffer(options);
-    expect(again.equals(bytes)).toBe(true);
-    expect(bytes.toString('latin1')).toContain('(D:20260314093000Z)');
-  }, 240_000);
-
   it('draws charts as images too, with the same text around them', async () => {
-    const png = await renderReportBuffer({ ...options, chartFormat: 'png', chartWorkers: 0 });
-    const t = await pdfText(png);
-    expect(t.pages.length).toBe(text.pages.length);
+    // One member's report (its charts are of every kind a member chapter draws) in both formats.
+    const png = await renderReportBuffer({ ...options, memberIds: ['F-1'], chartFormat: 'png', chartWorkers: 0 });
+    const [t, vector] = await Promise.all([pdfText(png), oneMemberReport().then((pdf) => pdfText(pdf))]);
+    expect(t.pages.length).toBe(vector.pages.length);
     expect(png.toString('latin1')).toMatch(/\/Subtype \/Image/);
-    expect(t.all).toContain(words(say(results.members[0]!.governingMode, 'si')));
+    const f1 = results.members.find((m) => m.memberId === 'F-1')!;
+    expect(t.all).toContain(words(say(f1.governingMode, 'si')));
   }, 240_000);
 
   it('refuses a report date that is not a date', async () => {
@@ -97,13 +95,24 @@ describe('writeReport', () => {
     await rm(folder, { recursive: true, force: true });
   });
 
+  it('gives byte-identical files for identical inputs', async () => {
+    // The second rendering of the same inputs is the file the command line writes.
+    const out = join(folder, 'again.pdf');
+    await writeReport({ ...options, outPath: out });
+    expect((await readFile(out)).equals(bytes)).toBe(true);
+    expect(bytes.toString('latin1')).toContain('(D:20260314093000Z)');
+    await rm(out);
+  }, 240_000);
+
   it('writes the PDF to the path given, replacing an older file whole and leaving no temp file', async () => {
     const out = join(folder, 'report.pdf');
-    await writeReport({ ...options, outPath: out });
-    await writeReport({ ...options, memberIds: ['C-1'], outPath: out });
+    // An older, longer report at the path: the whole project's.
+    await writeFile(out, bytes);
+    await writeReport({ ...options, memberIds: ['F-1'], outPath: out });
     const written = await readFile(out);
     expect(written.subarray(0, 5).toString('latin1')).toBe('%PDF-');
-    expect(written.equals(await renderReportBuffer({ ...options, memberIds: ['C-1'] }))).toBe(true);
+    expect(written.length).toBeLessThan(bytes.length);
+    expect(written.equals(await oneMemberReport())).toBe(true);
     expect(await readdir(folder)).toEqual(['report.pdf']);
   }, 240_000);
 });
@@ -146,17 +155,20 @@ describe('names in Hebrew, Arabic, with emoji and symbols Roboto lacks (issue 17
   });
 });
 
-
-describe('layout of the SI demo report (issue 15 item 12)', () => {
-  it('has no page that holds only the caution box', async () => {
-    const si = demoProjectSI();
-    const read = await pdfText(await renderReportBuffer({ project: si, results: analyzeProject(si), sourceText: serializeProject(si), generatedOn: '2026-03-14T09:00:00Z' }));
-    const header = `${si.info.name} ${si.info.codeBasis} · SI units`;
-    for (const [i, page] of read.pages.entries()) {
-      // What is on the page besides the running header and footer.
-      const body = words(page).replace(header, '').replace(/Project \S+ · revision \S+ For review by a qualified engineer\. Local codes and licensed practice govern\. Page \d+ of \d+/, '').trim();
-      const withoutCaution = body.replace(words(`Caution ${CAUTION_TEXT}`), '').trim();
-      expect(withoutCaution, `page ${i + 1} holds only the caution box`).not.toBe('');
-    }
-  }, 300_000);
+// The SI demo report's layout (issue 15 item 12: no page holds only the caution box) is checked on
+// the demo report the end-to-end export test renders anyway (test/e2e/report-export.test.ts), rather
+// than rendering the 130-page report once more here; the check itself is tested here.
+describe('cautionOnlyPages (the layout check of issue 15 item 12)', () => {
+  it('finds a page that holds only the caution box, and only such a page', () => {
+    const header = `${project.info.name} ${project.info.codeBasis} · SI units`;
+    const footer = (n: number) => `Project HS-204 · revision B For review by a qualified engineer. Local codes and licensed practice govern. Page ${n} of 3`;
+    const pages = [
+      `${header}\nMember B-1 Limitations of the analysis\nCaution ${CAUTION_TEXT}\n${footer(1)}`,
+      `${header}\nCaution\n${CAUTION_TEXT}\n${footer(2)}`,
+      `${header}\nReferences\n${footer(3)}`,
+    ];
+    expect(cautionOnlyPages({ pages, all: words(pages.join(' ')) }, header, CAUTION_TEXT)).toEqual([2]);
+    // Checked on this project's own report too.
+    expect(cautionOnlyPages(text, header, CAUTION_TEXT)).toEqual([]);
+  });
 });

@@ -89,7 +89,9 @@ export default defineConfig({
           include: ['test/e2e/**/*.test.ts'],
           globalSetup: ['test/e2e/global-setup.ts'],
           ...BUDGET,
-          fileParallelism: false,
+          // Files run beside the other projects' files (each has its own pages in the one shared
+          // browser): one file at a time made the e2e files a tail of about three minutes under
+          // load on one core, after every other file had ended.
         },
       },
     ],

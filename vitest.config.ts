@@ -23,16 +23,24 @@ const BUDGET = { testTimeout: 300_000, hookTimeout: 600_000 } as const;
 const WORKERS = Math.max(2, availableParallelism());
 
 const CORE_TESTS = ['test/core', 'test/references'];
+const APP_TESTS = ['test/app'];
 
 /**
- * Core test files that replace a module (`vi.mock`, `vi.doMock`). The other core files share one
- * module graph per worker (see the `core` project), where a replaced module would reach every file
- * after this one through the modules that import it; these run isolated instead (`core-isolated`).
+ * Test files under `folders` that replace or spy on a module or a global (`vi.mock`, `vi.doMock`,
+ * `vi.spyOn`, `vi.stubGlobal`, `vi.stubEnv`) or pick their own environment. The other files of the
+ * core and app projects share one module graph per worker (see those projects), where a replaced
+ * module would reach every file after this one through the modules that import it; these run
+ * isolated instead (`core-isolated`, `app-isolated`).
  */
-const MOCKING_CORE_TESTS = CORE_TESTS.flatMap((folder) => readdirSync(fileURLToPath(new URL(folder, import.meta.url)), { recursive: true, encoding: 'utf8' })
-  .filter((file) => file.endsWith('.test.ts'))
-  .map((file) => `${folder}/${file.replaceAll('\\', '/')}`)
-  .filter((file) => /\bvi\.(?:do)?[mM]ock\(/.test(readFileSync(fileURLToPath(new URL(file, import.meta.url)), 'utf8'))));
+function replacingTests(folders: readonly string[]): string[] {
+  return folders.flatMap((folder) => readdirSync(fileURLToPath(new URL(folder, import.meta.url)), { recursive: true, encoding: 'utf8' })
+    .filter((file) => file.endsWith('.test.ts'))
+    .map((file) => `${folder}/${file.replaceAll('\\', '/')}`)
+    .filter((file) => /\bvi\.(?:(?:do)?[mM]ock|spyOn|stubGlobal|stubEnv)\(|@vitest-environment/.test(readFileSync(fileURLToPath(new URL(file, import.meta.url)), 'utf8'))));
+}
+
+const MOCKING_CORE_TESTS = replacingTests(CORE_TESTS);
+const MOCKING_APP_TESTS = replacingTests(APP_TESTS);
 
 /**
  * One Vitest run, projects that mirror where code runs: core (pure, Node; `core-isolated` for its
@@ -70,7 +78,20 @@ export default defineConfig({
           name: 'app',
           environment: 'node',
           ...BUDGET,
-          include: ['test/app/**/*.test.ts'],
+          // As core: the files of a worker share one module graph (importing core and app afresh
+          // for each file was about a third of the project's CPU time).
+          isolate: false,
+          include: APP_TESTS.map((folder) => `${folder}/**/*.test.ts`),
+          exclude: MOCKING_APP_TESTS,
+        },
+      },
+      {
+        resolve: { alias: { electron: electronStub } },
+        test: {
+          name: 'app-isolated',
+          environment: 'node',
+          ...BUDGET,
+          include: MOCKING_APP_TESTS.length > 0 ? MOCKING_APP_TESTS : ['test/app/no-mocking-tests'],
         },
       },
       {

@@ -24,23 +24,25 @@ const WORKERS = Math.max(2, availableParallelism());
 
 const CORE_TESTS = ['test/core', 'test/references'];
 const APP_TESTS = ['test/app'];
+const RENDERER_TESTS = ['test/renderer'];
 
 /**
  * Test files under `folders` that replace or spy on a module or a global (`vi.mock`, `vi.doMock`,
- * `vi.spyOn`, `vi.stubGlobal`, `vi.stubEnv`) or pick their own environment. The other files of the
- * core and app projects share one module graph per worker (see those projects), where a replaced
- * module would reach every file after this one through the modules that import it; these run
- * isolated instead (`core-isolated`, `app-isolated`).
+ * `vi.spyOn`, `vi.stubGlobal`, `vi.stubEnv`), fake the clock or pick their own environment. The
+ * other files of the core, app and renderer projects share one module graph per worker (see those
+ * projects), where a replaced module would reach every file after this one through the modules that
+ * import it; these run isolated instead (`core-isolated`, `app-isolated`, `renderer-isolated`).
  */
 function replacingTests(folders: readonly string[]): string[] {
   return folders.flatMap((folder) => readdirSync(fileURLToPath(new URL(folder, import.meta.url)), { recursive: true, encoding: 'utf8' })
     .filter((file) => file.endsWith('.test.ts'))
     .map((file) => `${folder}/${file.replaceAll('\\', '/')}`)
-    .filter((file) => /\bvi\.(?:(?:do)?[mM]ock|spyOn|stubGlobal|stubEnv)\(|@vitest-environment/.test(readFileSync(fileURLToPath(new URL(file, import.meta.url)), 'utf8'))));
+    .filter((file) => /\bvi\.(?:(?:do)?[mM]ock|spyOn|stubGlobal|stubEnv|useFakeTimers)\(|@vitest-environment/.test(readFileSync(fileURLToPath(new URL(file, import.meta.url)), 'utf8'))));
 }
 
 const MOCKING_CORE_TESTS = replacingTests(CORE_TESTS);
 const MOCKING_APP_TESTS = replacingTests(APP_TESTS);
+const MOCKING_RENDERER_TESTS = replacingTests(RENDERER_TESTS);
 
 /**
  * One Vitest run, projects that mirror where code runs: core (pure, Node; `core-isolated` for its
@@ -100,7 +102,20 @@ export default defineConfig({
           name: 'renderer',
           environment: 'happy-dom',
           ...BUDGET,
-          include: ['test/renderer/**/*.test.ts'],
+          // As core: one module graph per worker (Vue, Pinia, the views and core imported once);
+          // each test starts from a fresh Pinia, host and workers (test/renderer/support.ts).
+          isolate: false,
+          include: RENDERER_TESTS.map((folder) => `${folder}/**/*.test.ts`),
+          exclude: MOCKING_RENDERER_TESTS,
+        },
+      },
+      {
+        plugins: [vue()],
+        test: {
+          name: 'renderer-isolated',
+          environment: 'happy-dom',
+          ...BUDGET,
+          include: MOCKING_RENDERER_TESTS.length > 0 ? MOCKING_RENDERER_TESTS : ['test/renderer/no-mocking-tests'],
         },
       },
       {

@@ -55,13 +55,14 @@ type Replayable = Extract<WorkerRequest, { type: 'analyze' | 'analyze-continuous
 const isReplayable = (message: WorkerRequest): message is Replayable => message.type === 'analyze' || message.type === 'analyze-continuous';
 
 /**
- * Every reply of each analysis job that ran to its end in this test file, by the job's request
- * (its id aside). Module state: Vitest isolates the renderer's test files, so one per file.
+ * Every reply of each analysis job that ran to its end, by the job's request (its id aside).
+ * Module state: kept for the test files a Vitest worker runs (the renderer project shares one
+ * module graph per worker), so a job runs for real once per worker at most.
  */
 const recordedJobs = new Map<string, readonly WorkerReply[]>();
 
 /**
- * In-process workers that run each analysis job once per test file and answer the same request
+ * In-process workers that run each analysis job once and answer the same request
  * again (same project, members, options; any id) with the replies recorded the first time — a
  * fixture computed once and shared. The analysis is deterministic, so the replies are those the
  * service would send again; they still arrive one per task, each a fresh copy with the new id, and a
@@ -141,7 +142,7 @@ export function replayingFactory(inner: WorkerFactory = inProcessWorkerFactory):
 
 /**
  * A fresh Pinia, a fake host and in-process workers, set as the app's. `analyse: false`: no
- * analyses; `replay: true`: an analysis job already run in this test file is answered with its
+ * analyses; `replay: true`: an analysis job already run (in this worker) is answered with its
  * recorded replies (`replayingFactory`).
  */
 export function testEnvironment(seed: FakeHostSeed = {}, options: { analyse?: boolean; replay?: boolean } = {}): TestEnvironment {

@@ -17,7 +17,7 @@ import { recordingFactory, testEnvironment, until } from '../support.ts';
 type Analyze = Extract<WorkerRequest, { type: 'analyze' }>;
 const analyzeRequests = (requests: WorkerRequest[]) => requests.filter((r): r is Analyze => r.type === 'analyze');
 
-/** The demo opened and analysed whole (once per file for real: later tests get the same replies replayed). */
+/** The demo opened and analysed whole (for real once, then the same replies replayed). */
 async function openAndAnalyse(kind: 'si' | 'us' = 'si') {
   const env = testEnvironment({}, { replay: true });
   const documentStore = useDocumentStore();

@@ -12,7 +12,7 @@ import { useContinuousStore } from '../../../renderer/src/stores/continuous.ts';
 import { useDocumentStore } from '../../../renderer/src/stores/document.ts';
 import { testEnvironment, until } from '../support.ts';
 
-/** The SI demo opened, its continuous beams analysed (for real once per file, then replayed). */
+/** The SI demo opened, its continuous beams analysed (for real once, then replayed). */
 async function open() {
   const env = testEnvironment({}, { replay: true });
   const documentStore = useDocumentStore();

@@ -12,7 +12,7 @@ import ProjectOverview from '../../../renderer/src/views/ProjectOverview.vue';
 import { setWorkerFactory } from '../../../renderer/src/workers/engine.ts';
 import { silentFactory, testEnvironment } from '../support.ts';
 
-/** The SI demo analysed whole (for real once per file, then replayed) and the overview mounted. */
+/** The SI demo analysed whole (for real once, then replayed) and the overview mounted. */
 async function analysedSI() {
   const env = testEnvironment({}, { replay: true });
   const documentStore = useDocumentStore();

@@ -13,12 +13,12 @@ import { buildLineModel, type BeamModel, type ZoneResponse } from './beam-model.
 import type { BeamDefinition, MemberLoad } from './definition.ts';
 import { capacityCurve, type CapacityCurve } from './capacity.ts';
 import { peakDeflectionPosition } from './deflection.ts';
-import type { LoadingFields } from './equations.ts';
+import type { LoadingFields, SolverSettings } from './equations.ts';
 import { memberLayout } from './layout.ts';
 import { solveStatic } from './static.ts';
 import type { BeamResult, SectionResult } from './results.ts';
 import { serviceDeflections, type ServiceZone } from './service.ts';
-import { shiftStations, ULTIMATE_LOAD_FRACTION } from './spread.ts';
+import { engineOptions, shiftStations, ULTIMATE_LOAD_FRACTION } from './spread.ts';
 import { releasedMoment, toStaticLoad, totalLoad, type StaticLoad } from './statics.ts';
 import { memberProportionProblems } from './proportions.ts';
 import { serviceOutsideRange, ultimateOutsideRange } from './small-deflection.ts';
@@ -34,6 +34,8 @@ export interface MemberContext {
   readonly sectionIds: ReadonlySet<string>;
   /** Path of the member in the project file, e.g. `members[3] "B-12"`. */
   readonly path: string;
+  /** How the load–deflection equations are solved (internal; tests vary it, results must not depend on it). */
+  readonly solver?: SolverSettings;
 }
 
 /** What the assessment needs from the beam's analysis besides its plain result. */
@@ -244,7 +246,7 @@ export function analyzeBeam(member: BeamDefinition, context: MemberContext): Bea
     patternTotal: totalLoad(patternLoads),
   };
   const capacity = totalLoad(patternLoads) > 0
-    ? capacityCurve(beam, loading, member.capacity, controlAt)
+    ? capacityCurve(beam, loading, member.capacity, controlAt, context.solver ? { ...engineOptions(beam, member.capacity), solver: context.solver } : undefined)
     : null;
   if (!capacity) warnings.push('The load pattern for the load–deflection curve is empty (no live load for a live-only pattern): no capacity curve.');
   if (capacity && capacity.hinges.some((h) => h.localised && h.length < 5)) {

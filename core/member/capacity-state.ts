@@ -7,10 +7,10 @@
  * themselves (load control, rotation control past the peak) are core/member/capacity.ts.
  * Internal units: mm, N·mm, 1/mm, rad.
  */
-import { regulaFalsiEvent } from '../numeric/roots.ts';
+import { locateEvent, type SolvedPoint } from '../numeric/roots.ts';
 import type { BeamModel } from './beam-model.ts';
 import { deflectionShape } from './deflection.ts';
-import { Equations, newton, plasticLawOf, responseOf, scratch, type EngineOptions, type LoadingFields, type Memory } from './equations.ts';
+import { envelopeAfter, Equations, newton, plasticLawOf, responseOf, scratch, type EngineOptions, type LoadingFields, type Memory } from './equations.ts';
 import type { HingeRecord } from './hinges.ts';
 import { softeningAt, type PlasticLaw } from './plastic-law.ts';
 import type { LoadDeflectionPoint, MemberEvent, SpanDistribution } from './results.ts';
@@ -74,17 +74,44 @@ export class CapacityState {
     this.yieldedAt = { sag: new Float64Array(this.n).fill(Number.NaN), hog: new Float64Array(this.n).fill(Number.NaN) };
   }
 
-  /** The memory after the state in `eq` (its effective moments) on top of `base`. */
+  /** The memory after the state in `eq` (its effective moments) on top of `base`, inside the segments too (Memory). */
   private committed(base: Memory): Memory {
     const me = this.eq.effective;
+    const { beam, n } = this;
+    let sagInner = base.sagInner;
+    let hogInner = base.hogInner;
+    // Segments whose envelope bends: only where the plastic law reaches (below first yield the
+    // remembered moment changes nothing).
+    for (let k = 0; k < n - 1; k++) {
+      if (!(beam.x[k + 1]! > beam.x[k]!)) continue;
+      const zone = beam.zones[beam.segmentZone[k]!]!;
+      const sagLaw = zone.plastic?.sagging;
+      if (sagLaw && sagLaw.knotMoments.length > 0 && Math.max(me[k]!, me[k + 1]!, base.sag[k]!, base.sag[k + 1]!) > sagLaw.knotMoments[0]!) {
+        const before = base.sagInner?.[k];
+        const after = envelopeAfter(base.sag[k]!, base.sag[k + 1]!, before, me[k]!, me[k + 1]!);
+        if (after !== before) {
+          if (sagInner === base.sagInner) sagInner = base.sagInner ? [...base.sagInner] : new Array<Float64Array | undefined>(n - 1);
+          (sagInner as (Float64Array | undefined)[])[k] = after;
+        }
+      }
+      const hogLaw = zone.plastic?.hogging;
+      if (hogLaw && hogLaw.knotMoments.length > 0 && Math.max(-me[k]!, -me[k + 1]!, base.hog[k]!, base.hog[k + 1]!) > hogLaw.knotMoments[0]!) {
+        const before = base.hogInner?.[k];
+        const after = envelopeAfter(base.hog[k]!, base.hog[k + 1]!, before, -me[k]!, -me[k + 1]!);
+        if (after !== before) {
+          if (hogInner === base.hogInner) hogInner = base.hogInner ? [...base.hogInner] : new Array<Float64Array | undefined>(n - 1);
+          (hogInner as (Float64Array | undefined)[])[k] = after;
+        }
+      }
+    }
     const sag = Float64Array.from(base.sag);
     const hog = Float64Array.from(base.hog);
-    for (let i = 0; i < this.n; i++) {
+    for (let i = 0; i < n; i++) {
       const m = me[i]!;
       if (m > sag[i]!) sag[i] = m;
       if (-m > hog[i]!) hog[i] = -m;
     }
-    return { sag, hog };
+    return { sag, hog, ...(sagInner ? { sagInner } : {}), ...(hogInner ? { hogInner } : {}) };
   }
 
   /** Makes a state the base of the next step; notes where the sections first yielded. */
@@ -283,16 +310,26 @@ export class CapacityState {
   }
 
   /**
-   * The state on the event side of [a, b] where the event function g crosses zero (g(a) < 0 ≤ g(b)),
-   * searched on the load factor (numeric/roots.ts regulaFalsiEvent).
+   * Events whose search could not close its bracket (a solve failed on the way): the load factor or
+   * rotation of each, and the width of the bracket left. Reported with the result.
    */
-  locate(a: Snapshot, b: Snapshot, g: (s: Snapshot) => number): Snapshot {
-    return regulaFalsiEvent(
-      { x: a.lambda, state: a },
-      { x: b.lambda, state: b },
-      (lambda, from) => this.solveAt(lambda, from),
-      g,
-      { maxIterations: 60, xTolerance: (hi) => 1e-6 * Math.max(Math.abs(hi), 1e-12) },
-    ).state;
+  readonly looseEvents: { readonly at: number; readonly width: number }[] = [];
+
+  /**
+   * The state on the event side of [a, b] where the event function g crosses zero (g(a) < 0 ≤ g(b)),
+   * searched on the parameter x of `solve` — the load factor, or the rotation of the controlled hinge —
+   * to 1e-7 of it (numeric/roots.ts locateEvent); `before` a solved point before a, when known.
+   */
+  locate(a: SolvedPoint<Snapshot>, b: SolvedPoint<Snapshot>, g: (s: Snapshot) => number, solve: (x: number, from: Snapshot) => Snapshot | undefined, before?: SolvedPoint<Snapshot>): SolvedPoint<Snapshot> {
+    const found = locateEvent(a, b, solve, g, { maxIterations: 60, xTolerance: (hi) => EVENT_TOLERANCE * Math.max(Math.abs(hi), 1e-12), ...(before ? { before } : {}) });
+    if (!found.converged) this.looseEvents.push({ at: found.point.x, width: found.point.x - found.before.x });
+    return found.point;
   }
 }
+
+/**
+ * Relative width in the load factor (or controlled rotation) to which an event is located: well
+ * below the 1e-4 to which every event's load factor must not depend on the solver's path (tested in
+ * test/core/member/solver-independence.test.ts).
+ */
+export const EVENT_TOLERANCE = 1e-7;

@@ -23,11 +23,10 @@
  * The state of the analysis is one explicit object (CapacityState, core/member/capacity-state.ts);
  * this file holds the stages. Internal units: mm, N·mm, 1/mm, rad.
  */
-import { regulaFalsiEvent } from '../numeric/roots.ts';
 import type { BeamModel } from './beam-model.ts';
 import { CapacityState, type Snapshot } from './capacity-state.ts';
 import type { CapacitySettings } from './definition.ts';
-import { freshMemory, plasticLawOf, type EngineOptions, type LoadingFields } from './equations.ts';
+import { DEFAULT_SOLVER, freshMemory, plasticLawOf, type EngineOptions, type LoadingFields } from './equations.ts';
 import { describePosition, hingeReport, limitWords, localiseAt, stationPlastic, yieldedRuns } from './hinges.ts';
 import { LOCALISATION_TOLERANCE, plasticAt } from './plastic-law.ts';
 import type { LoadDeflectionPoint, MemberEvent, PlasticHinge, SpanDistribution } from './results.ts';
@@ -412,9 +411,13 @@ class CapacityAnalysis extends CapacityState {
   // --- load control ----------------------------------------------------------------------------------
 
   private loadControl(lambdaRef: number): void {
-    let step = lambdaRef / 20;
+    const scale = (this.options.solver ?? DEFAULT_SOLVER).stepScale;
+    let step = (scale * lambdaRef) / 20;
     let guard = 0;
     let previousState: Snapshot | undefined;
+    // The committed state before the current one: a point before the event for the event searches.
+    let lastCommitted: Snapshot | undefined;
+    const solveLambda = (lambda: number, from: Snapshot) => this.solveAt(lambda, from);
     while (!this.finished && guard++ < 4000) {
       // Events already reached at the current state (e.g. both supports of a symmetric beam together),
       // also once a mechanism has formed: rotation control needs every section at its top localised.
@@ -434,7 +437,13 @@ class CapacityAnalysis extends CapacityState {
         const before = previousState;
         guess = { ...state, redundants: state.redundants.map((v, i) => v + t * (v - before.redundants[i]!)) };
       }
-      const next = this.solveAt(target, guess) ?? (guess === state ? undefined : this.solveAt(target, state));
+      const solved = this.solveAt(target, guess) ?? (guess === state ? undefined : this.solveAt(target, state));
+      // A localised hinge whose curve is nearly flat has, just past its load, equilibria with small
+      // and with large rotations: a load step may land on the far one, skipping the path between (and
+      // with it the limit point where the load must fall). A step that rotates a hinge by more than
+      // a rotation-control step would is taken as no equilibrium, so the path is followed closely
+      // and, at a limit point, by the hinge's rotation.
+      const next = solved && this.rotatesTooFar(state, solved) ? undefined : solved;
       if (!next) {
         // With a localised hinge, failure to find equilibrium at a higher load is the limit point
         // itself: go straight to rotation control rather than shrinking the step far.
@@ -454,30 +463,40 @@ class CapacityAnalysis extends CapacityState {
         break;
       }
       let earliest: { ev: Watch; at: Snapshot } | undefined;
+      const before = lastCommitted && lastCommitted.lambda < state.lambda ? { x: lastCommitted.lambda, state: lastCommitted } : undefined;
       for (const ev of this.watches('load')) {
         if (ev.g(state) < 0 && ev.g(next) >= 0) {
-          const at = this.locate(state, next, ev.g);
+          const at = this.locate({ x: state.lambda, state }, { x: next.lambda, state: next }, ev.g, solveLambda, before).state;
           if (!earliest || at.lambda < earliest.at.lambda) earliest = { ev, at };
         }
       }
+      lastCommitted = state;
       if (!earliest) {
         previousState = state;
         this.commitState(next);
         this.record(next, 'integration');
-        step = Math.min(step * 1.25, lambdaRef / 12);
+        step = Math.min(step * 1.25, (scale * lambdaRef) / 12);
         continue;
       }
       previousState = undefined;
       this.commitState(earliest.at);
       this.record(this.state, 'integration');
       this.handle(earliest.ev, this.state);
-      step = Math.max(step / 2, lambdaRef / 200);
+      step = Math.max(step / 2, (scale * lambdaRef) / 200);
     }
     if (!this.mechanism && !this.finished && this.converged) {
       this.converged = false;
       this.status = `not converged: the load-control stage did not end within its step budget (${this.stressedWords(this.state)})`;
       this.failureCause = this.status;
     }
+  }
+
+  /** Whether a load step from `from` to `to` rotates a localised hinge by more than 1/24 of its capacity (the first rotation-control step). */
+  private rotatesTooFar(from: Snapshot, to: Snapshot): boolean {
+    return this.hinges.some((h, i) => {
+      const capacity = h.law.ultimateLocalised * h.length;
+      return capacity > 0 && (to.rotations.get(i) ?? 0) - (from.rotations.get(i) ?? 0) > capacity / 24;
+    });
   }
 
   // --- past the peak load: rotation control of the newest hinge ------------------------------------
@@ -514,8 +533,11 @@ class CapacityAnalysis extends CapacityState {
     }
     let theta = this.state.rotations.get(controlled) ?? hc.rotation;
     const limit = hc.law.ultimateLocalised * hc.length;
-    let dTheta = Math.max((limit - theta) / 24, limit * 1e-4);
+    const scale = (this.options.solver ?? DEFAULT_SOLVER).stepScale;
+    let dTheta = scale * Math.max((limit - theta) / 24, limit * 1e-4);
     let current = this.state;
+    // The committed point before `current` on this hinge's rotation (for the event searches).
+    let previousPoint: { x: number; state: Snapshot } | undefined;
     const solveTheta = (t: number, from: Snapshot): Snapshot | undefined => this.solveAtRotation(controlled, t, from);
     let progressed = false;
     for (let k = 0; k < 600 && !this.ultimate; k++) {
@@ -550,11 +572,11 @@ class CapacityAnalysis extends CapacityState {
         this.failureCause = `analysis stopped past the peak load (not converged: no equilibrium of the hinges' moments with their curves at θ = ${(target * 1000).toFixed(2)} mrad of ${peakWords})`;
         break;
       }
-      // Events in this step: searched on the controlled rotation, to 1e-6 of it.
+      // Events in this step: searched on the controlled rotation, to EVENT_TOLERANCE of it.
       let event: { ev: Watch; at: Snapshot; theta: number } | undefined;
       for (const ev of this.watches('rotation', controlled)) {
         if (!(ev.g(current) < 0 && ev.g(next) >= 0)) continue;
-        const found = regulaFalsiEvent({ x: theta, state: current }, { x: target, state: next }, solveTheta, ev.g, { maxIterations: 40, xTolerance: (hi) => 1e-6 * hi });
+        const found = this.locate({ x: theta, state: current }, { x: target, state: next }, ev.g, solveTheta, previousPoint && previousPoint.x < theta ? previousPoint : undefined);
         if (!event || found.x < event.theta) event = { ev, at: found.state, theta: found.x };
       }
       if (event) {
@@ -571,12 +593,13 @@ class CapacityAnalysis extends CapacityState {
         }
         continue;
       }
+      previousPoint = { x: theta, state: current };
       theta = target;
       current = next;
       progressed = true;
       this.commitState(current);
       this.record(current, 'mechanism');
-      dTheta = Math.min(dTheta * 1.5, Math.max((limit - theta) / 8, limit * 1e-4));
+      dTheta = Math.min(dTheta * 1.5, scale * Math.max((limit - theta) / 8, limit * 1e-4));
       if (theta >= limit * (1 - 1e-12)) {
         this.finishUltimate(controlled, current, limitWords(this.beam, hc));
         break;

@@ -30,10 +30,73 @@ export interface LoadingFields {
   readonly patternTotal: number;
 }
 
-/** The largest effective moment each station has carried in each sense (magnitudes, N·mm). */
+/**
+ * The largest effective moment each station has carried in each sense (magnitudes, N·mm), and inside
+ * each segment the largest moment carried there. The moment is linear between stations in every
+ * state, so inside segment k the remembered moment is the upper envelope of the lines of the states
+ * carried — convex and piecewise linear in t ∈ [0, 1]. Where that is not the straight line between
+ * the two stations' values (a segment whose one end was still loading when the other had begun to
+ * unload), `sagInner[k]`/`hogInner[k]` hold its interior breakpoints as [t₁, μ₁, t₂, μ₂, …]. Kept
+ * exactly, so that committing a state leaves that state in equilibrium: with the straight line
+ * instead, each commit added plastic curvature inside such segments, and results depended on how
+ * many load steps had been committed (2–4·10⁻⁴ of an event's load factor).
+ */
 export interface Memory {
   readonly sag: Float64Array;
   readonly hog: Float64Array;
+  readonly sagInner?: readonly (Float64Array | undefined)[];
+  readonly hogInner?: readonly (Float64Array | undefined)[];
+}
+
+/**
+ * The envelope of a segment's remembered moment after a state with moment `ma` → `mb` along it (in
+ * the sense's magnitudes): max(μ(t), m(t)), with μ from `mua`, `inner` (breakpoints) and `mub`.
+ * Returns the new interior breakpoints, or undefined when the envelope is a straight line.
+ */
+export function envelopeAfter(mua: number, mub: number, inner: Float64Array | undefined, ma: number, mb: number): Float64Array | undefined {
+  const count = inner ? inner.length / 2 : 0;
+  const tAt = (j: number) => (j === 0 ? 0 : j === count + 1 ? 1 : inner![2 * (j - 1)]!);
+  const muAt = (j: number) => (j === 0 ? mua : j === count + 1 ? mub : inner![2 * (j - 1) + 1]!);
+  let above = true;
+  let below = true;
+  for (let j = 0; j <= count + 1; j++) {
+    const d = ma + (mb - ma) * tAt(j) - muAt(j);
+    if (d < 0) above = false;
+    if (d > 0) below = false;
+  }
+  if (below) return inner;
+  if (above) return undefined;
+  const pts: number[] = [];
+  for (let j = 0; j <= count + 1; j++) {
+    const t = tAt(j);
+    const d = ma + (mb - ma) * t - muAt(j);
+    pts.push(t, Math.max(muAt(j), ma + (mb - ma) * t));
+    if (j <= count) {
+      const t2 = tAt(j + 1);
+      const d2 = ma + (mb - ma) * t2 - muAt(j + 1);
+      if ((d < 0 && d2 > 0) || (d > 0 && d2 < 0)) {
+        const tc = t + ((t2 - t) * d) / (d - d2);
+        pts.push(tc, ma + (mb - ma) * tc);
+      }
+    }
+  }
+  // Interior points where the envelope does not bend (collinear with their neighbours) are dropped.
+  const out: number[] = [];
+  let lastT = pts[0]!;
+  let lastM = pts[1]!;
+  for (let j = 2; j < pts.length - 2; j += 2) {
+    const t = pts[j]!;
+    const m = pts[j + 1]!;
+    const tn = pts[j + 2]!;
+    const mn = pts[j + 3]!;
+    if (!(t > lastT) || !(tn > t)) continue;
+    const onChord = lastM + ((mn - lastM) * (t - lastT)) / (tn - lastT);
+    if (Math.abs(m - onChord) <= 1e-12 * Math.max(Math.abs(m), Math.abs(onChord))) continue;
+    out.push(t, m);
+    lastT = t;
+    lastM = m;
+  }
+  return out.length > 0 ? Float64Array.from(out) : undefined;
 }
 
 /** A hinge where a section's deformation has localised (past its localisation moment). */
@@ -76,7 +139,28 @@ export interface EngineOptions {
   /** Tension shift a_l per zone and sense, mm (null: none). */
   readonly shift: { readonly sagging: Float64Array; readonly hogging: Float64Array } | null;
   readonly faces: readonly PenetrationFace[];
+  /** How the equations are solved (absent: DEFAULT_SOLVER); results must not depend on it. */
+  readonly solver?: SolverSettings;
 }
+
+/**
+ * Internal choices of the nonlinear solution that must not change its results beyond 1e-4 of any
+ * event's load factor (test/core/member/solver-independence.test.ts varies them). Not part of the
+ * project format.
+ */
+export interface SolverSettings {
+  /**
+   * How Newton's method shortens a step that does not reduce the residual: 'halving', or
+   * 'quadratic' — to the minimum of a quadratic model of the residual norm along the step (from its
+   * value at both ends and its slope −f0 at the start), kept within [0.1, 0.5] of the step
+   * (Dennis & Schnabel 1983, §6.3.2, from memory).
+   */
+  readonly lineSearch: 'halving' | 'quadratic';
+  /** Multiplies the load steps under load control and the rotation steps past the peak (1: as designed). */
+  readonly stepScale: number;
+}
+
+export const DEFAULT_SOLVER: SolverSettings = { lineSearch: 'halving', stepScale: 1 };
 
 export const NO_PLASTICITY: EngineOptions = { plastic: false, shift: null, faces: [] };
 
@@ -405,8 +489,8 @@ export class Equations {
     s.i0 = s.i1 = s.j00 = s.j01 = s.j11 = 0;
     h.i0 = h.i1 = h.j00 = h.j01 = h.j11 = 0;
     const mem = memory;
-    if (zone.plastic.sagging) addPlasticSegment(zone.plastic.sagging, me[k]!, me[k + 1]!, mem ? mem.sag[k]! : 0, mem ? mem.sag[k + 1]! : 0, s);
-    if (zone.plastic.hogging) addPlasticSegment(zone.plastic.hogging, -me[k]!, -me[k + 1]!, mem ? mem.hog[k]! : 0, mem ? mem.hog[k + 1]! : 0, h);
+    if (zone.plastic.sagging) addPlasticSegment(zone.plastic.sagging, me[k]!, me[k + 1]!, mem ? mem.sag[k]! : 0, mem ? mem.sag[k + 1]! : 0, s, mem?.sagInner?.[k]);
+    if (zone.plastic.hogging) addPlasticSegment(zone.plastic.hogging, -me[k]!, -me[k + 1]!, mem ? mem.hog[k]! : 0, mem ? mem.hog[k + 1]! : 0, h, mem?.hogInner?.[k]);
     out.i0 += s.i0 - h.i0;
     out.i1 += s.i1 - h.i1;
     // φ = −φp(−m) on the hogging side: dφ/dm = +φp′, so both parts add to the flexibility.
@@ -543,6 +627,7 @@ export function newton(
   controlled = -1,
 ): NewtonResult {
   const r = eq.r;
+  const quadratic = (eq.options.solver ?? DEFAULT_SOLVER).lineSearch === 'quadratic';
   let X = [...start.redundants];
   let lambda = start.lambda;
   let rot = [...start.rotations];
@@ -583,7 +668,7 @@ export function newton(
         accepted = true;
         break;
       }
-      factor /= 2;
+      factor *= quadratic ? Math.min(0.5, Math.max(0.1, currentNorm / (2 * trialNorm))) : 0.5;
     }
     if (!accepted) {
       free.forEach((h, i) => apply(h, rot[i]!));

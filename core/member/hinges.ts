@@ -195,6 +195,7 @@ function spreadRotation(beam: BeamModel, memory: Memory, sign: 1 | -1, from: num
   const out: TableIntegrals = { i0: 0, i1: 0, j00: 0, j01: 0, j11: 0 };
   let total = 0;
   const mem = sign > 0 ? memory.sag : memory.hog;
+  const innerOf = sign > 0 ? memory.sagInner : memory.hogInner;
   for (let k = 0; k < xs.length - 1; k++) {
     const a = Math.max(xs[k]!, from);
     const b = Math.min(xs[k + 1]!, to);
@@ -202,15 +203,30 @@ function spreadRotation(beam: BeamModel, memory: Memory, sign: 1 | -1, from: num
     if (!(b > a) || !(h > 0)) continue;
     const law = plasticLawOf(beam.zones[beam.segmentZone[k]!]!, sign);
     if (!law || law.knotMoments.length === 0) continue;
-    let ma = mem[k]!;
-    let mb = mem[k + 1]!;
-    if (scaleTo) {
-      const cap = scaleTo.cap(beam.segmentZone[k]!);
-      ma = Math.min(ma * scaleTo.factor, cap);
-      mb = Math.min(mb * scaleTo.factor, cap);
-    }
+    const cap = scaleTo ? scaleTo.cap(beam.segmentZone[k]!) : 0;
+    const scaled = (m: number) => (scaleTo ? Math.min(m * scaleTo.factor, cap) : m);
+    const lo = (a - xs[k]!) / h;
+    const hi = (b - xs[k]!) / h;
+    // The remembered moment piece by piece between its breakpoints inside the segment (Memory).
+    const inner = innerOf?.[k];
+    const count = inner ? inner.length / 2 : 0;
     out.i0 = 0;
-    addTableIntegrals(law.knotMoments, law.knotPlastic, ma, mb, (a - xs[k]!) / h, (b - xs[k]!) / h, false, out);
+    for (let j = 0; j <= count; j++) {
+      const t0 = j === 0 ? 0 : inner![2 * j - 2]!;
+      const t1 = j === count ? 1 : inner![2 * j]!;
+      const mu0 = scaled(j === 0 ? mem[k]! : inner![2 * j - 1]!);
+      const mu1 = scaled(j === count ? mem[k + 1]! : inner![2 * j + 1]!);
+      const p0 = Math.max(t0, lo);
+      const p1 = Math.min(t1, hi);
+      if (!(p1 > p0) || !(t1 > t0)) continue;
+      if (count === 0) {
+        addTableIntegrals(law.knotMoments, law.knotPlastic, mu0, mu1, p0, p1, false, out);
+        continue;
+      }
+      const slope = (mu1 - mu0) / (t1 - t0);
+      const base = mu0 - slope * t0;
+      addTableIntegrals(law.knotMoments, law.knotPlastic, base, base + slope, p0, p1, false, out);
+    }
     total += out.i0 * h;
   }
   return total;

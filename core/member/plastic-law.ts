@@ -271,28 +271,50 @@ function addTablePiece(xs: ArrayLike<number>, ys: ArrayLike<number>, xa: number,
  * remembered moment μ both linear in t (magnitudes in the law's sense). Where the section is loaded
  * (m > μ) the part is active in the Jacobian; where it has unloaded it is a constant of the state.
  */
-export function addPlasticSegment(law: PlasticLaw, ma: number, mb: number, mua: number, mub: number, out: TableIntegrals): void {
+export function addPlasticSegment(law: PlasticLaw, ma: number, mb: number, mua: number, mub: number, out: TableIntegrals, inner?: Float64Array): void {
   const xs = law.knotMoments;
   if (xs.length === 0) return;
   const my = xs[0]!;
+  // The remembered moment is convex along the segment: its largest value is at an end.
   if (Math.max(ma, mb, mua, mub) <= my) return;
-  const ys = law.knotPlastic;
-  const da = ma - mua;
-  const db = mb - mub;
-  if (da >= 0 && db >= 0) {
-    addTableIntegrals(xs, ys, ma, mb, 0, 1, true, out);
+  if (!inner) {
+    addPlasticPiece(xs, law.knotPlastic, ma, mb, mua, mub, 0, 1, out);
     return;
   }
-  if (da <= 0 && db <= 0) {
-    addTableIntegrals(xs, ys, mua, mub, 0, 1, false, out);
+  // Piece by piece between the breakpoints of the remembered moment, each a line μ0 + s·t.
+  let t0 = 0;
+  let mu0 = mua;
+  for (let j = 0; j <= inner.length; j += 2) {
+    const t1 = j < inner.length ? inner[j]! : 1;
+    const mu1 = j < inner.length ? inner[j + 1]! : mub;
+    if (t1 > t0) {
+      const slope = (mu1 - mu0) / (t1 - t0);
+      const base = mu0 - slope * t0;
+      addPlasticPiece(xs, law.knotPlastic, ma, mb, base, base + slope, t0, t1, out);
+    }
+    t0 = t1;
+    mu0 = mu1;
+  }
+}
+
+/** addPlasticSegment over t ∈ [t0, t1] with the remembered moment the line mua + (mub − mua)·t there. */
+function addPlasticPiece(xs: ArrayLike<number>, ys: ArrayLike<number>, ma: number, mb: number, mua: number, mub: number, t0: number, t1: number, out: TableIntegrals): void {
+  const d0 = t0 === 0 ? ma - mua : ma - mua + (mb - ma - (mub - mua)) * t0;
+  const d1 = t1 === 1 ? mb - mub : ma - mua + (mb - ma - (mub - mua)) * t1;
+  if (d0 >= 0 && d1 >= 0) {
+    addTableIntegrals(xs, ys, ma, mb, t0, t1, true, out);
     return;
   }
-  const tc = da / (da - db);
-  if (da > 0) {
-    addTableIntegrals(xs, ys, ma, mb, 0, tc, true, out);
-    addTableIntegrals(xs, ys, mua, mub, tc, 1, false, out);
+  if (d0 <= 0 && d1 <= 0) {
+    addTableIntegrals(xs, ys, mua, mub, t0, t1, false, out);
+    return;
+  }
+  const tc = t0 + ((t1 - t0) * d0) / (d0 - d1);
+  if (d0 > 0) {
+    addTableIntegrals(xs, ys, ma, mb, t0, tc, true, out);
+    addTableIntegrals(xs, ys, mua, mub, tc, t1, false, out);
   } else {
-    addTableIntegrals(xs, ys, mua, mub, 0, tc, false, out);
-    addTableIntegrals(xs, ys, ma, mb, tc, 1, true, out);
+    addTableIntegrals(xs, ys, mua, mub, t0, tc, false, out);
+    addTableIntegrals(xs, ys, ma, mb, tc, t1, true, out);
   }
 }

@@ -4,9 +4,9 @@
  *    superlinear near a simple root. Used for neutral-axis equilibrium and for locating events
  *    (cracking, yield, crushing) along a moment–curvature curve.
  *    @see R. P. Brent, "Algorithms for Minimization without Derivatives", 1973, ch. 4.
- *  - regula falsi with the Illinois modification on solved states (regulaFalsiEvent): where each
- *    evaluation is a nonlinear solve started from the nearest state, e.g. the load at which a
- *    member event happens. @see Dowell & Jarratt (1971), BIT 11, 168–174 (from memory).
+ *  - a bracketed secant on solved states (locateEvent): where each evaluation is a nonlinear solve
+ *    started from the nearer end of the bracket, e.g. the load at which a member event happens;
+ *    closed on the parameter, not on the size of the event function.
  */
 export interface RootResult {
   /** The root estimate (last iterate). */
@@ -148,52 +148,92 @@ export function bracketRoot(
   return undefined;
 }
 
-/** One end of a bracket of regulaFalsiEvent: the parameter and the state solved there. */
+/** One end of a bracket of locateEvent: the parameter and the state solved there. */
 export interface SolvedPoint<S> {
   readonly x: number;
   readonly state: S;
 }
 
+/** What locateEvent found. */
+export interface LocatedEvent<S> {
+  /** The bracketing point on the event side (g ≥ 0). */
+  readonly point: SolvedPoint<S>;
+  /** The point just before it (g < 0). */
+  readonly before: SolvedPoint<S>;
+  /** True when the bracket was closed to the tolerance; false when a solve failed or the budget ran out. */
+  readonly converged: boolean;
+  /** Number of solves spent. */
+  readonly solves: number;
+}
+
 /**
  * The state where an event function g crosses zero between two solved states (g(a) < 0 ≤ g(b)),
- * by regula falsi with the Illinois modification (superlinear, always bracketed). Each new point is
- * solved from the bracket's lower end; a failed solve ends the search. Returns the bracketing point
- * on the event side (g ≥ 0): at the latest once g < `closeEnough` (default 1e-5 — event functions
- * are ratios to thresholds known to five figures at best, and flat stretches would otherwise make
- * the search crawl), or once the bracket is narrower than xTolerance(x of its upper end).
+ * closed to a bracket narrower than xTolerance(x of its upper end) in the parameter itself — never
+ * by the size of g: an event function can be nearly flat past its root (a section on the steep band
+ * that spreads a cracking jump carries almost the same moment over a wide range of load), and a test
+ * on g there left the load factor of the event undetermined by several per cent.
+ *
+ * Each new point is predicted by a secant through the two latest points before the event (the state
+ * evolves smoothly up to the event, whereas past it g may have a kink), by regula falsi while only one
+ * such point is known, and by bisection when two predictions in a row have not halved the bracket.
+ * A prediction is placed a quarter of the tolerance towards the wider side of the bracket, so that
+ * an accurate one closes the bracket from both sides in two solves. Each point is solved from the
+ * nearer end of the bracket, from the other one when that fails, and nearer the lower end when
+ * both fail (a steep band can defeat a solve that crosses it).
+ * @param before a solved point before `a` with g(before) < g(a) < 0, when known (the step before)
  */
-export function regulaFalsiEvent<S>(
+export function locateEvent<S>(
   a: SolvedPoint<S>,
   b: SolvedPoint<S>,
   solve: (x: number, from: S) => S | undefined,
   g: (state: S) => number,
-  options: { readonly maxIterations: number; readonly xTolerance: (upper: number) => number; readonly closeEnough?: number },
-): SolvedPoint<S> {
-  const closeEnough = options.closeEnough ?? 1e-5;
+  options: { readonly maxIterations: number; readonly xTolerance: (upper: number) => number; readonly before?: SolvedPoint<S> },
+): LocatedEvent<S> {
   let lo = a;
   let hi = b;
   let gLo = g(lo.state);
   let gHi = g(hi.state);
-  let side = 0;
-  for (let it = 0; it < options.maxIterations && hi.x - lo.x > options.xTolerance(hi.x); it++) {
-    let t = gLo < 0 && gHi > 0 ? -gLo / (gHi - gLo) : 0.5;
-    if (!(t > 0.001 && t < 0.999)) t = 0.5;
-    const x = lo.x + t * (hi.x - lo.x);
-    const state = solve(x, lo.state);
-    if (state === undefined) break;
+  let prev = options.before;
+  let gPrev = prev ? g(prev.state) : Number.NaN;
+  let solves = 0;
+  const widths: number[] = [hi.x - lo.x];
+  for (let it = 0; it < options.maxIterations; it++) {
+    const width = hi.x - lo.x;
+    const tol = options.xTolerance(hi.x);
+    if (width <= tol) return { point: hi, before: lo, converged: true, solves };
+    let x: number;
+    const halved = widths.length < 3 || width <= 0.5 * widths[widths.length - 3]!;
+    if (!halved) x = lo.x + 0.5 * width;
+    else {
+      if (prev && gPrev < gLo && lo.x > prev.x) x = lo.x + ((lo.x - prev.x) * -gLo) / (gLo - gPrev);
+      else x = lo.x + (gHi > gLo ? (-gLo / (gHi - gLo)) * width : 0.5 * width);
+      if (!Number.isFinite(x)) x = lo.x + 0.5 * width;
+      x += x - lo.x > hi.x - x ? -0.25 * tol : 0.25 * tol;
+    }
+    x = Math.min(Math.max(x, lo.x + 0.25 * tol), hi.x - 0.25 * tol);
+    let state: S | undefined;
+    for (let tries = 0; tries < 4 && state === undefined; tries++) {
+      const nearLo = x - lo.x <= hi.x - x;
+      state = solve(x, (nearLo ? lo : hi).state);
+      solves++;
+      if (state === undefined) {
+        state = solve(x, (nearLo ? hi : lo).state);
+        solves++;
+      }
+      if (state === undefined) x = lo.x + 0.5 * (x - lo.x);
+    }
+    if (state === undefined) return { point: hi, before: lo, converged: false, solves };
     const gx = g(state);
     if (gx >= 0) {
       hi = { x, state };
       gHi = gx;
-      if (side === 1) gLo /= 2;
-      side = 1;
-      if (gx < closeEnough) break;
     } else {
+      prev = lo;
+      gPrev = gLo;
       lo = { x, state };
       gLo = gx;
-      if (side === -1) gHi /= 2;
-      side = -1;
     }
+    widths.push(hi.x - lo.x);
   }
-  return hi;
+  return { point: hi, before: lo, converged: hi.x - lo.x <= options.xTolerance(hi.x), solves };
 }

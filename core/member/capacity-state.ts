@@ -284,8 +284,13 @@ export class CapacityState {
     return plasticLawOf(this.beam.zones[this.beam.stationZone[i]!]!, sign);
   }
 
-  /** How far the most stressed station is from a section threshold (ratio of effective moment to threshold). */
-  maxRatio(s: Snapshot, pick: (resp: SectionResponse, law: PlasticLaw | null) => number | null, filter?: (i: number, sign: 1 | -1) => boolean): StationRatio {
+  /**
+   * How far the most stressed station is from a section threshold (ratio of effective moment to
+   * threshold). With `tie` > 0 the station returned is the leftmost of those within `tie` (relative)
+   * of the largest ratio: twins of a symmetric member reach a threshold together, and which of them
+   * is a hair ahead is rounding noise.
+   */
+  maxRatio(s: Snapshot, pick: (resp: SectionResponse, law: PlasticLaw | null) => number | null, filter?: (i: number, sign: 1 | -1) => boolean, tie = 0): StationRatio {
     this.restore(s);
     const me = this.eq.effective;
     const beam = this.beam;
@@ -304,6 +309,17 @@ export class CapacityState {
         best = ratio;
         at = i;
         sign = sg;
+      }
+    }
+    if (tie > 0 && at > 0) {
+      for (let i = 0; i < at; i++) {
+        const m = me[i]!;
+        const sg: 1 | -1 = m >= 0 ? 1 : -1;
+        if (filter && !filter(i, sg)) continue;
+        const zone = beam.zones[beam.stationZone[i]!]!;
+        const threshold = pick(responseOf(zone, sg), plasticLawOf(zone, sg));
+        if (threshold === null || !(threshold > 0)) continue;
+        if ((sg * m) / threshold >= best - tie * Math.abs(best)) return { ratio: best, station: i, sign: sg };
       }
     }
     return { ratio: best, station: at, sign };
@@ -333,3 +349,9 @@ export class CapacityState {
  * test/core/member/solver-independence.test.ts).
  */
 export const EVENT_TOLERANCE = 1e-7;
+
+/**
+ * Relative difference of load factors within which events of one kind count as simultaneous (the
+ * twins of a symmetric member): they are reported together, left to right, each naming the others.
+ */
+export const SIMULTANEOUS = 1e-6;

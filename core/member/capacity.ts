@@ -24,7 +24,7 @@
  * this file holds the stages. Internal units: mm, N·mm, 1/mm, rad.
  */
 import type { BeamModel } from './beam-model.ts';
-import { CapacityState, type Snapshot } from './capacity-state.ts';
+import { CapacityState, SIMULTANEOUS, type Snapshot } from './capacity-state.ts';
 import type { CapacitySettings } from './definition.ts';
 import { DEFAULT_SOLVER, freshMemory, plasticLawOf, type EngineOptions, type LoadingFields } from './equations.ts';
 import { describePosition, hingeReport, limitWords, localiseAt, stationPlastic, yieldedRuns } from './hinges.ts';
@@ -54,6 +54,13 @@ export interface CapacityCurve {
    */
   readonly secantPoint: { readonly loadFactor: number; readonly totalLoad: number; readonly deflection: number } | null;
 }
+
+/**
+ * How close (relative) to its threshold a twin of the section that reached it must be to be taken
+ * with it, in the same state: the sections of a symmetric member reach their thresholds together,
+ * and which is a hair ahead is rounding noise. The leftmost is reported first.
+ */
+const TWIN = 1e-7;
 
 /** An event the stages watch for: g < 0 before it, ≥ 0 at and after it. */
 interface Watch {
@@ -193,9 +200,9 @@ class CapacityAnalysis extends CapacityState {
   }
 
   /** The most stressed station, against first yield, outside the zones already reported. */
-  private newYield(s: Snapshot) {
+  private newYield(s: Snapshot, tie = 0) {
     const zones = this.reportedZones(s);
-    return this.maxRatio(s, (resp, law) => law?.yieldMoment ?? null, (i, sg) => (sg > 0 ? zones.sag : zones.hog)[i] === 0);
+    return this.maxRatio(s, (resp, law) => law?.yieldMoment ?? null, (i, sg) => (sg > 0 ? zones.sag : zones.hog)[i] === 0, tie);
   }
 
   private commitState(s: Snapshot): void {
@@ -238,9 +245,9 @@ class CapacityAnalysis extends CapacityState {
     return out;
   }
 
-  private localisationRatio(s: Snapshot) {
+  private localisationRatio(s: Snapshot, tie = 0) {
     const shadow = this.hingeShadow(s);
-    return this.maxRatio(s, (resp, law) => law?.localisationMoment ?? resp.peakMoment, (i, sg) => (sg > 0 ? shadow.sag : shadow.hog)[i] === 0);
+    return this.maxRatio(s, (resp, law) => law?.localisationMoment ?? resp.peakMoment, (i, sg) => (sg > 0 ? shadow.sag : shadow.hog)[i] === 0, tie);
   }
 
   private watches(stage: 'load' | 'rotation', controlled = -1): Watch[] {
@@ -334,12 +341,12 @@ class CapacityAnalysis extends CapacityState {
     const d = this.controlDeflection(s);
     const { beam } = this;
     if (ev.kind === 'cracking') {
-      const at = this.maxRatio(s, (resp) => resp.crackingMoment);
+      const at = this.maxRatio(s, (resp) => resp.crackingMoment, undefined, TWIN);
       const x = this.eventPosition(s, at.station, at.sign);
       this.cracking = { lambda: s.lambda, totalLoad: this.totalLoad(s), deflection: d };
       this.events.push({ kind: 'cracking', loadFactor: s.lambda, deflection: d, position: x, description: `first cracking at ${describePosition(x, beam.layout)}` });
     } else if (ev.kind === 'yield') {
-      const at = this.newYield(s);
+      const at = this.newYield(s, TWIN);
       const x = this.eventPosition(s, at.station, at.sign);
       const first = this.firstYield === null;
       if (first) this.firstYield = { lambda: s.lambda, totalLoad: this.totalLoad(s), deflection: d };
@@ -352,7 +359,7 @@ class CapacityAnalysis extends CapacityState {
       if (!this.cracking && this.maxRatio(s, (resp) => resp.crackingMoment).ratio >= 1 - 1e-6) {
         this.handle({ kind: 'cracking', g: () => 0 }, s);
       }
-      const at = this.localisationRatio(s);
+      const at = this.localisationRatio(s, TWIN);
       const critical = this.criticalSection(s, at.station, at.sign);
       const hinge = localiseAt(beam, this.restore(s), critical, at.station, at.sign, s.lambda, this.capacity);
       this.hinges.push(hinge);
@@ -370,7 +377,8 @@ class CapacityAnalysis extends CapacityState {
       this.codeUltimate = { lambda: s.lambda, deflection: d, position };
       this.events.push({ kind: 'code-ultimate', loadFactor: s.lambda, deflection: d, position, description: `code ultimate: the section at ${describePosition(position, beam.layout)} reaches the code's crushing strain` });
     } else if (ev.kind === 'capacity') {
-      this.finishUltimate(ev.hinge!, s, limitWords(beam, this.hinges[ev.hinge!]!));
+      const first = this.leftmostTwin(ev.hinge!, s);
+      this.finishUltimate(first, s, limitWords(beam, this.hinges[first]!));
     } else if (ev.kind === 'drop') {
       this.finishUltimate(-1, s, `the load has fallen to ${(this.fraction * 100).toFixed(0)} % of the peak on the descending branch`);
     } else {
@@ -396,14 +404,21 @@ class CapacityAnalysis extends CapacityState {
       const cc = this.law(i, sign)?.codeCrushing;
       if (!cc || cc.localised !== null) continue;
       const r = (sign * me[i]!) / cc.moment;
-      if (r > best) {
+      // The leftmost of twins (within TWIN): which is a hair ahead is rounding noise.
+      if (r > best * (1 + TWIN) || !Number.isFinite(best)) {
         best = r;
         at = this.beam.x[i]!;
       }
     }
+    let hinged = -Infinity;
     this.hinges.forEach((h, k) => {
       const cc = h.law.codeCrushing;
-      if (cc && cc.localised !== null && cc.localised > 0 && (s.rotations.get(k) ?? h.rotation) / h.length / cc.localised >= best) at = h.critical;
+      if (!cc || cc.localised === null || !(cc.localised > 0)) return;
+      const r = (s.rotations.get(k) ?? h.rotation) / h.length / cc.localised;
+      if (r >= best && (r > hinged * (1 + TWIN) || (r >= hinged * (1 - TWIN) && h.critical < at))) {
+        hinged = Math.max(hinged, r);
+        at = h.critical;
+      }
     });
     return at;
   }
@@ -422,7 +437,7 @@ class CapacityAnalysis extends CapacityState {
       // Events already reached at the current state (e.g. both supports of a symmetric beam together),
       // also once a mechanism has formed: rotation control needs every section at its top localised.
       // A twin within round-off of its top (a symmetric beam) localises with the first.
-      const due = this.watches('load').find((ev) => ev.g(this.state) >= (ev.kind === 'localisation' ? -1e-7 : 0));
+      const due = this.watches('load').find((ev) => ev.g(this.state) >= (ev.kind === 'localisation' || ev.kind === 'yield' ? -TWIN : 0));
       if (due) {
         this.handle(due, this.state);
         continue;
@@ -511,7 +526,7 @@ class CapacityAnalysis extends CapacityState {
     // Sections at their top together with the hinge just formed (a symmetric twin) localise now: the
     // rotation of the newest hinge cannot be controlled while another section sits on its top.
     for (let k = 0; k < this.n && !this.ultimate; k++) {
-      const due = this.watches('rotation', hinges.length - 1).find((ev) => ev.kind === 'localisation' && ev.g(this.state) >= -1e-7);
+      const due = this.watches('rotation', hinges.length - 1).find((ev) => ev.kind === 'localisation' && ev.g(this.state) >= -TWIN);
       if (!due) break;
       this.handle(due, this.state);
     }
@@ -601,7 +616,8 @@ class CapacityAnalysis extends CapacityState {
       this.record(current, 'mechanism');
       dTheta = Math.min(dTheta * 1.5, scale * Math.max((limit - theta) / 8, limit * 1e-4));
       if (theta >= limit * (1 - 1e-12)) {
-        this.finishUltimate(controlled, current, limitWords(this.beam, hc));
+        const first = this.leftmostTwin(controlled, current);
+        this.finishUltimate(first, current, limitWords(this.beam, hinges[first]!));
         break;
       }
     }
@@ -619,8 +635,28 @@ class CapacityAnalysis extends CapacityState {
     this.rotationControl();
   }
 
+  /**
+   * Of the hinges that reach the end of their curves together with hinge i (the same share of their
+   * rotation capacity within TWIN: twins of a symmetric member), the leftmost.
+   */
+  private leftmostTwin(i: number, s: Snapshot): number {
+    const share = (k: number) => {
+      const h = this.hinges[k]!;
+      return (s.rotations.get(k) ?? h.rotation) / (h.law.ultimateLocalised * h.length);
+    };
+    const level = share(i);
+    let best = i;
+    this.hinges.forEach((h, k) => {
+      if (h.law.ultimateLocalised > 0 && share(k) >= level * (1 - TWIN) && h.critical < this.hinges[best]!.critical) best = k;
+    });
+    return best;
+  }
+
   private finishUltimate(hinge: number, s: Snapshot, cause: string): void {
     if (this.ultimate) return;
+    // The code ultimate at the same state (a hinge whose curve ends where the code's crushing strain
+    // is reached) is recorded first, whichever of the two the event search met a hair earlier.
+    if (!this.codeUltimate && this.codeRatio(s) >= 1 - SIMULTANEOUS) this.handle({ kind: 'code', g: () => 0 }, s);
     let d = this.controlDeflection(s);
     // A descending branch that snaps back (the rest of the member unloads faster than the hinge
     // rotates, as after a brittle peak) cannot be followed under an imposed deflection: the load falls
@@ -641,6 +677,7 @@ class CapacityAnalysis extends CapacityState {
   private finish(controlPosition: number): CapacityCurve {
     const points = this.points;
     this.placePeakEvent();
+    this.groupSimultaneous();
     const last = this.state;
     this.restore(last);
     const penetration = this.penetrationReport(last);
@@ -662,6 +699,34 @@ class CapacityAnalysis extends CapacityState {
       failureCause: this.failureCause,
       secantPoint: this.secantPoint(),
     };
+  }
+
+  /**
+   * Events of one kind at the same load factor (within SIMULTANEOUS) are one moment of the analysis:
+   * put left to right, each naming the others (`together`, and in its words). Which of two twins the
+   * solver met first is rounding noise and must not decide what the engineer reads.
+   */
+  private groupSimultaneous(): void {
+    const events = this.events;
+    const layout = this.beam.layout;
+    for (let i = 0; i < events.length; ) {
+      let j = i + 1;
+      const e = events[i]!;
+      while (j < events.length && events[j]!.kind === e.kind && Math.abs(events[j]!.loadFactor - e.loadFactor) <= SIMULTANEOUS * Math.abs(e.loadFactor)) j++;
+      if (j - i > 1 && (e.kind === 'first-yield' || e.kind === 'hinge')) {
+        const group = events.slice(i, j).sort((a, b) => a.position - b.position);
+        // "first yield" names the first of all yields: it stays with the first of the group.
+        const firstWords = group.map((g) => g.description.startsWith('first yield'));
+        group.forEach((g, k) => {
+          const others = group.filter((o) => o !== g).map((o) => o.position);
+          let words = g.description;
+          if (firstWords.some(Boolean)) words = k === 0 ? words.replace(/^yield /, 'first yield ') : words.replace(/^first yield /, 'yield ');
+          const names = others.map((x) => describePosition(x, layout)).join(' and ');
+          events[i + k] = { ...g, loadFactor: e.loadFactor, description: `${words}; at the same load factor as at ${names}`, together: others };
+        });
+      }
+      i = j;
+    }
   }
 
   /**

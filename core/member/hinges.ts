@@ -298,8 +298,22 @@ export function hingeReport(input: HingeReportInput): PlasticHinge[] {
   }
   // Localisations with no yielded zone: sections that reached their peak before the steel yielded.
   for (const h of hinges) if (!used.has(h)) found.push(zoneHinge(input, h.sign, h.critical, h.critical, h.a, [h], h.formedAt));
+  // In order of formation; hinges that started at the same load factor (twins of a symmetric member,
+  // within 1e-6) share their place, left to right — which twin the solver met first is noise.
   found.sort((p, q) => p.yieldLoadFactor - q.yieldLoadFactor || p.position - q.position);
-  return found.map((h, k) => ({ ...h, order: k + 1 }));
+  const out: PlasticHinge[] = [];
+  for (let i = 0; i < found.length; ) {
+    const lead = found[i]!.yieldLoadFactor;
+    let j = i + 1;
+    while (j < found.length && found[j]!.yieldLoadFactor - lead <= 1e-6 * Math.abs(lead)) j++;
+    const group = found.slice(i, j).sort((p, q) => p.position - q.position);
+    for (const h of group) {
+      const others = group.filter((o) => o !== h).map((o) => o.position);
+      out.push({ ...h, order: i + 1, ...(others.length > 0 ? { together: others } : {}) });
+    }
+    i = j;
+  }
+  return out;
 }
 
 function zoneHinge(input: HingeReportInput, sign: 1 | -1, from: number, to: number, crit: number, local: readonly HingeRecord[], yieldLoadFactor: number): PlasticHinge & { order: number } {

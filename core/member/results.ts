@@ -36,6 +36,11 @@ export interface MemberEvent {
   /** Where it happens, mm from the left support. */
   readonly position: number;
   readonly description: string;
+  /**
+   * Positions (mm) of the other events of the same kind at the same load factor (twins of a
+   * symmetric member; within 1e-6), when there are any: such events are listed left to right.
+   */
+  readonly together?: readonly number[];
 }
 
 export interface LoadDeflectionPoint {
@@ -76,8 +81,13 @@ export interface PlasticHinge {
   readonly location: string;
   readonly direction: 'sagging' | 'hogging';
   readonly sectionId: string;
-  /** Order in which the hinges' zones started to yield (1 = first), and the load factor then. */
+  /**
+   * Order in which the hinges' zones started to yield (1 = first), and the load factor then. Hinges
+   * that started at the same load factor (within 1e-6: twins of a symmetric member) share their
+   * order and are listed left to right; `together` gives the positions of the others (mm).
+   */
   readonly order: number;
+  readonly together?: readonly number[];
   readonly yieldLoadFactor: number;
   /** Extent of the yielded zone at ultimate, mm from the member's left end. */
   readonly plasticZone: readonly [number, number];

@@ -87,7 +87,7 @@ export function memberDetail(r: MemberResult, system: UnitSystem): unknown {
       controlPosition: measured('spanLength', ld.controlPosition, system),
       status: ld.status,
       points: ld.points.map((p) => ({ loadFactor: pure(p.loadFactor), totalLoad: measured('force', p.totalLoad, system), deflection: d(p.deflection), stage: p.stage })),
-      events: ld.events.map((e) => ({ kind: e.kind, loadFactor: pure(e.loadFactor), deflection: d(e.deflection), position: measured('spanLength', e.position, system), description: e.description })),
+      events: ld.events.map((e) => ({ kind: e.kind, loadFactor: pure(e.loadFactor), deflection: d(e.deflection), position: measured('spanLength', e.position, system), together: (e.together ?? []).map((x) => measured('spanLength', x, system)), description: e.description })),
     },
     ductility: {
       firstYieldDeflection: d(r.ductility.firstYieldDeflection),
@@ -98,7 +98,9 @@ export function memberDetail(r: MemberResult, system: UnitSystem): unknown {
       failureCause: r.ductility.failureCause,
     },
     hinges: r.ductility.hinges.map((h) => ({
+      order: h.order,
       position: measured('spanLength', h.position, system),
+      together: (h.together ?? []).map((x) => measured('spanLength', x, system)),
       direction: h.direction,
       sectionId: h.sectionId,
       length: measured('sectionLength', h.length, system),

@@ -249,6 +249,9 @@ export function analyzeBeam(member: BeamDefinition, context: MemberContext): Bea
     ? capacityCurve(beam, loading, member.capacity, controlAt, context.solver ? { ...engineOptions(beam, member.capacity), solver: context.solver } : undefined)
     : null;
   if (!capacity) warnings.push('The load pattern for the load–deflection curve is empty (no live load for a live-only pattern): no capacity curve.');
+  for (const loose of capacity?.looseEvents ?? []) {
+    warnings.push(`An event of the load–deflection curve could not be located closely (the equilibrium could not be solved between the last steps): it is placed at ${loose.at.toPrecision(6)} (load factor, or hinge rotation past the peak) and lies up to ${loose.width.toPrecision(2)} before it.`);
+  }
   if (capacity && capacity.hinges.some((h) => h.localised && h.length < 5)) {
     warnings.push('A plastic hinge length is practically zero by the chosen expression (e.g. Priestley et al. inside the span with fu = fy): the descending branch of its section drops at once. Consider another hinge-length method.');
   }

@@ -53,6 +53,8 @@ export interface CapacityCurve {
    * nominal yield deflection; null when that load lies beyond a localisation.
    */
   readonly secantPoint: { readonly loadFactor: number; readonly totalLoad: number; readonly deflection: number } | null;
+  /** Events whose search could not close its bracket (a solve failed): where (λ or controlled rotation) and the bracket's width. */
+  readonly looseEvents: readonly { readonly at: number; readonly width: number }[];
 }
 
 /**
@@ -506,11 +508,11 @@ class CapacityAnalysis extends CapacityState {
     }
   }
 
-  /** Whether a load step from `from` to `to` rotates a localised hinge by more than 1/24 of its capacity (the first rotation-control step). */
+  /** Whether a load step from `from` to `to` rotates a localised hinge by more than 1/8 of its capacity (the longest rotation-control step). */
   private rotatesTooFar(from: Snapshot, to: Snapshot): boolean {
     return this.hinges.some((h, i) => {
       const capacity = h.law.ultimateLocalised * h.length;
-      return capacity > 0 && (to.rotations.get(i) ?? 0) - (from.rotations.get(i) ?? 0) > capacity / 24;
+      return capacity > 0 && (to.rotations.get(i) ?? 0) - (from.rotations.get(i) ?? 0) > capacity / 8;
     });
   }
 
@@ -547,6 +549,7 @@ class CapacityAnalysis extends CapacityState {
       if (this.distributions.length < 2) this.distributions.push(this.distribution('peak', this.state));
     }
     let theta = this.state.rotations.get(controlled) ?? hc.rotation;
+    const startTheta = theta;
     const limit = hc.law.ultimateLocalised * hc.length;
     const scale = (this.options.solver ?? DEFAULT_SOLVER).stepScale;
     let dTheta = scale * Math.max((limit - theta) / 24, limit * 1e-4);
@@ -614,7 +617,9 @@ class CapacityAnalysis extends CapacityState {
       progressed = true;
       this.commitState(current);
       this.record(current, 'mechanism');
-      dTheta = Math.min(dTheta * 1.5, scale * Math.max((limit - theta) / 8, limit * 1e-4));
+      // Steps grow to an eighth of the rotation left when the stage began: an eighth of the rotation
+      // left now made the steps shrink geometrically towards the limit (some 70 steps where 10 do).
+      dTheta = Math.min(dTheta * 1.5, scale * Math.max((limit - startTheta) / 8, limit * 1e-4));
       if (theta >= limit * (1 - 1e-12)) {
         const first = this.leftmostTwin(controlled, current);
         this.finishUltimate(first, current, limitWords(this.beam, hinges[first]!));
@@ -698,6 +703,7 @@ class CapacityAnalysis extends CapacityState {
       codeUltimate: this.codeUltimate,
       failureCause: this.failureCause,
       secantPoint: this.secantPoint(),
+      looseEvents: this.looseEvents,
     };
   }
 
@@ -808,6 +814,7 @@ class CapacityAnalysis extends CapacityState {
       codeUltimate: null,
       failureCause: reason,
       secantPoint: null,
+      looseEvents: this.looseEvents,
     };
   }
 }

@@ -157,7 +157,7 @@ describe('nominal yield deflection when the steel yields early', () => {
     points: points as unknown as CapacityCurve['points'], events: [], hinges: [], distributions: [], controlPosition: 3500, status: 'ultimate', converged: true,
     cracking: { lambda: 0.05, totalLoad: 5000, deflection: 5000 / 6000 },
     firstYield: { lambda: firstYieldLoad / 100_000, totalLoad: firstYieldLoad, deflection: firstYieldDeflection },
-    peak: { lambda: 1, deflection: 100 }, ultimate: { lambda: 1, deflection: 100 }, codeUltimate: null, failureCause: '', secantPoint: null,
+    peak: { lambda: 1, deflection: 100 }, ultimate: { lambda: 1, deflection: 100 }, codeUltimate: null, failureCause: '', secantPoint: null, looseEvents: [],
   });
   it('takes the secant through first yield in a determinate member, Park\u2019s 75 % secant in a redundant one', () => {
     // Priestley, Calvi & Kowalsky 2007 (from memory): nominal yield Δy = Δ′y·P/P′y = 10 × 100/60.

@@ -15,6 +15,7 @@ import { renderPdf } from '../../../app/report/pdf.ts';
 import { renderChartSvg } from '../../../app/report/render-chart.ts';
 import { renderReportImages } from '../../../app/report/write-report.ts';
 import { loadDeflectionChart } from '../../../core/charts/load-deflection.ts';
+import { demoProject, demoProjectSI } from '../../../core/project/demo.ts';
 import { reportTestProject } from '../../core/report/fixtures.ts';
 import { pdfText, words } from './pdf-text.ts';
 
@@ -75,6 +76,17 @@ describe('charts drawn from figure programs', () => {
     expect(direct.toString('latin1')).not.toMatch(/\/SMask|\/S \/Transparency/);
     expect(direct.length).toBeLessThan(throughSvg.length * 1.1);
   });
+
+  it('read every chart of both demos (continuous members in one, an existing beam with strengthening schemes in the other), so that none falls back to the SVG reader', async () => {
+    for (const demo of [demoProjectSI(), demoProject()]) {
+      const demoResults = analyzeProject(demo);
+      const figures = reportCharts({ project: demo, results: demoResults });
+      const images = await renderReportImages({ project: demo, results: demoResults }, { workers: 0 });
+      const chartIds = Object.keys(figures).filter((id) => figures[id]!.kind === 'chart');
+      expect(chartIds.length).toBeGreaterThan(30);
+      expect(chartIds.filter((id) => figureProgram(images[id]!) === null)).toEqual([]);
+    }
+  }, 240_000);
 
   it('write a chart that appears twice once, and draw it at both places', async () => {
     const svg = renderChartSvg(loadDeflectionChart(results.members[0]!, 'si'), 400, 200);

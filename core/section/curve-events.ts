@@ -15,7 +15,6 @@ export type EventName = 'cracking' | 'firstYield' | 'codeCrushing' | 'nominal' |
 
 export const KEY_EVENTS: readonly EventName[] = ['cracking', 'firstYield', 'codeCrushing', 'nominal'];
 export const ULTIMATE_EVENTS: readonly EventName[] = ['crushing', 'elementLimit', 'momentDrop'];
-const ALL_EVENTS: readonly EventName[] = [...KEY_EVENTS, ...ULTIMATE_EVENTS];
 
 /** Strain limits of the nominal point of Priestley, Calvi & Kowalsky (2007) §4.2 (from memory): εc = 0.004 or εs = 0.015. */
 export const NOMINAL_CONCRETE_STRAIN = 0.004;
@@ -101,9 +100,16 @@ export function curveEvents(model: SectionModel, direction: BendingDirection, op
     enabled,
     governing,
     evaluateAll(eq) {
-      const out = {} as Record<EventName, number>;
-      for (const n of ALL_EVENTS) out[n] = enabled[n] ? g[n](eq) : -1;
-      return out;
+      // One object literal of a fixed shape (KEY_EVENTS, then ULTIMATE_EVENTS): this runs at every curve step.
+      return {
+        cracking: enabled.cracking ? g.cracking(eq) : -1,
+        firstYield: enabled.firstYield ? g.firstYield(eq) : -1,
+        codeCrushing: enabled.codeCrushing ? g.codeCrushing(eq) : -1,
+        nominal: enabled.nominal ? g.nominal(eq) : -1,
+        crushing: enabled.crushing ? g.crushing(eq) : -1,
+        elementLimit: enabled.elementLimit ? g.elementLimit(eq) : -1,
+        momentDrop: enabled.momentDrop ? g.momentDrop(eq) : -1,
+      };
     },
     causeOf(name, eq) {
       if (name === 'momentDrop') return 'moment-drop';

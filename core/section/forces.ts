@@ -13,6 +13,7 @@
  */
 import { GAUSS_3_NODES, GAUSS_3_WEIGHTS } from '../numeric/quadrature.ts';
 import type { ConcretePart, SectionModel } from './model.ts';
+import type { ConcreteMaterial } from '../materials/types.ts';
 import { tabulatedLaw, type TabulatedLaw } from './law-table.ts';
 
 export interface SectionForces {
@@ -168,18 +169,60 @@ function forEachConcretePoint(model: SectionModel, eps0: number, phi: number, vi
  * keeps this continuous when shrinkage shifts the law (sustained load).
  */
 export function elementStress(element: SectionModel['elements'][number], eps: number): number {
-  let stress = element.material.stress(eps - element.initialStrain);
+  return compiledElementStress(compiledElement(element), eps);
+}
+
+/**
+ * What elementStress reads of an element, resolved once per element: its law, and for the concrete
+ * it displaces the law's table (law-table.ts) and the strain range where that concrete carries
+ * something (zeroRangeOf).
+ */
+interface CompiledElement {
+  readonly element: SectionModel['elements'][number];
+  readonly displaced: ConcreteMaterial | null;
+  readonly table: TabulatedLaw | null;
+  readonly tensionBelow: number;
+  readonly compressionAbove: number;
+}
+const compiledElements = new WeakMap<object, CompiledElement>();
+const compiledElementLists = new WeakMap<object, readonly CompiledElement[]>();
+
+function compiledElement(element: SectionModel['elements'][number]): CompiledElement {
+  let c = compiledElements.get(element);
+  if (c) return c;
   const displaced = element.displacedConcrete;
-  if (displaced) {
-    // The concrete's law read through its table (law-table.ts), as the concrete parts read it.
-    // Nothing to take away where the concrete carries nothing (cracked, crushed: zeroRangeOf).
-    const zero = zeroRangeOf(displaced);
-    if (eps > zero.tensionBelow && eps < zero.compressionAbove) {
-      const table = tabulatedLaw(displaced, splitStrains(displaced));
-      const branch = table.branchOf(eps);
-      const concrete = branch >= 0 ? table.stressIn(eps, branch) : displaced.stress(eps);
-      if (concrete > 0) stress -= concrete;
-    }
+  const zero = displaced ? zeroRangeOf(displaced) : null;
+  c = {
+    element,
+    displaced,
+    table: displaced ? tabulatedLaw(displaced, splitStrains(displaced)) : null,
+    tensionBelow: zero ? zero.tensionBelow : Infinity,
+    compressionAbove: zero ? zero.compressionAbove : -Infinity,
+  };
+  compiledElements.set(element, c);
+  return c;
+}
+
+/** The compiled form of every element of a model (cached per elements list). */
+function compiledElementsOf(model: SectionModel): readonly CompiledElement[] {
+  let list = compiledElementLists.get(model.elements);
+  if (!list) {
+    list = model.elements.map(compiledElement);
+    compiledElementLists.set(model.elements, list);
+  }
+  return list;
+}
+
+function compiledElementStress(c: CompiledElement, eps: number): number {
+  const element = c.element;
+  let stress = element.material.stress(eps - element.initialStrain);
+  // The displaced concrete's law read through its table (law-table.ts), as the concrete parts read
+  // it. Nothing to take away where the concrete carries nothing (cracked, crushed: zeroRangeOf).
+  if (eps > c.tensionBelow && eps < c.compressionAbove) {
+    const table = c.table!;
+    const branch = table.branchOf(eps);
+    const concrete = branch >= 0 ? table.stressIn(eps, branch) : c.displaced!.stress(eps);
+    if (concrete > 0) stress -= concrete;
   }
   return stress;
 }
@@ -383,9 +426,13 @@ const scratch = newSums(8);
 function integrateConcrete(model: SectionModel, eps0: number, phi: number): ConcreteSums {
   const acc = model.stiffeningGroups && model.stiffeningGroups.length > scratch.crackedAxial.length ? newSums(model.stiffeningGroups.length) : scratch;
   acc.axial = acc.moment = acc.magnitude = 0;
-  acc.crackedAxial.fill(0);
-  acc.crackedMoment.fill(0);
-  for (const part of model.concreteParts) integratePart(model, part, eps0, phi, acc);
+  const groups = model.stiffeningGroups ? model.stiffeningGroups.length : 0;
+  for (let g = 0; g < groups; g++) {
+    acc.crackedAxial[g] = 0;
+    acc.crackedMoment[g] = 0;
+  }
+  const parts = model.concreteParts;
+  for (let i = 0; i < parts.length; i++) integratePart(model, parts[i]!, eps0, phi, acc);
   return acc;
 }
 
@@ -425,13 +472,15 @@ export function sectionForces(model: SectionModel, eps0: number, phi: number, ou
       magnitude += (1 - k) * cracked;
     }
   }
-  for (const element of model.elements) {
-    const eps = eps0 + phi * (yg - element.depth);
-    const stress = elementStress(element, eps);
-    const force = stress * element.area;
+  const elements = compiledElementsOf(model);
+  for (let i = 0; i < elements.length; i++) {
+    const c = elements[i]!;
+    const depth = c.element.depth;
+    const eps = eps0 + phi * (yg - depth);
+    const force = compiledElementStress(c, eps) * c.element.area;
     axial += force;
     magnitude += force < 0 ? -force : force;
-    moment += force * (yg - element.depth);
+    moment += force * (yg - depth);
   }
   out.axial = axial;
   out.magnitude = magnitude;

@@ -241,7 +241,7 @@ interface ConcreteSums {
 
 /**
  * What integratePart reads of a concrete part, resolved once per part: its strips as flat numbers
- * (top, bottom, width at the top, width slope per mm of depth), the law's split strains, its table
+ * (top, bottom, width at the top, width slope per mm of depth), the split strains of its table
  * (law-table.ts), the strain ranges where it carries nothing and its cracking strain.
  */
 interface CompiledPart {
@@ -259,7 +259,8 @@ function compiledPart(part: ConcretePart): CompiledPart {
   let c = compiledParts.get(part);
   if (c) return c;
   const material = part.material;
-  const breakpoints = splitStrains(material);
+  // The table's split strains: the law's breakpoints and zero, and the cuts of its rational branches.
+  const table = tabulatedLaw(material, splitStrains(material));
   const zero = zeroRangeOf(material);
   const strips = new Float64Array(4 * part.strips.length);
   part.strips.forEach((strip, i) => {
@@ -270,8 +271,8 @@ function compiledPart(part: ConcretePart): CompiledPart {
   });
   c = {
     strips,
-    breakpoints: Float64Array.from(breakpoints),
-    table: tabulatedLaw(material, breakpoints),
+    breakpoints: table.splits,
+    table,
     tensionBelow: zero.tensionBelow,
     compressionAbove: zero.compressionAbove,
     cracked: crackedBelow(material),
@@ -332,38 +333,31 @@ function integratePart(model: SectionModel, part: ConcretePart, eps0: number, ph
       // ends, recomputed from depths, may fall a rounding error outside the range).
       if (epsMid <= tensionBelow || epsMid >= compressionAbove) continue;
       // The piece lies inside one branch of the law: read it from the law's table (law-table.ts).
+      // Rational branches that 3-point Gauss cannot integrate whole are cut by the table's split
+      // strains (law-table.ts splits): 3-point Gauss over a whole such branch (Popovics from zero to
+      // εcu, Mander's confined descent) was off by up to 0.4 % in moment against fine fibres
+      // (test/core/section/law-table.test.ts).
       const branch = table.branchOf(epsMid);
-      // A piece spanning much of a rational branch is cut into equal parts (law-table.ts piecesFor):
-      // 3-point Gauss over a whole such branch (Popovics from zero to εcu, Mander's confined
-      // descent) was off by up to 0.4 % in moment against fine fibres (test/core/section/law-table.test.ts).
-      const span = (phi < 0 ? -phi : phi) * 2 * half;
-      const parts = branch >= 0 ? table.piecesFor(branch, span) : 1;
-      const step = (2 * half) / parts;
-      const subHalf = 0.5 * step;
-      const offset = subHalf * n0; // the outer Gauss points sit at mid ± offset
-      for (let q = 0; q < parts; q++) {
-        const subMid = a + (q + 0.5) * step;
-        const yA = subMid + offset;
-        const yB = subMid - offset;
-        const epsM = eps0 + phi * (yg - subMid);
-        const epsA = eps0 + phi * (yg - yA);
-        const epsB = eps0 + phi * (yg - yB);
-        const sA = branch >= 0 ? table.stressIn(epsA, branch) : material.stress(epsA);
-        const sM = branch >= 0 ? table.stressIn(epsM, branch) : material.stress(epsM);
-        const sB = branch >= 0 ? table.stressIn(epsB, branch) : material.stress(epsB);
-        const fA = sA * (widthTop + slope * (yA - yTop)) * subHalf * w0;
-        const fM = sM * (widthTop + slope * (subMid - yTop)) * subHalf * w1;
-        const fB = sB * (widthTop + slope * (yB - yTop)) * subHalf * w0;
-        const pieceAxial = fA + fM + fB;
-        const pieceMoment = fA * (yg - yA) + fM * (yg - subMid) + fB * (yg - yB);
-        axial += pieceAxial;
-        moment += pieceMoment;
-        magnitude += (fA < 0 ? -fA : fA) + (fM < 0 ? -fM : fM) + (fB < 0 ? -fB : fB);
-        // A piece lies on one side of the cracking strain (a split strain): its mid-point decides.
-        if (group >= 0 && epsMid < cracked) {
-          acc.crackedAxial[group] = acc.crackedAxial[group]! + pieceAxial;
-          acc.crackedMoment[group] = acc.crackedMoment[group]! + pieceMoment;
-        }
+      const offset = half * n0; // the outer Gauss points sit at mid ± offset
+      const yA = mid + offset;
+      const yB = mid - offset;
+      const epsA = eps0 + phi * (yg - yA);
+      const epsB = eps0 + phi * (yg - yB);
+      const sA = branch >= 0 ? table.stressIn(epsA, branch) : material.stress(epsA);
+      const sM = branch >= 0 ? table.stressIn(epsMid, branch) : material.stress(epsMid);
+      const sB = branch >= 0 ? table.stressIn(epsB, branch) : material.stress(epsB);
+      const fA = sA * (widthTop + slope * (yA - yTop)) * half * w0;
+      const fM = sM * (widthTop + slope * (mid - yTop)) * half * w1;
+      const fB = sB * (widthTop + slope * (yB - yTop)) * half * w0;
+      const pieceAxial = fA + fM + fB;
+      const pieceMoment = fA * (yg - yA) + fM * (yg - mid) + fB * (yg - yB);
+      axial += pieceAxial;
+      moment += pieceMoment;
+      magnitude += (fA < 0 ? -fA : fA) + (fM < 0 ? -fM : fM) + (fB < 0 ? -fB : fB);
+      // A piece lies on one side of the cracking strain (a split strain): its mid-point decides.
+      if (group >= 0 && epsMid < cracked) {
+        acc.crackedAxial[group] = acc.crackedAxial[group]! + pieceAxial;
+        acc.crackedMoment[group] = acc.crackedMoment[group]! + pieceMoment;
       }
     }
   }

@@ -10,6 +10,9 @@
  * Popovics, Thorenfeldt) cost an exp and a log per call; a polynomial costs eight multiply–adds —
  * this is where most of the moment–curvature curve's time went (`npm run bench`).
  *
+ * A rational branch that 3-point Gauss cannot integrate whole to about 1e-5 is also cut at fixed,
+ * equally spaced strains (`splits`), which the integrator treats like breakpoints.
+ *
  * Strains outside the outermost breakpoints are passed to the law. The polynomial stands for the law
  * inside a branch only (the Gauss points of core/section/forces.ts never sit on a breakpoint); the
  * value at a breakpoint itself is the law's.

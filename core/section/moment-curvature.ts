@@ -28,6 +28,9 @@ import { curvePointOf, sectionState } from './state.ts';
 import { crackingStrength } from './cracking-strength.ts';
 import { phrase, q } from '../units/phrase.ts';
 
+/** Relative nearness (curvature, or the event's strain ratio) at which a key event counts as reached at the ultimate itself. */
+const COINCIDENT = 1e-6;
+
 export interface MomentCurvatureOptions {
   /**
    * Extreme-fibre concrete strain of the code key point: 0.003 (ACI 318-19 22.2.2.1) or
@@ -211,11 +214,24 @@ export function momentCurvature(model: SectionModel, direction: BendingDirection
         continue;
       }
       if (located.kappa <= end) found.push({ name: n as KeyPointName, snap: located });
+      // A key event reached at the ultimate itself (the code's crushing strain is the concrete's
+      // ultimate strain): its root lands a rounding error either side of the ultimate's, so it is
+      // the ultimate's state, whichever side (before, which side decided whether the curve had a
+      // code crushing point at all).
+      else if (ultimate && located.kappa <= end * (1 + COINCIDENT)) found.push({ name: n as KeyPointName, snap: ultimate.snap });
+    }
+    // The same where the event function has not quite crossed at the ultimate's state.
+    if (ultimate) {
+      for (const n of KEY_EVENTS) {
+        if (enabled[n] && !keyAt[n as KeyPointName] && !found.some((f) => f.name === n) && previousG[n] < 0 && g[n](ultimate.snap.eq) >= -COINCIDENT) {
+          found.push({ name: n as KeyPointName, snap: ultimate.snap });
+        }
+      }
     }
     found.sort((p, q) => p.snap.kappa - q.snap.kappa);
     for (const f of found) {
       keyAt[f.name] = f.snap;
-      snapshots.push(f.snap);
+      if (f.snap !== ultimate?.snap) snapshots.push(f.snap);
       if (f.name === 'firstYield') {
         drop.yielded = true;
         drop.dropReference = Math.max(drop.dropReference, sign * f.snap.eq.moment);

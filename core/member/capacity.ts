@@ -348,6 +348,11 @@ class CapacityAnalysis extends CapacityState {
       this.cracking = { lambda: s.lambda, totalLoad: this.totalLoad(s), deflection: d };
       this.events.push({ kind: 'cracking', loadFactor: s.lambda, deflection: d, position: x, description: `first cracking at ${describePosition(x, beam.layout)}` });
     } else if (ev.kind === 'yield') {
+      // A section that yields as it cracks (its steel yields in the drop after cracking): the
+      // cracking comes first.
+      if (!this.cracking && this.maxRatio(s, (resp) => resp.crackingMoment).ratio >= 1 - SIMULTANEOUS) {
+        this.handle({ kind: 'cracking', g: () => 0 }, s);
+      }
       const at = this.newYield(s, TWIN);
       const x = this.eventPosition(s, at.station, at.sign);
       const first = this.firstYield === null;
@@ -481,11 +486,15 @@ class CapacityAnalysis extends CapacityState {
       }
       let earliest: { ev: Watch; at: Snapshot } | undefined;
       const before = lastCommitted && lastCommitted.lambda < state.lambda ? { x: lastCommitted.lambda, state: lastCommitted } : undefined;
-      for (const ev of this.watches('load')) {
-        if (ev.g(state) < 0 && ev.g(next) >= 0) {
-          const at = this.locate({ x: state.lambda, state }, { x: next.lambda, state: next }, ev.g, solveLambda, before).state;
-          if (!earliest || at.lambda < earliest.at.lambda) earliest = { ev, at };
-        }
+      // Only the earliest event of the step is needed: the watches that cross are searched in the
+      // order their linear estimates suggest, each only up to the earliest state found so far (one
+      // that has not happened there happens later); others that happened there too follow as due.
+      const watches = this.watches('load');
+      for (const ev of this.crossings(watches, state, next)) {
+        const upper = earliest ? earliest.at : next;
+        if (earliest && ev.g(upper) < 0) continue;
+        const at = this.locate({ x: state.lambda, state }, { x: upper.lambda, state: upper }, ev.g, solveLambda, before).state;
+        earliest = { ev, at };
       }
       lastCommitted = state;
       if (!earliest) {
@@ -506,6 +515,17 @@ class CapacityAnalysis extends CapacityState {
       this.status = `not converged: the load-control stage did not end within its step budget (${this.stressedWords(this.state)})`;
       this.failureCause = this.status;
     }
+  }
+
+  /** The watches whose event lies between two states (g < 0 at `a`, ≥ 0 at `b`), in the order of their linear estimates. */
+  private crossings(watches: readonly Watch[], a: Snapshot, b: Snapshot): Watch[] {
+    const found: { ev: Watch; t: number }[] = [];
+    for (const ev of watches) {
+      const ga = ev.g(a);
+      const gb = ev.g(b);
+      if (ga < 0 && gb >= 0) found.push({ ev, t: ga / (ga - gb) });
+    }
+    return found.sort((p, q) => p.t - q.t).map((c) => c.ev);
   }
 
   /** Whether a load step from `from` to `to` rotates a localised hinge by more than 1/8 of its capacity (the longest rotation-control step). */
@@ -592,10 +612,13 @@ class CapacityAnalysis extends CapacityState {
       }
       // Events in this step: searched on the controlled rotation, to EVENT_TOLERANCE of it.
       let event: { ev: Watch; at: Snapshot; theta: number } | undefined;
-      for (const ev of this.watches('rotation', controlled)) {
-        if (!(ev.g(current) < 0 && ev.g(next) >= 0)) continue;
-        const found = this.locate({ x: theta, state: current }, { x: target, state: next }, ev.g, solveTheta, previousPoint && previousPoint.x < theta ? previousPoint : undefined);
-        if (!event || found.x < event.theta) event = { ev, at: found.state, theta: found.x };
+      // As under load control: each crossing searched only up to the earliest found so far.
+      const watches = this.watches('rotation', controlled);
+      for (const ev of this.crossings(watches, current, next)) {
+        const upper = event ? { x: event.theta, state: event.at } : { x: target, state: next };
+        if (event && ev.g(upper.state) < 0) continue;
+        const found = this.locate({ x: theta, state: current }, upper, ev.g, solveTheta, previousPoint && previousPoint.x < theta ? previousPoint : undefined);
+        event = { ev, at: found.state, theta: found.x };
       }
       if (event) {
         theta = event.theta;

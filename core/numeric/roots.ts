@@ -174,8 +174,9 @@ export interface LocatedEvent<S> {
  * on g there left the load factor of the event undetermined by several per cent.
  *
  * Each new point is predicted by a secant through the two latest points before the event (the state
- * evolves smoothly up to the event, whereas past it g may have a kink), by regula falsi while only one
- * such point is known, and by bisection when two predictions in a row have not halved the bracket.
+ * evolves smoothly up to the event, whereas past it g may have a kink) after a point before it, by
+ * regula falsi with the Illinois rule after a point past it, and by bisection when two predictions in
+ * a row have not halved the bracket.
  * A prediction is placed a quarter of the tolerance towards the wider side of the bracket, so that
  * an accurate one closes the bracket from both sides in two solves. Each point is solved from the
  * nearer end of the bracket, from the other one when that fails, and nearer the lower end when
@@ -196,6 +197,8 @@ export function locateEvent<S>(
   let prev = options.before;
   let gPrev = prev ? g(prev.state) : Number.NaN;
   let solves = 0;
+  let lastSide = 0;
+  let loWeight = 1;
   const widths: number[] = [hi.x - lo.x];
   for (let it = 0; it < options.maxIterations; it++) {
     const width = hi.x - lo.x;
@@ -205,8 +208,14 @@ export function locateEvent<S>(
     const halved = widths.length < 3 || width <= 0.5 * widths[widths.length - 3]!;
     if (!halved) x = lo.x + 0.5 * width;
     else {
-      if (prev && gPrev < gLo && lo.x > prev.x) x = lo.x + ((lo.x - prev.x) * -gLo) / (gLo - gPrev);
-      else x = lo.x + (gHi > gLo ? (-gLo / (gHi - gLo)) * width : 0.5 * width);
+      // After a point before the event: the secant through the two latest such points. After a point
+      // past it: regula falsi, the lower end's g halved for each further point past it in a row (the
+      // Illinois rule), so that a flat stretch past the event cannot hold the bracket open.
+      if (lastSide <= 0 && prev && gPrev < gLo && lo.x > prev.x) x = lo.x + ((lo.x - prev.x) * -gLo) / (gLo - gPrev);
+      else {
+        const gl = gLo * loWeight;
+        x = lo.x + (gHi > gl ? (-gl / (gHi - gl)) * width : 0.5 * width);
+      }
       if (!Number.isFinite(x)) x = lo.x + 0.5 * width;
       x += x - lo.x > hi.x - x ? -0.25 * tol : 0.25 * tol;
     }
@@ -227,11 +236,15 @@ export function locateEvent<S>(
     if (gx >= 0) {
       hi = { x, state };
       gHi = gx;
+      if (lastSide === 1) loWeight /= 2;
+      lastSide = 1;
     } else {
       prev = lo;
       gPrev = gLo;
       lo = { x, state };
       gLo = gx;
+      loWeight = 1;
+      lastSide = -1;
     }
     widths.push(hi.x - lo.x);
   }

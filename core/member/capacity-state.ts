@@ -294,35 +294,32 @@ export class CapacityState {
     this.restore(s);
     const me = this.eq.effective;
     const beam = this.beam;
-    let best = -Infinity;
-    let at = -1;
-    let sign: 1 | -1 = 1;
-    for (let i = 0; i < this.n; i++) {
-      const m = me[i]!;
-      const sg: 1 | -1 = m >= 0 ? 1 : -1;
-      if (filter && !filter(i, sg)) continue;
+    // Station i's ratio in the sense of its moment (NaN where the filter or the threshold rules it out).
+    const ratioAt = (i: number): number => {
+      const sg: 1 | -1 = me[i]! >= 0 ? 1 : -1;
+      if (filter && !filter(i, sg)) return Number.NaN;
       const zone = beam.zones[beam.stationZone[i]!]!;
       const threshold = pick(responseOf(zone, sg), plasticLawOf(zone, sg));
-      if (threshold === null || !(threshold > 0)) continue;
-      const ratio = (sg * m) / threshold;
+      return threshold === null || !(threshold > 0) ? Number.NaN : (sg * me[i]!) / threshold;
+    };
+    let best = -Infinity;
+    let at = -1;
+    for (let i = 0; i < this.n; i++) {
+      const ratio = ratioAt(i);
       if (ratio > best) {
         best = ratio;
         at = i;
-        sign = sg;
       }
     }
-    if (tie > 0 && at > 0) {
+    if (tie > 0) {
       for (let i = 0; i < at; i++) {
-        const m = me[i]!;
-        const sg: 1 | -1 = m >= 0 ? 1 : -1;
-        if (filter && !filter(i, sg)) continue;
-        const zone = beam.zones[beam.stationZone[i]!]!;
-        const threshold = pick(responseOf(zone, sg), plasticLawOf(zone, sg));
-        if (threshold === null || !(threshold > 0)) continue;
-        if ((sg * m) / threshold >= best - tie * Math.abs(best)) return { ratio: best, station: i, sign: sg };
+        if (ratioAt(i) >= best - tie * Math.abs(best)) {
+          at = i;
+          break;
+        }
       }
     }
-    return { ratio: best, station: at, sign };
+    return { ratio: best, station: at, sign: at >= 0 && me[at]! < 0 ? -1 : 1 };
   }
 
   /**

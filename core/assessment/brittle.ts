@@ -38,7 +38,7 @@ import type { BeamDefinition, SupportType } from '../member/definition.ts';
 import type { BendingDirection, SectionModel } from '../section/model.ts';
 import { steelYieldStress, tensionSteel } from '../section/model.ts';
 import { faces } from '../section/state.ts';
-import { crackingStrength } from '../section/cracking-strength.ts';
+import { crackingStrength, yieldsBeforeEnd } from '../section/cracking-strength.ts';
 import { stripWidthAt } from '../section/width-profile.ts';
 import { phrase, q, type Text } from '../units/phrase.ts';
 import type { BrittleFinding, StrengthCheck } from './results.ts';
@@ -168,8 +168,7 @@ function sectionFindings(codeBasis: CodeBasis, supports: SupportType, zone: Shea
   // Findings of the section's own curve.
   if (curve && kp && curve.status.kind === 'complete' && cracks) {
     const strength = crackingStrength(curve);
-    const end = kp.ultimate ?? curve.points[curve.points.length - 1];
-    const yields = strength ? strength.yields : kp.firstYield !== undefined && end !== undefined && kp.firstYield.curvature <= end.curvature * (1 + 1e-9);
+    const yields = yieldsBeforeEnd(curve);
     if (strength?.failsAsItCracks) {
       const largest = strength.beforeYield > kp.cracking!.moment * (1 + 1e-9) ? 'the largest moment before its tension steel yields' : 'the cracking moment';
       find('cracking-above-strength', phrase`${largest} ${q('moment', strength.beforeYield)} is at or above what the section carries once ${yields ? 'its tension steel yields' : 'it is cracked'}, ${q('moment', strength.afterYield)}: the section fails as it cracks`);

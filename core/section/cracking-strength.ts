@@ -24,13 +24,22 @@ export interface CrackingStrength {
   readonly failsAsItCracks: boolean;
 }
 
+type CurveLike = { readonly points: readonly CurvePoint[]; readonly keyPoints: Partial<Record<KeyPointName, KeyPoint>> };
+
+/** Whether the tension steel yields before the curve ends (at its ultimate, or its last point). */
+export function yieldsBeforeEnd(curve: CurveLike): boolean {
+  const kp = curve.keyPoints;
+  const end = kp.ultimate ?? curve.points[curve.points.length - 1];
+  return kp.firstYield !== undefined && end !== undefined && kp.firstYield.curvature <= end.curvature * (1 + 1e-9);
+}
+
 /** Compares the section's moment before and after its tension steel yields; null when the curve has no cracking point or no end. */
-export function crackingStrength(curve: { readonly points: readonly CurvePoint[]; readonly keyPoints: Partial<Record<KeyPointName, KeyPoint>> }): CrackingStrength | null {
+export function crackingStrength(curve: CurveLike): CrackingStrength | null {
   const kp = curve.keyPoints;
   const cracking = kp.cracking;
   const end = kp.ultimate ?? curve.points[curve.points.length - 1];
   if (!cracking || !end) return null;
-  const yields = kp.firstYield !== undefined && kp.firstYield.curvature <= end.curvature * (1 + 1e-9);
+  const yields = yieldsBeforeEnd(curve);
   // Without yield (over-reinforced or a curve ended early) only the cracking moment itself is compared
   // with the end: a peak reached by crushing before the end is not a cracking failure.
   const from = yields ? kp.firstYield!.curvature : end.curvature;

@@ -9,6 +9,7 @@ import { analyzeContinuousBeam, type ContinuousBeamResult, type ContinuousContex
 import type { ContinuousBeamDefinition } from '../continuous/definition.ts';
 import { capitalised, joinTexts, phrase, q, type Text } from '../units/phrase.ts';
 import type { LoadCombination } from './combinations.ts';
+import { exceedsBeyondRounding } from '../numeric/ties.ts';
 import { continuousChecks, stationWords, type ContinuousChecks } from './continuous.ts';
 import type { AciEdition } from './shear-aci.ts';
 import type { ShearZone } from './shear-section.ts';
@@ -60,7 +61,7 @@ export function continuousVerdict(result: ContinuousBeamResult, checks: Continuo
   let worst: { utilisation: number; span: string; words: Text } | null = null;
   for (const part of result.service?.parts ?? []) {
     for (const check of part.checks) {
-      if (!worst || check.utilisation > worst.utilisation) {
+      if (!worst || exceedsBeyondRounding(check.utilisation, worst.utilisation)) {
         worst = {
           utilisation: check.utilisation,
           span: part.name,

@@ -39,6 +39,7 @@ import { joinTexts, phrase, q, type Text } from '../units/phrase.ts';
 import type { ContinuousBeamDefinition } from '../continuous/definition.ts';
 import type { ElasticResult, LoadResponse } from '../continuous/elastic.ts';
 import { partName, partStatics, type LoadsByPart } from '../continuous/layout.ts';
+import { exceedsBeyondRounding } from '../numeric/ties.ts';
 
 /** The words for a combination without live load (the arrangement does not matter). */
 export const NO_LIVE_ARRANGEMENT = 'no live load';
@@ -293,9 +294,9 @@ export function continuousChecks(input: ContinuousChecksInput): ContinuousChecks
     const v = Math.abs(shear);
     const utilisation = limit.design > 0 ? Math.min(v / limit.design, 99.99) : v > 0 ? 99.99 : 0;
     const point: ShearPoint = { part: names[p]!, x, s: x - parts[p]!.from, sectionId: zones[zone]!.analysis.sectionId, direction: cap.direction, demand: v, resistance: limit.design, utilisation, combination: c.combination, arrangement: c.arrangement, supportFace: face, nominal: limit.nominal };
-    if (!governing || utilisation > governing.utilisation) governing = point;
+    if (!governing || exceedsBeyondRounding(utilisation, governing.utilisation)) governing = point;
     const known = worstShear.get(p);
-    if (!known || utilisation > known.utilisation) worstShear.set(p, point);
+    if (!known || exceedsBeyondRounding(utilisation, known.utilisation)) worstShear.set(p, point);
   };
   for (const c of cases) {
     for (let i = 0; i < n; i++) {
@@ -342,7 +343,7 @@ export function continuousChecks(input: ContinuousChecksInput): ContinuousChecks
       const { zone, cap } = capacityAt(x, sides[i]!, f.moment);
       const v = Math.abs(f.shear);
       const ratio = cap.nominal > 0 ? v / cap.nominal : v > 0 ? 99.99 : 0;
-      if (!worst || ratio > worst.ratio) {
+      if (!worst || exceedsBeyondRounding(ratio, worst.ratio)) {
         worst = { part: names[p]!, x, s: x - parts[p]!.from, sectionId: zones[zone]!.analysis.sectionId, direction: cap.direction, demand: v, resistance: cap.nominal, utilisation: Math.min(ratio, 99.99), combination: `the largest load of the analysis to failure (${failure.loadFactor.toFixed(2)} × the pattern)`, arrangement: '', ratio };
       }
     }

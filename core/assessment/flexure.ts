@@ -27,6 +27,7 @@ import { combinationText, combinedLoads, memberLoadSets, type LoadCombination } 
 import { elasticSupportMoments, momentStations, type ElasticZone } from './demand.ts';
 import { flexuralDesignResistance, type FlexuralResistance } from './resistance.ts';
 import type { StrengthCheck, StrengthPoint, StrengthZone } from './results.ts';
+import { exceedsBeyondRounding } from '../numeric/ties.ts';
 
 /** A zone of the member with its section's analysis. */
 export interface FlexureZone {
@@ -98,7 +99,7 @@ export function checkMoments<T extends MomentSample>(code: CodeBasis, zones: rea
   let governing: Worst | null = null;
   const consider = <W extends JudgedSample<T>>(map: Map<string, W>, key: string, w: W) => {
     const known = map.get(key);
-    if (!known || w.utilisation > known.utilisation) map.set(key, w);
+    if (!known || exceedsBeyondRounding(w.utilisation, known.utilisation)) map.set(key, w);
   };
   for (const s of samples) {
     const zone = zoneIndexAt(zones, s.x, s.side);
@@ -111,7 +112,7 @@ export function checkMoments<T extends MomentSample>(code: CodeBasis, zones: rea
     consider(worstOf, `member|${direction}`, point);
     if (groupOf) consider(worstByGroup, `${groupOf(s)}|${direction}`, point);
     byCombination.set(s.combination, Math.max(byCombination.get(s.combination) ?? 0, utilisation));
-    if (!governing || utilisation > governing.utilisation) governing = point;
+    if (!governing || exceedsBeyondRounding(utilisation, governing.utilisation)) governing = point;
   }
   const g = governing!;
   const strip = (w: Worst | undefined): StrengthPoint | null => (w && w.demand > 0 ? { position: w.sample.x, demand: w.demand, resistance: w.resistance, utilisation: w.utilisation, combination: w.sample.combination } : null);

@@ -39,6 +39,7 @@ import { combinationText, combinedLoads, memberLoadSets, scaleLoad, type LoadCom
 import { elasticSupportMoments, type ElasticZone } from './demand.ts';
 import { criticalSectionDepth, zoneShearCapacities, type ShearCapacity, type ShearZone } from './shear-section.ts';
 import type { AciEdition } from './shear-aci.ts';
+import { exceedsBeyondRounding } from '../numeric/ties.ts';
 
 export interface ShearDemandPoint {
   /** mm from the left support, and which side of a discontinuity. */
@@ -263,7 +264,7 @@ export function memberShear(input: MemberShearInput): ShearResult {
       }
       i++;
     }).design;
-    if (!f || design.ratio > f.ratio) {
+    if (!f || exceedsBeyondRounding(design.ratio, f.ratio)) {
       f = design;
       governingCombination = combinationText(c);
     }

@@ -13,6 +13,7 @@ import { OUTSIDE_SMALL_DEFLECTION, SMALL_DEFLECTION_RATIO, serviceOutsideRange, 
 import { capitalised, joinTexts, phrase, q, withoutFinalStop, type Text } from '../units/phrase.ts';
 import type { BrittleFinding, MemberResult, MemberStatus, StrengthCheck } from './results.ts';
 import type { ShearResult } from './shear.ts';
+import { exceedsBeyondRounding } from '../numeric/ties.ts';
 
 /** What the verdict is built from. */
 export interface VerdictInput {
@@ -97,7 +98,7 @@ export function memberVerdict(input: VerdictInput): MemberResult {
   const checks = result.service?.checks ?? [];
   const serviceFails = checks.filter((c) => !c.pass);
   if (serviceFails.length > 0) {
-    const worst = serviceFails.reduce((a, b) => (b.utilisation > a.utilisation ? b : a));
+    const worst = serviceFails.reduce((a, b) => (exceedsBeyondRounding(b.utilisation, a.utilisation) ? b : a));
     parts.push(serviceOutsideRange(result.service, result.span) ? `deflection checks fail: ${OUTSIDE_SMALL_DEFLECTION}` : `deflection check fails: ${worst.utilisation.toFixed(2)} × ℓ/${worst.ratio} (${worst.quantity})`);
   } else if (checks.length > 0) {
     parts.push('deflection checks pass');

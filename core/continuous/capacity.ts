@@ -21,6 +21,13 @@ import { buildMesh, loadPoints, releasedField, type BeamMesh } from './model.ts'
 import { deflections, evaluate, supportRows, type ActiveHinge, type DistributedLaw, type Evaluation, type StructureState, type SupportRow } from './structure.ts';
 import { linearLaw } from './elastic.ts';
 import { newton, type Scales } from './newton.ts';
+import { exceedsBeyondRounding } from '../numeric/ties.ts';
+
+/** Hinges whose first yield falls within this fraction of one load step of each other formed together. */
+const SAME_CROSSING = 1e-7;
+
+/** True when two values differ beyond rounding (either exceeds the other: core/numeric/ties.ts). */
+const differ = (a: number, b: number) => exceedsBeyondRounding(a, b) || exceedsBeyondRounding(b, a);
 
 export interface CapacityInput {
   readonly definition: ContinuousBeamDefinition;
@@ -301,7 +308,15 @@ export function capacityAnalysis(input: CapacityInput): CapacityResult {
         const my = (siteMoment(mesh, site, trial) >= 0 ? site.laws.sagging : site.laws.hogging).firstYieldMoment;
         return m !== mPrev ? Math.min(Math.max((my - mPrev) / (m - mPrev), 0), 1) : 1;
       };
-      fresh.sort((a, b) => crossing(a) - crossing(b));
+      // Twins of a symmetric beam cross at the same point of the step to the last few bits, and
+      // which comes first then depends on rounding (it differs between JavaScript engines): within
+      // rounding the leftmost is numbered first (as core/numeric/ties.ts does for the largest value).
+      const at = new Map(fresh.map((site) => [site, { t: crossing(site), x: mesh.layout.parts[site.part]!.from + site.s }]));
+      fresh.sort((a, b) => {
+        const ta = at.get(a)!;
+        const tb = at.get(b)!;
+        return Math.abs(ta.t - tb.t) > SAME_CROSSING ? ta.t - tb.t : ta.x - tb.x;
+      });
       for (const site of fresh) {
         const m = siteMoment(mesh, site, trial);
         site.sign = m >= 0 ? 1 : -1;
@@ -468,7 +483,9 @@ export function capacityAnalysis(input: CapacityInput): CapacityResult {
     controlPart: partName(controlPart),
     patternTotal: total,
     points: out,
-    events: events.sort((a, b) => a.deflection - b.deflection || a.loadFactor - b.loadFactor),
+    // In the order of deflection, then load factor; values equal within rounding (twins of a
+    // symmetric beam) keep the order they were found in (the sort is stable), hinges by number.
+    events: events.sort((a, b) => (differ(a.deflection, b.deflection) ? a.deflection - b.deflection : differ(a.loadFactor, b.loadFactor) ? a.loadFactor - b.loadFactor : 0)),
     hinges: hingesOut,
     peakLoadFactor: peakLambda,
     ultimate,

@@ -4,11 +4,12 @@
  */
 import type { ContinuousBeamResult } from './analyze.ts';
 import type { PartDeflectionCheck } from './service.ts';
+import { exceedsBeyondRounding } from '../numeric/ties.ts';
 
 /** The deflection check of the governing span or cantilever (largest utilisation), null when none. */
 export function governingDeflection(result: Pick<ContinuousBeamResult, 'service'>): { readonly part: string; readonly check: PartDeflectionCheck } | null {
   let best: { part: string; check: PartDeflectionCheck } | null = null;
-  for (const part of result.service?.parts ?? []) for (const check of part.checks) if (!best || check.utilisation > best.check.utilisation) best = { part: part.name, check };
+  for (const part of result.service?.parts ?? []) for (const check of part.checks) if (!best || exceedsBeyondRounding(check.utilisation, best.check.utilisation)) best = { part: part.name, check };
   return best;
 }
 

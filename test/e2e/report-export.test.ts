@@ -114,7 +114,12 @@ describe('PDF export in the app', () => {
     // Same drawings, segment for segment: the app's PDF once lost every chart's data lines (chart.js
     // stroked them as a browser Path2D the recording canvas could not read) while its text matched
     // and its size stayed within 3 %.
-    expect(drawingOperators(app)).toEqual(drawingOperators(cli));
+    // Counted per operator, within a few segments: the browser's JavaScript engine and Node's round
+    // the last bits of some functions differently, and a curve sampled adaptively (the concrete
+    // stress block of a section at its crushing strain) may then take a point or two elsewhere
+    // (Chromium 156.0.8078.114 against Node 20: 6,724 against 6,726 line segments, one figure).
+    const [appOps, cliOps] = [drawingOperators(app), drawingOperators(cli)];
+    for (const op of Object.keys(cliOps) as (keyof typeof cliOps)[]) expect(Math.abs(appOps[op] - cliOps[op]), `${op}: app ${appOps[op]}, command line ${cliOps[op]}`).toBeLessThanOrEqual(Math.max(4, 0.002 * cliOps[op]));
     expect(app.toString('latin1').match(/\/Subtype \/Image/g)).toBeNull();
     expect(problems).toEqual([]);
   }, 600_000);

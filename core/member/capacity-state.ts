@@ -293,15 +293,7 @@ export class CapacityState {
   maxRatio(s: Snapshot, pick: (resp: SectionResponse, law: PlasticLaw | null) => number | null, filter?: (i: number, sign: 1 | -1) => boolean, tie = 0): StationRatio {
     this.restore(s);
     const me = this.eq.effective;
-    const beam = this.beam;
-    // Station i's ratio in the sense of its moment (NaN where the filter or the threshold rules it out).
-    const ratioAt = (i: number): number => {
-      const sg: 1 | -1 = me[i]! >= 0 ? 1 : -1;
-      if (filter && !filter(i, sg)) return Number.NaN;
-      const zone = beam.zones[beam.stationZone[i]!]!;
-      const threshold = pick(responseOf(zone, sg), plasticLawOf(zone, sg));
-      return threshold === null || !(threshold > 0) ? Number.NaN : (sg * me[i]!) / threshold;
-    };
+    const ratioAt = (i: number): number => this.stationRatio(i, pick, filter);
     let best = -Infinity;
     let at = -1;
     for (let i = 0; i < this.n; i++) {
@@ -320,6 +312,38 @@ export class CapacityState {
       }
     }
     return { ratio: best, station: at, sign: at >= 0 && me[at]! < 0 ? -1 : 1 };
+  }
+
+  /**
+   * Station i's ratio of effective moment to threshold in the sense of its moment, for the state last
+   * restored (NaN where the filter or the threshold rules it out).
+   */
+  private stationRatio(i: number, pick: (resp: SectionResponse, law: PlasticLaw | null) => number | null, filter?: (i: number, sign: 1 | -1) => boolean): number {
+    const me = this.eq.effective;
+    const beam = this.beam;
+    const sg: 1 | -1 = me[i]! >= 0 ? 1 : -1;
+    if (filter && !filter(i, sg)) return Number.NaN;
+    const zone = beam.zones[beam.stationZone[i]!]!;
+    const threshold = pick(responseOf(zone, sg), plasticLawOf(zone, sg));
+    return threshold === null || !(threshold > 0) ? Number.NaN : (sg * me[i]!) / threshold;
+  }
+
+  /**
+   * The run of consecutive stations around `at.station` (as found by `maxRatio` at state s with the
+   * same pick and filter) whose ratio, in the same sense, is within `tie` (relative) of `at.ratio`:
+   * the stations that reach the threshold together with it as one place, [first, last].
+   */
+  tiedRun(s: Snapshot, pick: (resp: SectionResponse, law: PlasticLaw | null) => number | null, filter: ((i: number, sign: 1 | -1) => boolean) | undefined, at: StationRatio, tie: number): [number, number] {
+    if (at.station < 0) return [at.station, at.station];
+    this.restore(s);
+    const me = this.eq.effective;
+    const level = at.ratio - tie * Math.abs(at.ratio);
+    const tied = (i: number) => (me[i]! < 0 ? -1 : 1) === at.sign && this.stationRatio(i, pick, filter) >= level;
+    let lo = at.station;
+    let hi = at.station;
+    while (lo > 0 && tied(lo - 1)) lo--;
+    while (hi < this.n - 1 && tied(hi + 1)) hi++;
+    return [lo, hi];
   }
 
   /**

@@ -64,6 +64,9 @@ export interface CapacityCurve {
  */
 const TWIN = 1e-7;
 
+/** The threshold of the yield events: the section's first-yield moment (none without a plastic law). */
+const YIELD_THRESHOLD = (_resp: unknown, law: { readonly yieldMoment: number | null } | null): number | null => law?.yieldMoment ?? null;
+
 /** An event the stages watch for: g < 0 before it, ≥ 0 at and after it. */
 interface Watch {
   readonly kind: 'cracking' | 'yield' | 'localisation' | 'code' | 'capacity' | 'drop' | 'unloaded';
@@ -172,7 +175,10 @@ class CapacityAnalysis extends CapacityState {
       const mark = sign > 0 ? out.sag : out.hog;
       const sites = sign > 0 ? this.yieldSites.sag : this.yieldSites.hog;
       if (sites.size === 0) continue;
-      for (const [i, j] of yieldedRuns(this.beam, mem, sign, 1e-9)) {
+      // A reported site belongs to its zone even where its remembered moment is a hair below first
+      // yield (a twin taken within TWIN of its threshold): otherwise its zone would never count as
+      // reported and the same yield would be found again at the same state.
+      for (const [i, j] of yieldedRuns(this.beam, mem, sign, 1e-9, sites)) {
         let reported = false;
         for (let k = i; k <= j && !reported; k++) reported = sites.has(k);
         if (reported) for (let k = Math.max(i - 1, 0); k <= Math.min(j + 1, n - 1); k++) mark[k] = 1;
@@ -203,8 +209,13 @@ class CapacityAnalysis extends CapacityState {
 
   /** The most stressed station, against first yield, outside the zones already reported. */
   private newYield(s: Snapshot, tie = 0) {
+    return this.maxRatio(s, YIELD_THRESHOLD, this.unreported(s), tie);
+  }
+
+  /** Filter of the stations outside the zones already reported (at state s). */
+  private unreported(s: Snapshot): (i: number, sign: 1 | -1) => boolean {
     const zones = this.reportedZones(s);
-    return this.maxRatio(s, (resp, law) => law?.yieldMoment ?? null, (i, sg) => (sg > 0 ? zones.sag : zones.hog)[i] === 0, tie);
+    return (i, sg) => (sg > 0 ? zones.sag : zones.hog)[i] === 0;
   }
 
   private commitState(s: Snapshot): void {
@@ -353,14 +364,21 @@ class CapacityAnalysis extends CapacityState {
       if (!this.cracking && this.maxRatio(s, (resp) => resp.crackingMoment).ratio >= 1 - SIMULTANEOUS) {
         this.handle({ kind: 'cracking', g: () => 0 }, s);
       }
-      const at = this.newYield(s, TWIN);
+      const unreported = this.unreported(s);
+      const at = this.maxRatio(s, YIELD_THRESHOLD, unreported, TWIN);
       const x = this.eventPosition(s, at.station, at.sign);
       const first = this.firstYield === null;
       if (first) this.firstYield = { lambda: s.lambda, totalLoad: this.totalLoad(s), deflection: d };
       this.events.push({ kind: 'first-yield', loadFactor: s.lambda, deflection: d, position: x, description: `${first ? 'first yield' : 'yield'} (${at.sign > 0 ? 'sagging' : 'hogging'}) at ${describePosition(x, beam.layout)}: plasticity starts to spread` });
       if (first) this.distributions.push(this.distribution('first yield', s));
-      // The zone is reported: its spreading is no new event.
-      (at.sign > 0 ? this.yieldSites.sag : this.yieldSites.hog).add(at.station);
+      // The zone is reported: its spreading is no new event. The zone is the stations joined to the
+      // one taken that are within TWIN of the largest ratio, in this state (where the tension shift
+      // makes the effective moment flat, the leftmost twin and the station that actually yielded
+      // are neighbours; before 4 Dec 2026 only the leftmost was noted, and when its own moment was
+      // a hair below first yield the yield was found again at the same state, ~4,000 times).
+      const sites = at.sign > 0 ? this.yieldSites.sag : this.yieldSites.hog;
+      const [lo, hi] = this.tiedRun(s, YIELD_THRESHOLD, unreported, at, TWIN);
+      for (let k = lo; k <= hi; k++) sites.add(k);
     } else if (ev.kind === 'localisation') {
       // A section that peaks at cracking cracks as it localises: the cracking comes first.
       if (!this.cracking && this.maxRatio(s, (resp) => resp.crackingMoment).ratio >= 1 - 1e-6) {

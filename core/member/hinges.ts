@@ -70,11 +70,13 @@ export function shearSpans(beam: BeamModel, moment: Float64Array, x: number, sid
 
 /**
  * Runs of consecutive stations past first yield in one sense (remembered moment at least
- * (1 − tolerance)·M′y of the station's section), as [first, last] station indices.
+ * (1 − tolerance)·M′y of the station's section), as [first, last] station indices; stations in
+ * `counted` belong to a run whatever their moment.
  */
-export function yieldedRuns(beam: BeamModel, remembered: ArrayLike<number>, sign: 1 | -1, tolerance = 0): [number, number][] {
+export function yieldedRuns(beam: BeamModel, remembered: ArrayLike<number>, sign: 1 | -1, tolerance = 0, counted?: ReadonlySet<number>): [number, number][] {
   const n = beam.x.length;
   const yielded = (i: number) => {
+    if (counted?.has(i)) return true;
     const law = plasticLawOf(beam.zones[beam.stationZone[i]!]!, sign);
     return !!law && law.yieldMoment !== null && remembered[i]! >= law.yieldMoment * (1 - tolerance);
   };

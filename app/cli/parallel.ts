@@ -1,10 +1,16 @@
 /**
- * Members analysed in parallel on Node worker threads. Each worker receives the project and a list
- * of member ids, calls `analyzeMembers` (core/analysis.ts) and posts the results back as plain data;
- * the results are put back in project order, so they are identical to a serial analysis.
+ * Members analysed in parallel on Node worker threads. Each worker receives the project once, then
+ * asks for work: the parent hands out the members in chunks, one chunk at a time, to whichever
+ * worker is free, and puts the results back in project order, so they are identical to a serial
+ * analysis.
  *
- * Members are dealt round-robin to the workers (member i to worker i mod n), which balances long and
- * short members well in practice. Each worker analyses the sections its members use once.
+ * Why chunks on demand rather than a fixed share per worker: members differ in cost by two orders of
+ * magnitude (a simple span in a few ms, a member whose hinges soften and snap back in hundreds), and
+ * with fixed shares one worker could still be busy long after the other had finished — on a busy
+ * machine the parallel run was then slower than one thread. Chunks shrink towards the end
+ * (`chunkSize`), so the last members are spread over the workers too. Each worker posts its results
+ * chunk by chunk and keeps none of them, so memory grows only in the parent.
+ * Each worker analyses the sections its members use once (one section cache for all its chunks).
  * Workers start from the bundle (out/cli/<build>/cli-worker.mjs); from the sources, worker-entry.mjs
  * registers tsx's loader in the worker, then loads worker.ts.
  */
@@ -12,7 +18,8 @@ import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
 import type { Project } from '../../core/project/types.ts';
 import { ownModule } from './bundle.ts';
-import type { WorkerInput, WorkerMessage } from './worker.ts';
+import type { ParentMessage, WorkerInput, WorkerMessage } from './worker.ts';
+import { resultUnpacker } from './shared-sections.ts';
 import type { MemberResult } from '../../core/assessment/results.ts';
 
 export interface ParallelOptions {
@@ -40,12 +47,16 @@ export function defaultWorkerCount(members: number, cores: number = availablePar
   return Math.max(1, Math.min(cores, Math.floor(members / MEMBERS_PER_WORKER)));
 }
 
-/** Member ids dealt round-robin into `count` non-empty groups (order kept within each group). */
-export function partition<T>(items: readonly T[], count: number): T[][] {
-  const n = Math.max(1, Math.min(count, items.length));
-  const groups: T[][] = Array.from({ length: n }, () => []);
-  items.forEach((item, i) => groups[i % n]!.push(item));
-  return groups.filter((g) => g.length > 0);
+/** The largest chunk handed to a worker at once (a few hundred ms of work at most). */
+export const MAX_CHUNK = 16;
+
+/**
+ * Members in the next chunk, `remaining` members left for `workers` workers: about a quarter of
+ * an equal share, at most MAX_CHUNK and at least one, so chunks shrink as the end comes near
+ * (guided scheduling).
+ */
+export function chunkSize(remaining: number, workers: number): number {
+  return Math.max(1, Math.min(MAX_CHUNK, Math.ceil(remaining / (4 * Math.max(1, workers)))));
 }
 
 function abortError(signal: AbortSignal): Error {
@@ -69,14 +80,17 @@ export function analyzeMembersParallel(project: Project, memberIds?: readonly st
   if (signal?.aborted) return Promise.reject(abortError(signal));
   if (ids.length === 0) return Promise.resolve([]);
   if (new Set(ids).size !== ids.length) return Promise.reject(new Error('member ids must be unique to analyse a project in parallel (validate the project first)'));
-  const groups = partition(ids, options.workers ?? defaultWorkerCount(ids.length));
+  const count = Math.max(1, Math.min(options.workers ?? defaultWorkerCount(ids.length), ids.length));
 
   return new Promise<MemberResult[]>((resolve, reject) => {
     const workers: Worker[] = [];
-    const completed = new Set<Worker>();
+    /** Workers ended on purpose (no work left for them); any other exit before the end is a failure. */
+    const ended = new Set<Worker>();
+    /** Chunks handed to each worker whose results have not come back. */
+    const inFlight = new Map<Worker, number>();
     const byId = new Map<string, MemberResult>();
+    let next = 0;
     let done = 0;
-    let finished = 0;
     let settled = false;
     const stopAll = () => {
       for (const w of workers) void w.terminate();
@@ -91,34 +105,53 @@ export function analyzeMembersParallel(project: Project, memberIds?: readonly st
     const onAbort = () => fail(abortError(signal!));
     signal?.addEventListener('abort', onAbort, { once: true });
 
-    for (const group of groups) {
-      const input: WorkerInput = { project, memberIds: group };
+    /** Hands the worker its next chunk, or ends it when none is left (and the run when all are in). */
+    const feed = (worker: Worker) => {
+      if (next < ids.length) {
+        const size = chunkSize(ids.length - next, count);
+        const message: ParentMessage = { type: 'analyze', memberIds: ids.slice(next, next + size) };
+        next += size;
+        inFlight.set(worker, (inFlight.get(worker) ?? 0) + 1);
+        worker.postMessage(message);
+        return;
+      }
+      // Nothing left to hand out: the worker ends once the chunks it holds are in.
+      if (inFlight.get(worker)! > 0) return;
+      ended.add(worker);
+      void worker.terminate();
+      if (byId.size < ids.length) return;
+      settled = true;
+      signal?.removeEventListener('abort', onAbort);
+      stopAll();
+      // Project order, as analyzeMembers returns them (ids are unique in a valid project).
+      resolve(ids.map((id) => byId.get(id)!).filter((r): r is MemberResult => r !== undefined));
+    };
+
+    for (let k = 0; k < count; k++) {
+      const input: WorkerInput = { project };
       const worker = new Worker(WORKER_ENTRY, { workerData: input });
       workers.push(worker);
+      const unpack = resultUnpacker();
       worker.on('message', (message: WorkerMessage) => {
         if (settled) return;
         if (message.type === 'progress') {
           done++;
           onProgress?.(done, ids.length, message.memberId);
-        } else if (message.type === 'done') {
-          for (const r of message.results) byId.set(r.memberId, r);
-          completed.add(worker);
-          void worker.terminate();
-          finished++;
-          if (finished === groups.length) {
-            settled = true;
-            signal?.removeEventListener('abort', onAbort);
-            // Project order, as analyzeMembers returns them (ids are unique in a valid project).
-            resolve(ids.map((id) => byId.get(id)!).filter((r): r is MemberResult => r !== undefined));
-          }
+        } else if (message.type === 'results') {
+          for (const r of unpack(message.packed)) byId.set(r.memberId, r);
+          inFlight.set(worker, inFlight.get(worker)! - 1);
+          feed(worker);
         } else {
           fail(new Error(`a worker failed: ${message.message}`));
         }
       });
       worker.on('error', (error) => fail(error instanceof Error ? error : new Error(String(error))));
       worker.on('exit', (code) => {
-        if (!settled && !completed.has(worker)) fail(new Error(`a worker stopped unexpectedly (exit code ${code})`));
+        if (!settled && !ended.has(worker)) fail(new Error(`a worker stopped unexpectedly (exit code ${code})`));
       });
     }
+    // Two chunks in flight per worker (dealt in turn): the next is waiting in its queue when it
+    // finishes one, so it never idles for the parent's reply (slow to come on a busy machine).
+    for (let pass = 0; pass < 2; pass++) for (const worker of workers) if (!settled && !ended.has(worker)) feed(worker);
   });
 }

@@ -1,15 +1,27 @@
 import { describe, expect, it } from 'vitest';
 import { analyzeMembers } from '../../../core/analysis.ts';
 import { demoProject } from '../../../core/project/demo.ts';
-import { analyzeMembersParallel, defaultWorkerCount, partition } from '../../../app/cli/parallel.ts';
+import { analyzeMembersParallel, chunkSize, defaultWorkerCount, MAX_CHUNK } from '../../../app/cli/parallel.ts';
 import { generatedProject } from '../../core/project/generated-project.ts';
 
-describe('partition', () => {
-  it('deals items round-robin into non-empty groups', () => {
-    expect(partition(['a', 'b', 'c', 'd', 'e'], 2)).toEqual([['a', 'c', 'e'], ['b', 'd']]);
-    expect(partition(['a', 'b'], 4)).toEqual([['a'], ['b']]);
-    expect(partition(['a'], 0)).toEqual([['a']]);
-    expect(partition([], 3)).toEqual([]);
+describe('chunkSize', () => {
+  it('hands out a quarter of an equal share, at most MAX_CHUNK, shrinking to one member at the end', () => {
+    expect(chunkSize(1000, 2)).toBe(MAX_CHUNK);
+    expect(chunkSize(40, 2)).toBe(5);
+    expect(chunkSize(3, 2)).toBe(1);
+    expect(chunkSize(1, 8)).toBe(1);
+    expect(chunkSize(5, 0)).toBe(2);
+    // Every member is handed out exactly once, and the last chunks are single members.
+    let left = 1000;
+    const sizes: number[] = [];
+    while (left > 0) {
+      const size = chunkSize(left, 2);
+      sizes.push(size);
+      left -= size;
+    }
+    expect(sizes.reduce((a, b) => a + b, 0)).toBe(1000);
+    expect(sizes.slice(-3)).toEqual([1, 1, 1]);
+    expect(sizes.every((size, i) => i === 0 || size <= sizes[i - 1]!)).toBe(true);
   });
 });
 
@@ -42,6 +54,15 @@ describe('analyzeMembersParallel', () => {
     const parallel = await analyzeMembersParallel(project, ids, { workers: 2 });
     expect(parallel.map((r) => r.memberId)).toEqual(['G-0002', 'G-0005', 'G-0009']);
     expect(parallel).toEqual(analyzeMembers(project, ids));
+  }, 240_000);
+
+  it('gives the serial results for a project of many chunks (each worker asks for more until none is left)', async () => {
+    const project = generatedProject(60);
+    const progress: number[] = [];
+    const parallel = await analyzeMembersParallel(project, undefined, { workers: 2, onProgress: (done) => progress.push(done) });
+    expect(parallel.map((r) => r.memberId)).toEqual(project.members.map((m) => m.id));
+    expect(JSON.stringify(parallel)).toBe(JSON.stringify(analyzeMembers(project)));
+    expect(progress).toEqual(Array.from({ length: 60 }, (_, i) => i + 1));
   }, 240_000);
 
   it('returns nothing for no members without starting workers', async () => {

@@ -254,32 +254,34 @@ export function serviceDeflections(input: ServiceInput): ServiceOutcome {
   // (a) integration, short term and sustained. Station spacing is refined until doubling the
   // number of segments changes no deflection by more than 0.05 % (brittle cracking makes the
   // cracked length near supports sensitive to it), up to 16× the base count.
-  const solve = (beam: BeamModel, f: Float64Array, label: string) => {
+  // Each station spacing's solves note their own warnings; only those of the spacing whose values
+  // are shown are reported (a solve that failed on a coarser spacing and converged on the one
+  // shown is no warning: before 4 Dec 2026 generated members G-0142 and G-0567 said "did not
+  // converge" of a value solved to the tolerance).
+  const solve = (beam: BeamModel, f: Float64Array, label: string, notes: string[]) => {
     const s = solveStatic(beam, f);
-    if (!s.converged) warnings.push(`Service deflection (${label}) did not converge: the value shown is the last iterate.`);
-    if (s.peakRatio > 1) warnings.push(`Under ${label} a section is past its peak moment: service deflections are not meaningful.`);
-    else if (s.yieldRatio > 1) warnings.push(`Under ${label} the reinforcement yields: the member is not in a service state.`);
+    if (!s.converged) notes.push(`Service deflection (${label}) did not converge: the value shown is the last iterate.`);
+    if (s.peakRatio > 1) notes.push(`Under ${label} a section is past its peak moment: service deflections are not meaningful.`);
+    else if (s.yieldRatio > 1) notes.push(`Under ${label} the reinforcement yields: the member is not in a service state.`);
     return s;
   };
   // Load history: dead load, then the live load (the largest service state), then the sustained
   // part stays. The sustained states, short and long term, keep the damage of the largest state
   // (afterLargestMoment), with the moment ratio κ of the short-term solutions.
   const integrateAt = (count: number) => {
+    const notes: string[] = [];
     const shortBeam = buildBeamModel(support, span, input.zones.map((z) => z.shortTerm), extraPoints, count);
     const deadField = field(shortBeam, input.dead);
     const liveField = field(shortBeam, input.live);
     const sustainedField = combine(deadField, liveField, psi);
-    const total = solve(shortBeam, combine(deadField, liveField, 1), 'dead + live load');
+    const total = solve(shortBeam, combine(deadField, liveField, 1), 'dead + live load', notes);
     const kappa = damageRatios(shortBeam, solveStatic(shortBeam, sustainedField), total);
     const historyBeam = buildBeamModel(support, span, input.zones.map((z, i) => afterLargestMoment(z.shortTerm, kappa[i]!)), extraPoints, count);
     const longBeam = buildBeamModel(support, span, input.zones.map((z, i) => afterLargestMoment(z.longTerm, kappa[i]!)), extraPoints, count);
-    return {
-      shortBeam,
-      dead: solve(shortBeam, deadField, 'dead load'),
-      total,
-      sustained: solve(historyBeam, sustainedField, 'sustained load'),
-      sustainedLong: solve(longBeam, sustainedField, 'sustained load, long term'),
-    };
+    const dead = solve(shortBeam, deadField, 'dead load', notes);
+    const sustained = solve(historyBeam, sustainedField, 'sustained load', notes);
+    const sustainedLong = solve(longBeam, sustainedField, 'sustained load, long term', notes);
+    return { shortBeam, dead, total, sustained, sustainedLong, notes };
   };
   const values = (r: ReturnType<typeof integrateAt>) => [r.dead, r.total, r.sustained, r.sustainedLong].map(maxDeflection);
   let count = segments;
@@ -294,6 +296,7 @@ export function serviceDeflections(input: ServiceInput): ServiceOutcome {
     if (a.every((v, i) => Math.abs(v - b[i]!) <= 5e-4 * Math.max(Math.abs(b[i]!), 0.01 * scale))) break;
   }
   const { shortBeam, dead, total, sustained, sustainedLong } = run;
+  warnings.push(...run.notes);
   const integration = {
     dead: maxDeflection(dead),
     deadPlusLive: maxDeflection(total),

@@ -106,6 +106,12 @@ export function interpolate(xs: readonly number[], ys: readonly number[], x: num
 /** Relative width of the moment band over which a load-controlled jump in curvature is spread. */
 export const REGAIN_BAND = 1e-3;
 
+/**
+ * A drop that starts below this share of the peak moment (a long-term curve whose restrained
+ * shrinkage cracks the section at about zero moment) gets the band of a drop at this share.
+ */
+export const REGAIN_FLOOR = 1e-2;
+
 /** Builds the lookup tables from a computed curve. */
 export function sectionResponse(curve: MomentCurvatureResult): SectionResponse | undefined {
   const pts = curve.points;
@@ -129,7 +135,7 @@ export function sectionResponse(curve: MomentCurvatureResult): SectionResponse |
         // The regained branch starts 0.1 % above the moment where the curve dropped: a steep but
         // finite flexibility, so that the redundants of an indeterminate beam can still be solved
         // by Newton's method when a section sits on the jump (common practice, no source).
-        envM.push(prevM * (1 + REGAIN_BAND));
+        envM.push(prevM >= REGAIN_FLOOR * peak.moment ? prevM * (1 + REGAIN_BAND) : prevM + REGAIN_BAND * REGAIN_FLOOR * Math.abs(peak.moment));
         envPhi.push(phi);
       }
       if (p.moment > envM[envM.length - 1]!) {

@@ -7,6 +7,7 @@ import { createRequire } from 'node:module';
 import pdfmake from 'pdfmake';
 import type { TDocumentDefinitions } from 'pdfmake/interfaces';
 import { installFigureDrawing } from '../../core/report/pdfmake-figures.ts';
+import { installInlineMeasuring } from '../../core/report/pdfmake-measure.ts';
 import type { DocumentDefinition } from '../../core/report/types.ts';
 import { nodeFontDescriptors, reportFontPaths } from './fonts.ts';
 
@@ -24,6 +25,9 @@ function configure(): void {
   // Charts given as figure programs are drawn directly (core/report/pdfmake-figures.ts). The class
   // is the one pdfmake's own modules load (the same file, so the same module instance).
   installFigureDrawing((require('pdfmake/js/PDFDocument.js') as { default: { prototype: object } }).default);
+  // Each inline's style is pushed once while it is measured, not once per style property
+  // (core/report/pdfmake-measure.ts; same measurements, a third less CPU on the report's tables).
+  installInlineMeasuring((require('pdfmake/js/TextInlines.js') as { default: { prototype: object } }).default);
   configured = true;
 }
 

@@ -7,7 +7,7 @@ import { DEFAULT_STYLE, STYLES, pageGeometry } from '../../../core/report/layout
 import type { DocumentDefinition } from '../../../core/report/types.ts';
 
 const require = createRequire(import.meta.url);
-type Measure = (inlines: unknown[], stack: unknown) => unknown[];
+type Measure = ReturnType<typeof originalInlineMeasuring>;
 const TextInlines = (require('pdfmake/js/TextInlines.js') as { default: { prototype: { measure: Measure } } }).default;
 
 /** A document that exercises every style property the measurer reads, through named styles, `extends`, nesting and inline overrides. */
@@ -34,7 +34,7 @@ function styledDocument(): DocumentDefinition {
       { stack: [{ text: 'nested in a styled stack', fontSize: 7 }, { text: 'second line right', alignment: 'right' }], style: 'child' },
       { table: { widths: ['auto', '*'], body: [[{ text: 'M', bold: true }, { text: ['12.5 ', { text: 'kN·m', italics: true }] }], ['φ', { text: '0.0123 1/m', style: 'base' }]] } },
     ],
-    header: () => null, footer: (p, n) => ({ text: `Page ${p} of ${n}`, alignment: 'center', fontSize: 7.5 }),
+    header: () => null, footer: (p: number, n: number) => ({ text: `Page ${p} of ${n}`, alignment: 'center', fontSize: 7.5 }),
     styles, defaultStyle: DEFAULT_STYLE, images: {}, compress: false,
   } as unknown as DocumentDefinition;
 }

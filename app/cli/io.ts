@@ -73,8 +73,13 @@ export function nodeIo(): CliIo {
     resolvePath: (path) => resolve(path),
     signal: controller.signal,
     withImmediateInterrupt: async (work) => {
-      // Ctrl+C came before this work began (while the file was read and checked, slow for a large
-      // project on a busy machine): honour it now instead of running the work to its end.
+      // A Ctrl+C that came during the synchronous stretch before (parsing and checking a large
+      // project, seconds on a busy machine) is still waiting in the event loop: Node runs signal
+      // listeners only when the loop turns. Removing the listener now would drop it (the analysis
+      // then ran to its end, ignoring the interrupt: seen under load 30–50). Let the loop turn once
+      // so it reaches the listener; the window left is the two statements below.
+      await new Promise<void>((resolve) => setImmediate(resolve));
+      // Ctrl+C came before this work began: honour it now instead of running the work to its end.
       if (controller.signal.aborted) process.exit(EXIT.interrupted);
       // Without a listener Node restores the default action of SIGINT: the process ends at once.
       const listening = process.listeners('SIGINT').includes(onInterrupt);

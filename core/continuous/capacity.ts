@@ -21,13 +21,10 @@ import { buildMesh, loadPoints, releasedField, type BeamMesh } from './model.ts'
 import { deflections, evaluate, supportRows, type ActiveHinge, type DistributedLaw, type Evaluation, type StructureState, type SupportRow } from './structure.ts';
 import { linearLaw } from './elastic.ts';
 import { newton, type Scales } from './newton.ts';
-import { exceedsBeyondRounding } from '../numeric/ties.ts';
+import { differBeyondRounding } from '../numeric/ties.ts';
 
 /** Hinges whose first yield falls within this fraction of one load step of each other formed together. */
 const SAME_CROSSING = 1e-7;
-
-/** True when two values differ beyond rounding (either exceeds the other: core/numeric/ties.ts). */
-const differ = (a: number, b: number) => exceedsBeyondRounding(a, b) || exceedsBeyondRounding(b, a);
 
 export interface CapacityInput {
   readonly definition: ContinuousBeamDefinition;
@@ -485,7 +482,7 @@ export function capacityAnalysis(input: CapacityInput): CapacityResult {
     points: out,
     // In the order of deflection, then load factor; values equal within rounding (twins of a
     // symmetric beam) keep the order they were found in (the sort is stable), hinges by number.
-    events: events.sort((a, b) => (differ(a.deflection, b.deflection) ? a.deflection - b.deflection : differ(a.loadFactor, b.loadFactor) ? a.loadFactor - b.loadFactor : 0)),
+    events: events.sort((a, b) => (differBeyondRounding(a.deflection, b.deflection) ? a.deflection - b.deflection : differBeyondRounding(a.loadFactor, b.loadFactor) ? a.loadFactor - b.loadFactor : 0)),
     hinges: hingesOut,
     peakLoadFactor: peakLambda,
     ultimate,

@@ -16,3 +16,8 @@ export const TIE_RELATIVE = 1e-9;
 export function exceedsBeyondRounding(candidate: number, held: number, relative = TIE_RELATIVE): boolean {
   return candidate - held > relative * Math.max(Math.abs(candidate), Math.abs(held), 1e-300);
 }
+
+/** True when two values differ beyond rounding (either exceeds the other), e.g. to keep twins in the order found. */
+export function differBeyondRounding(a: number, b: number, relative = TIE_RELATIVE): boolean {
+  return exceedsBeyondRounding(a, b, relative) || exceedsBeyondRounding(b, a, relative);
+}

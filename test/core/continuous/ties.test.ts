@@ -7,7 +7,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { analyzeContinuousMembers } from '../../../core/analysis.ts';
-import { exceedsBeyondRounding, TIE_RELATIVE } from '../../../core/numeric/ties.ts';
+import { differBeyondRounding, exceedsBeyondRounding, TIE_RELATIVE } from '../../../core/numeric/ties.ts';
 import { demoProjectSI } from '../../../core/project/demo.ts';
 
 describe('exceedsBeyondRounding', () => {
@@ -18,6 +18,9 @@ describe('exceedsBeyondRounding', () => {
     expect(exceedsBeyondRounding(-1, -1 - 1e-6)).toBe(true);
     expect(exceedsBeyondRounding(0, 0)).toBe(false);
     expect(exceedsBeyondRounding(1e-200, 0)).toBe(true);
+    expect(differBeyondRounding(2, 2 + 1e-12)).toBe(false);
+    expect(differBeyondRounding(2 + 1e-6, 2)).toBe(true);
+    expect(differBeyondRounding(2, 2 + 1e-6)).toBe(true);
   });
 });
 

@@ -16,6 +16,9 @@ export function refineByChord(snapshots: readonly Snapshot[], solver: CurveSolve
   const refined: Snapshot[] = [snapshots[0]!];
   const refine = (a: Snapshot, b: Snapshot, depth: number) => {
     if (depth > 0 && b.kappa - a.kappa > 1e-9 * b.kappa) {
+      // Started from the chord's mean strain, not a parabola through a third state: on the long-term
+      // curves of some members the parabola's start settled on another equilibrium (service
+      // long-term deflection moved by up to 1.6 %), so the probe keeps the chord's start.
       solver.lastGuess = 0.5 * (a.eq.referenceStrain + b.eq.referenceStrain);
       const mid = solver.solve(0.5 * (a.kappa + b.kappa));
       if (typeof mid !== 'string' && Math.abs(mid.moment - 0.5 * (a.eq.moment + b.eq.moment)) > tolerance) {
@@ -51,6 +54,24 @@ export function refineByChord(snapshots: readonly Snapshot[], solver: CurveSolve
 }
 
 /**
+ * Centroid strain at curvature `kappa` between a and b from the parabola through a, b and c (the
+ * chord's value when there is no c, or when the parabola strays by more than the strain change
+ * from a to b: then the three states do not describe one smooth stretch).
+ */
+function midpointStrain(a: Snapshot, b: Snapshot, c: Snapshot | undefined, kappa: number): number {
+  const ea = a.eq.referenceStrain;
+  const eb = b.eq.referenceStrain;
+  const chord = ea + ((eb - ea) * (kappa - a.kappa)) / (b.kappa - a.kappa);
+  if (!c || c.kappa === a.kappa || c.kappa === b.kappa) return chord;
+  const ec = c.eq.referenceStrain;
+  const parabola =
+    (ea * (kappa - b.kappa) * (kappa - c.kappa)) / ((a.kappa - b.kappa) * (a.kappa - c.kappa)) +
+    (eb * (kappa - a.kappa) * (kappa - c.kappa)) / ((b.kappa - a.kappa) * (b.kappa - c.kappa)) +
+    (ec * (kappa - a.kappa) * (kappa - b.kappa)) / ((c.kappa - a.kappa) * (c.kappa - b.kappa));
+  return Number.isFinite(parabola) && Math.abs(parabola - chord) <= Math.abs(eb - ea) ? parabola : chord;
+}
+
+/**
  * The snapshot of the largest moment, refined between its neighbours by a golden-section search
  * (inserted into `snapshots` when it is new). `sign` is +1 sagging, −1 hogging.
  */
@@ -60,9 +81,12 @@ export function peakSnapshot(snapshots: Snapshot[], sign: 1 | -1, solver: CurveS
   if (!(iMax > 0 && iMax < snapshots.length - 1)) return snapshots[iMax]!;
   const lo = snapshots[iMax - 1]!;
   const hi = snapshots[iMax + 1]!;
-  let best: Snapshot = snapshots[iMax]!;
+  const top = snapshots[iMax]!;
+  let best: Snapshot = top;
   goldenSectionMaximum((kappa) => {
-    solver.lastGuess = best.eq.referenceStrain;
+    // Started from the parabola through the three points around the peak (one branch: the chord
+    // refinement does not cross a snap, and neither does this bracket when its ends are not jumped).
+    solver.lastGuess = lo.jumped || top.jumped ? best.eq.referenceStrain : midpointStrain(kappa < top.kappa ? lo : top, kappa < top.kappa ? top : hi, kappa < top.kappa ? hi : lo, kappa);
     const s = solver.solve(kappa);
     if (typeof s === 'string') return -Infinity;
     if (sign * s.moment > sign * best.eq.moment) best = { kappa, eq: s };

@@ -22,7 +22,12 @@ export type EquilibriumOutcome =
   | { readonly ok: true; readonly state: EquilibriumState }
   | { readonly ok: false; readonly reason: string };
 
-/** Force tolerance, N: a billionth of the squash load of the concrete (about 0.003 N for a 300 × 500 beam). */
+/**
+ * Force tolerance, N: 1e-7 of the squash load of the concrete (about 0.3 N for a 300 × 500 beam).
+ * The moment then carries an error of about the tolerance times the lever arm, ~1e-7 of the
+ * section's moments, far inside the engine's accuracy against the 20,000-fibre reference (0.2 %);
+ * the former 1e-9 cost 16 % more section-force evaluations per curve for no result an engineer sees.
+ */
 export function forceTolerance(model: SectionModel): number {
   let squash = 0;
   for (const part of model.concreteParts) {
@@ -30,7 +35,7 @@ export function forceTolerance(model: SectionModel): number {
     for (const s of part.strips) area += 0.5 * (s.widthTop + s.widthBottom) * (s.bottom - s.top);
     squash += area * part.material.peakStress;
   }
-  return Math.max(1e-9 * squash, 1e-9);
+  return Math.max(1e-7 * squash, 1e-9);
 }
 
 const scratch: SectionForces = { axial: 0, moment: 0, magnitude: 0 };

@@ -111,7 +111,10 @@ export function momentCurvature(model: SectionModel, direction: BendingDirection
     // Start from the strain extrapolated along the last two points.
     const before = snapshots.length > 1 ? snapshots[snapshots.length - 2]! : undefined;
     if (before && previous.kappa > before.kappa) {
-      solver.lastGuess = previous.eq.referenceStrain + ((previous.eq.referenceStrain - before.eq.referenceStrain) * (kappa - previous.kappa)) / (previous.kappa - before.kappa);
+      const linear = previous.eq.referenceStrain + ((previous.eq.referenceStrain - before.eq.referenceStrain) * (kappa - previous.kappa)) / (previous.kappa - before.kappa);
+      const earlier = snapshots.length > 2 ? snapshots[snapshots.length - 3]! : undefined;
+      const quadratic = earlier && before.kappa > earlier.kappa ? parabolaAt(earlier, before, previous, kappa) : NaN;
+      solver.lastGuess = Number.isFinite(quadratic) && Math.abs(quadratic - linear) <= Math.abs(linear - previous.eq.referenceStrain) ? quadratic : linear;
     }
     let eq = solver.solve(kappa);
     let stepKappa = kappa;
@@ -259,6 +262,15 @@ export function momentCurvature(model: SectionModel, direction: BendingDirection
   const sampled = refineByChord(snapshots, solver);
   keyAt.peak = peakSnapshot(sampled, sign, solver);
   return curveResult(model, direction, { status, ultimateCause, limits, points: sampled, keyAt, governing: events.governing, warnings, bilinearMethod: options.bilinearMethod ?? 'priestley-2007', solves: solver.solves });
+}
+
+/** Centroid strain at curvature kappa on the parabola through the states a, b, c (distinct curvatures). */
+function parabolaAt(a: Snapshot, b: Snapshot, c: Snapshot, kappa: number): number {
+  return (
+    (a.eq.referenceStrain * (kappa - b.kappa) * (kappa - c.kappa)) / ((a.kappa - b.kappa) * (a.kappa - c.kappa)) +
+    (b.eq.referenceStrain * (kappa - a.kappa) * (kappa - c.kappa)) / ((b.kappa - a.kappa) * (b.kappa - c.kappa)) +
+    (c.eq.referenceStrain * (kappa - a.kappa) * (kappa - b.kappa)) / ((c.kappa - a.kappa) * (c.kappa - b.kappa))
+  );
 }
 
 /** The curve's result from its sampled states and key points, with the warnings an engineer must see. */

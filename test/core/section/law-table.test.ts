@@ -202,7 +202,7 @@ describe('concrete laws read through their tables', () => {
     const { model } = buildSectionModel(benchTee, materialLibrary(project.materials, 'ACI 318-19'));
     // Around the equilibrium at φ = 6e-5 1/mm (confined core and cover on their rational branches):
     // 40,000 steps of 5e-9 in ε0. N is smooth there, so its second differences are round-off and
-    // curvature, far below the equilibrium tolerance (~0.009 N, core/section/equilibrium.ts
+    // curvature, far below the equilibrium tolerance (~0.9 N, core/section/equilibrium.ts
     // forceTolerance); the part count that stepped with ε0 gave a jump of 56 N at ε0 + 8e-5.
     const phi = 6e-5;
     const root = solveEquilibrium(model, phi, 0);

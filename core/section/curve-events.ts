@@ -44,6 +44,13 @@ export interface CurveEvents {
   evaluateAll(eq: EquilibriumState): Record<EventName, number>;
   /** The cause of an ultimate event at a state: which material reached its limit. */
   causeOf(name: EventName, eq: EquilibriumState): UltimateCause;
+  /**
+   * The fibre that decides event `name` at a state near its root, and the strain it has there (a
+   * face reaching a strain, the most strained bar reaching yield): the event's state can then be
+   * solved with that strain held exactly (CurveSolver.pinEvent). Null for the moment drop and the
+   * element limits (solved elsewhere).
+   */
+  pinOf(name: EventName, eq: EquilibriumState): { readonly depth: number; readonly strain: number } | null;
 }
 
 export function curveEvents(model: SectionModel, direction: BendingDirection, options: CurveEventOptions, drop: DropState): CurveEvents {
@@ -61,6 +68,20 @@ export function curveEvents(model: SectionModel, direction: BendingDirection, op
     let m = 0;
     for (const e of model.elements) if (isSteel(e)) m = Math.max(m, -own(e, eq));
     return m;
+  };
+  /** The steel element strained most in tension, held at the nominal point's steel strain. */
+  const steelPin = (eq: EquilibriumState) => {
+    let best: DiscreteElement | undefined;
+    let m = -Infinity;
+    for (const e of model.elements) {
+      if (!isSteel(e)) continue;
+      const t = -own(e, eq);
+      if (t > m) {
+        m = t;
+        best = e;
+      }
+    }
+    return best ? { depth: best.depth, strain: best.initialStrain - NOMINAL_STEEL_STRAIN } : null;
   };
   const g: Record<EventName, (eq: EquilibriumState) => number> = {
     cracking: (eq) => -strainAtDepth(model, eq.referenceStrain, eq.curvature, face.tension) / crackingStrain - 1,
@@ -110,6 +131,41 @@ export function curveEvents(model: SectionModel, direction: BendingDirection, op
         elementLimit: enabled.elementLimit ? g.elementLimit(eq) : -1,
         momentDrop: enabled.momentDrop ? g.momentDrop(eq) : -1,
       };
+    },
+    pinOf(name, eq) {
+      switch (name) {
+        case 'cracking': return { depth: face.tension, strain: -crackingStrain };
+        case 'codeCrushing': return { depth: face.compression, strain: options.codeCrushingStrain };
+        case 'firstYield': {
+          let best: DiscreteElement | undefined;
+          let r = -Infinity;
+          for (const e of steelInTension) {
+            const ratio = -own(e, eq) / e.material.yieldStrain!;
+            if (ratio > r) {
+              r = ratio;
+              best = e;
+            }
+          }
+          return best ? { depth: best.depth, strain: best.initialStrain - best.material.yieldStrain! } : null;
+        }
+        case 'nominal':
+          return compressionFaceStrain(eq) / NOMINAL_CONCRETE_STRAIN >= maxSteelTension(eq) / NOMINAL_STEEL_STRAIN
+            ? { depth: face.compression, strain: NOMINAL_CONCRETE_STRAIN }
+            : steelPin(eq);
+        case 'crushing': {
+          let best: ConcretePart | undefined;
+          let r = -Infinity;
+          for (const p of governing) {
+            const ratio = strainAtDepth(model, eq.referenceStrain, eq.curvature, direction === 'sagging' ? p.top : p.bottom) / p.material.crushingStrain;
+            if (ratio > r) {
+              r = ratio;
+              best = p;
+            }
+          }
+          return best ? { depth: direction === 'sagging' ? best.top : best.bottom, strain: best.material.crushingStrain } : null;
+        }
+        default: return null;
+      }
     },
     causeOf(name, eq) {
       if (name === 'momentDrop') return 'moment-drop';

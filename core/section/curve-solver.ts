@@ -84,6 +84,44 @@ export class CurveSolver {
   }
 
   /**
+   * The state of an event located by `locate`, solved again with the strain of the fibre that
+   * decides it held exactly (`pin`: depth, strain): for each curvature the centroid strain follows
+   * from the pinned strain and the curvature is the root of the axial force, closed to 1e-13 in
+   * curvature within 1e-5 (then 1e-4) of the located curvature. The located state is good to the
+   * equilibrium's force tolerance; this one puts the key point's strain exactly where its law or
+   * code puts it (εcu, εy, the cracking strain), whatever that tolerance. Returns the located state
+   * unchanged when the pinned axial force does not change sign in the bracket, when the result no
+   * longer carries moment in the curve's sense, or when another fibre decides the event there
+   * (`g` of the pinned state beyond ±1e-9).
+   */
+  pinEvent(g: (eq: EquilibriumState) => number, pin: { readonly depth: number; readonly strain: number }, located: Snapshot): Snapshot {
+    const model = this.model;
+    const k = located.kappa;
+    if (!(k > 0)) return located;
+    const eps0 = (kappa: number) => pin.strain - this.sign * kappa * (model.centroidDepth - pin.depth);
+    const axial = (kappa: number) => {
+      this.solves++;
+      return sectionForces(model, eps0(kappa), this.sign * kappa).axial - model.axialForce;
+    };
+    for (const width of [1e-5, 1e-4]) {
+      const lo = k * (1 - width);
+      const hi = k * (1 + width);
+      const flo = axial(lo);
+      const fhi = axial(hi);
+      if (!(flo * fhi < 0)) continue;
+      const root = brentRoot(axial, lo, hi, flo, fhi, { xTolerance: 1e-13 * k, fTolerance: 1e-3 * this.tolerance, maxIterations: 100 });
+      if (!(Math.abs(root.fx) <= this.tolerance)) return located;
+      const kappa = root.x;
+      const forces = sectionForces(model, eps0(kappa), this.sign * kappa);
+      const eq: EquilibriumState = { curvature: this.sign * kappa, referenceStrain: eps0(kappa), moment: forces.moment, residual: forces.axial - model.axialForce };
+      if (!(this.sign * eq.moment > 0) || !(Math.abs(g(eq)) <= 1e-9)) return located;
+      this.lastGuess = eq.referenceStrain;
+      return located.jumped ? { kappa, eq, jumped: true } : { kappa, eq };
+    }
+    return located;
+  }
+
+  /**
    * Locates the curvature where the event function g crosses zero between the bracketing
    * snapshots a and b; `before` is the snapshot preceding a on the curve (its branch direction).
    * Returns the state, or the reason no equilibrium was found.

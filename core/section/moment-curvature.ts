@@ -83,7 +83,11 @@ export function momentCurvature(model: SectionModel, direction: BendingDirection
     const free = solver.locate(g[name], a, b, index > 0 ? snapshots[index - 1]! : undefined);
     // Where the free search loses the path just before an element's limit (the path snaps right
     // after it), the limit is solved with the element's strain pinned there.
-    if (name !== 'elementLimit' || (typeof free !== 'string' && !free.jumped)) return free;
+    // The key point's strain exactly where its law or code puts it (εcu, εy, …), not to the force
+    // tolerance — also the last state before a snap (the fibre at εcu is still on the curve's branch).
+    const pin = typeof free !== 'string' ? events.pinOf(name, free.eq) : null;
+    const pinned = pin && typeof free !== 'string' ? solver.pinEvent(g[name], pin, free) : free;
+    if (name !== 'elementLimit' || (typeof pinned !== 'string' && !pinned.jumped)) return pinned;
     return solver.locateElementLimit(limitedElements, a, b.kappa) ?? free;
   };
 

@@ -91,6 +91,13 @@ export function momentCurvature(model: SectionModel, direction: BendingDirection
     return solver.locateElementLimit(limitedElements, a, b.kappa) ?? free;
   };
 
+  /**
+   * True when event `name` is clearly not yet reached at a located state (its function below −1e-3,
+   * a thousand times the nearness at which two events count as one): the event lies beyond it. A
+   * state at a snap of the path (`jumped`) decides nothing — events jump there together.
+   */
+  const after = (name: EventName, snap: Snapshot) => !snap.jumped && g[name](snap.eq) < -1e-3;
+
   // --- march --------------------------------------------------------------------------------------
   const keyAt: Partial<Record<KeyPointName, Snapshot>> = {};
   let status: CurveStatus | undefined;
@@ -172,6 +179,9 @@ export function momentCurvature(model: SectionModel, direction: BendingDirection
     let unlocated: string | undefined;
     for (const n of forcedLimit ? [] : ULTIMATE_EVENTS) {
       if (!enabled[n] || !(previousG[n] < 0 && currentG[n] >= 0)) continue;
+      // Clearly not yet reached at a limit already located in this step (found on the curve's own
+      // branch, not at a snap): it comes later and cannot be the earliest — no search needed.
+      if (ultimate && after(n, ultimate.snap)) continue;
       const located = locate(n, previous, current);
       if (typeof located === 'string') {
         // Another limit in the same step may still be located (e.g. the moment drop that follows a
@@ -215,6 +225,8 @@ export function momentCurvature(model: SectionModel, direction: BendingDirection
     const found: { name: KeyPointName; snap: Snapshot }[] = [];
     for (const n of KEY_EVENTS) {
       if (!enabled[n] || keyAt[n as KeyPointName] || !(previousG[n] < 0 && currentG[n] >= 0)) continue;
+      // A key event clearly not yet reached at the ultimate is beyond the curve's end.
+      if (ultimate && after(n, ultimate.snap)) continue;
       const located = locate(n, previous, current);
       if (typeof located === 'string') {
         warnings.push(`The ${n} point could not be located exactly: ${located}`);

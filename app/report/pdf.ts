@@ -6,8 +6,7 @@
 import { createRequire } from 'node:module';
 import pdfmake from 'pdfmake';
 import type { TDocumentDefinitions } from 'pdfmake/interfaces';
-import { installFigureDrawing } from '../../core/report/pdfmake-figures.ts';
-import { installInlineMeasuring } from '../../core/report/pdfmake-measure.ts';
+import { installReportAdjustments, type PdfmakeClass } from '../../core/report/pdfmake-classes.ts';
 import type { DocumentDefinition } from '../../core/report/types.ts';
 import { nodeFontDescriptors, reportFontPaths } from './fonts.ts';
 
@@ -22,12 +21,15 @@ function configure(): void {
   pdfmake.setUrlAccessPolicy(() => false);
   pdfmake.setLocalAccessPolicy((path: string) => allowed.has(path));
   pdfmake.setFonts(nodeFontDescriptors());
-  // Charts given as figure programs are drawn directly (core/report/pdfmake-figures.ts). The class
-  // is the one pdfmake's own modules load (the same file, so the same module instance).
-  installFigureDrawing((require('pdfmake/js/PDFDocument.js') as { default: { prototype: object } }).default);
-  // Each inline's style is pushed once while it is measured, not once per style property
-  // (core/report/pdfmake-measure.ts; same measurements, a third less CPU on the report's tables).
-  installInlineMeasuring((require('pdfmake/js/TextInlines.js') as { default: { prototype: object } }).default);
+  // Charts drawn from their figure programs, inline measuring with one style push, words that print
+  // alike written as one text object (core/report/pdfmake-classes.ts, as in the app's report worker).
+  // The classes are the ones pdfmake's own modules load (the same files, so the same module instances).
+  const load = (module: unknown) => (module as { default: PdfmakeClass }).default;
+  installReportAdjustments({
+    documentClass: load(require('pdfmake/js/PDFDocument.js')),
+    textInlinesClass: load(require('pdfmake/js/TextInlines.js')),
+    rendererClass: load(require('pdfmake/js/Renderer.js')),
+  });
   configured = true;
 }
 

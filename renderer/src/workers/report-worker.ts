@@ -2,8 +2,9 @@
  * The PDF report, made off the UI thread with the same code as the command line: analyse the
  * members (core/analysis), draw the charts with chart.js on core's recording canvas (chartSvg, the
  * same SVG as `hingeline report`), build the document definition (core/report, with the fallback
- * fonts for names in other scripts) and lay it out with pdfmake 0.3's browser build, which draws the
- * charts from their figure programs as the command line does. Loaded only when
+ * fonts for names in other scripts) and lay it out with pdfmake 0.3's browser build, adjusted as in
+ * the command line (charts drawn from their figure programs, words that print alike written as one
+ * text object), so both write the same pages. Loaded only when
  * a report is asked for; the page stops it (terminate) to cancel.
  */
 import pdfMakeModule from 'pdfmake/build/pdfmake.js';
@@ -13,7 +14,7 @@ import { chartSvg } from '../../../core/report/chart-svg.ts';
 import { buildReportDocument } from '../../../core/report/document.ts';
 import { reportCharts } from '../../../core/report/figures.ts';
 import { reportFontDescriptors } from '../../../core/report/fonts.ts';
-import { installFigureDrawing } from '../../../core/report/pdfmake-figures.ts';
+import { findBundledClasses, installReportAdjustments } from '../../../core/report/pdfmake-classes.ts';
 import type { MemberResult } from '../../../core/assessment/results.ts';
 import { chartJs } from '../charts/chartjs.ts';
 import { loadReportFonts, type BrowserReportFonts } from '../report/report-fonts.ts';
@@ -23,7 +24,7 @@ interface PdfMakeBrowser {
   addVirtualFileSystem(files: Record<string, string>): void;
   setFonts(fonts: Record<string, unknown>): void;
   setUrlAccessPolicy(policy: (url: string) => boolean): void;
-  setProgressCallback(callback: (fraction: number) => void): void;
+  setProgressCallback(callback: ((fraction: number) => void) | undefined): void;
   createPdf(definition: unknown): { getBuffer(): Promise<Uint8Array>; getStream(): Promise<object> };
 }
 
@@ -42,10 +43,11 @@ function prepare(): Promise<BrowserReportFonts> {
     pdfMake.addVirtualFileSystem(loaded.vfs);
     pdfMake.setFonts(reportFontDescriptors());
     pdfMake.setUrlAccessPolicy(() => false);
-    // Charts are drawn from their figure programs, as in the command line (core/report/pdfmake-figures.ts).
-    // The browser build does not export pdfmake's document class: an empty document shows it.
-    const probe = await pdfMake.createPdf({ content: [] }).getStream();
-    installFigureDrawing(probe.constructor as { prototype: object });
+    // The same adjustments of pdfmake as in the command line (charts drawn from their figure
+    // programs, inline measuring, words that print alike as one text object). The browser build
+    // exports none of the classes they change: a one-line document shows them
+    // (core/report/pdfmake-classes.ts). Nothing else runs in this worker until it is ready.
+    installReportAdjustments(await findBundledClasses(pdfMake));
     return loaded;
   });
   return ready;

@@ -43,7 +43,7 @@ type ChartConstructorConfig = ConstructorParameters<typeof Chart>[1];
  */
 export async function renderChartPng(spec: ChartSpec, width: number, height: number, pixelRatio = 2, options: ChartJsConfigOptions = {}): Promise<string> {
   await registerCanvasFonts();
-  const { createCanvas } = await import('@napi-rs/canvas');
+  const { createCanvas, Path2D: CanvasPath2D } = await import('@napi-rs/canvas');
   const w = Math.round(width * pixelRatio);
   const h = Math.round(height * pixelRatio);
   const canvas = createCanvas(w, h);
@@ -53,7 +53,22 @@ export async function renderChartPng(spec: ChartSpec, width: number, height: num
   const config = toChartJsConfig(spec, { fontFamily: REPORT_FONT_FAMILY, ...options, devicePixelRatio: pixelRatio, background: '#ffffff', platform: BasicPlatform });
   const { Chart: ChartClass } = chartJs();
   const target = { width: Math.round(width), height: Math.round(height), style: {}, getContext: () => context };
-  const chart = new ChartClass(target as unknown as HTMLCanvasElement, config as unknown as ChartConstructorConfig);
+  // chart.js strokes each line through a global Path2D if there was one when it loaded, and this
+  // canvas accepts only its own: another library's (pdf.js polyfills one in Node from its own copy of
+  // this canvas package) made the stroke throw. Its own is lent while the chart draws (synchronously,
+  // in the constructor), as chartSvg lends the recording canvas's; without a global Path2D at load,
+  // chart.js draws lines segment by segment and never builds one.
+  const host = globalThis as { Path2D?: unknown };
+  const hadPath2D = Object.prototype.hasOwnProperty.call(host, 'Path2D');
+  const previous = host.Path2D;
+  host.Path2D = CanvasPath2D;
+  let chart: { destroy(): void };
+  try {
+    chart = new ChartClass(target as unknown as HTMLCanvasElement, config as unknown as ChartConstructorConfig);
+  } finally {
+    if (hadPath2D) host.Path2D = previous;
+    else delete host.Path2D;
+  }
   try {
     const pixels = context.getImageData(0, 0, w, h).data;
     const png = await encodeRgbPng(pixels, w, h);

@@ -64,7 +64,7 @@ export interface ServiceInput {
 export interface ServiceOutcome {
   readonly service: ServiceDeflections;
   readonly distribution: SpanDistribution | null;
-  readonly warnings: string[];
+  readonly warnings: Text[];
 }
 
 /** A section response given by closed-form curvature functions of the moment magnitude (code methods). */
@@ -246,8 +246,18 @@ function steelFirstMoment(model: SectionModel, axis: number): number {
   return model.elements.filter((e) => e.kind !== 'frp').reduce((s, e) => s + e.area * (e.depth - axis), 0);
 }
 
+/**
+ * The service integration doubles the station spacing's segment count until two successive answers
+ * agree to this fraction (0.05 %), at most MAX_SERVICE_REFINEMENTS times (60 → 960 segments by
+ * default); where they still differ then, each value that does gets a warning.
+ */
+export const SERVICE_REFINEMENT_TOLERANCE = 5e-4;
+export const MAX_SERVICE_REFINEMENTS = 4;
+/** The states the refinement compares, in the order of `values` in serviceDeflections. */
+const SERVICE_STATES = ['dead load', 'dead + live load', 'sustained load', 'sustained load, long term'] as const;
+
 export function serviceDeflections(input: ServiceInput): ServiceOutcome {
-  const warnings: string[] = [];
+  const warnings: Text[] = [];
   const { support, span, segments, extraPoints, settings } = input;
   const psi = settings.sustainedLiveFraction;
 
@@ -286,17 +296,31 @@ export function serviceDeflections(input: ServiceInput): ServiceOutcome {
   const values = (r: ReturnType<typeof integrateAt>) => [r.dead, r.total, r.sustained, r.sustainedLong].map(maxDeflection);
   let count = segments;
   let run = integrateAt(count);
-  for (let refinements = 0; refinements < 4; refinements++) {
+  const tried = [count];
+  // The values that still differ by more than the tolerance between the last two spacings (none once
+  // two agree).
+  let unsettled: { label: string; coarse: number; fine: number }[] = [];
+  for (let refinements = 0; refinements < MAX_SERVICE_REFINEMENTS; refinements++) {
     const finer = integrateAt(count * 2);
     const a = values(run);
     const b = values(finer);
     const scale = Math.max(...b.map(Math.abs), 1e-9);
     run = finer;
     count *= 2;
-    if (a.every((v, i) => Math.abs(v - b[i]!) <= 5e-4 * Math.max(Math.abs(b[i]!), 0.01 * scale))) break;
+    tried.push(count);
+    unsettled = a.flatMap((v, i) => (Math.abs(v - b[i]!) <= SERVICE_REFINEMENT_TOLERANCE * Math.max(Math.abs(b[i]!), 0.01 * scale) ? [] : [{ label: SERVICE_STATES[i]!, coarse: v, fine: b[i]! }]));
+    if (unsettled.length === 0) break;
   }
   const { shortBeam, dead, total, sustained, sustainedLong } = run;
   warnings.push(...run.notes);
+  // Refinement that stopped at its last spacing with values still moving: said, not hidden.
+  for (const u of unsettled) {
+    const difference = Math.abs(u.fine - u.coarse);
+    const change = (100 * difference) / Math.max(Math.abs(u.fine), 1e-300);
+    // Decimals enough that the two values print differently (in mm; one more covers inches).
+    const decimals = Math.min(8, Math.max(3, Math.ceil(-Math.log10(Math.max(difference, 1e-8))) + 2));
+    warnings.push(phrase`Service deflection (${u.label}) by integration did not settle as the station spacing was refined (${tried.join(', ')} segments): ${q('deflection', u.coarse, { decimals })} with ${count / 2} segments, ${q('deflection', u.fine, { decimals })} with ${count}, ${change.toPrecision(2)} % apart where the refinement asks for ${100 * SERVICE_REFINEMENT_TOLERANCE} %; the value shown is the one with ${count} segments.`);
+  }
   const integration = {
     dead: maxDeflection(dead),
     deadPlusLive: maxDeflection(total),

@@ -31,6 +31,13 @@ export interface StationRatio {
   readonly sign: 1 | -1;
 }
 
+/** What is kept of a solved state besides its snapshot: its moments and, when known, its segment integrals. */
+interface SolvedState {
+  readonly moment: Float64Array;
+  readonly effective: Float64Array;
+  readonly integrals?: { readonly i0: Float64Array; readonly i1: Float64Array };
+}
+
 export class CapacityState {
   readonly eq: Equations;
   /** Number of stations, number of redundants, length of the member (mm). */
@@ -59,6 +66,13 @@ export class CapacityState {
    * changes: the caches below are valid for one version only.
    */
   hingeVersion = 0;
+  /**
+   * The moments and effective moments of each state solved here (copies taken when it was solved):
+   * restoring a state copies them back instead of recomputing the effective moments (the
+   * tension-shift windows), which the event functions do for every state they look at. Keyed by the
+   * snapshot object, so a snapshot built by spreading another (a predictor's guess) has none.
+   */
+  private readonly solvedMoments = new WeakMap<Snapshot, SolvedState>();
   private restored: Snapshot | undefined;
   private restoredVersion = -1;
   private deflected: Snapshot | undefined;
@@ -192,7 +206,13 @@ export class CapacityState {
         free.forEach((h, k) => rotations.set(h, res.rotations[k]!));
         for (const i of held) rotations.set(i, this.committedRotation(i));
         if (lambdaFree) rotations.set(controlled, theta);
-        return { lambda: res.lambda, redundants: res.redundants, rotations, memory: this.committed(this.baseMemory) };
+        const solved: Snapshot = { lambda: res.lambda, redundants: res.redundants, rotations, memory: this.committed(this.baseMemory) };
+        // The solve's last evaluation integrated the segments at this state, from the memory before
+        // it: the same integrals as from the state's own memory (committing the state changes no
+        // section it carries, Memory), so its deflected shape reuses them.
+        const integrals = res.integralsAtSolution && this.r > 0 ? { i0: Float64Array.from(this.eq.segmentI0), i1: Float64Array.from(this.eq.segmentI1) } : undefined;
+        this.solvedMoments.set(solved, { moment: Float64Array.from(this.eq.moment), effective: Float64Array.from(this.eq.effective), ...(integrals ? { integrals } : {}) });
+        return solved;
       }
       held = new Set([...held, ...back].filter((i) => !over.includes(i)));
     }
@@ -219,13 +239,15 @@ export class CapacityState {
     this.hinges.forEach((h, i) => {
       h.rotation = s.rotations.get(i) ?? 0;
     });
-    this.eq.moments(s.redundants, s.lambda);
+    const known = this.solvedMoments.get(s);
+    if (known) this.eq.loadMoments(known.moment, known.effective);
+    else this.eq.moments(s.redundants, s.lambda);
     return this.eq.moment;
   }
 
   deflectionAt(s: Snapshot, curvatureOut?: Float64Array): Float64Array {
     this.restore(s);
-    return deflectionShape(this.eq, s.memory, this.hinges, curvatureOut);
+    return deflectionShape(this.eq, s.memory, this.hinges, curvatureOut, this.solvedMoments.get(s)?.integrals);
   }
 
   /** Deflection at the control station (the last answer is remembered). */

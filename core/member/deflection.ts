@@ -36,16 +36,17 @@ const seg: SegmentIntegrals = { i0: 0, i1: 0, j00: 0, j01: 0, j11: 0, phiA: 0, p
  * v'' = −φ integrated exactly segment by segment, kinks at the concentrated rotations, then v = 0
  * at every support (a straight line removed per span; a cantilever follows its support's span, or
  * the support's own rotation when there is no span). `curvatureOut` receives the distributed
- * curvature at the stations.
+ * curvature at the stations. `integrals`: the segments' i0 and i1 for these moments and this
+ * memory when already known (the last evaluation of a converged solve, `Equations.segmentI0`/`I1`).
  */
-export function deflectionShape(eq: Equations, memory: Memory | null, hinges: readonly LocalisedHinge[], curvatureOut?: Float64Array): Float64Array {
+export function deflectionShape(eq: Equations, memory: Memory | null, hinges: readonly LocalisedHinge[], curvatureOut?: Float64Array, integrals?: { readonly i0: Float64Array; readonly i1: Float64Array }): Float64Array {
   const beam = eq.beam;
   const x = beam.x;
   const n = x.length;
   const raw = new Float64Array(n);
   const slopes = new Float64Array(n);
   const kinks = concentratedRotations(eq, memory, hinges);
-  eq.prepareEnds();
+  if (!integrals) eq.prepareEnds();
   let slope = 0;
   let next = 0;
   for (let k = 0; k < n - 1; k++) {
@@ -54,9 +55,18 @@ export function deflectionShape(eq: Equations, memory: Memory | null, hinges: re
     let dv = slope * h;
     let dSlope = 0;
     if (h > 0) {
-      eq.segment(k, memory, false, seg);
-      dv -= h * h * (seg.i0 - seg.i1);
-      dSlope = -h * seg.i0;
+      let i0: number;
+      let i1: number;
+      if (integrals) {
+        i0 = integrals.i0[k]!;
+        i1 = integrals.i1[k]!;
+      } else {
+        eq.segment(k, memory, false, seg);
+        i0 = seg.i0;
+        i1 = seg.i1;
+      }
+      dv -= h * h * (i0 - i1);
+      dSlope = -h * i0;
     }
     // Kinks at [x_k, x_k+1) act in this segment (the last one also takes its end); a zero-length
     // segment at a doubled station leaves them to the next.

@@ -277,6 +277,15 @@ export class Equations {
   private troughCount = 0;
 
   /**
+   * i0 and i1 of every segment (SegmentIntegrals) from the last `evaluate` that integrated the
+   * segments (r > 0, not secant), for its moments and memory: the deflected shape of a converged
+   * state reuses them (`newton` says whether its last evaluation was at the state it returns).
+   * Segments of zero length keep 0.
+   */
+  readonly segmentI0: Float64Array;
+  readonly segmentI1: Float64Array;
+
+  /**
    * Shear flexibility s, mm per N·mm: the deflection from shear strain is s·(M(x) − M(0)) (γ = s·V),
    * added to the deflected shape only (core/member/spread.ts shearFlexibility); 0: flexure only.
    */
@@ -299,6 +308,8 @@ export class Equations {
     this.srcHb = new Int32Array(this.n);
     this.srcHw = new Float64Array(this.n);
     this.zoneScale = Float64Array.from(beam.zones, curvatureScale);
+    this.segmentI0 = new Float64Array(Math.max(this.n - 1, 0));
+    this.segmentI1 = new Float64Array(Math.max(this.n - 1, 0));
   }
 
   /** Windows of every station for the shift a_l of its zone (in one sense), not crossing a support that takes a moment. */
@@ -403,6 +414,16 @@ export class Equations {
     return M;
   }
 
+  /**
+   * Puts back the moments and effective moments that `moments` gave for a state (copies of `moment`
+   * and `effective` taken then): the same numbers without searching the tension-shift windows again.
+   * The Jacobian's sources are not restored — `evaluate` always calls `moments` first.
+   */
+  loadMoments(moment: Float64Array, effective: Float64Array): void {
+    this.moment.set(moment);
+    this.effective.set(effective);
+  }
+
   /** Lists the interior peaks and troughs of the moments M (see `peaks`). */
   private findExtremes(M: Float64Array): void {
     let peaks = 0;
@@ -474,6 +495,15 @@ export class Equations {
   }
 
   /**
+   * The nonlinear-elastic curvature at every station as `prepareEnds` last found it (1/mm) — for a
+   * state without plasticity, its curvature (stationCurvature) without looking the laws up again.
+   */
+  endCurvatures(out: Float64Array): Float64Array {
+    for (let i = 0; i < this.n; i++) out[i] = this.ends[i]!.value;
+    return out;
+  }
+
+  /**
    * Integrals of the curvature over segment k (after `moments` and `prepareEnds`): i0 = ∫φ dt, i1 = ∫φ·t dt, and the
    * Jacobian weights with respect to the effective moments at its ends.
    */
@@ -535,6 +565,8 @@ export class Equations {
         const h = x[k + 1]! - x[k]!;
         if (h <= 0) continue;
         this.segment(k, memory, secant, seg);
+        this.segmentI0[k] = seg.i0;
+        this.segmentI1[k] = seg.i1;
         const w0 = seg.i0 - seg.i1;
         const w1 = seg.i1;
         const magnitude = h * (0.5 * (Math.abs(seg.phiA) + Math.abs(seg.phiB)) + CURVATURE_FLOOR * this.zoneScale[beam.segmentZone[k]!]!);
@@ -614,6 +646,11 @@ export interface NewtonResult {
   readonly rotations: number[];
   readonly iterations: number;
   readonly residualNorm: number;
+  /**
+   * Whether the last evaluation of the equations (without the secant) was at the state returned:
+   * then `eq.segmentI0`/`segmentI1` hold its segment integrals (when the member has redundants).
+   */
+  readonly integralsAtSolution: boolean;
 }
 
 /** Newton iteration with backtracking on the scaled residual norm. */
@@ -641,13 +678,14 @@ export function newton(
     return worst;
   };
   let current = eq.evaluate(X, lambda, hinges, free, lambdaFree, memory, false, controlled);
+  let atSolution = true;
   let currentNorm = norm(current.residual, current.scale);
   const size = current.residual.length;
-  if (size === 0) return { converged: true, redundants: X, lambda, rotations: rot, iterations: 0, residualNorm: 0 };
+  if (size === 0) return { converged: true, redundants: X, lambda, rotations: rot, iterations: 0, residualNorm: 0, integralsAtSolution: true };
   for (let iteration = 1; iteration <= 60; iteration++) {
     // Converged when the worst compatibility error is below 1e-9 of the rotations involved (far
     // below anything a deflection or redundant moment shows).
-    if (currentNorm < 1e-9) return { converged: true, redundants: X, lambda, rotations: rot, iterations: iteration - 1, residualNorm: currentNorm };
+    if (currentNorm < 1e-9) return { converged: true, redundants: X, lambda, rotations: rot, iterations: iteration - 1, residualNorm: currentNorm, integralsAtSolution: atSolution };
     const step = solveLinear(current.jacobian.map((row) => [...row]), current.residual.map((v) => -v));
     if (!step) break;
     let factor = 1;
@@ -659,7 +697,9 @@ export function newton(
       free.forEach((h, i) => apply(h, rot2[i]!));
       const trial = eq.evaluate(X2, lambda2, hinges, free, lambdaFree, memory, false, controlled);
       const trialNorm = norm(trial.residual, trial.scale);
+      atSolution = false;
       if (trialNorm < currentNorm || trialNorm < 1e-10) {
+        atSolution = true;
         X = X2;
         rot = rot2;
         lambda = lambda2;
@@ -680,14 +720,16 @@ export function newton(
     // stretches of the curves (load-controlled jumps in curvature at cracking).
     for (let iteration = 0; iteration < 400 && currentNorm >= 1e-10; iteration++) {
       const sec = eq.evaluate(X, lambda, hinges, free, lambdaFree, memory, true);
+      atSolution = false; // the secant evaluation takes another path through the segments
       const step = solveLinear(sec.jacobian.map((row) => [...row]), sec.residual.map((v) => -v));
       if (!step) break;
       const X2 = X.map((v, i) => v + step[i]!);
       const trial = eq.evaluate(X2, lambda, hinges, free, lambdaFree, memory);
+      atSolution = true;
       X = X2;
       current = trial;
       currentNorm = norm(trial.residual, trial.scale);
     }
   }
-  return { converged: currentNorm < 1e-8, redundants: X, lambda, rotations: rot, iterations: 60, residualNorm: currentNorm };
+  return { converged: currentNorm < 1e-8, redundants: X, lambda, rotations: rot, iterations: 60, residualNorm: currentNorm, integralsAtSolution: atSolution };
 }

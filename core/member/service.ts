@@ -206,7 +206,15 @@ export function afterLargestMoment(zone: ZoneResponse, kappa: { readonly sagging
       integrationCurvature: curvature,
       integration,
       knots: (lo: number, hi: number, out: number[]) => {
-        for (const m of knotList) if (m > lo && m < hi) out.push(m);
+        // The first knot above lo by binary search (the list is ascending), then those below hi.
+        let a = 0;
+        let b = knotList.length;
+        while (a < b) {
+          const mid = (a + b) >> 1;
+          if (knotList[mid]! <= lo) a = mid + 1;
+          else b = mid;
+        }
+        for (let i = a; i < knotList.length && knotList[i]! < hi; i++) out.push(knotList[i]!);
       },
       knotMoments: [],
       knotCurvatures: [],
@@ -285,7 +293,7 @@ export function serviceDeflections(input: ServiceInput): ServiceOutcome {
     const liveField = field(shortBeam, input.live);
     const sustainedField = combine(deadField, liveField, psi);
     const total = solve(shortBeam, combine(deadField, liveField, 1), 'dead + live load', notes);
-    const kappa = damageRatios(shortBeam, solveStatic(shortBeam, sustainedField), total);
+    const kappa = damageRatios(shortBeam, solveStatic(shortBeam, sustainedField, false), total);
     const historyBeam = buildBeamModel(support, span, input.zones.map((z, i) => afterLargestMoment(z.shortTerm, kappa[i]!)), extraPoints, count);
     const longBeam = buildBeamModel(support, span, input.zones.map((z, i) => afterLargestMoment(z.longTerm, kappa[i]!)), extraPoints, count);
     const dead = solve(shortBeam, deadField, 'dead load', notes);

@@ -718,7 +718,14 @@ export function newton(
   if (currentNorm >= 1e-8 && free.length === 0 && !lambdaFree) {
     // Fallback: secant-flexibility iterations. Robust where Newton stalls on the steep, kinked
     // stretches of the curves (load-controlled jumps in curvature at cracking).
-    for (let iteration = 0; iteration < 400 && currentNorm >= 1e-10; iteration++) {
+    // The iteration is a fixed map of X (the evaluations are pure functions of the state), so once an
+    // iterate repeats one of the last few exactly, the rest of the loop only goes round that cycle
+    // (a state with no solution, where the iterates alternate between two points for all 400
+    // iterations: 800 evaluations): the iterate the loop would end on is taken at once, the same
+    // bit for bit.
+    const LIMIT = 400;
+    const recent: { X: number[]; current: typeof current; norm: number }[] = [{ X, current, norm: currentNorm }];
+    for (let iteration = 0; iteration < LIMIT && currentNorm >= 1e-10; iteration++) {
       const sec = eq.evaluate(X, lambda, hinges, free, lambdaFree, memory, true);
       atSolution = false; // the secant evaluation takes another path through the segments
       const step = solveLinear(sec.jacobian.map((row) => [...row]), sec.residual.map((v) => -v));
@@ -729,6 +736,24 @@ export function newton(
       X = X2;
       current = trial;
       currentNorm = norm(trial.residual, trial.scale);
+      // recent[j] is the iterate after iteration (iteration − (recent.length − 1 − j)); X is the one
+      // after iteration + 1 iterations. A repeat of recent[j] means a cycle of period p.
+      const repeat = recent.findIndex((r) => r.X.every((v, i) => v === X[i]));
+      if (repeat >= 0 && currentNorm >= 1e-10) {
+        const p = recent.length - repeat;
+        const done = iteration + 1;
+        const left = (LIMIT - done) % p;
+        if (left > 0) {
+          const at = recent[repeat + left]!;
+          X = at.X;
+          current = at.current;
+          currentNorm = at.norm;
+          atSolution = false; // not the state the equations last evaluated
+        }
+        break;
+      }
+      recent.push({ X, current, norm: currentNorm });
+      if (recent.length > 4) recent.shift();
     }
   }
   return { converged: currentNorm < 1e-8, redundants: X, lambda, rotations: rot, iterations: 60, residualNorm: currentNorm, integralsAtSolution: atSolution };

@@ -17,6 +17,9 @@
  * of those commands.
  */
 import { spawn } from 'node:child_process';
+import { mkdirSync, writeFileSync } from 'node:fs';
+import { availableParallelism, loadavg } from 'node:os';
+import { join } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 
 export const ROOT = fileURLToPath(new URL('../../', import.meta.url));
@@ -83,6 +86,29 @@ export async function runSteps(steps, options = {}) {
   return { passed: failed.length === 0, results };
 }
 
+/**
+ * Notes the run in out/last-npm-test.json for `npm run bench`'s test-suite row (wall time per part,
+ * the load average at the start and the end). A note that cannot be written is not a test failure.
+ * @param {{ passed: boolean, results: StepResult[], vitestArgs: string[], loadAtStart: number[], wallMs: number }} run
+ */
+export function recordRun(run, dir = join(ROOT, 'out')) {
+  try {
+    mkdirSync(dir, { recursive: true });
+    writeFileSync(join(dir, 'last-npm-test.json'), `${JSON.stringify({
+      finishedAt: new Date().toISOString(),
+      passed: run.passed,
+      wallSeconds: run.wallMs / 1000,
+      cores: availableParallelism(),
+      loadAtStart: run.loadAtStart,
+      loadAtEnd: loadavg(),
+      vitestArgs: run.vitestArgs,
+      steps: run.results.map((r) => ({ name: r.name, seconds: r.ms / 1000, passed: r.code === 0 })),
+    }, null, 2)}\n`);
+  } catch {
+    // The record is a convenience for the benchmark only.
+  }
+}
+
 /** Children still running (stopped with the runner on Ctrl+C). */
 const running = new Set();
 
@@ -103,6 +129,10 @@ if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) 
       process.exit(130);
     });
   }
-  const { passed } = await runSteps(testSteps(process.argv.slice(2)), { colour: Boolean(process.stdout.isTTY) && !process.env.NO_COLOR });
+  const loadAtStart = loadavg();
+  const t0 = performance.now();
+  const vitestArgs = process.argv.slice(2);
+  const { passed, results } = await runSteps(testSteps(vitestArgs), { colour: Boolean(process.stdout.isTTY) && !process.env.NO_COLOR });
+  recordRun({ passed, results, vitestArgs, loadAtStart, wallMs: performance.now() - t0 });
   process.exit(passed ? 0 : 1);
 }

@@ -16,83 +16,11 @@
  */
 import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import type { Page } from 'playwright-core';
 import { demoProject } from '../../core/project/demo.ts';
 import { serializeProject } from '../../core/project/file.ts';
 import type { Project } from '../../core/project/types.ts';
 import { ARTIFACTS, openApp, startE2e } from '../e2e/support/environment.ts';
-
-const median = (values: readonly number[]) => {
-  const sorted = [...values].sort((a, b) => a - b);
-  const mid = Math.floor(sorted.length / 2);
-  return sorted.length % 2 === 1 ? sorted[mid]! : (sorted[mid - 1]! + sorted[mid]!) / 2;
-};
-
-/**
- * Types `value` into the field and resolves with ms until the named mark (after the edit) and the
- * frame after it. With `afterResults`, the mark must follow the arrival of the new section curves
- * (`hl:analysis:sections`): a redraw of the curves already on screen does not count.
- */
-async function editUntilMark(page: Page, selector: string, value: string, mark: string, afterResults = false): Promise<{ mark: number; frame: number; sent: number | null; sections: number | null; detail: number | null }> {
-  return page.evaluate(async ({ selector, value, mark, afterResults }) => {
-    const input = document.querySelector<HTMLInputElement>(selector);
-    if (!input) throw new Error(`no field ${selector}`);
-    input.focus();
-    const t0 = performance.now();
-    const seen = new Promise<number>((resolve) => {
-      let arrived = afterResults ? Infinity : t0;
-      const observer = new PerformanceObserver((list) => {
-        for (const entry of list.getEntries()) {
-          if (entry.startTime <= t0) continue;
-          if (entry.name === 'hl:analysis:sections') arrived = Math.min(arrived, entry.startTime);
-          if (entry.name === mark && entry.startTime >= arrived) {
-            observer.disconnect();
-            resolve(entry.startTime);
-          }
-        }
-      });
-      observer.observe({ type: 'mark' });
-    });
-    input.value = value;
-    input.dispatchEvent(new Event('input', { bubbles: true }));
-    const at = await seen;
-    await new Promise((resolve) => requestAnimationFrame(() => resolve(undefined)));
-    // (No named helper functions inside page code: the script runner would wrap them in a helper the page lacks.)
-    const sent = performance.getEntriesByName('hl:analysis:sent').find((e) => e.startTime > t0 && e.startTime <= at)?.startTime ?? null;
-    const sections = performance.getEntriesByName('hl:analysis:sections').find((e) => e.startTime > t0 && e.startTime <= at)?.startTime ?? null;
-    const detail = performance.getEntriesByName('hl:analysis:detail').find((e) => e.startTime > t0 && e.startTime <= at)?.startTime ?? null;
-    return { mark: at - t0, frame: performance.now() - t0, sent: sent === null ? null : sent - t0, sections: sections === null ? null : sections - t0, detail: detail === null ? null : detail - t0 };
-  }, { selector, value, mark, afterResults });
-}
-
-/** ms from a click on `selector` until `mark` and the frame after it. */
-async function clickUntilMark(page: Page, selector: string, mark: string): Promise<{ mark: number; frame: number }> {
-  return page.evaluate(async ({ selector, mark }) => {
-    const t0 = performance.now();
-    const seen = new Promise<number>((resolve) => {
-      const observer = new PerformanceObserver((list) => {
-        for (const entry of list.getEntries()) if (entry.name === mark && entry.startTime > t0) {
-          observer.disconnect();
-          resolve(entry.startTime);
-        }
-      });
-      observer.observe({ type: 'mark' });
-    });
-    document.querySelector<HTMLElement>(selector)!.click();
-    const at = await seen;
-    return { mark: at - t0, frame: performance.now() - t0 };
-  }, { selector, mark });
-}
-
-/** ms from a click until the next animation frame (DOM updated and painted). */
-async function clickUntilFrame(page: Page, selector: string): Promise<number> {
-  return page.evaluate(async (selector) => {
-    const t0 = performance.now();
-    document.querySelector<HTMLElement>(selector)!.click();
-    await new Promise((resolve) => requestAnimationFrame(() => setTimeout(resolve, 0)));
-    return performance.now() - t0;
-  }, selector);
-}
+import { clickUntilFrame, clickUntilMark, editUntilMark, editedHeight, emptyPageLoad, median, showDemoSection } from './ui-measure.ts';
 
 function bigProject(count: number): Project {
   const demo = demoProject();
@@ -109,14 +37,7 @@ try {
   const baseline: number[] = [];
   const cold: number[] = [];
   for (let i = 0; i < 7; i++) {
-    const empty = await context.browser.newContext();
-    const page = await empty.newPage();
-    await page.goto(`${context.server.url}favicon.svg`);
-    baseline.push(await page.evaluate(() => {
-      const nav = performance.getEntriesByType('navigation')[0] as PerformanceNavigationTiming;
-      return nav.loadEventEnd > 0 ? nav.loadEventEnd : performance.now();
-    }));
-    await empty.close();
+    baseline.push(await emptyPageLoad(context.browser, context.server.url));
     const fresh = await context.browser.newContext({ viewport: { width: 1440, height: 900 } });
     const appPage = await fresh.newPage();
     await appPage.addInitScript(() => { (window as unknown as { hingelineTestHost: unknown }).hingelineTestHost = {}; });
@@ -130,21 +51,14 @@ try {
 
   // One member: edits that re-analyse, and live views that need no analysis.
   const { page } = await openApp(context);
-  await page.getByTestId('open-demo').click();
-  await page.waitForFunction(() => document.querySelector('[data-testid=analysis-status]')?.textContent?.includes('All results current'), undefined, { timeout: 60_000 });
-  await page.locator('[data-testid=member-list] [data-member="B-201"]').click();
-  await page.getByTestId('chart-moment-curvature').waitFor();
-  await page.getByTestId('inputs-tab-section').click();
-  await page.getByTestId('shape-height').waitFor();
+  await showDemoSection(page);
   const edits: number[] = [];
   const framed: number[] = [];
   const sent: number[] = [];
   const roundTrip: number[] = [];
   const render: number[] = [];
   for (let i = 0; i < 21; i++) {
-    // A new height each time (24.05 in, 26.10 in, 24.15 in, …): every edit is a new analysis.
-    const height = ((i % 2 === 0 ? 24 : 26) + 0.05 * (i + 1)).toFixed(2);
-    const result = await editUntilMark(page, '[data-testid=shape-height]', height, 'hl:chart:moment-curvature', true);
+    const result = await editUntilMark(page, '[data-testid=shape-height]', editedHeight(i), 'hl:chart:moment-curvature', true);
     edits.push(result.mark);
     framed.push(result.frame);
     // The chart is drawn from the section curves sent ahead of the member result (or, were they

@@ -8,7 +8,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 // @ts-expect-error a plain JavaScript build script without type declarations
-import { runSteps, testSteps } from '../../../build/scripts/test.mjs';
+import { recordRun, runSteps, testSteps } from '../../../build/scripts/test.mjs';
 
 interface StepResult { name: string; code: number; ms: number; output: string }
 type Run = (steps: unknown[], options: { cwd?: string; write: (text: string) => void }) => Promise<{ passed: boolean; results: StepResult[] }>;
@@ -26,6 +26,22 @@ async function run(steps: unknown[]) {
 }
 
 describe('npm test runner', () => {
+  it('records the run for the benchmark: wall time per part, load average at the start and the end, the arguments', async () => {
+    const { passed, results } = await run([node('quick', 'process.exit(0)'), node('broken', 'process.exit(3)')]);
+    const dir = join(folder, 'record');
+    (recordRun as (run: unknown, dir: string) => void)({ passed, results, vitestArgs: ['test/core'], loadAtStart: [1.5, 1, 0.5], wallMs: 4321 }, dir);
+    const note = JSON.parse(readFileSync(join(dir, 'last-npm-test.json'), 'utf8'));
+    expect(note.passed).toBe(false);
+    expect(note.wallSeconds).toBeCloseTo(4.321, 9);
+    expect(note.loadAtStart).toEqual([1.5, 1, 0.5]);
+    expect(note.loadAtEnd).toHaveLength(3);
+    expect(note.vitestArgs).toEqual(['test/core']);
+    expect(note.steps.map((st: { name: string; passed: boolean }) => [st.name, st.passed])).toEqual([['quick', true], ['broken', false]]);
+    expect(Date.parse(note.finishedAt)).toBeGreaterThan(Date.parse('2026-01-01T00:00:00Z'));
+    // A folder that cannot be made (a file is in the way) is not an error of the test run.
+    expect(() => (recordRun as (run: unknown, dir: string) => void)({ passed, results, vitestArgs: [], loadAtStart: [0, 0, 0], wallMs: 1 }, join(dir, 'last-npm-test.json', 'below'))).not.toThrow();
+  });
+
   it('passes when every part passes, and says so in one line per held-back part', async () => {
     const { passed, results, printed } = await run([node('first', 'console.log("noise of a passing step")'), node('second', 'process.exit(0)')]);
     expect(passed).toBe(true);

@@ -39,6 +39,32 @@ export interface MaterialSettings {
   readonly concreteUltimateStrain?: UltimateStrainChoice;
 }
 
+/**
+ * Materials built from the same spec, code, confinement, settings and path, shared between
+ * libraries: the app's worker makes a new library for every edit of a project, and a built law
+ * carries the tables the section integrator fits lazily to it (core/section/law-table.ts) — about a
+ * tenth of re-analysing a section after an edit went into building the same laws and fitting the
+ * same table cells again. Built materials are never changed after building (the tables fill in, each
+ * cell the same whoever asks first), so sharing them changes no result. Only successful builds are
+ * kept; the most recent 64 of each kind.
+ */
+const SHARED_LIMIT = 64;
+function sharedBuild<T>(store: Map<string, T>, key: string, build: () => T): T {
+  const known = store.get(key);
+  if (known !== undefined) {
+    store.delete(key);
+    store.set(key, known);
+    return known;
+  }
+  const built = build();
+  store.set(key, built);
+  if (store.size > SHARED_LIMIT) store.delete(store.keys().next().value!);
+  return built;
+}
+const sharedConcrete = new Map<string, ReturnType<typeof buildConcrete>>();
+const sharedSteel = new Map<string, SteelMaterial>();
+const sharedFrp = new Map<string, FrpMaterial>();
+
 /** A caching resolver over a list of material specs. */
 export function materialLibrary(specs: readonly MaterialSpec[], code: CodeBasis, settings: MaterialSettings = {}): MaterialLibrary {
   const problems: Diagnostic[] = [];
@@ -65,7 +91,8 @@ export function materialLibrary(specs: readonly MaterialSpec[], code: CodeBasis,
       let built: { cover: ConcreteMaterial; core?: ConcreteMaterial; strength: number; warnings: string[] } | undefined;
       if (spec) {
         try {
-          const b = buildConcrete(spec, code, confinement, { path: materialPath(specs, id), ...(settings.concreteUltimateStrain ? { ultimateStrain: settings.concreteUltimateStrain } : {}) });
+          const options = { path: materialPath(specs, id), ...(settings.concreteUltimateStrain ? { ultimateStrain: settings.concreteUltimateStrain } : {}) };
+          const b = sharedBuild(sharedConcrete, JSON.stringify([spec, code, confinement ?? null, options]), () => buildConcrete(spec, code, confinement, options));
           built = { cover: b.cover, ...(b.core ? { core: b.core } : {}), strength: spec.strength, warnings: b.diagnostics.filter((d) => d.severity === 'warning').map((d) => d.message) };
         } catch (error) {
           record(id, error);
@@ -80,7 +107,8 @@ export function materialLibrary(specs: readonly MaterialSpec[], code: CodeBasis,
       let built: SteelMaterial | undefined;
       if (spec) {
         try {
-          built = buildSteel(spec, materialPath(specs, id));
+          const path = materialPath(specs, id);
+          built = sharedBuild(sharedSteel, JSON.stringify([spec, path]), () => buildSteel(spec, path));
         } catch (error) {
           record(id, error);
         }
@@ -94,7 +122,8 @@ export function materialLibrary(specs: readonly MaterialSpec[], code: CodeBasis,
       let built: FrpMaterial | undefined;
       if (spec) {
         try {
-          built = buildFrp(spec, materialPath(specs, id));
+          const path = materialPath(specs, id);
+          built = sharedBuild(sharedFrp, JSON.stringify([spec, path]), () => buildFrp(spec, path));
         } catch (error) {
           record(id, error);
         }

@@ -75,9 +75,13 @@ export function nodeIo(): CliIo {
     withImmediateInterrupt: async (work) => {
       // A Ctrl+C that came during the synchronous stretch before (parsing and checking a large
       // project, seconds on a busy machine) is still waiting in the event loop: Node runs signal
-      // listeners only when the loop turns. Removing the listener now would drop it (the analysis
-      // then ran to its end, ignoring the interrupt: seen under load 30–50). Let the loop turn once
-      // so it reaches the listener; the window left is the two statements below.
+      // listeners only when the loop polls for events. Removing the listener now would drop it (the
+      // analysis then ran to its end, ignoring the interrupt: seen under load 20–50). One
+      // setImmediate is not enough: called from an I/O callback (reading the project file), its
+      // callback runs in the same turn of the loop, before the next poll — the interrupt was still
+      // lost every time (test/app/cli/io-interrupt.test.ts). The second one runs only after a poll,
+      // which delivers the signal to the listener; the window left is the two statements below.
+      await new Promise<void>((resolve) => setImmediate(resolve));
       await new Promise<void>((resolve) => setImmediate(resolve));
       // Ctrl+C came before this work began: honour it now instead of running the work to its end.
       if (controller.signal.aborted) process.exit(EXIT.interrupted);

@@ -294,8 +294,9 @@ export function serviceDeflections(input: ServiceInput): ServiceOutcome {
     const sustainedField = combine(deadField, liveField, psi);
     const total = solve(shortBeam, combine(deadField, liveField, 1), 'dead + live load', notes);
     const kappa = damageRatios(shortBeam, solveStatic(shortBeam, sustainedField, false), total);
-    const historyBeam = buildBeamModel(support, span, input.zones.map((z, i) => afterLargestMoment(z.shortTerm, kappa[i]!)), extraPoints, count);
-    const longBeam = buildBeamModel(support, span, input.zones.map((z, i) => afterLargestMoment(z.longTerm, kappa[i]!)), extraPoints, count);
+    // The same stations with other laws: the zones' extents, which alone place the stations, are the same.
+    const historyBeam: BeamModel = { ...shortBeam, zones: input.zones.map((z, i) => afterLargestMoment(z.shortTerm, kappa[i]!)) };
+    const longBeam: BeamModel = { ...shortBeam, zones: input.zones.map((z, i) => afterLargestMoment(z.longTerm, kappa[i]!)) };
     const dead = solve(shortBeam, deadField, 'dead load', notes);
     const sustained = solve(historyBeam, sustainedField, 'sustained load', notes);
     const sustainedLong = solve(longBeam, sustainedField, 'sustained load, long term', notes);
@@ -505,8 +506,14 @@ function aciMethod(input: ServiceInput) {
     });
     return { moment: best, zone: zoneAt(elasticBeam.x[at]!) };
   };
+  // The elastic moments of each load field, solved once (both Ie rules read them).
+  const elasticMoments = new Map<Float64Array, Float64Array>();
   const ieFor = (f: Float64Array, rule: (ma: number, mcr: number, ig: number, icr: number) => number): number => {
-    const M = solveStatic(elasticBeam, f).moment;
+    let M = elasticMoments.get(f);
+    if (!M) {
+      M = solveStatic(elasticBeam, f, false).moment;
+      elasticMoments.set(f, M);
+    }
     const value = (dir: BendingDirection) => {
       const c = critical(M, dir);
       const p = props[c.zone]!;
@@ -527,11 +534,12 @@ function aciMethod(input: ServiceInput) {
   };
   // One Ie for the member, each zone with its own Ec (a zone of other concrete keeps its modulus).
   const deflectionWith = (ie: number, f: Float64Array) => {
-    const b = buildBeamModel(input.support, input.span, input.zones.map((z) => {
+    // The elastic model's stations (the zones' extents alone place them) with the laws of this Ie.
+    const b: BeamModel = { ...elasticBeam, zones: input.zones.map((z) => {
       const ei = z.codeModulus * ie;
       const lin = functionResponse((m) => m / ei, () => 1 / ei);
       return codeZone(z, lin, lin);
-    }), input.extraPoints, input.segments);
+    }) };
     return maxDeflection(solveStatic(b, f));
   };
   const deadField = field(elasticBeam, input.dead);
@@ -615,9 +623,9 @@ function enMethod(input: ServiceInput) {
     });
   const shortZones = zonesFor(false, 1.0);
   const longZones = zonesFor(true, 0.5);
-  const make = (zones: ZoneResponse[]) => buildBeamModel(input.support, input.span, zones, input.extraPoints, input.segments);
-  const shortBeam = make(shortZones);
-  const longBeam = make(longZones);
+  const shortBeam = buildBeamModel(input.support, input.span, shortZones, input.extraPoints, input.segments);
+  // The same stations (the zones' extents alone place them) with the long-term laws.
+  const longBeam: BeamModel = { ...shortBeam, zones: longZones };
   const fD = field(shortBeam, input.dead);
   const fL = field(shortBeam, input.live);
   const d = maxDeflection(solveStatic(shortBeam, fD));

@@ -296,17 +296,20 @@ export class Equations {
     this.r = beam.redundants.length;
     this.moment = new Float64Array(this.n);
     this.effective = new Float64Array(this.n);
-    this.sens = Array.from({ length: this.r + 1 }, () => new Float64Array(this.n));
     this.ends = Array.from({ length: this.n }, () => ({ value: 0, slope: 0, piece: -1 }));
     this.windows = options.shift ? { sagging: this.buildWindows(options.shift.sagging), hogging: this.buildWindows(options.shift.hogging) } : null;
-    this.peaks = new Int32Array(this.windows ? this.n : 0);
-    this.troughs = new Int32Array(this.windows ? this.n : 0);
-    this.srcA = new Int32Array(this.n);
-    this.srcB = new Int32Array(this.n);
-    this.srcW = new Float64Array(this.n);
-    this.srcHa = new Int32Array(this.n);
-    this.srcHb = new Int32Array(this.n);
-    this.srcHw = new Float64Array(this.n);
+    // Without the tension shift the effective moment is the moment: its sensitivities are the unit
+    // fields themselves (read only), and the sources of the shifted moments are not needed.
+    this.sens = this.windows ? Array.from({ length: this.r + 1 }, () => new Float64Array(this.n)) : [...beam.redundantFields, loads.pattern];
+    const m = this.windows ? this.n : 0;
+    this.peaks = new Int32Array(m);
+    this.troughs = new Int32Array(m);
+    this.srcA = new Int32Array(m);
+    this.srcB = new Int32Array(m);
+    this.srcW = new Float64Array(m);
+    this.srcHa = new Int32Array(m);
+    this.srcHb = new Int32Array(m);
+    this.srcHw = new Float64Array(m);
     this.zoneScale = Float64Array.from(beam.zones, curvatureScale);
     this.segmentI0 = new Float64Array(Math.max(this.n - 1, 0));
     this.segmentI1 = new Float64Array(Math.max(this.n - 1, 0));
@@ -441,15 +444,12 @@ export class Equations {
 
   /** dm_e/du at every station for the redundants and λ (after `moments`). */
   private sensitivities(): void {
+    if (!this.windows) return; // the unit fields themselves (constructor)
     const fields = this.beam.redundantFields;
     const pattern = this.loads.pattern;
     for (let l = 0; l <= this.r; l++) {
       const f = l < this.r ? fields[l]! : pattern;
       const s = this.sens[l]!;
-      if (!this.windows) {
-        s.set(f);
-        continue;
-      }
       for (let i = 0; i < this.n; i++) {
         let v = 0;
         const a = this.srcA[i]!;

@@ -263,12 +263,41 @@ class CapacityAnalysis extends CapacityState {
     return this.maxRatio(s, (resp, law) => law?.localisationMoment ?? resp.peakMoment, (i, sg) => (sg > 0 ? shadow.sag : shadow.hog)[i] === 0, tie);
   }
 
+  /**
+   * Values of the station-scanning event functions already found for a state, with the count of
+   * events handled when they were found. Such a function depends only on the state and on what has
+   * been reported (the yield sites, the hinges, the ultimates: all changed by `handle` alone), so
+   * within one count its value for a state is known once found — and each step asks for it again:
+   * the step's end state is the next step's start, and the event search starts from both ends.
+   */
+  private readonly eventValues = new WeakMap<Snapshot, { handled: number; values: Map<Watch['kind'], number> }>();
+  /** Events handled so far (bumped by `handle`): the version of what the event functions read besides the state. */
+  private handledCount = 0;
+
+  private remembered(kind: Watch['kind'], g: (s: Snapshot) => number): (s: Snapshot) => number {
+    return (s) => {
+      let known = this.eventValues.get(s);
+      if (!known || known.handled !== this.handledCount) {
+        known = { handled: this.handledCount, values: new Map() };
+        this.eventValues.set(s, known);
+      }
+      let v = known.values.get(kind);
+      if (v === undefined) {
+        v = g(s);
+        known.values.set(kind, v);
+      }
+      return v;
+    };
+  }
+
   private watches(stage: 'load' | 'rotation', controlled = -1): Watch[] {
     const list: Watch[] = [];
-    if (!this.cracking) list.push({ kind: 'cracking', g: (s) => this.maxRatio(s, (resp) => resp.crackingMoment).ratio - 1 });
-    list.push({ kind: 'yield', g: (s) => this.newYield(s).ratio - 1 });
-    list.push({ kind: 'localisation', g: (s) => this.localisationRatio(s).ratio - 1 });
-    if (!this.codeUltimate) list.push({ kind: 'code', g: (s) => this.codeRatio(s) - 1 });
+    // The scans of every station are remembered per state; the hinge-capacity, drop and unloading
+    // functions are cheap and read what changes between events (the hinges' rotations, the peak).
+    if (!this.cracking) list.push({ kind: 'cracking', g: this.remembered('cracking', (s) => this.maxRatio(s, (resp) => resp.crackingMoment).ratio - 1) });
+    list.push({ kind: 'yield', g: this.remembered('yield', (s) => this.newYield(s).ratio - 1) });
+    list.push({ kind: 'localisation', g: this.remembered('localisation', (s) => this.localisationRatio(s).ratio - 1) });
+    if (!this.codeUltimate) list.push({ kind: 'code', g: this.remembered('code', (s) => this.codeRatio(s) - 1) });
     this.hinges.forEach((h, i) => {
       if (h.law.ultimateLocalised > 0 && (stage === 'load' || i !== controlled)) list.push({ kind: 'capacity', hinge: i, g: (s) => (s.rotations.get(i) ?? h.rotation) / (h.law.ultimateLocalised * h.length) - (1 - 1e-9) });
     });
@@ -351,6 +380,7 @@ class CapacityAnalysis extends CapacityState {
   }
 
   private handle(ev: Watch, s: Snapshot): void {
+    this.handledCount++;
     const d = this.controlDeflection(s);
     const { beam } = this;
     if (ev.kind === 'cracking') {

@@ -30,10 +30,11 @@
  *
  * (It replaces the earlier report and project benchmark files; the engine files remain.)
  *
- * Usage: npm run bench [-- --skip-app | --pdf-only | --members-only | --ui-only]   (the load average is
- * printed at the start and the end; --pdf-only measures the two report rows alone, without the app's
- * export; --members-only the engine rows and the 1,000 members through the command; --ui-only the
- * edit → chart row and the recorded test-suite row; --skip-app leaves out everything in Chromium)
+ * Usage: npm run bench [-- --skip-app | --pdf-only [--with-app] | --members-only | --ui-only]
+ * (the load average is printed at the start and the end; --pdf-only measures the two report rows
+ * alone, without the app's export unless --with-app; --members-only the engine rows and the 1,000
+ * members through the command; --ui-only the edit → chart row and the recorded test-suite row;
+ * --skip-app leaves out everything in Chromium)
  */
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
@@ -386,7 +387,7 @@ async function main(): Promise<void> {
   const demoPdf = await reportRow('demo (10 members)', demo, '≤ 2× plain');
   const demoWall = performance.now() - demoStart;
   await reportRow('100 members', generatedReportProject(100), '≤ 2× plain, ≤ 3 MB/100 pages');
-  if (!pdfOnly && !process.argv.includes('--skip-app')) {
+  if ((!pdfOnly || process.argv.includes('--with-app')) && !process.argv.includes('--skip-app')) {
     try {
       await appReport({ wallMs: demoWall, bytes: demoPdf.length });
     } catch (error) {

@@ -54,20 +54,43 @@ const LEADING = /^(\s)+/g;
 const TRAILING = /(\s)+$/g;
 const isValue = (v: unknown): boolean => v !== undefined && v !== null;
 
-/** One property of `inline` as pdfmake's `getStyleProperty` answers it, with the inline's style already pushed. */
-function read(inline: Inline, stack: StyleStack | undefined, property: string, fallback: unknown): unknown {
+/**
+ * Reads one property of an inline as pdfmake's `getStyleProperty` answers it with the inline's style
+ * pushed. `stackAnswer` is what the stack answers for the property at that moment.
+ */
+function readWith(inline: Inline, property: string, fallback: unknown, stackAnswer: (property: string) => unknown): unknown {
   const own = inline[property];
   if (isValue(own)) return own;
-  if (!stack) return fallback;
-  const value = stack.getProperty(property);
+  const value = stackAnswer(property);
   return isValue(value) ? value : fallback;
 }
 
+/**
+ * True when pushing `inline` onto the style stack adds nothing but the inline's own properties, which
+ * `readWith` takes first: then the stack answers every other property as it does beneath the inline.
+ * pdfmake's `autopush` pushes the inline's named styles (`style`) and then the inline itself.
+ */
+const ownPropertiesOnly = (inline: Inline): boolean => inline.style === undefined || inline.style === null || inline.style === '' || (Array.isArray(inline.style) && inline.style.length === 0);
+
 const measure: Measure = function measure(this: TextMeasurer, inlines, stack) {
+  // The stack's answers beneath this call's inlines, asked once per property (measuring pushes and
+  // pops only the inlines' own styles, so the stack beneath stays as it is for the whole call).
+  // Most inlines are words of one text node without named styles of their own: pushing each and
+  // asking the stack for every property walked the whole stack ~22 times per word.
+  const beneath = new Map<string, unknown>();
+  const answerBeneath = (property: string): unknown => {
+    if (!stack) return undefined;
+    if (beneath.has(property)) return beneath.get(property);
+    const value = stack.getProperty(property);
+    beneath.set(property, value);
+    return value;
+  };
+  const answerPushed = (property: string): unknown => stack?.getProperty(property);
+  const styled = (item: Inline): boolean => stack !== undefined && !ownPropertiesOnly(item);
   if (inlines.length > 0) {
     const first = inlines[0]!;
-    const pushed = stack ? stack.autopush(first) : 0;
-    const leadingIndent = read(first, stack, 'leadingIndent', 0) as number;
+    const pushed = styled(first) ? stack!.autopush(first) : 0;
+    const leadingIndent = readWith(first, 'leadingIndent', 0, pushed > 0 ? answerPushed : answerBeneath) as number;
     if (pushed > 0) stack!.pop(pushed);
     if (leadingIndent) {
       first.leadingCut = -leadingIndent;
@@ -75,41 +98,43 @@ const measure: Measure = function measure(this: TextMeasurer, inlines, stack) {
     }
   }
   for (const item of inlines) {
-    const pushed = stack ? stack.autopush(item) : 0;
+    const pushed = styled(item) ? stack!.autopush(item) : 0;
+    const answer = pushed > 0 ? answerPushed : answerBeneath;
+    const read = (property: string, fallback: unknown): unknown => readWith(item, property, fallback, answer);
     try {
-      const font = read(item, stack, 'font', 'Roboto');
-      const bold = read(item, stack, 'bold', false);
-      const italics = read(item, stack, 'italics', false);
+      const font = read('font', 'Roboto');
+      const bold = read('bold', false);
+      const italics = read('italics', false);
       const provided = this.pdfDocument.provideFont(font, bold, italics);
       item.font = provided;
-      item.alignment = read(item, stack, 'alignment', 'left');
-      item.fontSize = read(item, stack, 'fontSize', 12);
-      item.fontFeatures = read(item, stack, 'fontFeatures', null);
-      item.characterSpacing = read(item, stack, 'characterSpacing', 0);
-      item.color = read(item, stack, 'color', 'black');
-      item.decoration = read(item, stack, 'decoration', null);
-      item.decorationColor = read(item, stack, 'decorationColor', null);
-      item.decorationStyle = read(item, stack, 'decorationStyle', null);
-      item.decorationThickness = read(item, stack, 'decorationThickness', null);
-      item.background = read(item, stack, 'background', null);
-      item.link = read(item, stack, 'link', null);
-      item.linkToPage = read(item, stack, 'linkToPage', null);
-      item.linkToDestination = read(item, stack, 'linkToDestination', null);
-      item.noWrap = read(item, stack, 'noWrap', null);
-      item.opacity = read(item, stack, 'opacity', 1);
-      item.sup = read(item, stack, 'sup', false);
-      item.sub = read(item, stack, 'sub', false);
+      item.alignment = read('alignment', 'left');
+      item.fontSize = read('fontSize', 12);
+      item.fontFeatures = read('fontFeatures', null);
+      item.characterSpacing = read('characterSpacing', 0);
+      item.color = read('color', 'black');
+      item.decoration = read('decoration', null);
+      item.decorationColor = read('decorationColor', null);
+      item.decorationStyle = read('decorationStyle', null);
+      item.decorationThickness = read('decorationThickness', null);
+      item.background = read('background', null);
+      item.link = read('link', null);
+      item.linkToPage = read('linkToPage', null);
+      item.linkToDestination = read('linkToDestination', null);
+      item.noWrap = read('noWrap', null);
+      item.opacity = read('opacity', 1);
+      item.sup = read('sup', false);
+      item.sub = read('sub', false);
       if (item.sup || item.sub) item.fontSize = (item.fontSize as number) * 0.58;
-      const lineHeight = read(item, stack, 'lineHeight', 1) as number;
+      const lineHeight = read('lineHeight', 1) as number;
       item.width = this.widthOfText(item.text, item);
       item.height = provided.lineHeight(item.fontSize as number) * lineHeight;
       if (!item.leadingCut) item.leadingCut = 0;
-      if (!read(item, stack, 'preserveLeadingSpaces', false)) {
+      if (!read('preserveLeadingSpaces', false)) {
         const spaces = item.text.match(LEADING);
         if (spaces) item.leadingCut = (item.leadingCut as number) + this.widthOfText(spaces[0]!, item);
       }
       item.trailingCut = 0;
-      if (!read(item, stack, 'preserveTrailingSpaces', false)) {
+      if (!read('preserveTrailingSpaces', false)) {
         const spaces = item.text.match(TRAILING);
         if (spaces) item.trailingCut = this.widthOfText(spaces[0]!, item);
       }

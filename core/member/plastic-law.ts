@@ -22,6 +22,7 @@
  */
 import type { MomentCurvatureResult, UltimateCause } from '../section/results.ts';
 import { interpolateWithSlope, type SectionResponse, type ValueAndSlope } from './section-response.ts';
+import { firstAbove } from '../numeric/search.ts';
 
 /** Relative distance below the peak moment at which a section's deformation localises. */
 export const LOCALISATION_TOLERANCE = 1e-3;
@@ -200,18 +201,6 @@ export interface TableIntegrals {
 }
 
 const vs: ValueAndSlope = { value: 0, slope: 0 };
-
-/** First index k with xs[k] > v (xs ascending; n when none). */
-function firstAbove(xs: ArrayLike<number>, v: number): number {
-  let lo = 0;
-  let hi = xs.length;
-  while (lo < hi) {
-    const mid = (lo + hi) >> 1;
-    if (xs[mid]! <= v) lo = mid + 1;
-    else hi = mid;
-  }
-  return lo;
-}
 
 /**
  * Adds to `out` the exact integrals over t ∈ [t0, t1] of y(a + (b − a)·t), y the piecewise-linear

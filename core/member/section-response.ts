@@ -15,6 +15,7 @@
  * moment after cracking becomes a jump in curvature at constant moment, as it does in a test.
  */
 import type { MomentCurvatureResult } from '../section/results.ts';
+import { pushBetween } from '../numeric/search.ts';
 
 export interface SectionResponse {
   /** Moment at zero curvature, N·mm (non-zero with axial load or shrinkage), signed in this direction. */
@@ -210,15 +211,7 @@ export function sectionResponse(curve: MomentCurvatureResult): SectionResponse |
   // Knots of the integration curvature: the envelope points up to M′y, then M′y itself.
   const knotList = my !== null ? [...envM.filter((m) => m < my), my] : envM.slice();
   const knots = (lo: number, hi: number, out: number[]): void => {
-    if (!(hi > lo)) return;
-    let a = 0;
-    let b = knotList.length;
-    while (a < b) {
-      const mid = (a + b) >> 1;
-      if (knotList[mid]! <= lo) a = mid + 1;
-      else b = mid;
-    }
-    for (let i = a; i < knotList.length && knotList[i]! < hi; i++) out.push(knotList[i]!);
+    if (hi > lo) pushBetween(knotList, lo, hi, out);
   };
   const knotCurvatures = knotList.map((m, i) => (my !== null && i === knotList.length - 1 ? phiY! : envPhi[i]!));
   return {

@@ -32,6 +32,7 @@ import {
 import type { DeflectionCheck, ServiceDeflections, SpanDistribution } from './results.ts';
 import { phrase, q, type Text } from '../units/phrase.ts';
 import { SUSTAINED_STIFFENING_FACTOR } from '../materials/long-term.ts';
+import { pushBetween } from '../numeric/search.ts';
 
 export interface ServiceZone {
   readonly from: number;
@@ -205,17 +206,8 @@ export function afterLargestMoment(zone: ZoneResponse, kappa: { readonly sagging
       actualCurvature: curvature,
       integrationCurvature: curvature,
       integration,
-      knots: (lo: number, hi: number, out: number[]) => {
-        // The first knot above lo by binary search (the list is ascending), then those below hi.
-        let a = 0;
-        let b = knotList.length;
-        while (a < b) {
-          const mid = (a + b) >> 1;
-          if (knotList[mid]! <= lo) a = mid + 1;
-          else b = mid;
-        }
-        for (let i = a; i < knotList.length && knotList[i]! < hi; i++) out.push(knotList[i]!);
-      },
+      // The knots above lo by binary search (the list is ascending), then those below hi.
+      knots: (lo: number, hi: number, out: number[]) => pushBetween(knotList, lo, hi, out),
       knotMoments: [],
       knotCurvatures: [],
     };

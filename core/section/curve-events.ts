@@ -53,6 +53,20 @@ export interface CurveEvents {
   pinOf(name: EventName, eq: EquilibriumState): { readonly depth: number; readonly strain: number } | null;
 }
 
+/** The first item of largest score (undefined for none). */
+function largest<T>(items: readonly T[], score: (item: T) => number): T | undefined {
+  let best: T | undefined;
+  let top = -Infinity;
+  for (const item of items) {
+    const v = score(item);
+    if (v > top) {
+      top = v;
+      best = item;
+    }
+  }
+  return best;
+}
+
 export function curveEvents(model: SectionModel, direction: BendingDirection, options: CurveEventOptions, drop: DropState): CurveEvents {
   const sign = directionSign(direction);
   const steelInTension = tensionSteel(model, direction);
@@ -69,20 +83,8 @@ export function curveEvents(model: SectionModel, direction: BendingDirection, op
     for (const e of model.elements) if (isSteel(e)) m = Math.max(m, -own(e, eq));
     return m;
   };
-  /** The steel element strained most in tension, held at the nominal point's steel strain. */
-  const steelPin = (eq: EquilibriumState) => {
-    let best: DiscreteElement | undefined;
-    let m = -Infinity;
-    for (const e of model.elements) {
-      if (!isSteel(e)) continue;
-      const t = -own(e, eq);
-      if (t > m) {
-        m = t;
-        best = e;
-      }
-    }
-    return best ? { depth: best.depth, strain: best.initialStrain - NOMINAL_STEEL_STRAIN } : null;
-  };
+  /** The compression face of a concrete part whose crushing ends the curve. */
+  const crushingFace = (p: ConcretePart) => (direction === 'sagging' ? p.top : p.bottom);
   const g: Record<EventName, (eq: EquilibriumState) => number> = {
     cracking: (eq) => -strainAtDepth(model, eq.referenceStrain, eq.curvature, face.tension) / crackingStrain - 1,
     firstYield: (eq) => {
@@ -94,10 +96,7 @@ export function curveEvents(model: SectionModel, direction: BendingDirection, op
     nominal: (eq) => Math.max(compressionFaceStrain(eq) / NOMINAL_CONCRETE_STRAIN, maxSteelTension(eq) / NOMINAL_STEEL_STRAIN) - 1,
     crushing: (eq) => {
       let r = -Infinity;
-      for (const p of governing) {
-        const y = direction === 'sagging' ? p.top : p.bottom;
-        r = Math.max(r, strainAtDepth(model, eq.referenceStrain, eq.curvature, y) / p.material.crushingStrain);
-      }
+      for (const p of governing) r = Math.max(r, strainAtDepth(model, eq.referenceStrain, eq.curvature, crushingFace(p)) / p.material.crushingStrain);
       return r - 1;
     },
     elementLimit: (eq) => {
@@ -137,32 +136,17 @@ export function curveEvents(model: SectionModel, direction: BendingDirection, op
         case 'cracking': return { depth: face.tension, strain: -crackingStrain };
         case 'codeCrushing': return { depth: face.compression, strain: options.codeCrushingStrain };
         case 'firstYield': {
-          let best: DiscreteElement | undefined;
-          let r = -Infinity;
-          for (const e of steelInTension) {
-            const ratio = -own(e, eq) / e.material.yieldStrain!;
-            if (ratio > r) {
-              r = ratio;
-              best = e;
-            }
-          }
-          return best ? { depth: best.depth, strain: best.initialStrain - best.material.yieldStrain! } : null;
+          const bar = largest(steelInTension, (e) => -own(e, eq) / e.material.yieldStrain!);
+          return bar ? { depth: bar.depth, strain: bar.initialStrain - bar.material.yieldStrain! } : null;
         }
-        case 'nominal':
-          return compressionFaceStrain(eq) / NOMINAL_CONCRETE_STRAIN >= maxSteelTension(eq) / NOMINAL_STEEL_STRAIN
-            ? { depth: face.compression, strain: NOMINAL_CONCRETE_STRAIN }
-            : steelPin(eq);
+        case 'nominal': {
+          if (compressionFaceStrain(eq) / NOMINAL_CONCRETE_STRAIN >= maxSteelTension(eq) / NOMINAL_STEEL_STRAIN) return { depth: face.compression, strain: NOMINAL_CONCRETE_STRAIN };
+          const bar = largest(model.elements.filter(isSteel), (e) => -own(e, eq));
+          return bar ? { depth: bar.depth, strain: bar.initialStrain - NOMINAL_STEEL_STRAIN } : null;
+        }
         case 'crushing': {
-          let best: ConcretePart | undefined;
-          let r = -Infinity;
-          for (const p of governing) {
-            const ratio = strainAtDepth(model, eq.referenceStrain, eq.curvature, direction === 'sagging' ? p.top : p.bottom) / p.material.crushingStrain;
-            if (ratio > r) {
-              r = ratio;
-              best = p;
-            }
-          }
-          return best ? { depth: direction === 'sagging' ? best.top : best.bottom, strain: best.material.crushingStrain } : null;
+          const part = largest(governing, (p) => strainAtDepth(model, eq.referenceStrain, eq.curvature, crushingFace(p)) / p.material.crushingStrain);
+          return part ? { depth: crushingFace(part), strain: part.material.crushingStrain } : null;
         }
         default: return null;
       }

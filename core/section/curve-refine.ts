@@ -6,7 +6,7 @@
  * Units: curvature 1/mm, moment N·mm.
  */
 import { goldenSectionMaximum } from '../numeric/quadrature.ts';
-import type { CurveSolver, Snapshot } from './curve-solver.ts';
+import { parabolaAt, type CurveSolver, type Snapshot } from './curve-solver.ts';
 
 /** The snapshots (ascending in curvature) with points added where the curve bends between them. */
 export function refineByChord(snapshots: readonly Snapshot[], solver: CurveSolver): Snapshot[] {
@@ -63,11 +63,7 @@ function midpointStrain(a: Snapshot, b: Snapshot, c: Snapshot | undefined, kappa
   const eb = b.eq.referenceStrain;
   const chord = ea + ((eb - ea) * (kappa - a.kappa)) / (b.kappa - a.kappa);
   if (!c || c.kappa === a.kappa || c.kappa === b.kappa) return chord;
-  const ec = c.eq.referenceStrain;
-  const parabola =
-    (ea * (kappa - b.kappa) * (kappa - c.kappa)) / ((a.kappa - b.kappa) * (a.kappa - c.kappa)) +
-    (eb * (kappa - a.kappa) * (kappa - c.kappa)) / ((b.kappa - a.kappa) * (b.kappa - c.kappa)) +
-    (ec * (kappa - a.kappa) * (kappa - b.kappa)) / ((c.kappa - a.kappa) * (c.kappa - b.kappa));
+  const parabola = parabolaAt(a, b, c, kappa);
   return Number.isFinite(parabola) && Math.abs(parabola - chord) <= Math.abs(eb - ea) ? parabola : chord;
 }
 

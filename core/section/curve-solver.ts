@@ -17,6 +17,15 @@ export interface Snapshot {
   readonly jumped?: boolean;
 }
 
+/** Centroid strain at curvature kappa on the parabola through the states a, b, c (distinct curvatures). */
+export function parabolaAt(a: Snapshot, b: Snapshot, c: Snapshot, kappa: number): number {
+  return (
+    (a.eq.referenceStrain * (kappa - b.kappa) * (kappa - c.kappa)) / ((a.kappa - b.kappa) * (a.kappa - c.kappa)) +
+    (b.eq.referenceStrain * (kappa - a.kappa) * (kappa - c.kappa)) / ((b.kappa - a.kappa) * (b.kappa - c.kappa)) +
+    (c.eq.referenceStrain * (kappa - a.kappa) * (kappa - b.kappa)) / ((c.kappa - a.kappa) * (c.kappa - b.kappa))
+  );
+}
+
 /** Strain at depth y of an equilibrium state (compression positive). */
 const strainAt = (model: SectionModel, eq: EquilibriumState, y: number) => eq.referenceStrain + eq.curvature * (model.centroidDepth - y);
 
@@ -45,6 +54,26 @@ export class CurveSolver {
   }
 
   /**
+   * States with the strain at `depth` held at `strain`: at curvature kappa the centroid strain follows
+   * from it, `axial` is the axial force's residual there (counted as a solve) and `stateAt` the
+   * state. Used where an event is solved exactly at a fibre's limit (locateElementLimit, pinEvent).
+   */
+  private pinnedStrain(depth: number, strain: number): { axial(kappa: number): number; stateAt(kappa: number): EquilibriumState } {
+    const model = this.model;
+    const eps0 = (kappa: number) => strain - this.sign * kappa * (model.centroidDepth - depth);
+    return {
+      axial: (kappa) => {
+        this.solves++;
+        return sectionForces(model, eps0(kappa), this.sign * kappa).axial - model.axialForce;
+      },
+      stateAt: (kappa) => {
+        const forces = sectionForces(model, eps0(kappa), this.sign * kappa);
+        return { curvature: this.sign * kappa, referenceStrain: eps0(kappa), moment: forces.moment, residual: forces.axial - model.axialForce };
+      },
+    };
+  }
+
+  /**
    * The state between snapshot a and curvature bKappa at which the first of `elements` reaches its limit strain
    * (a bar's rupture, an FRP's rupture or debonding), solved with that element's strain held at its
    * limit: for each curvature the centroid strain follows from the pinned strain, and the curvature
@@ -61,20 +90,14 @@ export class CurveSolver {
     let best: Snapshot | null = null;
     for (const e of elements) {
       if (!(e.limitStrain! > 0)) continue;
-      const pinned = e.initialStrain - e.limitStrain! * (1 - 1e-9);
-      const eps0 = (kappa: number) => pinned - this.sign * kappa * (model.centroidDepth - e.depth);
-      const axial = (kappa: number) => {
-        this.solves++;
-        return sectionForces(model, eps0(kappa), this.sign * kappa).axial - model.axialForce;
-      };
+      const { axial, stateAt } = this.pinnedStrain(e.depth, e.initialStrain - e.limitStrain! * (1 - 1e-9));
       const fa = axial(a.kappa);
       const fb = axial(bKappa);
       if (!(fa < 0 && fb > 0)) continue;
       const root = brentRoot(axial, a.kappa, bKappa, fa, fb, { xTolerance: 1e-12 * bKappa, fTolerance: this.tolerance, maxIterations: 200 });
       if (!root.converged || !(Math.abs(root.fx) <= this.tolerance * 1000)) continue;
       const kappa = root.x;
-      const forces = sectionForces(model, eps0(kappa), this.sign * kappa);
-      const eq: EquilibriumState = { curvature: this.sign * kappa, referenceStrain: eps0(kappa), moment: forces.moment, residual: forces.axial - model.axialForce };
+      const eq = stateAt(kappa);
       // The state must carry load in the curve's sense and leave every other element within its limit.
       if (!(this.sign * eq.moment > 0) || elements.some((o) => o !== e && o.limitStrain! > 0 && ratio(o, eq) > 1 + 1e-9)) continue;
       if (!best || kappa < best.kappa) best = { kappa, eq, jumped: false };
@@ -95,14 +118,9 @@ export class CurveSolver {
    * (`g` of the pinned state beyond ±1e-9).
    */
   pinEvent(g: (eq: EquilibriumState) => number, pin: { readonly depth: number; readonly strain: number }, located: Snapshot): Snapshot {
-    const model = this.model;
     const k = located.kappa;
     if (!(k > 0)) return located;
-    const eps0 = (kappa: number) => pin.strain - this.sign * kappa * (model.centroidDepth - pin.depth);
-    const axial = (kappa: number) => {
-      this.solves++;
-      return sectionForces(model, eps0(kappa), this.sign * kappa).axial - model.axialForce;
-    };
+    const { axial, stateAt } = this.pinnedStrain(pin.depth, pin.strain);
     for (const width of [1e-5, 1e-4]) {
       const lo = k * (1 - width);
       const hi = k * (1 + width);
@@ -112,8 +130,7 @@ export class CurveSolver {
       const root = brentRoot(axial, lo, hi, flo, fhi, { xTolerance: 1e-13 * k, fTolerance: 1e-3 * this.tolerance, maxIterations: 100 });
       if (!(Math.abs(root.fx) <= this.tolerance)) return located;
       const kappa = root.x;
-      const forces = sectionForces(model, eps0(kappa), this.sign * kappa);
-      const eq: EquilibriumState = { curvature: this.sign * kappa, referenceStrain: eps0(kappa), moment: forces.moment, residual: forces.axial - model.axialForce };
+      const eq = stateAt(kappa);
       if (!(this.sign * eq.moment > 0) || !(Math.abs(g(eq)) <= 1e-9)) return located;
       this.lastGuess = eq.referenceStrain;
       return located.jumped ? { kappa, eq, jumped: true } : { kappa, eq };

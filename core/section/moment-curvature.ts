@@ -18,7 +18,7 @@
 import { InputError } from '../diagnostics.ts';
 import { curveEvents, KEY_EVENTS, ULTIMATE_EVENTS, NOMINAL_CONCRETE_STRAIN, NOMINAL_STEEL_STRAIN, type DropState, type EventName } from './curve-events.ts';
 import { refineByChord, peakSnapshot } from './curve-refine.ts';
-import { CurveSolver, type Snapshot } from './curve-solver.ts';
+import { CurveSolver, parabolaAt, type Snapshot } from './curve-solver.ts';
 import type { EquilibriumState } from './equilibrium.ts';
 import { idealise } from './idealise.ts';
 import { directionSign, tensionSteel, type BendingDirection, type ConcretePart, type SectionModel } from './model.ts';
@@ -76,17 +76,23 @@ export function momentCurvature(model: SectionModel, direction: BendingDirection
   const events = curveEvents(model, direction, { codeCrushingStrain: options.codeCrushingStrain, dropFraction: options.momentDropFraction ?? 0.8 }, drop);
   const { g, enabled, evaluateAll } = events;
   const snapshots: Snapshot[] = [];
-  /** Locates event `name` between two bracketing snapshots (a is on the curve already). */
   const limitedElements = model.elements.filter((e) => e.limitStrain !== undefined && e.limitStrain > 0);
+  /**
+   * A located event's state with its key strain exactly where its law or code puts it (εcu, εy, …),
+   * not to the force tolerance — also the last state before a snap (the fibre at εcu is still on the
+   * curve's branch).
+   */
+  const pinnedAtFibre = (name: EventName, located: Snapshot) => {
+    const pin = events.pinOf(name, located.eq);
+    return pin ? solver.pinEvent(g[name], pin, located) : located;
+  };
+  /** Locates event `name` between two bracketing snapshots (a is on the curve already). */
   const locate = (name: EventName, a: Snapshot, b: Snapshot) => {
     const index = snapshots.lastIndexOf(a);
     const free = solver.locate(g[name], a, b, index > 0 ? snapshots[index - 1]! : undefined);
+    const pinned = typeof free === 'string' ? free : pinnedAtFibre(name, free);
     // Where the free search loses the path just before an element's limit (the path snaps right
     // after it), the limit is solved with the element's strain pinned there.
-    // The key point's strain exactly where its law or code puts it (εcu, εy, …), not to the force
-    // tolerance — also the last state before a snap (the fibre at εcu is still on the curve's branch).
-    const pin = typeof free !== 'string' ? events.pinOf(name, free.eq) : null;
-    const pinned = pin && typeof free !== 'string' ? solver.pinEvent(g[name], pin, free) : free;
     if (name !== 'elementLimit' || (typeof pinned !== 'string' && !pinned.jumped)) return pinned;
     return solver.locateElementLimit(limitedElements, a, b.kappa) ?? free;
   };
@@ -278,15 +284,6 @@ export function momentCurvature(model: SectionModel, direction: BendingDirection
   const sampled = refineByChord(snapshots, solver);
   keyAt.peak = peakSnapshot(sampled, sign, solver);
   return curveResult(model, direction, { status, ultimateCause, limits, points: sampled, keyAt, governing: events.governing, warnings, bilinearMethod: options.bilinearMethod ?? 'priestley-2007', solves: solver.solves });
-}
-
-/** Centroid strain at curvature kappa on the parabola through the states a, b, c (distinct curvatures). */
-function parabolaAt(a: Snapshot, b: Snapshot, c: Snapshot, kappa: number): number {
-  return (
-    (a.eq.referenceStrain * (kappa - b.kappa) * (kappa - c.kappa)) / ((a.kappa - b.kappa) * (a.kappa - c.kappa)) +
-    (b.eq.referenceStrain * (kappa - a.kappa) * (kappa - c.kappa)) / ((b.kappa - a.kappa) * (b.kappa - c.kappa)) +
-    (c.eq.referenceStrain * (kappa - a.kappa) * (kappa - b.kappa)) / ((c.kappa - a.kappa) * (c.kappa - b.kappa))
-  );
 }
 
 /** The curve's result from its sampled states and key points, with the warnings an engineer must see. */

@@ -18,6 +18,7 @@
  * `renderLine` no longer reads the inline fields listed here, or changes at all (a digest).
  * pdfmake is not imported here: the host passes the renderer class it uses.
  */
+import { originalMethod, replaceMethodOnce } from './pdfmake-patch.ts';
 
 /** The fields of a pdfmake inline (a measured piece of text on a line) read here and by renderLine. */
 export interface LineInline {
@@ -103,8 +104,7 @@ type RenderLine = RendererPrototype['renderLine'];
 
 /** pdfmake's own `renderLine` on `rendererClass` (also after installing), for tests and checks. */
 export function originalLineRendering(rendererClass: { readonly prototype: object }): RenderLine {
-  const prototype = rendererClass.prototype as Record<string | symbol, unknown>;
-  return (prototype[ORIGINAL] ?? prototype.renderLine) as RenderLine;
+  return originalMethod<RenderLine>(rendererClass, 'renderLine', ORIGINAL);
 }
 
 /**
@@ -113,16 +113,11 @@ export function originalLineRendering(rendererClass: { readonly prototype: objec
  * `inlines` are the merged runs.
  */
 export function installLineMerging(rendererClass: { readonly prototype: object }): void {
-  const proto = rendererClass.prototype as RendererPrototype & Record<symbol, unknown>;
-  if (proto[ORIGINAL]) return;
-  const original = proto.renderLine;
-  if (typeof original !== 'function') throw new Error('pdfmake\'s renderer has no renderLine method: this version of pdfmake is not supported by core/report/pdfmake-lines.ts.');
-  Object.defineProperty(proto, ORIGINAL, { value: original });
-  proto.renderLine = function renderMergedLine(this: unknown, line, x, y) {
+  replaceMethodOnce<RenderLine>(rendererClass, 'renderLine', ORIGINAL, (original) => function renderMergedLine(this: unknown, line, x, y) {
     const merged = mergeLineInlines(line.inlines);
     if (merged === line.inlines) return original.call(this, line, x, y);
     const view = Object.create(line) as typeof line;
     view.inlines = merged as LineInline[];
     return original.call(this, view, x, y);
-  };
+  }, 'pdfmake\'s renderer has no renderLine method: this version of pdfmake is not supported by core/report/pdfmake-lines.ts.');
 }

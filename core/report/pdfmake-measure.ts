@@ -18,6 +18,7 @@
  * these properties with these defaults in this order, or if its body changes at all.
  * pdfmake is not imported here: the host passes the classes it uses.
  */
+import { originalMethod, replaceMethodOnce } from './pdfmake-patch.ts';
 
 /** The parts of pdfmake's style stack used here. */
 export interface StyleStack {
@@ -149,15 +150,10 @@ const ORIGINAL = Symbol.for('hingeline.pdfmake.measure.original');
 
 /** pdfmake's own `measure` on `textInlinesClass` (also after installing), for tests and checks. */
 export function originalInlineMeasuring(textInlinesClass: { readonly prototype: object }): Measure {
-  const prototype = textInlinesClass.prototype as Record<string | symbol, unknown>;
-  return (prototype[ORIGINAL] ?? prototype.measure) as Measure;
+  return originalMethod<Measure>(textInlinesClass, 'measure', ORIGINAL);
 }
 
 /** Replaces pdfmake's `TextInlines.prototype.measure` (once; a second call changes nothing). */
 export function installInlineMeasuring(textInlinesClass: { readonly prototype: object }): void {
-  const prototype = textInlinesClass.prototype as Record<string | symbol, unknown>;
-  if (prototype[ORIGINAL]) return;
-  if (typeof prototype.measure !== 'function') throw new Error('pdfmake has no TextInlines.prototype.measure to replace (has pdfmake changed?)');
-  Object.defineProperty(prototype, ORIGINAL, { value: prototype.measure });
-  prototype.measure = measure;
+  replaceMethodOnce<Measure>(textInlinesClass, 'measure', ORIGINAL, () => measure, 'pdfmake has no TextInlines.prototype.measure to replace (has pdfmake changed?)');
 }
